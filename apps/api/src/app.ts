@@ -1,0 +1,101 @@
+/**
+ * The HTTP application, top to bottom as one pipeline: security headers, logs, body
+ * parsing, sessions, the caller's identity, the API routes, the built portal, errors.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { Logger } from 'pino';
+import type { Config } from './config.ts';
+import type { Db } from './db/client.ts';
+import { loadUser, requireUser } from './http/auth.ts';
+import { errorHandler, notFound } from './http/errors.ts';
+import { DrizzleSessionStore } from './http/session-store.ts';
+import { authRouter } from './routes/auth.ts';
+import { directoryRouter } from './routes/directory.ts';
+import { fieldsRouter } from './routes/fields.ts';
+import { sitesRouter } from './routes/sites.ts';
+import { usersRouter } from './routes/users.ts';
+
+export interface AppDeps {
+  db: Db;
+  config: Config & { cookieName: string };
+  logger: Logger;
+  sessionSecret: string;
+}
+
+export const COOKIE_NAME = 'swardwise.sid';
+const SESSION_DAYS = 14;
+
+export function createApp(deps: Omit<AppDeps, 'config'> & { config: Config }): { app: Express; store: DrizzleSessionStore } {
+  const full: AppDeps = { ...deps, config: { ...deps.config, cookieName: COOKIE_NAME } };
+  const { db, config, logger } = full;
+  const app = express();
+  const store = new DrizzleSessionStore(db);
+
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      // Plain-http installations on a local network must keep working; HTTPS ones set COOKIE_SECURE.
+      contentSecurityPolicy: { directives: { upgradeInsecureRequests: config.cookieSecure ? [] : null } },
+      strictTransportSecurity: config.cookieSecure,
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+      },
+      customProps: (req) => ({ userId: (req as { user?: { id: number } }).user?.id }),
+    }),
+  );
+  app.use('/api', express.json({ limit: '2mb' }));
+  app.use(
+    '/api',
+    session({
+      name: COOKIE_NAME,
+      secret: full.sessionSecret,
+      store,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: config.cookieSecure,
+        maxAge: SESSION_DAYS * 24 * 3600 * 1000,
+        path: '/',
+      },
+    }),
+  );
+  app.use('/api', loadUser(db));
+
+  app.get('/api/health', async (_req, res) => {
+    await db.execute('select 1');
+    res.json({ status: 'ok' });
+  });
+  app.use('/api/auth', authRouter(full));
+  app.use('/api', requireUser);
+  app.use('/api/users', usersRouter(full));
+  app.use('/api/sites', sitesRouter(full));
+  app.use('/api/fields', fieldsRouter(full));
+  app.use('/api', directoryRouter(full));
+  app.use('/api', notFound('route'));
+
+  // The built portal, with the single-page app's routes answered by index.html.
+  const index = path.join(config.portalDist, 'index.html');
+  if (fs.existsSync(index)) {
+    app.use(express.static(config.portalDist, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => res.sendFile(index));
+  }
+
+  app.use(errorHandler);
+  return { app, store };
+}

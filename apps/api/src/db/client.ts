@@ -1,0 +1,56 @@
+/**
+ * Opens the database: embedded PGlite on disk by default, PostgreSQL when DATABASE_URL is
+ * set. The same Drizzle schema and migrations serve both; migrations run here, inside the
+ * one process that owns the data folder.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { PGlite } from '@electric-sql/pglite';
+import { drizzle as drizzlePglite, type PgliteDatabase } from 'drizzle-orm/pglite';
+import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator';
+import * as schema from './schema/index.ts';
+
+export type Schema = typeof schema;
+/** Both drivers expose the same query builder; PGlite's type stands for both. */
+export type Db = PgliteDatabase<Schema>;
+export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
+/** A service runs on the database or inside a caller's transaction. */
+export type Queryable = Db | Tx;
+
+export const migrationsFolder = path.join(path.dirname(fileURLToPath(import.meta.url)), 'migrations');
+
+export interface Database {
+  db: Db;
+  kind: 'pglite' | 'postgres';
+  close(): Promise<void>;
+}
+
+export interface OpenOptions {
+  databaseUrl?: string | undefined;
+  /** A folder path, or 'memory://' for a throw-away database (tests). */
+  pgliteDir?: string;
+  /** A data-folder dump to start from (PGlite `loadDataDir`), to skip migrating and seeding. */
+  loadDataDir?: Blob | File;
+}
+
+export async function openDatabase(options: OpenOptions): Promise<Database> {
+  if (options.databaseUrl) {
+    const { default: pg } = await import('pg');
+    const { drizzle } = await import('drizzle-orm/node-postgres');
+    const { migrate } = await import('drizzle-orm/node-postgres/migrator');
+    const pool = new pg.Pool({ connectionString: options.databaseUrl, max: 10 });
+    const db = drizzle(pool, { schema });
+    await migrate(db, { migrationsFolder });
+    return { db: db as unknown as Db, kind: 'postgres', close: () => pool.end() };
+  }
+
+  const dir = options.pgliteDir ?? './data/pglite';
+  if (!dir.startsWith('memory://')) fs.mkdirSync(dir, { recursive: true });
+  const client = options.loadDataDir
+    ? await PGlite.create({ dataDir: dir, loadDataDir: options.loadDataDir })
+    : await PGlite.create(dir);
+  const db = drizzlePglite(client, { schema });
+  await migratePglite(db, { migrationsFolder });
+  return { db, kind: 'pglite', close: () => client.close() };
+}

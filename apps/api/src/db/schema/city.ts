@@ -1,0 +1,85 @@
+/** Districts, sites and fields: the places the department keeps, which change together. */
+import { sql } from 'drizzle-orm';
+import { check, doublePrecision, index, integer, jsonb, pgTable, real, smallint, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import type {
+  Clippings,
+  FieldStatus,
+  Grass,
+  IrrigationKind,
+  Polygon,
+  Rootzone,
+  SiteKind,
+  SiteOwner,
+  Sport,
+} from '@swardwise/domain';
+
+const timestamps = {
+  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+};
+
+export const districts = pgTable(
+  'districts',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    code: text('code').notNull(),
+    name: text('name').notNull(),
+    boundary: jsonb('boundary').$type<Polygon>().notNull(),
+    yardName: text('yard_name').notNull(),
+    yardLat: doublePrecision('yard_lat').notNull(),
+    yardLng: doublePrecision('yard_lng').notNull(),
+    version: integer('version').notNull().default(1),
+    ...timestamps,
+  },
+  (t) => [uniqueIndex('districts_code_key').on(t.code)],
+);
+
+export const sites = pgTable(
+  'sites',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    districtId: integer('district_id')
+      .notNull()
+      .references(() => districts.id),
+    name: text('name').notNull(),
+    kind: text('kind').$type<SiteKind>().notNull(),
+    owner: text('owner').$type<SiteOwner>().notNull(),
+    address: text('address').notNull().default(''),
+    lat: doublePrecision('lat').notNull(),
+    lng: doublePrecision('lng').notNull(),
+    notes: text('notes').notNull().default(''),
+    version: integer('version').notNull().default(1),
+    ...timestamps,
+  },
+  (t) => [index('sites_district_idx').on(t.districtId)],
+);
+
+export const fields = pgTable(
+  'fields',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    siteId: integer('site_id')
+      .notNull()
+      .references(() => sites.id),
+    name: text('name').notNull(),
+    sport: text('sport').$type<Sport>().notNull(),
+    grass: text('grass').$type<Grass>().notNull(),
+    rootzone: text('rootzone').$type<Rootzone>().notNull(),
+    irrigation: text('irrigation').$type<IrrigationKind>().notNull(),
+    maintenanceLevel: smallint('maintenance_level').notNull(),
+    hocOverrideMm: real('hoc_override_mm'),
+    clippings: text('clippings').$type<Clippings>().notNull(),
+    status: text('status').$type<FieldStatus>().notNull().default('open'),
+    statusNote: text('status_note').notNull().default(''),
+    weeklyUseHours: real('weekly_use_hours').notNull().default(0),
+    geometry: jsonb('geometry').$type<Polygon>().notNull(),
+    /** Geodesic area of `geometry`, kept in step with it by the service on every write. */
+    areaM2: doublePrecision('area_m2').notNull(),
+    version: integer('version').notNull().default(1),
+    ...timestamps,
+  },
+  (t) => [
+    index('fields_site_idx').on(t.siteId),
+    check('fields_level_check', sql`${t.maintenanceLevel} BETWEEN 1 AND 4`),
+  ],
+);

@@ -1,0 +1,3 @@
+export * from './city.ts';
+export * from './people.ts';
+export * from './records.ts';

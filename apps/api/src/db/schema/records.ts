@@ -1,0 +1,28 @@
+/** The audit log and department-wide settings. */
+import { bigint, index, integer, jsonb, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { users } from './people.ts';
+
+/** Every write: who, when, what, and the row before and after. Never updated or deleted. */
+export const auditLog = pgTable(
+  'audit_log',
+  {
+    id: bigint('id', { mode: 'number' }).primaryKey().generatedAlwaysAsIdentity(),
+    at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+    actorId: integer('actor_id').references(() => users.id),
+    action: text('action').$type<'create' | 'update' | 'delete'>().notNull(),
+    entity: text('entity').notNull(),
+    entityId: integer('entity_id'),
+    /** District the row belongs to, so a foreman can read his district's history. */
+    districtId: integer('district_id'),
+    before: jsonb('before').$type<Record<string, unknown> | null>(),
+    after: jsonb('after').$type<Record<string, unknown> | null>(),
+  },
+  (t) => [index('audit_entity_idx').on(t.entity, t.entityId), index('audit_district_idx').on(t.districtId, t.at)],
+);
+
+/** Key/value settings of the installation (session secret, demo marker, department parameters). */
+export const settings = pgTable('settings', {
+  key: text('key').primaryKey(),
+  value: jsonb('value').notNull(),
+  updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+});

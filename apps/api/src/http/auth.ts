@@ -1,0 +1,44 @@
+/** Who is asking: the session's user becomes `req.actor`, checked on every request. */
+import type { RequestHandler } from 'express';
+import { AppError, type Actor } from '@swardwise/domain';
+import type { Db } from '../db/client.ts';
+import { contextFor, type Ctx } from '../services/context.ts';
+import { actorOf, sessionUser, type SessionUser } from '../services/users.ts';
+
+declare module 'express-serve-static-core' {
+  interface Request {
+    user?: SessionUser;
+    actor?: Actor;
+  }
+}
+
+/** Loads the signed-in user (if any); a session of a deactivated account is ended. */
+export function loadUser(db: Db): RequestHandler {
+  return async (req, _res, next) => {
+    const userId = req.session?.userId;
+    if (!userId) return next();
+    try {
+      const user = await sessionUser(db, userId);
+      if (!user) {
+        req.session.destroy(() => next());
+        return;
+      }
+      req.user = user;
+      req.actor = actorOf(user);
+      next();
+    } catch (err) {
+      next(err);
+    }
+  };
+}
+
+export const requireUser: RequestHandler = (req, _res, next) => {
+  if (!req.actor) return next(new AppError('unauthenticated', 'auth/unauthenticated', 'Sign in to continue'));
+  next();
+};
+
+/** The service context for this request; only after `requireUser`. */
+export function ctxOf(db: Db, req: { actor?: Actor }): Ctx {
+  if (!req.actor) throw new AppError('unauthenticated', 'auth/unauthenticated', 'Sign in to continue');
+  return contextFor(db, req.actor);
+}

@@ -1,0 +1,36 @@
+/** Read-only lists: districts, crews, the audit log. */
+import { Router } from 'express';
+import { z } from 'zod';
+import { idSchema } from '@swardwise/domain';
+import type { AppDeps } from '../app.ts';
+import { ctxOf } from '../http/auth.ts';
+import { parse } from '../http/validate.ts';
+import { listAudit } from '../services/audit.ts';
+import { listCrews } from '../services/crews.ts';
+import { listDistricts } from '../services/districts.ts';
+
+const auditQuerySchema = z.object({
+  entity: z.string().trim().max(40).optional(),
+  entityId: idSchema.optional(),
+  limit: z.coerce.number().int().min(1).max(1000).default(200),
+});
+
+export function directoryRouter({ db }: AppDeps): Router {
+  const router = Router();
+
+  router.get('/districts', async (req, res) => {
+    res.json({ items: await listDistricts(ctxOf(db, req)) });
+  });
+
+  router.get('/crews', async (req, res) => {
+    const query = parse(z.object({ districtId: idSchema.optional() }), req.query, 'query');
+    res.json({ items: await listCrews(ctxOf(db, req), query) });
+  });
+
+  router.get('/audit', async (req, res) => {
+    const query = parse(auditQuerySchema, req.query, 'query');
+    res.json({ items: await listAudit(ctxOf(db, req), query) });
+  });
+
+  return router;
+}

@@ -1,0 +1,38 @@
+import { Router } from 'express';
+import { createSiteSchema, idParamSchema, listQuerySchema, updateSiteSchema } from '@swardwise/domain';
+import type { AppDeps } from '../app.ts';
+import { ctxOf } from '../http/auth.ts';
+import { parse } from '../http/validate.ts';
+import { listFields } from '../services/fields.ts';
+import { createSite, getSite, listSites, updateSite } from '../services/sites.ts';
+
+export function sitesRouter({ db }: AppDeps): Router {
+  const router = Router();
+
+  router.get('/', async (req, res) => {
+    const query = parse(listQuerySchema, req.query, 'query');
+    res.json({ items: await listSites(ctxOf(db, req), query) });
+  });
+
+  router.post('/', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    const input = parse(createSiteSchema, req.body, 'body');
+    res.status(201).json({ site: await createSite(ctx, input) });
+  });
+
+  router.get('/:id', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    const { id } = parse(idParamSchema, req.params, 'params');
+    const site = await getSite(ctx, id);
+    res.json({ site, fields: await listFields(ctx, { siteId: id }) });
+  });
+
+  router.patch('/:id', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    const { id } = parse(idParamSchema, req.params, 'params');
+    const input = parse(updateSiteSchema, req.body, 'body');
+    res.json({ site: await updateSite(ctx, id, input) });
+  });
+
+  return router;
+}

@@ -1,0 +1,41 @@
+/** Starts Swardwise: opens the database, applies migrations, seeds the demo city once, serves. */
+import { pino } from 'pino';
+import { createApp } from './app.ts';
+import { loadConfig } from './config.ts';
+import { openDatabase } from './db/client.ts';
+import { seedDemoCity } from './db/seed/index.ts';
+import { sessionSecretFor } from './services/settings.ts';
+
+async function main() {
+  const config = loadConfig();
+  const logger = pino({ level: config.logLevel });
+  const started = Date.now();
+  const database = await openDatabase({ databaseUrl: config.databaseUrl, pgliteDir: config.pgliteDir });
+  logger.info({ kind: database.kind, dir: database.kind === 'pglite' ? config.pgliteDir : undefined, ms: Date.now() - started }, 'database ready');
+  if (config.seedDemo) {
+    const seeded = await seedDemoCity(database.db);
+    if (seeded) logger.info(seeded, 'demo city seeded (invented data)');
+  }
+  const sessionSecret = await sessionSecretFor(database.db, config.sessionSecret);
+  const { app, store } = createApp({ db: database.db, config, logger, sessionSecret });
+  const server = app.listen(config.port, config.host, () => {
+    logger.info({ url: `http://localhost:${config.port}`, production: config.production }, 'Swardwise is listening');
+  });
+  const prune = setInterval(() => void store.prune().catch((err) => logger.warn({ err }, 'session prune failed')), 3600_000);
+  prune.unref();
+
+  const stop = (signal: string) => {
+    logger.info({ signal }, 'shutting down');
+    server.close(() => {
+      void database.close().finally(() => process.exit(0));
+    });
+    setTimeout(() => process.exit(0), 5000).unref();
+  };
+  process.on('SIGINT', () => stop('SIGINT'));
+  process.on('SIGTERM', () => stop('SIGTERM'));
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});

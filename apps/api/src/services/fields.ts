@@ -1,0 +1,128 @@
+/** Playing surfaces and lawns, each with its outline and maintenance level. */
+import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
+import { AppError, polygonAreaM2, type CreateFieldInput, type UpdateFieldInput } from '@swardwise/domain';
+import type { Db } from '../db/client.ts';
+import { districts, fields, sites } from '../db/schema/index.ts';
+import { writeAudit } from './audit.ts';
+import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+import { siteScope } from './scope.ts';
+
+const listColumns = {
+  id: fields.id,
+  siteId: fields.siteId,
+  siteName: sites.name,
+  districtId: sites.districtId,
+  districtName: districts.name,
+  name: fields.name,
+  sport: fields.sport,
+  grass: fields.grass,
+  rootzone: fields.rootzone,
+  irrigation: fields.irrigation,
+  maintenanceLevel: fields.maintenanceLevel,
+  hocOverrideMm: fields.hocOverrideMm,
+  clippings: fields.clippings,
+  status: fields.status,
+  statusNote: fields.statusNote,
+  weeklyUseHours: fields.weeklyUseHours,
+  areaM2: fields.areaM2,
+  version: fields.version,
+  updatedAt: fields.updatedAt,
+};
+
+function selectFields(db: Ctx['db']) {
+  return db
+    .select(listColumns)
+    .from(fields)
+    .innerJoin(sites, eq(sites.id, fields.siteId))
+    .innerJoin(districts, eq(districts.id, sites.districtId));
+}
+
+async function getFieldRow(db: Ctx['db'], id: number) {
+  const [row] = await db
+    .select({ ...listColumns, geometry: fields.geometry })
+    .from(fields)
+    .innerJoin(sites, eq(sites.id, fields.siteId))
+    .innerJoin(districts, eq(districts.id, sites.districtId))
+    .where(eq(fields.id, id));
+  return row;
+}
+
+export async function listFields(ctx: Ctx, filter: { districtId?: number | undefined; siteId?: number | undefined; q?: string | undefined }) {
+  authorize(ctx, 'read', 'Field');
+  const conditions: (SQL | undefined)[] = [siteScope(ctx.actor)];
+  if (filter.districtId) conditions.push(eq(sites.districtId, filter.districtId));
+  if (filter.siteId) conditions.push(eq(fields.siteId, filter.siteId));
+  if (filter.q) conditions.push(sql`(${fields.name} ilike ${'%' + filter.q + '%'} or ${sites.name} ilike ${'%' + filter.q + '%'})`);
+  const rows = await selectFields(ctx.db)
+    .where(and(...conditions))
+    .orderBy(asc(sites.name), asc(fields.name));
+  return rows.filter((row) => can(ctx, 'read', 'Field', row));
+}
+
+export async function getField(ctx: Ctx, id: number) {
+  const row = await getFieldRow(ctx.db, id);
+  if (!row) throw notFound('field', id);
+  authorize(ctx, 'read', 'Field', row);
+  return row;
+}
+
+async function siteOf(db: Ctx['db'], siteId: number) {
+  const [site] = await db.select({ id: sites.id, districtId: sites.districtId }).from(sites).where(eq(sites.id, siteId));
+  if (!site) throw new AppError('invalid', 'request/invalid', 'No such site', { issues: [{ path: 'body.siteId', message: 'no such site' }] });
+  return site;
+}
+
+export async function createField(ctx: Ctx, input: CreateFieldInput) {
+  return (ctx.db as Db).transaction(async (tx) => {
+    const site = await siteOf(tx, input.siteId);
+    authorize(ctx, 'create', 'Field', { siteId: site.id, districtId: site.districtId });
+    const [created] = await tx
+      .insert(fields)
+      .values({ ...input, areaM2: polygonAreaM2(input.geometry) })
+      .returning({ id: fields.id });
+    const row = (await getFieldRow(tx, created!.id))!;
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field', entityId: row.id, districtId: row.districtId, before: null, after: row });
+    return row;
+  });
+}
+
+export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput) {
+  return (ctx.db as Db).transaction(async (tx) => {
+    const before = await getFieldRow(tx, id);
+    if (!before) throw notFound('field', id);
+    authorize(ctx, 'update', 'Field', before);
+    const { version, ...changes } = input;
+    if (changes.siteId !== undefined && changes.siteId !== before.siteId) {
+      const site = await siteOf(tx, changes.siteId);
+      authorize(ctx, 'create', 'Field', { siteId: site.id, districtId: site.districtId });
+    }
+    const [updated] = await tx
+      .update(fields)
+      .set({
+        ...changes,
+        ...(changes.geometry ? { areaM2: polygonAreaM2(changes.geometry) } : {}),
+        version: sql`${fields.version} + 1`,
+        updatedAt: new Date(),
+      })
+      .where(and(eq(fields.id, id), eq(fields.version, version)))
+      .returning({ id: fields.id });
+    if (!updated) throw versionConflict('field');
+    const after = (await getFieldRow(tx, id))!;
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'field', entityId: id, districtId: after.districtId, before, after });
+    return after;
+  });
+}
+
+export async function deleteField(ctx: Ctx, id: number, version: number) {
+  return (ctx.db as Db).transaction(async (tx) => {
+    const before = await getFieldRow(tx, id);
+    if (!before) throw notFound('field', id);
+    authorize(ctx, 'delete', 'Field', before);
+    const [deleted] = await tx
+      .delete(fields)
+      .where(and(eq(fields.id, id), eq(fields.version, version)))
+      .returning({ id: fields.id });
+    if (!deleted) throw versionConflict('field');
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'field', entityId: id, districtId: before.districtId, before, after: null });
+  });
+}

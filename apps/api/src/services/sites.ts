@@ -1,0 +1,107 @@
+/** Parks, complexes and school campuses. */
+import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
+import { AppError, type CreateSiteInput, type UpdateSiteInput } from '@swardwise/domain';
+import type { Db } from '../db/client.ts';
+import { districts, fields, sites } from '../db/schema/index.ts';
+import { writeAudit } from './audit.ts';
+import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+import { siteScope } from './scope.ts';
+
+const fieldCounts = (db: Ctx['db']) =>
+  db
+    .select({
+      siteId: fields.siteId,
+      fieldCount: sql<number>`count(*)::int`.as('field_count'),
+      fieldAreaM2: sql<number>`sum(${fields.areaM2})::float8`.as('field_area_m2'),
+    })
+    .from(fields)
+    .groupBy(fields.siteId)
+    .as('fc');
+
+function selectSites(db: Ctx['db']) {
+  const fc = fieldCounts(db);
+  return db
+    .select({
+      id: sites.id,
+      districtId: sites.districtId,
+      districtName: districts.name,
+      name: sites.name,
+      kind: sites.kind,
+      owner: sites.owner,
+      address: sites.address,
+      lat: sites.lat,
+      lng: sites.lng,
+      notes: sites.notes,
+      fieldCount: sql<number>`coalesce(${fc.fieldCount}, 0)`,
+      fieldAreaM2: sql<number>`coalesce(${fc.fieldAreaM2}, 0)`,
+      version: sites.version,
+      updatedAt: sites.updatedAt,
+    })
+    .from(sites)
+    .innerJoin(districts, eq(districts.id, sites.districtId))
+    .leftJoin(fc, eq(fc.siteId, sites.id));
+}
+
+export type SiteRow = Awaited<ReturnType<typeof getSiteRow>>;
+
+async function getSiteRow(db: Ctx['db'], id: number) {
+  const [row] = await selectSites(db).where(eq(sites.id, id));
+  return row;
+}
+
+export async function listSites(ctx: Ctx, filter: { districtId?: number | undefined; q?: string | undefined }) {
+  authorize(ctx, 'read', 'Site');
+  const conditions: (SQL | undefined)[] = [siteScope(ctx.actor)];
+  if (filter.districtId) conditions.push(eq(sites.districtId, filter.districtId));
+  if (filter.q) conditions.push(sql`${sites.name} ilike ${'%' + filter.q + '%'}`);
+  const rows = await selectSites(ctx.db)
+    .where(and(...conditions))
+    .orderBy(asc(sites.name));
+  return rows.filter((row) => can(ctx, 'read', 'Site', row));
+}
+
+export async function getSite(ctx: Ctx, id: number) {
+  const row = await getSiteRow(ctx.db, id);
+  if (!row) throw notFound('site', id);
+  authorize(ctx, 'read', 'Site', row);
+  return row;
+}
+
+async function checkDistrict(db: Ctx['db'], districtId: number) {
+  const [d] = await db.select({ id: districts.id }).from(districts).where(eq(districts.id, districtId));
+  if (!d) throw new AppError('invalid', 'request/invalid', 'No such district', { issues: [{ path: 'body.districtId', message: 'no such district' }] });
+}
+
+export async function createSite(ctx: Ctx, input: CreateSiteInput) {
+  authorize(ctx, 'create', 'Site', { districtId: input.districtId });
+  return (ctx.db as Db).transaction(async (tx) => {
+    await checkDistrict(tx, input.districtId);
+    const [created] = await tx.insert(sites).values(input).returning({ id: sites.id });
+    const row = (await getSiteRow(tx, created!.id))!;
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'site', entityId: row.id, districtId: row.districtId, before: null, after: row });
+    return row;
+  });
+}
+
+export async function updateSite(ctx: Ctx, id: number, input: UpdateSiteInput) {
+  return (ctx.db as Db).transaction(async (tx) => {
+    const before = await getSiteRow(tx, id);
+    if (!before) throw notFound('site', id);
+    authorize(ctx, 'update', 'Site', before);
+    const { version, ...changes } = input;
+    if (changes.districtId !== undefined && changes.districtId !== before.districtId) {
+      // Moving a site to another district needs the right to create it there too.
+      authorize(ctx, 'create', 'Site', { districtId: changes.districtId });
+      await checkDistrict(tx, changes.districtId);
+    }
+    const [updated] = await tx
+      .update(sites)
+      .set({ ...changes, version: sql`${sites.version} + 1`, updatedAt: new Date() })
+      .where(and(eq(sites.id, id), eq(sites.version, version)))
+      .returning({ id: sites.id });
+    if (!updated) throw versionConflict('site');
+    const after = (await getSiteRow(tx, id))!;
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'site', entityId: id, districtId: after.districtId, before, after });
+    return after;
+  });
+}

@@ -1,0 +1,241 @@
+/** Accounts: who may sign in, with which role and scope. */
+import crypto from 'node:crypto';
+import { hash, verify } from '@node-rs/argon2';
+import { and, asc, eq, gt, inArray, isNull, sql } from 'drizzle-orm';
+import { AppError, type Actor, type InviteUserInput, type Role, type UnitSystem, type UpdateUserInput } from '@swardwise/domain';
+import type { Db, Queryable } from '../db/client.ts';
+import { crews, districts, sessions, sites, users, userSites, userTokens } from '../db/schema/index.ts';
+import { writeAudit } from './audit.ts';
+import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+
+export interface SessionUser {
+  id: number;
+  email: string;
+  name: string;
+  role: Role;
+  districtId: number | null;
+  crewId: number | null;
+  siteIds: number[];
+  units: UnitSystem;
+  version: number;
+}
+
+export interface UserRow extends SessionUser {
+  active: boolean;
+  lastSignInAt: Date | null;
+  createdAt: Date;
+  districtName: string | null;
+  crewName: string | null;
+  pendingInvite: boolean;
+}
+
+const INVITE_DAYS = 7;
+
+export const hashPassword = (password: string) => hash(password);
+
+const siteIdsOf = sql<number[]>`coalesce((select array_agg(us.site_id order by us.site_id) from user_sites us where us.user_id = ${users.id}), '{}')`;
+
+const userColumns = {
+  id: users.id,
+  email: users.email,
+  name: users.name,
+  role: users.role,
+  districtId: users.districtId,
+  crewId: users.crewId,
+  siteIds: siteIdsOf,
+  units: users.units,
+  version: users.version,
+  active: users.active,
+  lastSignInAt: users.lastSignInAt,
+  createdAt: users.createdAt,
+  districtName: sql<string | null>`${districts.name}`,
+  crewName: sql<string | null>`${crews.name}`,
+  pendingInvite: sql<boolean>`${users.passwordHash} is null`,
+};
+
+function selectUsers(db: Queryable) {
+  return db
+    .select(userColumns)
+    .from(users)
+    .leftJoin(districts, eq(districts.id, users.districtId))
+    .leftJoin(crews, eq(crews.id, users.crewId));
+}
+
+export function toSessionUser(row: UserRow): SessionUser {
+  const { id, email, name, role, districtId, crewId, siteIds, units, version } = row;
+  return { id, email, name, role, districtId, crewId, siteIds, units, version };
+}
+
+export function actorOf(user: SessionUser): Actor {
+  return { id: user.id, role: user.role, districtId: user.districtId, crewId: user.crewId, siteIds: user.siteIds };
+}
+
+export async function findUser(db: Queryable, id: number): Promise<UserRow | undefined> {
+  const [row] = await selectUsers(db).where(eq(users.id, id));
+  return row;
+}
+
+/** The active user behind a session, or undefined if the account is gone or deactivated. */
+export async function sessionUser(db: Queryable, id: number): Promise<SessionUser | undefined> {
+  const row = await findUser(db, id);
+  return row && row.active && !row.pendingInvite ? toSessionUser(row) : undefined;
+}
+
+/**
+ * Checks an e-mail and password. The same message for an unknown e-mail and a wrong
+ * password, and a hash is verified either way so timing does not tell them apart.
+ */
+export async function verifyCredentials(db: Queryable, email: string, password: string): Promise<SessionUser> {
+  const [row] = await db.select({ id: users.id, hash: users.passwordHash, active: users.active }).from(users).where(eq(users.email, email));
+  const ok = row?.hash ? await verify(row.hash, password) : (await verify(DUMMY_HASH, password), false);
+  if (!row || !ok || !row.active) {
+    throw new AppError('unauthenticated', 'auth/invalid_credentials', 'The e-mail or password is not right');
+  }
+  await db.update(users).set({ lastSignInAt: new Date() }).where(eq(users.id, row.id));
+  const user = await sessionUser(db, row.id);
+  if (!user) throw new AppError('unauthenticated', 'auth/invalid_credentials', 'The e-mail or password is not right');
+  return user;
+}
+
+// A fixed hash to verify against when the e-mail is unknown (argon2id of a random string).
+const DUMMY_HASH = '$argon2id$v=19$m=19456,t=2,p=1$O9WgI+1H3pTeuNZjFE6Ing$KioW9+jXs8Y58wBW7MlvbY1ViY59Fhr7zkBo3zlFOjk';
+
+export async function listUsers(ctx: Ctx): Promise<UserRow[]> {
+  authorize(ctx, 'read', 'User', { districtId: ctx.actor.districtId ?? -1, id: -1 });
+  const rows = await selectUsers(ctx.db).orderBy(asc(users.role), asc(users.name));
+  return rows.filter((row) => can(ctx, 'read', 'User', { id: row.id, districtId: row.districtId }));
+}
+
+/** Validates that a role's scope points at real rows and fits together (a crew lead's district is the crew's). */
+async function resolveScope(db: Queryable, input: { role: Role; districtId?: number | null; crewId?: number | null; siteIds?: number[] }) {
+  let districtId: number | null = null;
+  let crewId: number | null = null;
+  let siteIds: number[] = [];
+  if (input.role === 'foreman') {
+    const [d] = await db.select({ id: districts.id }).from(districts).where(eq(districts.id, input.districtId!));
+    if (!d) throw new AppError('invalid', 'request/invalid', 'No such district', { issues: [{ path: 'body.districtId', message: 'no such district' }] });
+    districtId = d.id;
+  }
+  if (input.role === 'crew') {
+    const [c] = await db.select({ id: crews.id, districtId: crews.districtId }).from(crews).where(eq(crews.id, input.crewId!));
+    if (!c) throw new AppError('invalid', 'request/invalid', 'No such crew', { issues: [{ path: 'body.crewId', message: 'no such crew' }] });
+    crewId = c.id;
+    districtId = c.districtId;
+  }
+  if (input.role === 'partner') {
+    siteIds = [...new Set(input.siteIds ?? [])].sort((a, b) => a - b);
+    const found = await db.select({ id: sites.id }).from(sites).where(inArray(sites.id, siteIds));
+    if (found.length !== siteIds.length) {
+      throw new AppError('invalid', 'request/invalid', 'One of the sites does not exist', { issues: [{ path: 'body.siteIds', message: 'unknown site' }] });
+    }
+  }
+  return { districtId, crewId, siteIds };
+}
+
+async function replaceSites(db: Queryable, userId: number, siteIds: number[]) {
+  await db.delete(userSites).where(eq(userSites.userId, userId));
+  if (siteIds.length) await db.insert(userSites).values(siteIds.map((siteId) => ({ userId, siteId })));
+}
+
+function newToken() {
+  const token = crypto.randomBytes(32).toString('base64url');
+  return { token, tokenHash: crypto.createHash('sha256').update(token).digest('hex') };
+}
+
+export async function inviteUser(ctx: Ctx, input: InviteUserInput, publicUrl: string): Promise<{ user: UserRow; inviteUrl: string }> {
+  authorize(ctx, 'create', 'User');
+  return (ctx.db as Db).transaction(async (tx) => {
+    const [existing] = await tx.select({ id: users.id }).from(users).where(eq(users.email, input.email));
+    if (existing) {
+      throw new AppError('conflict', 'user/email_taken', `There is already an account for ${input.email}`, {
+        issues: [{ path: 'body.email', message: 'already in use' }],
+      });
+    }
+    const scope = await resolveScope(tx, input);
+    const [created] = await tx
+      .insert(users)
+      .values({ email: input.email, name: input.name, role: input.role, districtId: scope.districtId, crewId: scope.crewId })
+      .returning({ id: users.id });
+    await replaceSites(tx, created!.id, scope.siteIds);
+    const { token, tokenHash } = newToken();
+    await tx.insert(userTokens).values({
+      userId: created!.id,
+      purpose: 'invite',
+      tokenHash,
+      expiresAt: new Date(Date.now() + INVITE_DAYS * 24 * 3600 * 1000),
+    });
+    const user = (await findUser(tx, created!.id))!;
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'user', entityId: user.id, districtId: user.districtId, before: null, after: user });
+    return { user, inviteUrl: `${publicUrl}/accept-invite?token=${token}` };
+  });
+}
+
+export async function acceptInvite(db: Queryable, token: string, password: string): Promise<SessionUser> {
+  const tokenHash = crypto.createHash('sha256').update(token).digest('hex');
+  const [row] = await db
+    .select({ id: userTokens.id, userId: userTokens.userId })
+    .from(userTokens)
+    .where(and(eq(userTokens.tokenHash, tokenHash), eq(userTokens.purpose, 'invite'), isNull(userTokens.usedAt), gt(userTokens.expiresAt, new Date())));
+  if (!row) throw new AppError('invalid', 'auth/invalid_token', 'This invitation link is not valid or has expired; ask for a new one');
+  const passwordHash = await hashPassword(password);
+  await db.update(userTokens).set({ usedAt: new Date() }).where(eq(userTokens.id, row.id));
+  await db.update(users).set({ passwordHash, updatedAt: new Date(), version: sql`${users.version} + 1` }).where(eq(users.id, row.userId));
+  await writeAudit(db, { actorId: row.userId, action: 'update', entity: 'user', entityId: row.userId, districtId: null, before: null, after: { invitationAccepted: true } });
+  const user = await sessionUser(db, row.userId);
+  if (!user) throw new AppError('forbidden', 'auth/deactivated', 'This account has been deactivated');
+  return user;
+}
+
+export async function updateUser(ctx: Ctx, id: number, input: UpdateUserInput): Promise<UserRow> {
+  return (ctx.db as Db).transaction(async (tx) => {
+    const before = await findUser(tx, id);
+    if (!before) throw notFound('user', id);
+    authorize({ ...ctx, db: tx }, 'update', 'User', { id, districtId: before.districtId });
+    if (input.role !== before.role || input.active === false) {
+      // Role and scope are the administrator's to change, not the user's own.
+      authorize({ ...ctx, db: tx }, 'manage', 'User');
+    }
+    if (id === ctx.actor.id && (input.active === false || input.role !== before.role)) {
+      throw new AppError('invalid', 'user/self_lockout', 'You cannot deactivate yourself or change your own role');
+    }
+    const scope = await resolveScope(tx, input);
+    const [updated] = await tx
+      .update(users)
+      .set({
+        name: input.name ?? before.name,
+        role: input.role,
+        districtId: scope.districtId,
+        crewId: scope.crewId,
+        active: input.active ?? before.active,
+        version: sql`${users.version} + 1`,
+        updatedAt: new Date(),
+      })
+      .where(and(eq(users.id, id), eq(users.version, input.version)))
+      .returning({ id: users.id });
+    if (!updated) throw versionConflict('user');
+    await replaceSites(tx, id, scope.siteIds);
+    if (input.active === false || input.role !== before.role) {
+      // A deactivated or re-scoped user signs in again.
+      await tx.delete(sessions).where(eq(sessions.userId, id));
+    }
+    const after = (await findUser(tx, id))!;
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'user', entityId: id, districtId: after.districtId, before, after });
+    return after;
+  });
+}
+
+export async function updateProfile(ctx: Ctx, input: { version: number; name?: string | undefined; units?: UnitSystem | undefined }): Promise<SessionUser> {
+  const id = ctx.actor.id;
+  authorize(ctx, 'update', 'User', { id });
+  const before = await findUser(ctx.db, id);
+  if (!before) throw notFound('user', id);
+  const [updated] = await ctx.db
+    .update(users)
+    .set({ name: input.name ?? before.name, units: input.units ?? before.units, version: sql`${users.version} + 1`, updatedAt: new Date() })
+    .where(and(eq(users.id, id), eq(users.version, input.version)))
+    .returning({ id: users.id });
+  if (!updated) throw versionConflict('user');
+  const after = (await findUser(ctx.db, id))!;
+  await writeAudit(ctx.db, { actorId: id, action: 'update', entity: 'user', entityId: id, districtId: after.districtId, before, after });
+  return toSessionUser(after);
+}

@@ -1,0 +1,141 @@
+import { describe, expect, test } from 'vitest';
+import { asSubject, defineAbilityFor, districtScope, type Action, type Actor, type SubjectName } from './abilities.ts';
+
+const D1 = 1;
+const D2 = 2;
+const SITE_A = 10; // in D1
+const SITE_B = 20; // in D2
+const CREW_1 = 100; // in D1
+const CREW_2 = 200; // in D2
+
+const actors: Record<string, Actor> = {
+  admin: { id: 1, role: 'admin', districtId: null, crewId: null, siteIds: [] },
+  head: { id: 2, role: 'head', districtId: null, crewId: null, siteIds: [] },
+  foreman: { id: 3, role: 'foreman', districtId: D1, crewId: null, siteIds: [] },
+  crew: { id: 4, role: 'crew', districtId: D1, crewId: CREW_1, siteIds: [] },
+  partner: { id: 5, role: 'partner', districtId: null, crewId: null, siteIds: [SITE_A] },
+};
+
+const own = { district: { id: D1 }, site: { id: SITE_A, districtId: D1 }, field: { id: 1000, siteId: SITE_A, districtId: D1 } };
+const other = { district: { id: D2 }, site: { id: SITE_B, districtId: D2 }, field: { id: 2000, siteId: SITE_B, districtId: D2 } };
+
+type Row = Record<string, number>;
+type Case = [role: string, action: Action, subject: SubjectName, row: Row | null, allowed: boolean];
+
+const cases: Case[] = [
+  // Districts
+  ['admin', 'read', 'District', other.district, true],
+  ['head', 'read', 'District', other.district, true],
+  ['head', 'update', 'District', own.district, false],
+  ['foreman', 'read', 'District', own.district, true],
+  ['foreman', 'read', 'District', other.district, false],
+  ['crew', 'read', 'District', own.district, true],
+  ['crew', 'read', 'District', other.district, false],
+  ['partner', 'read', 'District', own.district, false],
+  // Sites
+  ['admin', 'delete', 'Site', other.site, true],
+  ['head', 'read', 'Site', other.site, true],
+  ['head', 'update', 'Site', other.site, true],
+  ['head', 'delete', 'Site', other.site, false],
+  ['foreman', 'read', 'Site', own.site, true],
+  ['foreman', 'update', 'Site', own.site, true],
+  ['foreman', 'create', 'Site', { districtId: D1 }, true],
+  ['foreman', 'read', 'Site', other.site, false],
+  ['foreman', 'update', 'Site', other.site, false],
+  ['foreman', 'create', 'Site', { districtId: D2 }, false],
+  ['crew', 'read', 'Site', own.site, true],
+  ['crew', 'update', 'Site', own.site, false],
+  ['crew', 'read', 'Site', other.site, false],
+  ['partner', 'read', 'Site', own.site, true],
+  ['partner', 'read', 'Site', other.site, false],
+  ['partner', 'update', 'Site', own.site, false],
+  // Fields
+  ['admin', 'update', 'Field', other.field, true],
+  ['head', 'update', 'Field', other.field, true],
+  ['head', 'delete', 'Field', other.field, false],
+  ['foreman', 'read', 'Field', own.field, true],
+  ['foreman', 'update', 'Field', own.field, true],
+  ['foreman', 'delete', 'Field', own.field, true],
+  ['foreman', 'read', 'Field', other.field, false],
+  ['foreman', 'update', 'Field', other.field, false],
+  ['foreman', 'delete', 'Field', other.field, false],
+  ['crew', 'read', 'Field', own.field, true],
+  ['crew', 'update', 'Field', own.field, false],
+  ['crew', 'read', 'Field', other.field, false],
+  ['partner', 'read', 'Field', own.field, true],
+  ['partner', 'read', 'Field', other.field, false],
+  ['partner', 'update', 'Field', own.field, false],
+  // Crews
+  ['foreman', 'update', 'Crew', { id: CREW_1, districtId: D1 }, true],
+  ['foreman', 'update', 'Crew', { id: CREW_2, districtId: D2 }, false],
+  ['crew', 'read', 'Crew', { id: CREW_1, districtId: D1 }, true],
+  ['crew', 'read', 'Crew', { id: CREW_2, districtId: D2 }, false],
+  ['crew', 'update', 'Crew', { id: CREW_1, districtId: D1 }, false],
+  ['partner', 'read', 'Crew', { id: CREW_1, districtId: D1 }, false],
+  // Work orders: a crew logs only its own work
+  ['crew', 'log', 'WorkOrder', { crewId: CREW_1, districtId: D1, siteId: SITE_A }, true],
+  ['crew', 'log', 'WorkOrder', { crewId: CREW_2, districtId: D2, siteId: SITE_B }, false],
+  ['foreman', 'assign', 'WorkOrder', { crewId: CREW_1, districtId: D1 }, true],
+  ['foreman', 'assign', 'WorkOrder', { crewId: CREW_2, districtId: D2 }, false],
+  ['partner', 'read', 'WorkOrder', { siteId: SITE_A, districtId: D1 }, true],
+  ['partner', 'read', 'WorkOrder', { siteId: SITE_B, districtId: D2 }, false],
+  // Users
+  ['admin', 'create', 'User', null, true],
+  ['admin', 'manage', 'User', { id: 99 }, true],
+  ['head', 'read', 'User', { id: 99 }, false],
+  ['head', 'read', 'User', { id: 2 }, true],
+  ['head', 'update', 'User', { id: 2 }, true],
+  ['foreman', 'read', 'User', { id: 98, districtId: D1 }, true],
+  ['foreman', 'read', 'User', { id: 97, districtId: D2 }, false],
+  ['foreman', 'create', 'User', null, false],
+  ['crew', 'read', 'User', { id: 98, districtId: D1 }, false],
+  ['partner', 'update', 'User', { id: 5 }, true],
+  ['partner', 'update', 'User', { id: 6 }, false],
+  // Standards and settings: the head sets them
+  ['head', 'update', 'Standards', null, true],
+  ['foreman', 'read', 'Standards', null, true],
+  ['foreman', 'update', 'Standards', null, false],
+  ['partner', 'update', 'Standards', null, false],
+  ['admin', 'update', 'Settings', null, true],
+  // Audit log: readable by the right people, writable by nobody
+  ['admin', 'read', 'AuditEntry', { districtId: D2 }, true],
+  ['admin', 'update', 'AuditEntry', { districtId: D2 }, false],
+  ['admin', 'delete', 'AuditEntry', { districtId: D2 }, false],
+  ['head', 'read', 'AuditEntry', { districtId: D2 }, true],
+  ['foreman', 'read', 'AuditEntry', { districtId: D1 }, true],
+  ['foreman', 'read', 'AuditEntry', { districtId: D2 }, false],
+  ['crew', 'read', 'AuditEntry', null, false],
+  ['partner', 'read', 'AuditEntry', null, false],
+  // Requests from partners
+  ['partner', 'create', 'Request', { siteId: SITE_A, districtId: D1 }, true],
+  ['partner', 'create', 'Request', { siteId: SITE_B, districtId: D2 }, false],
+  ['foreman', 'update', 'Request', { siteId: SITE_A, districtId: D1 }, true],
+  ['foreman', 'update', 'Request', { siteId: SITE_B, districtId: D2 }, false],
+];
+
+describe('abilities', () => {
+  test.each(cases)('should let %s %s %s %j: %s', (role, action, subjectName, row, allowed) => {
+    const ability = defineAbilityFor(actors[role]!);
+    const result = row ? ability.can(action, asSubject(subjectName, row)) : ability.can(action, subjectName);
+    expect(result).toBe(allowed);
+  });
+
+  test('should give a foreman without a district no rows at all', () => {
+    const ability = defineAbilityFor({ id: 9, role: 'foreman', districtId: null, crewId: null, siteIds: [] });
+    expect(ability.can('read', asSubject('Field', own.field))).toBe(false);
+    expect(ability.can('read', asSubject('Field', other.field))).toBe(false);
+  });
+
+  test('should give a partner with no sites no fields', () => {
+    const ability = defineAbilityFor({ id: 9, role: 'partner', districtId: null, crewId: null, siteIds: [] });
+    expect(ability.can('read', asSubject('Field', own.field))).toBe(false);
+  });
+
+  test('should scope district lists by role', () => {
+    expect(districtScope(actors.admin!)).toBe('all');
+    expect(districtScope(actors.head!)).toBe('all');
+    expect(districtScope(actors.foreman!)).toEqual([D1]);
+    expect(districtScope(actors.crew!)).toEqual([D1]);
+    expect(districtScope(actors.partner!)).toEqual([]);
+  });
+});

@@ -1,0 +1,134 @@
+/**
+ * The one definition of who may do what. The API checks it on every route (with
+ * row-level conditions on district and site); the portal builds the same ability from
+ * the signed-in user to hide what the API would refuse.
+ */
+import { AbilityBuilder, createMongoAbility, subject, type ForcedSubject, type MongoAbility } from '@casl/ability';
+import type { Role } from './vocabulary.ts';
+
+export const ACTIONS = ['manage', 'read', 'create', 'update', 'delete', 'assign', 'log'] as const;
+export type Action = (typeof ACTIONS)[number];
+
+export const SUBJECTS = [
+  'User',
+  'District',
+  'Site',
+  'Field',
+  'Crew',
+  'Equipment',
+  'WorkOrder',
+  'FieldCheck',
+  'Standards',
+  'Settings',
+  'AuditEntry',
+  'Import',
+  'Weather',
+  'Request',
+] as const;
+export type SubjectName = (typeof SUBJECTS)[number];
+/** A row tagged with its subject type (see `asSubject`). */
+export type TaggedRow = { [K in SubjectName]: ScopedRow & ForcedSubject<K> }[SubjectName];
+export type Subjects = SubjectName | TaggedRow | 'all';
+
+export type AppAbility = MongoAbility<[Action, Subjects]>;
+
+/** The signed-in caller as every service and ability sees it. */
+export interface Actor {
+  id: number;
+  role: Role;
+  /** District of a foreman or crew lead; null for admin, head and partner. */
+  districtId: number | null;
+  /** Crew of a crew lead. */
+  crewId: number | null;
+  /** Sites a partner is linked to. */
+  siteIds: number[];
+}
+
+/** Rows carry these attributes so conditions can be checked on them. */
+export interface ScopedRow {
+  id?: number;
+  districtId?: number | null;
+  siteId?: number | null;
+  crewId?: number | null;
+}
+
+export function defineAbilityFor(actor: Actor): AppAbility {
+  const { can, cannot, build } = new AbilityBuilder<AppAbility>(createMongoAbility);
+
+  // Everyone may read and update their own account (name, unit preference, password).
+  can('read', 'User', { id: actor.id });
+  can('update', 'User', { id: actor.id });
+
+  switch (actor.role) {
+    case 'admin':
+      can('manage', 'all');
+      break;
+
+    case 'head':
+      can('read', ['District', 'Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck', 'Weather', 'Request']);
+      can('read', ['Standards', 'Settings', 'AuditEntry']);
+      can('update', ['Standards', 'Settings']);
+      // The head decides maintenance levels and may correct any site or field.
+      can(['create', 'update'], ['Site', 'Field']);
+      break;
+
+    case 'foreman': {
+      const d = actor.districtId ?? -1;
+      can('read', 'District', { id: d });
+      can('manage', ['Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck'], { districtId: d });
+      can(['read', 'update'], 'Request', { districtId: d });
+      can('read', ['Standards', 'Weather']);
+      can('create', ['Import', 'Weather']);
+      can('read', 'AuditEntry', { districtId: d });
+      can('read', 'User', { districtId: d });
+      break;
+    }
+
+    case 'crew': {
+      const d = actor.districtId ?? -1;
+      const c = actor.crewId ?? -1;
+      can('read', 'District', { id: d });
+      can('read', ['Site', 'Field'], { districtId: d });
+      can('read', 'Crew', { id: c });
+      can('read', 'Equipment', { crewId: c });
+      can(['read', 'log'], 'WorkOrder', { crewId: c });
+      can('create', 'FieldCheck', { districtId: d });
+      can('read', ['Standards', 'Weather']);
+      break;
+    }
+
+    case 'partner': {
+      const sites = actor.siteIds;
+      can('read', 'Site', { id: { $in: sites } });
+      can('read', 'Field', { siteId: { $in: sites } });
+      can('read', 'WorkOrder', { siteId: { $in: sites } });
+      can(['read', 'create'], 'Request', { siteId: { $in: sites } });
+      can('read', 'Standards');
+      break;
+    }
+  }
+
+  // Nobody, not even an admin, edits the audit log.
+  cannot(['create', 'update', 'delete'], 'AuditEntry');
+
+  return build();
+}
+
+/** Tag a plain row with its subject type so conditions are checked against it. */
+export function asSubject<T extends ScopedRow>(type: SubjectName, row: T): T & TaggedRow {
+  return subject(type, { ...row }) as T & TaggedRow;
+}
+
+/** Which districts an actor may read rows of: 'all' or a list of ids. */
+export function districtScope(actor: Actor): 'all' | number[] {
+  switch (actor.role) {
+    case 'admin':
+    case 'head':
+      return 'all';
+    case 'foreman':
+    case 'crew':
+      return actor.districtId == null ? [] : [actor.districtId];
+    case 'partner':
+      return [];
+  }
+}

@@ -1,0 +1,5 @@
+export * from './vocabulary.ts';
+export * from './errors.ts';
+export * from './abilities.ts';
+export * from './schemas/index.ts';
+export * from './geometry.ts';

@@ -1,0 +1,17 @@
+import { z } from 'zod';
+
+export const signInSchema = z.object({
+  email: z.email('enter a valid e-mail address').trim().toLowerCase(),
+  password: z.string().min(1, 'enter your password').max(200),
+});
+export type SignInInput = z.infer<typeof signInSchema>;
+
+export const passwordSchema = z
+  .string()
+  .min(10, 'use at least 10 characters')
+  .max(200, 'use at most 200 characters');
+
+export const acceptInviteSchema = z.object({
+  token: z.string().min(20, 'the invitation link is incomplete').max(200),
+  password: passwordSchema,
+});

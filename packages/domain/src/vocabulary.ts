@@ -1,0 +1,119 @@
+/**
+ * The product's vocabulary: the closed sets of values used by API, portal and engine.
+ * Trade terms (HOC, maintenance level, work order…) keep their trade names; the rest
+ * are this project's own.
+ */
+
+export const ROLES = ['admin', 'head', 'foreman', 'crew', 'partner'] as const;
+export type Role = (typeof ROLES)[number];
+
+export const ROLE_LABELS: Record<Role, string> = {
+  admin: 'Administrator',
+  head: 'Department head',
+  foreman: 'District foreman',
+  crew: 'Crew lead',
+  partner: 'School / league partner',
+};
+
+/** Maintenance levels 1–4 of the department's Standards. */
+export const LEVELS = [1, 2, 3, 4] as const;
+export type Level = (typeof LEVELS)[number];
+export const LEVEL_NAMES: Record<Level, string> = {
+  1: 'Showcase',
+  2: 'Competition',
+  3: 'Community',
+  4: 'Open space',
+};
+
+export const SPORTS = [
+  'soccer',
+  'football',
+  'baseball',
+  'softball',
+  'lacrosse',
+  'field_hockey',
+  'multi_use',
+  'lawn',
+] as const;
+export type Sport = (typeof SPORTS)[number];
+export const SPORT_LABELS: Record<Sport, string> = {
+  soccer: 'Soccer',
+  football: 'American football',
+  baseball: 'Baseball',
+  softball: 'Softball',
+  lacrosse: 'Lacrosse',
+  field_hockey: 'Field hockey',
+  multi_use: 'Multi-use field',
+  lawn: 'Park lawn',
+};
+
+export const GRASSES = [
+  'kentucky_bluegrass',
+  'perennial_ryegrass',
+  'tall_fescue',
+  'fine_fescue',
+  'bermudagrass',
+  'zoysiagrass',
+  'st_augustinegrass',
+] as const;
+export type Grass = (typeof GRASSES)[number];
+export type GrassSeason = 'cool' | 'warm';
+export const GRASS_SEASON: Record<Grass, GrassSeason> = {
+  kentucky_bluegrass: 'cool',
+  perennial_ryegrass: 'cool',
+  tall_fescue: 'cool',
+  fine_fescue: 'cool',
+  bermudagrass: 'warm',
+  zoysiagrass: 'warm',
+  st_augustinegrass: 'warm',
+};
+export const GRASS_LABELS: Record<Grass, string> = {
+  kentucky_bluegrass: 'Kentucky bluegrass',
+  perennial_ryegrass: 'Perennial ryegrass',
+  tall_fescue: 'Tall fescue',
+  fine_fescue: 'Fine fescue',
+  bermudagrass: 'Bermudagrass',
+  zoysiagrass: 'Zoysiagrass',
+  st_augustinegrass: 'St. Augustinegrass',
+};
+
+export const ROOTZONES = ['native_soil', 'sand_capped', 'sand_based'] as const;
+export type Rootzone = (typeof ROOTZONES)[number];
+export const ROOTZONE_LABELS: Record<Rootzone, string> = {
+  native_soil: 'Native soil',
+  sand_capped: 'Sand-capped',
+  sand_based: 'Sand-based',
+};
+
+export const IRRIGATION_KINDS = ['none', 'quick_coupler', 'automatic'] as const;
+export type IrrigationKind = (typeof IRRIGATION_KINDS)[number];
+export const IRRIGATION_LABELS: Record<IrrigationKind, string> = {
+  none: 'Not irrigated',
+  quick_coupler: 'Quick couplers (manual)',
+  automatic: 'Automatic system',
+};
+
+export const CLIPPINGS = ['returned', 'removed'] as const;
+export type Clippings = (typeof CLIPPINGS)[number];
+
+export const FIELD_STATUSES = ['open', 'restricted', 'closed'] as const;
+export type FieldStatus = (typeof FIELD_STATUSES)[number];
+export const FIELD_STATUS_LABELS: Record<FieldStatus, string> = {
+  open: 'Open',
+  restricted: 'Restricted',
+  closed: 'Closed',
+};
+
+export const SITE_KINDS = ['park', 'school', 'complex'] as const;
+export type SiteKind = (typeof SITE_KINDS)[number];
+export const SITE_KIND_LABELS: Record<SiteKind, string> = {
+  park: 'Park',
+  school: 'School campus',
+  complex: 'Athletic complex',
+};
+
+export const SITE_OWNERS = ['city', 'school_district'] as const;
+export type SiteOwner = (typeof SITE_OWNERS)[number];
+
+export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];

@@ -1,0 +1,62 @@
+import { pino } from 'pino';
+import supertest from 'supertest';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { ROLES } from '@swardwise/domain';
+import { createApp } from '../../apps/api/src/app.ts';
+import { loadConfig } from '../../apps/api/src/config.ts';
+import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
+import { districts, fields, settings, sites, users } from '../../apps/api/src/db/schema/index.ts';
+import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
+import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
+
+let database: Database;
+let app: ReturnType<typeof createApp>['app'];
+let firstSeed: Awaited<ReturnType<typeof seedDemoCity>>;
+
+beforeAll(async () => {
+  database = await openDatabase({ pgliteDir: 'memory://' });
+  firstSeed = await seedDemoCity(database.db);
+  app = createApp({ db: database.db, config: loadConfig({ NODE_ENV: 'test' }), logger: pino({ level: 'silent' }), sessionSecret: 'test' }).app;
+});
+afterAll(() => database.close());
+
+describe('demo city seed', () => {
+  test('should seed three districts, about 25 sites and about 60 fields once', async () => {
+    expect(firstSeed).toMatchObject({ districts: 3 });
+    expect(firstSeed!.sites).toBeGreaterThanOrEqual(20);
+    expect(firstSeed!.fields).toBeGreaterThanOrEqual(50);
+    const counts = async () => ({
+      districts: (await database.db.select().from(districts)).length,
+      sites: (await database.db.select().from(sites)).length,
+      fields: (await database.db.select().from(fields)).length,
+      users: (await database.db.select().from(users)).length,
+    });
+    const before = await counts();
+    expect(await seedDemoCity(database.db)).toBeNull();
+    expect(await counts()).toEqual(before);
+  });
+
+  test('should mark the data as invented demo data', async () => {
+    const all = await database.db.select().from(settings);
+    const demo = all.find((s) => s.key === 'demo_city');
+    expect(JSON.stringify(demo?.value)).toMatch(/invented/i);
+  });
+
+  test.each(ROLES)('should let the documented %s demo user sign in', async (role) => {
+    const agent = supertest.agent(app);
+    const res = await agent.post('/api/auth/sign-in').send(DEMO_SIGN_INS[role]);
+    expect(res.status).toBe(200);
+    expect(res.body.user.role).toBe(role);
+    const list = await agent.get('/api/fields');
+    expect(list.status).toBe(200);
+    expect(list.body.items.length).toBeGreaterThan(0);
+  });
+
+  test('should show the north foreman only North Ridge fields', async () => {
+    const agent = supertest.agent(app);
+    await agent.post('/api/auth/sign-in').send(DEMO_SIGN_INS.foreman);
+    const res = await agent.get('/api/fields');
+    const districtNames = new Set(res.body.items.map((f: { districtName: string }) => f.districtName));
+    expect([...districtNames]).toEqual(['North Ridge']);
+  });
+});

@@ -1,0 +1,35 @@
+/** A fresh API on its own in-memory PGlite, for one test file. */
+import { pino } from 'pino';
+import supertest from 'supertest';
+import { createApp } from '../../apps/api/src/app.ts';
+import { loadConfig } from '../../apps/api/src/config.ts';
+import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
+import { buildFixture, PASSWORD, type Fixture } from './fixture.ts';
+
+export interface TestApi {
+  database: Database;
+  app: ReturnType<typeof createApp>['app'];
+  fixture: Fixture;
+  /** A cookie-keeping client signed in as the fixture user. */
+  signIn(user: keyof Fixture['users']): Promise<ReturnType<typeof supertest.agent>>;
+  close(): Promise<void>;
+}
+
+export async function startTestApi(env: Record<string, string> = {}): Promise<TestApi> {
+  const database = await openDatabase({ pgliteDir: 'memory://' });
+  const fixture = await buildFixture(database.db);
+  const config = loadConfig({ NODE_ENV: 'test', PUBLIC_URL: 'http://portal.test', ...env });
+  const { app } = createApp({ db: database.db, config, logger: pino({ level: 'silent' }), sessionSecret: 'test-secret' });
+  return {
+    database,
+    app,
+    fixture,
+    async signIn(key) {
+      const agent = supertest.agent(app);
+      const res = await agent.post('/api/auth/sign-in').send({ email: fixture.users[key].email, password: PASSWORD });
+      if (res.status !== 200) throw new Error(`sign-in as ${key} failed: ${res.status} ${JSON.stringify(res.body)}`);
+      return agent;
+    },
+    close: () => database.close(),
+  };
+}
