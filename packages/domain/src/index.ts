@@ -3,3 +3,4 @@ export * from './errors.ts';
 export * from './abilities.ts';
 export * from './schemas/index.ts';
 export * from './geometry.ts';
+export * from './engine/index.ts';

@@ -1,0 +1,23 @@
+/**
+ * Caution texts the portal shows beside engine output that can hurt people or break rules.
+ * The product supports decisions; the label, local codes and licensed practice decide.
+ */
+export const CAUTIONS = {
+  feed:
+    'Fertiliser rates here are planning estimates. The product label is the law: follow its rate, timing and storage directions, local rules (blackout dates, buffers near water, phosphorus limits) and use licensed applicators where required.',
+  pesticide:
+    'Pesticide work must follow the product label, local regulations and notification rules, by a licensed applicator where required. This product does not recommend pesticide products or rates.',
+  mowing:
+    'Mowing: check slopes before mowing (use equipment rated for the grade or hand mowing), clear debris, keep guards and discharge chutes in place, wear PPE and keep people clear of thrown objects.',
+  hardness:
+    'Surface hardness above the department\'s safe range raises the risk of head injury: consider closing the field until it is corrected. The safe range for the 2.25 kg tester is a department setting, not a published standard.',
+  wetField:
+    'Wet or waterlogged fields tear and compact under play and footing is poor: close or restrict them until they drain.',
+  lightning: 'Lightning: clear fields when thunder is heard and wait at least 30 minutes after the last thunder before returning (local policy governs).',
+  water:
+    'Watering restrictions are local law: the allowed days, hours and volumes set by the water provider override this schedule.',
+  lines:
+    'Use turf-safe line paint at the label\'s dilution; dark pigments (reds, blues) can damage turf, so put a white base coat under colours.',
+} as const;
+
+export type CautionKey = keyof typeof CAUTIONS;

@@ -1,0 +1,78 @@
+/**
+ * Calendar arithmetic on ISO dates ('YYYY-MM-DD'), in UTC so results never depend on the
+ * machine's time zone. No clock is read: callers pass dates in.
+ */
+import { fail } from './check.ts';
+
+export const WEEKDAYS = ['sun', 'mon', 'tue', 'wed', 'thu', 'fri', 'sat'] as const;
+export type Weekday = (typeof WEEKDAYS)[number];
+
+const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
+
+/** Days since 1970-01-01 of a proleptic Gregorian date (H. Hinnant's days_from_civil). */
+function daysFromCivil(y: number, m: number, d: number): number {
+  const yy = m <= 2 ? y - 1 : y;
+  const era = Math.floor(yy / 400);
+  const yoe = yy - era * 400;
+  const doy = Math.floor((153 * (m + (m > 2 ? -3 : 9)) + 2) / 5) + d - 1;
+  const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy;
+  return era * 146097 + doe - 719468;
+}
+
+/** Year, month, day of a day number (H. Hinnant's civil_from_days). */
+function civilFromDays(z0: number): [number, number, number] {
+  const z = z0 + 719468;
+  const era = Math.floor(z / 146097);
+  const doe = z - era * 146097;
+  const yoe = Math.floor((doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365);
+  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
+  const mp = Math.floor((5 * doy + 2) / 153);
+  const d = doy - Math.floor((153 * mp + 2) / 5) + 1;
+  const m = mp < 10 ? mp + 3 : mp - 9;
+  return [yoe + era * 400 + (m <= 2 ? 1 : 0), m, d];
+}
+
+const pad2 = (n: number): string => (n < 10 ? `0${n}` : String(n));
+
+/** Days since 1970-01-01 of an ISO date; throws `engine/invalid_date` when malformed. */
+export function isoToDayNumber(iso: string): number {
+  const m = ISO_DATE.exec(iso);
+  if (!m) fail('invalid_date', `date must be YYYY-MM-DD (got ${JSON.stringify(iso)})`, { value: iso });
+  const y = Number(m[1]);
+  const mo = Number(m[2]);
+  const d = Number(m[3]);
+  const day = daysFromCivil(y, mo, d);
+  const [by, bm, bd] = civilFromDays(day);
+  if (by !== y || bm !== mo || bd !== d) fail('invalid_date', `${iso} is not a calendar date`, { value: iso });
+  return day;
+}
+
+/** ISO date of a day number (days since 1970-01-01). */
+export function dayNumberToIso(day: number): string {
+  const [y, m, d] = civilFromDays(Math.round(day));
+  return `${String(y).padStart(4, '0')}-${pad2(m)}-${pad2(d)}`;
+}
+
+/** The ISO date `days` after `iso` (negative goes back). */
+export function addDaysIso(iso: string, days: number): string {
+  return dayNumberToIso(isoToDayNumber(iso) + days);
+}
+
+/** Day of the year, 1 (1 January) to 365/366: FAO-56's J. */
+export function dayOfYear(iso: string): number {
+  const y = Number(iso.slice(0, 4));
+  return isoToDayNumber(iso) - daysFromCivil(y, 1, 1) + 1;
+}
+
+/** Weekday of an ISO date ('sun' … 'sat'). */
+export function weekdayOf(iso: string): Weekday {
+  // 1970-01-01 was a Thursday (index 4).
+  const idx = (((isoToDayNumber(iso) + 4) % 7) + 7) % 7;
+  return WEEKDAYS[idx] as Weekday;
+}
+
+/** Month 1–12 of an ISO date. */
+export function monthOf(iso: string): number {
+  isoToDayNumber(iso);
+  return Number(iso.slice(5, 7));
+}

@@ -1,0 +1,60 @@
+import { describe, expect, test } from 'vitest';
+import * as l from './lines.ts';
+
+describe('lines', () => {
+  test('should total 2L + 3W + 302.94 m for any legal soccer pitch', () => {
+    for (const [L, W] of [[105, 68], [100, 64], [90, 45], [120, 90]] as const) {
+      expect(l.totalLineLengthM(l.soccerTemplate(L, W))).toBeCloseTo(2 * L + 3 * W + 302.94, 1);
+    }
+  });
+
+  test('should measure arcs as r × angle', () => {
+    expect(l.segmentLengthM({ kind: 'arc', center: [0, 0], radiusM: 9.15, startRad: 0, endRad: 2 * Math.PI, label: 'c' })).toBeCloseTo(57.49, 2);
+    expect(l.segmentLengthM({ kind: 'line', from: [0, 0], to: [3, 4], label: 'x' })).toBe(5);
+  });
+
+  test('should build every sport template with lines inside its frame', () => {
+    const templates = [l.soccerTemplate(), l.smallSidedSoccerTemplate('7v7'), l.smallSidedSoccerTemplate('9v9'), l.footballTemplate(), l.lacrosseTemplate(), l.fieldHockeyTemplate()];
+    for (const t of templates) {
+      expect(l.totalLineLengthM(t)).toBeGreaterThan(2 * (t.lengthM + t.widthM));
+      for (const s of t.segments) {
+        if (s.kind !== 'line') continue;
+        for (const [x, y] of [s.from, s.to]) {
+          expect(x).toBeGreaterThanOrEqual(-1e-9);
+          expect(x).toBeLessThanOrEqual(t.lengthM + 1e-9);
+          expect(y).toBeGreaterThanOrEqual(-1e-9);
+          expect(y).toBeLessThanOrEqual(t.widthM + 1e-9);
+        }
+      }
+    }
+    expect(l.totalLineLengthM(l.baseballTemplate(325))).toBeGreaterThan(2 * 325 * 0.3048);
+    expect(l.defaultTemplateFor('lawn')).toBeNull();
+    expect(l.defaultTemplateFor('softball')?.id).toBe('softball');
+  });
+
+  test('should derive paint concentrate and water from coverage, dilution and passes', () => {
+    const p = l.paintNeed(1000, 0.1, { coverageM2PerMixedL: 2, dilutionWaterPerPaint: 3, passes: 2 });
+    expect(p.paintedAreaM2).toBeCloseTo(100, 12);
+    expect(p.mixedLitres).toBeCloseTo(100, 12);
+    expect(p.concentrateLitres).toBeCloseTo(25, 12);
+    expect(p.waterLitres).toBeCloseTo(75, 12);
+  });
+
+  test('should time marking and count repaints', () => {
+    expect(l.markingHours(1500, 2, 3, 30)).toBeCloseTo(1.5, 12);
+    expect(l.repaintsInSeason(70, 7)).toBe(10);
+    expect(l.repaintsInSeason(70, 7, 2)).toBe(12);
+    expect(l.repaintsInSeason(70, null, 1)).toBe(1);
+    const plan = l.linePlan(l.soccerTemplate(), { coverageM2PerMixedL: 1.6, dilutionWaterPerPaint: 1, passes: 2, markerSpeedKmh: 3, setupMin: 20 }, { days: 28, repaintDays: 7 });
+    expect(plan.repaints).toBe(4);
+    expect(plan.seasonMixedLitres).toBeCloseTo(plan.mixedLitres * 4, 9);
+  });
+
+  test('should reject dimensions outside IFAB Law 1 and bad paint settings', () => {
+    expect(() => l.soccerTemplate(80, 50)).toThrow(expect.objectContaining({ code: 'engine/invalid_dimension' }));
+    expect(() => l.soccerTemplate(100, 95)).toThrow(expect.objectContaining({ code: 'engine/invalid_dimension' }));
+    expect(() => l.soccerTemplate(105, 68, 0.15)).toThrow(expect.objectContaining({ code: 'engine/invalid_line_width' }));
+    expect(() => l.paintNeed(-1, 0.1, { coverageM2PerMixedL: 2, dilutionWaterPerPaint: 1, passes: 1 })).toThrow(expect.objectContaining({ code: 'engine/invalid_length' }));
+    expect(() => l.paintNeed(10, 0.1, { coverageM2PerMixedL: 0, dilutionWaterPerPaint: 1, passes: 1 })).toThrow(expect.objectContaining({ code: 'engine/invalid_coverage' }));
+  });
+});

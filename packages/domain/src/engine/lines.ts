@@ -1,0 +1,349 @@
+/**
+ * Line plan: layout templates per sport with the governing bodies' dimensions (or labelled
+ * "from memory" / "common practice"), total line length, painted area, paint and water,
+ * labour and repaints. Coordinates are metres in the field's own frame: x along the length
+ * from one end line, y across from one side line.
+ */
+import type { Sport } from '../vocabulary.ts';
+import { fail, requireNonNegative, requirePositive, requireRange } from './check.ts';
+import { ftToM } from './units.ts';
+
+export type Point = readonly [number, number];
+
+export type LineSegment =
+  | { kind: 'line'; from: Point; to: Point; label: string }
+  | { kind: 'arc'; center: Point; radiusM: number; startRad: number; endRad: number; label: string };
+
+export interface LineTemplate {
+  id: string;
+  sport: Sport;
+  name: string;
+  /** Where the dimensions come from (governing body, or "from memory" / "common practice"). */
+  source: string;
+  lengthM: number;
+  widthM: number;
+  /** Line width, m. */
+  lineWidthM: number;
+  segments: LineSegment[];
+}
+
+/** Length (m) of one segment: straight distance, or r × swept angle for an arc. */
+export function segmentLengthM(s: LineSegment): number {
+  if (s.kind === 'line') return Math.hypot(s.to[0] - s.from[0], s.to[1] - s.from[1]);
+  return s.radiusM * Math.abs(s.endRad - s.startRad);
+}
+
+/** Total line length of a template, m. */
+export function totalLineLengthM(t: Pick<LineTemplate, 'segments'>): number {
+  return t.segments.reduce((s, seg) => s + segmentLengthM(seg), 0);
+}
+
+const line = (x1: number, y1: number, x2: number, y2: number, label: string): LineSegment => ({ kind: 'line', from: [x1, y1], to: [x2, y2], label });
+const arc = (cx: number, cy: number, r: number, a: number, b: number, label: string): LineSegment => ({ kind: 'arc', center: [cx, cy], radiusM: r, startRad: a, endRad: b, label });
+
+function boundary(L: number, W: number, ends = 'goal line', sides = 'touchline'): LineSegment[] {
+  return [line(0, 0, L, 0, sides), line(L, 0, L, W, ends), line(L, W, 0, W, sides), line(0, W, 0, 0, ends)];
+}
+
+/** A box on an end line at x = 0 (mirrored to x = L when `far`), `width` wide, `depth` deep, centred. */
+function endBox(L: number, W: number, width: number, depth: number, far: boolean, label: string): LineSegment[] {
+  const y1 = W / 2 - width / 2;
+  const y2 = W / 2 + width / 2;
+  const x0 = far ? L : 0;
+  const x1 = far ? L - depth : depth;
+  return [line(x0, y1, x1, y1, label), line(x1, y1, x1, y2, label), line(x1, y2, x0, y2, label)];
+}
+
+interface SoccerDims {
+  centreCircleR: number;
+  goalAreaWidth: number;
+  goalAreaDepth: number;
+  penaltyAreaWidth: number;
+  penaltyAreaDepth: number;
+  penaltyMarkM: number;
+  penaltyArcR: number;
+  cornerArcR: number;
+}
+
+function soccerSegments(L: number, W: number, d: SoccerDims): LineSegment[] {
+  const segs: LineSegment[] = [...boundary(L, W), line(L / 2, 0, L / 2, W, 'halfway line'), arc(L / 2, W / 2, d.centreCircleR, 0, 2 * Math.PI, 'centre circle')];
+  for (const far of [false, true]) {
+    segs.push(...endBox(L, W, d.goalAreaWidth, d.goalAreaDepth, far, 'goal area'));
+    segs.push(...endBox(L, W, d.penaltyAreaWidth, d.penaltyAreaDepth, far, 'penalty area'));
+    // The penalty arc is the part of the circle round the mark that lies outside the area.
+    const outside = d.penaltyAreaDepth - d.penaltyMarkM;
+    if (outside < d.penaltyArcR) {
+      const half = Math.acos(outside / d.penaltyArcR);
+      const cx = far ? L - d.penaltyMarkM : d.penaltyMarkM;
+      const mid = far ? Math.PI : 0;
+      segs.push(arc(cx, W / 2, d.penaltyArcR, mid - half, mid + half, 'penalty arc'));
+    }
+  }
+  const r = d.cornerArcR;
+  segs.push(arc(0, 0, r, 0, Math.PI / 2, 'corner arc'), arc(L, 0, r, Math.PI / 2, Math.PI, 'corner arc'), arc(L, W, r, Math.PI, 1.5 * Math.PI, 'corner arc'), arc(0, W, r, 1.5 * Math.PI, 2 * Math.PI, 'corner arc'));
+  return segs;
+}
+
+/**
+ * Full-size soccer (IFAB Laws of the Game, Law 1): touchline 90–120 m, goal line 45–90 m;
+ * centre circle r 9.15 m; goal area 5.5 m from each post and 5.5 m deep; penalty area
+ * 16.5 m from each post and 16.5 m deep; penalty mark 11 m, arc r 9.15 m; corner arc r 1 m;
+ * goal 7.32 m; lines ≤ 12 cm. International matches: 100–110 × 64–75 m. Derived total:
+ * 2L + 3W + 302.94 m.
+ */
+export function soccerTemplate(lengthM = 105, widthM = 68, lineWidthM = 0.12, options: { international?: boolean } = {}): LineTemplate {
+  if (options.international) {
+    requireRange(lengthM, 100, 110, 'invalid_dimension', 'international touchline length (m, IFAB Law 1: 100–110)');
+    requireRange(widthM, 64, 75, 'invalid_dimension', 'international goal line length (m, IFAB Law 1: 64–75)');
+  }
+  requireRange(lengthM, 90, 120, 'invalid_dimension', 'soccer touchline length (m, IFAB Law 1: 90–120)');
+  requireRange(widthM, 45, 90, 'invalid_dimension', 'soccer goal line length (m, IFAB Law 1: 45–90)');
+  if (widthM >= lengthM) fail('invalid_dimension', 'the touchline must be longer than the goal line (IFAB Law 1)');
+  requireRange(lineWidthM, 0.01, 0.12, 'invalid_line_width', 'line width (m, IFAB Law 1: ≤ 0.12)');
+  const goal = 7.32;
+  return {
+    id: `soccer_${lengthM}x${widthM}`,
+    sport: 'soccer',
+    name: `Soccer ${lengthM} × ${widthM} m`,
+    source: 'IFAB Laws of the Game, Law 1',
+    lengthM,
+    widthM,
+    lineWidthM,
+    segments: soccerSegments(lengthM, widthM, {
+      centreCircleR: 9.15,
+      goalAreaWidth: goal + 2 * 5.5,
+      goalAreaDepth: 5.5,
+      penaltyAreaWidth: goal + 2 * 16.5,
+      penaltyAreaDepth: 16.5,
+      penaltyMarkM: 11,
+      penaltyArcR: 9.15,
+      cornerArcR: 1,
+    }),
+  };
+}
+
+/** Small-sided soccer formats. Dimensions are common practice / from memory: the league's own rules govern. */
+export const SMALL_SIDED_SOCCER = {
+  '7v7': { lengthM: 55, widthM: 36, centreCircleR: 6, goalAreaWidth: 11, goalAreaDepth: 4, penaltyAreaWidth: 22, penaltyAreaDepth: 11, penaltyMarkM: 8, penaltyArcR: 6, cornerArcR: 1 },
+  '9v9': { lengthM: 73, widthM: 46, centreCircleR: 7.3, goalAreaWidth: 14.6, goalAreaDepth: 4.5, penaltyAreaWidth: 32, penaltyAreaDepth: 13, penaltyMarkM: 9, penaltyArcR: 7.3, cornerArcR: 1 },
+} as const;
+
+/** Small-sided soccer layout (7v7 or 9v9; common practice / from memory). */
+export function smallSidedSoccerTemplate(format: keyof typeof SMALL_SIDED_SOCCER, lineWidthM = 0.1): LineTemplate {
+  const d = SMALL_SIDED_SOCCER[format];
+  if (!d) fail('unknown_template', `unknown small-sided format ${JSON.stringify(format)}`);
+  return {
+    id: `soccer_${format}`,
+    sport: 'soccer',
+    name: `Soccer ${format}`,
+    source: 'common practice / from memory (league rules govern)',
+    lengthM: d.lengthM,
+    widthM: d.widthM,
+    lineWidthM,
+    segments: soccerSegments(d.lengthM, d.widthM, d),
+  };
+}
+
+/**
+ * American football, NFHS (secondary sources): 360 × 160 ft including 30 ft end zones,
+ * 4 in lines, yard lines every 5 yd from goal line to goal line, hash marks at every other
+ * yard 53 ft 4 in from each sideline (NCAA: 60 ft). Hash-mark length 2 ft: from memory.
+ * Team boxes and numbers are not included.
+ */
+export function footballTemplate(hashFromSidelineFt = 53 + 4 / 12): LineTemplate {
+  const L = ftToM(360);
+  const W = ftToM(160);
+  const ez = ftToM(30);
+  const yd = ftToM(3);
+  const segs: LineSegment[] = boundary(L, W, 'end line', 'sideline');
+  for (let k = 0; k <= 100; k += 5) segs.push(line(ez + k * yd, 0, ez + k * yd, W, k === 0 || k === 100 ? 'goal line' : 'yard line'));
+  const hashLen = ftToM(2);
+  const h1 = ftToM(hashFromSidelineFt);
+  for (let k = 1; k < 100; k++) {
+    if (k % 5 === 0) continue;
+    const x = ez + k * yd;
+    segs.push(line(x, h1, x, h1 + hashLen, 'hash mark'), line(x, W - h1, x, W - h1 - hashLen, 'hash mark'));
+  }
+  return { id: 'football_nfhs', sport: 'football', name: 'American football (NFHS)', source: 'NFHS (secondary sources); hash-mark length from memory', lengthM: L, widthM: W, lineWidthM: ftToM(4 / 12), segments: segs };
+}
+
+/**
+ * Men's lacrosse, 110 × 60 yd (from memory): boundary, midline, restraining lines 20 yd
+ * either side of the midline, wing lines 10 yd long 10 yd in from each sideline, goal lines
+ * 6 ft wide 15 yd from each end line, goal creases r 9 ft. All dimensions from memory.
+ */
+export function lacrosseTemplate(): LineTemplate {
+  const yd = ftToM(3);
+  const L = 110 * yd;
+  const W = 60 * yd;
+  const segs: LineSegment[] = [...boundary(L, W, 'end line', 'sideline'), line(L / 2, 0, L / 2, W, 'midline')];
+  for (const x of [L / 2 - 20 * yd, L / 2 + 20 * yd]) segs.push(line(x, 0, x, W, 'restraining line'));
+  for (const y of [10 * yd, W - 10 * yd]) segs.push(line(L / 2 - 5 * yd, y, L / 2 + 5 * yd, y, 'wing line'));
+  const crease = ftToM(9);
+  const goalHalf = ftToM(3);
+  for (const x of [15 * yd, L - 15 * yd]) {
+    segs.push(line(x, W / 2 - goalHalf, x, W / 2 + goalHalf, 'goal line'), arc(x, W / 2, crease, 0, 2 * Math.PI, 'goal crease'));
+  }
+  return { id: 'lacrosse_men', sport: 'lacrosse', name: "Men's lacrosse", source: 'from memory', lengthM: L, widthM: W, lineWidthM: ftToM(4 / 12), segments: segs };
+}
+
+/**
+ * Field hockey (FIH): 91.40 × 55.00 m, lines 75 mm, 22.90 m lines, shooting circle r 14.63 m
+ * drawn round each goal post and joined by a straight as long as the goal (3.66 m, from memory).
+ * The dashed 5 m circle and marks are not included.
+ */
+export function fieldHockeyTemplate(): LineTemplate {
+  const L = 91.4;
+  const W = 55;
+  const r = 14.63;
+  const halfGoal = 3.66 / 2;
+  const segs: LineSegment[] = [...boundary(L, W, 'backline', 'sideline'), line(L / 2, 0, L / 2, W, 'centre line'), line(22.9, 0, 22.9, W, '23 m line'), line(L - 22.9, 0, L - 22.9, W, '23 m line')];
+  for (const far of [false, true]) {
+    const x0 = far ? L : 0;
+    const xs = far ? L - r : r;
+    segs.push(line(xs, W / 2 - halfGoal, xs, W / 2 + halfGoal, 'shooting circle'));
+    if (far) segs.push(arc(L, W / 2 + halfGoal, r, Math.PI / 2, Math.PI, 'shooting circle'), arc(L, W / 2 - halfGoal, r, Math.PI, 1.5 * Math.PI, 'shooting circle'));
+    else segs.push(arc(x0, W / 2 + halfGoal, r, 0, Math.PI / 2, 'shooting circle'), arc(x0, W / 2 - halfGoal, r, -Math.PI / 2, 0, 'shooting circle'));
+  }
+  return { id: 'field_hockey_fih', sport: 'field_hockey', name: 'Field hockey (FIH)', source: 'FIH Rules of Hockey; goal width from memory', lengthM: L, widthM: W, lineWidthM: 0.075, segments: segs };
+}
+
+function diamond(opts: { id: string; sport: Sport; name: string; source: string; foulLineFt: number; boxWFt: number; boxLFt: number; boxGapFt: number; runningLaneFt: number | null; lineWidthIn: number }): LineTemplate {
+  const f = ftToM(opts.foulLineFt);
+  const c = Math.SQRT1_2;
+  // Home plate apex at the origin; foul lines at ±45° from the line to second base (x axis).
+  const segs: LineSegment[] = [line(0, 0, f * c, -f * c, 'first base foul line'), line(0, 0, f * c, f * c, 'third base foul line')];
+  const bw = ftToM(opts.boxWFt);
+  const bl = ftToM(opts.boxLFt);
+  const gap = ftToM(opts.boxGapFt);
+  for (const side of [-1, 1]) {
+    const y0 = side * gap;
+    const y1 = side * (gap + bw);
+    const x0 = -bl / 2;
+    const x1 = bl / 2;
+    segs.push(line(x0, y0, x1, y0, "batter's box"), line(x1, y0, x1, y1, "batter's box"), line(x1, y1, x0, y1, "batter's box"), line(x0, y1, x0, y0, "batter's box"));
+  }
+  if (opts.runningLaneFt !== null) {
+    const start = ftToM(opts.runningLaneFt);
+    const end = ftToM(opts.runningLaneFt * 2);
+    const off = ftToM(3);
+    // Parallel to the first-base line, 3 ft into foul territory, from half-way to first base.
+    const px = (d: number) => d * c + off * c;
+    const py = (d: number) => -d * c + off * c;
+    segs.push(line(px(start), py(start), px(end), py(end), 'running lane'), line(start * c, -start * c, px(start), py(start), 'running lane'));
+  }
+  return { id: opts.id, sport: opts.sport, name: opts.name, source: opts.source, lengthM: f * c, widthM: 2 * f * c, lineWidthM: ftToM(opts.lineWidthIn / 12), segments: segs };
+}
+
+/**
+ * Baseball (Official Baseball Rules 2.01): foul lines from home plate, 320 ft or more
+ * preferred (default 325 ft, department choice); 90 ft bases (running lane from 45 ft to
+ * first base, 3 ft wide). Batter's boxes 4 × 6 ft, 6 in from the plate: from memory.
+ */
+export function baseballTemplate(foulLineFt = 325): LineTemplate {
+  requireRange(foulLineFt, 150, 450, 'invalid_dimension', 'foul line length (ft)');
+  return diamond({ id: 'baseball_obr', sport: 'baseball', name: 'Baseball', source: 'Official Baseball Rules 2.01; box sizes from memory', foulLineFt, boxWFt: 4, boxLFt: 6, boxGapFt: 0.5 + 17 / 24, runningLaneFt: 45, lineWidthIn: 3 });
+}
+
+/** Softball: 60 ft bases, 200 ft foul lines, batter's boxes 3 × 7 ft — all from memory. */
+export function softballTemplate(foulLineFt = 200): LineTemplate {
+  requireRange(foulLineFt, 100, 350, 'invalid_dimension', 'foul line length (ft)');
+  return diamond({ id: 'softball', sport: 'softball', name: 'Softball', source: 'from memory', foulLineFt, boxWFt: 3, boxLFt: 7, boxGapFt: 0.5 + 17 / 24, runningLaneFt: 30, lineWidthIn: 3 });
+}
+
+/** The default template for a sport, or null for sports without lines (lawn, multi-use). */
+export function defaultTemplateFor(sport: Sport): LineTemplate | null {
+  switch (sport) {
+    case 'soccer':
+      return soccerTemplate();
+    case 'football':
+      return footballTemplate();
+    case 'lacrosse':
+      return lacrosseTemplate();
+    case 'field_hockey':
+      return fieldHockeyTemplate();
+    case 'baseball':
+      return baseballTemplate();
+    case 'softball':
+      return softballTemplate();
+    default:
+      return null;
+  }
+}
+
+export interface PaintSettings {
+  /** Area one litre of mixed paint covers in one pass, m²/L. */
+  coverageM2PerMixedL: number;
+  /** Parts water per part paint concentrate (1:1 to 4:1 common practice). */
+  dilutionWaterPerPaint: number;
+  /** Passes (two directions is common practice). */
+  passes: number;
+}
+
+export interface PaintNeed {
+  lineLengthM: number;
+  paintedAreaM2: number;
+  mixedLitres: number;
+  concentrateLitres: number;
+  waterLitres: number;
+}
+
+/**
+ * Paint for a line length: painted area = length × width; mixed = area × passes ÷ coverage;
+ * concentrate = mixed ÷ (1 + dilution); water = mixed − concentrate.
+ */
+export function paintNeed(lineLengthM: number, lineWidthM: number, s: PaintSettings): PaintNeed {
+  requireNonNegative(lineLengthM, 'invalid_length', 'line length (m)');
+  requirePositive(lineWidthM, 'invalid_line_width', 'line width (m)');
+  requirePositive(s.coverageM2PerMixedL, 'invalid_coverage', 'coverage (m²/L)');
+  requireRange(s.dilutionWaterPerPaint, 0, 10, 'invalid_dilution', 'dilution (parts water per part paint)');
+  requirePositive(s.passes, 'invalid_passes', 'passes');
+  const paintedAreaM2 = lineLengthM * lineWidthM;
+  const mixedLitres = (paintedAreaM2 * s.passes) / s.coverageM2PerMixedL;
+  const concentrateLitres = mixedLitres / (1 + s.dilutionWaterPerPaint);
+  return { lineLengthM, paintedAreaM2, mixedLitres, concentrateLitres, waterLitres: mixedLitres - concentrateLitres };
+}
+
+/** Marking labour, h = length × passes ÷ marker speed + setup time. */
+export function markingHours(lineLengthM: number, passes: number, markerSpeedKmh: number, setupMin = 0): number {
+  requireNonNegative(lineLengthM, 'invalid_length', 'line length (m)');
+  requirePositive(passes, 'invalid_passes', 'passes');
+  requirePositive(markerSpeedKmh, 'invalid_speed', 'marker speed (km/h)');
+  requireNonNegative(setupMin, 'invalid_duration', 'setup time (min)');
+  return (lineLengthM * passes) / 1000 / markerSpeedKmh + setupMin / 60;
+}
+
+/** Repaints in a season: one at the start, then every `intervalDays`, plus one per extra event. */
+export function repaintsInSeason(seasonDays: number, intervalDays: number | null, extraEvents = 0): number {
+  requireNonNegative(seasonDays, 'invalid_duration', 'season length (days)');
+  requireNonNegative(extraEvents, 'invalid_events', 'extra events');
+  if (intervalDays === null) return extraEvents;
+  requirePositive(intervalDays, 'invalid_interval', 'repaint interval (days)');
+  return (seasonDays > 0 ? Math.ceil(seasonDays / intervalDays) : 0) + extraEvents;
+}
+
+export interface LinePlan extends PaintNeed {
+  templateId: string;
+  repaints: number;
+  hoursPerRepaint: number;
+  seasonMixedLitres: number;
+  seasonConcentrateLitres: number;
+  seasonHours: number;
+}
+
+/** A season's line plan for one template. */
+export function linePlan(template: LineTemplate, s: PaintSettings & { markerSpeedKmh: number; setupMin: number }, season: { days: number; repaintDays: number | null; extraEvents?: number }): LinePlan {
+  const length = totalLineLengthM(template);
+  const one = paintNeed(length, template.lineWidthM, s);
+  const repaints = repaintsInSeason(season.days, season.repaintDays, season.extraEvents ?? 0);
+  const hoursPerRepaint = markingHours(length, s.passes, s.markerSpeedKmh, s.setupMin);
+  return {
+    ...one,
+    templateId: template.id,
+    repaints,
+    hoursPerRepaint,
+    seasonMixedLitres: one.mixedLitres * repaints,
+    seasonConcentrateLitres: one.concentrateLitres * repaints,
+    seasonHours: hoursPerRepaint * repaints,
+  };
+}

@@ -1,0 +1,220 @@
+/**
+ * Mowing: the one-third rule, a day-by-day mowing simulation, and mower choice by HOC.
+ * One-third rule (common practice): remove no more than a third of the leaf height in one
+ * cut, i.e. mow before the grass exceeds 1.5 × HOC (at 2 in HOC, mow before 3 in).
+ */
+import { dayNumberToIso, isoToDayNumber, weekdayOf } from './dates.ts';
+import type { Weekday } from './dates.ts';
+import { fail, requireNonNegative, requirePositive } from './check.ts';
+import type { MowerSpec } from './standards.ts';
+
+/** Height (mm) the grass may reach before it must be mowed: 1.5 × HOC (one-third rule). */
+export function mowTriggerHeightMm(hocMm: number): number {
+  return 1.5 * requirePositive(hocMm, 'invalid_hoc', 'HOC (mm)');
+}
+
+export interface CutCheck {
+  /** Share of the leaf height removed by cutting from `heightMm` to `hocMm`. */
+  removalFraction: number;
+  /** More than a third removed: scalping risk. */
+  scalpingRisk: boolean;
+}
+
+/** Share of leaf removed when grass at `heightMm` is cut to `hocMm`; > 1/3 flags scalping risk (one-third rule). */
+export function checkCut(heightMm: number, hocMm: number): CutCheck {
+  requirePositive(hocMm, 'invalid_hoc', 'HOC (mm)');
+  requirePositive(heightMm, 'invalid_height', 'grass height (mm)');
+  const removalFraction = heightMm <= hocMm ? 0 : (heightMm - hocMm) / heightMm;
+  return { removalFraction, scalpingRisk: removalFraction > 1 / 3 + 1e-9 };
+}
+
+export interface MowingOptions {
+  /** ISO date of the first day of the growth series. */
+  startDate: string;
+  /** Longest interval between mowings (the level's minimum frequency), days. */
+  maxIntervalDays?: number;
+  /** Minimum mowings per week; turned into a max interval of floor(7 ÷ n) days. */
+  minMowingsPerWeek?: number;
+  /** Weekdays on which the crew can mow (default every day). */
+  mowingDays?: readonly Weekday[];
+  /** Days since the last cut at the start (default 0: cut the day before the series). */
+  daysSinceCutAtStart?: number;
+  /**
+   * Least growth above HOC (mm) for a cut forced by the minimum frequency (default 0). Keeps
+   * the level's frequency from sending mowers onto dormant turf.
+   */
+  frequencyMinGrowthMm?: number;
+}
+
+export interface MowingEvent {
+  date: string;
+  dayIndex: number;
+  heightBeforeMm: number;
+  removalFraction: number;
+  scalpingRisk: boolean;
+  /** Why this cut: the one-third rule would be broken, or the level's minimum frequency. */
+  reason: 'growth' | 'frequency';
+}
+
+export interface MowingSimulation {
+  hocMm: number;
+  triggerHeightMm: number;
+  mowings: MowingEvent[];
+  /** Days between consecutive cuts (the first from the start of the series). */
+  intervalsDays: number[];
+  meanIntervalDays: number | null;
+  mowingsPerWeek: number;
+  /** Cuts forced by growth and by the minimum frequency. */
+  growthMowings: number;
+  frequencyMowings: number;
+  /** First date the grass would exceed 1.5 × HOC if no one mowed; null if never in the series. */
+  overdueIfNotMowedDate: string | null;
+  /** Dates on which the simulated grass stood above 1.5 × HOC (e.g. no mowing day in time). */
+  overdueDates: string[];
+  maxHeightMm: number;
+}
+
+/**
+ * Simulates mowing over a daily growth series (mm/day, e.g. from `dailyGrowthMm`). On each
+ * mowing day the field is cut if, before the next mowing day, the grass would exceed
+ * 1.5 × HOC (one-third rule) or the interval would exceed the level's maximum. Height after
+ * a cut is HOC; growth of day i is added at the end of day i.
+ */
+export function simulateMowing(hocMm: number, growthMmPerDay: readonly number[], startHeightMm: number, options: MowingOptions): MowingSimulation {
+  const trigger = mowTriggerHeightMm(hocMm);
+  requirePositive(startHeightMm, 'invalid_height', 'start height (mm)');
+  const maxInterval = maxIntervalFrom(options);
+  const minGrowthForFrequency = requireNonNegative(options.frequencyMinGrowthMm ?? 0, 'invalid_growth', 'minimum growth for a frequency cut (mm)');
+  const allowed = new Set<Weekday>(options.mowingDays ?? ['sun', 'mon', 'tue', 'wed', 'thu', 'fri', 'sat']);
+  if (allowed.size === 0) fail('invalid_mowing_days', 'at least one mowing day is needed');
+  const n = growthMmPerDay.length;
+  const day0 = isoToDayNumber(options.startDate);
+  const dateAt = (i: number): string => dayNumberToIso(day0 + i);
+  for (const g of growthMmPerDay) requireNonNegative(g, 'invalid_growth', 'daily growth (mm)');
+  const days: Weekday[] = [];
+  const first = weekdayOf(options.startDate);
+  const firstIdx = WEEK.indexOf(first);
+  for (let i = 0; i < n; i++) days.push(WEEK[(firstIdx + i) % 7] as Weekday);
+  // Index of the next allowed day strictly after i (or n when none left).
+  const nextAllowed = new Array<number>(n).fill(n);
+  let next = n;
+  for (let i = n - 1; i >= 0; i--) {
+    nextAllowed[i] = next;
+    if (allowed.has(days[i] as Weekday)) next = i;
+  }
+
+  const mowings: MowingEvent[] = [];
+  const overdueDates: string[] = [];
+  let height = startHeightMm;
+  let lastCut = -1 - (options.daysSinceCutAtStart ?? 0);
+  let maxHeight = startHeightMm;
+  let overdueIfNotMowed: string | null = null;
+  let unmown = startHeightMm;
+  for (let i = 0; i < n; i++) {
+    if (height > trigger + 1e-9) overdueDates.push(dateAt(i));
+    if (overdueIfNotMowed === null && unmown > trigger + 1e-9) overdueIfNotMowed = dateAt(i);
+    if (allowed.has(days[i] as Weekday)) {
+      const j = nextAllowed[i] as number;
+      // Height at the start of the next mowing day if not cut today (growth of days i..j−1).
+      let ahead = height;
+      for (let k = i; k < j && k < n; k++) ahead += growthMmPerDay[k] as number;
+      const byGrowth = j < n ? ahead > trigger : height + (growthMmPerDay[i] as number) > trigger;
+      const byFrequency = maxInterval !== null && (j < n ? j - lastCut > maxInterval : i - lastCut >= maxInterval);
+      const frequencyDue = byFrequency && height - hocMm >= minGrowthForFrequency;
+      if ((byGrowth || frequencyDue) && height > hocMm + 1e-9) {
+        const cut = checkCut(height, hocMm);
+        mowings.push({
+          date: dateAt(i),
+          dayIndex: i,
+          heightBeforeMm: height,
+          removalFraction: cut.removalFraction,
+          scalpingRisk: cut.scalpingRisk,
+          reason: byGrowth ? 'growth' : 'frequency',
+        });
+        height = hocMm;
+        lastCut = i;
+      }
+    }
+    height += growthMmPerDay[i] as number;
+    unmown += growthMmPerDay[i] as number;
+    if (height > maxHeight) maxHeight = height;
+  }
+  if (overdueIfNotMowed === null && unmown > trigger + 1e-9 && n > 0) overdueIfNotMowed = dateAt(n);
+
+  const intervalsDays: number[] = [];
+  let prev = -1 - (options.daysSinceCutAtStart ?? 0);
+  for (const m of mowings) {
+    intervalsDays.push(m.dayIndex - prev);
+    prev = m.dayIndex;
+  }
+  const between = intervalsDays.slice(1);
+  const meanIntervalDays = between.length ? between.reduce((s, v) => s + v, 0) / between.length : null;
+  return {
+    hocMm,
+    triggerHeightMm: trigger,
+    mowings,
+    intervalsDays,
+    meanIntervalDays,
+    mowingsPerWeek: n > 0 ? (mowings.length / n) * 7 : 0,
+    growthMowings: mowings.filter((m) => m.reason === 'growth').length,
+    frequencyMowings: mowings.filter((m) => m.reason === 'frequency').length,
+    overdueIfNotMowedDate: overdueIfNotMowed,
+    overdueDates,
+    maxHeightMm: maxHeight,
+  };
+}
+
+/**
+ * Date the grass passes 1.5 × HOC if no one mows, from its current height and a growth
+ * forecast (mm/day from `fromDate`); null if it stays below within the forecast.
+ */
+export function overdueDate(hocMm: number, currentHeightMm: number, growthMmPerDay: readonly number[], fromDate: string): string | null {
+  const trigger = mowTriggerHeightMm(hocMm);
+  let h = requirePositive(currentHeightMm, 'invalid_height', 'current height (mm)');
+  const day0 = isoToDayNumber(fromDate);
+  if (h > trigger) return fromDate;
+  for (let i = 0; i < growthMmPerDay.length; i++) {
+    h += requireNonNegative(growthMmPerDay[i] as number, 'invalid_growth', 'daily growth (mm)');
+    if (h > trigger) return dayNumberToIso(day0 + i + 1);
+  }
+  return null;
+}
+
+const WEEK: readonly Weekday[] = ['sun', 'mon', 'tue', 'wed', 'thu', 'fri', 'sat'];
+
+function maxIntervalFrom(o: MowingOptions): number | null {
+  let max: number | null = null;
+  if (o.maxIntervalDays !== undefined) max = requirePositive(o.maxIntervalDays, 'invalid_interval', 'maximum mowing interval (days)');
+  if (o.minMowingsPerWeek !== undefined && o.minMowingsPerWeek > 0) {
+    const fromFreq = Math.max(1, Math.floor(7 / o.minMowingsPerWeek));
+    max = max === null ? fromFreq : Math.min(max, fromFreq);
+  }
+  return max;
+}
+
+/** Reel below 25 mm (1 in) HOC, rotary from 25 mm up (common practice). */
+export function mowerTypeFor(hocMm: number): 'reel' | 'rotary' {
+  return requirePositive(hocMm, 'invalid_hoc', 'HOC (mm)') < 25 ? 'reel' : 'rotary';
+}
+
+export interface MowerWarning {
+  code: 'hoc_below_range' | 'hoc_above_range' | 'kind_mismatch';
+  message: string;
+}
+
+/** Warnings when a mower cannot hold a HOC or is the wrong kind for it (common practice). */
+export function checkMowerForHoc(mower: Pick<MowerSpec, 'kind' | 'hocMinMm' | 'hocMaxMm'>, hocMm: number): MowerWarning[] {
+  requirePositive(hocMm, 'invalid_hoc', 'HOC (mm)');
+  if (mower.hocMinMm > mower.hocMaxMm) fail('invalid_mower', `mower HOC range is inverted (${mower.hocMinMm}–${mower.hocMaxMm} mm)`);
+  const out: MowerWarning[] = [];
+  if (hocMm < mower.hocMinMm) out.push({ code: 'hoc_below_range', message: `HOC ${hocMm} mm is below this mower's lowest setting (${mower.hocMinMm} mm)` });
+  if (hocMm > mower.hocMaxMm) out.push({ code: 'hoc_above_range', message: `HOC ${hocMm} mm is above this mower's highest setting (${mower.hocMaxMm} mm)` });
+  const want = mowerTypeFor(hocMm);
+  if (want !== mower.kind) {
+    out.push({
+      code: 'kind_mismatch',
+      message: want === 'reel' ? `a reel mower is usual below 25 mm (1 in); this is a ${mower.kind} mower` : `a rotary mower is usual from 25 mm (1 in) up; this is a ${mower.kind} mower`,
+    });
+  }
+  return out;
+}

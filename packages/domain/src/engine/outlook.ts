@@ -1,0 +1,322 @@
+/**
+ * Outlook: a season projection per field (mowings, labour, N, water, paint, cost) from a
+ * daily weather series, aggregation to district and department, and the change when a
+ * field moves level. Composes the other engine modules; adds no formula of its own beyond
+ * the water-stress bookkeeping documented below.
+ */
+import type { Clippings, Grass, IrrigationKind, Level, Sport } from '../vocabulary.ts';
+import { fail, requireNonNegative, requireRange, requireTmaxTmin } from './check.ts';
+import { dayOfYear, isoToDayNumber } from './dates.ts';
+import { et0Hargreaves, et0PenmanMonteith } from './fao56.ts';
+import { annualNitrogen, productForArea } from './feed.ts';
+import { growthPotential, waterModifier } from './growth.ts';
+import { hoursPerMowing } from './labour.ts';
+import { defaultTemplateFor, linePlan } from './lines.ts';
+import type { LineTemplate } from './lines.ts';
+import { mowerTypeFor, simulateMowing } from './mowing.ts';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, grassSeason, hocFor, levelStandard } from './standards.ts';
+import type { DepartmentParameters, Standards } from './standards.ts';
+import { cropEvapotranspiration, effectiveRainMm, grossIrrigationMm, netIrrigationMm, turfKc } from './water.ts';
+
+/** One day of weather. Optional fields feed FAO-56 Penman–Monteith; without them, Hargreaves. */
+export interface DailyWeather {
+  date: string;
+  tmaxC: number;
+  tminC: number;
+  rainMm: number;
+  rhMaxPct?: number;
+  rhMinPct?: number;
+  rhMeanPct?: number;
+  tdewC?: number;
+  windMs?: number;
+  windHeightM?: number;
+  sunshineH?: number;
+  solarMJ?: number;
+}
+
+/** A weather series computed once per location and shared by its fields. */
+export interface PreparedWeather {
+  startDate: string;
+  dates: string[];
+  tMeanC: Float64Array;
+  et0Mm: Float64Array;
+  rainMm: Float64Array;
+  effectiveRainMm: Float64Array;
+  gpCool: Float64Array;
+  gpWarm: Float64Array;
+  /** Days whose ET0 came from Hargreaves (temperatures only). */
+  hargreavesDays: number;
+}
+
+/**
+ * Prepares a consecutive daily series for a location: ET0 by FAO-56 Penman–Monteith when
+ * humidity, wind or radiation data exist (missing parts filled as FAO-56 chapter 3
+ * recommends), Hargreaves (FAO-56 eq. 52) when only temperatures exist; effective rain by the
+ * TexasET rule; GP for both grass seasons.
+ */
+export function prepareWeather(days: readonly DailyWeather[], site: { latDeg: number; elevationM: number; coastal?: boolean }): PreparedWeather {
+  if (days.length === 0) fail('empty_weather', 'the weather series has no days');
+  requireRange(site.latDeg, -90, 90, 'invalid_latitude', 'latitude (°)');
+  const n = days.length;
+  const w: PreparedWeather = {
+    startDate: (days[0] as DailyWeather).date,
+    dates: new Array<string>(n),
+    tMeanC: new Float64Array(n),
+    et0Mm: new Float64Array(n),
+    rainMm: new Float64Array(n),
+    effectiveRainMm: new Float64Array(n),
+    gpCool: new Float64Array(n),
+    gpWarm: new Float64Array(n),
+    hargreavesDays: 0,
+  };
+  let prevDay = Number.NaN;
+  for (let i = 0; i < n; i++) {
+    const d = days[i] as DailyWeather;
+    const dn = isoToDayNumber(d.date);
+    if (i > 0 && dn !== prevDay + 1) fail('weather_gap', `weather days must be consecutive: ${d.date} follows ${(days[i - 1] as DailyWeather).date}`);
+    prevDay = dn;
+    requireTmaxTmin(d.tmaxC, d.tminC);
+    requireNonNegative(d.rainMm, 'invalid_rain', `rain on ${d.date} (mm)`);
+    const doy = dayOfYear(d.date);
+    const hasMore = d.rhMaxPct !== undefined || d.rhMeanPct !== undefined || d.tdewC !== undefined || d.windMs !== undefined || d.sunshineH !== undefined || d.solarMJ !== undefined;
+    let et0: number;
+    if (hasMore) {
+      const input: Parameters<typeof et0PenmanMonteith>[0] = { tmaxC: d.tmaxC, tminC: d.tminC, latDeg: site.latDeg, elevationM: site.elevationM, doy, coastal: site.coastal ?? false };
+      if (d.rhMaxPct !== undefined) input.rhMaxPct = d.rhMaxPct;
+      if (d.rhMinPct !== undefined) input.rhMinPct = d.rhMinPct;
+      if (d.rhMeanPct !== undefined) input.rhMeanPct = d.rhMeanPct;
+      if (d.tdewC !== undefined) input.tdewC = d.tdewC;
+      if (d.windMs !== undefined) input.windMs = d.windMs;
+      if (d.windHeightM !== undefined) input.windHeightM = d.windHeightM;
+      if (d.sunshineH !== undefined) input.sunshineH = d.sunshineH;
+      if (d.solarMJ !== undefined) input.solarMJ = d.solarMJ;
+      et0 = et0PenmanMonteith(input).et0Mm;
+    } else {
+      et0 = et0Hargreaves(d.tmaxC, d.tminC, site.latDeg, doy);
+      w.hargreavesDays++;
+    }
+    const t = (d.tmaxC + d.tminC) / 2;
+    w.dates[i] = d.date;
+    w.tMeanC[i] = t;
+    w.et0Mm[i] = Math.max(0, et0);
+    w.rainMm[i] = d.rainMm;
+    w.effectiveRainMm[i] = effectiveRainMm(d.rainMm);
+    w.gpCool[i] = growthPotential(t, 'cool');
+    w.gpWarm[i] = growthPotential(t, 'warm');
+  }
+  return w;
+}
+
+/** What the outlook needs of a field. */
+export interface OutlookField {
+  id: string | number;
+  districtId?: string | number;
+  areaM2: number;
+  sport: Sport;
+  grass: Grass;
+  maintenanceLevel: Level;
+  hocOverrideMm?: number | null;
+  clippings: Clippings;
+  irrigation: IrrigationKind;
+  /** Field's calibrated max growth rate (mm/day at GP = 1); default from the parameters. */
+  maxGrowthMmPerDay?: number;
+  /** Line layout; default the sport's template (none for lawns and multi-use). */
+  lineTemplate?: LineTemplate | null;
+  distributionUniformity?: number;
+}
+
+export interface OutlookTotals {
+  fields: number;
+  areaM2: number;
+  mowings: number;
+  mowingHours: number;
+  lineHours: number;
+  labourHours: number;
+  nKg: number;
+  productKg: number;
+  waterM3: number;
+  paintConcentrateL: number;
+  cost: { labour: number; water: number; paint: number; fertiliser: number; total: number };
+}
+
+export interface FieldOutlook extends OutlookTotals {
+  fieldId: string | number;
+  districtId: string | number | null;
+  level: Level;
+  days: number;
+  hocMm: number;
+  mowerKind: 'reel' | 'rotary';
+  mowingsPerWeek: number;
+  overdueDays: number;
+  nGPerM2: number;
+  grossIrrigationMm: number;
+  etcMm: number;
+}
+
+/** Days of rain and ETc the water-stress modifier looks back over (department model). */
+export const WATER_STRESS_WINDOW_DAYS = 14;
+
+/**
+ * Season projection for one field over a prepared weather series.
+ * Growth: Gmax × GP × water modifier, where the water modifier is (effective rain +
+ * irrigation) ÷ ETc over the last 14 days (department model; irrigation replaces the level's
+ * share of ETc). Mowing: `simulateMowing` with the level's max interval, frequency cuts only
+ * after a tenth of HOC of growth. N: annual N pro rata to the series' days (÷ 365). Water:
+ * weekly net need ÷ DU. Paint: the level's repaint interval over the series.
+ */
+export function fieldOutlook(field: OutlookField, weather: PreparedWeather, standards: Standards = DEFAULT_STANDARDS, params: DepartmentParameters = DEFAULT_PARAMETERS): FieldOutlook {
+  requireNonNegative(field.areaM2, 'invalid_area', 'field area (m²)');
+  const season = grassSeason(field.grass);
+  const std = levelStandard(field.maintenanceLevel, standards);
+  const hocMm = hocFor(field, standards);
+  const n = weather.dates.length;
+  const kc = turfKc(season, { reduced: std.reducedKc });
+  const share = field.irrigation !== 'none' && std.irrigationShareOfEtc !== null ? std.irrigationShareOfEtc : 0;
+  const gmax = requireNonNegative(field.maxGrowthMmPerDay ?? params.maxGrowthMmPerDay[field.grass], 'invalid_growth_rate', 'maximum growth rate (mm/day)');
+  const gp = season === 'cool' ? weather.gpCool : weather.gpWarm;
+
+  const growth = new Array<number>(n);
+  const etcDaily = new Float64Array(n);
+  for (let i = 0; i < n; i++) etcDaily[i] = cropEvapotranspiration(kc, weather.et0Mm[i] as number);
+  let etcWindow = 0;
+  let rainWindow = 0;
+  let etcTotal = 0;
+  let grossTotal = 0;
+  let weekEtc = 0;
+  let weekRain = 0;
+  const du = field.distributionUniformity ?? params.irrigation.distributionUniformity;
+  for (let i = 0; i < n; i++) {
+    const etc = etcDaily[i] as number;
+    const eff = weather.effectiveRainMm[i] as number;
+    etcTotal += etc;
+    etcWindow += etc;
+    rainWindow += eff;
+    if (i >= WATER_STRESS_WINDOW_DAYS) {
+      etcWindow -= etcDaily[i - WATER_STRESS_WINDOW_DAYS] as number;
+      rainWindow -= weather.effectiveRainMm[i - WATER_STRESS_WINDOW_DAYS] as number;
+    }
+    const supply = Math.max(0, rainWindow) + share * Math.max(0, etcWindow);
+    growth[i] = gmax * (gp[i] as number) * waterModifier(supply, Math.max(0, etcWindow));
+    if (share > 0) {
+      weekEtc += etc;
+      weekRain += eff;
+      if ((i + 1) % 7 === 0 || i === n - 1) {
+        grossTotal += grossIrrigationMm(netIrrigationMm(weekEtc, weekRain, share), du);
+        weekEtc = 0;
+        weekRain = 0;
+      }
+    }
+  }
+
+  const sim = simulateMowing(hocMm, growth, hocMm, {
+    startDate: weather.startDate,
+    maxIntervalDays: std.maxMowingIntervalDays,
+    frequencyMinGrowthMm: 0.1 * hocMm,
+  });
+  const mowerKind = mowerTypeFor(hocMm);
+  const mowingHours = sim.mowings.length * hoursPerMowing(field.areaM2, params.mowers[mowerKind]);
+
+  const nYear = annualNitrogen({ grass: field.grass, level: field.maintenanceLevel, clippings: field.clippings, irrigated: share > 0 }, standards);
+  const nGPerM2 = nYear.gPerM2 * Math.min(1, n / 365);
+  const product = productForArea(nGPerM2, params.fertiliserProduct, field.areaM2, params.fertiliserBagKg, params.costs.fertiliserPerKg);
+
+  const template = std.lineRepaintDays === null ? null : field.lineTemplate === undefined ? cachedTemplate(field.sport) : field.lineTemplate;
+  const lines = template ? linePlan(template, params.lines, { days: n, repaintDays: std.lineRepaintDays }) : null;
+  const lineHours = lines ? lines.seasonHours : 0;
+  const paintConcentrateL = lines ? lines.seasonConcentrateLitres : 0;
+
+  const waterM3 = (grossTotal * field.areaM2) / 1000;
+  const labourHours = mowingHours + lineHours;
+  const c = params.costs;
+  const cost = {
+    labour: labourHours * c.labourPerHour,
+    water: waterM3 * c.waterPerM3,
+    paint: paintConcentrateL * c.paintPerLitre,
+    fertiliser: product.cost,
+    total: 0,
+  };
+  cost.total = cost.labour + cost.water + cost.paint + cost.fertiliser;
+  return {
+    fieldId: field.id,
+    districtId: field.districtId ?? null,
+    level: field.maintenanceLevel,
+    days: n,
+    hocMm,
+    mowerKind,
+    mowingsPerWeek: sim.mowingsPerWeek,
+    overdueDays: sim.overdueDates.length,
+    nGPerM2,
+    grossIrrigationMm: grossTotal,
+    etcMm: etcTotal,
+    fields: 1,
+    areaM2: field.areaM2,
+    mowings: sim.mowings.length,
+    mowingHours,
+    lineHours,
+    labourHours,
+    nKg: (nGPerM2 * field.areaM2) / 1000,
+    productKg: product.productKg,
+    waterM3,
+    paintConcentrateL,
+    cost,
+  };
+}
+
+const templateCache = new Map<Sport, LineTemplate | null>();
+/** Default templates are pure functions of the sport, so one copy serves every field. */
+function cachedTemplate(sport: Sport): LineTemplate | null {
+  if (!templateCache.has(sport)) templateCache.set(sport, defaultTemplateFor(sport));
+  return templateCache.get(sport) ?? null;
+}
+
+function emptyTotals(): OutlookTotals {
+  return { fields: 0, areaM2: 0, mowings: 0, mowingHours: 0, lineHours: 0, labourHours: 0, nKg: 0, productKg: 0, waterM3: 0, paintConcentrateL: 0, cost: { labour: 0, water: 0, paint: 0, fertiliser: 0, total: 0 } };
+}
+
+function addInto(t: OutlookTotals, r: OutlookTotals, sign = 1): void {
+  t.fields += sign * r.fields;
+  t.areaM2 += sign * r.areaM2;
+  t.mowings += sign * r.mowings;
+  t.mowingHours += sign * r.mowingHours;
+  t.lineHours += sign * r.lineHours;
+  t.labourHours += sign * r.labourHours;
+  t.nKg += sign * r.nKg;
+  t.productKg += sign * r.productKg;
+  t.waterM3 += sign * r.waterM3;
+  t.paintConcentrateL += sign * r.paintConcentrateL;
+  t.cost.labour += sign * r.cost.labour;
+  t.cost.water += sign * r.cost.water;
+  t.cost.paint += sign * r.cost.paint;
+  t.cost.fertiliser += sign * r.cost.fertiliser;
+  t.cost.total += sign * r.cost.total;
+}
+
+/** Totals per district (by `districtId`, 'none' when missing) and for the department. */
+export function aggregateOutlooks(results: ReadonlyArray<OutlookTotals & { districtId?: string | number | null }>): { byDistrict: Record<string, OutlookTotals>; department: OutlookTotals } {
+  const byDistrict: Record<string, OutlookTotals> = {};
+  const department = emptyTotals();
+  for (const r of results) {
+    const key = String(r.districtId ?? 'none');
+    const t = (byDistrict[key] ??= emptyTotals());
+    addInto(t, r);
+    addInto(department, r);
+  }
+  return { byDistrict, department };
+}
+
+/** Outlook at two levels and the change (to − from). */
+export function levelChangeDelta(
+  field: OutlookField,
+  fromLevel: Level,
+  toLevel: Level,
+  weather: PreparedWeather,
+  standards: Standards = DEFAULT_STANDARDS,
+  params: DepartmentParameters = DEFAULT_PARAMETERS,
+): { from: FieldOutlook; to: FieldOutlook; delta: OutlookTotals } {
+  const from = fieldOutlook({ ...field, maintenanceLevel: fromLevel }, weather, standards, params);
+  const to = fieldOutlook({ ...field, maintenanceLevel: toLevel }, weather, standards, params);
+  const delta = emptyTotals();
+  addInto(delta, to);
+  addInto(delta, from, -1);
+  return { from, to, delta };
+}

@@ -1,0 +1,226 @@
+/**
+ * The department's Standards (maintenance levels 1–4) and department parameters.
+ * Heights of cut follow the trade's common practice (elite soccer about 25 mm / 1 in;
+ * sports fields 25–75 mm; low-maintenance areas up to about 75–90 mm; bermudagrass
+ * 12–38 mm). Everything else here is a department setting: the defaults are this
+ * product's demo choices, not published values, and each department edits them.
+ */
+import { GRASSES, GRASS_SEASON, LEVEL_NAMES, LEVELS, SPORTS } from '../vocabulary.ts';
+import type { Grass, GrassSeason, Level, Sport } from '../vocabulary.ts';
+import { fail, requirePositive } from './check.ts';
+import { G_PER_M2_PER_LB_PER_1000FT2 } from './units.ts';
+
+/** What one maintenance level asks for. */
+export interface LevelStandard {
+  level: Level;
+  name: string;
+  /** HOC in mm per sport and grass season (cool / warm). */
+  hocMm: Record<Sport, Record<GrassSeason, number>>;
+  /** Per-grass HOC (mm) that replaces the season value for every sport (e.g. St. Augustinegrass is cut higher). */
+  hocByGrassMm: Partial<Record<Grass, number>>;
+  /** Minimum mowings per week in the growing season. */
+  minMowingsPerWeek: number;
+  /** Longest allowed interval between mowings, days. */
+  maxMowingIntervalDays: number;
+  /** Share (0–1) of the upper end of the grass's annual N range that this level receives. */
+  annualNShare: number;
+  /** Share of ETc that irrigation replaces; null: not irrigated at this level. */
+  irrigationShareOfEtc: number | null;
+  /** Use the FAO-56 Table 12 Kc reduced by 0.10 (careful water management, fast growth not wanted). */
+  reducedKc: boolean;
+  /** Days between line repaints in season; null: no lines kept. */
+  lineRepaintDays: number | null;
+  /** Days between field checks. */
+  fieldCheckDays: number;
+  /** Surface score (0–100) the level aims for. */
+  targetScore: number;
+}
+
+export type Standards = Record<Level, LevelStandard>;
+
+type HocRow = Record<Sport, Record<GrassSeason, number>>;
+const hocRow = (cool: Partial<Record<Sport, number>> & { default: number }, warm: Partial<Record<Sport, number>> & { default: number }): HocRow =>
+  Object.fromEntries(SPORTS.map((s) => [s, { cool: cool[s] ?? cool.default, warm: warm[s] ?? warm.default }])) as HocRow;
+
+/** Demo defaults of the Standards table (department settings; heights from common practice). */
+export const DEFAULT_STANDARDS: Standards = {
+  1: {
+    level: 1,
+    name: LEVEL_NAMES[1],
+    hocMm: hocRow({ default: 25, football: 32, softball: 32, field_hockey: 22, multi_use: 38, lawn: 50 }, { default: 16, football: 19, softball: 19, field_hockey: 13, multi_use: 25, lawn: 32 }),
+    hocByGrassMm: { st_augustinegrass: 64 },
+    minMowingsPerWeek: 3,
+    maxMowingIntervalDays: 3,
+    annualNShare: 1,
+    irrigationShareOfEtc: 1,
+    reducedKc: false,
+    lineRepaintDays: 7,
+    fieldCheckDays: 7,
+    targetScore: 85,
+  },
+  2: {
+    level: 2,
+    name: LEVEL_NAMES[2],
+    hocMm: hocRow({ default: 32, football: 38, softball: 38, field_hockey: 25, multi_use: 45, lawn: 63 }, { default: 19, football: 25, softball: 25, field_hockey: 16, multi_use: 32, lawn: 38 }),
+    hocByGrassMm: { st_augustinegrass: 70 },
+    minMowingsPerWeek: 2,
+    maxMowingIntervalDays: 4,
+    annualNShare: 0.85,
+    irrigationShareOfEtc: 0.8,
+    reducedKc: false,
+    lineRepaintDays: 10,
+    fieldCheckDays: 14,
+    targetScore: 75,
+  },
+  3: {
+    level: 3,
+    name: LEVEL_NAMES[3],
+    hocMm: hocRow({ default: 50, field_hockey: 38, multi_use: 63, lawn: 75 }, { default: 32, field_hockey: 25, multi_use: 38, lawn: 38 }),
+    hocByGrassMm: { st_augustinegrass: 76 },
+    minMowingsPerWeek: 1,
+    maxMowingIntervalDays: 7,
+    annualNShare: 0.65,
+    irrigationShareOfEtc: 0.6,
+    reducedKc: true,
+    lineRepaintDays: 14,
+    fieldCheckDays: 30,
+    targetScore: 65,
+  },
+  4: {
+    level: 4,
+    name: LEVEL_NAMES[4],
+    hocMm: hocRow({ default: 75, lawn: 90 }, { default: 38, lawn: 50 }),
+    hocByGrassMm: { st_augustinegrass: 89 },
+    minMowingsPerWeek: 0.5,
+    maxMowingIntervalDays: 14,
+    annualNShare: 0.3,
+    irrigationShareOfEtc: null,
+    reducedKc: true,
+    lineRepaintDays: null,
+    fieldCheckDays: 60,
+    targetScore: 50,
+  },
+};
+
+/** A mower as the engine needs it. */
+export interface MowerSpec {
+  kind: 'reel' | 'rotary';
+  /** Cutting width, m. */
+  widthM: number;
+  /** Mowing speed, km/h. */
+  speedKmh: number;
+  /** Field efficiency 0–1 (ASAE D497: mowers 75–90 %, typical 80 % — from memory). */
+  efficiency: number;
+  /** Overlap between passes, m. */
+  overlapM: number;
+  /** Time per headland turn, s. */
+  turnTimeS: number;
+  hocMinMm: number;
+  hocMaxMm: number;
+}
+
+/** Department parameters: the engine's tunable numbers. */
+export interface DepartmentParameters {
+  /**
+   * Maximum vertical growth, mm/day at GP = 1, per grass. No published source: these are
+   * department parameters, replaced per field by calibration from field checks.
+   */
+  maxGrowthMmPerDay: Record<Grass, number>;
+  /** Default mowers by kind (demo defaults). */
+  mowers: Record<'reel' | 'rotary', MowerSpec>;
+  /** Soluble-N limit per application, g N/m² (LSU AgCenter: ≤ 1 lb N/1000 ft² ≈ 4.88 g/m²). */
+  solubleNLimitGPerM2: number;
+  /** Ceiling per application with slow-release N, g N/m² (department rule, no published source). */
+  slowReleaseNCeilingGPerM2: number;
+  /** Trailer travel between sites. Road factor and speed are department settings. */
+  travel: { roadFactor: number; speedKmh: number; loadUnloadMin: number };
+  /** Invented demo costs — replace with the department's own prices. */
+  costs: { currency: string; waterPerM3: number; labourPerHour: number; paintPerLitre: number; fertiliserPerKg: number };
+  /**
+   * Safe surface hardness for the 2.25 kg portable tester (ASTM F1702), Gmax. No published
+   * acceptance range for this tester was found: a department setting.
+   */
+  hardnessSafeRangeG: { min: number; max: number };
+  /** Irrigation system defaults (department settings). */
+  irrigation: { distributionUniformity: number; precipRateMmPerH: number; maxRunMinPerCycle: number };
+  /** Line marking (trade press: about 200 linear ft of 4 in line per mixed gallon; 2 passes common practice). */
+  lines: { coverageM2PerMixedL: number; dilutionWaterPerPaint: number; passes: number; markerSpeedKmh: number; setupMin: number };
+  /**
+   * Soil-test sufficiency (department parameter, not a published value): below the level,
+   * apply the maintenance rate of P2O5 / K2O in g/m² per year.
+   */
+  soilTest: { pSufficientPpm: number; kSufficientPpm: number; p2o5RateGPerM2: number; k2oRateGPerM2: number };
+  /** Fertiliser bag size, kg (demo default). */
+  fertiliserBagKg: number;
+  /** The department's usual N product (demo default): analysis in % and slow-release share of its N. */
+  fertiliserProduct: { n: number; p: number; k: number; slowReleaseShare: number };
+  /** Hours a crew works per week (demo default). */
+  crewHoursPerWeek: number;
+}
+
+/** Demo defaults of the department parameters; every cost is invented. */
+export const DEFAULT_PARAMETERS: DepartmentParameters = {
+  maxGrowthMmPerDay: {
+    kentucky_bluegrass: 4,
+    perennial_ryegrass: 5,
+    tall_fescue: 5,
+    fine_fescue: 3,
+    bermudagrass: 6,
+    zoysiagrass: 3,
+    st_augustinegrass: 4,
+  },
+  mowers: {
+    reel: { kind: 'reel', widthM: 2.8, speedKmh: 6, efficiency: 0.8, overlapM: 0.1, turnTimeS: 15, hocMinMm: 6, hocMaxMm: 38 },
+    rotary: { kind: 'rotary', widthM: 1.83, speedKmh: 8, efficiency: 0.8, overlapM: 0.1, turnTimeS: 10, hocMinMm: 25, hocMaxMm: 125 },
+  },
+  solubleNLimitGPerM2: G_PER_M2_PER_LB_PER_1000FT2,
+  slowReleaseNCeilingGPerM2: 2 * G_PER_M2_PER_LB_PER_1000FT2,
+  travel: { roadFactor: 1.3, speedKmh: 35, loadUnloadMin: 15 },
+  costs: { currency: 'USD', waterPerM3: 1.2, labourPerHour: 32, paintPerLitre: 4.5, fertiliserPerKg: 1.6 },
+  hardnessSafeRangeG: { min: 20, max: 100 },
+  irrigation: { distributionUniformity: 0.7, precipRateMmPerH: 12, maxRunMinPerCycle: 20 },
+  lines: {
+    // 200 ft × 4 in = 66.7 ft² per US gallon of mixed paint → 1.64 m² per litre.
+    coverageM2PerMixedL: (200 * 0.3048 * 0.1016) / 3.785411784,
+    dilutionWaterPerPaint: 1,
+    passes: 2,
+    markerSpeedKmh: 3,
+    setupMin: 20,
+  },
+  soilTest: { pSufficientPpm: 25, kSufficientPpm: 120, p2o5RateGPerM2: 2.5, k2oRateGPerM2: 5 },
+  fertiliserBagKg: 22.7,
+  fertiliserProduct: { n: 28, p: 0, k: 6, slowReleaseShare: 0.5 },
+  crewHoursPerWeek: 40,
+};
+
+/** What `hocFor` needs of a field. */
+export interface HocFieldInput {
+  sport: Sport;
+  grass: Grass;
+  maintenanceLevel: Level;
+  /** Field override in mm; wins over the Standards when set. */
+  hocOverrideMm?: number | null;
+}
+
+/** HOC in mm for a field: the override, else the grass's HOC at the level, else the sport × grass season value. */
+export function hocFor(field: HocFieldInput, standards: Standards = DEFAULT_STANDARDS): number {
+  if (field.hocOverrideMm !== null && field.hocOverrideMm !== undefined) {
+    return requirePositive(field.hocOverrideMm, 'invalid_hoc', 'HOC override (mm)');
+  }
+  const std = levelStandard(field.maintenanceLevel, standards);
+  const season = grassSeason(field.grass);
+  if (!(SPORTS as readonly string[]).includes(field.sport)) fail('unknown_sport', `unknown sport ${JSON.stringify(field.sport)}`);
+  return std.hocByGrassMm[field.grass] ?? std.hocMm[field.sport][season];
+}
+
+/** The Standards row of a level; throws `engine/unknown_level`. */
+export function levelStandard(level: Level, standards: Standards = DEFAULT_STANDARDS): LevelStandard {
+  if (!(LEVELS as readonly number[]).includes(level)) fail('unknown_level', `maintenance level must be 1–4 (got ${String(level)})`);
+  return standards[level];
+}
+
+/** Cool or warm season of a grass; throws `engine/unknown_grass`. */
+export function grassSeason(grass: Grass): GrassSeason {
+  if (!(GRASSES as readonly string[]).includes(grass)) fail('unknown_grass', `unknown grass ${JSON.stringify(grass)}`, { grass });
+  return GRASS_SEASON[grass];
+}

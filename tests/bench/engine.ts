@@ -1,0 +1,145 @@
+/**
+ * Engine benchmark: a season outlook for 3,000 synthetic fields over 365 days of synthetic
+ * weather, then week plans (weekly labour + routing) for 40 crews. All data is invented and
+ * generated from a fixed seed. Run: node --import tsx tests/bench/engine.ts
+ */
+import { performance } from 'node:perf_hooks';
+import { GRASSES, SPORTS } from '@swardwise/domain';
+import type { Grass, IrrigationKind, Level, Sport } from '@swardwise/domain';
+import * as e from '@swardwise/domain/engine';
+
+const FIELDS = 3000;
+const FIELDS_PER_SITE = 10;
+const CREWS = 40;
+const DISTRICTS = 3;
+const RUNS = 5;
+
+/** Small deterministic PRNG (mulberry32). */
+function rng(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+const rand = rng(20260101);
+const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)] as T;
+
+interface Site {
+  id: number;
+  districtId: number;
+  lat: number;
+  lng: number;
+  weather: e.DailyWeather[];
+}
+
+function weatherFor(lat: number): e.DailyWeather[] {
+  const out: e.DailyWeather[] = [];
+  const shift = (lat - 37) * -0.8;
+  for (let i = 0; i < 365; i++) {
+    const mean = 13 + shift - 11 * Math.cos((2 * Math.PI * (i - 15)) / 365) + (rand() - 0.5) * 4;
+    const range = 8 + rand() * 6;
+    const wet = rand() < 0.25;
+    const doy = i + 1;
+    const daylight = e.daylightHours(e.sunsetHourAngle(e.degToRad(lat), e.solarDeclination(doy)));
+    out.push({
+      date: e.addDaysIso('2025-01-01', i),
+      tmaxC: mean + range / 2,
+      tminC: mean - range / 2,
+      rainMm: wet ? rand() * 25 : 0,
+      rhMaxPct: wet ? 95 : 75 + rand() * 15,
+      rhMinPct: wet ? 65 : 30 + rand() * 25,
+      windMs: 1 + rand() * 3,
+      sunshineH: daylight * (wet ? rand() * 0.3 : 0.5 + rand() * 0.45),
+    });
+  }
+  return out;
+}
+
+const sites: Site[] = [];
+for (let s = 0; s < FIELDS / FIELDS_PER_SITE; s++) {
+  const districtId = (s % DISTRICTS) + 1;
+  const lat = 36.9 + rand() * 0.3;
+  sites.push({ id: s + 1, districtId, lat, lng: -89.1 + rand() * 0.3, weather: weatherFor(lat) });
+}
+
+const fields: Array<e.OutlookField & { siteId: number }> = [];
+for (let f = 0; f < FIELDS; f++) {
+  const site = sites[Math.floor(f / FIELDS_PER_SITE)] as Site;
+  fields.push({
+    id: f + 1,
+    siteId: site.id,
+    districtId: site.districtId,
+    areaM2: 3000 + rand() * 9000,
+    sport: pick(SPORTS) as Sport,
+    grass: pick(GRASSES) as Grass,
+    maintenanceLevel: pick([1, 2, 3, 4] as const) as Level,
+    clippings: rand() < 0.7 ? 'returned' : 'removed',
+    irrigation: pick(['none', 'quick_coupler', 'automatic'] as const) as IrrigationKind,
+  });
+}
+
+const median = (xs: number[]) => {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)] as number;
+};
+const mb = (bytes: number) => (bytes / 1024 / 1024).toFixed(1);
+
+function seasonOutlook(): { outlooks: e.FieldOutlook[]; prepMs: number } {
+  const t0 = performance.now();
+  const prepared = new Map<number, e.PreparedWeather>();
+  for (const s of sites) prepared.set(s.id, e.prepareWeather(s.weather, { latDeg: s.lat, elevationM: 150 }));
+  const prepMs = performance.now() - t0;
+  const outlooks = fields.map((f) => e.fieldOutlook(f, prepared.get(f.siteId) as e.PreparedWeather));
+  return { outlooks, prepMs };
+}
+
+function weekPlans(outlooks: readonly e.FieldOutlook[]): e.CrewWeekPlan[] {
+  const siteById = new Map(sites.map((s) => [s.id, s]));
+  const jobsByCrew: e.PlanJob[][] = Array.from({ length: CREWS }, () => []);
+  outlooks.forEach((o, i) => {
+    const f = fields[i]!;
+    const site = siteById.get(f.siteId)!;
+    const mower = e.DEFAULT_PARAMETERS.mowers[o.mowerKind];
+    // A mid-season week: the field's average mowings per week, at least one.
+    const cuts = Math.max(1, Math.round(o.mowingsPerWeek));
+    jobsByCrew[f.siteId % CREWS]!.push({ id: f.id, siteId: site.id, site, hours: cuts * e.hoursPerMowing(f.areaM2, mower) });
+  });
+  return jobsByCrew.map((jobs, c) =>
+    e.planCrewWeek({ id: c + 1, yard: { lat: 37.05, lng: -88.95 }, days: ['mon', 'tue', 'wed', 'thu', 'fri'], availableHours: 4 * e.DEFAULT_PARAMETERS.crewHoursPerWeek }, jobs, e.DEFAULT_PARAMETERS.travel),
+  );
+}
+
+const outlookMs: number[] = [];
+const prepMs: number[] = [];
+const planMs: number[] = [];
+let lastOutlooks: e.FieldOutlook[] = [];
+let lastPlans: e.CrewWeekPlan[] = [];
+(globalThis as { gc?: () => void }).gc?.();
+const mem0 = process.memoryUsage();
+for (let r = 0; r < RUNS; r++) {
+  const t0 = performance.now();
+  const { outlooks, prepMs: p } = seasonOutlook();
+  const t1 = performance.now();
+  const plans = weekPlans(outlooks);
+  const t2 = performance.now();
+  outlookMs.push(t1 - t0);
+  prepMs.push(p);
+  planMs.push(t2 - t1);
+  lastOutlooks = outlooks;
+  lastPlans = plans;
+}
+const mem1 = process.memoryUsage();
+
+const agg = e.aggregateOutlooks(lastOutlooks);
+const overloaded = lastPlans.filter((p) => p.load.overloaded).length;
+const stops = lastPlans.reduce((s, p) => s + p.days.reduce((t, d) => t + d.siteOrder.length, 0), 0);
+console.log(`engine bench: ${FIELDS} fields, ${sites.length} sites with their own 365-day weather, ${CREWS} crews; median of ${RUNS} runs`);
+console.log(`  season outlook (incl. weather prep): ${median(outlookMs).toFixed(0)} ms  (weather prep ${median(prepMs).toFixed(0)} ms, ${sites.length * 365} FAO-56 PM days)`);
+console.log(`  week plans + routing, 40 crews:      ${median(planMs).toFixed(1)} ms  (${stops} site visits routed, ${overloaded} crews overloaded)`);
+console.log(`  memory: heapUsed ${mb(mem0.heapUsed)} → ${mb(mem1.heapUsed)} MB (Δ ${mb(mem1.heapUsed - mem0.heapUsed)}), rss ${mb(mem0.rss)} → ${mb(mem1.rss)} MB (Δ ${mb(mem1.rss - mem0.rss)})`);
+console.log(`  department: ${agg.department.mowings} mowings, ${agg.department.labourHours.toFixed(0)} h, ${agg.department.nKg.toFixed(0)} kg N, ${agg.department.waterM3.toFixed(0)} m³ water, cost ${agg.department.cost.total.toFixed(0)} (invented demo prices)`);

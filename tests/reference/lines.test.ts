@@ -1,0 +1,140 @@
+/** Field dimension reference checks; each value names its source or label. */
+import { describe, expect, test } from 'vitest';
+import * as e from '@swardwise/domain/engine';
+
+const byLabel = (t: e.LineTemplate, label: string) => t.segments.filter((s) => s.label === label);
+
+describe('association football (IFAB Laws of the Game, Law 1)', () => {
+  const t = e.soccerTemplate(105, 68);
+
+  test('should total 716.9 m for 105 × 68 (derived: 2L + 3W + 302.94 m)', () => {
+    expect(e.totalLineLengthM(t)).toBeCloseTo(716.9, 1);
+    expect(e.totalLineLengthM(t)).toBeCloseTo(2 * 105 + 3 * 68 + 302.94, 1);
+  });
+
+  test('should draw the centre circle, penalty arc and corner arcs with the Law 1 radii (9.15 m, 9.15 m, 1 m)', () => {
+    const radii = (label: string) => byLabel(t, label).map((s) => (s.kind === 'arc' ? s.radiusM : Number.NaN));
+    expect(radii('centre circle')).toEqual([9.15]);
+    expect(radii('penalty arc')).toEqual([9.15, 9.15]);
+    expect(radii('corner arc')).toEqual([1, 1, 1, 1]);
+  });
+
+  test('should size the goal area (5.5 m from each post, 5.5 m deep) and penalty area (16.5 m, 16.5 m) round a 7.32 m goal', () => {
+    const front = (label: string) => byLabel(t, label).filter((s) => s.kind === 'line' && s.from[0] === s.to[0] && s.from[0] !== 0 && s.from[0] !== 105);
+    const goalFront = front('goal area')[0]!;
+    expect(goalFront.kind === 'line' && goalFront.from[0]).toBeCloseTo(5.5, 12);
+    expect(e.segmentLengthM(goalFront)).toBeCloseTo(7.32 + 2 * 5.5, 12);
+    const penFront = front('penalty area')[0]!;
+    expect(penFront.kind === 'line' && penFront.from[0]).toBeCloseTo(16.5, 12);
+    expect(e.segmentLengthM(penFront)).toBeCloseTo(7.32 + 2 * 16.5, 12);
+    const arc = byLabel(t, 'penalty arc')[0]!;
+    expect(arc.kind === 'arc' && arc.center[0]).toBe(11); // penalty mark 11 m
+  });
+
+  test('should accept touchlines 90–120 m and goal lines 45–90 m, lines ≤ 12 cm', () => {
+    expect(() => e.soccerTemplate(90, 45)).not.toThrow();
+    expect(() => e.soccerTemplate(120, 90 - 1)).not.toThrow();
+    expect(() => e.soccerTemplate(89, 60)).toThrow();
+    expect(() => e.soccerTemplate(121, 60)).toThrow();
+    expect(() => e.soccerTemplate(100, 44)).toThrow();
+    expect(() => e.soccerTemplate(105, 68, 0.13)).toThrow();
+  });
+
+  test('should hold international matches to 100–110 × 64–75 m', () => {
+    expect(() => e.soccerTemplate(105, 68, 0.12, { international: true })).not.toThrow();
+    expect(() => e.soccerTemplate(100, 64, 0.12, { international: true })).not.toThrow();
+    expect(() => e.soccerTemplate(111, 70, 0.12, { international: true })).toThrow();
+    expect(() => e.soccerTemplate(105, 63, 0.12, { international: true })).toThrow();
+    expect(() => e.soccerTemplate(95, 60)).not.toThrow();
+  });
+
+  test('should label small-sided formats as common practice / from memory', () => {
+    expect(e.smallSidedSoccerTemplate('7v7').source).toMatch(/common practice|from memory/);
+    expect(e.smallSidedSoccerTemplate('9v9').lengthM).toBeGreaterThan(e.smallSidedSoccerTemplate('7v7').lengthM);
+  });
+});
+
+describe('American football (NFHS, secondary sources)', () => {
+  const t = e.footballTemplate();
+
+  test('should be 360 × 160 ft with 4 in lines', () => {
+    expect(e.mToFt(t.lengthM)).toBeCloseTo(360, 9);
+    expect(e.mToFt(t.widthM)).toBeCloseTo(160, 9);
+    expect(e.mToFt(t.lineWidthM) * 12).toBeCloseTo(4, 9);
+  });
+
+  test('should draw yard lines every 5 yd goal line to goal line and hash marks 53 ft 4 in from each sideline', () => {
+    expect(byLabel(t, 'goal line')).toHaveLength(2);
+    expect(byLabel(t, 'yard line')).toHaveLength(19);
+    const hashes = byLabel(t, 'hash mark');
+    expect(hashes).toHaveLength(160);
+    const ys = new Set(hashes.map((s) => (s.kind === 'line' ? Math.round(e.mToFt(s.from[1]) * 1000) / 1000 : 0)));
+    expect([...ys].sort((a, b) => a - b)).toEqual([53.333, 106.667]);
+  });
+
+  test('should move the hash marks to 60 ft for NCAA', () => {
+    const ncaa = e.footballTemplate(60);
+    const h = byLabel(ncaa, 'hash mark')[0]!;
+    expect(h.kind === 'line' && e.mToFt(h.from[1])).toBeCloseTo(60, 9);
+  });
+});
+
+describe('baseball (Official Baseball Rules 2.01) and softball (from memory)', () => {
+  test('should have a 127 ft 3⅜ in diagonal on a 90 ft square', () => {
+    // Geometry of the 90 ft square the foul lines are drawn along.
+    expect(90 * Math.SQRT2).toBeCloseTo(127 + 3.375 / 12, 2);
+  });
+
+  test('should draw foul lines of at least 320 ft by default (320 ft or more preferred)', () => {
+    const t = e.baseballTemplate();
+    const foul = t.segments.filter((s) => s.label.includes('foul line'));
+    expect(foul).toHaveLength(2);
+    for (const s of foul) expect(e.mToFt(e.segmentLengthM(s))).toBeGreaterThanOrEqual(320);
+  });
+
+  test('should label softball as from memory', () => {
+    expect(e.softballTemplate().source).toBe('from memory');
+  });
+});
+
+describe('field hockey (FIH)', () => {
+  const t = e.fieldHockeyTemplate();
+
+  test('should be 91.40 × 55.00 m with 75 mm lines and 22.90 m lines', () => {
+    expect(t.lengthM).toBe(91.4);
+    expect(t.widthM).toBe(55);
+    expect(t.lineWidthM).toBe(0.075);
+    const xs = byLabel(t, '23 m line').map((s) => (s.kind === 'line' ? s.from[0] : 0));
+    expect(xs[0]).toBeCloseTo(22.9, 12);
+    expect(xs[1]).toBeCloseTo(91.4 - 22.9, 12);
+  });
+
+  test('should draw the shooting circle with r 14.63 m', () => {
+    const arcs = byLabel(t, 'shooting circle').filter((s) => s.kind === 'arc');
+    expect(arcs).toHaveLength(4);
+    for (const a of arcs) expect(a.kind === 'arc' && a.radiusM).toBe(14.63);
+  });
+});
+
+describe("men's lacrosse (from memory)", () => {
+  test('should be 110 × 60 yd', () => {
+    const t = e.lacrosseTemplate();
+    expect(e.mToFt(t.lengthM) / 3).toBeCloseTo(110, 9);
+    expect(e.mToFt(t.widthM) / 3).toBeCloseTo(60, 9);
+    expect(t.source).toBe('from memory');
+  });
+});
+
+describe('line paint (trade press, common practice)', () => {
+  test('should cover about 200 linear ft of 4 in line per mixed gallon in one pass (trade press)', () => {
+    const s = { ...e.DEFAULT_PARAMETERS.lines, passes: 1 };
+    const p = e.paintNeed(e.ftToM(200), e.ftToM(4 / 12), s);
+    expect(e.litresToUsGallons(p.mixedLitres)).toBeCloseTo(1, 9);
+  });
+
+  test('should default to a dilution within 1:1 to 4:1 and two passes (common practice)', () => {
+    expect(e.DEFAULT_PARAMETERS.lines.dilutionWaterPerPaint).toBeGreaterThanOrEqual(1);
+    expect(e.DEFAULT_PARAMETERS.lines.dilutionWaterPerPaint).toBeLessThanOrEqual(4);
+    expect(e.DEFAULT_PARAMETERS.lines.passes).toBe(2);
+  });
+});

@@ -1,0 +1,78 @@
+/**
+ * Facts of the trade (common practice, no single source) and the surface-hardness note
+ * (ASTM F1702 vs F1936; no published acceptance range for the 2.25 kg tester).
+ */
+import { describe, expect, test } from 'vitest';
+import { LEVELS } from '@swardwise/domain';
+import * as e from '@swardwise/domain/engine';
+
+describe('one-third rule (common practice)', () => {
+  test('should mow a 2 in HOC before 3 in', () => {
+    expect(e.mmToIn(e.mowTriggerHeightMm(e.inToMm(2)))).toBeCloseTo(3, 12);
+  });
+
+  test('should flag a cut removing more than a third', () => {
+    expect(e.checkCut(e.inToMm(3), e.inToMm(2)).scalpingRisk).toBe(false);
+    expect(e.checkCut(e.inToMm(3.2), e.inToMm(2)).scalpingRisk).toBe(true);
+  });
+});
+
+describe('heights of cut (common practice)', () => {
+  test('should cut elite soccer at about 1 in', () => {
+    expect(e.mmToIn(e.hocFor({ sport: 'soccer', grass: 'perennial_ryegrass', maintenanceLevel: 1 }))).toBeCloseTo(1, 1);
+  });
+
+  test('should keep cool-season sports fields within 1–3 in and bermudagrass within 0.5–1.5 in', () => {
+    for (const level of LEVELS) {
+      for (const sport of ['soccer', 'football', 'lacrosse', 'baseball', 'softball'] as const) {
+        const cool = e.mmToIn(e.hocFor({ sport, grass: 'kentucky_bluegrass', maintenanceLevel: level }));
+        expect(cool).toBeGreaterThanOrEqual(1 - 0.02);
+        expect(cool).toBeLessThanOrEqual(3 + 0.02);
+        const bermuda = e.mmToIn(e.hocFor({ sport, grass: 'bermudagrass', maintenanceLevel: level }));
+        expect(bermuda).toBeGreaterThanOrEqual(0.5 - 0.02);
+        expect(bermuda).toBeLessThanOrEqual(1.5 + 0.02);
+      }
+    }
+  });
+
+  test('should keep low-maintenance lawns at most about 3.5 in (up to about 75–90 mm)', () => {
+    expect(e.hocFor({ sport: 'lawn', grass: 'tall_fescue', maintenanceLevel: 4 })).toBeLessThanOrEqual(90);
+  });
+});
+
+describe('mower type (common practice)', () => {
+  test('should use reel mowers below about 1 in and rotary above', () => {
+    expect(e.mowerTypeFor(e.inToMm(0.75))).toBe('reel');
+    expect(e.mowerTypeFor(e.inToMm(1))).toBe('rotary');
+    expect(e.mowerTypeFor(e.inToMm(2.5))).toBe('rotary');
+  });
+});
+
+describe('stripes (common practice)', () => {
+  test('should run side-to-side stripes across the field so officials can read lines', () => {
+    const plan = e.stripePassPlan(105, 68, e.DEFAULT_PARAMETERS.mowers.rotary, 'side_to_side');
+    expect(plan.passLengthsM).toEqual([68]);
+    expect(e.stripePassPlan(105, 68, e.DEFAULT_PARAMETERS.mowers.rotary, 'criss_cross').passLengthsM).toEqual([105, 68]);
+  });
+});
+
+describe('surface hardness (department setting)', () => {
+  test('should take the safe range from the department parameters, not from a published range for the 2.25 kg tester', () => {
+    const check = { turfCoverPct: 90, weedsPct: 0, bareWornPct: 0, heightMm: 30, hocMm: 25, evenness: 4, hardnessG: 110 };
+    expect(e.surfaceScore(check, { min: 20, max: 100 }).flags).toContain('close_field_caution');
+    expect(e.surfaceScore(check, { min: 20, max: 120 }).flags).not.toContain('close_field_caution');
+    expect(e.CAUTIONS.hardness).toMatch(/department setting/);
+  });
+});
+
+describe('cautions', () => {
+  test('should defer to the label, local codes and licensed practice', () => {
+    expect(e.CAUTIONS.feed).toMatch(/label/);
+    expect(e.CAUTIONS.feed).toMatch(/licensed/);
+    expect(e.CAUTIONS.pesticide).toMatch(/licensed applicator/);
+    expect(e.CAUTIONS.water).toMatch(/local law/);
+    expect(e.CAUTIONS.mowing).toMatch(/slopes/);
+    expect(e.CAUTIONS.lightning).toMatch(/thunder/);
+    expect(e.CAUTIONS.lines).toMatch(/white base coat/);
+  });
+});
