@@ -2,9 +2,90 @@
  * Field outline geometry: geodesic area and the bearing of a field's long axis.
  */
 import turfArea from '@turf/area';
+import { DomainError } from './errors.ts';
 import type { Polygon } from './schemas/common.ts';
 
 /** Area of a GeoJSON polygon in square metres (geodesic, by @turf/area). */
 export function polygonAreaM2(polygon: Polygon): number {
   return turfArea({ type: 'Feature', properties: {}, geometry: polygon as GeoJSON.Polygon });
+}
+
+type XY = [number, number];
+
+/** The outer ring in local metres (x east, y north) around its mean point; fine at field scale. */
+function localMetres(polygon: Polygon): XY[] {
+  const ring = polygon.coordinates[0];
+  if (!ring || ring.length < 4) throw new DomainError('geometry/invalid_polygon', 'A field outline needs at least three corners');
+  const pts = ring.slice(0, -1);
+  const lat0 = pts.reduce((s, p) => s + p[1], 0) / pts.length;
+  const lng0 = pts.reduce((s, p) => s + p[0], 0) / pts.length;
+  const phi = (lat0 * Math.PI) / 180;
+  const mLat = 111_132.92 - 559.82 * Math.cos(2 * phi) + 1.175 * Math.cos(4 * phi);
+  const mLng = 111_412.84 * Math.cos(phi) - 93.5 * Math.cos(3 * phi);
+  return pts.map((p) => [(p[0] - lng0) * mLng, (p[1] - lat0) * mLat]);
+}
+
+function convexHull(points: XY[]): XY[] {
+  const pts = [...points].sort((a, b) => a[0] - b[0] || a[1] - b[1]);
+  if (pts.length < 3) return pts;
+  const cross = (o: XY, a: XY, b: XY) => (a[0] - o[0]) * (b[1] - o[1]) - (a[1] - o[1]) * (b[0] - o[0]);
+  const lower: XY[] = [];
+  for (const p of pts) {
+    while (lower.length >= 2 && cross(lower[lower.length - 2]!, lower[lower.length - 1]!, p) <= 0) lower.pop();
+    lower.push(p);
+  }
+  const upper: XY[] = [];
+  for (const p of pts.reverse()) {
+    while (upper.length >= 2 && cross(upper[upper.length - 2]!, upper[upper.length - 1]!, p) <= 0) upper.pop();
+    upper.push(p);
+  }
+  return lower.slice(0, -1).concat(upper.slice(0, -1));
+}
+
+export interface LongAxis {
+  /** Bearing of the long axis in degrees from true north, 0 ≤ bearing < 180. */
+  bearingDeg: number;
+  /** Sides of the smallest enclosing rectangle, metres. */
+  lengthM: number;
+  widthM: number;
+  /**
+   * True when the long axis runs closer to east–west than to north–south: the low sun is
+   * then in players' eyes at one end (common practice prefers north–south).
+   */
+  eastWest: boolean;
+}
+
+/**
+ * The long axis of a field outline, from the minimum-area enclosing rectangle of its convex
+ * hull (rotating the hull onto each edge in turn).
+ */
+export function longAxis(polygon: Polygon): LongAxis {
+  const hull = convexHull(localMetres(polygon));
+  if (hull.length < 3) throw new DomainError('geometry/invalid_polygon', 'A field outline needs three corners that are not on one line');
+  let best = { area: Infinity, angle: 0, w: 0, h: 0 };
+  for (let i = 0; i < hull.length; i += 1) {
+    const a = hull[i]!;
+    const b = hull[(i + 1) % hull.length]!;
+    const angle = Math.atan2(b[1] - a[1], b[0] - a[0]);
+    const c = Math.cos(angle);
+    const s = Math.sin(angle);
+    let minX = Infinity, maxX = -Infinity, minY = Infinity, maxY = -Infinity;
+    for (const p of hull) {
+      const x = p[0] * c + p[1] * s;
+      const y = -p[0] * s + p[1] * c;
+      minX = Math.min(minX, x); maxX = Math.max(maxX, x);
+      minY = Math.min(minY, y); maxY = Math.max(maxY, y);
+    }
+    const w = maxX - minX;
+    const h = maxY - minY;
+    if (w * h < best.area - 1e-9) best = { area: w * h, angle, w, h };
+  }
+  // The long side runs along the edge direction when w ≥ h, else across it.
+  const axisAngle = best.w >= best.h ? best.angle : best.angle + Math.PI / 2;
+  // Math angle (from east, counter-clockwise) → compass bearing (from north, clockwise), folded to [0, 180).
+  let bearing = (90 - (axisAngle * 180) / Math.PI) % 180;
+  if (bearing < 0) bearing += 180;
+  if (bearing >= 180 - 1e-9) bearing = 0;
+  const fromNorth = Math.min(bearing, 180 - bearing);
+  return { bearingDeg: bearing, lengthM: Math.max(best.w, best.h), widthM: Math.min(best.w, best.h), eastWest: fromNorth > 45 };
 }

@@ -1,6 +1,6 @@
 /** Playing surfaces and lawns, each with its outline and maintenance level. */
 import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
-import { AppError, polygonAreaM2, type CreateFieldInput, type UpdateFieldInput } from '@swardwise/domain';
+import { AppError, longAxis, polygonAreaM2, type CreateFieldInput, type Polygon, type UpdateFieldInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { districts, fields, sites } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
@@ -25,6 +25,8 @@ const listColumns = {
   statusNote: fields.statusNote,
   weeklyUseHours: fields.weeklyUseHours,
   areaM2: fields.areaM2,
+  longAxisDeg: fields.longAxisDeg,
+  lastMowedOn: fields.lastMowedOn,
   version: fields.version,
   updatedAt: fields.updatedAt,
 };
@@ -35,6 +37,11 @@ function selectFields(db: Ctx['db']) {
     .from(fields)
     .innerJoin(sites, eq(sites.id, fields.siteId))
     .innerJoin(districts, eq(districts.id, sites.districtId));
+}
+
+/** Area and long axis follow the outline on every write. */
+export function outlineFacts(geometry: Polygon) {
+  return { areaM2: polygonAreaM2(geometry), longAxisDeg: longAxis(geometry).bearingDeg };
 }
 
 async function getFieldRow(db: Ctx['db'], id: number) {
@@ -78,7 +85,7 @@ export async function createField(ctx: Ctx, input: CreateFieldInput) {
     authorize(ctx, 'create', 'Field', { siteId: site.id, districtId: site.districtId });
     const [created] = await tx
       .insert(fields)
-      .values({ ...input, areaM2: polygonAreaM2(input.geometry) })
+      .values({ ...input, ...outlineFacts(input.geometry) })
       .returning({ id: fields.id });
     const row = (await getFieldRow(tx, created!.id))!;
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field', entityId: row.id, districtId: row.districtId, before: null, after: row });
@@ -100,7 +107,7 @@ export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput)
       .update(fields)
       .set({
         ...changes,
-        ...(changes.geometry ? { areaM2: polygonAreaM2(changes.geometry) } : {}),
+        ...(changes.geometry ? outlineFacts(changes.geometry) : {}),
         version: sql`${fields.version} + 1`,
         updatedAt: new Date(),
       })

@@ -1,6 +1,6 @@
 /** Districts, sites and fields: the places the department keeps, which change together. */
 import { sql } from 'drizzle-orm';
-import { check, doublePrecision, index, integer, jsonb, pgTable, real, smallint, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { check, date, doublePrecision, index, integer, jsonb, pgTable, real, smallint, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
 import type {
   Clippings,
   FieldStatus,
@@ -75,6 +75,10 @@ export const fields = pgTable(
     geometry: jsonb('geometry').$type<Polygon>().notNull(),
     /** Geodesic area of `geometry`, kept in step with it by the service on every write. */
     areaM2: doublePrecision('area_m2').notNull(),
+    /** Bearing of the long axis, 0–180° from north, kept in step with `geometry`. */
+    longAxisDeg: real('long_axis_deg'),
+    /** Date of the last mowing done (from work records). */
+    lastMowedOn: date('last_mowed_on', { mode: 'string' }),
     version: integer('version').notNull().default(1),
     ...timestamps,
   },

@@ -1,3 +1,5 @@
 export * from './city.ts';
 export * from './people.ts';
 export * from './records.ts';
+export * from './weather.ts';
+export * from './standards.ts';

@@ -3,11 +3,13 @@
  * again changes nothing (a marker row in `settings` records that it ran).
  */
 import { eq } from 'drizzle-orm';
-import { polygonAreaM2 } from '@swardwise/domain';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, hocFor, surfaceScore, type Level } from '@swardwise/domain';
 import type { Db } from '../client.ts';
-import { crews, districts, fields, settings, sites, users, userSites } from '../schema/index.ts';
+import { crews, districts, fieldChecks, fields, settings, sites, standards, users, userSites, weatherDays, weatherStations } from '../schema/index.ts';
+import { outlineFacts } from '../../services/fields.ts';
 import { hashPassword } from '../../services/users.ts';
 import { buildDemoCity } from './demo-city.ts';
+import { demoFieldHistory } from './demo-history.ts';
 
 const MARKER = 'demo_city';
 
@@ -17,6 +19,8 @@ export interface SeedSummary {
   fields: number;
   crews: number;
   users: number;
+  weatherDays: number;
+  fieldChecks: number;
 }
 
 /** Returns what was inserted, or null when the demo city (or any data) is already there. */
@@ -58,8 +62,12 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
       .returning({ id: sites.id });
     city.sites.forEach((s, i) => siteIds.set(s.key, siteRows[i]!.id));
 
-    await tx.insert(fields).values(
-      city.fields.map((f) => ({
+    // The Standards the department starts from; the head edits them in the portal.
+    await tx.insert(standards).values(LEVELS.map((level) => ({ level, data: DEFAULT_STANDARDS[level] })));
+
+    const history = demoFieldHistory(city);
+    const fieldRows = await tx.insert(fields).values(
+      city.fields.map((f, i) => ({
         siteId: siteIds.get(f.siteKey)!,
         name: f.name,
         sport: f.sport,
@@ -73,9 +81,60 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
         statusNote: f.statusNote,
         weeklyUseHours: f.weeklyUseHours,
         geometry: f.geometry,
-        areaM2: polygonAreaM2(f.geometry),
+        ...outlineFacts(f.geometry),
+        lastMowedOn: history[i]!.lastMowedOn,
       })),
+    ).returning({ id: fields.id });
+
+    // Invented field checks, scored by the engine as a real check would be.
+    const checks = city.fields.flatMap((f, i) =>
+      history[i]!.checks.map((c) => {
+        const hocMm = hocFor({ ...f, maintenanceLevel: f.maintenanceLevel as Level }, DEFAULT_STANDARDS);
+        const scored = surfaceScore(
+          { turfCoverPct: c.turfCoverPct, weedsPct: c.weedsPct, bareWornPct: c.barePct, heightMm: c.heightRatio * hocMm, hocMm, hardnessG: c.gmax, evenness: c.evenness },
+          DEFAULT_PARAMETERS.hardnessSafeRangeG,
+        );
+        return {
+          fieldId: fieldRows[i]!.id,
+          checkedOn: c.checkedOn,
+          turfCoverPct: c.turfCoverPct,
+          weedsPct: c.weedsPct,
+          barePct: c.barePct,
+          heightMm: Math.round(c.heightRatio * hocMm),
+          daysSinceCut: c.daysSinceCut,
+          gmax: c.gmax,
+          evenness: c.evenness,
+          notes: c.notes,
+          score: Math.round(scored.score * 10) / 10,
+          flags: scored.flags,
+        };
+      }),
     );
+    if (checks.length) await tx.insert(fieldChecks).values(checks);
+
+    const stationIds = new Map<string, number>();
+    for (const st of city.weatherStations) {
+      const [row] = await tx
+        .insert(weatherStations)
+        .values({ code: st.code, name: st.name, lat: st.lat, lng: st.lng, elevationM: st.elevationM })
+        .returning({ id: weatherStations.id });
+      stationIds.set(st.code, row!.id);
+    }
+    const days = city.weather.map((w) => ({
+      stationId: stationIds.get(w.stationCode)!,
+      date: w.date,
+      kind: 'observed' as const,
+      tmaxC: w.tmaxC,
+      tminC: w.tminC,
+      rhMaxPct: w.rhMaxPct,
+      rhMinPct: w.rhMinPct,
+      windMs: w.windMs,
+      sunshineH: w.sunshineH,
+      rainMm: w.rainMm,
+      source: 'demo',
+    }));
+    for (let i = 0; i < days.length; i += 500) await tx.insert(weatherDays).values(days.slice(i, i + 500));
+    await tx.insert(settings).values({ key: 'basemap', value: city.basemap });
 
     const crewIds = new Map<string, number>();
     for (const c of city.crews) {
@@ -109,6 +168,8 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
       fields: city.fields.length,
       crews: city.crews.length,
       users: city.users.length,
+      weatherDays: days.length,
+      fieldChecks: checks.length,
     };
     await tx.insert(settings).values({ key: MARKER, value: { seededAt: new Date().toISOString(), note: city.city.note, ...summary } });
     return summary;
