@@ -6,13 +6,14 @@ import { defineConfig } from 'vite';
 
 const apiPort = process.env.API_PORT ?? '3000';
 
-export default defineConfig({
+export default defineConfig(({ mode }) => ({
   root: fileURLToPath(new URL('.', import.meta.url)),
   plugins: [
     vue(),
-    // Element Plus components on demand; styles are skipped under vitest (no CSS loader).
+    // Element Plus components on demand; styles are skipped in component tests (no CSS
+    // loader there). By mode, not by VITEST: a build started from a test run keeps its styles.
     Components({
-      resolvers: [ElementPlusResolver({ importStyle: process.env.VITEST ? false : 'css' })],
+      resolvers: [ElementPlusResolver({ importStyle: mode === 'test' ? false : 'css' })],
       dts: false,
     }),
   ],
@@ -28,4 +29,4 @@ export default defineConfig({
     emptyOutDir: true,
     chunkSizeWarningLimit: 900,
   },
-});
+}));

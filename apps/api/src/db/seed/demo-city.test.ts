@@ -123,7 +123,6 @@ const RECT_SIZES: Partial<Record<Sport, [number, number][]>> = {
 const city = buildDemoCity();
 const fieldsOf = (siteKey: string) => city.fields.filter((f) => f.siteKey === siteKey);
 const siteOf = (f: DemoField) => city.sites.find((s) => s.key === f.siteKey)!;
-const districtOf = (code: string) => city.districts.find((d) => d.code === code)!;
 
 describe('demo city', () => {
   test('should build the same city on every call', () => {

@@ -1,0 +1,56 @@
+import {
+  columnFilteringFeature,
+  createColumnHelper,
+  createFilteredRowModel,
+  createPaginatedRowModel,
+  createSortedRowModel,
+  filterFn_equals,
+  filterFn_includesString,
+  globalFilteringFeature,
+  rowPaginationFeature,
+  rowSortingFeature,
+  sortFn_alphanumeric,
+  sortFn_basic,
+  sortFn_datetime,
+  sortFn_text,
+  tableFeatures,
+  type ColumnDef,
+  type RowData,
+} from '@tanstack/vue-table';
+
+export interface DataColumnMeta {
+  /** Text of a value for the global search and for select-filter options (e.g. "2 Competition"). */
+  // Cell values differ per column; TanStack itself types them as any.
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  text?: (value: any) => string;
+  align?: 'left' | 'right';
+}
+
+/** The features every Swardwise table has: sort, global and per-column filter, pages. */
+export const dataTableFeatures = tableFeatures({
+  rowSortingFeature,
+  sortedRowModel: createSortedRowModel(),
+  sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic, text: sortFn_text, datetime: sortFn_datetime },
+  columnFilteringFeature,
+  globalFilteringFeature,
+  filteredRowModel: createFilteredRowModel(),
+  filterFns: { includesString: filterFn_includesString, equals: filterFn_equals },
+  rowPaginationFeature,
+  paginatedRowModel: createPaginatedRowModel(),
+  columnMeta: {} as DataColumnMeta,
+});
+
+export type DataTableFeatures = typeof dataTableFeatures;
+// A column list mixes value types, as TanStack's own ColumnDef arrays do.
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+export type DataColumn<TData extends RowData> = ColumnDef<DataTableFeatures, TData, any>;
+
+export function columnHelper<TData extends RowData>() {
+  return createColumnHelper<DataTableFeatures, TData>();
+}
+
+/** A select filter above the table over one column's values. */
+export interface SelectFilter {
+  column: string;
+  label: string;
+}

@@ -1,0 +1,84 @@
+import {
+  FIELD_STATUS_LABELS,
+  GRASS_LABELS,
+  LEVEL_NAMES,
+  SPORT_LABELS,
+  type FieldStatus,
+  type Grass,
+  type Level,
+  type Sport,
+  type UnitSystem,
+} from '@swardwise/domain';
+import { h } from 'vue';
+import { RouterLink } from 'vue-router';
+import type { FieldRow } from '../../api/types.ts';
+import { formatHoc, formatLandArea } from '../../utils/units.ts';
+import { columnHelper, type DataColumn } from '../data-table/features.ts';
+import LevelTag from './LevelTag.vue';
+import StatusTag from './StatusTag.vue';
+
+const col = columnHelper<FieldRow>();
+
+export type FieldColumnKey = 'name' | 'site' | 'district' | 'sport' | 'grass' | 'level' | 'status' | 'statusNote' | 'area' | 'hoc';
+
+/** Field table columns shared by the fields list, a site page and the landing pages. */
+export function fieldColumns(units: UnitSystem, keys: FieldColumnKey[]): DataColumn<FieldRow>[] {
+  const all: Record<FieldColumnKey, DataColumn<FieldRow>> = {
+    name: col.accessor('name', {
+      header: 'Field',
+      cell: (c) => h(RouterLink, { to: `/fields/${c.row.original.id}`, class: 'sw-link' }, () => c.getValue()),
+    }),
+    site: col.accessor('siteName', {
+      id: 'site',
+      header: 'Site',
+      filterFn: 'equals',
+      cell: (c) => h(RouterLink, { to: `/sites/${c.row.original.siteId}`, class: 'sw-link' }, () => c.getValue()),
+    }),
+    district: col.accessor('districtName', { id: 'district', header: 'District', filterFn: 'equals' }),
+    sport: col.accessor('sport', {
+      header: 'Sport',
+      filterFn: 'equals',
+      meta: { text: (v: Sport) => SPORT_LABELS[v] ?? v },
+      cell: (c) => SPORT_LABELS[c.getValue() as Sport] ?? c.getValue(),
+    }),
+    grass: col.accessor('grass', {
+      header: 'Grass',
+      filterFn: 'equals',
+      meta: { text: (v: Grass) => GRASS_LABELS[v] ?? v },
+      cell: (c) => GRASS_LABELS[c.getValue() as Grass] ?? c.getValue(),
+    }),
+    level: col.accessor('maintenanceLevel', {
+      id: 'level',
+      header: 'Level',
+      filterFn: 'equals',
+      meta: { text: (v: Level) => `${v} ${LEVEL_NAMES[v]}` },
+      cell: (c) => h(LevelTag, { level: c.getValue() }),
+    }),
+    status: col.accessor('status', {
+      header: 'Status',
+      filterFn: 'equals',
+      meta: { text: (v: FieldStatus) => FIELD_STATUS_LABELS[v] },
+      cell: (c) => h(StatusTag, { status: c.getValue() }),
+    }),
+    statusNote: col.accessor('statusNote', { header: 'Status note', enableSorting: false, cell: (c) => c.getValue() || '—' }),
+    area: col.accessor('areaM2', {
+      id: 'area',
+      header: 'Area',
+      enableGlobalFilter: false,
+      meta: { align: 'right' },
+      cell: (c) => formatLandArea(c.getValue(), units),
+    }),
+    hoc: col.accessor('hocOverrideMm', {
+      id: 'hoc',
+      header: 'HOC override',
+      enableGlobalFilter: false,
+      sortUndefined: 'last',
+      meta: { align: 'right' },
+      cell: (c) => {
+        const mm = c.getValue();
+        return mm === null ? h('span', { class: 'sw-muted' }, 'per Standards') : formatHoc(mm, units);
+      },
+    }),
+  };
+  return keys.map((k) => all[k]);
+}

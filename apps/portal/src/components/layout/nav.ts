@@ -1,0 +1,28 @@
+import type { Action, AppAbility, Role, SubjectName } from '@swardwise/domain';
+
+export interface NavItem {
+  key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields';
+  label: string;
+  to: string;
+  roles: Role[];
+  can: [Action, SubjectName];
+}
+
+/**
+ * The side navigation. A link shows when the role's work includes the page and the
+ * shared ability allows it, the same two checks the router guard makes.
+ */
+export const NAV_ITEMS: NavItem[] = [
+  { key: 'overview', label: 'Overview', to: '/overview', roles: ['admin', 'head'], can: ['read', 'District'] },
+  { key: 'district', label: 'My district', to: '/district', roles: ['foreman'], can: ['read', 'District'] },
+  { key: 'today', label: 'Today', to: '/today', roles: ['crew'], can: ['read', 'Crew'] },
+  { key: 'my-fields', label: 'My fields', to: '/my-fields', roles: ['partner'], can: ['read', 'Field'] },
+  { key: 'sites', label: 'Sites', to: '/sites', roles: ['admin', 'head', 'foreman'], can: ['read', 'Site'] },
+  { key: 'fields', label: 'Fields', to: '/fields', roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'] },
+  { key: 'users', label: 'Users', to: '/admin/users', roles: ['admin'], can: ['create', 'User'] },
+  { key: 'audit', label: 'Audit log', to: '/audit', roles: ['admin', 'head'], can: ['read', 'AuditEntry'] },
+];
+
+export function navItemsFor(role: Role, ability: AppAbility): NavItem[] {
+  return NAV_ITEMS.filter((item) => item.roles.includes(role) && ability.can(item.can[0], item.can[1]));
+}

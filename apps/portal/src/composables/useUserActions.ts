@@ -1,0 +1,52 @@
+import { updateUserSchema } from '@swardwise/domain';
+import { ElMessage, ElMessageBox } from 'element-plus';
+import { ApiError } from '../api/client.ts';
+import { errorMessage } from '../api/messages.ts';
+import type { UserRow } from '../api/types.ts';
+import { updateUser } from '../api/users.ts';
+
+const CONFLICT = 'Someone else changed this user in the meantime. Reload the list to see their change, then make yours again.';
+
+/** Deactivation and reactivation with a confirmation, and the shared answer to a 409. */
+export function useUserActions(reload: () => Promise<void>) {
+  async function conflict() {
+    await ElMessageBox.alert(CONFLICT, 'This user has changed', { confirmButtonText: 'Reload', type: 'warning' }).catch(() => undefined);
+    await reload();
+  }
+
+  async function setActive(user: UserRow, active: boolean) {
+    const verb = active ? 'Reactivate' : 'Deactivate';
+    const message = active
+      ? `${user.name} will be able to sign in again with their current password.`
+      : `${user.name} will be signed out everywhere and cannot sign in until reactivated. Their history stays.`;
+    try {
+      await ElMessageBox.confirm(message, `${verb} ${user.name}?`, {
+        confirmButtonText: verb,
+        cancelButtonText: 'Cancel',
+        type: active ? 'info' : 'warning',
+        confirmButtonClass: active ? '' : 'el-button--danger',
+      });
+    } catch {
+      return;
+    }
+    try {
+      // The API checks the whole scope on every change, so the current one goes along.
+      const patch = updateUserSchema.parse({
+        version: user.version,
+        role: user.role,
+        districtId: user.districtId,
+        crewId: user.crewId,
+        siteIds: user.siteIds,
+        active,
+      });
+      await updateUser(user.id, patch);
+      ElMessage.success(`${user.name} is ${active ? 'active again' : 'deactivated'}.`);
+      await reload();
+    } catch (error) {
+      if (error instanceof ApiError && error.code.endsWith('/version_conflict')) return conflict();
+      ElMessage.error(errorMessage(error));
+    }
+  }
+
+  return { setActive, conflict };
+}

@@ -1,0 +1,45 @@
+import { createRouter, createWebHistory, type RouteLocationNormalized } from 'vue-router';
+import { ability } from '../ability.ts';
+import { useSessionStore } from '../stores/session.ts';
+import { routes } from './routes.ts';
+
+export const router = createRouter({
+  history: createWebHistory(),
+  routes,
+  scrollBehavior: () => ({ top: 0 }),
+});
+
+/** A `next` query value is only followed when it stays inside the portal. */
+export function safeNext(next: unknown): string | null {
+  return typeof next === 'string' && next.startsWith('/') && !next.startsWith('//') ? next : null;
+}
+
+function allowed(to: RouteLocationNormalized, role: string): boolean {
+  return to.matched.every(({ meta }) => {
+    if (meta.roles && !meta.roles.includes(role as never)) return false;
+    if (meta.can && !ability.can(meta.can[0], meta.can[1])) return false;
+    return true;
+  });
+}
+
+router.beforeEach(async (to) => {
+  const session = useSessionStore();
+  try {
+    await session.load();
+  } catch {
+    // The API is down: let public pages render; others go to sign-in, which shows the error.
+  }
+  const isPublic = to.matched.some((r) => r.meta.public);
+
+  if (!session.user) {
+    return isPublic ? true : { path: '/sign-in', query: to.fullPath === '/' ? {} : { next: to.fullPath } };
+  }
+  if (to.name === 'sign-in') return safeNext(to.query.next) ?? session.landing;
+  if (isPublic) return true;
+  if (to.name === 'home') return session.landing;
+  return allowed(to, session.user.role) ? true : session.landing;
+});
+
+router.afterEach((to) => {
+  document.title = to.meta.title ? `${to.meta.title} · Swardwise` : 'Swardwise';
+});

@@ -1,0 +1,94 @@
+import type { Action, Role, SubjectName } from '@swardwise/domain';
+import type { RouteRecordRaw } from 'vue-router';
+import { useSessionStore } from '../stores/session.ts';
+
+declare module 'vue-router' {
+  interface RouteMeta {
+    /** Reachable without signing in. */
+    public?: true;
+    /** The ability check of the page. */
+    can?: [Action, SubjectName];
+    /** The roles whose work this page is; others are sent to their own landing page. */
+    roles?: Role[];
+    title?: string;
+  }
+}
+
+export const routes: RouteRecordRaw[] = [
+  { path: '/sign-in', name: 'sign-in', component: () => import('../views/SignInView.vue'), meta: { public: true, title: 'Sign in' } },
+  {
+    path: '/accept-invite',
+    name: 'accept-invite',
+    component: () => import('../views/AcceptInviteView.vue'),
+    meta: { public: true, title: 'Set your password' },
+  },
+  {
+    path: '/',
+    component: () => import('../layouts/AppLayout.vue'),
+    children: [
+      // Each role has its own landing page; before the session is known, that is sign-in.
+      { path: '', name: 'home', redirect: () => useSessionStore().landing },
+      {
+        path: 'overview',
+        name: 'overview',
+        component: () => import('../views/OverviewView.vue'),
+        meta: { roles: ['admin', 'head'], can: ['read', 'District'], title: 'Overview' },
+      },
+      {
+        path: 'district',
+        name: 'district',
+        component: () => import('../views/DistrictView.vue'),
+        meta: { roles: ['foreman'], can: ['read', 'District'], title: 'My district' },
+      },
+      {
+        path: 'today',
+        name: 'today',
+        component: () => import('../views/TodayView.vue'),
+        meta: { roles: ['crew'], can: ['read', 'Crew'], title: 'Today' },
+      },
+      {
+        path: 'my-fields',
+        name: 'my-fields',
+        component: () => import('../views/MyFieldsView.vue'),
+        meta: { roles: ['partner'], can: ['read', 'Field'], title: 'My fields' },
+      },
+      {
+        path: 'sites',
+        name: 'sites',
+        component: () => import('../views/SitesView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Site'], title: 'Sites' },
+      },
+      {
+        path: 'sites/:id(\\d+)',
+        name: 'site',
+        component: () => import('../views/SiteView.vue'),
+        meta: { can: ['read', 'Site'], title: 'Site' },
+      },
+      {
+        path: 'fields',
+        name: 'fields',
+        component: () => import('../views/FieldsView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'], title: 'Fields' },
+      },
+      {
+        path: 'fields/:id(\\d+)',
+        name: 'field',
+        component: () => import('../views/FieldView.vue'),
+        meta: { can: ['read', 'Field'], title: 'Field' },
+      },
+      {
+        path: 'admin/users',
+        name: 'users',
+        component: () => import('../views/UsersView.vue'),
+        meta: { roles: ['admin'], can: ['create', 'User'], title: 'Users' },
+      },
+      {
+        path: 'audit',
+        name: 'audit',
+        component: () => import('../views/AuditView.vue'),
+        meta: { roles: ['admin', 'head'], can: ['read', 'AuditEntry'], title: 'Audit log' },
+      },
+      { path: ':pathMatch(.*)*', name: 'not-found', component: () => import('../views/NotFoundView.vue'), meta: { title: 'Not found' } },
+    ],
+  },
+];

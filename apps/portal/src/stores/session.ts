@@ -1,0 +1,85 @@
+import { defineAbilityFor, type Actor, type Role, type UnitSystem } from '@swardwise/domain';
+import { defineStore } from 'pinia';
+import { computed, ref } from 'vue';
+import { ability } from '../ability.ts';
+import * as auth from '../api/auth.ts';
+import { ApiError } from '../api/client.ts';
+import type { SessionUser } from '../api/types.ts';
+
+export function actorOf(user: SessionUser): Actor {
+  return { id: user.id, role: user.role, districtId: user.districtId, crewId: user.crewId, siteIds: user.siteIds };
+}
+
+/** Where each role lands after sign-in and when a route is not theirs. */
+export const LANDING: Record<Role, string> = {
+  admin: '/admin/users',
+  head: '/overview',
+  foreman: '/district',
+  crew: '/today',
+  partner: '/my-fields',
+};
+
+export const useSessionStore = defineStore('session', () => {
+  const user = ref<SessionUser | null>(null);
+  const loaded = ref(false);
+  /** True once the person chose to sign out, so the end of the session is not treated as an expiry. */
+  const signedOut = ref(false);
+  let loading: Promise<void> | null = null;
+
+  const units = computed<UnitSystem>(() => user.value?.units ?? 'imperial');
+  const landing = computed(() => (user.value ? LANDING[user.value.role] : '/sign-in'));
+
+  function setUser(next: SessionUser | null) {
+    user.value = next;
+    if (next) signedOut.value = false;
+    ability.update(next ? defineAbilityFor(actorOf(next)).rules : []);
+  }
+
+  /** Asks the API once who is signed in; a 401 simply means nobody. */
+  function load(): Promise<void> {
+    if (loaded.value) return Promise.resolve();
+    loading ??= auth
+      .fetchMe()
+      .then(setUser, (error: unknown) => {
+        if (!(error instanceof ApiError && error.status === 401)) throw error;
+        setUser(null);
+      })
+      .finally(() => {
+        loaded.value = true;
+        loading = null;
+      });
+    return loading;
+  }
+
+  async function signIn(email: string, password: string) {
+    setUser(await auth.signIn(email, password));
+    loaded.value = true;
+  }
+
+  async function acceptInvite(token: string, password: string) {
+    setUser(await auth.acceptInvite(token, password));
+    loaded.value = true;
+  }
+
+  async function signOut() {
+    signedOut.value = true;
+    try {
+      await auth.signOut();
+    } finally {
+      // Forget the session locally even if the server is unreachable.
+      setUser(null);
+    }
+  }
+
+  async function setUnits(next: UnitSystem) {
+    if (!user.value || user.value.units === next) return;
+    setUser(await auth.updateMe({ version: user.value.version, units: next }));
+  }
+
+  /** Called when any request finds the session gone (401). */
+  function expire() {
+    setUser(null);
+  }
+
+  return { user, loaded, signedOut, units, landing, load, signIn, acceptInvite, signOut, setUnits, expire };
+});

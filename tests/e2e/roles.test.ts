@@ -1,0 +1,82 @@
+/**
+ * Each role signs in through the real sign-in page, lands on its own page and sees only
+ * its own navigation.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
+import type { Role } from '@swardwise/domain';
+import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
+import { launchBrowser } from './browser.ts';
+
+const baseUrl = inject('baseUrl');
+const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
+let browser: Browser;
+
+beforeAll(async () => {
+  fs.mkdirSync(shots, { recursive: true });
+  browser = await launchBrowser();
+});
+afterAll(() => browser?.close());
+
+const expected: Record<Role, { landing: string; nav: string[] }> = {
+  admin: { landing: '/admin/users', nav: ['overview', 'sites', 'fields', 'users', 'audit'] },
+  head: { landing: '/overview', nav: ['overview', 'sites', 'fields', 'audit'] },
+  foreman: { landing: '/district', nav: ['district', 'sites', 'fields'] },
+  crew: { landing: '/today', nav: ['today', 'fields'] },
+  partner: { landing: '/my-fields', nav: ['my-fields'] },
+};
+
+describe('signing in by role', () => {
+  test.each(Object.keys(expected) as Role[])('should land %s on its own page with only its navigation', async (role) => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+    try {
+      await page.goto(`${baseUrl}/`);
+      await page.waitForURL(/\/sign-in/);
+      await page.getByLabel('E-mail').fill(DEMO_SIGN_INS[role].email);
+      await page.getByLabel('Password').fill(DEMO_SIGN_INS[role].password);
+      await page.getByRole('button', { name: /sign in/i }).click();
+      await page.waitForURL((url) => url.pathname === expected[role].landing);
+      await page.locator('[data-test="page-title"]').first().waitFor();
+      const nav = await page.locator('[data-test^="nav-"]').evaluateAll((els) => els.map((el) => el.getAttribute('data-test')!.slice(4)));
+      expect(nav.sort()).toEqual([...expected[role].nav].sort());
+      await page.screenshot({ path: path.join(shots, `landing-${role}.png`), fullPage: true });
+    } finally {
+      await page.close();
+    }
+  });
+
+  test('should show a clear message on a wrong password and stay on the sign-in page', async () => {
+    const page = await browser.newPage();
+    try {
+      await page.goto(`${baseUrl}/sign-in`);
+      await page.getByLabel('E-mail').fill(DEMO_SIGN_INS.head.email);
+      await page.getByLabel('Password').fill('not-the-password');
+      await page.getByRole('button', { name: /sign in/i }).click();
+      await expect.poll(() => page.getByText('The e-mail or password is not right').count()).toBeGreaterThan(0);
+      expect(new URL(page.url()).pathname).toBe('/sign-in');
+    } finally {
+      await page.close();
+    }
+  });
+
+  test('should send a partner who types another role’s address back to his own page', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    try {
+      await page.goto(`${baseUrl}/sign-in`);
+      await page.getByLabel('E-mail').fill(DEMO_SIGN_INS.partner.email);
+      await page.getByLabel('Password').fill(DEMO_SIGN_INS.partner.password);
+      await page.getByRole('button', { name: /sign in/i }).click();
+      await page.waitForURL((url) => url.pathname === '/my-fields');
+      await page.goto(`${baseUrl}/admin/users`);
+      await page.waitForURL((url) => url.pathname === '/my-fields');
+      // The API refuses it as well: the portal only hides what the server would refuse.
+      const status = await page.evaluate(async () => (await fetch('/api/users')).status);
+      expect(status).toBe(403);
+    } finally {
+      await context.close();
+    }
+  });
+});
