@@ -40,6 +40,8 @@ export default defineConfig({
           // Each file opens its own PGlite database (a few seconds); keep the two cores busy
           // without running more databases than there are cores.
           maxWorkers: 2,
+          // Projects with their own worker limits run in their own group, after the fast ones.
+          sequence: { groupOrder: 1 },
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },
@@ -62,6 +64,7 @@ export default defineConfig({
           environment: 'node',
           globalSetup: ['./e2e/global-setup.ts'],
           fileParallelism: false,
+          sequence: { groupOrder: 2 },
           testTimeout: 60_000,
           hookTimeout: 120_000,
         },
