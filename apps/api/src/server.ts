@@ -4,6 +4,8 @@ import { createApp } from './app.ts';
 import { loadConfig } from './config.ts';
 import { openDatabase } from './db/client.ts';
 import { seedDemoCity } from './db/seed/index.ts';
+import { createMailer, type SmtpSettings } from './mail/mailer.ts';
+import { startMailSink, type MailSink } from './mail/sink.ts';
 import { sessionSecretFor } from './services/settings.ts';
 
 async function main() {
@@ -17,7 +19,17 @@ async function main() {
     if (seeded) logger.info(seeded, 'demo city seeded (invented data)');
   }
   const sessionSecret = await sessionSecretFor(database.db, config.sessionSecret);
-  const { app, store } = createApp({ db: database.db, config, logger, sessionSecret });
+
+  let mailSink: MailSink | undefined;
+  let smtp: SmtpSettings | null = config.smtp ? { ...config.smtp, from: config.mailFrom } : null;
+  if (!smtp && config.mailSink && !config.production) {
+    // Another process may hold the usual port (a second dev server); any free port will do.
+    mailSink = await startMailSink({ port: config.mailSinkPort }).catch(() => startMailSink({ port: 0 }));
+    smtp = { host: '127.0.0.1', port: mailSink.port, secure: false, from: config.mailFrom, ignoreTLS: true };
+    logger.info({ port: mailSink.port }, 'development mail sink listening; messages at /api/dev/mail');
+  }
+  const mailer = createMailer(smtp, logger);
+  const { app, store } = createApp({ db: database.db, config, logger, sessionSecret, mailer, mailSink });
   const server = app.listen(config.port, config.host, () => {
     logger.info({ url: `http://localhost:${config.port}`, production: config.production }, 'Swardwise is listening');
   });
@@ -27,7 +39,7 @@ async function main() {
   const stop = (signal: string) => {
     logger.info({ signal }, 'shutting down');
     server.close(() => {
-      void database.close().finally(() => process.exit(0));
+      void Promise.allSettled([database.close(), mailSink?.close()]).finally(() => process.exit(0));
     });
     setTimeout(() => process.exit(0), 5000).unref();
   };

@@ -117,3 +117,20 @@ export type SiteOwner = (typeof SITE_OWNERS)[number];
 
 export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
 export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+
+export const EQUIPMENT_KINDS = ['reel_mower', 'rotary_mower', 'flail_mower', 'line_marker', 'spreader', 'sprayer'] as const;
+export type EquipmentKind = (typeof EQUIPMENT_KINDS)[number];
+export const EQUIPMENT_KIND_LABELS: Record<EquipmentKind, string> = {
+  reel_mower: 'Reel mower',
+  rotary_mower: 'Rotary mower',
+  flail_mower: 'Flail mower',
+  line_marker: 'Line marker',
+  spreader: 'Spreader',
+  sprayer: 'Sprayer',
+};
+export const MOWER_KINDS: readonly EquipmentKind[] = ['reel_mower', 'rotary_mower', 'flail_mower'];
+
+export const WORK_TASKS = ['mow', 'paint_lines', 'feed', 'irrigate', 'field_check', 'aerate', 'overseed', 'topdress', 'weed_control'] as const;
+export type WorkTask = (typeof WORK_TASKS)[number];
+export const WORK_STATUSES = ['planned', 'assigned', 'started', 'done', 'skipped'] as const;
+export type WorkStatus = (typeof WORK_STATUSES)[number];

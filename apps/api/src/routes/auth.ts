@@ -1,11 +1,12 @@
 import { Router } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
-import { AppError, acceptInviteSchema, signInSchema, updateProfileSchema } from '@swardwise/domain';
+import { AppError, acceptInviteSchema, forgotPasswordSchema, resetPasswordSchema, signInSchema, updateProfileSchema } from '@swardwise/domain';
 import type { Request } from 'express';
 import type { AppDeps } from '../app.ts';
 import { ctxOf, requireUser } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { acceptInvite, updateProfile, verifyCredentials, type SessionUser } from '../services/users.ts';
+import { passwordResetMail } from '../mail/messages.ts';
+import { acceptInvite, requestPasswordReset, resetPassword, updateProfile, verifyCredentials, type SessionUser } from '../services/users.ts';
 
 /** Starts a fresh session for the user (a new id, so a session id cannot be fixed in advance). */
 function startSession(req: Request, user: SessionUser): Promise<void> {
@@ -18,7 +19,7 @@ function startSession(req: Request, user: SessionUser): Promise<void> {
   });
 }
 
-export function authRouter({ db, config }: AppDeps): Router {
+export function authRouter({ db, config, mailer }: AppDeps): Router {
   const router = Router();
 
   const signInLimiter = rateLimit({
@@ -62,6 +63,21 @@ export function authRouter({ db, config }: AppDeps): Router {
   router.post('/accept-invite', signInLimiter, async (req, res) => {
     const input = parse(acceptInviteSchema, req.body, 'body');
     const user = await acceptInvite(db, input.token, input.password);
+    await startSession(req, user);
+    res.json({ user });
+  });
+
+  // The same answer whether or not the account exists, so the form cannot be used to probe e-mails.
+  router.post('/forgot-password', signInLimiter, async (req, res) => {
+    const { email } = parse(forgotPasswordSchema, req.body, 'body');
+    const reset = await requestPasswordReset(db, email, config.publicUrl);
+    if (reset) await mailer.send(passwordResetMail(reset.user.email, reset.user.name, reset.url));
+    res.status(202).json({ message: 'If that address has an account, a reset link is on its way.' });
+  });
+
+  router.post('/reset-password', signInLimiter, async (req, res) => {
+    const input = parse(resetPasswordSchema, req.body, 'body');
+    const user = await resetPassword(db, input.token, input.password);
     await startSession(req, user);
     res.json({ user });
   });

@@ -1,4 +1,4 @@
-/** Read-only lists: districts, crews, the audit log. */
+/** Read-only lists: districts and the audit log. */
 import { Router } from 'express';
 import { z } from 'zod';
 import { idSchema } from '@swardwise/domain';
@@ -6,7 +6,6 @@ import type { AppDeps } from '../app.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { listAudit } from '../services/audit.ts';
-import { listCrews } from '../services/crews.ts';
 import { listDistricts } from '../services/districts.ts';
 
 const auditQuerySchema = z.object({
@@ -20,11 +19,6 @@ export function directoryRouter({ db }: AppDeps): Router {
 
   router.get('/districts', async (req, res) => {
     res.json({ items: await listDistricts(ctxOf(db, req)) });
-  });
-
-  router.get('/crews', async (req, res) => {
-    const query = parse(z.object({ districtId: idSchema.optional() }), req.query, 'query');
-    res.json({ items: await listCrews(ctxOf(db, req), query) });
   });
 
   router.get('/audit', async (req, res) => {

@@ -3,9 +3,11 @@ import { idParamSchema, inviteUserSchema, updateUserSchema } from '@swardwise/do
 import type { AppDeps } from '../app.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
+import { ROLE_LABELS } from '@swardwise/domain';
+import { invitationMail } from '../mail/messages.ts';
 import { inviteUser, listUsers, updateUser } from '../services/users.ts';
 
-export function usersRouter({ db, config }: AppDeps): Router {
+export function usersRouter({ db, config, mailer }: AppDeps): Router {
   const router = Router();
 
   router.get('/', async (req, res) => {
@@ -16,7 +18,8 @@ export function usersRouter({ db, config }: AppDeps): Router {
     const ctx = ctxOf(db, req);
     const input = parse(inviteUserSchema, req.body, 'body');
     const result = await inviteUser(ctx, input, config.publicUrl);
-    res.status(201).json(result);
+    const emailed = await mailer.send(invitationMail(result.user.email, result.user.name, ROLE_LABELS[result.user.role].toLowerCase(), result.inviteUrl));
+    res.status(201).json({ ...result, emailed });
   });
 
   router.patch('/:id', async (req, res) => {

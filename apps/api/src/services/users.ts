@@ -137,9 +137,11 @@ async function replaceSites(db: Queryable, userId: number, siteIds: number[]) {
   if (siteIds.length) await db.insert(userSites).values(siteIds.map((siteId) => ({ userId, siteId })));
 }
 
+const hashToken = (token: string) => crypto.createHash('sha256').update(token).digest('hex');
+
 function newToken() {
   const token = crypto.randomBytes(32).toString('base64url');
-  return { token, tokenHash: crypto.createHash('sha256').update(token).digest('hex') };
+  return { token, tokenHash: hashToken(token) };
 }
 
 export async function inviteUser(ctx: Ctx, input: InviteUserInput, publicUrl: string): Promise<{ user: UserRow; inviteUrl: string }> {
@@ -170,18 +172,56 @@ export async function inviteUser(ctx: Ctx, input: InviteUserInput, publicUrl: st
   });
 }
 
-export async function acceptInvite(db: Queryable, token: string, password: string): Promise<SessionUser> {
-  const tokenHash = crypto.createHash('sha256').update(token).digest('hex');
+/** Marks a one-time token used and returns its user, or throws when it is unknown, used or expired. */
+async function consumeToken(db: Queryable, token: string, purpose: 'invite' | 'reset'): Promise<number> {
   const [row] = await db
-    .select({ id: userTokens.id, userId: userTokens.userId })
-    .from(userTokens)
-    .where(and(eq(userTokens.tokenHash, tokenHash), eq(userTokens.purpose, 'invite'), isNull(userTokens.usedAt), gt(userTokens.expiresAt, new Date())));
-  if (!row) throw new AppError('invalid', 'auth/invalid_token', 'This invitation link is not valid or has expired; ask for a new one');
+    .update(userTokens)
+    .set({ usedAt: new Date() })
+    .where(and(eq(userTokens.tokenHash, hashToken(token)), eq(userTokens.purpose, purpose), isNull(userTokens.usedAt), gt(userTokens.expiresAt, new Date())))
+    .returning({ userId: userTokens.userId });
+  if (!row) {
+    throw new AppError(
+      'invalid',
+      'auth/invalid_token',
+      purpose === 'invite' ? 'This invitation link is not valid or has expired; ask for a new one' : 'This reset link is not valid or has expired; ask for a new one',
+    );
+  }
+  return row.userId;
+}
+
+export async function acceptInvite(db: Queryable, token: string, password: string): Promise<SessionUser> {
   const passwordHash = await hashPassword(password);
-  await db.update(userTokens).set({ usedAt: new Date() }).where(eq(userTokens.id, row.id));
-  await db.update(users).set({ passwordHash, updatedAt: new Date(), version: sql`${users.version} + 1` }).where(eq(users.id, row.userId));
-  await writeAudit(db, { actorId: row.userId, action: 'update', entity: 'user', entityId: row.userId, districtId: null, before: null, after: { invitationAccepted: true } });
-  const user = await sessionUser(db, row.userId);
+  const userId = await consumeToken(db, token, 'invite');
+  await db.update(users).set({ passwordHash, updatedAt: new Date(), version: sql`${users.version} + 1` }).where(eq(users.id, userId));
+  await writeAudit(db, { actorId: userId, action: 'update', entity: 'user', entityId: userId, districtId: null, before: null, after: { invitationAccepted: true } });
+  const user = await sessionUser(db, userId);
+  if (!user) throw new AppError('forbidden', 'auth/deactivated', 'This account has been deactivated');
+  return user;
+}
+
+const RESET_MINUTES = 60;
+
+/**
+ * Starts a password reset for an active account with a password. Returns the link to
+ * send, or null when there is no such account (the caller answers the same either way).
+ */
+export async function requestPasswordReset(db: Queryable, email: string, publicUrl: string): Promise<{ user: SessionUser; url: string } | null> {
+  const [row] = await db.select({ id: users.id, hash: users.passwordHash, active: users.active }).from(users).where(eq(users.email, email));
+  if (!row || !row.active || !row.hash) return null;
+  const { token, tokenHash } = newToken();
+  await db.insert(userTokens).values({ userId: row.id, purpose: 'reset', tokenHash, expiresAt: new Date(Date.now() + RESET_MINUTES * 60_000) });
+  const user = await sessionUser(db, row.id);
+  return user ? { user, url: `${publicUrl}/reset-password?token=${token}` } : null;
+}
+
+/** Sets a new password from a reset link and ends the account's other sessions. */
+export async function resetPassword(db: Queryable, token: string, password: string): Promise<SessionUser> {
+  const passwordHash = await hashPassword(password);
+  const userId = await consumeToken(db, token, 'reset');
+  await db.update(users).set({ passwordHash, updatedAt: new Date(), version: sql`${users.version} + 1` }).where(eq(users.id, userId));
+  await db.delete(sessions).where(eq(sessions.userId, userId));
+  await writeAudit(db, { actorId: userId, action: 'update', entity: 'user', entityId: userId, districtId: null, before: null, after: { passwordReset: true } });
+  const user = await sessionUser(db, userId);
   if (!user) throw new AppError('forbidden', 'auth/deactivated', 'This account has been deactivated');
   return user;
 }

@@ -21,3 +21,11 @@ export async function updateMe(patch: { version: number; name?: string; units?: 
 export async function acceptInvite(token: string, password: string): Promise<SessionUser> {
   return (await api.post<{ user: SessionUser }>('/auth/accept-invite', { token, password })).user;
 }
+
+export async function resetPassword(token: string, password: string): Promise<SessionUser> {
+  return (await api.post<{ user: SessionUser }>('/auth/reset-password', { token, password })).user;
+}
+
+export async function forgotPassword(email: string): Promise<string> {
+  return (await api.post<{ message: string }>('/auth/forgot-password', { email })).message;
+}

@@ -61,6 +61,11 @@ export const useSessionStore = defineStore('session', () => {
     loaded.value = true;
   }
 
+  async function resetPassword(token: string, password: string) {
+    setUser(await auth.resetPassword(token, password));
+    loaded.value = true;
+  }
+
   async function signOut() {
     signedOut.value = true;
     try {
@@ -81,5 +86,5 @@ export const useSessionStore = defineStore('session', () => {
     setUser(null);
   }
 
-  return { user, loaded, signedOut, units, landing, load, signIn, acceptInvite, signOut, setUnits, expire };
+  return { user, loaded, signedOut, units, landing, load, signIn, acceptInvite, resetPassword, signOut, setUnits, expire };
 });

@@ -15,3 +15,12 @@ export const acceptInviteSchema = z.object({
   token: z.string().min(20, 'the invitation link is incomplete').max(200),
   password: passwordSchema,
 });
+
+export const forgotPasswordSchema = z.object({
+  email: z.email('enter a valid e-mail address').trim().toLowerCase(),
+});
+
+export const resetPasswordSchema = z.object({
+  token: z.string().min(20, 'the reset link is incomplete').max(200),
+  password: passwordSchema,
+});

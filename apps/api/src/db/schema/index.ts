@@ -3,3 +3,4 @@ export * from './people.ts';
 export * from './records.ts';
 export * from './weather.ts';
 export * from './standards.ts';
+export * from './work.ts';

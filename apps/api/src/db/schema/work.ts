@@ -1,0 +1,97 @@
+/** Equipment, work orders and their photos: the crews' side of the week plan. */
+import { boolean, date, index, integer, jsonb, pgTable, real, text, timestamp } from 'drizzle-orm/pg-core';
+import type { EquipmentKind, WorkStatus, WorkTask } from '@swardwise/domain';
+import { districts, fields, sites } from './city.ts';
+import { crews, users } from './people.ts';
+
+export const equipment = pgTable(
+  'equipment',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    districtId: integer('district_id')
+      .notNull()
+      .references(() => districts.id),
+    crewId: integer('crew_id').references(() => crews.id, { onDelete: 'set null' }),
+    kind: text('kind').$type<EquipmentKind>().notNull(),
+    name: text('name').notNull(),
+    /** Mowers: cutting width (m), working speed (km/h), field efficiency (0–1), HOC range (mm). */
+    cuttingWidthM: real('cutting_width_m'),
+    speedKmh: real('speed_kmh'),
+    fieldEfficiency: real('field_efficiency'),
+    hocMinMm: real('hoc_min_mm'),
+    hocMaxMm: real('hoc_max_mm'),
+    /** Hour meter and blade care. */
+    hourMeterH: real('hour_meter_h').notNull().default(0),
+    sharpenIntervalH: real('sharpen_interval_h'),
+    lastSharpenedAtH: real('last_sharpened_at_h'),
+    notes: text('notes').notNull().default(''),
+    active: boolean('active').notNull().default(true),
+    version: integer('version').notNull().default(1),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('equipment_district_idx').on(t.districtId)],
+);
+
+export const workOrders = pgTable(
+  'work_orders',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    fieldId: integer('field_id')
+      .notNull()
+      .references(() => fields.id, { onDelete: 'cascade' }),
+    /** Copies of the field's site and district, so scope checks need no join. */
+    siteId: integer('site_id')
+      .notNull()
+      .references(() => sites.id),
+    districtId: integer('district_id')
+      .notNull()
+      .references(() => districts.id),
+    task: text('task').$type<WorkTask>().notNull(),
+    weekStart: date('week_start', { mode: 'string' }).notNull(),
+    plannedDate: date('planned_date', { mode: 'string' }).notNull(),
+    crewId: integer('crew_id').references(() => crews.id, { onDelete: 'set null' }),
+    equipmentId: integer('equipment_id').references(() => equipment.id, { onDelete: 'set null' }),
+    plannedHours: real('planned_hours').notNull(),
+    actualHours: real('actual_hours'),
+    status: text('status').$type<WorkStatus>().notNull().default('planned'),
+    origin: text('origin').$type<'generated' | 'manual'>().notNull(),
+    /** Set when a person assigned, moved or logged it: re-generating the week keeps it. */
+    pinned: boolean('pinned').notNull().default(false),
+    /** Why the plan asks for it, in words (e.g. the one-third rule's date). */
+    reason: text('reason').notNull().default(''),
+    details: jsonb('details').$type<Record<string, unknown>>().notNull().default({}),
+    notes: text('notes').notNull().default(''),
+    startedAt: timestamp('started_at', { withTimezone: true }),
+    doneAt: timestamp('done_at', { withTimezone: true }),
+    doneBy: integer('done_by').references(() => users.id),
+    createdBy: integer('created_by').references(() => users.id),
+    version: integer('version').notNull().default(1),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    index('work_orders_week_idx').on(t.districtId, t.weekStart),
+    index('work_orders_crew_idx').on(t.crewId, t.plannedDate),
+    index('work_orders_field_idx').on(t.fieldId, t.plannedDate),
+  ],
+);
+
+export const workPhotos = pgTable(
+  'work_photos',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    workOrderId: integer('work_order_id')
+      .notNull()
+      .references(() => workOrders.id, { onDelete: 'cascade' }),
+    /** File name inside the uploads folder (never a client-supplied path). */
+    fileName: text('file_name').notNull(),
+    mime: text('mime').notNull(),
+    width: integer('width').notNull(),
+    height: integer('height').notNull(),
+    bytes: integer('bytes').notNull(),
+    createdBy: integer('created_by').references(() => users.id),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('work_photos_order_idx').on(t.workOrderId)],
+);

@@ -1,0 +1,121 @@
+/** A district's mowers, line markers, spreaders and sprayers, with hour meters and blade care. */
+import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
+import { AppError, type CreateEquipmentInput, type UpdateEquipmentInput } from '@swardwise/domain';
+import type { Db } from '../db/client.ts';
+import { crews, districts, equipment } from '../db/schema/index.ts';
+import { writeAudit } from './audit.ts';
+import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+
+const columns = {
+  id: equipment.id,
+  districtId: equipment.districtId,
+  districtName: districts.name,
+  crewId: equipment.crewId,
+  crewName: sql<string | null>`${crews.name}`,
+  kind: equipment.kind,
+  name: equipment.name,
+  cuttingWidthM: equipment.cuttingWidthM,
+  speedKmh: equipment.speedKmh,
+  fieldEfficiency: equipment.fieldEfficiency,
+  hocMinMm: equipment.hocMinMm,
+  hocMaxMm: equipment.hocMaxMm,
+  hourMeterH: equipment.hourMeterH,
+  sharpenIntervalH: equipment.sharpenIntervalH,
+  lastSharpenedAtH: equipment.lastSharpenedAtH,
+  notes: equipment.notes,
+  active: equipment.active,
+  version: equipment.version,
+  updatedAt: equipment.updatedAt,
+};
+
+function select(db: Ctx['db']) {
+  return db.select(columns).from(equipment).innerJoin(districts, eq(districts.id, equipment.districtId)).leftJoin(crews, eq(crews.id, equipment.crewId));
+}
+
+type Row = Awaited<ReturnType<typeof getRow>> & object;
+
+/**
+ * Blades are due when the hours run since the last sharpening reach the interval (a dull
+ * reel or blade tears leaf tips, which brown and invite disease).
+ */
+export function withBladeCare<T extends { hourMeterH: number; sharpenIntervalH: number | null; lastSharpenedAtH: number | null }>(row: T) {
+  const since = row.sharpenIntervalH == null ? null : row.hourMeterH - (row.lastSharpenedAtH ?? 0);
+  return { ...row, hoursSinceSharpening: since, sharpeningDue: since != null && row.sharpenIntervalH != null && since >= row.sharpenIntervalH };
+}
+
+async function getRow(db: Ctx['db'], id: number) {
+  const [row] = await select(db).where(eq(equipment.id, id));
+  return row;
+}
+
+export async function listEquipment(ctx: Ctx, filter: { districtId?: number | undefined }) {
+  authorize(ctx, 'read', 'Equipment');
+  const conditions: (SQL | undefined)[] = [];
+  if (ctx.actor.role === 'foreman') conditions.push(eq(equipment.districtId, ctx.actor.districtId ?? -1));
+  if (ctx.actor.role === 'crew') conditions.push(eq(equipment.crewId, ctx.actor.crewId ?? -1));
+  if (filter.districtId) conditions.push(eq(equipment.districtId, filter.districtId));
+  const rows = await select(ctx.db)
+    .where(and(...conditions))
+    .orderBy(asc(equipment.kind), asc(equipment.name));
+  return rows.filter((r) => can(ctx, 'read', 'Equipment', r)).map(withBladeCare);
+}
+
+/** A crew, when given, must be of the same district. */
+async function checkCrew(db: Ctx['db'], crewId: number | null | undefined, districtId: number) {
+  if (crewId == null) return;
+  const [crew] = await db.select({ districtId: crews.districtId }).from(crews).where(eq(crews.id, crewId));
+  if (!crew) throw new AppError('invalid', 'request/invalid', 'No such crew', { issues: [{ path: 'body.crewId', message: 'no such crew' }] });
+  if (crew.districtId !== districtId) {
+    throw new AppError('invalid', 'request/invalid', 'That crew works in another district', { issues: [{ path: 'body.crewId', message: 'the crew works in another district' }] });
+  }
+}
+
+export async function createEquipment(ctx: Ctx, input: CreateEquipmentInput) {
+  authorize(ctx, 'create', 'Equipment', { districtId: input.districtId });
+  return (ctx.db as Db).transaction(async (tx) => {
+    await checkCrew(tx, input.crewId, input.districtId);
+    const [created] = await tx.insert(equipment).values(input).returning({ id: equipment.id });
+    const row = (await getRow(tx, created!.id))!;
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'equipment', entityId: row.id, districtId: row.districtId, before: null, after: row });
+    return withBladeCare(row);
+  });
+}
+
+export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipmentInput) {
+  return (ctx.db as Db).transaction(async (tx) => {
+    const before: Row | undefined = await getRow(tx, id);
+    if (!before) throw notFound('equipment', id);
+    authorize(ctx, 'update', 'Equipment', before);
+    const { version, ...changes } = input;
+    const districtId = changes.districtId ?? before.districtId;
+    if (districtId !== before.districtId) authorize(ctx, 'create', 'Equipment', { districtId });
+    await checkCrew(tx, changes.crewId === undefined ? before.crewId : changes.crewId, districtId);
+    const merged = { ...before, ...changes };
+    if (merged.hocMinMm != null && merged.hocMaxMm != null && merged.hocMinMm > merged.hocMaxMm) {
+      throw new AppError('invalid', 'request/invalid', 'The highest HOC is below the lowest', { issues: [{ path: 'body.hocMaxMm', message: 'the highest HOC is below the lowest' }] });
+    }
+    const [updated] = await tx
+      .update(equipment)
+      .set({ ...changes, version: sql`${equipment.version} + 1`, updatedAt: new Date() })
+      .where(and(eq(equipment.id, id), eq(equipment.version, version)))
+      .returning({ id: equipment.id });
+    if (!updated) throw versionConflict('equipment');
+    const after = (await getRow(tx, id))!;
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'equipment', entityId: id, districtId: after.districtId, before, after });
+    return withBladeCare(after);
+  });
+}
+
+export async function deleteEquipment(ctx: Ctx, id: number, version: number) {
+  return (ctx.db as Db).transaction(async (tx) => {
+    const before = await getRow(tx, id);
+    if (!before) throw notFound('equipment', id);
+    authorize(ctx, 'delete', 'Equipment', before);
+    const [deleted] = await tx
+      .delete(equipment)
+      .where(and(eq(equipment.id, id), eq(equipment.version, version)))
+      .returning({ id: equipment.id });
+    if (!deleted) throw versionConflict('equipment');
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'equipment', entityId: id, districtId: before.districtId, before, after: null });
+  });
+}
