@@ -8,6 +8,7 @@ import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
 import { districts, fields, settings, sites, users } from '../../apps/api/src/db/schema/index.ts';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
+import { createMailer } from '../../apps/api/src/mail/mailer.ts';
 
 let database: Database;
 let app: ReturnType<typeof createApp>['app'];
@@ -16,7 +17,8 @@ let firstSeed: Awaited<ReturnType<typeof seedDemoCity>>;
 beforeAll(async () => {
   database = await openDatabase({ pgliteDir: 'memory://' });
   firstSeed = await seedDemoCity(database.db);
-  app = createApp({ db: database.db, config: loadConfig({ NODE_ENV: 'test' }), logger: pino({ level: 'silent' }), sessionSecret: 'test' }).app;
+  const logger = pino({ level: 'silent' });
+  app = createApp({ db: database.db, config: loadConfig({ NODE_ENV: 'test' }), logger, sessionSecret: 'test', mailer: createMailer(null, logger) }).app;
 });
 afterAll(() => database.close());
 

@@ -21,11 +21,11 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 const expected: Record<Role, { landing: string; nav: string[] }> = {
-  admin: { landing: '/admin/users', nav: ['overview', 'sites', 'fields', 'users', 'audit'] },
-  head: { landing: '/overview', nav: ['overview', 'sites', 'fields', 'audit'] },
-  foreman: { landing: '/district', nav: ['district', 'sites', 'fields'] },
-  crew: { landing: '/today', nav: ['today', 'fields'] },
-  partner: { landing: '/my-fields', nav: ['my-fields'] },
+  admin: { landing: '/admin/users', nav: ['overview', 'sites', 'fields', 'map', 'standards', 'imports', 'users', 'audit'] },
+  head: { landing: '/overview', nav: ['overview', 'sites', 'fields', 'map', 'standards', 'imports', 'audit'] },
+  foreman: { landing: '/district', nav: ['district', 'sites', 'fields', 'map', 'imports'] },
+  crew: { landing: '/today', nav: ['today', 'fields', 'map'] },
+  partner: { landing: '/my-fields', nav: ['my-fields', 'map'] },
 };
 
 describe('signing in by role', () => {

@@ -4,12 +4,16 @@ import supertest from 'supertest';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
+import { createMailer } from '../../apps/api/src/mail/mailer.ts';
+import { startMailSink, type MailSink } from '../../apps/api/src/mail/sink.ts';
 import { buildFixture, PASSWORD, type Fixture } from './fixture.ts';
 
 export interface TestApi {
   database: Database;
   app: ReturnType<typeof createApp>['app'];
   fixture: Fixture;
+  /** The SMTP sink this API sends its e-mail to. */
+  mail: MailSink;
   /** A cookie-keeping client signed in as the fixture user. */
   signIn(user: keyof Fixture['users']): Promise<ReturnType<typeof supertest.agent>>;
   close(): Promise<void>;
@@ -19,17 +23,24 @@ export async function startTestApi(env: Record<string, string> = {}): Promise<Te
   const database = await openDatabase({ pgliteDir: 'memory://' });
   const fixture = await buildFixture(database.db);
   const config = loadConfig({ NODE_ENV: 'test', PUBLIC_URL: 'http://portal.test', ...env });
-  const { app } = createApp({ db: database.db, config, logger: pino({ level: 'silent' }), sessionSecret: 'test-secret' });
+  const logger = pino({ level: 'silent' });
+  const mail = await startMailSink();
+  const mailer = createMailer({ host: '127.0.0.1', port: mail.port, secure: false, ignoreTLS: true, from: config.mailFrom }, logger);
+  const { app } = createApp({ db: database.db, config, logger, sessionSecret: 'test-secret', mailer, mailSink: mail });
   return {
     database,
     app,
     fixture,
+    mail,
     async signIn(key) {
       const agent = supertest.agent(app);
       const res = await agent.post('/api/auth/sign-in').send({ email: fixture.users[key].email, password: PASSWORD });
       if (res.status !== 200) throw new Error(`sign-in as ${key} failed: ${res.status} ${JSON.stringify(res.body)}`);
       return agent;
     },
-    close: () => database.close(),
+    close: async () => {
+      await mail.close();
+      await database.close();
+    },
   };
 }

@@ -2,9 +2,9 @@
  * A small city built row by row for API tests: two districts, three sites, four fields,
  * two crews and one user per role (plus a second foreman and a deactivated account).
  */
-import type { Polygon, Role } from '@swardwise/domain';
+import { addDaysIso, DEFAULT_STANDARDS, LEVELS, type Polygon, type Role } from '@swardwise/domain';
 import type { Db } from '../../apps/api/src/db/client.ts';
-import { crews, districts, fields, sites, users, userSites } from '../../apps/api/src/db/schema/index.ts';
+import { crews, districts, fields, sites, standards, users, userSites, weatherDays, weatherStations } from '../../apps/api/src/db/schema/index.ts';
 import { hashPassword } from '../../apps/api/src/services/users.ts';
 import { polygonAreaM2 } from '@swardwise/domain';
 
@@ -53,7 +53,12 @@ export interface Fixture {
   fields: { northSoccer: number; northLawn: number; northSchoolFootball: number; southBaseball: number };
   crews: { north: number; south: number };
   users: Record<'admin' | 'head' | 'foreman' | 'foremanSouth' | 'crew' | 'partner' | 'inactive', { id: number; email: string; role: Role }>;
+  /** One station with daily weather from `weather.start` to `weather.end` (a few weeks of late spring). */
+  weather: { stationId: number; start: string; end: string };
 }
+
+/** Weather of the test city: a few weeks of invented, steadily warming late-spring days. */
+export const FIXTURE_WEATHER = { start: '2026-05-04', days: 35 } as const;
 
 export async function buildFixture(db: Db): Promise<Fixture> {
   const [north] = await db
@@ -120,7 +125,26 @@ export async function buildFixture(db: Db): Promise<Fixture> {
   await db.insert(userSites).values({ userId: partner.id, siteId: northSchool });
   const inactive = await user('inactive', 'foreman', { districtId: north!.id, active: false });
 
+  // The four levels of the Standards as a new installation starts with them.
+  await db.insert(standards).values(LEVELS.map((level) => ({ level, data: DEFAULT_STANDARDS[level] })));
+  const [station] = await db.insert(weatherStations).values({ code: 'test-wx', name: 'Test Weather', lat: 37.58, lng: -66.48, elevationM: 120 }).returning();
+  const weather = Array.from({ length: FIXTURE_WEATHER.days }, (_, i) => ({
+    stationId: station!.id,
+    date: addDaysIso(FIXTURE_WEATHER.start, i),
+    kind: 'observed' as const,
+    tmaxC: 22 + i * 0.15 + (i % 3),
+    tminC: 11 + i * 0.1,
+    rhMaxPct: 88,
+    rhMinPct: 45,
+    windMs: 2,
+    sunshineH: 9,
+    rainMm: i % 6 === 0 ? 12 : 0,
+    source: 'test',
+  }));
+  await db.insert(weatherDays).values(weather);
+
   return {
+    weather: { stationId: station!.id, start: FIXTURE_WEATHER.start, end: addDaysIso(FIXTURE_WEATHER.start, FIXTURE_WEATHER.days - 1) },
     districts: { north: north!.id, south: south!.id },
     sites: { northPark, northSchool, southPark },
     fields: { northSoccer, northLawn, northSchoolFootball, southBaseball },

@@ -11,27 +11,42 @@ import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import type { Config } from './config.ts';
 import type { Db } from './db/client.ts';
+import { createMailer, type Mailer } from './mail/mailer.ts';
+import type { MailSink } from './mail/sink.ts';
 import { loadUser, requireUser } from './http/auth.ts';
 import { errorHandler, notFound } from './http/errors.ts';
 import { DrizzleSessionStore } from './http/session-store.ts';
 import { authRouter } from './routes/auth.ts';
+import { crewsRouter } from './routes/crews.ts';
+import { devRouter } from './routes/dev.ts';
 import { directoryRouter } from './routes/directory.ts';
 import { fieldsRouter } from './routes/fields.ts';
+import { importsRouter } from './routes/imports.ts';
+import { mapRouter } from './routes/map.ts';
 import { sitesRouter } from './routes/sites.ts';
+import { standardsRouter } from './routes/standards.ts';
 import { usersRouter } from './routes/users.ts';
+import { weatherRouter } from './routes/weather.ts';
 
 export interface AppDeps {
   db: Db;
   config: Config & { cookieName: string };
   logger: Logger;
   sessionSecret: string;
+  mailer: Mailer;
+  /** The local SMTP sink, when this process runs one (development and tests only). */
+  mailSink?: MailSink | undefined;
 }
 
 export const COOKIE_NAME = 'swardwise.sid';
 const SESSION_DAYS = 14;
 
-export function createApp(deps: Omit<AppDeps, 'config'> & { config: Config }): { app: Express; store: DrizzleSessionStore } {
-  const full: AppDeps = { ...deps, config: { ...deps.config, cookieName: COOKIE_NAME } };
+export function createApp(
+  deps: Omit<AppDeps, 'config' | 'mailer'> & { config: Config; mailer?: Mailer },
+): { app: Express; store: DrizzleSessionStore } {
+  // Without a mailer, e-mail is off (logged), as in a deployment with no SMTP settings.
+  const mailer = deps.mailer ?? createMailer(null, deps.logger);
+  const full: AppDeps = { ...deps, mailer, config: { ...deps.config, cookieName: COOKIE_NAME } };
   const { db, config, logger } = full;
   const app = express();
   const store = new DrizzleSessionStore(db);
@@ -41,7 +56,13 @@ export function createApp(deps: Omit<AppDeps, 'config'> & { config: Config }): {
   app.use(
     helmet({
       // Plain-http installations on a local network must keep working; HTTPS ones set COOKIE_SECURE.
-      contentSecurityPolicy: { directives: { upgradeInsecureRequests: config.cookieSecure ? [] : null } },
+      contentSecurityPolicy: {
+        directives: {
+          upgradeInsecureRequests: config.cookieSecure ? [] : null,
+          // Map tiles load only from the one configured tile server (none by default).
+          imgSrc: ["'self'", 'data:', ...tileOrigins(config.mapTileUrl)],
+        },
+      },
       strictTransportSecurity: config.cookieSecure,
     }),
   );
@@ -84,9 +105,15 @@ export function createApp(deps: Omit<AppDeps, 'config'> & { config: Config }): {
   app.use('/api/auth', authRouter(full));
   app.use('/api', requireUser);
   app.use('/api/users', usersRouter(full));
+  app.use('/api/weather', weatherRouter(full));
   app.use('/api/sites', sitesRouter(full));
   app.use('/api/fields', fieldsRouter(full));
+  app.use('/api/standards', standardsRouter(full));
+  app.use('/api/imports', importsRouter(full));
+  app.use('/api/map', mapRouter(full));
   app.use('/api', directoryRouter(full));
+  app.use('/api', crewsRouter(full));
+  if (full.mailSink && !config.production) app.use('/api/dev', devRouter(full));
   app.use('/api', notFound('route'));
 
   // The built portal, with the single-page app's routes answered by index.html.
@@ -98,4 +125,15 @@ export function createApp(deps: Omit<AppDeps, 'config'> & { config: Config }): {
 
   app.use(errorHandler);
   return { app, store };
+}
+
+/** CSP source of a tile URL template: its origin, with a `{s}` subdomain as a wildcard. */
+function tileOrigins(tileUrl: string | undefined): string[] {
+  if (!tileUrl) return [];
+  try {
+    const url = new URL(tileUrl.replace(/\{s\}/g, 'tile-subdomain').replace(/\{[^}]*\}/g, '0'));
+    return [url.origin.replace('tile-subdomain', '*')];
+  } catch {
+    return [];
+  }
 }

@@ -22,6 +22,20 @@ export interface Config {
   loginAttempts: number;
   loginWindowMs: number;
   portalDist: string;
+  /** Map tile URL template ({z}/{x}/{y}); unset: the portal draws the bundled vector basemap and no request leaves the machine. */
+  mapTileUrl: string | undefined;
+  /** Attribution shown with the tiles of `mapTileUrl`. */
+  mapAttribution: string | undefined;
+  /** Outgoing mail server; null when SMTP_HOST is unset. */
+  smtp: { host: string; port: number; secure: boolean; user: string | undefined; pass: string | undefined } | null;
+  mailFrom: string;
+  /** Run the local SMTP sink (development only, when no SMTP_HOST is set). */
+  mailSink: boolean;
+  mailSinkPort: number;
+  /** Hosted weather service (our client's format); unset: station files only. */
+  weatherApiUrl: string | undefined;
+  weatherApiKey: string | undefined;
+  weatherTimeoutMs: number;
 }
 
 function bool(value: string | undefined, fallback: boolean): boolean {
@@ -46,5 +60,22 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     loginAttempts: Number(env.LOGIN_ATTEMPTS ?? 10),
     loginWindowMs: Number(env.LOGIN_WINDOW_MINUTES ?? 15) * 60_000,
     portalDist: path.resolve(env.PORTAL_DIST ?? path.join(repoRoot, 'apps/portal/dist')),
+    mapTileUrl: env.MAP_TILE_URL || undefined,
+    mapAttribution: env.MAP_ATTRIBUTION || undefined,
+    smtp: env.SMTP_HOST
+      ? {
+          host: env.SMTP_HOST,
+          port: Number(env.SMTP_PORT ?? 587),
+          secure: bool(env.SMTP_SECURE, false),
+          user: env.SMTP_USER || undefined,
+          pass: env.SMTP_PASS || undefined,
+        }
+      : null,
+    mailFrom: env.MAIL_FROM ?? 'Swardwise <no-reply@swardwise.example>',
+    mailSink: !env.SMTP_HOST && bool(env.MAIL_SINK, env.NODE_ENV !== 'production'),
+    mailSinkPort: Number(env.MAIL_SINK_PORT ?? 2525),
+    weatherApiUrl: env.WEATHER_API_URL || undefined,
+    weatherApiKey: env.WEATHER_API_KEY || undefined,
+    weatherTimeoutMs: Number(env.WEATHER_TIMEOUT_MS ?? 10_000),
   };
 }

@@ -106,6 +106,15 @@ const cases: Case[] = [
   ['foreman', 'read', 'AuditEntry', { districtId: D2 }, false],
   ['crew', 'read', 'AuditEntry', null, false],
   ['partner', 'read', 'AuditEntry', null, false],
+  // Imports of sites, fields and outlines
+  ['admin', 'create', 'Import', null, true],
+  ['head', 'create', 'Import', null, true],
+  ['head', 'read', 'Import', { districtId: D2 }, true],
+  ['foreman', 'create', 'Import', null, true],
+  ['foreman', 'read', 'Import', { districtId: D1 }, true],
+  ['foreman', 'read', 'Import', { districtId: D2 }, false],
+  ['crew', 'create', 'Import', null, false],
+  ['partner', 'create', 'Import', null, false],
   // Requests from partners
   ['partner', 'create', 'Request', { siteId: SITE_A, districtId: D1 }, true],
   ['partner', 'create', 'Request', { siteId: SITE_B, districtId: D2 }, false],

@@ -70,6 +70,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can('update', ['Standards', 'Settings']);
       // The head decides maintenance levels and may correct any site or field.
       can(['create', 'update'], ['Site', 'Field']);
+      can(['create', 'read'], 'Import');
       break;
 
     case 'foreman': {
@@ -79,6 +80,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can(['read', 'update'], 'Request', { districtId: d });
       can('read', ['Standards', 'Weather']);
       can('create', ['Import', 'Weather']);
+      can('read', 'Import', { districtId: d });
       can('read', 'AuditEntry', { districtId: d });
       can('read', 'User', { districtId: d });
       break;

@@ -1,10 +1,11 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { createFieldSchema, idParamSchema, listQuerySchema, updateFieldSchema, versionSchema } from '@swardwise/domain';
+import { createFieldSchema, idParamSchema, listQuerySchema, needsQuerySchema, updateFieldSchema, versionSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { createField, deleteField, getField, listFields, updateField } from '../services/fields.ts';
+import { fieldNeeds } from '../services/needs.ts';
 
 const deleteQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
 
@@ -25,6 +26,12 @@ export function fieldsRouter({ db }: AppDeps): Router {
   router.get('/:id', async (req, res) => {
     const { id } = parse(idParamSchema, req.params, 'params');
     res.json({ field: await getField(ctxOf(db, req), id) });
+  });
+
+  router.get('/:id/needs', async (req, res) => {
+    const { id } = parse(idParamSchema, req.params, 'params');
+    const { date } = parse(needsQuerySchema, req.query, 'query');
+    res.json({ needs: await fieldNeeds(ctxOf(db, req), id, date) });
   });
 
   router.patch('/:id', async (req, res) => {

@@ -1,3 +1,4 @@
+import type { CreateFieldInput, UpdateFieldInput } from '@swardwise/domain';
 import { api } from './client.ts';
 import type { FieldDetail, FieldRow, Items } from './types.ts';
 
@@ -7,4 +8,16 @@ export async function listFields(query: { districtId?: number; siteId?: number }
 
 export async function getField(id: number, signal?: AbortSignal): Promise<FieldDetail> {
   return (await api.get<{ field: FieldDetail }>(`/fields/${id}`, undefined, signal)).field;
+}
+
+export async function createField(input: CreateFieldInput): Promise<FieldDetail> {
+  return (await api.post<{ field: FieldDetail }>('/fields', input)).field;
+}
+
+export async function updateField(id: number, input: UpdateFieldInput): Promise<FieldDetail> {
+  return (await api.patch<{ field: FieldDetail }>(`/fields/${id}`, input)).field;
+}
+
+export async function deleteField(id: number, version: number): Promise<void> {
+  await api.delete<void>(`/fields/${id}?version=${version}`);
 }

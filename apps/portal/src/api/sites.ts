@@ -1,3 +1,4 @@
+import type { CreateSiteInput, UpdateSiteInput } from '@swardwise/domain';
 import { api } from './client.ts';
 import type { FieldRow, Items, SiteRow } from './types.ts';
 
@@ -7,4 +8,12 @@ export async function listSites(query: { districtId?: number } = {}, signal?: Ab
 
 export async function getSite(id: number, signal?: AbortSignal): Promise<{ site: SiteRow; fields: FieldRow[] }> {
   return api.get<{ site: SiteRow; fields: FieldRow[] }>(`/sites/${id}`, undefined, signal);
+}
+
+export async function createSite(input: CreateSiteInput): Promise<SiteRow> {
+  return (await api.post<{ site: SiteRow }>('/sites', input)).site;
+}
+
+export async function updateSite(id: number, input: UpdateSiteInput): Promise<SiteRow> {
+  return (await api.patch<{ site: SiteRow }>(`/sites/${id}`, input)).site;
 }

@@ -1,5 +1,9 @@
 import type {
   Clippings,
+  ImportKind,
+  ImportRow,
+  ImportStatus,
+  ImportSummary,
   FieldStatus,
   Grass,
   IrrigationKind,
@@ -115,4 +119,24 @@ export interface AuditEntry {
 
 export interface Items<T> {
   items: T[];
+}
+
+/** An upload of sites, fields or outlines, as previewed and as committed. */
+export interface ImportListItem {
+  id: number;
+  kind: ImportKind;
+  status: ImportStatus;
+  userId: number;
+  userName: string | null;
+  districtId: number | null;
+  fileName: string;
+  summary: ImportSummary;
+  createdAt: string;
+  committedAt: string | null;
+  undoneAt: string | null;
+}
+
+export interface ImportRecord extends ImportListItem {
+  rows: ImportRow[];
+  changes: { created: number; updated: number } | null;
 }

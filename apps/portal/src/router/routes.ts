@@ -23,6 +23,19 @@ export const routes: RouteRecordRaw[] = [
     meta: { public: true, title: 'Set your password' },
   },
   {
+    path: '/reset-password',
+    name: 'reset-password',
+    component: () => import('../views/AcceptInviteView.vue'),
+    props: { purpose: 'reset' },
+    meta: { public: true, title: 'Choose a new password' },
+  },
+  {
+    path: '/forgot-password',
+    name: 'forgot-password',
+    component: () => import('../views/ForgotPasswordView.vue'),
+    meta: { public: true, title: 'Forgot your password' },
+  },
+  {
     path: '/',
     component: () => import('../layouts/AppLayout.vue'),
     children: [
@@ -77,6 +90,24 @@ export const routes: RouteRecordRaw[] = [
         meta: { can: ['read', 'Field'], title: 'Field' },
       },
       {
+        path: 'standards',
+        name: 'standards',
+        component: () => import('../views/StandardsView.vue'),
+        meta: { can: ['read', 'Standards'], title: 'Standards' },
+      },
+      {
+        path: 'map',
+        name: 'map',
+        component: () => import('../views/MapView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman', 'crew', 'partner'], can: ['read', 'Field'], title: 'Map' },
+      },
+      {
+        path: 'imports',
+        name: 'imports',
+        component: () => import('../views/ImportsView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman'], can: ['create', 'Import'], title: 'Imports' },
+      },
+      {
         path: 'admin/users',
         name: 'users',
         component: () => import('../views/UsersView.vue'),
@@ -87,6 +118,13 @@ export const routes: RouteRecordRaw[] = [
         name: 'audit',
         component: () => import('../views/AuditView.vue'),
         meta: { roles: ['admin', 'head'], can: ['read', 'AuditEntry'], title: 'Audit log' },
+      },
+      {
+        // Development only: the API answers it when it runs the local mail sink.
+        path: 'dev/mail',
+        name: 'dev-mail',
+        component: () => import('../views/DevMailView.vue'),
+        meta: { roles: ['admin'], can: ['manage', 'Settings'], title: 'Development mail' },
       },
       { path: ':pathMatch(.*)*', name: 'not-found', component: () => import('../views/NotFoundView.vue'), meta: { title: 'Not found' } },
     ],

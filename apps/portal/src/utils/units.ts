@@ -32,3 +32,21 @@ export function formatDateTime(iso: string | null): string {
     ? iso
     : d.toLocaleString('en-US', { year: 'numeric', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' });
 }
+
+/** A large area as a plain number in acres or hectares (2 decimals), for exports. */
+export function landAreaValue(m2: number, units: UnitSystem): number {
+  return Math.round((units === 'imperial' ? m2 / M2_PER_ACRE : m2 / M2_PER_HA) * 100) / 100;
+}
+
+export const landAreaUnit = (units: UnitSystem) => (units === 'imperial' ? 'ac' : 'ha');
+export const hocUnit = (units: UnitSystem) => (units === 'imperial' ? 'in' : 'mm');
+
+/** A height of cut in the person's unit (inches to 0.01, or whole millimetres). */
+export function hocValue(mm: number, units: UnitSystem): number {
+  return units === 'imperial' ? Math.round((mm / MM_PER_IN) * 100) / 100 : Math.round(mm);
+}
+
+/** A height of cut entered in the person's unit, back to millimetres as stored. */
+export function hocToMm(value: number, units: UnitSystem): number {
+  return units === 'imperial' ? Math.round(value * MM_PER_IN * 10) / 10 : value;
+}

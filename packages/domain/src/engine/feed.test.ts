@@ -62,6 +62,19 @@ describe('feed', () => {
     expect(feed.phosphorusPotassium(null)).toMatchObject({ p2o5GPerM2: 0, k2oGPerM2: 0, basis: 'no_soil_test' });
   });
 
+  test('should split N by monthly mean GP and feed no month without weather or below the dormancy GP', () => {
+    const gp = [null, null, 0.05, 0.4, 0.8, 1, 0.6, 0.6, 0.8, 0.4, 0.2, null];
+    const split = feed.monthlyNSplitByGp(19.2, gp);
+    expect(split.reduce((s, v) => s + v, 0)).toBeCloseTo(19.2, 9);
+    expect(split[0]).toBe(0);
+    expect(split[2]).toBe(0);
+    expect(split[11]).toBe(0);
+    expect(split[5]! / split[3]!).toBeCloseTo(1 / 0.4, 9);
+    expect(feed.monthlyNSplitByGp(10, new Array(12).fill(null))).toEqual(new Array(12).fill(0));
+    expect(() => feed.monthlyNSplitByGp(10, [0.5])).toThrow(expect.objectContaining({ code: 'engine/invalid_monthly_series' }));
+    expect(() => feed.monthlyNSplitByGp(10, [1.5, ...new Array(11).fill(0)])).toThrow(expect.objectContaining({ code: 'engine/invalid_gp' }));
+  });
+
   test('should reject bad inputs', () => {
     expect(() => feed.annualNitrogen({ grass: 'clover' as never, level: 1, clippings: 'removed', irrigated: true })).toThrow(expect.objectContaining({ code: 'engine/unknown_grass' }));
     expect(() => feed.productRate(1, 0)).toThrow(expect.objectContaining({ code: 'engine/invalid_analysis' }));
@@ -69,5 +82,19 @@ describe('feed', () => {
     expect(() => feed.productForArea(1, { n: 20, p: 0, k: 0 }, -10, 20, 1)).toThrow(expect.objectContaining({ code: 'engine/invalid_area' }));
     expect(() => feed.monthlyNSplit(10, [10, 12], 'cool')).toThrow(expect.objectContaining({ code: 'engine/invalid_monthly_series' }));
     expect(() => feed.maxNPerApplication(1.5)).toThrow(expect.objectContaining({ code: 'engine/invalid_share' }));
+  });
+});
+
+describe('planNApplications — small monthly amounts', () => {
+  test('should carry amounts below a practical spreader rate into the next application and keep the total', () => {
+    // 0.1–0.2 lb N/1000 ft² a month (an Open space lawn): a crew would not spread that monthly.
+    const lb = lbPer1000Ft2ToGPerM2(1);
+    const monthly = [0, 0, 0.1 * lb, 0.2 * lb, 0.2 * lb, 0.1 * lb, 0.05 * lb, 0.1 * lb, 0.2 * lb, 0.1 * lb, 0, 0];
+    const apps = feed.planNApplications(monthly, { year: 2026 });
+    const total = monthly.reduce((a, b) => a + b, 0);
+    expect(apps.reduce((s, a) => s + a.nGPerM2, 0)).toBeCloseTo(total, 9);
+    expect(apps.length).toBeLessThanOrEqual(3);
+    for (const a of apps.slice(0, -1)) expect(a.nGPerM2).toBeGreaterThanOrEqual(DEFAULT_PARAMETERS.minNPerApplicationGPerM2 - 1e-9);
+    for (const a of apps) expect(a.nGPerM2).toBeLessThanOrEqual(DEFAULT_PARAMETERS.solubleNLimitGPerM2 + 1e-9);
   });
 });

@@ -76,6 +76,25 @@ export function monthlyNSplit(annualGPerM2: number, monthlyMeanC: readonly numbe
 }
 
 /**
+ * Monthly split of annual N in proportion to each month's mean daily growth potential (from
+ * daily weather, Gelernter & Stowell 2005 curve). A month without weather (null) or with GP
+ * below `minGp` (default 0.1, department rule: dormant turf is not fed) gets none and its
+ * share goes to the others.
+ */
+export function monthlyNSplitByGp(annualGPerM2: number, monthlyMeanGp: readonly (number | null)[], minGp = 0.1): number[] {
+  requireNonNegative(annualGPerM2, 'invalid_rate', 'annual N (g/m²)');
+  if (monthlyMeanGp.length !== 12) fail('invalid_monthly_series', `monthly growth potential needs 12 values (got ${monthlyMeanGp.length})`);
+  const w = monthlyMeanGp.map((g) => {
+    if (g === null) return 0;
+    requireFraction(g, 'invalid_gp', 'growth potential', true);
+    return g >= minGp ? g : 0;
+  });
+  const sum = w.reduce((s, v) => s + v, 0);
+  if (sum === 0) return w.map(() => 0);
+  return w.map((v) => (annualGPerM2 * v) / sum);
+}
+
+/**
  * Largest N per application (g/m²). The soluble part of an application stays within the
  * soluble-N limit (LSU AgCenter: ≤ 1 lb N/1000 ft²): with slow-release share s of the
  * product's N, rate ≤ limit ÷ (1 − s), never above the department's slow-release ceiling
@@ -100,22 +119,42 @@ export interface NApplication {
  * Applications for a monthly N plan: each month's N in ⌈N ÷ limit⌉ equal applications, spread
  * evenly through the month; no application exceeds `maxNPerApplication`.
  */
-export function planNApplications(monthlyGPerM2: readonly number[], options: { slowReleaseShare?: number; year?: number; params?: Pick<DepartmentParameters, 'solubleNLimitGPerM2' | 'slowReleaseNCeilingGPerM2'> } = {}): NApplication[] {
-  if (monthlyGPerM2.length !== 12) fail('invalid_monthly_series', `monthly N needs 12 values (got ${monthlyGPerM2.length})`);
-  const limit = maxNPerApplication(options.slowReleaseShare ?? 0, options.params ?? DEFAULT_PARAMETERS);
+export function planNApplications(
+  monthlyGPerM2: readonly number[],
+  options: { slowReleaseShare?: number; year?: number; params?: Pick<DepartmentParameters, 'solubleNLimitGPerM2' | 'slowReleaseNCeilingGPerM2'> & Partial<Pick<DepartmentParameters, 'minNPerApplicationGPerM2'>> } = {},
+): NApplication[] {
+  if (monthlyGPerM2.length !== 12) fail('invalid_monthly_series', `monthly N (g/m²) needs 12 values (got ${monthlyGPerM2.length})`);
+  const params = options.params ?? DEFAULT_PARAMETERS;
+  const limit = maxNPerApplication(options.slowReleaseShare ?? 0, params);
+  // Amounts too small for a spreader pass are carried forward into the next application.
+  const minimum = Math.min(params.minNPerApplicationGPerM2 ?? 0, limit);
   const out: NApplication[] = [];
-  monthlyGPerM2.forEach((n, i) => {
-    requireNonNegative(n, 'invalid_rate', 'monthly N (g/m²)');
-    if (n <= 1e-9) return;
+  const emit = (month: number, n: number) => {
     const count = Math.ceil(n / limit - 1e-9);
-    const month = i + 1;
     const days = options.year === undefined ? 30 : new Date(Date.UTC(options.year, month, 0)).getUTCDate();
     for (let k = 0; k < count; k++) {
       const day = Math.min(days, Math.max(1, Math.round(((k + 0.5) * days) / count)));
       const date = options.year === undefined ? null : `${String(options.year).padStart(4, '0')}-${String(month).padStart(2, '0')}-${String(day).padStart(2, '0')}`;
       out.push({ month, date, nGPerM2: n / count });
     }
+  };
+  let carry = 0;
+  let lastMonthWithN = 0;
+  monthlyGPerM2.forEach((n, i) => {
+    requireNonNegative(n, 'invalid_rate', 'monthly N (g/m²)');
+    if (n <= 1e-9) return;
+    lastMonthWithN = i + 1;
+    carry += n;
+    if (carry + 1e-9 < minimum) return;
+    emit(i + 1, carry);
+    carry = 0;
   });
+  if (carry > 1e-9) {
+    // The season's last small remainder joins the last application when it fits under the limit.
+    const last = out[out.length - 1];
+    if (last && last.nGPerM2 + carry <= limit + 1e-9) last.nGPerM2 += carry;
+    else emit(lastMonthWithN, carry);
+  }
   return out;
 }
 

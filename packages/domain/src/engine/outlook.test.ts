@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { addDaysIso } from './dates.ts';
-import { aggregateOutlooks, fieldOutlook, levelChangeDelta, prepareWeather } from './outlook.ts';
+import { aggregateOutlooks, fieldDailySeries, fieldOutlook, levelChangeDelta, prepareWeather } from './outlook.ts';
 import type { DailyWeather, OutlookField } from './outlook.ts';
 
 function season(days: number, opts: { rainEvery?: number; humid?: boolean } = {}): DailyWeather[] {
@@ -23,6 +23,21 @@ describe('outlook', () => {
     const pm = prepareWeather(season(30, { humid: true }), { latDeg: 38, elevationM: 100 });
     expect(pm.hargreavesDays).toBe(0);
     expect(pm.et0Mm[0]).toBeGreaterThan(0);
+  });
+
+  test('should give the daily series the outlook totals are made of', () => {
+    const w = prepareWeather(season(120, { rainEvery: 5, humid: true }), { latDeg: 38, elevationM: 100 });
+    const o = fieldOutlook(field, w);
+    const d = fieldDailySeries(field, w);
+    expect(d.kc).toBe(0.95);
+    expect(d.share).toBe(0.8);
+    expect(d.growthMm).toHaveLength(120);
+    expect(d.weeklyGrossMm).toHaveLength(Math.ceil(120 / 7));
+    expect(d.weeklyGrossMm.reduce((s, v) => s + v, 0)).toBeCloseTo(o.grossIrrigationMm, 9);
+    expect(Array.from(d.etcMm).reduce((s, v) => s + v, 0)).toBeCloseTo(o.etcMm, 9);
+    const dry = fieldDailySeries({ ...field, irrigation: 'none' }, w);
+    expect(dry.share).toBe(0);
+    expect(Math.max(...dry.grossNeedMm)).toBe(0);
   });
 
   test('should project a season with mowings, hours, N, water, paint and cost', () => {

@@ -156,6 +156,75 @@ export interface FieldOutlook extends OutlookTotals {
 /** Days of rain and ETc the water-stress modifier looks back over (department model). */
 export const WATER_STRESS_WINDOW_DAYS = 14;
 
+/** The day-by-day part of a field's outlook: growth, ETc and irrigation need. */
+export interface FieldDailySeries {
+  season: 'cool' | 'warm';
+  kc: number;
+  /** Share of ETc irrigation replaces (0 when the field or its level is not irrigated). */
+  share: number;
+  /** Maximum growth rate used, mm/day at GP = 1. */
+  gmaxMmPerDay: number;
+  du: number;
+  gp: Float64Array;
+  /** Predicted vertical growth, mm/day (Gmax × GP × 14-day water modifier). */
+  growthMm: number[];
+  etcMm: Float64Array;
+  /** Gross irrigation need of each day, mm: max(0, share × ETc − effective rain) ÷ DU (0 when not irrigated). */
+  grossNeedMm: Float64Array;
+  /** Gross need per block of 7 days from the start of the series (the last block may be shorter), mm. */
+  weeklyGrossMm: number[];
+}
+
+/**
+ * Daily growth and water for a field over a prepared weather series, as `fieldOutlook` uses
+ * them: Kc from FAO-56 Table 12 (reduced by 0.10 where the level says), ETc = Kc × ET0, growth
+ * = Gmax × GP × water modifier over the last 14 days of (effective rain + irrigation) ÷ ETc
+ * (department model), weekly gross need = net need (share × ΣETc − Σ effective rain) ÷ DU.
+ */
+export function fieldDailySeries(field: OutlookField, weather: PreparedWeather, standards: Standards = DEFAULT_STANDARDS, params: DepartmentParameters = DEFAULT_PARAMETERS): FieldDailySeries {
+  const season = grassSeason(field.grass);
+  const std = levelStandard(field.maintenanceLevel, standards);
+  const n = weather.dates.length;
+  const kc = turfKc(season, { reduced: std.reducedKc });
+  const share = field.irrigation !== 'none' && std.irrigationShareOfEtc !== null ? std.irrigationShareOfEtc : 0;
+  const gmax = requireNonNegative(field.maxGrowthMmPerDay ?? params.maxGrowthMmPerDay[field.grass], 'invalid_growth_rate', 'maximum growth rate (mm/day)');
+  const gp = season === 'cool' ? weather.gpCool : weather.gpWarm;
+  const du = field.distributionUniformity ?? params.irrigation.distributionUniformity;
+
+  const growth = new Array<number>(n);
+  const etcDaily = new Float64Array(n);
+  const grossDaily = new Float64Array(n);
+  const weeklyGrossMm: number[] = [];
+  for (let i = 0; i < n; i++) etcDaily[i] = cropEvapotranspiration(kc, weather.et0Mm[i] as number);
+  let etcWindow = 0;
+  let rainWindow = 0;
+  let weekEtc = 0;
+  let weekRain = 0;
+  for (let i = 0; i < n; i++) {
+    const etc = etcDaily[i] as number;
+    const eff = weather.effectiveRainMm[i] as number;
+    etcWindow += etc;
+    rainWindow += eff;
+    if (i >= WATER_STRESS_WINDOW_DAYS) {
+      etcWindow -= etcDaily[i - WATER_STRESS_WINDOW_DAYS] as number;
+      rainWindow -= weather.effectiveRainMm[i - WATER_STRESS_WINDOW_DAYS] as number;
+    }
+    const supply = Math.max(0, rainWindow) + share * Math.max(0, etcWindow);
+    growth[i] = gmax * (gp[i] as number) * waterModifier(supply, Math.max(0, etcWindow));
+    if (share > 0) {
+      grossDaily[i] = grossIrrigationMm(netIrrigationMm(etc, eff, share), du);
+      weekEtc += etc;
+      weekRain += eff;
+    }
+    if ((i + 1) % 7 === 0 || i === n - 1) {
+      weeklyGrossMm.push(share > 0 ? grossIrrigationMm(netIrrigationMm(weekEtc, weekRain, share), du) : 0);
+      weekEtc = 0;
+      weekRain = 0;
+    }
+  }
+  return { season, kc, share, gmaxMmPerDay: gmax, du, gp, growthMm: growth, etcMm: etcDaily, grossNeedMm: grossDaily, weeklyGrossMm };
+}
+
 /**
  * Season projection for one field over a prepared weather series.
  * Growth: Gmax × GP × water modifier, where the water modifier is (effective rain +
@@ -166,47 +235,13 @@ export const WATER_STRESS_WINDOW_DAYS = 14;
  */
 export function fieldOutlook(field: OutlookField, weather: PreparedWeather, standards: Standards = DEFAULT_STANDARDS, params: DepartmentParameters = DEFAULT_PARAMETERS): FieldOutlook {
   requireNonNegative(field.areaM2, 'invalid_area', 'field area (m²)');
-  const season = grassSeason(field.grass);
   const std = levelStandard(field.maintenanceLevel, standards);
   const hocMm = hocFor(field, standards);
   const n = weather.dates.length;
-  const kc = turfKc(season, { reduced: std.reducedKc });
-  const share = field.irrigation !== 'none' && std.irrigationShareOfEtc !== null ? std.irrigationShareOfEtc : 0;
-  const gmax = requireNonNegative(field.maxGrowthMmPerDay ?? params.maxGrowthMmPerDay[field.grass], 'invalid_growth_rate', 'maximum growth rate (mm/day)');
-  const gp = season === 'cool' ? weather.gpCool : weather.gpWarm;
-
-  const growth = new Array<number>(n);
-  const etcDaily = new Float64Array(n);
-  for (let i = 0; i < n; i++) etcDaily[i] = cropEvapotranspiration(kc, weather.et0Mm[i] as number);
-  let etcWindow = 0;
-  let rainWindow = 0;
-  let etcTotal = 0;
-  let grossTotal = 0;
-  let weekEtc = 0;
-  let weekRain = 0;
-  const du = field.distributionUniformity ?? params.irrigation.distributionUniformity;
-  for (let i = 0; i < n; i++) {
-    const etc = etcDaily[i] as number;
-    const eff = weather.effectiveRainMm[i] as number;
-    etcTotal += etc;
-    etcWindow += etc;
-    rainWindow += eff;
-    if (i >= WATER_STRESS_WINDOW_DAYS) {
-      etcWindow -= etcDaily[i - WATER_STRESS_WINDOW_DAYS] as number;
-      rainWindow -= weather.effectiveRainMm[i - WATER_STRESS_WINDOW_DAYS] as number;
-    }
-    const supply = Math.max(0, rainWindow) + share * Math.max(0, etcWindow);
-    growth[i] = gmax * (gp[i] as number) * waterModifier(supply, Math.max(0, etcWindow));
-    if (share > 0) {
-      weekEtc += etc;
-      weekRain += eff;
-      if ((i + 1) % 7 === 0 || i === n - 1) {
-        grossTotal += grossIrrigationMm(netIrrigationMm(weekEtc, weekRain, share), du);
-        weekEtc = 0;
-        weekRain = 0;
-      }
-    }
-  }
+  const daily = fieldDailySeries(field, weather, standards, params);
+  const { share, growthMm: growth } = daily;
+  const grossTotal = daily.weeklyGrossMm.reduce((s, v) => s + v, 0);
+  const etcTotal = daily.etcMm.reduce((s, v) => s + v, 0);
 
   const sim = simulateMowing(hocMm, growth, hocMm, {
     startDate: weather.startDate,

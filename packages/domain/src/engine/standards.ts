@@ -132,6 +132,11 @@ export interface DepartmentParameters {
   solubleNLimitGPerM2: number;
   /** Ceiling per application with slow-release N, g N/m² (department rule, no published source). */
   slowReleaseNCeilingGPerM2: number;
+  /**
+   * Smallest N per application worth a spreader pass; smaller monthly amounts are carried into
+   * the next application. Common practice: granular rates of about 0.5–1 lb N/1000 ft².
+   */
+  minNPerApplicationGPerM2: number;
   /** Trailer travel between sites. Road factor and speed are department settings. */
   travel: { roadFactor: number; speedKmh: number; loadUnloadMin: number };
   /** Invented demo costs — replace with the department's own prices. */
@@ -175,6 +180,7 @@ export const DEFAULT_PARAMETERS: DepartmentParameters = {
   },
   solubleNLimitGPerM2: G_PER_M2_PER_LB_PER_1000FT2,
   slowReleaseNCeilingGPerM2: 2 * G_PER_M2_PER_LB_PER_1000FT2,
+  minNPerApplicationGPerM2: 0.5 * G_PER_M2_PER_LB_PER_1000FT2,
   travel: { roadFactor: 1.3, speedKmh: 35, loadUnloadMin: 15 },
   costs: { currency: 'USD', waterPerM3: 1.2, labourPerHour: 32, paintPerLitre: 4.5, fertiliserPerKg: 1.6 },
   hardnessSafeRangeG: { min: 20, max: 100 },

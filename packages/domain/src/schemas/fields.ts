@@ -16,15 +16,22 @@ const fieldFields = {
     error: 'maintenance level must be 1, 2, 3 or 4',
   }),
   /** Height of cut override in millimetres; null follows the Standards. */
-  hocOverrideMm: z.number().min(3, 'a height of cut below 3 mm is not a turf height').max(150, 'a height of cut above 150 mm is not mowing').nullable().default(null),
+  hocOverrideMm: z.number().min(3, 'a height of cut below 3 mm is not a turf height').max(150, 'a height of cut above 150 mm is not mowing').nullable(),
   clippings: oneOf(CLIPPINGS, 'clippings'),
-  status: oneOf(FIELD_STATUSES, 'status').default('open'),
-  statusNote: z.string().max(500).default(''),
+  status: oneOf(FIELD_STATUSES, 'status'),
+  statusNote: z.string().max(500),
   geometry: polygonSchema,
-  weeklyUseHours: z.number().min(0).max(168, 'a week has 168 hours').default(0),
+  weeklyUseHours: z.number().min(0).max(168, 'a week has 168 hours'),
 };
 
-export const createFieldSchema = z.object(fieldFields);
+// Defaults belong to creation only: an update that leaves a key out leaves it as it is.
+export const createFieldSchema = z.object({
+  ...fieldFields,
+  hocOverrideMm: fieldFields.hocOverrideMm.default(null),
+  status: fieldFields.status.default('open'),
+  statusNote: fieldFields.statusNote.default(''),
+  weeklyUseHours: fieldFields.weeklyUseHours.default(0),
+});
 export type CreateFieldInput = z.infer<typeof createFieldSchema>;
 
 export const updateFieldSchema = z

@@ -3,3 +3,8 @@ export * from './auth.ts';
 export * from './users.ts';
 export * from './sites.ts';
 export * from './fields.ts';
+export * from './imports.ts';
+export * from './map.ts';
+export * from './standards.ts';
+export * from './weather.ts';
+export * from './crews.ts';

@@ -1,6 +1,6 @@
-import { mount } from '@vue/test-utils';
+import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
-import { describe, expect, test } from 'vitest';
+import { beforeEach, describe, expect, test } from 'vitest';
 import { nextTick } from 'vue';
 import DataTable from './DataTable.vue';
 import { columnHelper } from './features.ts';
@@ -9,6 +9,7 @@ interface Row {
   name: string;
   level: number;
   district: string;
+  areaM2?: number;
 }
 
 const LEVEL_NAMES: Record<number, string> = { 1: 'Showcase', 2: 'Competition', 3: 'Community', 4: 'Open space' };
@@ -17,6 +18,7 @@ const columns = [
   col.accessor('name', { header: 'Name' }),
   col.accessor('level', { header: 'Level', filterFn: 'equals', meta: { text: (v: number) => `${v} ${LEVEL_NAMES[v]}` } }),
   col.accessor('district', { header: 'District', filterFn: 'equals' }),
+  col.accessor('areaM2', { header: 'Area', meta: { exportHeader: 'Area (ac)', exportValue: (m2: number) => Math.round((m2 / 4046.8564224) * 100) / 100 } }),
 ];
 
 function rows(n: number): Row[] {
@@ -36,6 +38,11 @@ function mountTable(data: Row[], pageSize = 25) {
 
 const names = (w: ReturnType<typeof mountTable>) =>
   w.findAll('[data-test="row"]').map((r) => r.findAll('td')[0]!.text());
+
+beforeEach(() => localStorage.clear());
+
+const headers = (w: ReturnType<typeof mountTable>) => w.findAll('thead th').map((th) => th.text().replace(/[▲▼↕]/g, '').trim());
+type Exposed = { csvText: () => string; table: { getColumn: (id: string) => { toggleVisibility: (v: boolean) => void; setFilterValue: (v: unknown) => void } } };
 
 describe('DataTable', () => {
   test('should sort by a column when its header is clicked, ascending then descending', async () => {
@@ -82,5 +89,53 @@ describe('DataTable', () => {
   test('should say so when the data is empty', () => {
     const w = mountTable([]);
     expect(w.get('[data-test="table-empty"]').text()).toBe('Nothing to show.');
+  });
+
+  test('should hide a column chosen in the column menu and remember the choice for that table', async () => {
+    const w = mountTable(rows(3));
+    expect(headers(w)).toEqual(['Name', 'Level', 'District', 'Area']);
+    await w.get('[data-test="table-columns"]').trigger('click');
+    await flushPromises();
+    const box = w.get('[data-test="column-district"] input');
+    await box.setValue(false);
+    await nextTick();
+    expect(headers(w)).toEqual(['Name', 'Level', 'Area']);
+    expect(w.findAll('[data-test="row"]')[0]!.findAll('td')).toHaveLength(3);
+    expect(JSON.parse(localStorage.getItem('swardwise.table.fields.columns')!)).toEqual({ district: false });
+    w.unmount();
+
+    const again = mountTable(rows(3));
+    expect(headers(again)).toEqual(['Name', 'Level', 'Area']);
+    const other = mount(DataTable<Row>, { props: { data: rows(3), columns, label: 'sites' }, global: { plugins: [ElementPlus] } });
+    expect(other.findAll('thead th')).toHaveLength(4);
+  });
+
+  test('should keep at least one column visible', async () => {
+    const w = mountTable(rows(2));
+    const table = (w.vm as unknown as Exposed).table;
+    for (const id of ['level', 'district', 'areaM2']) table.getColumn(id).toggleVisibility(false);
+    await nextTick();
+    await w.get('[data-test="table-columns"]').trigger('click');
+    await flushPromises();
+    expect(w.get('[data-test="column-name"] input').attributes('disabled')).toBeDefined();
+  });
+
+  test('should export the filtered rows of every page and the visible columns as CSV, with units in the headers', async () => {
+    const data = rows(12).map((r, i) => ({ ...r, name: i === 0 ? 'Field "A", north' : r.name, areaM2: 4046.8564224 * (i + 1) }));
+    const w = mountTable(data, 5);
+    const exposed = w.vm as unknown as Exposed;
+    exposed.table.getColumn('district').setFilterValue('North');
+    exposed.table.getColumn('level').toggleVisibility(false);
+    await nextTick();
+    const lines = exposed.csvText().split('\r\n');
+    expect(lines[0]).toBe('Name,District,Area (ac)');
+    // Six North rows over two pages of five, all exported.
+    expect(lines).toHaveLength(7);
+    expect(lines[1]).toBe('Field 02,North,2');
+    expect(lines.at(-1)).toBe('Field 12,North,12');
+
+    exposed.table.getColumn('district').setFilterValue('South');
+    await nextTick();
+    expect(exposed.csvText().split('\r\n')[1]).toBe('"Field ""A"", north",South,1');
   });
 });

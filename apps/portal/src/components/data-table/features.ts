@@ -1,5 +1,6 @@
 import {
   columnFilteringFeature,
+  columnVisibilityFeature,
   createColumnHelper,
   createFilteredRowModel,
   createPaginatedRowModel,
@@ -24,10 +25,18 @@ export interface DataColumnMeta {
   // eslint-disable-next-line @typescript-eslint/no-explicit-any
   text?: (value: any) => string;
   align?: 'left' | 'right';
+  /** Header of the column in a CSV export, with its unit, e.g. "Area (ac)"; defaults to the header. */
+  exportHeader?: string;
+  /** Value of a cell in a CSV export (a plain number in the header's unit); defaults to `text` or the value. */
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  exportValue?: (value: any) => string | number | null;
+  /** Controls such as an "Edit" button: left out of the CSV export. */
+  exportable?: boolean;
 }
 
-/** The features every Swardwise table has: sort, global and per-column filter, pages. */
+/** The features every Swardwise table has: sort, global and per-column filter, pages, column choice. */
 export const dataTableFeatures = tableFeatures({
+  columnVisibilityFeature,
   rowSortingFeature,
   sortedRowModel: createSortedRowModel(),
   sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic, text: sortFn_text, datetime: sortFn_datetime },

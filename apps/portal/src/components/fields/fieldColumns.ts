@@ -12,7 +12,7 @@ import {
 import { h } from 'vue';
 import { RouterLink } from 'vue-router';
 import type { FieldRow } from '../../api/types.ts';
-import { formatHoc, formatLandArea } from '../../utils/units.ts';
+import { formatHoc, formatLandArea, hocUnit, hocValue, landAreaUnit, landAreaValue } from '../../utils/units.ts';
 import { columnHelper, type DataColumn } from '../data-table/features.ts';
 import LevelTag from './LevelTag.vue';
 import StatusTag from './StatusTag.vue';
@@ -65,7 +65,7 @@ export function fieldColumns(units: UnitSystem, keys: FieldColumnKey[]): DataCol
       id: 'area',
       header: 'Area',
       enableGlobalFilter: false,
-      meta: { align: 'right' },
+      meta: { align: 'right', exportHeader: `Area (${landAreaUnit(units)})`, exportValue: (m2: number) => landAreaValue(m2, units) },
       cell: (c) => formatLandArea(c.getValue(), units),
     }),
     hoc: col.accessor('hocOverrideMm', {
@@ -73,7 +73,11 @@ export function fieldColumns(units: UnitSystem, keys: FieldColumnKey[]): DataCol
       header: 'HOC override',
       enableGlobalFilter: false,
       sortUndefined: 'last',
-      meta: { align: 'right' },
+      meta: {
+        align: 'right',
+        exportHeader: `HOC override (${hocUnit(units)})`,
+        exportValue: (mm: number | null) => (mm === null ? null : hocValue(mm, units)),
+      },
       cell: (c) => {
         const mm = c.getValue();
         return mm === null ? h('span', { class: 'sw-muted' }, 'per Standards') : formatHoc(mm, units);

@@ -1,7 +1,7 @@
 import type { Action, AppAbility, Role, SubjectName } from '@swardwise/domain';
 
 export interface NavItem {
-  key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields';
+  key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields' | 'standards' | 'map' | 'imports';
   label: string;
   to: string;
   roles: Role[];
@@ -19,6 +19,9 @@ export const NAV_ITEMS: NavItem[] = [
   { key: 'my-fields', label: 'My fields', to: '/my-fields', roles: ['partner'], can: ['read', 'Field'] },
   { key: 'sites', label: 'Sites', to: '/sites', roles: ['admin', 'head', 'foreman'], can: ['read', 'Site'] },
   { key: 'fields', label: 'Fields', to: '/fields', roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'] },
+  { key: 'map', label: 'Map', to: '/map', roles: ['admin', 'head', 'foreman', 'crew', 'partner'], can: ['read', 'Field'] },
+  { key: 'standards', label: 'Standards', to: '/standards', roles: ['admin', 'head'], can: ['read', 'Standards'] },
+  { key: 'imports', label: 'Imports', to: '/imports', roles: ['admin', 'head', 'foreman'], can: ['create', 'Import'] },
   { key: 'users', label: 'Users', to: '/admin/users', roles: ['admin'], can: ['create', 'User'] },
   { key: 'audit', label: 'Audit log', to: '/audit', roles: ['admin', 'head'], can: ['read', 'AuditEntry'] },
 ];

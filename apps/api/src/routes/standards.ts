@@ -1,0 +1,23 @@
+import { Router } from 'express';
+import { levelParamSchema, updateLevelStandardSchema, type Level } from '@swardwise/domain';
+import type { AppDeps } from '../app.ts';
+import { ctxOf } from '../http/auth.ts';
+import { parse } from '../http/validate.ts';
+import { listStandards, updateLevelStandard } from '../services/standards.ts';
+
+export function standardsRouter({ db }: AppDeps): Router {
+  const router = Router();
+
+  router.get('/', async (req, res) => {
+    res.json(await listStandards(ctxOf(db, req)));
+  });
+
+  router.patch('/:level', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    const { level } = parse(levelParamSchema, req.params, 'params');
+    const input = parse(updateLevelStandardSchema, req.body, 'body');
+    res.json({ standard: await updateLevelStandard(ctx, level as Level, input) });
+  });
+
+  return router;
+}

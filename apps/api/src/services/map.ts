@@ -1,0 +1,398 @@
+/**
+ * The map: everything the caller may see in one compact answer, with the values of every
+ * map theme. Overdue mowing is grown by the turf engine from the last mowing over the
+ * nearest station's weather (one-third rule: overdue above 1.5 × HOC).
+ *
+ * PGlite runs one query at a time, so the answer is built from a handful of queries and
+ * computed in memory; it is cached per (caller's scope, day, data fingerprint), and the
+ * fingerprint changes with any write to the tables it reads.
+ */
+import { and, asc, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
+import {
+  DEFAULT_PARAMETERS,
+  DEFAULT_STANDARDS,
+  GRASSES,
+  LEVELS,
+  dailyGrowthMm,
+  districtScope,
+  grassSeason,
+  greatCircleKm,
+  hocFor,
+  isoToDayNumber,
+  dayNumberToIso,
+  mowTriggerHeightMm,
+  type Grass,
+  type Level,
+  type LevelStandard,
+  type MapQuery,
+  type Polygon,
+  type Standards,
+} from '@swardwise/domain';
+import { districts, fieldChecks, fields, settings, sites, standards, weatherDays, weatherStations } from '../db/schema/index.ts';
+import { authorize, can, type Ctx } from './context.ts';
+import { siteScope } from './scope.ts';
+
+export interface MapDistrict {
+  id: number;
+  name: string;
+  boundary: Polygon;
+}
+
+export interface MapSite {
+  id: number;
+  name: string;
+  kind: string;
+  districtId: number;
+  lat: number;
+  lng: number;
+}
+
+export interface MapField {
+  id: number;
+  siteId: number;
+  districtId: number;
+  name: string;
+  sport: string;
+  grass: string;
+  maintenanceLevel: number;
+  status: string;
+  areaM2: number;
+  longAxisDeg: number | null;
+  /** Long axis closer to east–west than north–south (low sun in players' eyes at one end). */
+  eastWest: boolean;
+  /** Latest surface score (0–100) and the day of that field check; null without checks. */
+  score: number | null;
+  scoredOn: string | null;
+  lastMowedOn: string | null;
+  /** Whole days from the last mowing to `asOf`; null when never mowed. */
+  daysSinceMowing: number | null;
+  hocMm: number;
+  /** Grass height the engine predicts at the end of `asOf`, mm; null without a last mowing or weather. */
+  predictedHeightMm: number | null;
+  /** Predicted height above 1.5 × HOC (one-third rule); null when it cannot be computed. */
+  overdue: boolean | null;
+  /** Day the predicted height first passed 1.5 × HOC. */
+  overdueSince: string | null;
+  version: number;
+  geometry: Polygon;
+}
+
+export interface MapAnswer {
+  /** The day the values describe: today, or the latest day with weather when today has none. */
+  asOf: string;
+  /** The day asked for (today unless `asOf` was given). */
+  requested: string;
+  /** Plain words when `asOf` is not the day asked for, or weather is missing. */
+  weatherNote: string | null;
+  districts: MapDistrict[];
+  sites: MapSite[];
+  fields: MapField[];
+}
+
+export interface BasemapAnswer {
+  basemap: unknown;
+  tileUrl: string | null;
+  attribution: string | null;
+}
+
+const round6 = (v: number) => Math.round(v * 1e6) / 1e6;
+const round1 = (v: number) => Math.round(v * 10) / 10;
+
+/** Positions to 6 decimals (about 0.1 m): a third of the bytes of full precision. */
+function compact(polygon: Polygon): Polygon {
+  return { type: 'Polygon', coordinates: polygon.coordinates.map((ring) => ring.map((p) => [round6(p[0]), round6(p[1])])) as Polygon['coordinates'] };
+}
+
+function todayIso(): string {
+  return new Date().toISOString().slice(0, 10);
+}
+
+/** One query: changes whenever a row the map reads is written, added or removed. */
+async function fingerprint(db: Ctx['db']): Promise<string> {
+  const res = await db.execute(sql`select concat_ws('|',
+    (select count(*) || ':' || coalesce(max(${fields.updatedAt})::text, '') || ':' || coalesce(max(${fields.id}), 0)
+       || ':' || coalesce(sum(${fields.version}), 0) || ':' || coalesce(sum(${fields.lastMowedOn} - date '2000-01-01'), 0) from ${fields}),
+    (select count(*) || ':' || coalesce(max(${fieldChecks.id}), 0) from ${fieldChecks}),
+    (select count(*) || ':' || coalesce(max(${weatherDays.updatedAt})::text, '') from ${weatherDays}),
+    (select count(*) || ':' || coalesce(max(${weatherStations.updatedAt})::text, '') from ${weatherStations}),
+    (select coalesce(sum(${standards.version}), 0) || ':' || coalesce(max(${standards.updatedAt})::text, '') from ${standards}),
+    (select count(*) || ':' || coalesce(max(${sites.updatedAt})::text, '') from ${sites}),
+    (select count(*) || ':' || coalesce(max(${districts.updatedAt})::text, '') from ${districts})
+  ) as v`);
+  return String((res.rows[0] as { v: string }).v);
+}
+
+function scopeKey(ctx: Ctx): string {
+  const a = ctx.actor;
+  if (a.role === 'admin' || a.role === 'head') return a.role;
+  if (a.role === 'partner') return `partner:${[...a.siteIds].sort((x, y) => x - y).join(',')}`;
+  return `${a.role}:${a.districtId ?? '-'}`;
+}
+
+const CACHE_LIMIT = 32;
+/** Answers by key, kept as JSON too: serialising 3,000 outlines costs more than the lookup. */
+const caches = new WeakMap<object, Map<string, { answer: MapAnswer; json: string }>>();
+
+async function cached(ctx: Ctx, query: MapQuery) {
+  authorize(ctx, 'read', 'Field');
+  const requested = query.asOf ?? todayIso();
+  const key = `${scopeKey(ctx)}|${requested}|${await fingerprint(ctx.db)}`;
+  let cache = caches.get(ctx.db);
+  if (!cache) caches.set(ctx.db, (cache = new Map()));
+  const hit = cache.get(key);
+  if (hit) return hit;
+  const answer = await buildMap(ctx, requested);
+  const entry = { answer, json: JSON.stringify(answer) };
+  if (cache.size >= CACHE_LIMIT) cache.delete(cache.keys().next().value!);
+  cache.set(key, entry);
+  return entry;
+}
+
+/** Everything on the map the caller may see (see `MapAnswer`). */
+export async function mapData(ctx: Ctx, query: MapQuery): Promise<MapAnswer> {
+  return (await cached(ctx, query)).answer;
+}
+
+/** The same answer, already serialised for the response. */
+export async function mapDataJson(ctx: Ctx, query: MapQuery): Promise<string> {
+  return (await cached(ctx, query)).json;
+}
+
+interface StationSeries {
+  id: number;
+  lat: number;
+  lng: number;
+  latest: string | null;
+}
+
+async function buildMap(ctx: Ctx, requested: string): Promise<MapAnswer> {
+  const { db } = ctx;
+  const scope = siteScope(ctx.actor);
+  const dScope = districtScope(ctx.actor);
+  const districtCond: SQL | undefined = dScope === 'all' ? undefined : dScope.length ? inArray(districts.id, dScope) : sql`false`;
+
+  const latest = db.$with('latest').as(
+    db
+      .selectDistinctOn([fieldChecks.fieldId], { fieldId: fieldChecks.fieldId, score: fieldChecks.score, checkedOn: fieldChecks.checkedOn })
+      .from(fieldChecks)
+      .orderBy(fieldChecks.fieldId, desc(fieldChecks.checkedOn), desc(fieldChecks.id)),
+  );
+
+  const districtRows = await db.select({ id: districts.id, name: districts.name, boundary: districts.boundary }).from(districts).where(districtCond).orderBy(asc(districts.name));
+  const siteRows = await db
+    .select({ id: sites.id, name: sites.name, kind: sites.kind, districtId: sites.districtId, lat: sites.lat, lng: sites.lng })
+    .from(sites)
+    .where(scope)
+    .orderBy(asc(sites.name));
+  const fieldRows = await db
+    .with(latest)
+    .select({
+      id: fields.id,
+      siteId: fields.siteId,
+      districtId: sites.districtId,
+      name: fields.name,
+      sport: fields.sport,
+      grass: fields.grass,
+      maintenanceLevel: fields.maintenanceLevel,
+      hocOverrideMm: fields.hocOverrideMm,
+      status: fields.status,
+      areaM2: fields.areaM2,
+      longAxisDeg: fields.longAxisDeg,
+      lastMowedOn: fields.lastMowedOn,
+      version: fields.version,
+      geometry: fields.geometry,
+      score: latest.score,
+      scoredOn: latest.checkedOn,
+    })
+    .from(fields)
+    .innerJoin(sites, eq(sites.id, fields.siteId))
+    .leftJoin(latest, eq(latest.fieldId, fields.id))
+    .where(scope)
+    .orderBy(asc(fields.id));
+  const standardRows = await db.select({ level: standards.level, data: standards.data }).from(standards);
+  const stationRows: StationSeries[] = await db
+    .select({ id: weatherStations.id, lat: weatherStations.lat, lng: weatherStations.lng, latest: sql<string | null>`max(${weatherDays.date})` })
+    .from(weatherStations)
+    .leftJoin(weatherDays, eq(weatherDays.stationId, weatherStations.id))
+    .groupBy(weatherStations.id);
+
+  const visibleSites = siteRows.filter((s) => can(ctx, 'read', 'Site', s));
+  const visibleFields = fieldRows.filter((f) => can(ctx, 'read', 'Field', f));
+  const standardsTable = standardsFrom(standardRows);
+
+  // The day the map describes: the day asked for, or the latest day with weather before it.
+  const withWeather = stationRows.filter((s) => s.latest !== null);
+  const latestWeather = withWeather.reduce<string | null>((m, s) => (m === null || s.latest! > m ? s.latest : m), null);
+  let asOf = requested;
+  let weatherNote: string | null = null;
+  if (latestWeather === null) {
+    weatherNote = 'No weather is recorded yet, so overdue mowing cannot be predicted.';
+  } else if (latestWeather < requested) {
+    asOf = latestWeather;
+    weatherNote = `No weather after ${latestWeather}: heights and overdue flags are as of ${latestWeather}, the latest day with weather, not ${requested}.`;
+  }
+
+  // Nearest station (great-circle distance) with weather, per site.
+  const stationOfSite = new Map<number, number>();
+  for (const s of siteRows) {
+    let best: StationSeries | null = null;
+    let bestKm = Infinity;
+    for (const st of withWeather) {
+      const km = greatCircleKm(s, st);
+      if (km < bestKm) [best, bestKm] = [st, km];
+    }
+    if (best) stationOfSite.set(s.id, best.id);
+  }
+
+  const mowed = visibleFields.map((f) => f.lastMowedOn).filter((d): d is string => d !== null && d < asOf);
+  const from = mowed.length ? mowed.reduce((a, b) => (a < b ? a : b)) : null;
+  const usedStations = [...new Set(visibleFields.map((f) => stationOfSite.get(f.siteId)).filter((id): id is number => id !== undefined))];
+  const growth = from && usedStations.length ? await growthTables(db, usedStations, from, asOf) : null;
+  let gapDays = 0;
+
+  const out: MapField[] = visibleFields.map((f) => {
+    const level = f.maintenanceLevel as Level;
+    const grass = f.grass as Grass;
+    const hocMm = hocFor({ sport: f.sport, grass, maintenanceLevel: level, hocOverrideMm: f.hocOverrideMm }, standardsTable);
+    const days = f.lastMowedOn ? isoToDayNumber(asOf) - isoToDayNumber(f.lastMowedOn) : null;
+    let predicted: number | null = null;
+    let overdue: boolean | null = null;
+    let overdueSince: string | null = null;
+    const stationId = stationOfSite.get(f.siteId);
+    if (days !== null && latestWeather !== null && stationId !== undefined) {
+      if (days <= 0 || !growth) {
+        predicted = hocMm;
+        overdue = false;
+      } else {
+        const table = growth.get(stationId)!;
+        const r = grownSince(table, grass, f.lastMowedOn!, asOf, hocMm);
+        gapDays = Math.max(gapDays, r.daysWithoutWeather);
+        predicted = round1(r.heightMm);
+        overdueSince = r.overdueSince;
+        overdue = overdueSince !== null;
+      }
+    }
+    return {
+      id: f.id,
+      siteId: f.siteId,
+      districtId: f.districtId,
+      name: f.name,
+      sport: f.sport,
+      grass: f.grass,
+      maintenanceLevel: f.maintenanceLevel,
+      status: f.status,
+      areaM2: Math.round(f.areaM2),
+      longAxisDeg: f.longAxisDeg === null ? null : round1(f.longAxisDeg),
+      eastWest: f.longAxisDeg !== null && Math.min(f.longAxisDeg, 180 - f.longAxisDeg) > 45,
+      score: f.score,
+      scoredOn: f.scoredOn,
+      lastMowedOn: f.lastMowedOn,
+      daysSinceMowing: days,
+      hocMm: round1(hocMm),
+      predictedHeightMm: predicted,
+      overdue,
+      overdueSince,
+      version: f.version,
+      geometry: compact(f.geometry),
+    };
+  });
+  if (gapDays > 0) {
+    const gap = `Some fields were last mowed before the first day with weather: up to ${gapDays} days without weather add no growth, so their heights are low estimates.`;
+    weatherNote = weatherNote ? `${weatherNote} ${gap}` : gap;
+  }
+
+  return {
+    asOf,
+    requested,
+    weatherNote,
+    districts: districtRows.filter((d) => can(ctx, 'read', 'District', d)).map((d) => ({ ...d, boundary: compact(d.boundary) })),
+    sites: visibleSites,
+    fields: out,
+  };
+}
+
+/** The DB's Standards rows as the engine's table; a level without a row keeps the engine default. */
+function standardsFrom(rows: { level: number; data: LevelStandard }[]): Standards {
+  const table = { ...DEFAULT_STANDARDS };
+  for (const level of LEVELS) {
+    const row = rows.find((r) => r.level === level);
+    if (row) table[level] = row.data;
+  }
+  return table;
+}
+
+/**
+ * Cumulative growth per station and grass: cum[i] = growth (mm) of days start+1 … start+i at
+ * the grass's default max rate (DEFAULT_PARAMETERS) × GP of the day's mean temperature.
+ * Days without weather add nothing and are counted.
+ */
+interface GrowthTable {
+  startDay: number;
+  cum: Record<Grass, Float64Array>;
+  /** missing[i] = days without weather among start+1 … start+i. */
+  missing: Int32Array;
+}
+
+async function growthTables(db: Ctx['db'], stationIds: number[], from: string, asOf: string): Promise<Map<number, GrowthTable>> {
+  const rows = await db
+    .select({ stationId: weatherDays.stationId, date: weatherDays.date, tmaxC: weatherDays.tmaxC, tminC: weatherDays.tminC })
+    .from(weatherDays)
+    .where(and(inArray(weatherDays.stationId, stationIds), sql`${weatherDays.date} > ${from}`, sql`${weatherDays.date} <= ${asOf}`))
+    .orderBy(asc(weatherDays.stationId), asc(weatherDays.date));
+  const startDay = isoToDayNumber(from);
+  const n = isoToDayNumber(asOf) - startDay;
+  const tables = new Map<number, GrowthTable>();
+  for (const id of stationIds) {
+    const mean = new Array<number | null>(n + 1).fill(null);
+    for (const r of rows) if (r.stationId === id) mean[isoToDayNumber(r.date) - startDay] = (r.tmaxC + r.tminC) / 2;
+    const cum = {} as Record<Grass, Float64Array>;
+    for (const grass of GRASSES) {
+      const c = new Float64Array(n + 1);
+      const season = grassSeason(grass);
+      const rate = DEFAULT_PARAMETERS.maxGrowthMmPerDay[grass];
+      for (let i = 1; i <= n; i++) {
+        const t = mean[i];
+        c[i] = c[i - 1]! + (t === null || t === undefined ? 0 : dailyGrowthMm(rate, t, season));
+      }
+      cum[grass] = c;
+    }
+    const missing = new Int32Array(n + 1);
+    for (let i = 1; i <= n; i++) missing[i] = missing[i - 1]! + (mean[i] === null ? 1 : 0);
+    tables.set(id, { startDay, cum, missing });
+  }
+  return tables;
+}
+
+/** Height at the end of `asOf` after a cut to HOC on `mowedOn`, and the first day above 1.5 × HOC. */
+function grownSince(table: GrowthTable, grass: Grass, mowedOn: string, asOf: string, hocMm: number) {
+  const c = table.cum[grass];
+  const a = isoToDayNumber(mowedOn) - table.startDay;
+  const b = isoToDayNumber(asOf) - table.startDay;
+  const base = c[a]!;
+  const heightMm = hocMm + (c[b]! - base);
+  const allowance = mowTriggerHeightMm(hocMm) - hocMm;
+  let overdueSince: string | null = null;
+  if (c[b]! - base > allowance + 1e-9) {
+    // Cumulative growth never falls: the first day past the trigger by bisection.
+    let lo = a + 1;
+    let hi = b;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (c[mid]! - base > allowance + 1e-9) hi = mid;
+      else lo = mid + 1;
+    }
+    overdueSince = dayNumberToIso(table.startDay + lo);
+  }
+  return { heightMm, overdueSince, daysWithoutWeather: table.missing[b]! - table.missing[a]! };
+}
+
+/** The bundled vector basemap of the demo city and the configured tile layer, if any. */
+export async function basemap(ctx: Ctx, config: { mapTileUrl: string | undefined; mapAttribution: string | undefined }): Promise<BasemapAnswer> {
+  authorize(ctx, 'read', 'Field');
+  const [row] = await ctx.db.select({ value: settings.value }).from(settings).where(eq(settings.key, 'basemap'));
+  return {
+    basemap: row?.value ?? { type: 'FeatureCollection', features: [] },
+    tileUrl: config.mapTileUrl ?? null,
+    attribution: config.mapAttribution ?? null,
+  };
+}

@@ -1,0 +1,53 @@
+import { DEFAULT_STANDARDS, updateLevelStandardSchema } from '@swardwise/domain';
+import { flushPromises, mount } from '@vue/test-utils';
+import { describe, expect, test } from 'vitest';
+import type { StandardsRow } from '../../api/standards.ts';
+import LevelStandardForm from './LevelStandardForm.vue';
+import { bodyFrom, formFrom } from './standardForm.ts';
+
+const row: StandardsRow = { level: 2, data: structuredClone(DEFAULT_STANDARDS[2]), version: 3, updatedAt: '2026-11-01T00:00:00Z', updatedBy: null };
+
+function mountForm() {
+  return mount(LevelStandardForm, { props: { row, units: 'metric' }, attachTo: document.body });
+}
+
+async function setNumber(wrapper: ReturnType<typeof mountForm>, test: string, value: string) {
+  const input = wrapper.find(`[data-test="${test}"] input`);
+  await input.setValue(value);
+  await input.trigger('change');
+  await flushPromises();
+}
+
+describe('LevelStandardForm', () => {
+  test('should send a body the API schema accepts, with null for a level without irrigation or lines', () => {
+    const model = formFrom(DEFAULT_STANDARDS[4]);
+    const body = bodyFrom(model, 7);
+    expect(updateLevelStandardSchema.safeParse(body).success).toBe(true);
+    expect(body).toMatchObject({ version: 7, irrigationShareOfEtc: null, lineRepaintDays: null });
+    model.irrigated = true;
+    model.irrigationShareOfEtc = 0.4;
+    expect(bodyFrom(model, 7).irrigationShareOfEtc).toBe(0.4);
+  });
+
+  test('should refuse a HOC below 3 mm with the schema’s message and accept a sound one', async () => {
+    const wrapper = mountForm();
+    const form = wrapper.vm as unknown as { validate(): Promise<boolean>; invalid: Record<string, string> };
+    expect(await form.validate()).toBe(true);
+    await setNumber(wrapper, 'hoc-soccer-cool', '2');
+    expect(await form.validate()).toBe(false);
+    expect(form.invalid).toEqual({ 'hocMm.soccer.cool': 'a height of cut below 3 mm is not a turf height' });
+    await setNumber(wrapper, 'hoc-soccer-cool', '40');
+    expect(await form.validate()).toBe(true);
+    wrapper.unmount();
+  });
+
+  test('should refuse a feed share above 1 and a target score above 100', async () => {
+    const wrapper = mountForm();
+    const form = wrapper.vm as unknown as { validate(): Promise<boolean>; invalid: Record<string, string> };
+    await setNumber(wrapper, 'std-feed-share', '1.5');
+    await setNumber(wrapper, 'std-target-score', '120');
+    expect(await form.validate()).toBe(false);
+    expect(form.invalid).toEqual({ annualNShare: 'the feed share cannot be above 1 (100 %)', targetScore: 'the target score is 0–100' });
+    wrapper.unmount();
+  });
+});

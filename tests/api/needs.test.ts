@@ -1,0 +1,133 @@
+import { eq } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { CAUTIONS, DEFAULT_STANDARDS, hocFor, mowerTypeFor, type Level } from '@swardwise/domain';
+import { fields } from '../../apps/api/src/db/schema/index.ts';
+import { startTestApi, type TestApi } from '../support/app.ts';
+
+let api: TestApi;
+beforeAll(async () => {
+  api = await startTestApi();
+});
+afterAll(() => api.close());
+
+const inSeason = '2026-05-20'; // a Wednesday inside the fixture's weather
+const fieldRow = async (id: number) => (await api.database.db.select().from(fields).where(eq(fields.id, id)))[0]!;
+
+describe('GET /api/fields/:id/needs', () => {
+  test('should let each role read only the fields it may read', async () => {
+    const { northSoccer, northSchoolFootball, southBaseball } = api.fixture.fields;
+    const cases: [Parameters<TestApi['signIn']>[0], number, number][] = [
+      ['admin', southBaseball, 200],
+      ['head', northSoccer, 200],
+      ['foreman', northSoccer, 200],
+      ['foreman', southBaseball, 403],
+      ['foremanSouth', southBaseball, 200],
+      ['crew', northSoccer, 200],
+      ['crew', southBaseball, 403],
+      ['partner', northSchoolFootball, 200],
+      ['partner', northSoccer, 403],
+    ];
+    for (const [who, id, status] of cases) {
+      const agent = await api.signIn(who);
+      const res = await agent.get(`/api/fields/${id}/needs`).query({ date: inSeason });
+      expect(res.status, `${who} → field ${id}`).toBe(status);
+      if (status === 403) expect(res.body.error.code).toBe('auth/forbidden');
+    }
+  });
+
+  test('should refuse a visitor who is not signed in', async () => {
+    const supertest = (await import('supertest')).default;
+    const res = await supertest(api.app).get(`/api/fields/${api.fixture.fields.northSoccer}/needs`);
+    expect(res.status).toBe(401);
+  });
+
+  test('should give the HOC and mower the engine gives for the field and its level', async () => {
+    const agent = await api.signIn('foreman');
+    for (const id of [api.fixture.fields.northSoccer, api.fixture.fields.northLawn]) {
+      const row = await fieldRow(id);
+      const res = await agent.get(`/api/fields/${id}/needs`).query({ date: inSeason });
+      expect(res.status).toBe(200);
+      const expected = hocFor({ ...row, maintenanceLevel: row.maintenanceLevel as Level }, DEFAULT_STANDARDS);
+      expect(res.body.needs.hoc.hocMm).toBe(expected);
+      expect(res.body.needs.hoc.mowerKind).toBe(mowerTypeFor(expected));
+      expect(res.body.needs.hoc.triggerHeightMm).toBeCloseTo(1.5 * expected, 9);
+      expect(res.body.needs.hoc.source).toBe('standards_sport');
+    }
+  });
+
+  test('should work out the week asked for without a fallback note', async () => {
+    const agent = await api.signIn('foreman');
+    const res = await agent.get(`/api/fields/${api.fixture.fields.northSoccer}/needs`).query({ date: inSeason });
+    const n = res.body.needs;
+    expect(n.week).toMatchObject({ start: '2026-05-18', end: '2026-05-24', days: 7, fallback: false });
+    expect(n.weatherNote).toBeNull();
+    expect(n.growth.gpDaily).toHaveLength(7);
+    expect(n.growth.gpMean).toBeGreaterThan(0);
+    expect(n.growth.gpMean).toBeLessThanOrEqual(1);
+    expect(n.mowing.mowingsPerWeek).toBeGreaterThan(0);
+    expect(n.labour.method).toBe('pass_plan');
+    expect(n.labour.hoursPerWeek).toBeCloseTo(n.labour.hoursPerMowing * n.mowing.mowingsPerWeek, 9);
+    expect(n.water.irrigated).toBe(true);
+    expect(n.water.et0Method).toBe('penman_monteith');
+    expect(n.water.etcMm).toBeCloseTo(n.water.kc * n.water.et0Mm, 9);
+    expect(n.water.cautions).toContain(CAUTIONS.water);
+    expect(n.feed.cautions).toContain(CAUTIONS.feed);
+    expect(n.feed.applications.length).toBeGreaterThan(0);
+    expect(n.lines.kept).toBe(true);
+    expect(n.lines.cautions).toContain(CAUTIONS.lines);
+    expect(n.level.workCompliance.tracked).toBe(false);
+    expect(n.season.dates).toHaveLength(35);
+    expect(n.season.gp).toHaveLength(35);
+    expect(n.season.waterNeedMm).toHaveLength(35);
+    for (const b of ['hoc', 'growth', 'mowing', 'labour', 'water', 'feed', 'lines', 'level']) {
+      expect(n[b].inputs.length, b).toBeGreaterThan(0);
+      expect(n[b].how.length, b).toBeGreaterThan(20);
+    }
+  });
+
+  test('should say plainly when it falls back to the latest week with weather', async () => {
+    const agent = await api.signIn('head');
+    const res = await agent.get(`/api/fields/${api.fixture.fields.northSoccer}/needs`).query({ date: '2026-12-01' });
+    expect(res.status).toBe(200);
+    const n = res.body.needs;
+    expect(n.week).toMatchObject({ start: '2026-06-01', end: api.fixture.weather.end, fallback: true });
+    expect(n.weatherNote).toMatch(/no weather for the week of 2026-11-30/);
+    expect(n.weatherNote).toMatch(/latest week with weather/);
+  });
+
+  test('should say a lawn keeps no lines and an unirrigated level is not watered', async () => {
+    const agent = await api.signIn('foreman');
+    const res = await agent.get(`/api/fields/${api.fixture.fields.northLawn}/needs`).query({ date: inSeason });
+    const n = res.body.needs;
+    expect(n.lines.kept).toBe(false);
+    expect(n.lines.repaints).toBe(0);
+    expect(n.water.irrigated).toBe(false);
+    expect(n.water.grossMm).toBe(0);
+    expect(n.water.notIrrigatedReason).toMatch(/not irrigated/);
+  });
+
+  test('should follow the Standards: a new HOC for the level changes the needs', async () => {
+    const head = await api.signIn('head');
+    const id = api.fixture.fields.northSoccer; // level 2, soccer, tall fescue (cool-season)
+    const list = await head.get('/api/standards');
+    const level2 = list.body.levels.find((l: { level: number }) => l.level === 2);
+    const patched = await head.patch('/api/standards/2').send({ version: level2.version, hocMm: { soccer: { cool: 41 } } });
+    expect(patched.status).toBe(200);
+    const res = await head.get(`/api/fields/${id}/needs`).query({ date: inSeason });
+    expect(res.body.needs.hoc.hocMm).toBe(41);
+    expect(res.body.needs.standards.version).toBe(level2.version + 1);
+    // Put it back so the other tests see the defaults.
+    await head.patch('/api/standards/2').send({ version: level2.version + 1, hocMm: { soccer: { cool: DEFAULT_STANDARDS[2].hocMm.soccer.cool } } });
+  });
+
+  test('should refuse a bad date or id with 400 and an unknown field with 404', async () => {
+    const agent = await api.signIn('admin');
+    for (const date of ['yesterday', '2026-02-30', '2026-5-1']) {
+      const res = await agent.get(`/api/fields/${api.fixture.fields.northSoccer}/needs`).query({ date });
+      expect(res.status, date).toBe(400);
+      expect(res.body.error.details.issues[0].path).toBe('query.date');
+    }
+    expect((await agent.get('/api/fields/abc/needs')).status).toBe(400);
+    expect((await agent.get('/api/fields/99999/needs')).status).toBe(404);
+  });
+});

@@ -1,0 +1,108 @@
+/**
+ * The field page shows what the field needs, worked out from the Standards; the head edits
+ * a level's HOC on the Standards page and the field page follows.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
+import { formatHoc, type Role, type UnitSystem } from '@swardwise/domain';
+import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
+import { launchBrowser } from './browser.ts';
+
+const baseUrl = inject('baseUrl');
+const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
+let browser: Browser;
+
+beforeAll(async () => {
+  fs.mkdirSync(shots, { recursive: true });
+  browser = await launchBrowser();
+});
+afterAll(() => browser?.close());
+
+async function signIn(page: Page, role: Role) {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(DEMO_SIGN_INS[role].email);
+  await page.getByLabel('Password').fill(DEMO_SIGN_INS[role].password);
+  await page.getByRole('button', { name: /sign in/i }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+}
+
+interface FieldRow {
+  id: number;
+  sport: string;
+  grass: string;
+  maintenanceLevel: number;
+  hocOverrideMm: number | null;
+}
+
+const COOL = ['kentucky_bluegrass', 'perennial_ryegrass', 'tall_fescue', 'fine_fescue'];
+const text = (mm: number, units: UnitSystem) => {
+  const d = formatHoc(mm, units);
+  return `${d.value.toLocaleString('en-US')} ${d.unit}`;
+};
+
+describe('field page', () => {
+  test('should show a foreman the HOC, mowings per week and the season chart of a field', async () => {
+    const page = await browser.newPage({ viewport: { width: 1400, height: 900 } });
+    try {
+      await signIn(page, 'foreman');
+      const fields = await page.evaluate(async () => (await (await fetch('/api/fields')).json()).items as { id: number }[]);
+      expect(fields.length).toBeGreaterThan(0);
+      await page.goto(`${baseUrl}/fields/${fields[0]!.id}`);
+      await page.locator('[data-test="needs-hoc"]').waitFor();
+      expect(await page.locator('[data-test="needs-hoc"]').innerText()).toMatch(/^\d+(\.\d+)? (in|mm)$/);
+      expect(await page.locator('[data-test="needs-mowings-per-week"]').innerText()).toMatch(/^\d+(\.\d)?$/);
+      // Today is after the demo season: the page says which week it used instead.
+      expect(await page.locator('[data-test="needs-weather-note"]').innerText()).toMatch(/latest week with weather/);
+      await page.locator('[data-test="season-chart"] canvas').first().waitFor();
+      await page.screenshot({ path: path.join(shots, 'field-page-foreman.png'), fullPage: true });
+    } finally {
+      await page.close();
+    }
+  });
+
+  test('should show the new HOC on the field page after the head edits the level on the Standards page', async () => {
+    const page = await browser.newPage({ viewport: { width: 1400, height: 900 } });
+    try {
+      await signIn(page, 'head');
+      const { fields, units } = await page.evaluate(async () => ({
+        fields: (await (await fetch('/api/fields')).json()).items,
+        units: (await (await fetch('/api/auth/me')).json()).user.units,
+      }));
+      const field = (fields as FieldRow[]).find((f) => f.sport === 'soccer' && f.hocOverrideMm === null && COOL.includes(f.grass));
+      expect(field, 'a soccer field on cool-season grass without an override').toBeTruthy();
+      const level = field!.maintenanceLevel;
+      const before = await page.evaluate(async () => (await (await fetch('/api/standards')).json()).levels);
+      const original = (before as { level: number; data: { hocMm: { soccer: { cool: number } } } }[]).find((l) => l.level === level)!.data.hocMm.soccer.cool;
+      const next = original + 7;
+
+      await page.goto(`${baseUrl}/standards`);
+      await page.locator(`[data-test="standards-edit-${level}"]`).click();
+      const input = page.locator(`[data-test="standards-form-${level}"] [data-test="hoc-soccer-cool"] input`);
+      await input.fill(String(next));
+      await input.blur();
+      await page.locator('[data-test="standards-save"]').click();
+      await expect.poll(() => page.getByText(`Level ${level} saved`).count()).toBeGreaterThan(0);
+      await page.screenshot({ path: path.join(shots, 'standards-head.png'), fullPage: true });
+
+      await page.goto(`${baseUrl}/fields/${field!.id}`);
+      await page.locator('[data-test="needs-hoc"]').waitFor();
+      expect(await page.locator('[data-test="needs-hoc"]').innerText()).toBe(text(next, units));
+
+      // Put the Standards back for the other browser tests.
+      const status = await page.evaluate(
+        async ({ level, original }) => {
+          const rows = (await (await fetch('/api/standards')).json()).levels as { level: number; version: number }[];
+          const version = rows.find((l) => l.level === level)!.version;
+          const res = await fetch(`/api/standards/${level}`, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ version, hocMm: { soccer: { cool: original } } }) });
+          return res.status;
+        },
+        { level, original },
+      );
+      expect(status).toBe(200);
+    } finally {
+      await page.close();
+    }
+  });
+});

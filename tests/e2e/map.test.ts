@@ -1,0 +1,125 @@
+/**
+ * The map in chromium: themes and legend, drawing a new field outline with its live area,
+ * and a partner who sees only his own sites' fields.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
+import type { Role } from '@swardwise/domain';
+import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
+import { launchBrowser } from './browser.ts';
+
+const baseUrl = inject('baseUrl');
+const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
+let browser: Browser;
+
+beforeAll(async () => {
+  fs.mkdirSync(shots, { recursive: true });
+  browser = await launchBrowser();
+});
+afterAll(() => browser?.close());
+
+async function openMap(role: Role): Promise<Page> {
+  const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(DEMO_SIGN_INS[role].email);
+  await page.getByLabel('Password').fill(DEMO_SIGN_INS[role].password);
+  await page.getByRole('button', { name: /sign in/i }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+  await page.locator('[data-test="nav-map"]').click();
+  await page.waitForURL((url) => url.pathname === '/map');
+  await page.locator('[data-test="field-map"][data-ready="true"]').waitFor();
+  return page;
+}
+
+describe('the map', () => {
+  test('should let a foreman switch themes and draw, measure and save a new field', async () => {
+    const page = await openMap('foreman');
+    try {
+      // The demo season is over: the page says which day it shows.
+      await expect.poll(() => page.locator('[data-test="map-weather-note"]').textContent()).toContain('latest day with weather');
+      expect(await page.locator('[data-test="map-legend"]').getAttribute('data-theme')).toBe('level');
+      await page.locator('[data-test="theme-score"]').click();
+      await expect.poll(() => page.locator('[data-test="map-legend"]').getAttribute('data-theme')).toBe('score');
+      expect(await page.locator('[data-test="legend-score-high"]').count()).toBe(1);
+      await page.locator('[data-test="theme-mowing"]').click();
+      await expect.poll(() => page.locator('[data-test="legend-mow-overdue"]').count()).toBe(1);
+      expect(new URL(page.url()).searchParams.get('theme')).toBe('mowing');
+
+      // Zoom in so the new outline is field-sized, then click its corners on the canvas.
+      const map = page.locator('[data-test="field-map"] .leaflet-container');
+      for (let i = 0; i < 3; i++) {
+        await page.locator('.leaflet-control-zoom-in').click();
+        await page.waitForTimeout(350);
+      }
+      await page.locator('[data-test="map-draw"]').click();
+      await expect.poll(() => page.locator('[data-test="field-map"]').getAttribute('data-drawing')).toBe('true');
+      const box = (await map.boundingBox())!;
+      const x0 = box.x + box.width / 2 - 30;
+      const y0 = box.y + box.height / 2 - 45;
+      const corners: [number, number][] = [
+        [x0, y0],
+        [x0 + 60, y0],
+        [x0 + 60, y0 + 90],
+        [x0, y0 + 90],
+      ];
+      for (const [x, y] of corners) {
+        await page.mouse.click(x, y);
+        await page.waitForTimeout(120);
+      }
+      await expect.poll(() => page.locator('[data-test="outline-area"]').count()).toBe(1);
+      await page.mouse.click(corners[0]![0], corners[0]![1]);
+      await page.locator('[data-test="new-field-form"]').waitFor();
+      const area = await page.locator('[data-test="outline-area"]').textContent();
+      expect(area).toMatch(/ac · [\d,]+ ft²/);
+      expect(await page.locator('[data-test="outline-axis"]').textContent()).toContain('N–S');
+
+      await page.locator('[data-test="new-field-site"]').click();
+      await page.locator('.el-select-dropdown__item:visible').first().click();
+      await page.locator('input[data-test="new-field-name"], [data-test="new-field-name"] input').fill('Drawn practice pitch');
+      await page.screenshot({ path: path.join(shots, 'map-draw-foreman.png') });
+      await page.locator('[data-test="new-field-save"]').click();
+      await expect.poll(() => page.locator('[data-test="new-field-form"]').count()).toBe(0);
+
+      const saved = await page.evaluate(async () => {
+        const items = (await (await fetch('/api/fields')).json()).items as { name: string; areaM2: number }[];
+        return items.find((f) => f.name === 'Drawn practice pitch') ?? null;
+      });
+      expect(saved).not.toBeNull();
+      expect(saved!.areaM2).toBeGreaterThan(1000);
+      await expect.poll(() => page.locator('[data-test="summary-name"]').textContent()).toBe('Drawn practice pitch');
+      await page.screenshot({ path: path.join(shots, 'map-saved-foreman.png') });
+    } finally {
+      await page.close();
+    }
+  });
+
+  test('should show a partner only the fields of his own sites and no drawing tools', async () => {
+    let partnerCount = 0;
+    const page = await openMap('partner');
+    try {
+      const { mine, sites } = await page.evaluate(async () => {
+        const me = (await (await fetch('/api/auth/me')).json()).user as { siteIds: number[] };
+        const map = (await (await fetch('/api/map')).json()) as { fields: { siteId: number }[] };
+        return { mine: map.fields.length, sites: [...new Set(map.fields.map((f) => f.siteId))].every((id) => me.siteIds.includes(id)) };
+      });
+      expect(sites).toBe(true);
+      expect(mine).toBeGreaterThan(0);
+      expect(Number(await page.locator('[data-test="field-map"]').getAttribute('data-field-count'))).toBe(mine);
+      expect(await page.locator('[data-test="map-draw"]').count()).toBe(0);
+      partnerCount = mine;
+      await page.screenshot({ path: path.join(shots, 'map-partner.png') });
+    } finally {
+      await page.close();
+    }
+    const head = await openMap('head');
+    try {
+      // The head sees the whole city on the same page: the partner's map was a subset.
+      const all = Number(await head.locator('[data-test="field-map"]').getAttribute('data-field-count'));
+      expect(all).toBeGreaterThan(partnerCount);
+    } finally {
+      await head.close();
+    }
+  });
+});
