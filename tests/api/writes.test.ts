@@ -106,8 +106,12 @@ describe('optimistic concurrency', () => {
     const second = await api.signIn('admin');
     const id = api.fixture.fields.northLawn;
     const { version } = await fieldRow(id);
+    const listed = async () => (await first.get('/api/fields')).body.items.find((f: { id: number }) => f.id === id);
+    expect((await listed()).status).toBe('open');
     const ok = await first.patch(`/api/fields/${id}`).send({ version, status: 'restricted', statusNote: 'Wet after storms' });
     expect(ok.status).toBe(200);
+    // The cached list follows the write at once.
+    expect(await listed()).toMatchObject({ status: 'restricted', statusNote: 'Wet after storms', version: version + 1 });
     expect(ok.body.field.version).toBe(version + 1);
     const stale = await second.patch(`/api/fields/${id}`).send({ version, status: 'closed' });
     expect(stale.status).toBe(409);

@@ -4,7 +4,7 @@ import { createFieldSchema, idParamSchema, listQuerySchema, needsQuerySchema, up
 import type { AppDeps } from '../app.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { createField, deleteField, getField, listFields, updateField } from '../services/fields.ts';
+import { createField, deleteField, getField, listFieldsJson, updateField } from '../services/fields.ts';
 import { fieldNeeds } from '../services/needs.ts';
 
 const deleteQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
@@ -14,7 +14,7 @@ export function fieldsRouter({ db }: AppDeps): Router {
 
   router.get('/', async (req, res) => {
     const query = parse(listQuerySchema, req.query, 'query');
-    res.json({ items: await listFields(ctxOf(db, req), query) });
+    res.type('application/json').send(await listFieldsJson(ctxOf(db, req), query));
   });
 
   router.post('/', async (req, res) => {

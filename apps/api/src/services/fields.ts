@@ -5,6 +5,7 @@ import type { Db } from '../db/client.ts';
 import { districts, fields, sites } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+import { cachedAnswer } from './answer-cache.ts';
 import { siteScope } from './scope.ts';
 
 const listColumns = {
@@ -64,6 +65,13 @@ export async function listFields(ctx: Ctx, filter: { districtId?: number | undef
     .where(and(...conditions))
     .orderBy(asc(sites.name), asc(fields.name));
   return rows.filter((row) => can(ctx, 'read', 'Field', row));
+}
+
+/** The list as JSON, cached until a field, site or district changes (the list route's hot path). */
+export async function listFieldsJson(ctx: Ctx, filter: { districtId?: number | undefined; siteId?: number | undefined; q?: string | undefined }): Promise<string> {
+  authorize(ctx, 'read', 'Field');
+  const key = JSON.stringify([filter.districtId ?? null, filter.siteId ?? null, filter.q ?? null]);
+  return cachedAnswer(ctx, 'fields', key, async () => JSON.stringify({ items: await listFields(ctx, filter) }));
 }
 
 export async function getField(ctx: Ctx, id: number) {

@@ -8,6 +8,7 @@
  * fingerprint changes with any write to the tables it reads.
  */
 import { and, asc, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
+import { cachedAnswer } from './answer-cache.ts';
 import {
   DEFAULT_PARAMETERS,
   DEFAULT_STANDARDS,
@@ -107,45 +108,14 @@ function todayIso(): string {
   return new Date().toISOString().slice(0, 10);
 }
 
-/** One query: changes whenever a row the map reads is written, added or removed. */
-async function fingerprint(db: Ctx['db']): Promise<string> {
-  const res = await db.execute(sql`select concat_ws('|',
-    (select count(*) || ':' || coalesce(max(${fields.updatedAt})::text, '') || ':' || coalesce(max(${fields.id}), 0)
-       || ':' || coalesce(sum(${fields.version}), 0) || ':' || coalesce(sum(${fields.lastMowedOn} - date '2000-01-01'), 0) from ${fields}),
-    (select count(*) || ':' || coalesce(max(${fieldChecks.id}), 0) from ${fieldChecks}),
-    (select count(*) || ':' || coalesce(max(${weatherDays.updatedAt})::text, '') from ${weatherDays}),
-    (select count(*) || ':' || coalesce(max(${weatherStations.updatedAt})::text, '') from ${weatherStations}),
-    (select coalesce(sum(${standards.version}), 0) || ':' || coalesce(max(${standards.updatedAt})::text, '') from ${standards}),
-    (select count(*) || ':' || coalesce(max(${sites.updatedAt})::text, '') from ${sites}),
-    (select count(*) || ':' || coalesce(max(${districts.updatedAt})::text, '') from ${districts})
-  ) as v`);
-  return String((res.rows[0] as { v: string }).v);
-}
-
-function scopeKey(ctx: Ctx): string {
-  const a = ctx.actor;
-  if (a.role === 'admin' || a.role === 'head') return a.role;
-  if (a.role === 'partner') return `partner:${[...a.siteIds].sort((x, y) => x - y).join(',')}`;
-  return `${a.role}:${a.districtId ?? '-'}`;
-}
-
-const CACHE_LIMIT = 32;
-/** Answers by key, kept as JSON too: serialising 3,000 outlines costs more than the lookup. */
-const caches = new WeakMap<object, Map<string, { answer: MapAnswer; json: string }>>();
-
 async function cached(ctx: Ctx, query: MapQuery) {
   authorize(ctx, 'read', 'Field');
   const requested = query.asOf ?? todayIso();
-  const key = `${scopeKey(ctx)}|${requested}|${await fingerprint(ctx.db)}`;
-  let cache = caches.get(ctx.db);
-  if (!cache) caches.set(ctx.db, (cache = new Map()));
-  const hit = cache.get(key);
-  if (hit) return hit;
-  const answer = await buildMap(ctx, requested);
-  const entry = { answer, json: JSON.stringify(answer) };
-  if (cache.size >= CACHE_LIMIT) cache.delete(cache.keys().next().value!);
-  cache.set(key, entry);
-  return entry;
+  // Kept as JSON too: serialising 3,000 outlines costs more than the lookup.
+  return cachedAnswer(ctx, 'map', requested, async () => {
+    const answer = await buildMap(ctx, requested);
+    return { answer, json: JSON.stringify(answer) };
+  });
 }
 
 /** Everything on the map the caller may see (see `MapAnswer`). */
