@@ -7,7 +7,7 @@ import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { createMailer } from '../../apps/api/src/mail/mailer.ts';
 import { fieldChecks, fields, settings, standards, weatherDays, weatherStations } from '../../apps/api/src/db/schema/index.ts';
-import { rectangle, PASSWORD } from '../support/fixture.ts';
+import { giveWork, rectangle, PASSWORD } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
 let api: TestApi;
@@ -55,14 +55,17 @@ describe('GET /api/map', () => {
     expect(res.body.fields[0].geometry.type).toBe('Polygon');
   });
 
-  test('should show a foreman and a crew lead only their district', async () => {
+  test('should show a foreman his district and a crew lead only the fields of his crew’s work', async () => {
     const { fields: f, districts, sites } = api.fixture;
-    for (const role of ['foreman', 'crew'] as const) {
-      const res = await (await api.signIn(role)).get('/api/map?asOf=2026-07-01');
-      expect(ids(res)).toEqual([f.northSoccer, f.northLawn, f.northSchoolFootball].sort((a, b) => a - b));
-      expect(res.body.districts.map((d: { id: number }) => d.id)).toEqual([districts.north]);
-      expect(res.body.sites.map((s: { id: number }) => s.id).sort()).toEqual([sites.northPark, sites.northSchool].sort());
-    }
+    const foreman = await (await api.signIn('foreman')).get('/api/map?asOf=2026-07-01');
+    expect(ids(foreman)).toEqual([f.northSoccer, f.northLawn, f.northSchoolFootball].sort((a, b) => a - b));
+    expect(foreman.body.districts.map((d: { id: number }) => d.id)).toEqual([districts.north]);
+    expect(foreman.body.sites.map((s: { id: number }) => s.id).sort()).toEqual([sites.northPark, sites.northSchool].sort());
+    const crew = await api.signIn('crew');
+    expect(ids(await crew.get('/api/map?asOf=2026-07-01'))).toEqual([]);
+    await giveWork(api.database.db, f.northLawn, api.fixture.crews.north, 1);
+    await giveWork(api.database.db, f.northSoccer, api.fixture.crews.south, 0);
+    expect(ids(await crew.get('/api/map?asOf=2026-07-01'))).toEqual([f.northLawn]);
   });
 
   test('should show a partner only the fields of his own site and no district', async () => {

@@ -2,6 +2,7 @@ import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { CAUTIONS, DEFAULT_STANDARDS, hocFor, mowerTypeFor, type Level } from '@swardwise/domain';
 import { fields } from '../../apps/api/src/db/schema/index.ts';
+import { giveWork } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
 let api: TestApi;
@@ -15,7 +16,9 @@ const fieldRow = async (id: number) => (await api.database.db.select().from(fiel
 
 describe('GET /api/fields/:id/needs', () => {
   test('should let each role read only the fields it may read', async () => {
-    const { northSoccer, northSchoolFootball, southBaseball } = api.fixture.fields;
+    const { northSoccer, northSchoolFootball, southBaseball, northLawn } = api.fixture.fields;
+    // A crew lead sees the fields his crew has work on.
+    await giveWork(api.database.db, northSoccer, api.fixture.crews.north, 0);
     const cases: [Parameters<TestApi['signIn']>[0], number, number][] = [
       ['admin', southBaseball, 200],
       ['head', northSoccer, 200],
@@ -24,6 +27,7 @@ describe('GET /api/fields/:id/needs', () => {
       ['foremanSouth', southBaseball, 200],
       ['crew', northSoccer, 200],
       ['crew', southBaseball, 403],
+      ['crew', northLawn, 403],
       ['partner', northSchoolFootball, 200],
       ['partner', northSoccer, 403],
     ];

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { giveWork } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
 let api: TestApi;
@@ -34,9 +35,16 @@ describe('reading by role', () => {
     expect(ids(await agent.get('/api/crews'))).toEqual([api.fixture.crews.north]);
   });
 
-  test('should show a crew lead his district’s fields and only his crew', async () => {
+  test('should show a crew lead only the fields of his crew’s recent and coming work, and only his crew', async () => {
     const agent = await api.signIn('crew');
-    expect(ids(await agent.get('/api/fields'))).toHaveLength(3);
+    const { fields: f, crews } = api.fixture;
+    expect(ids(await agent.get('/api/fields'))).toEqual([]);
+    await giveWork(api.database.db, f.northSoccer, crews.north, 2);
+    await giveWork(api.database.db, f.northLawn, crews.north, -30); // long past: not his work now
+    await giveWork(api.database.db, f.northSchoolFootball, crews.south, 0); // another crew's
+    expect(ids(await agent.get('/api/fields'))).toEqual([f.northSoccer]);
+    expect((await agent.get(`/api/fields/${f.northSoccer}`)).status).toBe(200);
+    expect((await agent.get(`/api/fields/${f.northLawn}`)).status).toBe(403);
     expect(ids(await agent.get('/api/crews'))).toEqual([api.fixture.crews.north]);
     expect((await agent.get(`/api/fields/${api.fixture.fields.southBaseball}`)).status).toBe(403);
     expect((await agent.get('/api/users')).status).toBe(403);

@@ -4,7 +4,8 @@
  */
 import { addDaysIso, DEFAULT_STANDARDS, LEVELS, type Polygon, type Role } from '@swardwise/domain';
 import type { Db } from '../../apps/api/src/db/client.ts';
-import { crews, districts, fields, sites, standards, users, userSites, weatherDays, weatherStations } from '../../apps/api/src/db/schema/index.ts';
+import { eq, sql } from 'drizzle-orm';
+import { crews, districts, fields, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { hashPassword } from '../../apps/api/src/services/users.ts';
 import { polygonAreaM2 } from '@swardwise/domain';
 
@@ -151,4 +152,29 @@ export async function buildFixture(db: Db): Promise<Fixture> {
     crews: { north: crewNorth!.id, south: crewSouth!.id },
     users: { admin, head, foreman, foremanSouth, crew, partner, inactive },
   };
+}
+
+/** Gives a crew a work order on a field (a mowing, `daysFromToday` from the database's today). */
+export async function giveWork(db: Db, fieldId: number, crewId: number, daysFromToday = 0): Promise<number> {
+  const [field] = await db
+    .select({ siteId: fields.siteId, districtId: sites.districtId })
+    .from(fields)
+    .innerJoin(sites, eq(sites.id, fields.siteId))
+    .where(eq(fields.id, fieldId));
+  const [row] = await db
+    .insert(workOrders)
+    .values({
+      fieldId,
+      siteId: field!.siteId,
+      districtId: field!.districtId,
+      task: 'mow',
+      weekStart: sql`current_date`,
+      plannedDate: sql`current_date + ${daysFromToday}::int`,
+      crewId,
+      plannedHours: 1,
+      status: 'assigned',
+      origin: 'manual',
+    })
+    .returning({ id: workOrders.id });
+  return row!.id;
 }

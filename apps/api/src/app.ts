@@ -27,6 +27,7 @@ import { sitesRouter } from './routes/sites.ts';
 import { standardsRouter } from './routes/standards.ts';
 import { usersRouter } from './routes/users.ts';
 import { weatherRouter } from './routes/weather.ts';
+import { workOrdersRouter } from './routes/work-orders.ts';
 
 export interface AppDeps {
   db: Db;
@@ -106,6 +107,7 @@ export function createApp(
   app.use('/api', requireUser);
   app.use('/api/users', usersRouter(full));
   app.use('/api/weather', weatherRouter(full));
+  app.use('/api/work-orders', workOrdersRouter(full));
   app.use('/api/sites', sitesRouter(full));
   app.use('/api/fields', fieldsRouter(full));
   app.use('/api/standards', standardsRouter(full));

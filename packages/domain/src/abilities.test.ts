@@ -19,7 +19,7 @@ const actors: Record<string, Actor> = {
 const own = { district: { id: D1 }, site: { id: SITE_A, districtId: D1 }, field: { id: 1000, siteId: SITE_A, districtId: D1 } };
 const other = { district: { id: D2 }, site: { id: SITE_B, districtId: D2 }, field: { id: 2000, siteId: SITE_B, districtId: D2 } };
 
-type Row = Record<string, number>;
+type Row = Record<string, number | number[]>;
 type Case = [role: string, action: Action, subject: SubjectName, row: Row | null, allowed: boolean];
 
 const cases: Case[] = [
@@ -59,9 +59,13 @@ const cases: Case[] = [
   ['foreman', 'read', 'Field', other.field, false],
   ['foreman', 'update', 'Field', other.field, false],
   ['foreman', 'delete', 'Field', other.field, false],
-  ['crew', 'read', 'Field', own.field, true],
-  ['crew', 'update', 'Field', own.field, false],
-  ['crew', 'read', 'Field', other.field, false],
+  // A crew reads the fields of its own work (crews with work on the field), in its district.
+  ['crew', 'read', 'Field', { ...own.field, crewIds: [CREW_1] }, true],
+  ['crew', 'read', 'Field', { ...own.field, crewIds: [CREW_2, CREW_1] }, true],
+  ['crew', 'read', 'Field', { ...own.field, crewIds: [CREW_2] }, false],
+  ['crew', 'read', 'Field', own.field, false],
+  ['crew', 'update', 'Field', { ...own.field, crewIds: [CREW_1] }, false],
+  ['crew', 'read', 'Field', { ...other.field, crewIds: [CREW_1] }, false],
   ['partner', 'read', 'Field', own.field, true],
   ['partner', 'read', 'Field', other.field, false],
   ['partner', 'update', 'Field', own.field, false],

@@ -50,6 +50,8 @@ export interface ScopedRow {
   districtId?: number | null;
   siteId?: number | null;
   crewId?: number | null;
+  /** Crews with work on the row (a field) in the current window. */
+  crewIds?: number[];
 }
 
 export function defineAbilityFor(actor: Actor): AppAbility {
@@ -90,7 +92,9 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       const d = actor.districtId ?? -1;
       const c = actor.crewId ?? -1;
       can('read', 'District', { id: d });
-      can('read', ['Site', 'Field'], { districtId: d });
+      can('read', 'Site', { districtId: d });
+      // A crew sees the fields of its own work, not the whole district.
+      can('read', 'Field', { districtId: d, crewIds: c });
       can('read', 'Crew', { id: c });
       can('read', 'Equipment', { crewId: c });
       can(['read', 'log'], 'WorkOrder', { crewId: c });

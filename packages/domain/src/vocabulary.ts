@@ -132,5 +132,16 @@ export const MOWER_KINDS: readonly EquipmentKind[] = ['reel_mower', 'rotary_mowe
 
 export const WORK_TASKS = ['mow', 'paint_lines', 'feed', 'irrigate', 'field_check', 'aerate', 'overseed', 'topdress', 'weed_control'] as const;
 export type WorkTask = (typeof WORK_TASKS)[number];
+export const WORK_TASK_LABELS: Record<WorkTask, string> = {
+  mow: 'Mow',
+  paint_lines: 'Paint lines',
+  feed: 'Feed',
+  irrigate: 'Irrigate',
+  field_check: 'Field check',
+  aerate: 'Aerate',
+  overseed: 'Overseed',
+  topdress: 'Topdress',
+  weed_control: 'Weed control',
+};
 export const WORK_STATUSES = ['planned', 'assigned', 'started', 'done', 'skipped'] as const;
 export type WorkStatus = (typeof WORK_STATUSES)[number];

@@ -5,10 +5,13 @@
  * to the tables the answers read, so a cached answer is never stale.
  */
 import { sql } from 'drizzle-orm';
-import { districts, fieldChecks, fields, sites, standards, weatherDays, weatherStations } from '../db/schema/index.ts';
+import { districts, fieldChecks, fields, sites, standards, weatherDays, weatherStations, workOrders } from '../db/schema/index.ts';
 import type { Ctx } from './context.ts';
 
-/** Changes whenever a field, check, weather day, station, Standards row, site or district is written, added or removed. */
+/**
+ * Changes whenever a field, check, weather day, station, Standards row, site, district or work
+ * order is written, added or removed, and at midnight (a crew's window of work moves with the day).
+ */
 export async function dataFingerprint(db: Ctx['db']): Promise<string> {
   const res = await db.execute(sql`select concat_ws('|',
     (select count(*) || ':' || coalesce(max(${fields.updatedAt})::text, '') || ':' || coalesce(max(${fields.id}), 0)
@@ -18,7 +21,9 @@ export async function dataFingerprint(db: Ctx['db']): Promise<string> {
     (select count(*) || ':' || coalesce(max(${weatherStations.updatedAt})::text, '') from ${weatherStations}),
     (select coalesce(sum(${standards.version}), 0) || ':' || coalesce(max(${standards.updatedAt})::text, '') from ${standards}),
     (select count(*) || ':' || coalesce(max(${sites.updatedAt})::text, '') || ':' || coalesce(sum(${sites.version}), 0) from ${sites}),
-    (select count(*) || ':' || coalesce(max(${districts.updatedAt})::text, '') from ${districts})
+    (select count(*) || ':' || coalesce(max(${districts.updatedAt})::text, '') from ${districts}),
+    (select count(*) || ':' || coalesce(max(${workOrders.updatedAt})::text, '') || ':' || coalesce(sum(${workOrders.version}), 0) from ${workOrders}),
+    current_date::text
   ) as v`);
   return String((res.rows[0] as { v: string }).v);
 }

@@ -6,7 +6,7 @@ import { districts, fields, sites } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
 import { cachedAnswer } from './answer-cache.ts';
-import { siteScope } from './scope.ts';
+import { fieldCrewIds, fieldScope } from './scope.ts';
 
 const listColumns = {
   id: fields.id,
@@ -28,6 +28,7 @@ const listColumns = {
   areaM2: fields.areaM2,
   longAxisDeg: fields.longAxisDeg,
   lastMowedOn: fields.lastMowedOn,
+  crewIds: fieldCrewIds,
   version: fields.version,
   updatedAt: fields.updatedAt,
 };
@@ -57,7 +58,7 @@ async function getFieldRow(db: Ctx['db'], id: number) {
 
 export async function listFields(ctx: Ctx, filter: { districtId?: number | undefined; siteId?: number | undefined; q?: string | undefined }) {
   authorize(ctx, 'read', 'Field');
-  const conditions: (SQL | undefined)[] = [siteScope(ctx.actor)];
+  const conditions: (SQL | undefined)[] = [fieldScope(ctx.actor)];
   if (filter.districtId) conditions.push(eq(sites.districtId, filter.districtId));
   if (filter.siteId) conditions.push(eq(fields.siteId, filter.siteId));
   if (filter.q) conditions.push(sql`(${fields.name} ilike ${'%' + filter.q + '%'} or ${sites.name} ilike ${'%' + filter.q + '%'})`);

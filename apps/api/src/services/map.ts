@@ -31,7 +31,7 @@ import {
 } from '@swardwise/domain';
 import { districts, fieldChecks, fields, settings, sites, standards, weatherDays, weatherStations } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { siteScope } from './scope.ts';
+import { fieldCrewIds, fieldScope, siteScope } from './scope.ts';
 
 export interface MapDistrict {
   id: number;
@@ -169,6 +169,7 @@ async function buildMap(ctx: Ctx, requested: string): Promise<MapAnswer> {
       areaM2: fields.areaM2,
       longAxisDeg: fields.longAxisDeg,
       lastMowedOn: fields.lastMowedOn,
+      crewIds: fieldCrewIds,
       version: fields.version,
       geometry: fields.geometry,
       score: latest.score,
@@ -177,7 +178,7 @@ async function buildMap(ctx: Ctx, requested: string): Promise<MapAnswer> {
     .from(fields)
     .innerJoin(sites, eq(sites.id, fields.siteId))
     .leftJoin(latest, eq(latest.fieldId, fields.id))
-    .where(scope)
+    .where(fieldScope(ctx.actor))
     .orderBy(asc(fields.id));
   const standardRows = await db.select({ level: standards.level, data: standards.data }).from(standards);
   const stationRows: StationSeries[] = await db

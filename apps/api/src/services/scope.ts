@@ -2,9 +2,20 @@
  * Row-level scope in SQL, so list queries read only the caller's rows. The same rules as
  * the shared abilities; services also check each row against the ability.
  */
-import { eq, inArray, sql, type SQL } from 'drizzle-orm';
+import { and, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import type { Actor } from '@swardwise/domain';
-import { sites } from '../db/schema/index.ts';
+import { fields, sites, workOrders } from '../db/schema/index.ts';
+
+/** A crew's work: what it was given in the last fortnight or is given from now on. */
+export const CREW_WORK_WINDOW_DAYS = 14;
+
+/**
+ * The crews with work on a field in the window, for the ability's `crewIds` condition.
+ * Goes in the select list of any query over `fields`.
+ */
+export const fieldCrewIds = sql<number[]>`coalesce((select array_agg(distinct wo.crew_id) from ${workOrders} wo
+  where wo.field_id = ${fields.id} and wo.crew_id is not null
+    and wo.planned_date >= current_date - ${CREW_WORK_WINDOW_DAYS}::int), '{}')`;
 
 /** Condition on the `sites` table for what the actor may read; undefined means everything. */
 export function siteScope(actor: Actor): SQL | undefined {
@@ -18,4 +29,17 @@ export function siteScope(actor: Actor): SQL | undefined {
     case 'partner':
       return actor.siteIds.length ? inArray(sites.id, actor.siteIds) : sql`false`;
   }
+}
+
+/**
+ * Condition on `fields` (joined to `sites`) for what the actor may read: as `siteScope`, and
+ * a crew lead only the fields his crew has work on.
+ */
+export function fieldScope(actor: Actor): SQL | undefined {
+  if (actor.role !== 'crew') return siteScope(actor);
+  return and(
+    siteScope(actor),
+    sql`exists (select 1 from ${workOrders} wo where wo.field_id = ${fields.id} and wo.crew_id = ${actor.crewId ?? -1}
+      and wo.planned_date >= current_date - ${CREW_WORK_WINDOW_DAYS}::int)`,
+  );
 }

@@ -3,9 +3,9 @@
  * again changes nothing (a marker row in `settings` records that it ran).
  */
 import { eq } from 'drizzle-orm';
-import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, hocFor, surfaceScore, type Level } from '@swardwise/domain';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, addDaysIso, hocFor, hoursPerMowingPolygon, mowerTypeFor, surfaceScore, type Level } from '@swardwise/domain';
 import type { Db } from '../client.ts';
-import { crews, districts, fieldChecks, fields, settings, sites, standards, users, userSites, weatherDays, weatherStations } from '../schema/index.ts';
+import { crews, districts, fieldChecks, fields, settings, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../schema/index.ts';
 import { outlineFacts } from '../../services/fields.ts';
 import { hashPassword } from '../../services/users.ts';
 import { buildDemoCity } from './demo-city.ts';
@@ -21,6 +21,7 @@ export interface SeedSummary {
   users: number;
   weatherDays: number;
   fieldChecks: number;
+  workOrders: number;
 }
 
 /** Returns what was inserted, or null when the demo city (or any data) is already there. */
@@ -136,6 +137,7 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
     for (let i = 0; i < days.length; i += 500) await tx.insert(weatherDays).values(days.slice(i, i + 500));
     await tx.insert(settings).values({ key: 'basemap', value: city.basemap });
 
+
     const crewIds = new Map<string, number>();
     for (const c of city.crews) {
       const [row] = await tx
@@ -162,6 +164,41 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
       }
     }
 
+    // A few days of invented mowing work per crew from the day of seeding, so crew leads
+    // have work (and the fields of it) to see; the foreman's week plan takes over from here.
+    const today = new Date().toISOString().slice(0, 10);
+    const crewsByDistrict = new Map<string, number[]>();
+    for (const c of city.crews) crewsByDistrict.set(c.districtCode, [...(crewsByDistrict.get(c.districtCode) ?? []), crewIds.get(c.name)!]);
+    const siteOf = new Map(city.sites.map((s) => [s.key, s]));
+    const perDistrict = new Map<string, number>();
+    const orders = city.fields.flatMap((f, i) => {
+      const site = siteOf.get(f.siteKey)!;
+      const districtCrews = crewsByDistrict.get(site.districtCode) ?? [];
+      if (!districtCrews.length || f.status === 'closed') return [];
+      const n = perDistrict.get(site.districtCode) ?? 0;
+      perDistrict.set(site.districtCode, n + 1);
+      const hocMm = hocFor({ ...f, maintenanceLevel: f.maintenanceLevel as Level }, DEFAULT_STANDARDS);
+      const mower = DEFAULT_PARAMETERS.mowers[mowerTypeFor(hocMm)];
+      return [
+        {
+          fieldId: fieldRows[i]!.id,
+          siteId: siteIds.get(f.siteKey)!,
+          districtId: districtIds.get(site.districtCode)!,
+          task: 'mow' as const,
+          weekStart: today,
+          plannedDate: addDaysIso(today, n % 5),
+          crewId: districtCrews[n % districtCrews.length]!,
+          plannedHours: Math.round(hoursPerMowingPolygon(f.geometry, mower) * 100) / 100,
+          status: 'assigned' as const,
+          origin: 'manual' as const,
+          pinned: true,
+          reason: 'Demo work (invented) seeded with the city',
+          details: { hocMm, mower: mower.kind },
+        },
+      ];
+    });
+    if (orders.length) await tx.insert(workOrders).values(orders);
+
     const summary: SeedSummary = {
       districts: city.districts.length,
       sites: city.sites.length,
@@ -170,6 +207,7 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
       users: city.users.length,
       weatherDays: days.length,
       fieldChecks: checks.length,
+      workOrders: orders.length,
     };
     await tx.insert(settings).values({ key: MARKER, value: { seededAt: new Date().toISOString(), note: city.city.note, ...summary } });
     return summary;

@@ -1,0 +1,46 @@
+import supertest from 'supertest';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { giveWork } from '../support/fixture.ts';
+import { startTestApi, type TestApi } from '../support/app.ts';
+
+let api: TestApi;
+const ids: Record<string, number> = {};
+beforeAll(async () => {
+  api = await startTestApi();
+  const { fields: f, crews } = api.fixture;
+  ids.northToday = await giveWork(api.database.db, f.northSoccer, crews.north, 0);
+  ids.schoolSoon = await giveWork(api.database.db, f.northSchoolFootball, crews.north, 3);
+  ids.southToday = await giveWork(api.database.db, f.southBaseball, crews.south, 0);
+  ids.northLater = await giveWork(api.database.db, f.northLawn, crews.north, 20);
+});
+afterAll(() => api.close());
+
+const got = (res: { body: { items: { id: number }[] } }) => res.body.items.map((w) => w.id).sort((a, b) => a - b);
+const sorted = (...xs: number[]) => [...xs].sort((a, b) => a - b);
+
+describe('work orders by role', () => {
+  test('should show a crew lead only his crew’s work in the coming week', async () => {
+    const res = await (await api.signIn('crew')).get('/api/work-orders');
+    expect(res.status).toBe(200);
+    expect(got(res)).toEqual(sorted(ids.northToday!, ids.schoolSoon!));
+    expect(res.body.items[0]).toMatchObject({ task: 'mow', crewName: 'North Crew', fieldName: 'Soccer 1', siteName: 'Test Park North' });
+  });
+
+  test('should show a foreman his district, the head everything and a partner his site', async () => {
+    expect(got(await (await api.signIn('foreman')).get('/api/work-orders'))).toEqual(sorted(ids.northToday!, ids.schoolSoon!));
+    expect(got(await (await api.signIn('head')).get('/api/work-orders'))).toEqual(sorted(ids.northToday!, ids.schoolSoon!, ids.southToday!));
+    expect(got(await (await api.signIn('partner')).get('/api/work-orders'))).toEqual([ids.schoolSoon]);
+  });
+
+  test('should take a longer range and refuse a bad one', async () => {
+    const foreman = await api.signIn('foreman');
+    const from = new Date().toISOString().slice(0, 10);
+    const to = new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10);
+    expect(got(await foreman.get('/api/work-orders').query({ from, to }))).toEqual(sorted(ids.northToday!, ids.schoolSoon!, ids.northLater!));
+    const back = await foreman.get('/api/work-orders').query({ from: to, to: from });
+    expect(back.status).toBe(400);
+    expect(back.body.error.details.issues[0].path).toBe('query.to');
+    expect((await foreman.get('/api/work-orders').query({ from: 'soon' })).status).toBe(400);
+    expect((await supertest(api.app).get('/api/work-orders')).status).toBe(401);
+  });
+});
