@@ -90,6 +90,17 @@ describe('the map', () => {
       expect(saved!.areaM2).toBeGreaterThan(1000);
       await expect.poll(() => page.locator('[data-test="summary-name"]').textContent()).toBe('Drawn practice pitch');
       await page.screenshot({ path: path.join(shots, 'map-saved-foreman.png') });
+
+      // Deleting asks first, then the field is gone from the map and the API.
+      const before = Number(await page.locator('[data-test="field-map"]').getAttribute('data-field-count'));
+      await page.locator('[data-test="summary-delete"]').click();
+      await page.locator('.el-message-box').getByRole('button', { name: 'Delete' }).click();
+      await expect.poll(() => page.locator('[data-test="field-map"]').getAttribute('data-field-count')).toBe(String(before - 1));
+      const stillThere = await page.evaluate(async () => {
+        const items = (await (await fetch('/api/fields')).json()).items as { name: string }[];
+        return items.some((f) => f.name === 'Drawn practice pitch');
+      });
+      expect(stillThere).toBe(false);
     } finally {
       await page.close();
     }
