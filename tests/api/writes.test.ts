@@ -160,3 +160,31 @@ describe('audit log', () => {
     expect(res.body.items.every((e: { districtId: number }) => e.districtId === api.fixture.districts.south)).toBe(true);
   });
 });
+
+describe('deleting a field', () => {
+  test('should let a foreman delete his own field with its version, audited, and refuse a stale version or another district', async () => {
+    const agent = await api.signIn('foreman');
+    const created = await agent.post('/api/fields').send({
+      siteId: api.fixture.sites.northPark,
+      name: 'Temporary pitch',
+      sport: 'soccer',
+      grass: 'tall_fescue',
+      rootzone: 'native_soil',
+      irrigation: 'none',
+      maintenanceLevel: 3,
+      clippings: 'returned',
+      geometry: rectangle(37.623, -66.476, 45, 64),
+    });
+    expect(created.status).toBe(201);
+    const id = created.body.field.id;
+    expect((await agent.delete(`/api/fields/${id}?version=2`)).status).toBe(409);
+    expect((await agent.delete(`/api/fields/${id}`)).status).toBe(400);
+    expect((await agent.delete(`/api/fields/${api.fixture.fields.southBaseball}?version=1`)).status).toBe(403);
+    expect((await agent.delete(`/api/fields/${id}?version=1`)).status).toBe(204);
+    expect(await api.database.db.select().from(fields).where(eq(fields.id, id))).toHaveLength(0);
+    const entries = await api.database.db.select().from(auditLog).where(eq(auditLog.entityId, id));
+    expect(entries.map((e) => e.action)).toEqual(['create', 'delete']);
+    expect(entries[1]!.before).toMatchObject({ name: 'Temporary pitch' });
+    expect((await agent.get(`/api/fields/${id}`)).status).toBe(404);
+  });
+});

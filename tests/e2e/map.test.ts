@@ -91,6 +91,20 @@ describe('the map', () => {
       await expect.poll(() => page.locator('[data-test="summary-name"]').textContent()).toBe('Drawn practice pitch');
       await page.screenshot({ path: path.join(shots, 'map-saved-foreman.png') });
 
+      // The new field's page shows what the turf engine works out for it.
+      const drawnId = await page.evaluate(async () => {
+        const items = (await (await fetch('/api/fields')).json()).items as { id: number; name: string }[];
+        return items.find((f) => f.name === 'Drawn practice pitch')!.id;
+      });
+      // A second window signed in as the same foreman, so the map keeps its selection.
+      const second = await browser.newContext({ storageState: await page.context().storageState() });
+      const fieldPage = await second.newPage();
+      await fieldPage.goto(`${baseUrl}/fields/${drawnId}`);
+      await fieldPage.locator('[data-test="needs-hoc"]').waitFor();
+      expect(await fieldPage.locator('[data-test="needs-hoc"]').innerText()).toMatch(/^\d+(\.\d+)? in$/);
+      expect(await fieldPage.locator('[data-test="needs-mowings-per-week"]').innerText()).toMatch(/^\d+(\.\d)?$/);
+      await second.close();
+
       // Deleting asks first, then the field is gone from the map and the API.
       const before = Number(await page.locator('[data-test="field-map"]').getAttribute('data-field-count'));
       await page.locator('[data-test="summary-delete"]').click();
