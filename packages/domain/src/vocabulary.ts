@@ -95,6 +95,10 @@ export const IRRIGATION_LABELS: Record<IrrigationKind, string> = {
 
 export const CLIPPINGS = ['returned', 'removed'] as const;
 export type Clippings = (typeof CLIPPINGS)[number];
+export const CLIPPINGS_LABELS: Record<Clippings, string> = {
+  returned: 'Returned',
+  removed: 'Removed',
+};
 
 export const FIELD_STATUSES = ['open', 'restricted', 'closed'] as const;
 export type FieldStatus = (typeof FIELD_STATUSES)[number];
@@ -114,6 +118,10 @@ export const SITE_KIND_LABELS: Record<SiteKind, string> = {
 
 export const SITE_OWNERS = ['city', 'school_district'] as const;
 export type SiteOwner = (typeof SITE_OWNERS)[number];
+export const SITE_OWNER_LABELS: Record<SiteOwner, string> = {
+  city: 'City parks',
+  school_district: 'School district',
+};
 
 export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
 export type UnitSystem = (typeof UNIT_SYSTEMS)[number];

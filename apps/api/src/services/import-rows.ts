@@ -15,6 +15,8 @@ import {
   polygonSchema,
   ROOTZONE_LABELS,
   SITE_KIND_LABELS,
+  SITE_OWNER_LABELS,
+  CLIPPINGS_LABELS,
   SPORT_LABELS,
   updateFieldSchema,
   updateSiteSchema,
@@ -45,8 +47,6 @@ export interface Plan {
   writes: PlannedWrite[];
   summary: ImportSummary;
 }
-
-const OWNER_LABELS = { city: 'City parks', school_district: 'School district' };
 
 const norm = (s: string) => s.trim().toLowerCase().replace(/[\s-]+/g, '_');
 
@@ -161,7 +161,7 @@ async function planSites(ctx: Ctx, raw: RawRow[]): Promise<Plan> {
       name: name || undefined,
       districtId,
       kind: vocab(data.kind, SITE_KIND_LABELS),
-      owner: vocab(data.owner, OWNER_LABELS),
+      owner: vocab(data.owner, SITE_OWNER_LABELS),
       address: text(data.address),
       lat: check.number(data, 'lat'),
       lng: check.number(data, 'lng'),
@@ -269,7 +269,7 @@ async function planFields(ctx: Ctx, raw: RawRow[]): Promise<Plan> {
       rootzone: vocab(data.rootzone, ROOTZONE_LABELS),
       irrigation: vocab(data.irrigation, IRRIGATION_LABELS),
       maintenanceLevel: levelOf(data.level, check),
-      clippings: vocab(data.clippings, { returned: 'returned', removed: 'removed' }),
+      clippings: vocab(data.clippings, CLIPPINGS_LABELS),
       hocOverrideMm: check.number(data, 'hoc_mm'),
       status: vocab(data.status, FIELD_STATUS_LABELS),
       statusNote: text(data.status_note),
