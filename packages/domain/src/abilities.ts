@@ -18,6 +18,7 @@ export const SUBJECTS = [
   'Equipment',
   'WorkOrder',
   'FieldCheck',
+  'FieldEvent',
   'Standards',
   'Settings',
   'AuditEntry',
@@ -67,7 +68,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       break;
 
     case 'head':
-      can('read', ['District', 'Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck', 'Weather', 'Request']);
+      can('read', ['District', 'Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck', 'FieldEvent', 'Weather', 'Request']);
       can('read', ['Standards', 'Settings', 'AuditEntry']);
       can('update', ['Standards', 'Settings']);
       // The head decides maintenance levels and may correct any site or field.
@@ -78,7 +79,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
     case 'foreman': {
       const d = actor.districtId ?? -1;
       can('read', 'District', { id: d });
-      can('manage', ['Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck'], { districtId: d });
+      can('manage', ['Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck', 'FieldEvent'], { districtId: d });
       can(['read', 'update'], 'Request', { districtId: d });
       can('read', ['Standards', 'Weather']);
       can('create', ['Import', 'Weather']);
@@ -99,6 +100,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can('read', 'Equipment', { crewId: c });
       can(['read', 'log'], 'WorkOrder', { crewId: c });
       can('create', 'FieldCheck', { districtId: d });
+      can('read', 'FieldEvent', { districtId: d });
       can('read', ['Standards', 'Weather']);
       break;
     }
@@ -108,6 +110,8 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can('read', 'Site', { id: { $in: sites } });
       can('read', 'Field', { siteId: { $in: sites } });
       can('read', 'WorkOrder', { siteId: { $in: sites } });
+      // School athletic directors and league contacts book games on their fields.
+      can('manage', 'FieldEvent', { siteId: { $in: sites } });
       can(['read', 'create'], 'Request', { siteId: { $in: sites } });
       can('read', 'Standards');
       break;

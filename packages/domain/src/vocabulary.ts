@@ -153,3 +153,23 @@ export const WORK_TASK_LABELS: Record<WorkTask, string> = {
 };
 export const WORK_STATUSES = ['planned', 'assigned', 'started', 'done', 'skipped'] as const;
 export type WorkStatus = (typeof WORK_STATUSES)[number];
+export const WORK_STATUS_LABELS: Record<WorkStatus, string> = {
+  planned: 'Planned',
+  assigned: 'Assigned',
+  started: 'Started',
+  done: 'Done',
+  skipped: 'Skipped',
+};
+/** What a crew may report on a work order. */
+export const WORK_REPORTS = ['started', 'done', 'skipped'] as const;
+export type WorkReport = (typeof WORK_REPORTS)[number];
+
+export const FIELD_EVENT_KINDS = ['game', 'tournament', 'practice', 'ceremony', 'other'] as const;
+export type FieldEventKind = (typeof FIELD_EVENT_KINDS)[number];
+export const FIELD_EVENT_KIND_LABELS: Record<FieldEventKind, string> = {
+  game: 'Game',
+  tournament: 'Tournament',
+  practice: 'Practice',
+  ceremony: 'Ceremony',
+  other: 'Other booking',
+};

@@ -20,6 +20,7 @@ export async function listCrews(ctx: Ctx, filter: { districtId?: number | undefi
       name: crews.name,
       hoursPerDay: crews.hoursPerDay,
       members: crews.members,
+      workDays: crews.workDays,
       leadUserId: sql<number | null>`(select min(${users.id}) from ${users} where ${users.crewId} = ${crews.id} and ${users.role} = 'crew')`,
       version: crews.version,
     })

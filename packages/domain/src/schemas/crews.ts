@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { EQUIPMENT_KINDS, MOWER_KINDS } from '../vocabulary.ts';
+import { WEEKDAYS } from '../engine/dates.ts';
 import { idSchema, versionSchema } from './common.ts';
 
 const crewFields = {
@@ -7,10 +8,15 @@ const crewFields = {
   name: z.string().trim().min(2, 'enter a crew name').max(80),
   hoursPerDay: z.number({ error: 'hours per day is required' }).min(0.5, 'at least half an hour a day').max(16, 'more than 16 hours a day is not a shift'),
   members: z.array(z.string().trim().min(1).max(80)).max(20, 'at most 20 members'),
+  workDays: z
+    .array(z.enum(WEEKDAYS, { error: `a working day is one of ${WEEKDAYS.join(', ')}` }))
+    .min(1, 'a crew works at least one day a week')
+    .max(7)
+    .refine((d) => new Set(d).size === d.length, 'a day is listed twice'),
 };
 
 // Defaults belong to creation only: an update that leaves a key out leaves it as it is.
-export const createCrewSchema = z.object({ ...crewFields, members: crewFields.members.default([]) });
+export const createCrewSchema = z.object({ ...crewFields, members: crewFields.members.default([]), workDays: crewFields.workDays.default(['mon', 'tue', 'wed', 'thu', 'fri']) });
 export type CreateCrewInput = z.infer<typeof createCrewSchema>;
 export const updateCrewSchema = z.object(crewFields).partial().extend({ version: versionSchema });
 export type UpdateCrewInput = z.infer<typeof updateCrewSchema>;

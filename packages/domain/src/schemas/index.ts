@@ -8,3 +8,4 @@ export * from './map.ts';
 export * from './standards.ts';
 export * from './weather.ts';
 export * from './crews.ts';
+export * from './work.ts';

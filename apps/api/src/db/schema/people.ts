@@ -1,6 +1,6 @@
 /** Crews, users, their scopes and sessions. */
 import { boolean, index, integer, jsonb, pgTable, primaryKey, real, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
-import type { Role, UnitSystem } from '@swardwise/domain';
+import type { Role, UnitSystem, Weekday } from '@swardwise/domain';
 import { districts, sites } from './city.ts';
 
 export const crews = pgTable(
@@ -13,6 +13,8 @@ export const crews = pgTable(
     name: text('name').notNull(),
     hoursPerDay: real('hours_per_day').notNull().default(8),
     members: jsonb('members').$type<string[]>().notNull().default([]),
+    /** Working days of the week; the week plan puts the crew's work on these days only. */
+    workDays: jsonb('work_days').$type<Weekday[]>().notNull().default(['mon', 'tue', 'wed', 'thu', 'fri']),
     version: integer('version').notNull().default(1),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),

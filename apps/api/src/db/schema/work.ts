@@ -1,6 +1,6 @@
 /** Equipment, work orders and their photos: the crews' side of the week plan. */
-import { boolean, date, index, integer, jsonb, pgTable, real, text, timestamp } from 'drizzle-orm/pg-core';
-import type { EquipmentKind, WorkStatus, WorkTask } from '@swardwise/domain';
+import { boolean, date, index, integer, jsonb, pgTable, real, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import type { EquipmentKind, FieldEventKind, WorkStatus, WorkTask } from '@swardwise/domain';
 import { districts, fields, sites } from './city.ts';
 import { crews, users } from './people.ts';
 
@@ -94,4 +94,55 @@ export const workPhotos = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index('work_photos_order_idx').on(t.workOrderId)],
+);
+
+/**
+ * What a crew reported on a work order, one row per submission. `clientRef` is made by the
+ * phone before the first try, so a submission retried after a lost answer is stored once.
+ */
+export const workUpdates = pgTable(
+  'work_updates',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    workOrderId: integer('work_order_id')
+      .notNull()
+      .references(() => workOrders.id, { onDelete: 'cascade' }),
+    status: text('status').$type<WorkStatus>().notNull(),
+    actualHours: real('actual_hours'),
+    note: text('note').notNull().default(''),
+    clientRef: text('client_ref'),
+    /** When the crew did it (the phone's clock), which may be before it reached the server. */
+    reportedAt: timestamp('reported_at', { withTimezone: true }).notNull(),
+    createdBy: integer('created_by').references(() => users.id),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('work_updates_order_idx').on(t.workOrderId), uniqueIndex('work_updates_client_ref_key').on(t.clientRef)],
+);
+
+/** Games, tournaments and other bookings of a field: the lines are painted before them. */
+export const fieldEvents = pgTable(
+  'field_events',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    fieldId: integer('field_id')
+      .notNull()
+      .references(() => fields.id, { onDelete: 'cascade' }),
+    /** Copies of the field's site and district, so scope checks need no join. */
+    siteId: integer('site_id')
+      .notNull()
+      .references(() => sites.id),
+    districtId: integer('district_id')
+      .notNull()
+      .references(() => districts.id),
+    kind: text('kind').$type<FieldEventKind>().notNull(),
+    title: text('title').notNull(),
+    startsOn: date('starts_on', { mode: 'string' }).notNull(),
+    startTime: text('start_time'),
+    notes: text('notes').notNull().default(''),
+    createdBy: integer('created_by').references(() => users.id),
+    version: integer('version').notNull().default(1),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('field_events_field_idx').on(t.fieldId, t.startsOn), index('field_events_district_idx').on(t.districtId, t.startsOn)],
 );
