@@ -264,3 +264,13 @@ describe('reconcileWeek', () => {
     expect(isKept(row({ status: 'started' }))).toBe(true);
   });
 });
+
+describe('planFieldWeek without a mowing on record', () => {
+  test('should assume the rule was kept before the week, not call the field overdue', () => {
+    const plan = planFieldWeek({ field: field({ lastMowedOn: null }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    const mows = plan.orders.filter((o) => o.task === 'mow');
+    expect(mows.length).toBeGreaterThan(0);
+    expect(mows.every((o) => !o.reason.startsWith('Overdue'))).toBe(true);
+    expect(plan.notes.join(' ')).toMatch(/No mowing on record/);
+  });
+});

@@ -212,8 +212,16 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
     const mowOptions = { maxIntervalDays: std.maxMowingIntervalDays, minMowingsPerWeek: std.minMowingsPerWeek, frequencyMinGrowthMm: 0.1 * hocMm, mowingDays: input.workDays.length ? input.workDays : WEEKDAYS };
     const keptCuts = new Set(keptOf('mow').map((k) => k.plannedDate));
     const asked: Array<{ date: string; heightMm: number; reason: 'growth' | 'frequency' | 'overdue'; overdueSince?: string }> = [];
-    let cutIdx = field.lastMowedOn ? idx(field.lastMowedOn) : -1; // −1: cut to HOC the day before the weather starts
+    let cutIdx = field.lastMowedOn ? idx(field.lastMowedOn) : -1;
     if (cutIdx >= growth.length) cutIdx = growth.length - 1;
+    if (cutIdx < 0 && idx(weekStart) > 0) {
+      // No cut on record since the weather began: assume the field was mowed as the rule
+      // asked until this week (a season run from the first day of weather), not overdue.
+      const season = simulateMowing(hocMm, growth.slice(0, idx(weekStart)), hocMm, { ...mowOptions, startDate: first as string });
+      const lastAssumed = season.mowings[season.mowings.length - 1];
+      cutIdx = lastAssumed ? lastAssumed.dayIndex : -1;
+      notes.push('No mowing on record: the plan assumes the field was mowed as the one-third rule asked before this week.');
+    }
     for (let guard = 0; guard < 20; guard++) {
       const from = Math.max(0, cutIdx + 1);
       if (from > idx(weekEnd)) break;
@@ -646,12 +654,12 @@ export function isKept(o: Pick<ExistingOrder, 'pinned' | 'origin' | 'status'>): 
   return o.pinned || o.origin === 'manual' || o.status === 'started' || o.status === 'done' || o.status === 'skipped';
 }
 
-export interface WeekReconciliation<P> {
+export interface WeekReconciliation<E extends ExistingOrder, P> {
   insert: P[];
-  update: Array<{ id: number; next: P; what: string[]; before: ExistingOrder }>;
-  remove: ExistingOrder[];
-  kept: ExistingOrder[];
-  unchanged: ExistingOrder[];
+  update: Array<{ id: number; next: P; what: string[]; before: E }>;
+  remove: E[];
+  kept: E[];
+  unchanged: E[];
 }
 
 /**
@@ -659,17 +667,17 @@ export interface WeekReconciliation<P> {
  * the new plan by field and task in date order — same day, hours and crew: unchanged; else
  * updated (with what changed); unmatched old ones are removed and new ones inserted.
  */
-export function reconcileWeek<P extends Pick<ScheduledOrder, 'fieldId' | 'task' | 'plannedDate' | 'plannedHours' | 'crewId' | 'equipmentId'>>(existing: readonly ExistingOrder[], plan: readonly P[]): WeekReconciliation<P> {
+export function reconcileWeek<E extends ExistingOrder, P extends Pick<ScheduledOrder, 'fieldId' | 'task' | 'plannedDate' | 'plannedHours' | 'crewId' | 'equipmentId'>>(existing: readonly E[], plan: readonly P[]): WeekReconciliation<E, P> {
   const kept = existing.filter(isKept);
   const open = existing.filter((o) => !isKept(o));
   const key = (o: { fieldId: number; task: string }) => `${o.fieldId}|${o.task}`;
-  const byKey = new Map<string, ExistingOrder[]>();
+  const byKey = new Map<string, E[]>();
   for (const o of [...open].sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : a.id - b.id))) {
     const list = byKey.get(key(o)) ?? [];
     list.push(o);
     byKey.set(key(o), list);
   }
-  const out: WeekReconciliation<P> = { insert: [], update: [], remove: [], kept, unchanged: [] };
+  const out: WeekReconciliation<E, P> = { insert: [], update: [], remove: [], kept, unchanged: [] };
   const sortedPlan = [...plan].sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : 0));
   for (const p of sortedPlan) {
     const list = byKey.get(key(p));
