@@ -136,7 +136,7 @@ export function demoFieldEvents(city: DemoCity, seededOn: string): DemoFieldEven
         title: `${name}, day ${d + 1}`,
         startsOn: addDaysIso(onOrAfter(from, 6), d),
         startTime: '08:00',
-        notes: 'Invented tournament: lines fresh for day 1, touched up overnight',
+        notes: 'Lines fresh for day 1, touched up overnight',
       });
     }
   });
@@ -154,7 +154,7 @@ export function demoFieldEvents(city: DemoCity, seededOn: string): DemoFieldEven
     for (let offset = -7 + Math.floor(rng() * 4); offset <= 21; offset += 7 + Math.floor(rng() * 7)) {
       const startsOn = addDaysIso(seededOn, offset);
       const kind: FieldEventKind = rng() < 0.15 ? 'ceremony' : 'game';
-      const title = kind === 'ceremony' ? `${pick(rng, ['Community day', 'Season awards', 'School field day'])} (invented)` : `${LEAGUE[sport]}: ${matchup(rng)}`;
+      const title = kind === 'ceremony' ? pick(rng, ['Community day', 'Season awards', 'School field day']) : `${LEAGUE[sport]}: ${matchup(rng)}`;
       add({ fieldIndex: i, kind, title, startsOn, startTime: pick(rng, weekday(startsOn) % 6 === 0 ? WEEKEND_TIMES : EVENING_TIMES), notes: '' });
     }
   });
