@@ -388,25 +388,77 @@ export async function generateWeek(ctx: Ctx, input: GenerateWeekInput) {
         audits.push({ actorId: ctx.actor.id, action: 'update', entity: 'work_order', entityId: u.id, districtId: after.districtId, before: u.before, after });
       }
       // Unchanged orders take the newest reasons and details (heights, run times) without a new version.
+      const planned = new Map(plan.orders.map((o) => [`${o.fieldId}|${o.task}|${o.plannedDate}`, o]));
       for (const u of rec.unchanged) {
-        const p = plan.orders.find((o) => o.fieldId === u.fieldId && o.task === u.task && o.plannedDate === u.plannedDate);
+        const p = planned.get(`${u.fieldId}|${u.task}|${u.plannedDate}`);
         const details = p ? { ...p.details, dueBy: p.latestDate } : null;
-        if (p && (p.reason !== u.reason || JSON.stringify(details) !== JSON.stringify(u.details))) await tx.update(workOrders).set({ reason: p.reason, details: details! }).where(eq(workOrders.id, u.id));
+        if (p && (p.reason !== u.reason || canonical(details) !== canonical(u.details))) await tx.update(workOrders).set({ reason: p.reason, details: details! }).where(eq(workOrders.id, u.id));
       }
-      for (let i = 0; i < rec.insert.length; i += 500) {
-        const chunk = rec.insert.slice(i, i + 500);
-        const rows = await tx.insert(workOrders).values(chunk.map((p) => toInsert(p, q, ctx.actor.id))).returning();
-        for (const r of rows) audits.push({ actorId: ctx.actor.id, action: 'create', entity: 'work_order', entityId: r.id, districtId: r.districtId, before: null, after: r });
+      if (rec.insert.length) {
+        const rows = rec.insert.map((p) => toInsert(p, q, ctx.actor.id));
+        const ids = await bulkInsertOrders(tx, rows);
+        // The audit keeps what was planned (the engine's details stay on the order row).
+        rows.forEach((r, k) => {
+          const { details: _details, ...after } = r;
+          audits.push({ actorId: ctx.actor.id, action: 'create', entity: 'work_order', entityId: ids[k]!, districtId: q.districtId, before: null, after: { id: ids[k]!, ...after } });
+        });
       }
       audits.push({ actorId: ctx.actor.id, action: 'create', entity: 'week_plan', entityId: null, districtId: q.districtId, before: null, after: { weekStart: q.weekStart, ...diff.summary, warnings: plan.warnings } });
-      for (let i = 0; i < audits.length; i += 500) await tx.insert(auditLog).values(audits.slice(i, i + 500));
+      await bulkInsertAudit(tx, audits);
     });
   }
   const board = await getWeekBoard(ctx, q);
   return { dryRun: input.dryRun, diff, warnings: plan.warnings, board };
 }
 
+/** JSON with keys sorted: jsonb does not keep key order, so plain JSON.stringify would differ. */
+function canonical(v: unknown): string {
+  if (Array.isArray(v)) return `[${v.map(canonical).join(',')}]`;
+  if (v && typeof v === 'object') {
+    return `{${Object.keys(v as object)
+      .filter((k) => (v as Record<string, unknown>)[k] !== undefined)
+      .sort()
+      .map((k) => `${JSON.stringify(k)}:${canonical((v as Record<string, unknown>)[k])}`)
+      .join(',')}}`;
+  }
+  return JSON.stringify(v);
+}
+
 const stale = () => new AppError('conflict', 'week_plan/changed', 'The week changed while it was being generated (someone assigned or moved work); generate again to see the current plan');
+
+/**
+ * Many orders in one statement: the rows travel as one JSON parameter (json_to_recordset),
+ * which PGlite and PostgreSQL take far faster than thousands of bound parameters. Ids come
+ * back in input order (WITH ORDINALITY).
+ */
+async function bulkInsertOrders(tx: Queryable, rows: (typeof workOrders.$inferInsert)[]): Promise<number[]> {
+  const json = JSON.stringify(rows.map((r, i) => ({ n: i, ...r })));
+  const res = await tx.execute<{ id: number; n: number }>(sql`
+    with input as (
+      select * from json_to_recordset(${json}::json) as x(
+        n int, "fieldId" int, "siteId" int, "districtId" int, task text, "weekStart" date, "plannedDate" date,
+        "crewId" int, "equipmentId" int, "plannedHours" real, status text, origin text, pinned boolean,
+        reason text, details jsonb, "createdBy" int)
+    ), inserted as (
+      insert into ${workOrders} (field_id, site_id, district_id, task, week_start, planned_date, crew_id, equipment_id, planned_hours, status, origin, pinned, reason, details, created_by)
+      select "fieldId", "siteId", "districtId", task, "weekStart", "plannedDate", "crewId", "equipmentId", "plannedHours", status, origin, pinned, reason, details, "createdBy"
+      from input order by n
+      returning id, field_id, task, planned_date
+    )
+    select i.id, input.n from inserted i join input on input."fieldId" = i.field_id and input.task = i.task and input."plannedDate" = i.planned_date`);
+  const out = new Array<number>(rows.length);
+  for (const r of res.rows) out[r.n] = r.id;
+  return out;
+}
+
+async function bulkInsertAudit(tx: Queryable, rows: (typeof auditLog.$inferInsert)[]): Promise<void> {
+  if (!rows.length) return;
+  const json = JSON.stringify(rows);
+  await tx.execute(sql`
+    insert into ${auditLog} (actor_id, action, entity, entity_id, district_id, before, after)
+    select "actorId", action, entity, "entityId", "districtId", before, after
+    from json_to_recordset(${json}::json) as x("actorId" int, action text, entity text, "entityId" int, "districtId" int, before jsonb, after jsonb)`);
+}
 
 function toInsert(p: ScheduledOrder, q: GenerationInput, actorId: number): typeof workOrders.$inferInsert {
   return {

@@ -6,6 +6,7 @@ import { simulateMowing } from './mowing.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor } from './standards.ts';
 import { assignWeek, crewDayLoads, isKept, planFieldWeek, reconcileWeek, weekDates } from './weekgen.ts';
 import type { ExistingOrder, PlanField } from './weekgen.ts';
+import type { Polygon } from '../schemas/common.ts';
 
 const WEEK = '2026-06-01'; // a Monday
 const days = (start: string, n: number, t: { tmax: number; tmin: number; rain?: number }): DailyWeather[] =>
@@ -15,7 +16,7 @@ const WARM = weather({ tmax: 24, tmin: 16 }); // mean 20 °C: GP 1 for cool-seas
 const COOL = weather({ tmax: 11, tmin: 5 }); // mean 8 °C
 
 // 100 m × 64 m at 38° N: about 6,400 m².
-const rect = (lat: number, lng: number, w = 0.00115, h = 0.000576) => ({
+const rect = (lat: number, lng: number, w = 0.00115, h = 0.000576): Polygon => ({
   type: 'Polygon' as const,
   coordinates: [[[lng, lat], [lng + w, lat], [lng + w, lat + h], [lng, lat + h], [lng, lat]]],
 });
@@ -272,5 +273,12 @@ describe('planFieldWeek without a mowing on record', () => {
     expect(mows.length).toBeGreaterThan(0);
     expect(mows.every((o) => !o.reason.startsWith('Overdue'))).toBe(true);
     expect(plan.notes.join(' ')).toMatch(/No mowing on record/);
+  });
+
+  test('should plan a past week as if the rule was kept when the last cut on record is later', () => {
+    const assumed = mowDates(planFieldWeek({ field: field({ lastMowedOn: null }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }));
+    const later = planFieldWeek({ field: field({ lastMowedOn: '2026-06-20' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    expect(mowDates(later)).toEqual(assumed);
+    expect(later.notes.join(' ')).toMatch(/after this week began/);
   });
 });

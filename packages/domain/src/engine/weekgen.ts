@@ -212,7 +212,10 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
     const mowOptions = { maxIntervalDays: std.maxMowingIntervalDays, minMowingsPerWeek: std.minMowingsPerWeek, frequencyMinGrowthMm: 0.1 * hocMm, mowingDays: input.workDays.length ? input.workDays : WEEKDAYS };
     const keptCuts = new Set(keptOf('mow').map((k) => k.plannedDate));
     const asked: Array<{ date: string; heightMm: number; reason: 'growth' | 'frequency' | 'overdue'; overdueSince?: string }> = [];
-    let cutIdx = field.lastMowedOn ? idx(field.lastMowedOn) : -1;
+    // A last cut on or after Monday belongs to a later week than the one planned (planning
+    // back in time): the week is planned as if the rule had been kept up to it.
+    const lastCut = field.lastMowedOn && field.lastMowedOn < weekStart ? field.lastMowedOn : null;
+    let cutIdx = lastCut ? idx(lastCut) : -1;
     if (cutIdx >= growth.length) cutIdx = growth.length - 1;
     if (cutIdx < 0 && idx(weekStart) > 0) {
       // No cut on record since the weather began: assume the field was mowed as the rule
@@ -220,7 +223,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
       const season = simulateMowing(hocMm, growth.slice(0, idx(weekStart)), hocMm, { ...mowOptions, startDate: first as string });
       const lastAssumed = season.mowings[season.mowings.length - 1];
       cutIdx = lastAssumed ? lastAssumed.dayIndex : -1;
-      notes.push('No mowing on record: the plan assumes the field was mowed as the one-third rule asked before this week.');
+      notes.push(field.lastMowedOn && !lastCut ? `The last mowing on record (${field.lastMowedOn}) is after this week began: the plan assumes the one-third rule was kept up to the week.` : 'No mowing on record: the plan assumes the field was mowed as the one-third rule asked before this week.');
     }
     for (let guard = 0; guard < 20; guard++) {
       const from = Math.max(0, cutIdx + 1);
@@ -523,24 +526,59 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
     scheduled.push({ ...o, plannedDate: date, crewId: crew?.id ?? null, equipmentId: null });
   }
 
-  // Move flexible orders off overloaded days.
-  const dayHours = (crewId: number, date: string) => {
-    let h = input.keptHours?.get(`${crewId}|${date}`) ?? 0;
-    const siteIds = new Set<number>();
-    for (const s of scheduled) if (s.crewId === crewId && s.plannedDate === date) {
-      h += s.plannedHours;
-      siteIds.add(s.siteId);
+  // Move flexible orders off overloaded days. Each crew-day's hours (work + a load/unload
+  // per site) are kept up to date in a map as orders move.
+  const days = new Map<string, { hours: number; sites: Map<number, number> }>();
+  const dayOf = (crewId: number, date: string) => {
+    const key = `${crewId}|${date}`;
+    let d = days.get(key);
+    if (!d) {
+      d = { hours: input.keptHours?.get(key) ?? 0, sites: new Map() };
+      days.set(key, d);
     }
-    return h + (siteIds.size * input.travel.loadUnloadMin) / 60;
+    return d;
   };
+  const unload = input.travel.loadUnloadMin / 60;
+  const place = (s: ScheduledOrder, sign: 1 | -1) => {
+    if (s.crewId === null) return;
+    const d = dayOf(s.crewId, s.plannedDate);
+    d.hours += sign * s.plannedHours;
+    const n = (d.sites.get(s.siteId) ?? 0) + sign;
+    if (n <= 0) d.sites.delete(s.siteId);
+    else d.sites.set(s.siteId, n);
+  };
+  const dayHours = (crewId: number, date: string) => {
+    const d = dayOf(crewId, date);
+    return d.hours + d.sites.size * unload;
+  };
+  for (const s of scheduled) place(s, 1);
+  const byCrewDay = new Map<string, ScheduledOrder[]>();
+  for (const s of scheduled) {
+    if (!s.flexible || s.crewId === null) continue;
+    const key = `${s.crewId}|${s.plannedDate}`;
+    byCrewDay.set(key, [...(byCrewDay.get(key) ?? []), s]);
+  }
   for (const crew of crews) {
     const workDates = dates.filter((d) => crew.workDays.includes(weekdayOf(d)));
     for (const date of workDates) {
-      const movable = scheduled.filter((s) => s.crewId === crew.id && s.plannedDate === date && s.flexible).sort((a, b) => b.plannedHours - a.plannedHours || a.fieldId - b.fieldId);
+      const movable = (byCrewDay.get(`${crew.id}|${date}`) ?? []).sort((a, b) => b.plannedHours - a.plannedHours || a.fieldId - b.fieldId);
       for (const s of movable) {
         if (dayHours(crew.id, date) <= crew.hoursPerDay + 1e-9) break;
-        const target = workDates.filter((d) => d !== date).sort((a, b) => dayHours(crew.id, a) - dayHours(crew.id, b) || (a < b ? -1 : 1))[0];
-        if (target && dayHours(crew.id, target) + s.plannedHours <= crew.hoursPerDay + 1e-9) s.plannedDate = target;
+        let target: string | undefined;
+        let best = Infinity;
+        for (const d of workDates) {
+          if (d === date) continue;
+          const h = dayHours(crew.id, d);
+          if (h < best - 1e-12) {
+            best = h;
+            target = d;
+          }
+        }
+        if (target && best + s.plannedHours + unload <= crew.hoursPerDay + 1e-9) {
+          place(s, -1);
+          s.plannedDate = target;
+          place(s, 1);
+        }
       }
     }
   }

@@ -5,9 +5,10 @@
 import { eq } from 'drizzle-orm';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, addDaysIso, hocFor, hoursPerMowingPolygon, mowerTypeFor, surfaceScore, type Level } from '@swardwise/domain';
 import type { Db } from '../client.ts';
-import { crews, districts, fieldChecks, fieldEvents, fields, settings, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../schema/index.ts';
+import { crews, districts, equipment, fieldChecks, fieldEvents, fields, settings, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../schema/index.ts';
 import { outlineFacts } from '../../services/fields.ts';
 import { hashPassword } from '../../services/users.ts';
+import { mondayOf } from '../../services/work-orders.ts';
 import { buildDemoCity } from './demo-city.ts';
 import { demoFieldEvents } from './demo-events.ts';
 import { demoFieldHistory } from './demo-history.ts';
@@ -149,6 +150,29 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
       crewIds.set(c.name, row!.id);
     }
 
+    // Invented fleet: each crew has a reel and a rotary mower; each district a flail mower, a
+    // line marker and a spreader in its yard pool.
+    const fleet: (typeof equipment.$inferInsert)[] = [];
+    for (const d of city.districts) {
+      const code = d.code.slice(0, 2).toUpperCase();
+      const districtId = districtIds.get(d.code)!;
+      city.crews
+        .filter((c) => c.districtCode === d.code)
+        .forEach((c, k) => {
+          const crewId = crewIds.get(c.name)!;
+          fleet.push(
+            { districtId, crewId, kind: 'reel_mower', name: `${code}-R${k + 1} triplex reel`, cuttingWidthM: 2.8, speedKmh: 6, fieldEfficiency: 0.8, hocMinMm: 6, hocMaxMm: 38, hourMeterH: 410 + k * 95, sharpenIntervalH: 100, lastSharpenedAtH: 330 + k * 95 },
+            { districtId, crewId, kind: 'rotary_mower', name: `${code}-M${k + 1} 72-inch rotary`, cuttingWidthM: 1.83, speedKmh: 8, fieldEfficiency: 0.8, hocMinMm: 25, hocMaxMm: 125, hourMeterH: 620 + k * 40, sharpenIntervalH: 50, lastSharpenedAtH: 600 + k * 40 },
+          );
+        });
+      fleet.push(
+        { districtId, kind: 'flail_mower', name: `${code}-F1 flail`, cuttingWidthM: 2.2, speedKmh: 7, fieldEfficiency: 0.75, hocMinMm: 40, hocMaxMm: 150, hourMeterH: 280 },
+        { districtId, kind: 'line_marker', name: `${code}-L1 line marker`, hourMeterH: 120 },
+        { districtId, kind: 'spreader', name: `${code}-S1 rotary spreader`, hourMeterH: 60 },
+      );
+    }
+    await tx.insert(equipment).values(fleet);
+
     for (const u of city.users) {
       const [row] = await tx
         .insert(users)
@@ -187,7 +211,7 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
           siteId: siteIds.get(f.siteKey)!,
           districtId: districtIds.get(site.districtCode)!,
           task: 'mow' as const,
-          weekStart: today,
+          weekStart: mondayOf(addDaysIso(today, n % 5)),
           plannedDate: addDaysIso(today, n % 5),
           crewId: districtCrews[n % districtCrews.length]!,
           plannedHours: Math.round(hoursPerMowingPolygon(f.geometry, mower) * 100) / 100,
