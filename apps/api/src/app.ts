@@ -28,6 +28,7 @@ import { standardsRouter } from './routes/standards.ts';
 import { usersRouter } from './routes/users.ts';
 import { weatherRouter } from './routes/weather.ts';
 import { workOrdersRouter } from './routes/work-orders.ts';
+import { workReportsRouter } from './routes/work-reports.ts';
 
 export interface AppDeps {
   db: Db;
@@ -61,7 +62,8 @@ export function createApp(
         directives: {
           upgradeInsecureRequests: config.cookieSecure ? [] : null,
           // Map tiles load only from the one configured tile server (none by default).
-          imgSrc: ["'self'", 'data:', ...tileOrigins(config.mapTileUrl)],
+          // blob: previews of the photos a crew has chosen but not yet sent.
+          imgSrc: ["'self'", 'data:', 'blob:', ...tileOrigins(config.mapTileUrl)],
         },
       },
       strictTransportSecurity: config.cookieSecure,
@@ -108,6 +110,7 @@ export function createApp(
   app.use('/api/users', usersRouter(full));
   app.use('/api/weather', weatherRouter(full));
   app.use('/api/work-orders', workOrdersRouter(full));
+  app.use('/api/work-orders', workReportsRouter(full));
   app.use('/api/sites', sitesRouter(full));
   app.use('/api/fields', fieldsRouter(full));
   app.use('/api/standards', standardsRouter(full));
