@@ -142,6 +142,17 @@ describe('what a done report changes', () => {
     expect(taken.body.error.code).toBe('work_report/client_ref_taken');
   });
 
+  test('should store a submission sent twice at once only once', async () => {
+    const id = await northWork();
+    const crew = await api.signIn('crew');
+    const clientRef = ref();
+    const before = await rows(workUpdates);
+    const answers = await Promise.all([1, 2].map(() => crew.post(`/api/work-orders/${id}/reports`).send(done(1, { clientRef }))));
+    expect(answers.map((a) => a.status).sort()).toEqual([200, 201]);
+    expect(answers.map((a) => a.body.duplicate).sort()).toEqual([false, true]);
+    expect(await rows(workUpdates)).toBe(before + 1);
+  });
+
   test('should refuse a second done, a start or a skip after done, and a stale version', async () => {
     const id = await northWork();
     const crew = await api.signIn('crew');

@@ -75,6 +75,8 @@ describe('Today on a phone', () => {
         .toBuffer();
       await dialog.locator('[data-test="report-photos"]').setInputFiles({ name: 'stripes.png', mimeType: 'image/png', buffer: png });
       await dialog.locator('img[alt="stripes.png"]').waitFor();
+      // The preview is a blob: URL, which the page's content security policy must allow.
+      await page.waitForFunction(() => (document.querySelector('img[alt="stripes.png"]') as HTMLImageElement | null)?.naturalWidth === 640);
       await page.screenshot({ path: path.join(shots, 'today-phone-done-dialog.png') });
       await dialog.locator('[data-test="report-submit"]').click();
 

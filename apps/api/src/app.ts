@@ -63,7 +63,7 @@ export function createApp(
           upgradeInsecureRequests: config.cookieSecure ? [] : null,
           // Map tiles load only from the one configured tile server (none by default).
           // blob: previews of the photos a crew has chosen but not yet sent.
-          imgSrc: ["'self'", 'data:', 'blob:', ...tileOrigins(config.mapTileUrl)],
+          imgSrc: ["'self'", 'data:', ...tileOrigins(config.mapTileUrl), 'blob:'],
         },
       },
       strictTransportSecurity: config.cookieSecure,
