@@ -57,6 +57,7 @@ export default async function setup(project: TestProject) {
       PORT: String(port),
       HOST: '127.0.0.1',
       PGLITE_DIR: path.join(dataDir, 'pglite'),
+      UPLOADS_DIR: path.join(dataDir, 'uploads'),
       LOG_LEVEL: 'warn',
       LOGIN_ATTEMPTS: '100',
     },

@@ -30,6 +30,7 @@ import { usersRouter } from './routes/users.ts';
 import { weatherRouter } from './routes/weather.ts';
 import { recordsRouter, weekPlansRouter } from './routes/week-plans.ts';
 import { workOrdersRouter } from './routes/work-orders.ts';
+import { workReportsRouter } from './routes/work-reports.ts';
 
 export interface AppDeps {
   db: Db;
@@ -63,7 +64,8 @@ export function createApp(
         directives: {
           upgradeInsecureRequests: config.cookieSecure ? [] : null,
           // Map tiles load only from the one configured tile server (none by default).
-          imgSrc: ["'self'", 'data:', ...tileOrigins(config.mapTileUrl)],
+          // blob: previews of the photos a crew has chosen but not yet sent.
+          imgSrc: ["'self'", 'data:', ...tileOrigins(config.mapTileUrl), 'blob:'],
         },
       },
       strictTransportSecurity: config.cookieSecure,
@@ -110,6 +112,7 @@ export function createApp(
   app.use('/api/users', usersRouter(full));
   app.use('/api/weather', weatherRouter(full));
   app.use('/api/work-orders', workOrdersRouter(full));
+  app.use('/api/work-orders', workReportsRouter(full));
   app.use('/api/week-plans', weekPlansRouter(full));
   app.use('/api/records', recordsRouter(full));
   app.use('/api/sites', sitesRouter(full));

@@ -36,6 +36,8 @@ export interface Config {
   weatherApiUrl: string | undefined;
   weatherApiKey: string | undefined;
   weatherTimeoutMs: number;
+  /** Folder of uploaded files (crews' work photos), created on first use. */
+  uploadsDir: string;
 }
 
 function bool(value: string | undefined, fallback: boolean): boolean {
@@ -77,5 +79,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     weatherApiUrl: env.WEATHER_API_URL || undefined,
     weatherApiKey: env.WEATHER_API_KEY || undefined,
     weatherTimeoutMs: Number(env.WEATHER_TIMEOUT_MS ?? 10_000),
+    uploadsDir: path.resolve(env.UPLOADS_DIR ?? './data/uploads'),
   };
 }

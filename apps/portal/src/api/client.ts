@@ -45,7 +45,10 @@ async function request<T>(method: string, path: string, options: RequestOptions 
     headers: { Accept: 'application/json' },
     signal: options.signal,
   };
-  if (options.body !== undefined) {
+  if (options.body instanceof FormData) {
+    // The browser sets the multipart boundary itself.
+    init.body = options.body;
+  } else if (options.body !== undefined) {
     init.headers = { ...init.headers, 'Content-Type': 'application/json' };
     init.body = JSON.stringify(options.body);
   }
@@ -82,6 +85,8 @@ async function request<T>(method: string, path: string, options: RequestOptions 
 export const api = {
   get: <T>(path: string, query?: Query, signal?: AbortSignal) => request<T>('GET', path, { query, signal }),
   post: <T>(path: string, body?: unknown) => request<T>('POST', path, { body }),
+  /** A multipart upload (files and fields in a FormData). */
+  upload: <T>(path: string, form: FormData) => request<T>('POST', path, { body: form }),
   patch: <T>(path: string, body?: unknown) => request<T>('PATCH', path, { body }),
   delete: <T>(path: string) => request<T>('DELETE', path),
 };
