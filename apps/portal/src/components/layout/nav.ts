@@ -1,7 +1,8 @@
 import type { Action, AppAbility, Role, SubjectName } from '@swardwise/domain';
 
 export interface NavItem {
-  key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields' | 'standards' | 'map' | 'imports';
+  key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields' | 'standards' | 'map' | 'imports'
+    | 'week' | 'records';
   label: string;
   to: string;
   roles: Role[];
@@ -21,6 +22,8 @@ export const NAV_ITEMS: NavItem[] = [
   { key: 'fields', label: 'Fields', to: '/fields', roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'] },
   { key: 'map', label: 'Map', to: '/map', roles: ['admin', 'head', 'foreman', 'crew', 'partner'], can: ['read', 'Field'] },
   { key: 'standards', label: 'Standards', to: '/standards', roles: ['admin', 'head'], can: ['read', 'Standards'] },
+  { key: 'week', label: 'Week plan', to: '/week', roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'] },
+  { key: 'records', label: 'Records', to: '/records', roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'] },
   { key: 'imports', label: 'Imports', to: '/imports', roles: ['admin', 'head', 'foreman'], can: ['create', 'Import'] },
   { key: 'users', label: 'Users', to: '/admin/users', roles: ['admin'], can: ['create', 'User'] },
   { key: 'audit', label: 'Audit log', to: '/audit', roles: ['admin', 'head'], can: ['read', 'AuditEntry'] },

@@ -1,0 +1,77 @@
+import type { CrewRecord, FieldRecord, WeekRecord } from '../../api/weekPlans.ts';
+import { columnHelper } from '../data-table/features.ts';
+import { weekLabel } from '../week/board.ts';
+
+const round1 = (h: number) => Math.round(h * 10) / 10;
+const hours = (h: number) => round1(h).toFixed(1);
+/** Actual against planned, in percent; blank when nothing was planned. */
+export function actualShare(r: { plannedHours: number; actualHours: number }): number | null {
+  return r.plannedHours > 0 ? Math.round((r.actualHours / r.plannedHours) * 100) : null;
+}
+/** Mowings done against asked, in percent; blank when none were asked. */
+export function mowingShare(r: { mowingsAsked: number; mowingsDone: number }): number | null {
+  return r.mowingsAsked > 0 ? Math.round((r.mowingsDone / r.mowingsAsked) * 100) : null;
+}
+const pct = (v: number | null) => (v === null ? '—' : `${v} %`);
+const right = { align: 'right' as const };
+
+function hourColumns<T extends { plannedHours: number; actualHours: number }>(col: ReturnType<typeof columnHelper<T>>) {
+  return [
+    col.accessor((r) => r.plannedHours, { id: 'planned', header: 'Planned h', enableGlobalFilter: false, meta: { ...right, exportValue: round1 }, cell: (c) => hours(c.getValue()) }),
+    col.accessor((r) => r.actualHours, { id: 'actual', header: 'Actual h', enableGlobalFilter: false, meta: { ...right, exportValue: round1 }, cell: (c) => hours(c.getValue()) }),
+    col.accessor((r) => actualShare(r), {
+      id: 'share',
+      header: 'Actual / planned',
+      enableGlobalFilter: false,
+      meta: { ...right, exportHeader: 'Actual / planned (%)', exportValue: (v: number | null) => v },
+      cell: (c) => pct(c.getValue()),
+    }),
+  ];
+}
+
+function mowingColumns<T extends { mowingsAsked: number; mowingsDone: number; mowingsLate: number }>(col: ReturnType<typeof columnHelper<T>>) {
+  return [
+    col.accessor((r) => r.mowingsAsked, { id: 'mowingsAsked', header: 'Mowings asked', enableGlobalFilter: false, meta: right }),
+    col.accessor((r) => r.mowingsDone, { id: 'mowingsDone', header: 'Mowings done', enableGlobalFilter: false, meta: right }),
+    col.accessor((r) => r.mowingsLate, { id: 'mowingsLate', header: 'Late', enableGlobalFilter: false, meta: right }),
+    col.accessor((r) => mowingShare(r), {
+      id: 'mowingShare',
+      header: 'Done / asked',
+      enableGlobalFilter: false,
+      meta: { ...right, exportHeader: 'Done / asked (%)', exportValue: (v: number | null) => v },
+      cell: (c) => pct(c.getValue()),
+    }),
+  ];
+}
+
+export function fieldRecordColumns() {
+  const col = columnHelper<FieldRecord>();
+  return [
+    col.accessor('fieldName', { header: 'Field' }),
+    col.accessor('siteName', { header: 'Site', filterFn: 'equals' }),
+    ...hourColumns(col),
+    col.accessor('ordersDone', { header: 'Orders done', enableGlobalFilter: false, meta: right }),
+    col.accessor('ordersSkipped', { header: 'Skipped', enableGlobalFilter: false, meta: right }),
+    ...mowingColumns(col),
+  ];
+}
+
+export function crewRecordColumns() {
+  const col = columnHelper<CrewRecord>();
+  return [
+    col.accessor('crewName', { header: 'Crew' }),
+    ...hourColumns(col),
+    col.accessor('ordersDone', { header: 'Orders done', enableGlobalFilter: false, meta: right }),
+    col.accessor('ordersSkipped', { header: 'Skipped', enableGlobalFilter: false, meta: right }),
+    col.accessor('ordersOpen', { header: 'Still open', enableGlobalFilter: false, meta: right }),
+  ];
+}
+
+export function weekRecordColumns() {
+  const col = columnHelper<WeekRecord>();
+  return [
+    col.accessor('weekStart', { header: 'Week', meta: { text: (v: string) => weekLabel(v), exportHeader: 'Week (Monday)', exportValue: (v: string) => v }, cell: (c) => weekLabel(c.getValue()) }),
+    ...hourColumns(col),
+    ...mowingColumns(col),
+  ];
+}
