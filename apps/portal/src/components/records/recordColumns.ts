@@ -21,7 +21,7 @@ function hourColumns<T extends { plannedHours: number; actualHours: number }>(co
     col.accessor((r) => r.actualHours, { id: 'actual', header: 'Actual h', enableGlobalFilter: false, meta: { ...right, exportValue: round1 }, cell: (c) => hours(c.getValue()) }),
     col.accessor((r) => actualShare(r), {
       id: 'share',
-      header: 'Actual / planned',
+      header: 'Actual %',
       enableGlobalFilter: false,
       meta: { ...right, exportHeader: 'Actual / planned (%)', exportValue: (v: number | null) => v },
       cell: (c) => pct(c.getValue()),
@@ -32,13 +32,13 @@ function hourColumns<T extends { plannedHours: number; actualHours: number }>(co
 function mowingColumns<T extends { mowingsAsked: number; mowingsDone: number; mowingsLate: number }>(col: ReturnType<typeof columnHelper<T>>) {
   return [
     col.accessor((r) => r.mowingsAsked, { id: 'mowingsAsked', header: 'Mowings asked', enableGlobalFilter: false, meta: right }),
-    col.accessor((r) => r.mowingsDone, { id: 'mowingsDone', header: 'Mowings done', enableGlobalFilter: false, meta: right }),
-    col.accessor((r) => r.mowingsLate, { id: 'mowingsLate', header: 'Late', enableGlobalFilter: false, meta: right }),
+    col.accessor((r) => r.mowingsDone, { id: 'mowingsDone', header: 'Mowed', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Mowings done' } }),
+    col.accessor((r) => r.mowingsLate, { id: 'mowingsLate', header: 'Late', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Mowings late' } }),
     col.accessor((r) => mowingShare(r), {
       id: 'mowingShare',
-      header: 'Done / asked',
+      header: 'Mowed %',
       enableGlobalFilter: false,
-      meta: { ...right, exportHeader: 'Done / asked (%)', exportValue: (v: number | null) => v },
+      meta: { ...right, exportHeader: 'Mowings done / asked (%)', exportValue: (v: number | null) => v },
       cell: (c) => pct(c.getValue()),
     }),
   ];
@@ -50,8 +50,8 @@ export function fieldRecordColumns() {
     col.accessor('fieldName', { header: 'Field' }),
     col.accessor('siteName', { header: 'Site', filterFn: 'equals' }),
     ...hourColumns(col),
-    col.accessor('ordersDone', { header: 'Orders done', enableGlobalFilter: false, meta: right }),
-    col.accessor('ordersSkipped', { header: 'Skipped', enableGlobalFilter: false, meta: right }),
+    col.accessor('ordersDone', { header: 'Done', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Orders done' } }),
+    col.accessor('ordersSkipped', { header: 'Skipped', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Orders skipped' } }),
     ...mowingColumns(col),
   ];
 }

@@ -167,14 +167,15 @@ const TASK_CAUTIONS: Partial<Record<WorkTask, CautionKey[]>> = {
   irrigate: ['water'],
 };
 
+/** Mowing first (most jobs), chemicals next, then the weather that stops all work. */
+const CAUTION_ORDER: CautionKey[] = ['mowing', 'feed', 'pesticide', 'lines', 'water', 'wetField', 'lightning'];
+
 /**
  * The cautions for a set of tasks: each task's own, then the weather ones every outdoor job
  * carries (wet fields, lightning).
  */
 export function cautionsFor(tasks: Iterable<WorkTask>): { key: CautionKey; text: string }[] {
-  const keys = new Set<CautionKey>();
+  const keys = new Set<CautionKey>(['wetField', 'lightning']);
   for (const t of tasks) for (const k of TASK_CAUTIONS[t] ?? []) keys.add(k);
-  keys.add('wetField');
-  keys.add('lightning');
-  return [...keys].map((key) => ({ key, text: CAUTIONS[key] }));
+  return CAUTION_ORDER.filter((k) => keys.has(k)).map((key) => ({ key, text: CAUTIONS[key] }));
 }
