@@ -27,6 +27,7 @@ import { sitesRouter } from './routes/sites.ts';
 import { standardsRouter } from './routes/standards.ts';
 import { usersRouter } from './routes/users.ts';
 import { weatherRouter } from './routes/weather.ts';
+import { recordsRouter, weekPlansRouter } from './routes/week-plans.ts';
 import { workOrdersRouter } from './routes/work-orders.ts';
 
 export interface AppDeps {
@@ -108,6 +109,8 @@ export function createApp(
   app.use('/api/users', usersRouter(full));
   app.use('/api/weather', weatherRouter(full));
   app.use('/api/work-orders', workOrdersRouter(full));
+  app.use('/api/week-plans', weekPlansRouter(full));
+  app.use('/api/records', recordsRouter(full));
   app.use('/api/sites', sitesRouter(full));
   app.use('/api/fields', fieldsRouter(full));
   app.use('/api/standards', standardsRouter(full));

@@ -1,5 +1,6 @@
 /** The texts of the e-mails Swardwise sends. Plain text: it reads on every phone. */
 import type { OutgoingMail } from './mailer.ts';
+import { WORK_TASK_LABELS, type WorkTask } from '@swardwise/domain';
 
 export function invitationMail(to: string, name: string, role: string, url: string): OutgoingMail {
   return {
@@ -32,5 +33,45 @@ export function passwordResetMail(to: string, name: string, url: string): Outgoi
       '',
       'If it was not you, ignore this message: your password stays as it is.',
     ].join('\n'),
+  };
+}
+
+interface WorkLine {
+  task: WorkTask;
+  fieldName: string;
+  siteName: string;
+  plannedDate: string;
+  plannedHours: number;
+  fromDate?: string | null;
+}
+
+const when = (iso: string) => new Date(`${iso}T12:00:00Z`).toLocaleDateString('en-US', { weekday: 'long', month: 'short', day: 'numeric', timeZone: 'UTC' });
+
+/** To a crew lead: work assigned to the crew, moved to another day, or taken off the crew. */
+export function workMovedMail(to: string, name: string, crewName: string, notice: { kind: 'assigned' | 'moved' | 'removed'; orders: readonly WorkLine[] }, byName: string, portalUrl: string): OutgoingMail {
+  const n = notice.orders.length;
+  const jobs = n === 1 ? 'a job' : `${n} jobs`;
+  const subject =
+    notice.kind === 'assigned'
+      ? `New work for ${crewName}: ${jobs}`
+      : notice.kind === 'moved'
+        ? `Work moved for ${crewName}: ${jobs}`
+        : `Work taken off ${crewName}: ${jobs}`;
+  const lines = [...notice.orders]
+    .sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : 0))
+    .map((o) => {
+      const moved = o.fromDate && o.fromDate !== o.plannedDate ? ` (was ${when(o.fromDate)})` : '';
+      return `- ${when(o.plannedDate)}${moved}: ${WORK_TASK_LABELS[o.task]}, ${o.fieldName} at ${o.siteName}, ${o.plannedHours.toFixed(1)} h planned`;
+    });
+  const intro =
+    notice.kind === 'assigned'
+      ? `${byName} assigned this work to ${crewName}:`
+      : notice.kind === 'moved'
+        ? `${byName} moved this work of ${crewName} to another day:`
+        : `${byName} took this work off ${crewName}:`;
+  return {
+    to,
+    subject,
+    text: [`Hello ${name},`, '', intro, '', ...lines, '', `Your route for each day is on Today: ${portalUrl.replace(/\/$/, '')}/today`, '', 'Check slopes, wet ground and the weather before mowing; clear the field when thunder is heard.'].join('\n'),
   };
 }

@@ -1,10 +1,12 @@
-import { Router } from 'express';
+import { Router, type Request } from 'express';
+import { eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { addDaysIso, idSchema } from '@swardwise/domain';
+import { addDaysIso, createWorkOrderSchema, idParamSchema, idSchema, updateWorkOrderSchema, versionSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app.ts';
+import { users } from '../db/schema/index.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { listWorkOrders } from '../services/work-orders.ts';
+import { createWorkOrder, deleteWorkOrder, listWorkOrders, updateWorkOrder, type WriteDeps } from '../services/work-orders.ts';
 
 const today = () => new Date().toISOString().slice(0, 10);
 const querySchema = z
@@ -12,15 +14,40 @@ const querySchema = z
     from: z.iso.date('use a date as YYYY-MM-DD').optional(),
     to: z.iso.date('use a date as YYYY-MM-DD').optional(),
     crewId: idSchema.optional(),
+    districtId: idSchema.optional(),
   })
   .transform((q) => ({ ...q, from: q.from ?? today(), to: q.to ?? addDaysIso(q.from ?? today(), 6) }))
   .refine((q) => q.from <= q.to, { path: ['to'], message: 'the end date is before the start date' })
   .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / 86_400_000 <= 92, { path: ['to'], message: 'ask for at most 92 days at a time' });
+const deleteQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
 
-export function workOrdersRouter({ db }: AppDeps): Router {
+/** Who is writing (for the crew lead's e-mail) and where the portal lives. */
+export async function writeDeps({ db, mailer, config }: AppDeps, req: Request): Promise<WriteDeps> {
+  const [me] = await db.select({ name: users.name }).from(users).where(eq(users.id, req.actor?.id ?? -1));
+  return { mailer, publicUrl: config.publicUrl, actorName: me?.name ?? 'The foreman' };
+}
+
+export function workOrdersRouter(deps: AppDeps): Router {
+  const { db } = deps;
   const router = Router();
   router.get('/', async (req, res) => {
     res.json({ items: await listWorkOrders(ctxOf(db, req), parse(querySchema, req.query, 'query')) });
+  });
+  router.post('/', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    res.status(201).json(await createWorkOrder(ctx, parse(createWorkOrderSchema, req.body, 'body'), await writeDeps(deps, req)));
+  });
+  router.patch('/:id', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    const { id } = parse(idParamSchema, req.params, 'params');
+    res.json(await updateWorkOrder(ctx, id, parse(updateWorkOrderSchema, req.body, 'body'), await writeDeps(deps, req)));
+  });
+  router.delete('/:id', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    const { id } = parse(idParamSchema, req.params, 'params');
+    const { version } = parse(deleteQuerySchema, req.query, 'query');
+    await deleteWorkOrder(ctx, id, version, await writeDeps(deps, req));
+    res.status(204).end();
   });
   return router;
 }

@@ -1,46 +1,253 @@
-/** Work orders as each role may read them (the week plan's writes come with the planner). */
+/**
+ * Work orders: reading them as each role may, a foreman's hand changes (add, assign, move,
+ * re-time, delete) with optimistic versions, and the e-mail to the crew lead when work is
+ * assigned or moved.
+ */
 import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
-import { crews, fields, sites, workOrders } from '../db/schema/index.ts';
-import { authorize, can, type Ctx } from './context.ts';
+import { AppError, WORK_TASK_LABELS, addDaysIso, weekdayOf, WEEKDAYS, type CreateWorkOrderInput, type UpdateWorkOrderInput } from '@swardwise/domain';
+import type { Db, Queryable } from '../db/client.ts';
+import { crews, equipment, fields, sites, users, workOrders, workPhotos } from '../db/schema/index.ts';
+import type { Mailer } from '../mail/mailer.ts';
+import { workMovedMail } from '../mail/messages.ts';
+import { writeAudit } from './audit.ts';
+import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
 
 export interface WorkOrderFilter {
   from: string;
   to: string;
   crewId?: number | undefined;
+  districtId?: number | undefined;
 }
 
-export async function listWorkOrders(ctx: Ctx, filter: WorkOrderFilter) {
-  authorize(ctx, 'read', 'WorkOrder');
-  const a = ctx.actor;
-  const conditions: (SQL | undefined)[] = [gte(workOrders.plannedDate, filter.from), lte(workOrders.plannedDate, filter.to)];
-  if (a.role === 'foreman') conditions.push(eq(workOrders.districtId, a.districtId ?? -1));
-  if (a.role === 'crew') conditions.push(eq(workOrders.crewId, a.crewId ?? -1));
-  if (a.role === 'partner') conditions.push(a.siteIds.length ? inArray(workOrders.siteId, a.siteIds) : sql`false`);
-  if (filter.crewId) conditions.push(eq(workOrders.crewId, filter.crewId));
-  const rows = await ctx.db
-    .select({
-      id: workOrders.id,
-      fieldId: workOrders.fieldId,
-      fieldName: fields.name,
-      siteId: workOrders.siteId,
-      siteName: sites.name,
-      districtId: workOrders.districtId,
-      task: workOrders.task,
-      plannedDate: workOrders.plannedDate,
-      crewId: workOrders.crewId,
-      crewName: sql<string | null>`${crews.name}`,
-      plannedHours: workOrders.plannedHours,
-      actualHours: workOrders.actualHours,
-      status: workOrders.status,
-      reason: workOrders.reason,
-      details: workOrders.details,
-      version: workOrders.version,
-    })
+/** Monday of the week of an ISO date. */
+export function mondayOf(iso: string): string {
+  return addDaysIso(iso, -((WEEKDAYS.indexOf(weekdayOf(iso)) + 6) % 7));
+}
+
+const rowSelect = {
+  id: workOrders.id,
+  fieldId: workOrders.fieldId,
+  fieldName: fields.name,
+  siteId: workOrders.siteId,
+  siteName: sites.name,
+  siteLat: sites.lat,
+  siteLng: sites.lng,
+  districtId: workOrders.districtId,
+  task: workOrders.task,
+  weekStart: workOrders.weekStart,
+  plannedDate: workOrders.plannedDate,
+  crewId: workOrders.crewId,
+  crewName: sql<string | null>`${crews.name}`,
+  equipmentId: workOrders.equipmentId,
+  equipmentName: sql<string | null>`${equipment.name}`,
+  plannedHours: workOrders.plannedHours,
+  actualHours: workOrders.actualHours,
+  status: workOrders.status,
+  origin: workOrders.origin,
+  pinned: workOrders.pinned,
+  reason: workOrders.reason,
+  notes: workOrders.notes,
+  details: workOrders.details,
+  doneAt: workOrders.doneAt,
+  version: workOrders.version,
+  photoCount: sql<number>`(select count(*)::int from ${workPhotos} where ${workPhotos.workOrderId} = ${workOrders.id})`,
+};
+
+export type WorkOrderRow = Awaited<ReturnType<typeof selectRows>>[number];
+
+async function selectRows(db: Queryable, where: SQL | undefined) {
+  return db
+    .select(rowSelect)
     .from(workOrders)
     .innerJoin(fields, eq(fields.id, workOrders.fieldId))
     .innerJoin(sites, eq(sites.id, workOrders.siteId))
     .leftJoin(crews, eq(crews.id, workOrders.crewId))
-    .where(and(...conditions))
-    .orderBy(asc(workOrders.plannedDate), asc(sites.name), asc(fields.name));
+    .leftJoin(equipment, eq(equipment.id, workOrders.equipmentId))
+    .where(where)
+    .orderBy(asc(workOrders.plannedDate), asc(sites.name), asc(fields.name), asc(workOrders.id));
+}
+
+/** SQL conditions that keep a list inside what the actor may read. */
+export function readScope(ctx: Ctx): SQL | undefined {
+  const a = ctx.actor;
+  if (a.role === 'foreman') return eq(workOrders.districtId, a.districtId ?? -1);
+  if (a.role === 'crew') return eq(workOrders.crewId, a.crewId ?? -1);
+  if (a.role === 'partner') return a.siteIds.length ? inArray(workOrders.siteId, a.siteIds) : sql`false`;
+  return undefined;
+}
+
+export async function listWorkOrders(ctx: Ctx, filter: WorkOrderFilter) {
+  authorize(ctx, 'read', 'WorkOrder');
+  const conditions: (SQL | undefined)[] = [gte(workOrders.plannedDate, filter.from), lte(workOrders.plannedDate, filter.to), readScope(ctx)];
+  if (filter.crewId) conditions.push(eq(workOrders.crewId, filter.crewId));
+  if (filter.districtId) conditions.push(eq(workOrders.districtId, filter.districtId));
+  const rows = await selectRows(ctx.db, and(...conditions));
   return rows.filter((r) => can(ctx, 'read', 'WorkOrder', r));
 }
+
+export async function workOrderRows(db: Queryable, ids: number[]): Promise<WorkOrderRow[]> {
+  return ids.length ? selectRows(db, inArray(workOrders.id, ids)) : [];
+}
+
+export async function workOrderRow(db: Queryable, id: number): Promise<WorkOrderRow | undefined> {
+  return (await selectRows(db, eq(workOrders.id, id)))[0];
+}
+
+/** The crew lead accounts of a crew that can receive e-mail. */
+async function crewLeads(db: Queryable, crewId: number) {
+  return db.select({ email: users.email, name: users.name }).from(users).where(and(eq(users.crewId, crewId), eq(users.role, 'crew'), eq(users.active, true)));
+}
+
+export interface WorkMoveNotice {
+  crewId: number;
+  kind: 'assigned' | 'moved' | 'removed';
+  orders: Array<Pick<WorkOrderRow, 'task' | 'fieldName' | 'siteName' | 'plannedDate' | 'plannedHours'> & { fromDate?: string | null }>;
+}
+
+/**
+ * Tells each crew lead about work assigned to, moved within or taken from the crew. A mail
+ * failure is logged by the mailer and never undoes the change.
+ */
+export async function notifyCrews(db: Queryable, mailer: Mailer, notices: readonly WorkMoveNotice[], byName: string, portalUrl: string): Promise<number> {
+  let sent = 0;
+  for (const n of notices) {
+    if (n.orders.length === 0) continue;
+    const [crew] = await db.select({ name: crews.name }).from(crews).where(eq(crews.id, n.crewId));
+    for (const lead of await crewLeads(db, n.crewId)) {
+      if (await mailer.send(workMovedMail(lead.email, lead.name, crew?.name ?? 'your crew', n, byName, portalUrl))) sent++;
+    }
+  }
+  return sent;
+}
+
+async function fieldScopeRow(db: Queryable, fieldId: number) {
+  const [f] = await db.select({ id: fields.id, siteId: fields.siteId, districtId: sites.districtId }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(fields.id, fieldId));
+  return f;
+}
+
+/** A crew and a unit must belong to the order's district. */
+async function checkCrewAndEquipment(db: Queryable, districtId: number, crewId: number | null | undefined, equipmentId: number | null | undefined) {
+  const issues: { path: string; message: string }[] = [];
+  if (crewId) {
+    const [c] = await db.select({ districtId: crews.districtId }).from(crews).where(eq(crews.id, crewId));
+    if (!c) issues.push({ path: 'body.crewId', message: 'no such crew' });
+    else if (c.districtId !== districtId) issues.push({ path: 'body.crewId', message: 'this crew works in another district' });
+  }
+  if (equipmentId) {
+    const [e] = await db.select({ districtId: equipment.districtId, active: equipment.active }).from(equipment).where(eq(equipment.id, equipmentId));
+    if (!e) issues.push({ path: 'body.equipmentId', message: 'no such equipment' });
+    else if (e.districtId !== districtId) issues.push({ path: 'body.equipmentId', message: 'this unit belongs to another district' });
+    else if (!e.active) issues.push({ path: 'body.equipmentId', message: 'this unit is out of service' });
+  }
+  if (issues.length) throw new AppError('invalid', 'request/invalid', issues.map((i) => i.message).join('; '), { issues });
+}
+
+export interface WriteDeps {
+  mailer: Mailer;
+  publicUrl: string;
+  actorName: string;
+}
+
+/** A foreman adds work by hand (aeration, topdressing, an extra mowing). Kept by every re-generation. */
+export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, deps: WriteDeps) {
+  const f = await fieldScopeRow(ctx.db, input.fieldId);
+  if (!f) throw new AppError('invalid', 'request/invalid', 'No such field', { issues: [{ path: 'body.fieldId', message: 'no such field' }] });
+  authorize(ctx, 'create', 'WorkOrder', { districtId: f.districtId, siteId: f.siteId });
+  const id = await (ctx.db as Db).transaction(async (tx) => {
+    await checkCrewAndEquipment(tx, f.districtId, input.crewId, input.equipmentId);
+    const [row] = await tx
+      .insert(workOrders)
+      .values({
+        fieldId: f.id,
+        siteId: f.siteId,
+        districtId: f.districtId,
+        task: input.task,
+        weekStart: mondayOf(input.plannedDate),
+        plannedDate: input.plannedDate,
+        crewId: input.crewId,
+        equipmentId: input.equipmentId,
+        plannedHours: input.plannedHours,
+        status: input.crewId ? 'assigned' : 'planned',
+        origin: 'manual',
+        pinned: true,
+        reason: 'Added by hand',
+        notes: input.notes,
+        createdBy: ctx.actor.id,
+      })
+      .returning();
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'work_order', entityId: row!.id, districtId: f.districtId, before: null, after: row! });
+    return row!.id;
+  });
+  const row = (await workOrderRow(ctx.db, id))!;
+  const emailed = row.crewId ? await notifyCrews(ctx.db, deps.mailer, [{ crewId: row.crewId, kind: 'assigned', orders: [row] }], deps.actorName, deps.publicUrl) : 0;
+  return { ...row, emailed };
+}
+
+/**
+ * Assign, move or re-time one order. The version must be the one the caller read (two
+ * foremen on one order: the second gets a 409). Any change pins the order, so re-generating
+ * the week keeps it; giving it a crew makes it assigned. Logged work cannot be moved.
+ */
+export async function updateWorkOrder(ctx: Ctx, id: number, input: UpdateWorkOrderInput, deps: WriteDeps) {
+  const result = await (ctx.db as Db).transaction(async (tx) => {
+    const [before] = await tx.select().from(workOrders).where(eq(workOrders.id, id));
+    if (!before) throw notFound('work_order', id);
+    authorize(ctx, 'update', 'WorkOrder', before);
+    const { version, ...changes } = input;
+    if (before.version !== version) throw versionConflict('work_order');
+    if ((before.status === 'done' || before.status === 'skipped') && (changes.plannedDate !== undefined || changes.crewId !== undefined)) {
+      throw new AppError('conflict', 'work_order/logged', `This work order is already ${before.status}; it can no longer be moved or reassigned`);
+    }
+    await checkCrewAndEquipment(tx, before.districtId, changes.crewId, changes.equipmentId);
+    const crewId = changes.crewId === undefined ? before.crewId : changes.crewId;
+    let status = before.status;
+    if (status === 'planned' && crewId) status = 'assigned';
+    if (status === 'assigned' && !crewId) status = 'planned';
+    const plannedDate = changes.plannedDate ?? before.plannedDate;
+    const [after] = await tx
+      .update(workOrders)
+      .set({
+        ...changes,
+        status,
+        weekStart: mondayOf(plannedDate),
+        pinned: changes.pinned ?? true,
+        version: sql`${workOrders.version} + 1`,
+        updatedAt: new Date(),
+      })
+      .where(and(eq(workOrders.id, id), eq(workOrders.version, version)))
+      .returning();
+    if (!after) throw versionConflict('work_order');
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'work_order', entityId: id, districtId: after.districtId, before, after });
+    return { before, after };
+  });
+  const row = (await workOrderRow(ctx.db, id))!;
+  const { before, after } = result;
+  const notices: WorkMoveNotice[] = [];
+  if (after.crewId !== before.crewId) {
+    if (after.crewId) notices.push({ crewId: after.crewId, kind: 'assigned', orders: [row] });
+    if (before.crewId) notices.push({ crewId: before.crewId, kind: 'removed', orders: [{ ...row, plannedDate: before.plannedDate }] });
+  } else if (after.crewId && after.plannedDate !== before.plannedDate) {
+    notices.push({ crewId: after.crewId, kind: 'moved', orders: [{ ...row, fromDate: before.plannedDate }] });
+  }
+  const emailed = await notifyCrews(ctx.db, deps.mailer, notices, deps.actorName, deps.publicUrl);
+  return { ...row, emailed };
+}
+
+export async function deleteWorkOrder(ctx: Ctx, id: number, version: number, deps: WriteDeps) {
+  const before = await (ctx.db as Db).transaction(async (tx) => {
+    const [row] = await tx.select().from(workOrders).where(eq(workOrders.id, id));
+    if (!row) throw notFound('work_order', id);
+    authorize(ctx, 'delete', 'WorkOrder', row);
+    if (row.status === 'done' || row.status === 'started') throw new AppError('conflict', 'work_order/logged', `This work order is ${row.status}: it is part of the records and cannot be deleted`);
+    const [deleted] = await tx.delete(workOrders).where(and(eq(workOrders.id, id), eq(workOrders.version, version))).returning({ id: workOrders.id });
+    if (!deleted) throw versionConflict('work_order');
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'work_order', entityId: id, districtId: row.districtId, before: row, after: null });
+    return row;
+  });
+  if (before.crewId && before.status === 'assigned') {
+    const [f] = await ctx.db.select({ fieldName: fields.name, siteName: sites.name }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(fields.id, before.fieldId));
+    await notifyCrews(ctx.db, deps.mailer, [{ crewId: before.crewId, kind: 'removed', orders: [{ task: before.task, fieldName: f?.fieldName ?? '', siteName: f?.siteName ?? '', plannedDate: before.plannedDate, plannedHours: before.plannedHours }] }], deps.actorName, deps.publicUrl);
+  }
+}
+
+export const taskLabel = (t: keyof typeof WORK_TASK_LABELS) => WORK_TASK_LABELS[t];

@@ -14,3 +14,4 @@ export * from './grading.ts';
 export * from './outlook.ts';
 export * from './weekplan.ts';
 export * from './cautions.ts';
+export * from './weekgen.ts';

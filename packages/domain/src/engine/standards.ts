@@ -8,6 +8,7 @@
 import { GRASSES, GRASS_SEASON, LEVEL_NAMES, LEVELS, SPORTS } from '../vocabulary.ts';
 import type { Grass, GrassSeason, Level, Sport } from '../vocabulary.ts';
 import { fail, requirePositive } from './check.ts';
+import type { Weekday } from './dates.ts';
 import { G_PER_M2_PER_LB_PER_1000FT2 } from './units.ts';
 
 /** What one maintenance level asks for. */
@@ -161,6 +162,30 @@ export interface DepartmentParameters {
   fertiliserProduct: { n: number; p: number; k: number; slowReleaseShare: number };
   /** Hours a crew works per week (demo default). */
   crewHoursPerWeek: number;
+  /** Week plan settings (department settings; the defaults are demo choices, not published values). */
+  planning: PlanningParameters;
+}
+
+/** How the week plan turns needs into work orders (department settings). */
+export interface PlanningParameters {
+  /** Weekdays the water provider allows watering (local restrictions decide). */
+  wateringDays: Weekday[];
+  /** Hours for one field check (walk, hardness and cover readings). */
+  fieldCheckHours: number;
+  /** Granular spreader for feeding: width (m), speed (km/h), field efficiency, set-up and fill (min). */
+  spreader: { widthM: number; speedKmh: number; efficiency: number; setupMin: number };
+  /** Hours per watering day to set and move quick-coupler sprinklers on a field. */
+  quickCouplerHoursPerDay: number;
+  /** Hours to set an automatic controller's run times for a field for the week. */
+  controllerSetHours: number;
+  /** Lines are painted this many days before a booking (0 = the same morning). */
+  paintDaysBeforeEvent: number;
+  /** A painting this many days or fewer before a booking already serves it. */
+  paintFreshDays: number;
+  /** Routine repaints and feeding wait while the week's mean growth potential is below this (dormant turf). */
+  dormantGp: number;
+  /** Least gross irrigation need in a week worth a watering order, mm. */
+  minIrrigationMm: number;
 }
 
 /** Demo defaults of the department parameters; every cost is invented. */
@@ -197,6 +222,18 @@ export const DEFAULT_PARAMETERS: DepartmentParameters = {
   fertiliserBagKg: 22.7,
   fertiliserProduct: { n: 28, p: 0, k: 6, slowReleaseShare: 0.5 },
   crewHoursPerWeek: 40,
+  planning: {
+    wateringDays: ['mon', 'wed', 'fri'],
+    fieldCheckHours: 0.5,
+    // 12 ft rotary spreader at a walking-to-utility-vehicle pace (demo default).
+    spreader: { widthM: 3.7, speedKmh: 6, efficiency: 0.7, setupMin: 15 },
+    quickCouplerHoursPerDay: 0.75,
+    controllerSetHours: 0.25,
+    paintDaysBeforeEvent: 1,
+    paintFreshDays: 2,
+    dormantGp: 0.1,
+    minIrrigationMm: 2,
+  },
 };
 
 /** What `hocFor` needs of a field. */

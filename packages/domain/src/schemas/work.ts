@@ -5,6 +5,7 @@ import { idSchema, versionSchema } from './common.ts';
 
 const isoDate = z.iso.date('use a date as YYYY-MM-DD');
 const hours = z.number({ error: 'hours must be a number' }).min(0, 'hours cannot be negative').max(24, 'more than 24 hours in a day is not possible');
+const plannedHours = z.number({ error: 'planned hours must be a number' }).positive('planned hours must be more than 0').max(24, 'more than 24 hours in a day is not possible');
 
 /** The week of a district: weekStart is the Monday. */
 export const weekQuerySchema = z.object({
@@ -25,7 +26,7 @@ export const createWorkOrderSchema = z.object({
   plannedDate: isoDate,
   crewId: idSchema.nullable().default(null),
   equipmentId: idSchema.nullable().default(null),
-  plannedHours: hours.refine((h) => h > 0, 'planned hours must be more than 0'),
+  plannedHours,
   notes: z.string().max(2000).default(''),
 });
 export type CreateWorkOrderInput = z.infer<typeof createWorkOrderSchema>;
@@ -36,7 +37,7 @@ export const updateWorkOrderSchema = z
     plannedDate: isoDate,
     crewId: idSchema.nullable(),
     equipmentId: idSchema.nullable(),
-    plannedHours: hours.refine((h) => h > 0, 'planned hours must be more than 0'),
+    plannedHours,
     notes: z.string().max(2000),
     pinned: z.boolean(),
   })

@@ -1,0 +1,34 @@
+import { Router } from 'express';
+import { dateRangeQuerySchema, generateWeekSchema, idSchema, weekQuerySchema } from '@swardwise/domain';
+import type { AppDeps } from '../app.ts';
+import { ctxOf } from '../http/auth.ts';
+import { parse } from '../http/validate.ts';
+import { getRecords } from '../services/records.ts';
+import { confirmWeek, generateWeek, getWeekBoard } from '../services/week-plans.ts';
+import { writeDeps } from './work-orders.ts';
+
+const confirmSchema = weekQuerySchema.extend({ crewId: idSchema.optional() });
+
+export function weekPlansRouter(deps: AppDeps): Router {
+  const { db } = deps;
+  const router = Router();
+  router.get('/', async (req, res) => {
+    res.json(await getWeekBoard(ctxOf(db, req), parse(weekQuerySchema, req.query, 'query')));
+  });
+  router.post('/generate', async (req, res) => {
+    res.json(await generateWeek(ctxOf(db, req), parse(generateWeekSchema, req.body, 'body')));
+  });
+  router.post('/confirm', async (req, res) => {
+    res.json(await confirmWeek(ctxOf(db, req), parse(confirmSchema, req.body, 'body'), await writeDeps(deps, req)));
+  });
+  return router;
+}
+
+export function recordsRouter({ db }: AppDeps): Router {
+  const router = Router();
+  router.get('/', async (req, res) => {
+    res.json(await getRecords(ctxOf(db, req), parse(dateRangeQuerySchema, req.query, 'query')));
+  });
+  return router;
+}
+

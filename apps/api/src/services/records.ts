@@ -1,0 +1,106 @@
+/**
+ * Records of work: planned against actual hours per field, crew and week, and mowings done
+ * against those the one-third rule asked for. A mowing done after the date it was due by is
+ * counted late; one not done by its day is counted missed.
+ */
+import { and, asc, eq, gte, lte, sql } from 'drizzle-orm';
+import type { DateRangeQuery } from '@swardwise/domain';
+import { crews, fields, sites, workOrders } from '../db/schema/index.ts';
+import { authorize, can, type Ctx } from './context.ts';
+import { readScope } from './work-orders.ts';
+
+interface Tally {
+  plannedHours: number;
+  actualHours: number;
+  /** Planned hours of the orders that are done, to compare like with like. */
+  plannedHoursDone: number;
+  ordersDone: number;
+  ordersSkipped: number;
+  ordersOpen: number;
+  mowingsAsked: number;
+  mowingsDone: number;
+  mowingsLate: number;
+  mowingsMissed: number;
+}
+
+const empty = (): Tally => ({ plannedHours: 0, actualHours: 0, plannedHoursDone: 0, ordersDone: 0, ordersSkipped: 0, ordersOpen: 0, mowingsAsked: 0, mowingsDone: 0, mowingsLate: 0, mowingsMissed: 0 });
+const r2 = (v: number) => Math.round(v * 100) / 100;
+const finish = <T extends Tally>(t: T): T => ({ ...t, plannedHours: r2(t.plannedHours), actualHours: r2(t.actualHours), plannedHoursDone: r2(t.plannedHoursDone) });
+
+export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = new Date().toISOString().slice(0, 10)) {
+  authorize(ctx, 'read', 'WorkOrder', q.districtId ? { districtId: q.districtId } : undefined);
+  const conditions = [gte(workOrders.plannedDate, q.from), lte(workOrders.plannedDate, q.to), readScope(ctx)];
+  if (q.districtId) conditions.push(eq(workOrders.districtId, q.districtId));
+  const rows = (
+    await ctx.db
+      .select({
+        id: workOrders.id,
+        fieldId: workOrders.fieldId,
+        fieldName: fields.name,
+        siteId: workOrders.siteId,
+        siteName: sites.name,
+        districtId: workOrders.districtId,
+        crewId: workOrders.crewId,
+        crewName: sql<string | null>`${crews.name}`,
+        task: workOrders.task,
+        weekStart: workOrders.weekStart,
+        plannedDate: workOrders.plannedDate,
+        plannedHours: workOrders.plannedHours,
+        actualHours: workOrders.actualHours,
+        status: workOrders.status,
+        doneAt: workOrders.doneAt,
+        details: workOrders.details,
+      })
+      .from(workOrders)
+      .innerJoin(fields, eq(fields.id, workOrders.fieldId))
+      .innerJoin(sites, eq(sites.id, workOrders.siteId))
+      .leftJoin(crews, eq(crews.id, workOrders.crewId))
+      .where(and(...conditions))
+      .orderBy(asc(workOrders.plannedDate), asc(workOrders.id))
+  ).filter((r) => can(ctx, 'read', 'WorkOrder', r));
+
+  const byField = new Map<number, Tally & { fieldId: number; fieldName: string; siteName: string }>();
+  const byCrew = new Map<string, Tally & { crewId: number | null; crewName: string }>();
+  const byWeek = new Map<string, Tally & { weekStart: string }>();
+  const totals = empty();
+  const late: Array<{ id: number; fieldName: string; siteName: string; dueBy: string; doneOn: string; daysLate: number }> = [];
+  for (const r of rows) {
+    const f = byField.get(r.fieldId) ?? { ...empty(), fieldId: r.fieldId, fieldName: r.fieldName, siteName: r.siteName };
+    const crewKey = String(r.crewId ?? 'none');
+    const c = byCrew.get(crewKey) ?? { ...empty(), crewId: r.crewId, crewName: r.crewName ?? 'No crew' };
+    const w = byWeek.get(r.weekStart) ?? { ...empty(), weekStart: r.weekStart };
+    const doneOn = r.doneAt ? new Date(r.doneAt).toISOString().slice(0, 10) : null;
+    const dueBy = typeof r.details.dueBy === 'string' ? r.details.dueBy : r.plannedDate;
+    const isLate = r.status === 'done' && doneOn !== null && doneOn > dueBy;
+    if (r.task === 'mow' && isLate && doneOn) late.push({ id: r.id, fieldName: r.fieldName, siteName: r.siteName, dueBy, doneOn, daysLate: Math.round((Date.parse(doneOn) - Date.parse(dueBy)) / 86_400_000) });
+    for (const t of [f, c, w, totals]) {
+      t.plannedHours += r.plannedHours;
+      if (r.status === 'done') {
+        t.ordersDone++;
+        t.actualHours += r.actualHours ?? 0;
+        t.plannedHoursDone += r.plannedHours;
+      } else if (r.status === 'skipped') t.ordersSkipped++;
+      else t.ordersOpen++;
+      if (r.task === 'mow') {
+        t.mowingsAsked++;
+        if (r.status === 'done') t.mowingsDone++;
+        if (isLate) t.mowingsLate++;
+        if (r.status !== 'done' && r.plannedDate < today) t.mowingsMissed++;
+      }
+    }
+    byField.set(r.fieldId, f);
+    byCrew.set(crewKey, c);
+    byWeek.set(r.weekStart, w);
+  }
+  return {
+    from: q.from,
+    to: q.to,
+    districtId: q.districtId ?? null,
+    asOf: today,
+    byField: [...byField.values()].map(finish).sort((a, b) => a.siteName.localeCompare(b.siteName) || a.fieldName.localeCompare(b.fieldName)),
+    byCrew: [...byCrew.values()].map(finish).sort((a, b) => a.crewName.localeCompare(b.crewName)),
+    byWeek: [...byWeek.values()].map(finish).sort((a, b) => (a.weekStart < b.weekStart ? -1 : 1)),
+    lateMowings: late.sort((a, b) => b.daysLate - a.daysLate || a.id - b.id),
+    totals: finish(totals),
+  };
+}

@@ -1,0 +1,464 @@
+/**
+ * The district's week plan: generated from the turf engine and the weather, kept by hand,
+ * shown as a board of crews × days with each crew-day's load and route.
+ */
+import { and, asc, desc, eq, gte, inArray, lte, max, sql } from 'drizzle-orm';
+import {
+  AppError,
+  addDaysIso,
+  assignWeek,
+  crewDayLoads,
+  greatCircleKm,
+  isKept,
+  isoToDayNumber,
+  planFieldWeek,
+  prepareWeather,
+  reconcileWeek,
+  weekDates,
+  MOWER_KINDS,
+  type AskedOrder,
+  type DailyWeather,
+  type GenerateWeekInput,
+  type Level,
+  type PlanEquipment,
+  type PlanField,
+  type PlanMower,
+  type PreparedWeather,
+  type ScheduledOrder,
+  type WeekQuery,
+  type Weekday,
+} from '@swardwise/domain';
+import type { Db, Queryable } from '../db/client.ts';
+import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, weatherDays, weatherStations, workOrders } from '../db/schema/index.ts';
+import { authorize, type Ctx } from './context.ts';
+import { loadParameters, loadStandards } from './standards.ts';
+import { notifyCrews, readScope, workOrderRow, workOrderRows, type WorkMoveNotice, type WorkOrderRow, type WriteDeps } from './work-orders.ts';
+
+type WeatherRow = typeof weatherDays.$inferSelect;
+
+function toDaily(r: WeatherRow): DailyWeather {
+  const d: DailyWeather = { date: r.date, tmaxC: r.tmaxC, tminC: r.tminC, rainMm: r.rainMm };
+  if (r.rhMaxPct !== null) d.rhMaxPct = r.rhMaxPct;
+  if (r.rhMinPct !== null) d.rhMinPct = r.rhMinPct;
+  if (r.windMs !== null) d.windMs = r.windMs;
+  if (r.sunshineH !== null) d.sunshineH = r.sunshineH;
+  if (r.solarMJ !== null) d.solarMJ = r.solarMJ;
+  return d;
+}
+
+async function districtRow(db: Queryable, id: number) {
+  const [d] = await db.select({ id: districts.id, name: districts.name, yardName: districts.yardName, yardLat: districts.yardLat, yardLng: districts.yardLng }).from(districts).where(eq(districts.id, id));
+  if (!d) throw new AppError('not_found', 'district/not_found', `No district with id ${id}`);
+  return d;
+}
+
+async function districtCrews(db: Queryable, districtId: number) {
+  return db
+    .select({
+      id: crews.id,
+      name: crews.name,
+      hoursPerDay: crews.hoursPerDay,
+      workDays: crews.workDays,
+      leadName: sql<string | null>`(select ${users.name} from ${users} where ${users.crewId} = ${crews.id} and ${users.role} = 'crew' and ${users.active} order by ${users.id} limit 1)`,
+    })
+    .from(crews)
+    .where(eq(crews.districtId, districtId))
+    .orderBy(asc(crews.name), asc(crews.id));
+}
+
+/**
+ * Weather for planning up to `until` per station: the latest unbroken run of days on or
+ * before it (observations and forecasts), prepared once and shared by the station's fields.
+ */
+async function stationWeather(db: Queryable, until: string) {
+  const stations = await db
+    .select({ id: weatherStations.id, name: weatherStations.name, lat: weatherStations.lat, lng: weatherStations.lng, elevationM: weatherStations.elevationM, coastal: weatherStations.coastal })
+    .from(weatherStations)
+    .where(sql`exists (select 1 from ${weatherDays} where ${weatherDays.stationId} = ${weatherStations.id})`);
+  const prepared = new Map<number, PreparedWeather>();
+  const load = async (stationId: number) => {
+    const cached = prepared.get(stationId);
+    if (cached) return cached;
+    const s = stations.find((x) => x.id === stationId)!;
+    const rows = await db.select().from(weatherDays).where(and(eq(weatherDays.stationId, stationId), lte(weatherDays.date, until))).orderBy(asc(weatherDays.date));
+    let start = rows.length - 1;
+    while (start > 0 && isoToDayNumber(rows[start - 1]!.date) === isoToDayNumber(rows[start]!.date) - 1) start--;
+    const run = rows.slice(Math.max(0, start));
+    const w = prepareWeather(run.map(toDaily), { latDeg: s.lat, elevationM: s.elevationM, coastal: s.coastal === 1 });
+    prepared.set(stationId, w);
+    return w;
+  };
+  const nearest = (p: { lat: number; lng: number }) => {
+    let best: (typeof stations)[number] | undefined;
+    let bestKm = Infinity;
+    for (const s of stations) {
+      const km = greatCircleKm(p, s);
+      if (km < bestKm) {
+        best = s;
+        bestKm = km;
+      }
+    }
+    return best;
+  };
+  return { stations, load, nearest };
+}
+
+/** Last date each field had each task done (from the records). */
+async function lastDone(db: Queryable, fieldIds: number[]) {
+  const out = new Map<string, string>();
+  if (fieldIds.length === 0) return out;
+  const rows = await db
+    .select({ fieldId: workOrders.fieldId, task: workOrders.task, last: max(workOrders.plannedDate) })
+    .from(workOrders)
+    .where(and(inArray(workOrders.fieldId, fieldIds), eq(workOrders.status, 'done')))
+    .groupBy(workOrders.fieldId, workOrders.task);
+  for (const r of rows) if (r.last) out.set(`${r.fieldId}|${r.task}`, r.last);
+  const checks = await db.select({ fieldId: fieldChecks.fieldId, last: max(fieldChecks.checkedOn) }).from(fieldChecks).where(inArray(fieldChecks.fieldId, fieldIds)).groupBy(fieldChecks.fieldId);
+  for (const c of checks) {
+    const key = `${c.fieldId}|field_check`;
+    if (c.last && (!out.has(key) || out.get(key)! < c.last)) out.set(key, c.last);
+  }
+  return out;
+}
+
+interface GenerationInput {
+  districtId: number;
+  weekStart: string;
+}
+
+/** Everything the engine needs for a district's week, read in a few queries. */
+async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: ExistingRow[]) {
+  const dates = weekDates(q.weekStart);
+  const weekEnd = dates[6]!;
+  const district = await districtRow(db, q.districtId);
+  const { standards } = await loadStandards(db);
+  const params = await loadParameters(db);
+  const crewRows = await districtCrews(db, q.districtId);
+  const fieldRows = await db
+    .select({
+      id: fields.id,
+      name: fields.name,
+      siteId: fields.siteId,
+      siteLat: sites.lat,
+      siteLng: sites.lng,
+      sport: fields.sport,
+      grass: fields.grass,
+      areaM2: fields.areaM2,
+      geometry: fields.geometry,
+      maintenanceLevel: fields.maintenanceLevel,
+      hocOverrideMm: fields.hocOverrideMm,
+      clippings: fields.clippings,
+      irrigation: fields.irrigation,
+      status: fields.status,
+      lastMowedOn: fields.lastMowedOn,
+    })
+    .from(fields)
+    .innerJoin(sites, eq(sites.id, fields.siteId))
+    .where(eq(sites.districtId, q.districtId))
+    .orderBy(asc(fields.id));
+  const fieldIds = fieldRows.map((f) => f.id);
+  const done = await lastDone(db, fieldIds);
+  const events = await db
+    .select({ id: fieldEvents.id, fieldId: fieldEvents.fieldId, startsOn: fieldEvents.startsOn, title: fieldEvents.title })
+    .from(fieldEvents)
+    .where(and(eq(fieldEvents.districtId, q.districtId), gte(fieldEvents.startsOn, q.weekStart), lte(fieldEvents.startsOn, addDaysIso(q.weekStart, 7))));
+  const eventsOf = new Map<number, { id: number; startsOn: string; title: string }[]>();
+  for (const e of events) eventsOf.set(e.fieldId, [...(eventsOf.get(e.fieldId) ?? []), e]);
+  const units = await db.select().from(equipment).where(and(eq(equipment.districtId, q.districtId), eq(equipment.active, true))).orderBy(asc(equipment.id));
+  const mowers: PlanMower[] = units.flatMap((u) =>
+    MOWER_KINDS.includes(u.kind) && u.cuttingWidthM && u.speedKmh && u.fieldEfficiency && u.hocMinMm !== null && u.hocMaxMm !== null
+      ? [{ id: u.id, crewId: u.crewId, kind: u.kind.replace('_mower', '') as PlanMower['kind'], widthM: u.cuttingWidthM, speedKmh: u.speedKmh, efficiency: u.fieldEfficiency, hocMinMm: u.hocMinMm, hocMaxMm: u.hocMaxMm }]
+      : [],
+  );
+  const planEquipment: PlanEquipment[] = units.flatMap((u): PlanEquipment[] => {
+    if (MOWER_KINDS.includes(u.kind)) {
+      const e: PlanEquipment = { id: u.id, crewId: u.crewId, kind: 'mower', mowerKind: u.kind.replace('_mower', '') as NonNullable<PlanEquipment['mowerKind']> };
+      if (u.hocMinMm !== null) e.hocMinMm = u.hocMinMm;
+      if (u.hocMaxMm !== null) e.hocMaxMm = u.hocMaxMm;
+      return [e];
+    }
+    if (u.kind === 'line_marker' || u.kind === 'spreader') return [{ id: u.id, crewId: u.crewId, kind: u.kind }];
+    return [];
+  });
+
+  const workDays = [...new Set(crewRows.flatMap((c) => c.workDays))] as Weekday[];
+  const kept = existing.filter(isKept);
+  const keptByField = new Map<number, typeof kept>();
+  for (const k of kept) keptByField.set(k.fieldId, [...(keptByField.get(k.fieldId) ?? []), k]);
+  const weather = await stationWeather(db, addDaysIso(weekEnd, 7));
+  const asked: AskedOrder[] = [];
+  const notes = new Set<string>();
+  let noWeather = 0;
+  for (const f of fieldRows) {
+    const station = weather.nearest({ lat: f.siteLat, lng: f.siteLng });
+    if (!station) {
+      noWeather++;
+      continue;
+    }
+    const w = await weather.load(station.id);
+    const field: PlanField = {
+      id: f.id,
+      siteId: f.siteId,
+      site: { lat: f.siteLat, lng: f.siteLng },
+      sport: f.sport,
+      grass: f.grass,
+      areaM2: f.areaM2,
+      geometry: f.geometry,
+      maintenanceLevel: f.maintenanceLevel as Level,
+      hocOverrideMm: f.hocOverrideMm,
+      clippings: f.clippings,
+      irrigation: f.irrigation,
+      status: f.status,
+      lastMowedOn: f.lastMowedOn && done.get(`${f.id}|mow`) && done.get(`${f.id}|mow`)! > f.lastMowedOn ? done.get(`${f.id}|mow`)! : (f.lastMowedOn ?? done.get(`${f.id}|mow`) ?? null),
+      lastPaintedOn: done.get(`${f.id}|paint_lines`) ?? null,
+      lastFedOn: done.get(`${f.id}|feed`) ?? null,
+      lastCheckedOn: done.get(`${f.id}|field_check`) ?? null,
+      events: eventsOf.get(f.id) ?? [],
+    };
+    const plan = planFieldWeek({ field, weather: w, weekStart: q.weekStart, kept: keptByField.get(f.id) ?? [], workDays: workDays.length ? workDays : ['mon', 'tue', 'wed', 'thu', 'fri'], mowers, standards, params });
+    asked.push(...plan.orders);
+    for (const n of plan.notes) if (/projected|No weather/.test(n)) notes.add(n.replace(/^No weather on file before .*?:/, 'Some fields have no weather before the week:'));
+  }
+  if (noWeather) notes.add(`${noWeather} field(s) have no weather station with data: only their hand-made work is shown. Add weather first.`);
+
+  // Crew hints: the crew that last worked each site in the four weeks before.
+  const hintRows = await db
+    .select({ siteId: workOrders.siteId, crewId: workOrders.crewId, last: max(workOrders.plannedDate) })
+    .from(workOrders)
+    .where(and(eq(workOrders.districtId, q.districtId), gte(workOrders.plannedDate, addDaysIso(q.weekStart, -28)), lte(workOrders.plannedDate, weekEnd), sql`${workOrders.crewId} is not null`))
+    .groupBy(workOrders.siteId, workOrders.crewId);
+  const siteCrewHint = new Map<number, number>();
+  const hintDate = new Map<number, string>();
+  for (const h of hintRows) {
+    if (h.crewId === null || !h.last) continue;
+    if (!hintDate.has(h.siteId) || hintDate.get(h.siteId)! < h.last) {
+      siteCrewHint.set(h.siteId, h.crewId);
+      hintDate.set(h.siteId, h.last);
+    }
+  }
+  const keptHours = new Map<string, number>();
+  for (const k of kept) if (k.crewId !== null && k.status !== 'skipped') keptHours.set(`${k.crewId}|${k.plannedDate}`, (keptHours.get(`${k.crewId}|${k.plannedDate}`) ?? 0) + k.plannedHours);
+  const siteLocations = new Map(fieldRows.map((f) => [f.siteId, { lat: f.siteLat, lng: f.siteLng }]));
+  const assigned = assignWeek({
+    weekStart: q.weekStart,
+    orders: asked,
+    crews: crewRows.map((c) => ({ id: c.id, hoursPerDay: c.hoursPerDay, workDays: c.workDays })),
+    keptHours,
+    siteCrewHint,
+    equipment: planEquipment,
+    sites: siteLocations,
+    yard: { lat: district.yardLat, lng: district.yardLng },
+    travel: params.travel,
+  });
+  const fieldNames = new Map(fieldRows.map((f) => [f.id, f.name]));
+  return { orders: assigned.orders, warnings: [...notes, ...assigned.warnings.map((w) => w.replace(/field (\d+)/, (_, id: string) => fieldNames.get(Number(id)) ?? `field ${id}`))], crewRows, fieldCount: fieldRows.length };
+}
+
+type ExistingRow = typeof workOrders.$inferSelect;
+
+async function weekRows(db: Queryable, districtId: number, weekStart: string) {
+  return db
+    .select()
+    .from(workOrders)
+    .where(and(eq(workOrders.districtId, districtId), gte(workOrders.plannedDate, weekStart), lte(workOrders.plannedDate, addDaysIso(weekStart, 6))))
+    .orderBy(asc(workOrders.id));
+}
+
+/** The board of a district's week: orders, crews, each crew-day's load and route. */
+export async function getWeekBoard(ctx: Ctx, q: WeekQuery) {
+  authorize(ctx, 'read', 'WorkOrder', { districtId: q.districtId });
+  if (ctx.actor.role === 'crew' || ctx.actor.role === 'partner') throw new AppError('forbidden', 'auth/forbidden', 'The week plan board is for foremen and the department');
+  const dates = weekDates(q.weekStart);
+  const district = await districtRow(ctx.db, q.districtId);
+  const params = await loadParameters(ctx.db);
+  const crewRows = await districtCrews(ctx.db, q.districtId);
+  const orders = (
+    await ctx.db
+      .select({ id: workOrders.id })
+      .from(workOrders)
+      .where(and(eq(workOrders.districtId, q.districtId), gte(workOrders.plannedDate, dates[0]!), lte(workOrders.plannedDate, dates[6]!), readScope(ctx)))
+  ).map((r) => r.id);
+  const rows: WorkOrderRow[] = orders.length ? await boardRows(ctx.db, orders) : [];
+  const sitesMap = new Map(rows.map((r) => [r.siteId, { lat: r.siteLat, lng: r.siteLng }]));
+  const siteNames = new Map(rows.map((r) => [r.siteId, r.siteName]));
+  const yard = { lat: district.yardLat, lng: district.yardLng };
+  const loads = crewDayLoads(rows, crewRows, sitesMap, yard, params.travel, q.weekStart).map((l) => ({
+    ...l,
+    route: l.route.map((siteId) => ({ siteId, siteName: siteNames.get(siteId) ?? '', lat: sitesMap.get(siteId)?.lat ?? 0, lng: sitesMap.get(siteId)?.lng ?? 0 })),
+  }));
+  const [last] = await ctx.db
+    .select({ at: auditLog.at })
+    .from(auditLog)
+    .where(and(eq(auditLog.entity, 'week_plan'), eq(auditLog.districtId, q.districtId), sql`${auditLog.after}->>'weekStart' = ${q.weekStart}`))
+    .orderBy(desc(auditLog.at))
+    .limit(1);
+  const warnings: string[] = [];
+  for (const l of loads) if (l.overloaded) warnings.push(`${crewRows.find((c) => c.id === l.crewId)?.name ?? 'A crew'} is over its hours on ${l.date}: ${l.totalHours.toFixed(1)} h planned for ${l.availableHours.toFixed(1)} h available.`);
+  const unassigned = rows.filter((r) => r.crewId === null && r.status !== 'skipped');
+  if (unassigned.length) warnings.push(`${unassigned.length} work order(s) have no crew yet.`);
+  return {
+    districtId: district.id,
+    districtName: district.name,
+    weekStart: q.weekStart,
+    dates,
+    yard: { name: district.yardName, lat: district.yardLat, lng: district.yardLng },
+    crews: crewRows,
+    orders: rows,
+    crewDays: loads,
+    unassignedHours: Math.round(unassigned.reduce((s, r) => s + r.plannedHours, 0) * 100) / 100,
+    warnings,
+    lastGeneratedAt: last?.at ? new Date(last.at).toISOString() : null,
+  };
+}
+
+async function boardRows(db: Queryable, ids: number[]): Promise<WorkOrderRow[]> {
+  const out: WorkOrderRow[] = [];
+  // One query per chunk keeps the statement small for very large weeks.
+  for (let i = 0; i < ids.length; i += 2000) out.push(...(await workOrderRows(db, ids.slice(i, i + 2000))));
+  return out;
+}
+
+interface DiffItem {
+  fieldId: number;
+  fieldName: string;
+  siteName: string;
+  task: string;
+  plannedDate: string;
+  plannedHours: number;
+  crewId: number | null;
+  crewName: string | null;
+  reason: string;
+}
+
+/**
+ * Generates (or re-generates) the week. Kept orders (pinned, hand-made, started, done,
+ * skipped) stay as they are and count as work in the engine; the rest is matched to the new
+ * plan. `dryRun` shows the change and writes nothing. Every insert, update and delete is
+ * audited, plus one entry for the run.
+ */
+export async function generateWeek(ctx: Ctx, input: GenerateWeekInput) {
+  authorize(ctx, 'create', 'WorkOrder', { districtId: input.districtId });
+  const q = { districtId: input.districtId, weekStart: input.weekStart };
+  const existing = await weekRows(ctx.db, q.districtId, q.weekStart);
+  const plan = await planDistrictWeek(ctx.db, q, existing);
+  const rec = reconcileWeek(existing, plan.orders);
+
+  const fieldInfo = new Map(
+    (await ctx.db.select({ id: fields.id, name: fields.name, siteName: sites.name }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(sites.districtId, q.districtId))).map((f) => [f.id, f]),
+  );
+  const crewName = new Map(plan.crewRows.map((c) => [c.id, c.name]));
+  const item = (o: { fieldId: number; task: string; plannedDate: string; plannedHours: number; crewId: number | null; reason: string }): DiffItem => ({
+    fieldId: o.fieldId,
+    fieldName: fieldInfo.get(o.fieldId)?.name ?? '',
+    siteName: fieldInfo.get(o.fieldId)?.siteName ?? '',
+    task: o.task,
+    plannedDate: o.plannedDate,
+    plannedHours: o.plannedHours,
+    crewId: o.crewId,
+    crewName: o.crewId === null ? null : (crewName.get(o.crewId) ?? null),
+    reason: o.reason,
+  });
+  const diff = {
+    added: rec.insert.map(item),
+    removed: rec.remove.map(item),
+    changed: rec.update.map((u) => ({ before: item(u.before), after: item(u.next), what: u.what })),
+    kept: rec.kept.map(item),
+    summary: { added: rec.insert.length, removed: rec.remove.length, changed: rec.update.length, kept: rec.kept.length, unchanged: rec.unchanged.length },
+  };
+
+  if (!input.dryRun) {
+    await (ctx.db as Db).transaction(async (tx) => {
+      const audits: (typeof auditLog.$inferInsert)[] = [];
+      if (rec.remove.length) {
+        const gone = await tx
+          .delete(workOrders)
+          .where(and(inArray(workOrders.id, rec.remove.map((r) => r.id)), eq(workOrders.pinned, false), eq(workOrders.origin, 'generated'), inArray(workOrders.status, ['planned', 'assigned'])))
+          .returning({ id: workOrders.id });
+        if (gone.length !== rec.remove.length) throw stale();
+        for (const r of rec.remove) audits.push({ actorId: ctx.actor.id, action: 'delete', entity: 'work_order', entityId: r.id, districtId: r.districtId, before: r, after: null });
+      }
+      for (const u of rec.update) {
+        const p = u.next;
+        const [after] = await tx
+          .update(workOrders)
+          .set({ plannedDate: p.plannedDate, weekStart: q.weekStart, plannedHours: p.plannedHours, crewId: p.crewId, equipmentId: p.equipmentId, reason: p.reason, details: { ...p.details, dueBy: p.latestDate }, status: 'planned', version: sql`${workOrders.version} + 1`, updatedAt: new Date() })
+          .where(and(eq(workOrders.id, u.id), eq(workOrders.version, u.before.version), eq(workOrders.pinned, false)))
+          .returning();
+        if (!after) throw stale();
+        audits.push({ actorId: ctx.actor.id, action: 'update', entity: 'work_order', entityId: u.id, districtId: after.districtId, before: u.before, after });
+      }
+      // Unchanged orders take the newest reasons and details (heights, run times) without a new version.
+      for (const u of rec.unchanged) {
+        const p = plan.orders.find((o) => o.fieldId === u.fieldId && o.task === u.task && o.plannedDate === u.plannedDate);
+        const details = p ? { ...p.details, dueBy: p.latestDate } : null;
+        if (p && (p.reason !== u.reason || JSON.stringify(details) !== JSON.stringify(u.details))) await tx.update(workOrders).set({ reason: p.reason, details: details! }).where(eq(workOrders.id, u.id));
+      }
+      for (let i = 0; i < rec.insert.length; i += 500) {
+        const chunk = rec.insert.slice(i, i + 500);
+        const rows = await tx.insert(workOrders).values(chunk.map((p) => toInsert(p, q, ctx.actor.id))).returning();
+        for (const r of rows) audits.push({ actorId: ctx.actor.id, action: 'create', entity: 'work_order', entityId: r.id, districtId: r.districtId, before: null, after: r });
+      }
+      audits.push({ actorId: ctx.actor.id, action: 'create', entity: 'week_plan', entityId: null, districtId: q.districtId, before: null, after: { weekStart: q.weekStart, ...diff.summary, warnings: plan.warnings } });
+      for (let i = 0; i < audits.length; i += 500) await tx.insert(auditLog).values(audits.slice(i, i + 500));
+    });
+  }
+  const board = await getWeekBoard(ctx, q);
+  return { dryRun: input.dryRun, diff, warnings: plan.warnings, board };
+}
+
+const stale = () => new AppError('conflict', 'week_plan/changed', 'The week changed while it was being generated (someone assigned or moved work); generate again to see the current plan');
+
+function toInsert(p: ScheduledOrder, q: GenerationInput, actorId: number): typeof workOrders.$inferInsert {
+  return {
+    fieldId: p.fieldId,
+    siteId: p.siteId,
+    districtId: q.districtId,
+    task: p.task,
+    weekStart: q.weekStart,
+    plannedDate: p.plannedDate,
+    crewId: p.crewId,
+    equipmentId: p.equipmentId,
+    plannedHours: p.plannedHours,
+    status: 'planned',
+    origin: 'generated',
+    pinned: false,
+    reason: p.reason,
+    details: { ...p.details, dueBy: p.latestDate },
+    createdBy: actorId,
+  };
+}
+
+/**
+ * Confirms the suggested crews: every planned order of the week that has a crew becomes
+ * assigned and pinned, and each crew lead gets one e-mail listing the crew's new work.
+ */
+export async function confirmWeek(ctx: Ctx, q: WeekQuery & { crewId?: number | undefined }, deps: WriteDeps) {
+  authorize(ctx, 'update', 'WorkOrder', { districtId: q.districtId });
+  const dates = weekDates(q.weekStart);
+  const changed = await (ctx.db as Db).transaction(async (tx) => {
+    const conditions = [eq(workOrders.districtId, q.districtId), gte(workOrders.plannedDate, dates[0]!), lte(workOrders.plannedDate, dates[6]!), eq(workOrders.status, 'planned'), sql`${workOrders.crewId} is not null`];
+    if (q.crewId) conditions.push(eq(workOrders.crewId, q.crewId));
+    const before = await tx.select().from(workOrders).where(and(...conditions));
+    if (before.length === 0) return [];
+    const after = await tx
+      .update(workOrders)
+      .set({ status: 'assigned', pinned: true, version: sql`${workOrders.version} + 1`, updatedAt: new Date() })
+      .where(inArray(workOrders.id, before.map((b) => b.id)))
+      .returning();
+    const byId = new Map(before.map((b) => [b.id, b]));
+    for (let i = 0; i < after.length; i += 500) {
+      await tx.insert(auditLog).values(after.slice(i, i + 500).map((a) => ({ actorId: ctx.actor.id, action: 'update' as const, entity: 'work_order', entityId: a.id, districtId: a.districtId, before: byId.get(a.id) ?? null, after: a })));
+    }
+    return after;
+  });
+  const byCrew = new Map<number, WorkMoveNotice>();
+  for (const a of changed) {
+    const row = await workOrderRow(ctx.db, a.id);
+    if (!row || a.crewId === null) continue;
+    const n = byCrew.get(a.crewId) ?? { crewId: a.crewId, kind: 'assigned', orders: [] };
+    n.orders.push(row);
+    byCrew.set(a.crewId, n);
+  }
+  const emailed = await notifyCrews(ctx.db, deps.mailer, [...byCrew.values()], deps.actorName, deps.publicUrl);
+  return { assigned: changed.length, emailed, board: await getWeekBoard(ctx, q) };
+}

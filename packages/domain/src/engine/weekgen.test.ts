@@ -1,0 +1,276 @@
+import { describe, expect, test } from 'vitest';
+import { addDaysIso } from './dates.ts';
+import { prepareWeather, fieldDailySeries } from './outlook.ts';
+import type { DailyWeather } from './outlook.ts';
+import { simulateMowing } from './mowing.ts';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor } from './standards.ts';
+import { assignWeek, crewDayLoads, isKept, planFieldWeek, reconcileWeek, weekDates } from './weekgen.ts';
+import type { ExistingOrder, PlanField } from './weekgen.ts';
+
+const WEEK = '2026-06-01'; // a Monday
+const days = (start: string, n: number, t: { tmax: number; tmin: number; rain?: number }): DailyWeather[] =>
+  Array.from({ length: n }, (_, i) => ({ date: addDaysIso(start, i), tmaxC: t.tmax, tminC: t.tmin, rainMm: t.rain ?? 3 }));
+const weather = (t: { tmax: number; tmin: number; rain?: number }) => prepareWeather(days('2026-05-04', 35, t), { latDeg: 38, elevationM: 20 });
+const WARM = weather({ tmax: 24, tmin: 16 }); // mean 20 °C: GP 1 for cool-season grass
+const COOL = weather({ tmax: 11, tmin: 5 }); // mean 8 °C
+
+// 100 m × 64 m at 38° N: about 6,400 m².
+const rect = (lat: number, lng: number, w = 0.00115, h = 0.000576) => ({
+  type: 'Polygon' as const,
+  coordinates: [[[lng, lat], [lng + w, lat], [lng + w, lat + h], [lng, lat + h], [lng, lat]]],
+});
+
+const field = (over: Partial<PlanField> = {}): PlanField => ({
+  id: 1,
+  siteId: 10,
+  site: { lat: 38, lng: -77 },
+  sport: 'soccer',
+  grass: 'kentucky_bluegrass',
+  areaM2: 6400,
+  geometry: rect(38, -77),
+  maintenanceLevel: 2,
+  hocOverrideMm: null,
+  clippings: 'returned',
+  irrigation: 'automatic',
+  status: 'open',
+  lastMowedOn: '2026-05-31',
+  lastPaintedOn: '2026-05-28',
+  lastFedOn: null,
+  lastCheckedOn: '2026-05-25',
+  events: [],
+  ...over,
+});
+const allDays = ['mon', 'tue', 'wed', 'thu', 'fri'] as const;
+const mowDates = (p: ReturnType<typeof planFieldWeek>) => p.orders.filter((o) => o.task === 'mow').map((o) => o.askedDate);
+
+describe('planFieldWeek', () => {
+  test('should ask more mowings in a warm week than in a cool one', () => {
+    const warm = planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    const cool = planFieldWeek({ field: field(), weather: COOL, weekStart: WEEK, kept: [], workDays: allDays });
+    expect(mowDates(warm).length).toBeGreaterThanOrEqual(2);
+    expect(mowDates(warm).length).toBeGreaterThan(mowDates(cool).length);
+  });
+
+  test('should put mowings on the dates the engine simulation gives from the last cut', () => {
+    const f = field();
+    const plan = planFieldWeek({ field: f, weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    // The same run done by hand: growth from the day after the last cut, Monday–Friday mowing days.
+    const std = DEFAULT_STANDARDS[2];
+    const hoc = hocFor(f);
+    const daily = fieldDailySeries({ ...f, id: 1 }, WARM, DEFAULT_STANDARDS, DEFAULT_PARAMETERS);
+    const from = WARM.dates.indexOf('2026-06-01');
+    // The plan looks a week past Sunday; past the last day of weather it repeats the last week's mean growth.
+    const tail = daily.growthMm.slice(-7).reduce((a, b) => a + b, 0) / 7;
+    const growth = [...daily.growthMm.slice(from), ...new Array<number>(7).fill(tail)];
+    const sim = simulateMowing(hoc, growth, hoc, {
+      startDate: '2026-06-01',
+      maxIntervalDays: std.maxMowingIntervalDays,
+      minMowingsPerWeek: std.minMowingsPerWeek,
+      frequencyMinGrowthMm: 0.1 * hoc,
+      mowingDays: allDays,
+    });
+    const expected = sim.mowings.map((m) => m.date).filter((d) => d <= '2026-06-07');
+    expect(expected.length).toBeGreaterThanOrEqual(2);
+    expect(mowDates(plan)).toEqual(expected);
+    for (const o of plan.orders.filter((x) => x.task === 'mow')) {
+      expect(o.details.hocMm).toBe(hoc);
+      expect(o.plannedHours).toBeGreaterThan(0.3);
+      expect(o.reason).toMatch(/One-third rule|asks a cut/);
+    }
+  });
+
+  test('should put an overdue mowing on Monday', () => {
+    const plan = planFieldWeek({ field: field({ lastMowedOn: '2026-05-20' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    const first = plan.orders.find((o) => o.task === 'mow');
+    expect(first?.askedDate).toBe(WEEK);
+    expect(first?.reason).toMatch(/^Overdue/);
+  });
+
+  test('should count a kept mowing as a cut and plan around it', () => {
+    const free = mowDates(planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }));
+    const keptDate = '2026-06-01';
+    const withKept = mowDates(planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [{ id: 9, fieldId: 1, task: 'mow', plannedDate: keptDate, status: 'assigned' }], workDays: allDays }));
+    expect(withKept).not.toContain(keptDate);
+    expect(withKept.length).toBeLessThanOrEqual(free.length);
+    // A skipped kept order is not a cut.
+    const skipped = mowDates(planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [{ id: 9, fieldId: 1, task: 'mow', plannedDate: keptDate, status: 'skipped' }], workDays: allDays }));
+    expect(skipped).toEqual(free);
+  });
+
+  test('should paint lines the day before a booking, once for bookings close together', () => {
+    const events = [
+      { id: 1, startsOn: '2026-06-04', title: 'League game' },
+      { id: 2, startsOn: '2026-06-05', title: 'Second game' },
+    ];
+    const plan = planFieldWeek({ field: field({ events, lastPaintedOn: '2026-05-30' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    const paints = plan.orders.filter((o) => o.task === 'paint_lines');
+    expect(paints.map((p) => p.askedDate)).toEqual(['2026-06-03']);
+    expect(paints[0]?.latestDate).toBe('2026-06-04');
+    expect(paints[0]?.details.paintL).toBeGreaterThan(0);
+  });
+
+  test('should repaint by the level interval and keep no lines on lawns', () => {
+    const plan = planFieldWeek({ field: field({ lastPaintedOn: '2026-05-24' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    // Level 2 repaints every 10 days: 24 May + 10 = 3 June.
+    expect(plan.orders.filter((o) => o.task === 'paint_lines').map((o) => o.askedDate)).toEqual(['2026-06-03']);
+    const lawn = planFieldWeek({ field: field({ sport: 'lawn', lastPaintedOn: null }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    expect(lawn.orders.some((o) => o.task === 'paint_lines')).toBe(false);
+  });
+
+  test('should plan a field check when the level interval runs out', () => {
+    // Level 2 checks every 14 days: 25 May + 14 = 8 June, next week.
+    expect(planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders.some((o) => o.task === 'field_check')).toBe(false);
+    const due = planFieldWeek({ field: field({ lastCheckedOn: '2026-05-19' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    expect(due.orders.find((o) => o.task === 'field_check')?.askedDate).toBe('2026-06-02');
+  });
+
+  test('should plan watering on the allowed days only, and none on a rainy week or without irrigation', () => {
+    const dry = weather({ tmax: 30, tmin: 18, rain: 0 });
+    const plan = planFieldWeek({ field: field({ irrigation: 'quick_coupler' }), weather: dry, weekStart: WEEK, kept: [], workDays: allDays });
+    const water = plan.orders.filter((o) => o.task === 'irrigate');
+    expect(water.map((o) => o.askedDate)).toEqual(['2026-06-01', '2026-06-03', '2026-06-05']);
+    expect(water[0]?.details.runTimeMin).toBeGreaterThan(0);
+    const wet = weather({ tmax: 24, tmin: 16, rain: 20 });
+    expect(planFieldWeek({ field: field(), weather: wet, weekStart: WEEK, kept: [], workDays: allDays }).orders.some((o) => o.task === 'irrigate')).toBe(false);
+    expect(planFieldWeek({ field: field({ irrigation: 'none' }), weather: dry, weekStart: WEEK, kept: [], workDays: allDays }).orders.some((o) => o.task === 'irrigate')).toBe(false);
+    const auto = planFieldWeek({ field: field(), weather: dry, weekStart: WEEK, kept: [], workDays: allDays }).orders.filter((o) => o.task === 'irrigate');
+    expect(auto).toHaveLength(1);
+    expect((auto[0]?.details.runs as unknown[]).length).toBe(3);
+  });
+
+  test('should plan only the check on a closed field and say when weather is projected', () => {
+    const closed = planFieldWeek({ field: field({ status: 'closed', lastCheckedOn: null }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    expect(closed.orders.map((o) => o.task)).toEqual(['field_check']);
+    const late = planFieldWeek({ field: field(), weather: WARM, weekStart: '2026-06-08', kept: [], workDays: allDays });
+    expect(late.notes.join(' ')).toMatch(/projected/);
+  });
+
+  test('should refuse a week that does not start on a Monday', () => {
+    expect(() => weekDates('2026-06-02')).toThrow(/Monday/);
+  });
+});
+
+describe('assignWeek', () => {
+  const yard = { lat: 38, lng: -77 };
+  const sites = new Map([
+    [10, { lat: 38.01, lng: -77 }],
+    [11, { lat: 38.02, lng: -77.01 }],
+    [12, { lat: 38.0, lng: -77.03 }],
+  ]);
+  const travel = DEFAULT_PARAMETERS.travel;
+  const asked = (siteId: number, fieldId: number, date: string, hours: number, flexible = false) => ({
+    fieldId,
+    siteId,
+    task: flexible ? ('field_check' as const) : ('mow' as const),
+    askedDate: date,
+    plannedHours: hours,
+    reason: '',
+    details: {},
+    latestDate: flexible ? null : date,
+    flexible,
+    equipmentKind: null,
+  });
+
+  test('should keep a site with one crew and spread sites across crews by load', () => {
+    const { orders } = assignWeek({
+      weekStart: WEEK,
+      orders: [asked(10, 1, '2026-06-02', 3), asked(10, 2, '2026-06-02', 2), asked(11, 3, '2026-06-03', 4), asked(12, 4, '2026-06-04', 1)],
+      crews: [
+        { id: 1, hoursPerDay: 8, workDays: allDays },
+        { id: 2, hoursPerDay: 8, workDays: allDays },
+      ],
+      sites,
+      yard,
+      travel,
+    });
+    const crewOf = (f: number) => orders.find((o) => o.fieldId === f)?.crewId;
+    expect(crewOf(1)).toBe(crewOf(2));
+    expect(crewOf(3)).not.toBe(crewOf(1));
+  });
+
+  test('should move a mowing to the crew working day before the rule date', () => {
+    const { orders } = assignWeek({ weekStart: WEEK, orders: [asked(10, 1, '2026-06-06', 2)], crews: [{ id: 1, hoursPerDay: 8, workDays: allDays }], sites, yard, travel });
+    expect(orders[0]?.plannedDate).toBe('2026-06-05'); // Saturday → Friday
+  });
+
+  test('should move flexible work off an overloaded day', () => {
+    const { orders } = assignWeek({
+      weekStart: WEEK,
+      orders: [asked(10, 1, '2026-06-01', 7), asked(10, 2, '2026-06-01', 3, true)],
+      crews: [{ id: 1, hoursPerDay: 8, workDays: allDays }],
+      sites,
+      yard,
+      travel,
+    });
+    expect(orders.find((o) => o.fieldId === 1)?.plannedDate).toBe('2026-06-01');
+    expect(orders.find((o) => o.fieldId === 2)?.plannedDate).not.toBe('2026-06-01');
+  });
+
+  test('should leave orders unassigned with a warning when no crew works', () => {
+    const r = assignWeek({ weekStart: WEEK, orders: [asked(10, 1, '2026-06-02', 2)], crews: [], sites, yard, travel });
+    expect(r.orders[0]?.crewId).toBeNull();
+    expect(r.warnings[0]).toMatch(/No crew/);
+  });
+});
+
+describe('crewDayLoads', () => {
+  test('should add drive and load/unload to work hours and flag overload', () => {
+    const sites = new Map([
+      [10, { lat: 38.05, lng: -77 }],
+      [11, { lat: 38.1, lng: -77 }],
+    ]);
+    const loads = crewDayLoads(
+      [
+        { id: 1, crewId: 1, plannedDate: WEEK, siteId: 10, plannedHours: 4 },
+        { id: 2, crewId: 1, plannedDate: WEEK, siteId: 11, plannedHours: 3.5 },
+      ],
+      [{ id: 1, hoursPerDay: 8, workDays: allDays }],
+      sites,
+      { lat: 38, lng: -77 },
+      DEFAULT_PARAMETERS.travel,
+      WEEK,
+    );
+    const monday = loads.find((l) => l.date === WEEK)!;
+    expect(monday.route).toEqual([10, 11]);
+    expect(monday.loadUnloadHours).toBeCloseTo(0.5, 6);
+    // Yard → 5.6 km → 11.1 km → yard: 22.2 km great-circle × 1.3 ÷ 35 km/h ≈ 0.82 h.
+    expect(monday.driveHours).toBeCloseTo(0.83, 1);
+    expect(monday.totalHours).toBeGreaterThan(8);
+    expect(monday.overloaded).toBe(true);
+    expect(loads.find((l) => l.date === '2026-06-06')?.availableHours).toBe(0);
+  });
+});
+
+describe('reconcileWeek', () => {
+  const row = (over: Partial<ExistingOrder>): ExistingOrder => ({ id: 1, fieldId: 1, task: 'mow', plannedDate: '2026-06-02', plannedHours: 1, crewId: 1, equipmentId: null, status: 'planned', origin: 'generated', pinned: false, reason: '', ...over });
+  const plan = (over: Partial<{ fieldId: number; task: 'mow'; plannedDate: string; plannedHours: number; crewId: number | null; equipmentId: number | null }>) => ({ fieldId: 1, task: 'mow' as const, plannedDate: '2026-06-02', plannedHours: 1, crewId: 1, equipmentId: null, ...over });
+
+  test('should keep pinned, manual and logged orders and diff the rest', () => {
+    const existing = [
+      row({ id: 1 }),
+      row({ id: 2, plannedDate: '2026-06-04' }),
+      row({ id: 3, fieldId: 2, pinned: true }),
+      row({ id: 4, fieldId: 3, origin: 'manual' }),
+      row({ id: 5, fieldId: 4, status: 'done' }),
+      row({ id: 6, fieldId: 5 }),
+    ];
+    const r = reconcileWeek(existing, [plan({}), plan({ plannedDate: '2026-06-05' }), plan({ fieldId: 6 })]);
+    expect(r.kept.map((k) => k.id)).toEqual([3, 4, 5]);
+    expect(r.unchanged.map((k) => k.id)).toEqual([1]);
+    expect(r.update).toHaveLength(1);
+    expect(r.update[0]).toMatchObject({ id: 2, what: ['date'] });
+    expect(r.remove.map((k) => k.id)).toEqual([6]);
+    expect(r.insert.map((p) => p.fieldId)).toEqual([6]);
+    expect(isKept(row({ status: 'started' }))).toBe(true);
+  });
+});
+
+describe('planFieldWeek without a mowing on record', () => {
+  test('should assume the rule was kept before the week, not call the field overdue', () => {
+    const plan = planFieldWeek({ field: field({ lastMowedOn: null }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    const mows = plan.orders.filter((o) => o.task === 'mow');
+    expect(mows.length).toBeGreaterThan(0);
+    expect(mows.every((o) => !o.reason.startsWith('Overdue'))).toBe(true);
+    expect(plan.notes.join(' ')).toMatch(/No mowing on record/);
+  });
+});

@@ -1,0 +1,700 @@
+/**
+ * Week plan generation: what each field asks of the crews in one week (Monday to Sunday),
+ * from the turf engine and the weather, and how those asks become crew work.
+ *
+ * - Mowing: the one-third rule over the predicted daily growth (`simulateMowing`), from the
+ *   last cut on record; a cut the rule asked for before the week is overdue and goes first.
+ * - Lines: painted before each booking (department lead time), and every repaint interval of
+ *   the level while the turf grows.
+ * - Feed: the feed plan's applications (annual N split by monthly growth potential).
+ * - Water: the week's gross need (share × ETc − effective rain) ÷ DU as run times on the
+ *   allowed watering days.
+ * - Field checks: every `fieldCheckDays` of the level.
+ *
+ * Orders that people kept (assigned, moved, logged or added by hand) count as done work:
+ * a kept mowing resets the grass to HOC on its date, a kept painting serves nearby bookings.
+ * Pure and deterministic: the same input gives the same plan.
+ */
+import type { Polygon } from '../schemas/common.ts';
+import type { Clippings, FieldStatus, Grass, IrrigationKind, Level, Sport, WorkStatus, WorkTask } from '../vocabulary.ts';
+import { LEVEL_NAMES } from '../vocabulary.ts';
+import { fail } from './check.ts';
+import { WEEKDAYS, addDaysIso, isoToDayNumber, monthOf, weekdayOf } from './dates.ts';
+import type { Weekday } from './dates.ts';
+import { annualNitrogen, monthlyNSplitByGp, planNApplications, productForArea } from './feed.ts';
+import { hoursPerMowing, hoursPerMowingPolygon, stripePassPlan } from './labour.ts';
+import type { LatLng, TravelSettings } from './labour.ts';
+import { defaultTemplateFor, linePlan } from './lines.ts';
+import { longAxis } from '../geometry.ts';
+import { mowTriggerHeightMm, mowerTypeFor, simulateMowing } from './mowing.ts';
+import { fieldDailySeries } from './outlook.ts';
+import type { PreparedWeather } from './outlook.ts';
+import { planRoute } from './routing.ts';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor, levelStandard } from './standards.ts';
+import type { DepartmentParameters, MowerSpec, Standards } from './standards.ts';
+import { grossIrrigationMm, irrigationVolumeLitres, netIrrigationMm, weeklyIrrigationSchedule } from './water.ts';
+
+/** A field as the week plan needs it. */
+export interface PlanField {
+  id: number;
+  siteId: number;
+  site: LatLng;
+  sport: Sport;
+  grass: Grass;
+  areaM2: number;
+  geometry: Polygon;
+  maintenanceLevel: Level;
+  hocOverrideMm: number | null;
+  clippings: Clippings;
+  irrigation: IrrigationKind;
+  status: FieldStatus;
+  lastMowedOn: string | null;
+  lastPaintedOn: string | null;
+  lastFedOn: string | null;
+  lastCheckedOn: string | null;
+  /** Bookings from the week's Monday to the next Monday. */
+  events: ReadonlyArray<{ id: number; startsOn: string; title: string }>;
+}
+
+/** An order that stays as people left it; it counts as work already planned or done. */
+export interface KeptOrder {
+  id: number;
+  fieldId: number;
+  task: WorkTask;
+  plannedDate: string;
+  status: WorkStatus;
+}
+
+/** A mower the district has (for hours and HOC fit); the department default stands in when none fits. */
+export interface PlanMower {
+  id: number;
+  crewId: number | null;
+  kind: 'reel' | 'rotary' | 'flail';
+  widthM: number;
+  speedKmh: number;
+  efficiency: number;
+  hocMinMm: number;
+  hocMaxMm: number;
+}
+
+/** What the plan asks of one field on one day. */
+export interface AskedOrder {
+  fieldId: number;
+  siteId: number;
+  task: WorkTask;
+  /** The date the engine asks for (the crew's working days may move it). */
+  askedDate: string;
+  plannedHours: number;
+  reason: string;
+  details: Record<string, unknown>;
+  /** Date by which it must be done (mowing: the one-third rule; lines: the booking). */
+  latestDate: string | null;
+  /** An order the crews may move within the week to balance days. */
+  flexible: boolean;
+  /** Equipment kind the order needs, to suggest a unit. */
+  equipmentKind: 'mower' | 'line_marker' | 'spreader' | null;
+}
+
+export interface FieldWeekInput {
+  field: PlanField;
+  weather: PreparedWeather;
+  weekStart: string;
+  kept: readonly KeptOrder[];
+  /** Days any crew of the district works (mowing can fall only on these). */
+  workDays: readonly Weekday[];
+  mowers?: readonly PlanMower[];
+  standards?: Standards;
+  params?: DepartmentParameters;
+}
+
+export interface FieldWeekPlan {
+  fieldId: number;
+  orders: AskedOrder[];
+  /** Plain-language notes (e.g. weather projected past the last day on file). */
+  notes: string[];
+}
+
+const round = (v: number, digits = 2) => Math.round(v * 10 ** digits) / 10 ** digits;
+const WEEK_FROM_MONDAY: readonly Weekday[] = ['mon', 'tue', 'wed', 'thu', 'fri', 'sat', 'sun'];
+const dayName = (iso: string) => ({ sun: 'Sunday', mon: 'Monday', tue: 'Tuesday', wed: 'Wednesday', thu: 'Thursday', fri: 'Friday', sat: 'Saturday' })[weekdayOf(iso)];
+
+/** The seven dates of the week starting on a Monday; throws `engine/not_monday`. */
+export function weekDates(weekStart: string): string[] {
+  if (weekdayOf(weekStart) !== 'mon') fail('not_monday', `a plan week starts on a Monday (${weekStart} is a ${dayName(weekStart)})`);
+  return Array.from({ length: 7 }, (_, i) => addDaysIso(weekStart, i));
+}
+
+/**
+ * A daily growth series from the first day of weather to the end of the week. Days past the
+ * last day on file (no forecast yet) repeat the mean of the last seven days (persistence),
+ * and the plan says so.
+ */
+function growthThroughWeek(daily: number[], weather: PreparedWeather, weekEnd: string): { growth: number[]; projectedDays: number } {
+  const last = weather.dates[weather.dates.length - 1] as string;
+  const missing = Math.max(0, isoToDayNumber(weekEnd) - isoToDayNumber(last));
+  if (missing === 0) return { growth: daily, projectedDays: 0 };
+  const tail = daily.slice(-7);
+  const mean = tail.reduce((s, v) => s + v, 0) / Math.max(1, tail.length);
+  return { growth: [...daily, ...new Array<number>(missing).fill(mean)], projectedDays: missing };
+}
+
+/** Picks the mower for a HOC: the kind the HOC asks for whose range holds it, widest first; else the department default. */
+export function chooseMower(hocMm: number, mowers: readonly PlanMower[], params: DepartmentParameters = DEFAULT_PARAMETERS, crewId: number | null = null): { spec: MowerSpec; mower: PlanMower | null } {
+  const kind = mowerTypeFor(hocMm);
+  const fits = mowers
+    .filter((m) => m.kind === kind && m.hocMinMm <= hocMm + 1e-9 && m.hocMaxMm >= hocMm - 1e-9)
+    .sort((a, b) => Number(b.crewId === crewId && crewId !== null) - Number(a.crewId === crewId && crewId !== null) || b.widthM - a.widthM || a.id - b.id);
+  const base = params.mowers[kind];
+  const m = fits[0];
+  if (!m) return { spec: base, mower: null };
+  return { spec: { ...base, widthM: m.widthM, speedKmh: m.speedKmh, efficiency: m.efficiency, hocMinMm: m.hocMinMm, hocMaxMm: m.hocMaxMm }, mower: m };
+}
+
+/** Hours for one mowing: a stripe pass plan on rectangular sports fields, else area ÷ field capacity (as the field page shows). */
+export function mowingHours(field: Pick<PlanField, 'geometry' | 'sport'>, mower: MowerSpec): { hours: number; method: 'pass_plan' | 'field_capacity' } {
+  const corners = (field.geometry.coordinates[0]?.length ?? 1) - 1;
+  if (corners === 4 && field.sport !== 'lawn' && field.sport !== 'multi_use') {
+    const axis = longAxis(field.geometry);
+    return { hours: stripePassPlan(axis.lengthM, axis.widthM, mower, 'side_to_side').hours, method: 'pass_plan' };
+  }
+  return { hours: hoursPerMowingPolygon(field.geometry, mower), method: 'field_capacity' };
+}
+
+/** What one field asks of the crews in the week. */
+export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
+  const { field, weather, weekStart, kept } = input;
+  const standards = input.standards ?? DEFAULT_STANDARDS;
+  const params = input.params ?? DEFAULT_PARAMETERS;
+  const planning = params.planning ?? DEFAULT_PARAMETERS.planning;
+  const dates = weekDates(weekStart);
+  const weekEnd = dates[6] as string;
+  const std = levelStandard(field.maintenanceLevel, standards);
+  const level = field.maintenanceLevel;
+  const orders: AskedOrder[] = [];
+  const notes: string[] = [];
+  const keptOf = (task: WorkTask) => kept.filter((k) => k.fieldId === field.id && k.task === task && k.status !== 'skipped');
+
+  const first = weather.dates[0];
+  if (!first || first > weekEnd) {
+    notes.push(`No weather on file before ${weekEnd}: only field checks are planned for this field.`);
+  }
+  const outlookField = { id: field.id, areaM2: field.areaM2, sport: field.sport, grass: field.grass, maintenanceLevel: level, hocOverrideMm: field.hocOverrideMm, clippings: field.clippings, irrigation: field.irrigation };
+  const daily = first && first <= weekEnd ? fieldDailySeries(outlookField, weather, standards, params) : null;
+  const open = field.status !== 'closed';
+  if (!open) notes.push('The field is closed: only its field check is planned.');
+
+  // Index of each week day in the growth series (may pass the weather's end: projected).
+  const day0 = first ? isoToDayNumber(first) : 0;
+  const idx = (iso: string) => isoToDayNumber(iso) - day0;
+  let weekGp: number | null = null;
+
+  if (daily && open) {
+    // The run looks a week past Sunday so Friday's cut sees the weekend's growth.
+    const horizon = addDaysIso(weekEnd, 7);
+    const { growth, projectedDays: projectedAll } = growthThroughWeek(daily.growthMm, weather, horizon);
+    const projectedDays = Math.max(0, projectedAll - 7);
+    if (projectedDays > 0) notes.push(`Weather on file ends ${weather.dates[weather.dates.length - 1]}: growth for the last ${Math.min(7, projectedDays)} day(s) of the week is projected from the week before.`);
+    const w0 = Math.max(0, idx(weekStart));
+    const gp = daily.gp;
+    let gpSum = 0;
+    let gpN = 0;
+    for (let i = w0; i <= Math.min(idx(weekEnd), gp.length - 1); i++) {
+      gpSum += gp[i] as number;
+      gpN++;
+    }
+    weekGp = gpN ? gpSum / gpN : gp.length ? (gp[gp.length - 1] as number) : 0;
+
+    // Mowing: simulate from the last cut (on record or kept in this week).
+    const hocMm = hocFor(outlookField, standards);
+    const trigger = mowTriggerHeightMm(hocMm);
+    const { spec, mower } = chooseMower(hocMm, input.mowers ?? [], params);
+    const { hours, method } = mowingHours(field, spec);
+    const mowOptions = { maxIntervalDays: std.maxMowingIntervalDays, minMowingsPerWeek: std.minMowingsPerWeek, frequencyMinGrowthMm: 0.1 * hocMm, mowingDays: input.workDays.length ? input.workDays : WEEKDAYS };
+    const keptCuts = new Set(keptOf('mow').map((k) => k.plannedDate));
+    const asked: Array<{ date: string; heightMm: number; reason: 'growth' | 'frequency' | 'overdue'; overdueSince?: string }> = [];
+    let cutIdx = field.lastMowedOn ? idx(field.lastMowedOn) : -1;
+    if (cutIdx >= growth.length) cutIdx = growth.length - 1;
+    if (cutIdx < 0 && idx(weekStart) > 0) {
+      // No cut on record since the weather began: assume the field was mowed as the rule
+      // asked until this week (a season run from the first day of weather), not overdue.
+      const season = simulateMowing(hocMm, growth.slice(0, idx(weekStart)), hocMm, { ...mowOptions, startDate: first as string });
+      const lastAssumed = season.mowings[season.mowings.length - 1];
+      cutIdx = lastAssumed ? lastAssumed.dayIndex : -1;
+      notes.push('No mowing on record: the plan assumes the field was mowed as the one-third rule asked before this week.');
+    }
+    for (let guard = 0; guard < 20; guard++) {
+      const from = Math.max(0, cutIdx + 1);
+      if (from > idx(weekEnd)) break;
+      const sim = simulateMowing(hocMm, growth.slice(from, idx(horizon) + 1), hocMm, { ...mowOptions, startDate: addDaysIso(first as string, from), daysSinceCutAtStart: from - cutIdx - 1 });
+      const next = sim.mowings[0];
+      const nextKept = [...keptCuts].filter((d) => idx(d) >= from).sort()[0];
+      if (nextKept && (!next || nextKept <= next.date)) {
+        cutIdx = idx(nextKept);
+        continue;
+      }
+      if (!next || next.date > weekEnd) break;
+      if (next.date < weekStart) {
+        // The rule asked for a cut before this week and none is on record: mow first thing.
+        asked.push({ date: weekStart, heightMm: next.heightBeforeMm, reason: 'overdue', overdueSince: next.date });
+        cutIdx = idx(weekStart);
+        continue;
+      }
+      asked.push({ date: next.date, heightMm: next.heightBeforeMm, reason: next.reason });
+      cutIdx = next.dayIndex + from;
+    }
+    for (const a of asked) {
+      const why =
+        a.reason === 'overdue'
+          ? `Overdue: the one-third rule asked for a cut on ${a.overdueSince} and none is on record`
+          : a.reason === 'growth'
+            ? `One-third rule: the grass would pass ${round(trigger, 0)} mm (1.5 × HOC ${round(hocMm, 0)} mm) before the next mowing day`
+            : `Level ${level} (${LEVEL_NAMES[level]}) asks a cut at least every ${Math.min(std.maxMowingIntervalDays, Math.floor(7 / std.minMowingsPerWeek))} days`;
+      orders.push({
+        fieldId: field.id,
+        siteId: field.siteId,
+        task: 'mow',
+        askedDate: a.date,
+        plannedHours: round(hours),
+        reason: why,
+        details: { hocMm: round(hocMm, 1), triggerMm: round(trigger, 1), heightBeforeMm: round(a.heightMm, 1), mowerKind: spec.kind, mowerId: mower?.id ?? null, hoursMethod: method, overdueSince: a.overdueSince ?? null },
+        latestDate: a.reason === 'overdue' ? weekStart : a.date,
+        flexible: false,
+        equipmentKind: 'mower',
+      });
+    }
+  }
+
+  // Lines: before bookings, and every repaint interval while the turf grows.
+  const template = std.lineRepaintDays === null ? null : defaultTemplateFor(field.sport);
+  if (daily && open && template && std.lineRepaintDays !== null) {
+    const lp = linePlan(template, params.lines, { days: 1, repaintDays: std.lineRepaintDays });
+    const painted = [field.lastPaintedOn, ...keptOf('paint_lines').map((k) => k.plannedDate)].filter((d): d is string => d !== null).sort();
+    const lastPaintBefore = (d: string) => [...painted].reverse().find((p) => p <= d) ?? null;
+    const paintOn = (date: string, reason: string, latest: string | null, extra: Record<string, unknown>) => {
+      painted.push(date);
+      painted.sort();
+      orders.push({
+        fieldId: field.id,
+        siteId: field.siteId,
+        task: 'paint_lines',
+        askedDate: date,
+        plannedHours: round(lp.hoursPerRepaint),
+        reason,
+        details: { template: template.name, lineLengthM: round(lp.lineLengthM, 0), mixedL: round(lp.mixedLitres, 1), paintL: round(lp.concentrateLitres, 1), ...extra },
+        latestDate: latest,
+        flexible: latest === null,
+        equipmentKind: 'line_marker',
+      });
+    };
+    const nextMonday = addDaysIso(weekStart, 7);
+    const events = [...field.events].filter((e) => e.startsOn >= weekStart && e.startsOn <= nextMonday).sort((a, b) => (a.startsOn < b.startsOn ? -1 : a.startsOn > b.startsOn ? 1 : a.id - b.id));
+    for (const e of events) {
+      const last = lastPaintBefore(e.startsOn);
+      if (last && isoToDayNumber(e.startsOn) - isoToDayNumber(last) <= planning.paintFreshDays) continue;
+      let date = addDaysIso(e.startsOn, -planning.paintDaysBeforeEvent);
+      if (date < weekStart) date = weekStart;
+      if (date > weekEnd) continue; // next Monday's booking is painted on this week's days only if in reach
+      paintOn(date, `Lines for ${e.title} on ${dayName(e.startsOn)} ${e.startsOn}`, e.startsOn, { eventId: e.id, eventTitle: e.title, eventOn: e.startsOn });
+    }
+    if ((weekGp ?? 0) >= planning.dormantGp) {
+      const last = lastPaintBefore(weekEnd);
+      const due = last ? addDaysIso(last, std.lineRepaintDays) : weekStart;
+      if (due <= weekEnd) {
+        const date = due < weekStart ? weekStart : due;
+        paintOn(date, last ? `Repaint: level ${level} repaints every ${std.lineRepaintDays} days (last painted ${last})` : `No painting on record: level ${level} keeps lines`, null, {});
+      }
+    }
+  }
+
+  // Feed: the plan's application in this week (or one missed in the last fortnight).
+  if (daily && open && (weekGp ?? 0) >= planning.dormantGp && keptOf('feed').length === 0) {
+    const year = Number(weekStart.slice(0, 4));
+    const monthGp: (number | null)[] = new Array<number | null>(12).fill(null);
+    const monthDays = new Array<number>(12).fill(0);
+    weather.dates.forEach((d, i) => {
+      if (Number(d.slice(0, 4)) !== year) return;
+      const m = monthOf(d) - 1;
+      monthGp[m] = (monthGp[m] ?? 0) + (daily.gp[i] as number);
+      monthDays[m] = (monthDays[m] as number) + 1;
+    });
+    const meanGp = monthGp.map((g, m) => (g === null ? null : g / (monthDays[m] as number)));
+    const irrigated = daily.share > 0;
+    const annual = annualNitrogen({ grass: field.grass, level, clippings: field.clippings, irrigated }, standards);
+    const product = params.fertiliserProduct;
+    const apps = planNApplications(monthlyNSplitByGp(annual.gPerM2, meanGp), { slowReleaseShare: product.slowReleaseShare, year, params });
+    const fedAfter = field.lastFedOn ? addDaysIso(field.lastFedOn, 14) : null;
+    const app = apps.find((a) => a.date !== null && a.date >= addDaysIso(weekStart, -14) && a.date <= weekEnd && (fedAfter === null || a.date > fedAfter));
+    if (app && app.date) {
+      const need = productForArea(app.nGPerM2, product, field.areaM2, params.fertiliserBagKg, params.costs.fertiliserPerKg);
+      const spreader = planning.spreader;
+      const hours = hoursPerMowing(field.areaM2, spreader) + spreader.setupMin / 60;
+      const date = app.date < weekStart ? weekStart : app.date;
+      orders.push({
+        fieldId: field.id,
+        siteId: field.siteId,
+        task: 'feed',
+        askedDate: date,
+        plannedHours: round(hours),
+        reason: `Feed plan: ${round(app.nGPerM2, 2)} g N/m² planned for ${app.date}${app.date < weekStart ? ' (not yet applied)' : ''}`,
+        details: { nGPerM2: round(app.nGPerM2, 3), product: `${product.n}-${product.p}-${product.k}`, productKg: round(need.productKg, 1), bags: need.bags },
+        latestDate: null,
+        flexible: true,
+        equipmentKind: 'spreader',
+      });
+    }
+  }
+
+  // Water: the week's gross need as run times on the allowed days.
+  if (daily && open && daily.share > 0) {
+    let etc = 0;
+    let eff = 0;
+    for (const d of dates) {
+      const i = idx(d);
+      if (i < 0 || i >= daily.etcMm.length) continue;
+      etc += daily.etcMm[i] as number;
+      eff += weather.effectiveRainMm[i] as number;
+    }
+    const gross = grossIrrigationMm(netIrrigationMm(etc, eff, daily.share), daily.du);
+    const keptDays = new Set(keptOf('irrigate').map((k) => k.plannedDate));
+    if (gross >= planning.minIrrigationMm) {
+      const schedule = weeklyIrrigationSchedule({ grossMmPerWeek: gross, precipRateMmPerH: params.irrigation.precipRateMmPerH, allowedDays: planning.wateringDays, maxRunMinPerCycle: params.irrigation.maxRunMinPerCycle });
+      const runs = schedule.days.map((d) => ({ day: d.day, date: dates[WEEK_FROM_MONDAY.indexOf(d.day)] as string, cycles: d.cycles, minutesPerCycle: round(d.minutesPerCycle, 0), totalMinutes: round(d.totalMinutes, 0) }));
+      const base = { grossMm: round(gross, 1), volumeL: round(irrigationVolumeLitres(schedule.appliedMm, field.areaM2), 0), shortfallMm: round(schedule.shortfallMm, 1) };
+      if (field.irrigation === 'automatic') {
+        if (keptDays.size === 0) {
+          const firstRun = runs.map((r) => r.date).sort()[0] ?? weekStart;
+          orders.push({
+            fieldId: field.id,
+            siteId: field.siteId,
+            task: 'irrigate',
+            askedDate: weekStart < firstRun ? weekStart : firstRun,
+            plannedHours: planning.controllerSetHours,
+            reason: `Water budget: ${round(gross, 1)} mm gross this week; set the controller to the run times`,
+            details: { ...base, system: 'automatic', runs },
+            latestDate: firstRun,
+            flexible: false,
+            equipmentKind: null,
+          });
+        }
+      } else {
+        for (const run of runs) {
+          if (keptDays.has(run.date) || run.totalMinutes <= 0) continue;
+          orders.push({
+            fieldId: field.id,
+            siteId: field.siteId,
+            task: 'irrigate',
+            askedDate: run.date,
+            plannedHours: planning.quickCouplerHoursPerDay,
+            reason: `Water budget: ${round(gross / runs.length, 1)} mm on ${dayName(run.date)} (${run.cycles} × ${run.minutesPerCycle} min, cycle and soak)`,
+            details: { ...base, system: 'quick_coupler', runTimeMin: run.totalMinutes, cycles: run.cycles, minutesPerCycle: run.minutesPerCycle },
+            latestDate: run.date,
+            flexible: false,
+            equipmentKind: null,
+          });
+        }
+      }
+    }
+  }
+
+  // Field check by the level's frequency.
+  if (keptOf('field_check').length === 0) {
+    const due = field.lastCheckedOn ? addDaysIso(field.lastCheckedOn, std.fieldCheckDays) : weekStart;
+    if (due <= weekEnd) {
+      const date = due < weekStart ? weekStart : due;
+      orders.push({
+        fieldId: field.id,
+        siteId: field.siteId,
+        task: 'field_check',
+        askedDate: date,
+        plannedHours: planning.fieldCheckHours,
+        reason: field.lastCheckedOn ? `Level ${level} checks every ${std.fieldCheckDays} days (last ${field.lastCheckedOn})` : 'No field check on record',
+        details: {},
+        latestDate: null,
+        flexible: true,
+        equipmentKind: null,
+      });
+    }
+  }
+
+  return { fieldId: field.id, orders, notes };
+}
+
+// ---------------------------------------------------------------------------------------
+// Crews: who does what, on which day, and the day's route.
+
+export interface PlanCrewInput {
+  id: number;
+  hoursPerDay: number;
+  workDays: readonly Weekday[];
+}
+
+export interface PlanEquipment {
+  id: number;
+  crewId: number | null;
+  kind: 'mower' | 'line_marker' | 'spreader';
+  /** For mowers: its kind and HOC range. */
+  mowerKind?: 'reel' | 'rotary' | 'flail';
+  hocMinMm?: number;
+  hocMaxMm?: number;
+}
+
+export interface ScheduledOrder extends AskedOrder {
+  plannedDate: string;
+  crewId: number | null;
+  equipmentId: number | null;
+}
+
+export interface AssignInput {
+  weekStart: string;
+  orders: readonly AskedOrder[];
+  crews: readonly PlanCrewInput[];
+  /** Hours already on each crew-day from kept orders: key `${crewId}|${date}`. */
+  keptHours?: ReadonlyMap<string, number>;
+  /** The crew that last worked each site (keeps sites with the crew that knows them). */
+  siteCrewHint?: ReadonlyMap<number, number>;
+  equipment?: readonly PlanEquipment[];
+  sites: ReadonlyMap<number, LatLng>;
+  yard: LatLng;
+  travel: TravelSettings;
+}
+
+/**
+ * Suggests a crew, a day and equipment for each asked order. Sites go whole to one crew
+ * (the one that knows the site when it has room, else the least loaded by share of its
+ * week), largest sites first. An order falls on the crew's latest working day on or before
+ * its latest date, else the first after (noted); flexible orders then move off days over
+ * the crew's hours onto the lightest day. Deterministic: ties break by id and date.
+ */
+export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warnings: string[] } {
+  const dates = weekDates(input.weekStart);
+  const warnings: string[] = [];
+  const crews = [...input.crews].filter((c) => c.workDays.length > 0).sort((a, b) => a.id - b.id);
+  const bySite = new Map<number, AskedOrder[]>();
+  for (const o of input.orders) {
+    const list = bySite.get(o.siteId) ?? [];
+    list.push(o);
+    bySite.set(o.siteId, list);
+  }
+  const weekHours = (c: PlanCrewInput) => c.hoursPerDay * dates.filter((d) => c.workDays.includes(weekdayOf(d))).length;
+  const load = new Map<number, number>(crews.map((c) => [c.id, 0]));
+  for (const [key, h] of input.keptHours ?? []) {
+    const id = Number(key.split('|')[0]);
+    if (load.has(id)) load.set(id, (load.get(id) as number) + h);
+  }
+  const siteHours = (list: AskedOrder[]) => list.reduce((s, o) => s + o.plannedHours, 0) + input.travel.loadUnloadMin / 60;
+  const sites = [...bySite.entries()].sort((a, b) => siteHours(b[1]) - siteHours(a[1]) || a[0] - b[0]);
+  const crewOfSite = new Map<number, PlanCrewInput | null>();
+  for (const [siteId, list] of sites) {
+    const h = siteHours(list);
+    const hint = input.siteCrewHint?.get(siteId);
+    const hinted = crews.find((c) => c.id === hint);
+    let chosen: PlanCrewInput | null = null;
+    if (hinted && (load.get(hinted.id) as number) + h <= weekHours(hinted) + 1e-9) chosen = hinted;
+    if (!chosen) {
+      let best: PlanCrewInput | null = null;
+      let bestShare = Infinity;
+      for (const c of crews) {
+        const share = ((load.get(c.id) as number) + h) / Math.max(1e-9, weekHours(c));
+        if (share < bestShare - 1e-12) {
+          best = c;
+          bestShare = share;
+        }
+      }
+      chosen = best;
+    }
+    crewOfSite.set(siteId, chosen);
+    if (chosen) load.set(chosen.id, (load.get(chosen.id) as number) + h);
+  }
+  if (crews.length === 0 && input.orders.length > 0) warnings.push('No crew with working days in this district: every order is left unassigned.');
+
+  // Days.
+  const scheduled: ScheduledOrder[] = [];
+  for (const o of input.orders) {
+    const crew = crewOfSite.get(o.siteId) ?? null;
+    let date = o.askedDate;
+    if (crew) {
+      const works = (d: string) => crew.workDays.includes(weekdayOf(d));
+      const latest = o.latestDate ?? o.askedDate;
+      const onOrBefore = dates.filter((d) => d <= latest && d >= o.askedDate && works(d)).pop() ?? dates.filter((d) => d <= latest && works(d)).pop();
+      const after = dates.find((d) => d > latest && works(d));
+      date = onOrBefore ?? after ?? o.askedDate;
+      if (!onOrBefore && after && o.latestDate) warnings.push(`${o.task === 'mow' ? 'Mowing' : 'Work'} on field ${o.fieldId} falls after ${o.latestDate}: no working day of the crew before it.`);
+    }
+    scheduled.push({ ...o, plannedDate: date, crewId: crew?.id ?? null, equipmentId: null });
+  }
+
+  // Move flexible orders off overloaded days.
+  const dayHours = (crewId: number, date: string) => {
+    let h = input.keptHours?.get(`${crewId}|${date}`) ?? 0;
+    const siteIds = new Set<number>();
+    for (const s of scheduled) if (s.crewId === crewId && s.plannedDate === date) {
+      h += s.plannedHours;
+      siteIds.add(s.siteId);
+    }
+    return h + (siteIds.size * input.travel.loadUnloadMin) / 60;
+  };
+  for (const crew of crews) {
+    const workDates = dates.filter((d) => crew.workDays.includes(weekdayOf(d)));
+    for (const date of workDates) {
+      const movable = scheduled.filter((s) => s.crewId === crew.id && s.plannedDate === date && s.flexible).sort((a, b) => b.plannedHours - a.plannedHours || a.fieldId - b.fieldId);
+      for (const s of movable) {
+        if (dayHours(crew.id, date) <= crew.hoursPerDay + 1e-9) break;
+        const target = workDates.filter((d) => d !== date).sort((a, b) => dayHours(crew.id, a) - dayHours(crew.id, b) || (a < b ? -1 : 1))[0];
+        if (target && dayHours(crew.id, target) + s.plannedHours <= crew.hoursPerDay + 1e-9) s.plannedDate = target;
+      }
+    }
+  }
+
+  // Equipment: the crew's own unit of the kind first, then the district pool.
+  for (const s of scheduled) {
+    if (!s.equipmentKind) continue;
+    const hoc = typeof s.details.hocMm === 'number' ? s.details.hocMm : null;
+    const kind = s.details.mowerKind;
+    const candidates = (input.equipment ?? []).filter(
+      (e) => e.kind === s.equipmentKind && (e.kind !== 'mower' || ((kind === undefined || e.mowerKind === kind) && (hoc === null || ((e.hocMinMm ?? 0) <= hoc + 1e-9 && (e.hocMaxMm ?? Infinity) >= hoc - 1e-9)))),
+    );
+    const own = candidates.filter((e) => e.crewId === s.crewId && s.crewId !== null).sort((a, b) => a.id - b.id)[0];
+    const pool = candidates.filter((e) => e.crewId === null).sort((a, b) => a.id - b.id)[0];
+    s.equipmentId = (own ?? pool)?.id ?? null;
+  }
+  scheduled.sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : a.siteId - b.siteId || a.fieldId - b.fieldId || (a.task < b.task ? -1 : a.task > b.task ? 1 : 0)));
+  return { orders: scheduled, warnings: [...new Set(warnings)] };
+}
+
+/** One crew-day as the board shows it. */
+export interface CrewDayLoad {
+  crewId: number;
+  date: string;
+  availableHours: number;
+  workHours: number;
+  driveKm: number;
+  driveHours: number;
+  loadUnloadHours: number;
+  totalHours: number;
+  overloaded: boolean;
+  /** Site ids in route order from the yard. */
+  route: number[];
+  orderIds: number[];
+}
+
+/**
+ * Each crew-day's load: work hours + drive (yard → sites → yard, `planRoute`) + a
+ * load/unload per site, against the crew's hours that day (0 on a day off).
+ */
+export function crewDayLoads(
+  orders: ReadonlyArray<{ id: number; crewId: number | null; plannedDate: string; siteId: number; plannedHours: number; status?: WorkStatus }>,
+  crews: readonly PlanCrewInput[],
+  sites: ReadonlyMap<number, LatLng>,
+  yard: LatLng,
+  travel: TravelSettings,
+  weekStart: string,
+): CrewDayLoad[] {
+  const dates = weekDates(weekStart);
+  const out: CrewDayLoad[] = [];
+  const groups = new Map<string, typeof orders[number][]>();
+  for (const o of orders) {
+    if (o.crewId === null || o.status === 'skipped') continue;
+    const key = `${o.crewId}|${o.plannedDate}`;
+    const list = groups.get(key) ?? [];
+    list.push(o);
+    groups.set(key, list);
+  }
+  for (const crew of [...crews].sort((a, b) => a.id - b.id)) {
+    for (const date of dates) {
+      const list = groups.get(`${crew.id}|${date}`) ?? [];
+      const siteIds = [...new Set(list.map((o) => o.siteId))].sort((a, b) => a - b);
+      const stops = siteIds.flatMap((id) => {
+        const p = sites.get(id);
+        return p ? [{ id, lat: p.lat, lng: p.lng }] : [];
+      });
+      const route = planRoute(yard, stops, { roadFactor: travel.roadFactor, speedKmh: travel.speedKmh });
+      const workHours = list.reduce((s, o) => s + o.plannedHours, 0);
+      const loadUnloadHours = (siteIds.length * travel.loadUnloadMin) / 60;
+      const availableHours = crew.workDays.includes(weekdayOf(date)) ? crew.hoursPerDay : 0;
+      const totalHours = workHours + route.driveHours + loadUnloadHours;
+      const rank = new Map(route.order.map((id, i) => [Number(id), i]));
+      out.push({
+        crewId: crew.id,
+        date,
+        availableHours,
+        workHours: round(workHours),
+        driveKm: round(route.totalKm, 1),
+        driveHours: round(route.driveHours),
+        loadUnloadHours: round(loadUnloadHours),
+        totalHours: round(totalHours),
+        overloaded: list.length > 0 && totalHours > availableHours + 1e-9,
+        route: route.order.map(Number),
+        orderIds: [...list].sort((a, b) => (rank.get(a.siteId) ?? 0) - (rank.get(b.siteId) ?? 0) || a.id - b.id).map((o) => o.id),
+      });
+    }
+  }
+  return out;
+}
+
+// ---------------------------------------------------------------------------------------
+// Re-generation: what stays, what goes, what changes.
+
+/** An order of the week as it stands. */
+export interface ExistingOrder {
+  id: number;
+  fieldId: number;
+  task: WorkTask;
+  plannedDate: string;
+  plannedHours: number;
+  crewId: number | null;
+  equipmentId: number | null;
+  status: WorkStatus;
+  origin: 'generated' | 'manual';
+  pinned: boolean;
+  reason: string;
+}
+
+/** True when re-generating must leave the order as it is. */
+export function isKept(o: Pick<ExistingOrder, 'pinned' | 'origin' | 'status'>): boolean {
+  return o.pinned || o.origin === 'manual' || o.status === 'started' || o.status === 'done' || o.status === 'skipped';
+}
+
+export interface WeekReconciliation<E extends ExistingOrder, P> {
+  insert: P[];
+  update: Array<{ id: number; next: P; what: string[]; before: E }>;
+  remove: E[];
+  kept: E[];
+  unchanged: E[];
+}
+
+/**
+ * Matches a new plan against the week's orders: kept orders stay; the others are matched to
+ * the new plan by field and task in date order — same day, hours and crew: unchanged; else
+ * updated (with what changed); unmatched old ones are removed and new ones inserted.
+ */
+export function reconcileWeek<E extends ExistingOrder, P extends Pick<ScheduledOrder, 'fieldId' | 'task' | 'plannedDate' | 'plannedHours' | 'crewId' | 'equipmentId'>>(existing: readonly E[], plan: readonly P[]): WeekReconciliation<E, P> {
+  const kept = existing.filter(isKept);
+  const open = existing.filter((o) => !isKept(o));
+  const key = (o: { fieldId: number; task: string }) => `${o.fieldId}|${o.task}`;
+  const byKey = new Map<string, E[]>();
+  for (const o of [...open].sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : a.id - b.id))) {
+    const list = byKey.get(key(o)) ?? [];
+    list.push(o);
+    byKey.set(key(o), list);
+  }
+  const out: WeekReconciliation<E, P> = { insert: [], update: [], remove: [], kept, unchanged: [] };
+  const sortedPlan = [...plan].sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : 0));
+  for (const p of sortedPlan) {
+    const list = byKey.get(key(p));
+    const before = list?.shift();
+    if (!before) {
+      out.insert.push(p);
+      continue;
+    }
+    const what: string[] = [];
+    if (before.plannedDate !== p.plannedDate) what.push('date');
+    if (Math.abs(before.plannedHours - p.plannedHours) > 0.005) what.push('hours');
+    if (before.crewId !== p.crewId) what.push('crew');
+    if (before.equipmentId !== p.equipmentId) what.push('equipment');
+    if (what.length) out.update.push({ id: before.id, next: p, what, before });
+    else out.unchanged.push(before);
+  }
+  for (const list of byKey.values()) out.remove.push(...list);
+  out.remove.sort((a, b) => a.id - b.id);
+  return out;
+}
