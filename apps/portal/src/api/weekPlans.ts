@@ -100,47 +100,71 @@ export interface PlanDiff {
   removed: DiffItem[];
   changed: { before: DiffItem; after: DiffItem; what: string[] }[];
   kept: DiffItem[];
-  summary: { added: number; removed: number; changed: number; kept: number };
+  /** `unchanged`: orders the new plan matches as they are (not listed one by one). */
+  summary: { added: number; removed: number; changed: number; kept: number; unchanged?: number };
 }
 
-export interface RecordNumbers {
+export interface GenerateAnswer {
+  dryRun: boolean;
+  diff: PlanDiff;
+  /** What the planner could not do (e.g. a field with no crew able to mow it). */
+  warnings: string[];
+  board: WeekBoard;
+}
+
+/** The counts every records row carries (per field, crew, week and in total). */
+export interface RecordTally {
   plannedHours: number;
   actualHours: number;
-}
-
-export interface FieldRecord extends RecordNumbers {
-  fieldId: number;
-  fieldName: string;
-  siteName: string;
-  ordersDone: number;
-  ordersSkipped: number;
-  mowingsAsked: number;
-  mowingsDone: number;
-  mowingsLate: number;
-}
-
-export interface CrewRecord extends RecordNumbers {
-  crewId: number;
-  crewName: string;
+  /** Planned hours of the orders that are done, to compare like with like. */
+  plannedHoursDone: number;
   ordersDone: number;
   ordersSkipped: number;
   ordersOpen: number;
-}
-
-export interface WeekRecord extends RecordNumbers {
-  weekStart: string;
+  /** Mowings the one-third rule asked for in the range. */
   mowingsAsked: number;
   mowingsDone: number;
+  /** Done after the day they were due by. */
   mowingsLate: number;
+  /** Not done and their day has passed. */
+  mowingsMissed: number;
+}
+
+export interface FieldRecord extends RecordTally {
+  fieldId: number;
+  fieldName: string;
+  siteName: string;
+}
+
+export interface CrewRecord extends RecordTally {
+  crewId: number | null;
+  crewName: string;
+}
+
+export interface WeekRecord extends RecordTally {
+  weekStart: string;
+}
+
+export interface LateMowing {
+  id: number;
+  fieldName: string;
+  siteName: string;
+  dueBy: string;
+  doneOn: string;
+  daysLate: number;
 }
 
 export interface Records {
   from: string;
   to: string;
+  districtId: number | null;
+  /** The day "missed" is counted against. */
+  asOf: string;
   byField: FieldRecord[];
   byCrew: CrewRecord[];
   byWeek: WeekRecord[];
-  totals: RecordNumbers & Partial<Omit<FieldRecord, 'fieldId' | 'fieldName' | 'siteName'> & Omit<CrewRecord, 'crewId' | 'crewName'>>;
+  lateMowings: LateMowing[];
+  totals: RecordTally;
 }
 
 export function fetchWeekBoard(query: { districtId: number; weekStart: string }, signal?: AbortSignal): Promise<WeekBoard> {
@@ -148,8 +172,16 @@ export function fetchWeekBoard(query: { districtId: number; weekStart: string },
 }
 
 /** With `dryRun` nothing is written: the answer shows what generating would change. */
-export function generateWeek(body: { districtId: number; weekStart: string; dryRun: boolean }): Promise<{ diff: PlanDiff; board: WeekBoard }> {
-  return api.post('/week-plans/generate', body);
+export function generateWeek(body: { districtId: number; weekStart: string; dryRun: boolean }): Promise<GenerateAnswer> {
+  return api.post<GenerateAnswer>('/week-plans/generate', body);
+}
+
+/**
+ * Confirms the suggested crews of the week (or of one crew): planned orders with a crew become
+ * assigned and pinned, and each crew lead gets one e-mail.
+ */
+export function confirmWeek(body: { districtId: number; weekStart: string; crewId?: number }): Promise<{ assigned: number; emailed: number; board: WeekBoard }> {
+  return api.post('/week-plans/confirm', body);
 }
 
 export function createWorkOrder(body: CreateWorkOrderInput): Promise<PlanOrder> {
@@ -157,8 +189,8 @@ export function createWorkOrder(body: CreateWorkOrderInput): Promise<PlanOrder> 
 }
 
 /** Sends the version the order was read at; a stale one answers 409. */
-export function updateWorkOrder(id: number, body: UpdateWorkOrderInput): Promise<PlanOrder> {
-  return api.patch<PlanOrder>(`/work-orders/${id}`, body);
+export function updateWorkOrder(id: number, body: UpdateWorkOrderInput): Promise<PlanOrder & { emailed?: number }> {
+  return api.patch<PlanOrder & { emailed?: number }>(`/work-orders/${id}`, body);
 }
 
 export function deleteWorkOrder(id: number, version: number): Promise<void> {

@@ -4,7 +4,7 @@ import { computed, onScopeDispose, reactive, ref, shallowRef, toValue, watch, ty
 import { ability } from '../ability.ts';
 import { ApiError } from '../api/client.ts';
 import { errorMessage } from '../api/messages.ts';
-import { fetchWeekBoard, generateWeek, updateWorkOrder, type PlanDiff, type PlanOrder, type WeekBoard } from '../api/weekPlans.ts';
+import { confirmWeek, fetchWeekBoard, generateWeek, updateWorkOrder, type PlanDiff, type PlanOrder, type WeekBoard } from '../api/weekPlans.ts';
 import { crewDayMap, filterOptions, groupCells, type CellKey } from '../components/week/board.ts';
 import { useSessionStore } from '../stores/session.ts';
 
@@ -89,7 +89,7 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
   async function change(order: PlanOrder, patch: OrderChange): Promise<boolean> {
     const before = data.value?.orders.find((o) => o.id === order.id);
     if (!before || saving.has(order.id)) return false;
-    replaceOrder(order.id, (o) => ({ ...o, ...patch, crewName: patch.crewId === undefined ? o.crewName : crewName(patch.crewId), pinned: true }));
+    replaceOrder(order.id, (o) => ({ ...o, ...patch, crewName: patch.crewId === undefined ? o.crewName : crewName(patch.crewId), pinned: patch.pinned ?? true }));
     saving.add(order.id);
     try {
       const saved = await updateWorkOrder(order.id, { version: before.version, ...patch });
@@ -124,7 +124,9 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
   }
 
   const diff = shallowRef<PlanDiff | null>(null);
-  const generating = ref<'preview' | 'apply' | null>(null);
+  /** What the planner could not do, from the last preview. */
+  const planWarnings = shallowRef<string[]>([]);
+  const generating = ref<'preview' | 'apply' | 'confirm' | null>(null);
 
   async function generate(dryRun: boolean): Promise<PlanDiff | null> {
     const board = data.value;
@@ -132,6 +134,7 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
     generating.value = dryRun ? 'preview' : 'apply';
     try {
       const answer = await generateWeek({ districtId: board.districtId, weekStart: board.weekStart, dryRun });
+      planWarnings.value = answer.warnings ?? [];
       if (dryRun) diff.value = answer.diff;
       else {
         data.value = answer.board;
@@ -147,6 +150,27 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
     }
   }
 
+  /** Confirms the suggested crews of the week; answers how many orders and e-mails that made. */
+  async function confirm(): Promise<{ assigned: number; emailed: number } | null> {
+    const board = data.value;
+    if (!board) return null;
+    generating.value = 'confirm';
+    try {
+      const answer = await confirmWeek({ districtId: board.districtId, weekStart: board.weekStart });
+      data.value = answer.board;
+      return { assigned: answer.assigned, emailed: answer.emailed };
+    } catch (cause) {
+      if (cause instanceof ApiError && cause.status === 401) session.expire();
+      ElMessage.error(errorMessage(cause));
+      return null;
+    } finally {
+      generating.value = null;
+    }
+  }
+
+  /** Orders with a suggested crew that nobody confirmed yet. */
+  const unconfirmed = computed(() => (data.value?.orders ?? []).filter((o) => o.status === 'planned' && o.crewId !== null).length);
+
   return {
     data,
     loading,
@@ -161,7 +185,10 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
     move,
     change,
     diff,
+    planWarnings,
     generating,
+    confirm,
+    unconfirmed,
     preview: () => generate(true),
     apply: () => generate(false),
   };

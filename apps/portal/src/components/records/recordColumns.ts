@@ -4,9 +4,9 @@ import { weekLabel } from '../week/board.ts';
 
 const round1 = (h: number) => Math.round(h * 10) / 10;
 const hours = (h: number) => round1(h).toFixed(1);
-/** Actual against planned, in percent; blank when nothing was planned. */
-export function actualShare(r: { plannedHours: number; actualHours: number }): number | null {
-  return r.plannedHours > 0 ? Math.round((r.actualHours / r.plannedHours) * 100) : null;
+/** Actual hours against the planned hours of the same, done orders, in percent; blank when nothing is done. */
+export function actualShare(r: { plannedHoursDone: number; actualHours: number }): number | null {
+  return r.plannedHoursDone > 0 ? Math.round((r.actualHours / r.plannedHoursDone) * 100) : null;
 }
 /** Mowings done against asked, in percent; blank when none were asked. */
 export function mowingShare(r: { mowingsAsked: number; mowingsDone: number }): number | null {
@@ -15,7 +15,7 @@ export function mowingShare(r: { mowingsAsked: number; mowingsDone: number }): n
 const pct = (v: number | null) => (v === null ? '—' : `${v} %`);
 const right = { align: 'right' as const };
 
-function hourColumns<T extends { plannedHours: number; actualHours: number }>(col: ReturnType<typeof columnHelper<T>>) {
+function hourColumns<T extends { plannedHours: number; actualHours: number; plannedHoursDone: number }>(col: ReturnType<typeof columnHelper<T>>) {
   return [
     col.accessor((r) => r.plannedHours, { id: 'planned', header: 'Planned h', enableGlobalFilter: false, meta: { ...right, exportValue: round1 }, cell: (c) => hours(c.getValue()) }),
     col.accessor((r) => r.actualHours, { id: 'actual', header: 'Actual h', enableGlobalFilter: false, meta: { ...right, exportValue: round1 }, cell: (c) => hours(c.getValue()) }),
@@ -23,17 +23,18 @@ function hourColumns<T extends { plannedHours: number; actualHours: number }>(co
       id: 'share',
       header: 'Actual %',
       enableGlobalFilter: false,
-      meta: { ...right, exportHeader: 'Actual / planned (%)', exportValue: (v: number | null) => v },
+      meta: { ...right, exportHeader: 'Actual / planned of done orders (%)', exportValue: (v: number | null) => v },
       cell: (c) => pct(c.getValue()),
     }),
   ];
 }
 
-function mowingColumns<T extends { mowingsAsked: number; mowingsDone: number; mowingsLate: number }>(col: ReturnType<typeof columnHelper<T>>) {
+function mowingColumns<T extends { mowingsAsked: number; mowingsDone: number; mowingsLate: number; mowingsMissed: number }>(col: ReturnType<typeof columnHelper<T>>) {
   return [
     col.accessor((r) => r.mowingsAsked, { id: 'mowingsAsked', header: 'Mowings asked', enableGlobalFilter: false, meta: right }),
     col.accessor((r) => r.mowingsDone, { id: 'mowingsDone', header: 'Mowed', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Mowings done' } }),
     col.accessor((r) => r.mowingsLate, { id: 'mowingsLate', header: 'Late', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Mowings late' } }),
+    col.accessor((r) => r.mowingsMissed, { id: 'mowingsMissed', header: 'Missed', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Mowings missed' } }),
     col.accessor((r) => mowingShare(r), {
       id: 'mowingShare',
       header: 'Mowed %',

@@ -27,7 +27,7 @@ describe('PlanDiffDialog', () => {
   test('should sum up the diff and open on the first kind of change there is', async () => {
     const w = mountDialog(
       diffOf({
-        changed: [{ before: diffItem({ plannedDate: DATES[0]! }), after: diffItem({ plannedDate: DATES[2]!, crewName: 'North B', crewId: 12, reason: 'Moved after the rain' }), what: ['plannedDate', 'crewId'] }],
+        changed: [{ before: diffItem({ plannedDate: DATES[0]! }), after: diffItem({ plannedDate: DATES[2]!, crewName: 'North B', crewId: 12, reason: 'Moved after the rain' }), what: ['date', 'crew'] }],
         kept: [diffItem(), diffItem({ fieldName: 'Lawn' })],
       }),
     );
