@@ -17,6 +17,31 @@ export interface WeekKey {
 
 export type OrderChange = Partial<Pick<PlanOrder, 'crewId' | 'plannedDate' | 'plannedHours' | 'pinned' | 'notes'>>;
 
+function sameJson(a: unknown, b: unknown): boolean {
+  return JSON.stringify(a) === JSON.stringify(b);
+}
+
+/**
+ * The reloaded board with the previous objects of every order and crew-day that did not
+ * change, so after a write only the cells it touched render again.
+ */
+export function keepUnchanged(prev: WeekBoard | null, next: WeekBoard): WeekBoard {
+  if (!prev || prev.districtId !== next.districtId || prev.weekStart !== next.weekStart) return next;
+  const orders = new Map(prev.orders.map((o) => [o.id, o]));
+  const days = new Map(prev.crewDays.map((d) => [`${d.crewId}|${d.date}`, d]));
+  return {
+    ...next,
+    orders: next.orders.map((o) => {
+      const old = orders.get(o.id);
+      return old && sameJson(old, o) ? old : o;
+    }),
+    crewDays: next.crewDays.map((d) => {
+      const old = days.get(`${d.crewId}|${d.date}`);
+      return old && sameJson(old, d) ? old : d;
+    }),
+  };
+}
+
 /**
  * The week board of one district: loads it, groups its orders into crew-day cells once per
  * change, moves and edits orders with the version they were read at (a 409 reloads), and
@@ -45,7 +70,8 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
     if (!quiet) loading.value = true;
     error.value = null;
     try {
-      data.value = await fetchWeekBoard({ districtId, weekStart }, mine.signal);
+      const next = await fetchWeekBoard({ districtId, weekStart }, mine.signal);
+      data.value = quiet ? keepUnchanged(data.value, next) : next;
     } catch (cause) {
       if (mine.signal.aborted) return;
       if (cause instanceof ApiError && cause.status === 401) session.expire();
