@@ -1,3 +1,4 @@
+import { h } from 'vue';
 import type { CrewRecord, FieldRecord, WeekRecord } from '../../api/weekPlans.ts';
 import { columnHelper } from '../data-table/features.ts';
 import { weekLabel } from '../week/board.ts';
@@ -12,6 +13,8 @@ export function actualShare(r: { plannedHoursDone: number; actualHours: number }
 export function mowingShare(r: { mowingsAsked: number; mowingsDone: number }): number | null {
   return r.mowingsAsked > 0 ? Math.round((r.mowingsDone / r.mowingsAsked) * 100) : null;
 }
+/** Names stay on one line: a wrapped site name makes every row three lines tall. */
+const oneLine = (text: string) => h('span', { style: { whiteSpace: 'nowrap' } }, text);
 const pct = (v: number | null) => (v === null ? '—' : `${v} %`);
 const right = { align: 'right' as const };
 
@@ -31,7 +34,7 @@ function hourColumns<T extends { plannedHours: number; actualHours: number; plan
 
 function mowingColumns<T extends { mowingsAsked: number; mowingsDone: number; mowingsLate: number; mowingsMissed: number }>(col: ReturnType<typeof columnHelper<T>>) {
   return [
-    col.accessor((r) => r.mowingsAsked, { id: 'mowingsAsked', header: 'Mowings asked', enableGlobalFilter: false, meta: right }),
+    col.accessor((r) => r.mowingsAsked, { id: 'mowingsAsked', header: 'Mow asked', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Mowings asked' } }),
     col.accessor((r) => r.mowingsDone, { id: 'mowingsDone', header: 'Mowed', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Mowings done' } }),
     col.accessor((r) => r.mowingsLate, { id: 'mowingsLate', header: 'Late', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Mowings late' } }),
     col.accessor((r) => r.mowingsMissed, { id: 'mowingsMissed', header: 'Missed', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Mowings missed' } }),
@@ -48,11 +51,10 @@ function mowingColumns<T extends { mowingsAsked: number; mowingsDone: number; mo
 export function fieldRecordColumns() {
   const col = columnHelper<FieldRecord>();
   return [
-    col.accessor('fieldName', { header: 'Field' }),
-    col.accessor('siteName', { header: 'Site', filterFn: 'equals' }),
+    col.accessor('fieldName', { header: 'Field', cell: (c) => oneLine(c.getValue()) }),
+    col.accessor('siteName', { header: 'Site', filterFn: 'equals', cell: (c) => oneLine(c.getValue()) }),
+    // Orders done and skipped are in the crew table and the totals; here the row would not fit.
     ...hourColumns(col),
-    col.accessor('ordersDone', { header: 'Done', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Orders done' } }),
-    col.accessor('ordersSkipped', { header: 'Skipped', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Orders skipped' } }),
     ...mowingColumns(col),
   ];
 }
@@ -60,7 +62,7 @@ export function fieldRecordColumns() {
 export function crewRecordColumns() {
   const col = columnHelper<CrewRecord>();
   return [
-    col.accessor('crewName', { header: 'Crew' }),
+    col.accessor('crewName', { header: 'Crew', cell: (c) => oneLine(c.getValue()) }),
     ...hourColumns(col),
     col.accessor('ordersDone', { header: 'Orders done', enableGlobalFilter: false, meta: right }),
     col.accessor('ordersSkipped', { header: 'Skipped', enableGlobalFilter: false, meta: right }),
