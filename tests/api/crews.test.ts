@@ -50,6 +50,12 @@ describe('crews', () => {
     expect(res.body.error.details.issues.map((i: { path: string }) => i.path).sort()).toEqual(['body.hoursPerDay', 'body.name']);
   });
 
+  test('should list a crew with its lead’s name and working days', async () => {
+    const foreman = await api.signIn('foreman');
+    const res = await foreman.get('/api/crews');
+    expect(res.body.items.find((c: { id: number }) => c.id === api.fixture.crews.north)).toMatchObject({ leadName: 'Test crew', workDays: ['mon', 'tue', 'wed', 'thu', 'fri'] });
+  });
+
   test('should not delete a crew that still has its lead', async () => {
     const admin = await api.signIn('admin');
     const res = await admin.delete(`/api/crews/${api.fixture.crews.north}?version=1`);

@@ -61,4 +61,26 @@ describe('demo city seed', () => {
     const districtNames = new Set(res.body.items.map((f: { districtName: string }) => f.districtName));
     expect([...districtNames]).toEqual(['North Ridge']);
   });
+
+  test('should book games around the seeding date that each role sees in its own scope', async () => {
+    expect(firstSeed!.fieldEvents).toBeGreaterThan(200);
+    const coming = async (role: keyof typeof DEMO_SIGN_INS) => {
+      const agent = supertest.agent(app);
+      const me = await agent.post('/api/auth/sign-in').send(DEMO_SIGN_INS[role]);
+      const res = await agent.get('/api/field-events');
+      expect(res.status).toBe(200);
+      return Object.assign(res.body.items as { siteId: number; districtId: number; kind: string }[], { siteIds: me.body.user.siteIds as number[] });
+    };
+    const all = await coming('head');
+    expect(all.filter((e) => e.kind === 'game').length).toBeGreaterThanOrEqual(4);
+    const north = (await database.db.select().from(districts)).find((d) => d.code === 'north')!;
+    const foreman = await coming('foreman');
+    expect(foreman.length).toBeGreaterThan(0);
+    expect(foreman.every((e) => e.districtId === north.id)).toBe(true);
+    expect(foreman.length).toBeLessThan(all.length);
+    const partner = await coming('partner');
+    expect(partner.length).toBeGreaterThan(0);
+    expect(partner.every((e) => partner.siteIds.includes(e.siteId))).toBe(true);
+    expect(all.some((e) => !partner.siteIds.includes(e.siteId))).toBe(true);
+  });
 });

@@ -20,6 +20,7 @@ import { authRouter } from './routes/auth.ts';
 import { crewsRouter } from './routes/crews.ts';
 import { devRouter } from './routes/dev.ts';
 import { directoryRouter } from './routes/directory.ts';
+import { fieldEventsRouter } from './routes/field-events.ts';
 import { fieldsRouter } from './routes/fields.ts';
 import { importsRouter } from './routes/imports.ts';
 import { mapRouter } from './routes/map.ts';
@@ -113,6 +114,7 @@ export function createApp(
   app.use('/api/records', recordsRouter(full));
   app.use('/api/sites', sitesRouter(full));
   app.use('/api/fields', fieldsRouter(full));
+  app.use('/api/field-events', fieldEventsRouter(full));
   app.use('/api/standards', standardsRouter(full));
   app.use('/api/imports', importsRouter(full));
   app.use('/api/map', mapRouter(full));

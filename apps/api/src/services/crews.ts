@@ -22,6 +22,7 @@ export async function listCrews(ctx: Ctx, filter: { districtId?: number | undefi
       members: crews.members,
       workDays: crews.workDays,
       leadUserId: sql<number | null>`(select min(${users.id}) from ${users} where ${users.crewId} = ${crews.id} and ${users.role} = 'crew')`,
+      leadName: sql<string | null>`(select ${users.name} from ${users} where ${users.crewId} = ${crews.id} and ${users.role} = 'crew' order by ${users.id} limit 1)`,
       version: crews.version,
     })
     .from(crews)

@@ -1,5 +1,8 @@
 import type {
   Clippings,
+  EquipmentKind,
+  FieldEventKind,
+  Weekday,
   ImportKind,
   ImportRow,
   ImportStatus,
@@ -100,8 +103,91 @@ export interface CrewRow {
   name: string;
   hoursPerDay: number;
   members: string[];
+  workDays: Weekday[];
   leadUserId: number | null;
+  leadName: string | null;
   version: number;
+}
+
+export interface EquipmentRow {
+  id: number;
+  districtId: number;
+  districtName: string;
+  crewId: number | null;
+  crewName: string | null;
+  kind: EquipmentKind;
+  name: string;
+  cuttingWidthM: number | null;
+  speedKmh: number | null;
+  fieldEfficiency: number | null;
+  hocMinMm: number | null;
+  hocMaxMm: number | null;
+  hourMeterH: number;
+  sharpenIntervalH: number | null;
+  lastSharpenedAtH: number | null;
+  hoursSinceSharpening: number | null;
+  sharpeningDue: boolean;
+  notes: string;
+  active: boolean;
+  version: number;
+  updatedAt: string;
+}
+
+export interface FieldEventRow {
+  id: number;
+  fieldId: number;
+  fieldName: string;
+  siteId: number;
+  siteName: string;
+  districtId: number;
+  kind: FieldEventKind;
+  title: string;
+  startsOn: string;
+  startTime: string | null;
+  notes: string;
+  createdBy: number | null;
+  version: number;
+  updatedAt: string;
+}
+
+export interface WeatherStationRow {
+  id: number;
+  code: string;
+  name: string;
+  lat: number;
+  lng: number;
+  elevationM: number;
+  dayCount: number;
+  forecastDays: number;
+  firstDate: string | null;
+  lastDate: string | null;
+}
+
+export interface WeatherDayRow {
+  stationId: number;
+  date: string;
+  kind: 'observed' | 'forecast';
+  tmaxC: number;
+  tminC: number;
+  rhMaxPct: number | null;
+  rhMinPct: number | null;
+  windMs: number | null;
+  sunshineH: number | null;
+  solarMJ: number | null;
+  rainMm: number;
+  source: string;
+}
+
+export interface StationCsvRow {
+  line: number;
+  data: Omit<WeatherDayRow, 'stationId' | 'source'> | null;
+  errors: { column: string; message: string }[];
+}
+
+export interface StationCsvAnswer {
+  committed: boolean;
+  rows: StationCsvRow[];
+  summary: { rows: number; valid: number; invalid: number };
 }
 
 export interface AuditEntry {

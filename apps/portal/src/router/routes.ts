@@ -97,6 +97,24 @@ export const routes: RouteRecordRaw[] = [
         meta: { can: ['read', 'Field'], title: 'Field' },
       },
       {
+        path: 'crews',
+        name: 'crews',
+        component: () => import('../views/CrewsView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Crew'], title: 'Crews' },
+      },
+      {
+        path: 'equipment',
+        name: 'equipment',
+        component: () => import('../views/EquipmentView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Equipment'], title: 'Equipment' },
+      },
+      {
+        path: 'weather',
+        name: 'weather',
+        component: () => import('../views/WeatherView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Weather'], title: 'Weather' },
+      },
+      {
         path: 'standards',
         name: 'standards',
         component: () => import('../views/StandardsView.vue'),

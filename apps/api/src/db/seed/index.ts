@@ -5,10 +5,11 @@
 import { eq } from 'drizzle-orm';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, addDaysIso, hocFor, hoursPerMowingPolygon, mowerTypeFor, surfaceScore, type Level } from '@swardwise/domain';
 import type { Db } from '../client.ts';
-import { crews, districts, fieldChecks, fields, settings, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../schema/index.ts';
+import { crews, districts, fieldChecks, fieldEvents, fields, settings, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../schema/index.ts';
 import { outlineFacts } from '../../services/fields.ts';
 import { hashPassword } from '../../services/users.ts';
 import { buildDemoCity } from './demo-city.ts';
+import { demoFieldEvents } from './demo-events.ts';
 import { demoFieldHistory } from './demo-history.ts';
 
 const MARKER = 'demo_city';
@@ -22,6 +23,7 @@ export interface SeedSummary {
   weatherDays: number;
   fieldChecks: number;
   workOrders: number;
+  fieldEvents: number;
 }
 
 /** Returns what was inserted, or null when the demo city (or any data) is already there. */
@@ -199,6 +201,22 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
     });
     if (orders.length) await tx.insert(workOrders).values(orders);
 
+    // Invented games, tournaments and practices across the season and around today.
+    const bookings = demoFieldEvents(city, today).map((e) => {
+      const f = city.fields[e.fieldIndex]!;
+      return {
+        fieldId: fieldRows[e.fieldIndex]!.id,
+        siteId: siteIds.get(f.siteKey)!,
+        districtId: districtIds.get(siteOf.get(f.siteKey)!.districtCode)!,
+        kind: e.kind,
+        title: e.title,
+        startsOn: e.startsOn,
+        startTime: e.startTime,
+        notes: e.notes,
+      };
+    });
+    for (let i = 0; i < bookings.length; i += 500) await tx.insert(fieldEvents).values(bookings.slice(i, i + 500));
+
     const summary: SeedSummary = {
       districts: city.districts.length,
       sites: city.sites.length,
@@ -208,6 +226,7 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
       weatherDays: days.length,
       fieldChecks: checks.length,
       workOrders: orders.length,
+      fieldEvents: bookings.length,
     };
     await tx.insert(settings).values({ key: MARKER, value: { seededAt: new Date().toISOString(), note: city.city.note, ...summary } });
     return summary;

@@ -1,7 +1,7 @@
 import type { Action, AppAbility, Role, SubjectName } from '@swardwise/domain';
 
 export interface NavItem {
-  key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields' | 'standards' | 'map' | 'imports'
+  key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields' | 'standards' | 'map' | 'imports' | 'crews' | 'equipment' | 'weather'
     | 'week' | 'records';
   label: string;
   to: string;
@@ -21,6 +21,9 @@ export const NAV_ITEMS: NavItem[] = [
   { key: 'sites', label: 'Sites', to: '/sites', roles: ['admin', 'head', 'foreman'], can: ['read', 'Site'] },
   { key: 'fields', label: 'Fields', to: '/fields', roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'] },
   { key: 'map', label: 'Map', to: '/map', roles: ['admin', 'head', 'foreman', 'crew', 'partner'], can: ['read', 'Field'] },
+  { key: 'crews', label: 'Crews', to: '/crews', roles: ['admin', 'head', 'foreman'], can: ['read', 'Crew'] },
+  { key: 'equipment', label: 'Equipment', to: '/equipment', roles: ['admin', 'head', 'foreman'], can: ['read', 'Equipment'] },
+  { key: 'weather', label: 'Weather', to: '/weather', roles: ['admin', 'head', 'foreman'], can: ['read', 'Weather'] },
   { key: 'standards', label: 'Standards', to: '/standards', roles: ['admin', 'head'], can: ['read', 'Standards'] },
   { key: 'week', label: 'Week plan', to: '/week', roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'] },
   { key: 'records', label: 'Records', to: '/records', roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'] },

@@ -1,0 +1,55 @@
+/** Games, tournaments and other bookings of the fields. */
+import { Router } from 'express';
+import { z } from 'zod';
+import { addDaysIso, createFieldEventSchema, idParamSchema, idSchema, updateFieldEventSchema, versionSchema } from '@swardwise/domain';
+import type { AppDeps } from '../app.ts';
+import { ctxOf } from '../http/auth.ts';
+import { parse } from '../http/validate.ts';
+import { createFieldEvent, deleteFieldEvent, listFieldEvents, updateFieldEvent } from '../services/field-events.ts';
+
+const isoDate = z.iso.date('use a date as YYYY-MM-DD');
+const today = () => new Date().toISOString().slice(0, 10);
+/** Without dates: the coming three months, what a season's bookings list needs at a glance. */
+const DEFAULT_DAYS = 92;
+const MAX_DAYS = 400;
+
+const listQuery = z
+  .object({
+    from: isoDate.optional(),
+    to: isoDate.optional(),
+    fieldId: idSchema.optional(),
+    siteId: idSchema.optional(),
+    districtId: idSchema.optional(),
+  })
+  .transform((q) => {
+    const from = q.from ?? (q.to ? addDaysIso(q.to, -DEFAULT_DAYS) : today());
+    return { ...q, from, to: q.to ?? addDaysIso(from, DEFAULT_DAYS) };
+  })
+  .refine((q) => q.from <= q.to, { path: ['to'], message: 'the end date is before the start date' })
+  .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / 86_400_000 <= MAX_DAYS, { path: ['to'], message: `ask for at most ${MAX_DAYS} days at a time` });
+const versionQuery = z.object({ version: z.coerce.number().pipe(versionSchema) });
+
+export function fieldEventsRouter({ db }: AppDeps): Router {
+  const router = Router();
+
+  router.get('/', async (req, res) => {
+    res.json({ items: await listFieldEvents(ctxOf(db, req), parse(listQuery, req.query, 'query')) });
+  });
+  router.post('/', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    res.status(201).json({ event: await createFieldEvent(ctx, parse(createFieldEventSchema, req.body, 'body')) });
+  });
+  router.patch('/:id', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    const { id } = parse(idParamSchema, req.params, 'params');
+    res.json({ event: await updateFieldEvent(ctx, id, parse(updateFieldEventSchema, req.body, 'body')) });
+  });
+  router.delete('/:id', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    const { id } = parse(idParamSchema, req.params, 'params');
+    await deleteFieldEvent(ctx, id, parse(versionQuery, req.query, 'query').version);
+    res.status(204).end();
+  });
+
+  return router;
+}

@@ -1,0 +1,134 @@
+/**
+ * Bookings of a field (games, tournaments, practices…): who plays when, so lines are painted
+ * and mowing is timed before them. Each row carries its field's site and district for scope.
+ */
+import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
+import { AppError, type Actor, type CreateFieldEventInput, type UpdateFieldEventInput } from '@swardwise/domain';
+import type { Db } from '../db/client.ts';
+import { fieldEvents, fields, sites } from '../db/schema/index.ts';
+import { writeAudit } from './audit.ts';
+import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+
+export interface FieldEventFilter {
+  from: string;
+  to: string;
+  fieldId?: number | undefined;
+  siteId?: number | undefined;
+  districtId?: number | undefined;
+}
+
+const columns = {
+  id: fieldEvents.id,
+  fieldId: fieldEvents.fieldId,
+  fieldName: fields.name,
+  siteId: fieldEvents.siteId,
+  siteName: sites.name,
+  districtId: fieldEvents.districtId,
+  kind: fieldEvents.kind,
+  title: fieldEvents.title,
+  startsOn: fieldEvents.startsOn,
+  startTime: fieldEvents.startTime,
+  notes: fieldEvents.notes,
+  createdBy: fieldEvents.createdBy,
+  version: fieldEvents.version,
+  updatedAt: fieldEvents.updatedAt,
+};
+
+function select(db: Ctx['db']) {
+  return db.select(columns).from(fieldEvents).innerJoin(fields, eq(fields.id, fieldEvents.fieldId)).innerJoin(sites, eq(sites.id, fieldEvents.siteId));
+}
+
+async function getRow(db: Ctx['db'], id: number) {
+  const [row] = await select(db).where(eq(fieldEvents.id, id));
+  return row;
+}
+
+/** The same rule as the FieldEvent ability, in SQL: undefined means every booking. */
+function eventScope(actor: Actor): SQL | undefined {
+  switch (actor.role) {
+    case 'admin':
+    case 'head':
+      return undefined;
+    case 'foreman':
+    case 'crew':
+      return eq(fieldEvents.districtId, actor.districtId ?? -1);
+    case 'partner':
+      return actor.siteIds.length ? inArray(fieldEvents.siteId, actor.siteIds) : sql`false`;
+  }
+}
+
+export async function listFieldEvents(ctx: Ctx, filter: FieldEventFilter) {
+  authorize(ctx, 'read', 'FieldEvent');
+  const conditions: (SQL | undefined)[] = [eventScope(ctx.actor), gte(fieldEvents.startsOn, filter.from), lte(fieldEvents.startsOn, filter.to)];
+  if (filter.fieldId) conditions.push(eq(fieldEvents.fieldId, filter.fieldId));
+  if (filter.siteId) conditions.push(eq(fieldEvents.siteId, filter.siteId));
+  if (filter.districtId) conditions.push(eq(fieldEvents.districtId, filter.districtId));
+  const rows = await select(ctx.db)
+    .where(and(...conditions))
+    .orderBy(asc(fieldEvents.startsOn), sql`${fieldEvents.startTime} asc nulls first`, asc(sites.name), asc(fields.name));
+  return rows.filter((row) => can(ctx, 'read', 'FieldEvent', row));
+}
+
+/** The field a booking is on, with the site and district the booking copies. */
+async function fieldOf(db: Ctx['db'], fieldId: number) {
+  const [field] = await db
+    .select({ id: fields.id, siteId: fields.siteId, districtId: sites.districtId })
+    .from(fields)
+    .innerJoin(sites, eq(sites.id, fields.siteId))
+    .where(eq(fields.id, fieldId));
+  if (!field) throw new AppError('invalid', 'request/invalid', 'No such field', { issues: [{ path: 'body.fieldId', message: 'no such field' }] });
+  return field;
+}
+
+export async function createFieldEvent(ctx: Ctx, input: CreateFieldEventInput) {
+  return (ctx.db as Db).transaction(async (tx) => {
+    const field = await fieldOf(tx, input.fieldId);
+    authorize(ctx, 'create', 'FieldEvent', { siteId: field.siteId, districtId: field.districtId });
+    const [created] = await tx
+      .insert(fieldEvents)
+      .values({ ...input, siteId: field.siteId, districtId: field.districtId, createdBy: ctx.actor.id })
+      .returning({ id: fieldEvents.id });
+    const row = (await getRow(tx, created!.id))!;
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_event', entityId: row.id, districtId: row.districtId, before: null, after: row });
+    return row;
+  });
+}
+
+export async function updateFieldEvent(ctx: Ctx, id: number, input: UpdateFieldEventInput) {
+  return (ctx.db as Db).transaction(async (tx) => {
+    const before = await getRow(tx, id);
+    if (!before) throw notFound('field_event', id);
+    authorize(ctx, 'update', 'FieldEvent', before);
+    const { version, ...changes } = input;
+    let moved: { siteId: number; districtId: number } | undefined;
+    if (changes.fieldId !== undefined && changes.fieldId !== before.fieldId) {
+      // Moving a booking to another field is booking that field: the caller must be allowed there too.
+      const field = await fieldOf(tx, changes.fieldId);
+      authorize(ctx, 'create', 'FieldEvent', { siteId: field.siteId, districtId: field.districtId });
+      moved = { siteId: field.siteId, districtId: field.districtId };
+    }
+    const [updated] = await tx
+      .update(fieldEvents)
+      .set({ ...changes, ...moved, version: sql`${fieldEvents.version} + 1`, updatedAt: new Date() })
+      .where(and(eq(fieldEvents.id, id), eq(fieldEvents.version, version)))
+      .returning({ id: fieldEvents.id });
+    if (!updated) throw versionConflict('field_event');
+    const after = (await getRow(tx, id))!;
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'field_event', entityId: id, districtId: after.districtId, before, after });
+    return after;
+  });
+}
+
+export async function deleteFieldEvent(ctx: Ctx, id: number, version: number) {
+  return (ctx.db as Db).transaction(async (tx) => {
+    const before = await getRow(tx, id);
+    if (!before) throw notFound('field_event', id);
+    authorize(ctx, 'delete', 'FieldEvent', before);
+    const [deleted] = await tx
+      .delete(fieldEvents)
+      .where(and(eq(fieldEvents.id, id), eq(fieldEvents.version, version)))
+      .returning({ id: fieldEvents.id });
+    if (!deleted) throw versionConflict('field_event');
+    await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'field_event', entityId: id, districtId: before.districtId, before, after: null });
+  });
+}

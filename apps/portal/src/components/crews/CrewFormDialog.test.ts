@@ -1,0 +1,129 @@
+import { abilitiesPlugin } from '@casl/vue';
+import { defineAbilityFor, type Actor, type Polygon } from '@swardwise/domain';
+import { flushPromises, mount } from '@vue/test-utils';
+import ElementPlus from 'element-plus';
+import { createPinia } from 'pinia';
+import { afterEach, describe, expect, test, vi } from 'vitest';
+import type { CrewRow, DistrictRow } from '../../api/types.ts';
+import CrewFormDialog from './CrewFormDialog.vue';
+import { workDaysText } from './crewForm.ts';
+
+const boundary: Polygon = { type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 0]]] };
+const district = (id: number, name: string): DistrictRow => ({ id, code: name.toLowerCase(), name, boundary, yard: { name: 'Yard', lat: 0, lng: 0 }, siteCount: 0, fieldCount: 0, fieldAreaM2: 0 });
+const DISTRICTS = [district(1, 'North'), district(2, 'South')];
+const foreman: Actor = { id: 3, role: 'foreman', districtId: 1, crewId: null, siteIds: [] };
+const CREW: CrewRow = { id: 5, districtId: 1, districtName: 'North', name: 'North Crew A', hoursPerDay: 8, members: ['R. Alder'], workDays: ['mon', 'tue', 'wed', 'thu', 'fri'], leadUserId: null, leadName: null, version: 3 };
+
+function mountForm(actor: Actor, crew: CrewRow | null = null) {
+  return mount(CrewFormDialog, {
+    props: { open: true, crew, districts: DISTRICTS },
+    global: { plugins: [ElementPlus, createPinia(), [abilitiesPlugin, defineAbilityFor(actor)]] },
+    attachTo: document.body,
+  });
+}
+
+const $ = (sel: string) => document.body.querySelector(sel);
+const errorsShown = () => [...document.body.querySelectorAll('.el-form-item__error')].map((e) => e.textContent?.trim());
+async function type(sel: string, value: string) {
+  const input = $(`${sel} input, input${sel}`) as HTMLInputElement;
+  input.value = value;
+  input.dispatchEvent(new Event('input'));
+  input.dispatchEvent(new Event('change'));
+  input.dispatchEvent(new FocusEvent('blur'));
+  await flushPromises();
+}
+async function toggleDay(day: string) {
+  ($(`[data-test="crew-day-${day}"] input`) as HTMLInputElement).click();
+  await flushPromises();
+}
+const submit = async () => {
+  ($('[data-test="crew-submit"]') as HTMLButtonElement).click();
+  await flushPromises();
+  await new Promise((r) => setTimeout(r, 0));
+  await flushPromises();
+};
+const okResponse = (crew: object) => new Response(JSON.stringify({ crew }), { status: 201, headers: { 'Content-Type': 'application/json' } });
+
+afterEach(() => {
+  vi.unstubAllGlobals();
+  document.body.innerHTML = '';
+});
+
+describe('CrewFormDialog', () => {
+  test('should show the schema’s messages for a short name, no hours and no working day, and send nothing', async () => {
+    const fetch = vi.fn();
+    vi.stubGlobal('fetch', fetch);
+    const w = mountForm(foreman);
+    await flushPromises();
+    await type('[data-test="crew-name"]', 'A');
+    await type('[data-test="crew-hours"]', '');
+    for (const d of ['mon', 'tue', 'wed', 'thu', 'fri']) await toggleDay(d);
+    await submit();
+    await vi.waitFor(() => {
+      const shown = errorsShown();
+      expect(shown).toContain('enter a crew name');
+      expect(shown).toContain('hours per day is required');
+      expect(shown).toContain('a crew works at least one day a week');
+      expect(shown).toHaveLength(3);
+    });
+    expect(fetch).not.toHaveBeenCalled();
+    w.unmount();
+  });
+
+  test('should refuse a shift longer than 16 hours', async () => {
+    vi.stubGlobal('fetch', vi.fn());
+    const w = mountForm(foreman);
+    await flushPromises();
+    await type('[data-test="crew-name"]', 'North Crew C');
+    await type('[data-test="crew-hours"]', '18');
+    await submit();
+    await vi.waitFor(() => expect(errorsShown()).toEqual(['more than 16 hours a day is not a shift']));
+    w.unmount();
+  });
+
+  test('should send a foreman’s new crew in his district with its days and members', async () => {
+    const fetch = vi.fn(async (_url: string, init: RequestInit) => okResponse({ ...CREW, ...JSON.parse(String(init.body)), id: 9 }));
+    vi.stubGlobal('fetch', fetch);
+    const w = mountForm(foreman);
+    await flushPromises();
+    await type('[data-test="crew-name"]', 'North Crew C');
+    await type('[data-test="crew-hours"]', '9.5');
+    await toggleDay('fri');
+    await toggleDay('sat');
+    const tagInput = $('[data-test="crew-members"] input, input[data-test="crew-members"]') as HTMLInputElement;
+    for (const name of ['P. Sedge', 'Q. Rush']) {
+      tagInput.value = name;
+      tagInput.dispatchEvent(new Event('input'));
+      tagInput.dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', code: 'Enter' }));
+      await flushPromises();
+    }
+    await submit();
+    await vi.waitFor(() => expect(fetch).toHaveBeenCalledTimes(1));
+    const [url, init] = fetch.mock.calls[0]!;
+    expect(url).toBe('/api/crews');
+    expect(JSON.parse(String(init.body))).toEqual({ districtId: 1, name: 'North Crew C', hoursPerDay: 9.5, workDays: ['mon', 'tue', 'wed', 'thu', 'sat'], members: ['P. Sedge', 'Q. Rush'] });
+    expect(w.emitted('saved')).toHaveLength(1);
+    w.unmount();
+  });
+
+  test('should send the version it read and say so on a 409', async () => {
+    const fetch = vi.fn(async () => new Response(JSON.stringify({ error: { code: 'crew/version_conflict', message: 'conflict' } }), { status: 409 }));
+    vi.stubGlobal('fetch', fetch);
+    const w = mountForm(foreman, CREW);
+    await flushPromises();
+    await submit();
+    const init = (fetch.mock.calls[0] as unknown as [string, RequestInit])[1];
+    expect(JSON.parse(String(init.body))).toMatchObject({ version: 3, name: 'North Crew A' });
+    expect($('[data-test="crew-form-error"]')?.textContent).toMatch(/Someone else changed this crew/);
+    w.unmount();
+  });
+});
+
+describe('workDaysText', () => {
+  test('should fold runs of three or more days and keep the week Monday first', () => {
+    expect(workDaysText(['mon', 'tue', 'wed', 'thu', 'fri'])).toBe('Mon–Fri');
+    expect(workDaysText(['sun', 'sat', 'tue', 'wed'])).toBe('Tue, Wed, Sat, Sun');
+    expect(workDaysText(['tue', 'wed', 'thu', 'sat'])).toBe('Tue–Thu, Sat');
+    expect(workDaysText([])).toBe('—');
+  });
+});

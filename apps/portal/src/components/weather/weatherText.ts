@@ -1,0 +1,23 @@
+import { formatDepth, formatTemperature, type UnitSystem } from '@swardwise/domain';
+
+const shown = (d: { value: number; unit: string }) => `${d.value.toLocaleString('en-US')} ${d.unit}`;
+export const tempText = (c: number, u: UnitSystem) => shown(formatTemperature(c, u));
+export const depthText = (mm: number, u: UnitSystem) => shown(formatDepth(mm, u));
+
+const DAY_MS = 86_400_000;
+const short = (iso: string) => new Date(`${iso}T00:00:00Z`).toLocaleDateString('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' });
+export const dateText = (iso: string) =>
+  new Date(`${iso}T00:00:00Z`).toLocaleDateString('en-US', { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
+
+/** Missing dates folded into runs: "Oct 5, Nov 12–14 (3 days)". */
+export function gapRuns(gaps: readonly string[]): { from: string; to: string; days: number; text: string }[] {
+  const runs: { from: string; to: string; days: number }[] = [];
+  for (const d of [...gaps].sort()) {
+    const last = runs.at(-1);
+    if (last && Date.parse(d) - Date.parse(last.to) === DAY_MS) {
+      last.to = d;
+      last.days++;
+    } else runs.push({ from: d, to: d, days: 1 });
+  }
+  return runs.map((r) => ({ ...r, text: r.days === 1 ? short(r.from) : `${short(r.from)}–${short(r.to)} (${r.days} days)` }));
+}

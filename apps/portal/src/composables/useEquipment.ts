@@ -1,0 +1,6 @@
+import { listEquipment } from '../api/crews.ts';
+import { useAsync } from './useAsync.ts';
+
+export function useEquipment() {
+  return useAsync((_key: undefined, signal) => listEquipment(signal));
+}
