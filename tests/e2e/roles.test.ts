@@ -21,9 +21,9 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 const expected: Record<Role, { landing: string; nav: string[] }> = {
-  admin: { landing: '/admin/users', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'imports', 'users', 'audit'] },
-  head: { landing: '/overview', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'imports', 'audit'] },
-  foreman: { landing: '/district', nav: ['district', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'imports'] },
+  admin: { landing: '/admin/users', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'week', 'records', 'imports', 'users', 'audit'] },
+  head: { landing: '/overview', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'week', 'records', 'imports', 'audit'] },
+  foreman: { landing: '/district', nav: ['district', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'week', 'records', 'imports'] },
   crew: { landing: '/today', nav: ['today', 'fields', 'map'] },
   partner: { landing: '/my-fields', nav: ['my-fields', 'map'] },
 };

@@ -36,6 +36,13 @@ export const routes: RouteRecordRaw[] = [
     meta: { public: true, title: 'Forgot your password' },
   },
   {
+    // Printed and taken to the field: no portal frame around it.
+    path: '/week/sheet',
+    name: 'crew-sheet',
+    component: () => import('../views/CrewSheetView.vue'),
+    meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'], title: 'Crew sheet' },
+  },
+  {
     path: '/',
     component: () => import('../layouts/AppLayout.vue'),
     children: [
@@ -118,6 +125,18 @@ export const routes: RouteRecordRaw[] = [
         name: 'map',
         component: () => import('../views/MapView.vue'),
         meta: { roles: ['admin', 'head', 'foreman', 'crew', 'partner'], can: ['read', 'Field'], title: 'Map' },
+      },
+      {
+        path: 'week',
+        name: 'week',
+        component: () => import('../views/WeekPlanView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'], title: 'Week plan' },
+      },
+      {
+        path: 'records',
+        name: 'records',
+        component: () => import('../views/RecordsView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'], title: 'Records' },
       },
       {
         path: 'imports',

@@ -1,7 +1,8 @@
 import type { Action, AppAbility, Role, SubjectName } from '@swardwise/domain';
 
 export interface NavItem {
-  key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields' | 'standards' | 'map' | 'imports' | 'crews' | 'equipment' | 'weather';
+  key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields' | 'standards' | 'map' | 'imports' | 'crews' | 'equipment' | 'weather'
+    | 'week' | 'records';
   label: string;
   to: string;
   roles: Role[];
@@ -24,6 +25,8 @@ export const NAV_ITEMS: NavItem[] = [
   { key: 'equipment', label: 'Equipment', to: '/equipment', roles: ['admin', 'head', 'foreman'], can: ['read', 'Equipment'] },
   { key: 'weather', label: 'Weather', to: '/weather', roles: ['admin', 'head', 'foreman'], can: ['read', 'Weather'] },
   { key: 'standards', label: 'Standards', to: '/standards', roles: ['admin', 'head'], can: ['read', 'Standards'] },
+  { key: 'week', label: 'Week plan', to: '/week', roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'] },
+  { key: 'records', label: 'Records', to: '/records', roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'] },
   { key: 'imports', label: 'Imports', to: '/imports', roles: ['admin', 'head', 'foreman'], can: ['create', 'Import'] },
   { key: 'users', label: 'Users', to: '/admin/users', roles: ['admin'], can: ['create', 'User'] },
   { key: 'audit', label: 'Audit log', to: '/audit', roles: ['admin', 'head'], can: ['read', 'AuditEntry'] },

@@ -1,0 +1,168 @@
+/**
+ * The week plan board in chromium: a foreman generates a week (preview, then apply), drags
+ * work orders onto another crew's day and the API has them assigned; a stale card answers
+ * with a reload; the crew sheet prints; the head sees the board read-only.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
+import type { Role } from '@swardwise/domain';
+import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
+import { launchBrowser } from './browser.ts';
+
+const baseUrl = inject('baseUrl');
+const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
+// A week inside the demo season, with weather for every day; no other browser test plans it.
+const WEEK = '2026-07-13';
+let browser: Browser;
+
+interface Board {
+  districtId: number;
+  crews: { id: number; name: string }[];
+  orders: { id: number; crewId: number | null; plannedDate: string; status: string; pinned: boolean; version: number }[];
+}
+
+beforeAll(async () => {
+  fs.mkdirSync(shots, { recursive: true });
+  browser = await launchBrowser();
+});
+afterAll(() => browser?.close());
+
+/**
+ * Tall enough for the whole board: Playwright's drag scrolls to the target after pressing on
+ * the source, which on a scrolled page would pick up whatever card is then under the mouse.
+ */
+const TALL = { width: 1366, height: 2400 };
+
+async function signIn(role: Role, viewport = { width: 1366, height: 900 }): Promise<Page> {
+  const page = await browser.newPage({ viewport });
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(DEMO_SIGN_INS[role].email);
+  await page.getByLabel('Password').fill(DEMO_SIGN_INS[role].password);
+  await page.getByRole('button', { name: /sign in/i }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+  return page;
+}
+
+async function openWeek(page: Page) {
+  await page.locator('[data-test="nav-week"]').click();
+  await page.waitForURL((url) => url.pathname === '/week');
+  await page.goto(`${baseUrl}/week?week=${WEEK}`);
+  await page.locator('[data-test="week-grid"]').waitFor();
+}
+
+/** The board as the API has it, read with the page's own session. */
+function apiBoard(page: Page, districtId: number): Promise<Board> {
+  return page.evaluate(async ([d, w]) => (await fetch(`/api/week-plans?districtId=${d}&weekStart=${w}`)).json(), [districtId, WEEK] as const);
+}
+
+const myDistrict = (page: Page): Promise<number> => page.evaluate(async () => (await (await fetch('/api/auth/me')).json()).user.districtId as number);
+const cell = (page: Page, crew: number | 'none', date: string) => page.locator(`[data-test="board-cell"][data-crew="${crew}"][data-date="${date}"]`);
+const card = (page: Page, id: number) => page.locator(`[data-test="order-card"][data-order-id="${id}"]`);
+
+describe('the week plan board', () => {
+  test('should let a foreman generate the week and assign two jobs to a crew by dragging them', async () => {
+    const page = await signIn('foreman', TALL);
+    try {
+      await openWeek(page);
+      const districtId = await myDistrict(page);
+      expect((await apiBoard(page, districtId)).orders).toHaveLength(0);
+
+      await page.locator('[data-test="generate-week"]').click();
+      await page.locator('[data-test="diff-summary"]').waitFor();
+      const summary = await page.locator('[data-test="diff-summary"]').textContent();
+      const added = Number(/(\d+) added/.exec(summary ?? '')?.[1]);
+      expect(added).toBeGreaterThan(0);
+      // The preview writes nothing.
+      expect((await apiBoard(page, districtId)).orders).toHaveLength(0);
+      await page.screenshot({ path: path.join(shots, 'week-diff.png'), clip: { x: 0, y: 0, width: 1366, height: 900 } });
+      await page.locator('[data-test="diff-apply"]').click();
+      await expect.poll(() => page.locator('[data-test="order-card"]').count()).toBe(added);
+      await page.screenshot({ path: path.join(shots, 'week-board.png'), clip: { x: 0, y: 0, width: 1366, height: 900 } });
+
+      const board = await apiBoard(page, districtId);
+      expect(board.crews.length).toBeGreaterThanOrEqual(2);
+      const [from, to] = board.crews;
+      const target = '2026-07-15'; // the Wednesday
+      const jobs = board.orders.filter((o) => o.crewId === from!.id && o.status === 'planned').slice(0, 2);
+      expect(jobs).toHaveLength(2);
+      for (const job of jobs) {
+        const patched = page.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${job.id}`) && r.request().method() === 'PATCH');
+        await card(page, job.id).dragTo(cell(page, to!.id, target));
+        expect((await patched).status()).toBe(200);
+        await expect.poll(() => cell(page, to!.id, target).locator(`[data-order-id="${job.id}"]`).count()).toBe(1);
+      }
+
+      const after = await apiBoard(page, districtId);
+      for (const job of jobs) {
+        expect(after.orders.find((o) => o.id === job.id)).toMatchObject({ crewId: to!.id, plannedDate: target, status: 'assigned', pinned: true });
+      }
+      expect(await card(page, jobs[0]!.id).locator('[data-test="mark-pinned"]').count()).toBe(1);
+    } finally {
+      await page.close();
+    }
+  });
+
+  test('should reload and say so when someone else changed a card before it was dropped', async () => {
+    const page = await signIn('foreman', TALL);
+    try {
+      await openWeek(page);
+      await page.locator('[data-test="order-card"]').first().waitFor();
+      const districtId = await myDistrict(page);
+      const board = await apiBoard(page, districtId);
+      const job = board.orders.find((o) => o.status === 'planned' && o.crewId !== null)!;
+      const other = board.crews.find((c) => c.id !== job.crewId)!;
+      // Another session changes the order behind the board's back.
+      const res = await page.evaluate(
+        async ([id, version]) => (await fetch(`/api/work-orders/${id}`, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ version, plannedHours: 2.5 }) })).status,
+        [job.id, job.version] as const,
+      );
+      expect(res).toBe(200);
+      const patched = page.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${job.id}`) && r.request().method() === 'PATCH');
+      await card(page, job.id).dragTo(cell(page, other.id, job.plannedDate));
+      expect((await patched).status()).toBe(409);
+      await expect.poll(() => page.getByText('Someone else changed this work order — reloaded.').count()).toBeGreaterThan(0);
+      // The reloaded card shows the other change and stays with its crew.
+      await expect.poll(() => cell(page, job.crewId!, job.plannedDate).locator(`[data-order-id="${job.id}"]`).textContent()).toContain('2.5 h');
+      const after = (await apiBoard(page, districtId)).orders.find((o) => o.id === job.id)!;
+      expect(after.crewId).toBe(job.crewId);
+    } finally {
+      await page.close();
+    }
+  });
+
+  test('should print a crew sheet with the route, each job with blanks for hours and notes, and the cautions', async () => {
+    const page = await signIn('foreman');
+    try {
+      await openWeek(page);
+      const link = page.locator('[data-test="print-sheet"]').first();
+      const href = (await link.getAttribute('href'))!;
+      await page.goto(`${baseUrl}${href}`);
+      await page.locator('[data-test="sheet-jobs"]').waitFor();
+      const jobs = await page.locator('[data-test="sheet-job"]').count();
+      expect(jobs).toBeGreaterThan(0);
+      expect(await page.locator('[data-test="sheet-route"] li').count()).toBeGreaterThanOrEqual(3);
+      expect(await page.locator('[data-test="sheet-cautions"]').textContent()).toMatch(/Lightning/);
+      await page.emulateMedia({ media: 'print' });
+      expect(await page.locator('[data-test="sheet-print"]').isVisible()).toBe(false);
+      await page.screenshot({ path: path.join(shots, 'week-sheet-print.png'), fullPage: true });
+    } finally {
+      await page.close();
+    }
+  });
+
+  test('should show the head the board of a district read-only', async () => {
+    const page = await signIn('head');
+    try {
+      await openWeek(page);
+      await page.locator('[data-test="week-readonly"]').waitFor();
+      expect(await page.locator('[data-test="generate-week"]').count()).toBe(0);
+      expect(await page.locator('[data-test="week-district"]').count()).toBe(1);
+      const first = page.locator('[data-test="order-card"]').first();
+      if (await first.count()) expect(await first.getAttribute('draggable')).toBe('false');
+    } finally {
+      await page.close();
+    }
+  });
+});
