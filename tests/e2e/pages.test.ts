@@ -158,7 +158,7 @@ describe('crews, equipment, weather and bookings pages', () => {
       expect(kinds).toEqual([...kinds].sort());
       expect(await page.locator('[data-test="row"]', { hasText: 'Rotary 72' }).innerText()).toContain('Sharpen now');
       await page.screenshot({ path: path.join(shots, 'equipment.png'), fullPage: true });
-      await page.locator('[data-test="row"]', { hasText: 'Line marker' }).locator('[data-test^="edit-equipment-"]').click();
+      await page.locator('[data-test="row"]', { hasText: 'Line marker (M-2)' }).locator('[data-test^="edit-equipment-"]').click();
       await page.locator('[data-test="equipment-dialog"]').waitFor();
       expect(await page.locator('[data-test="mower-fields"]').count()).toBe(0);
       await page.locator('[data-test="equipment-dialog"]').getByRole('button', { name: 'Cancel' }).click();
