@@ -293,7 +293,16 @@ export async function getWeekBoard(ctx: Ctx, q: WeekQuery) {
     .orderBy(desc(auditLog.at))
     .limit(1);
   const warnings: string[] = [];
-  for (const l of loads) if (l.overloaded) warnings.push(`${crewRows.find((c) => c.id === l.crewId)?.name ?? 'A crew'} is over its hours on ${l.date}: ${l.totalHours.toFixed(1)} h planned for ${l.availableHours.toFixed(1)} h available.`);
+  const dayLabel = (iso: string) => new Date(`${iso}T12:00:00Z`).toLocaleDateString('en-US', { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
+  for (const l of loads) {
+    if (!l.overloaded) continue;
+    const crew = crewRows.find((c) => c.id === l.crewId)?.name ?? 'A crew';
+    warnings.push(
+      l.availableHours === 0
+        ? `${crew} has ${l.totalHours.toFixed(1)} h of work on ${dayLabel(l.date)}, a day it does not work: move it or change the crew's working days.`
+        : `${crew} is over its hours on ${dayLabel(l.date)}: ${l.totalHours.toFixed(1)} h planned for ${l.availableHours.toFixed(1)} h available.`,
+    );
+  }
   const unassigned = rows.filter((r) => r.crewId === null && r.status !== 'skipped');
   if (unassigned.length) warnings.push(`${unassigned.length} work order(s) have no crew yet.`);
   return {

@@ -3,7 +3,7 @@
  * again changes nothing (a marker row in `settings` records that it ran).
  */
 import { eq } from 'drizzle-orm';
-import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, addDaysIso, hocFor, hoursPerMowingPolygon, mowerTypeFor, surfaceScore, type Level } from '@swardwise/domain';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, addDaysIso, hocFor, hoursPerMowingPolygon, mowerTypeFor, surfaceScore, weekdayOf, type Level } from '@swardwise/domain';
 import type { Db } from '../client.ts';
 import { crews, districts, equipment, fieldChecks, fieldEvents, fields, settings, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../schema/index.ts';
 import { outlineFacts } from '../../services/fields.ts';
@@ -196,6 +196,9 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
     const crewsByDistrict = new Map<string, number[]>();
     for (const c of city.crews) crewsByDistrict.set(c.districtCode, [...(crewsByDistrict.get(c.districtCode) ?? []), crewIds.get(c.name)!]);
     const siteOf = new Map(city.sites.map((s) => [s.key, s]));
+    // The next five working days (Monday to Friday) from the day of seeding.
+    const workDays: string[] = [];
+    for (let d = today; workDays.length < 5; d = addDaysIso(d, 1)) if (!['sat', 'sun'].includes(weekdayOf(d))) workDays.push(d);
     const perDistrict = new Map<string, number>();
     const orders = city.fields.flatMap((f, i) => {
       const site = siteOf.get(f.siteKey)!;
@@ -211,8 +214,8 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
           siteId: siteIds.get(f.siteKey)!,
           districtId: districtIds.get(site.districtCode)!,
           task: 'mow' as const,
-          weekStart: mondayOf(addDaysIso(today, n % 5)),
-          plannedDate: addDaysIso(today, n % 5),
+          weekStart: mondayOf(workDays[n % 5]!),
+          plannedDate: workDays[n % 5]!,
           crewId: districtCrews[n % districtCrews.length]!,
           plannedHours: Math.round(hoursPerMowingPolygon(f.geometry, mower) * 100) / 100,
           status: 'assigned' as const,

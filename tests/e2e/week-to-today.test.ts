@@ -1,0 +1,108 @@
+/**
+ * The week from both ends: the demo foreman generates this week, drags two jobs onto his
+ * first crew's day for today, and that crew's lead, on a phone, finds them on Today and logs
+ * one done with a photo. The API then has it done, with the photo and the hours.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import sharp from 'sharp';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
+import { addDaysIso, weekdayOf, WEEKDAYS } from '@swardwise/domain';
+import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
+import { launchBrowser } from './browser.ts';
+
+const baseUrl = inject('baseUrl');
+const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
+const TALL = { width: 1366, height: 2400 };
+const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
+let browser: Browser;
+
+beforeAll(async () => {
+  fs.mkdirSync(shots, { recursive: true });
+  browser = await launchBrowser();
+});
+afterAll(() => browser?.close());
+
+interface Board {
+  crews: { id: number; name: string }[];
+  orders: { id: number; crewId: number | null; plannedDate: string; status: string; task: string }[];
+}
+
+async function signIn(page: Page, who: 'foreman' | 'crew', landing: string) {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(DEMO_SIGN_INS[who].email);
+  await page.getByLabel('Password').fill(DEMO_SIGN_INS[who].password);
+  await page.getByRole('button', { name: /sign in/i }).click();
+  await page.waitForURL((url) => url.pathname === landing || !url.pathname.startsWith('/sign-in'));
+}
+
+describe('from the week plan to the crew’s phone', () => {
+  test('should carry two jobs the foreman assigns to the crew lead’s Today, where one is logged done with a photo', async () => {
+    // The server's clock decides "today" for both the board and Today.
+    const today = new Date().toISOString().slice(0, 10);
+    const monday = addDaysIso(today, -((WEEKDAYS.indexOf(weekdayOf(today)) + 6) % 7));
+    const foreman = await browser.newPage({ viewport: TALL });
+    let jobIds: number[] = [];
+    try {
+      await signIn(foreman, 'foreman', '/');
+      await foreman.goto(`${baseUrl}/week?week=${monday}`);
+      await foreman.locator('[data-test="week-grid"]').waitFor();
+      await foreman.locator('[data-test="generate-week"]').click();
+      await foreman.locator('[data-test="diff-summary"]').waitFor();
+      await foreman.locator('[data-test="diff-apply"]').click();
+      await foreman.locator('[data-test="diff-summary"]').waitFor({ state: 'hidden' });
+
+      const districtId = await foreman.evaluate(async () => (await (await fetch('/api/auth/me')).json()).user.districtId as number);
+      const read = () => foreman.evaluate(async ([d, w]) => (await (await fetch(`/api/week-plans?districtId=${d}&weekStart=${w}`)).json()) as Board, [districtId, monday] as const);
+      const board = await read();
+      const crewA = board.crews.find((c) => c.name === 'North Ridge Crew A')!;
+      const movable = board.orders.filter((o) => (o.status === 'planned' || o.status === 'assigned') && !(o.crewId === crewA.id && o.plannedDate === today));
+      expect(movable.length).toBeGreaterThanOrEqual(2);
+      jobIds = movable.slice(0, 2).map((o) => o.id);
+      const target = foreman.locator(`[data-test="board-cell"][data-crew="${crewA.id}"][data-date="${today}"]`);
+      for (const id of jobIds) {
+        const patched = foreman.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${id}`) && r.request().method() === 'PATCH');
+        await foreman.locator(`[data-test="order-card"][data-order-id="${id}"]`).dragTo(target);
+        expect((await patched).status()).toBe(200);
+        await expect.poll(() => target.locator(`[data-order-id="${id}"]`).count()).toBe(1);
+      }
+      const after = await read();
+      for (const id of jobIds) expect(after.orders.find((o) => o.id === id)).toMatchObject({ crewId: crewA.id, plannedDate: today, status: 'assigned' });
+      await foreman.screenshot({ path: path.join(shots, 'week-to-today-board.png'), clip: { x: 0, y: 0, width: 1366, height: 1100 } });
+    } finally {
+      await foreman.close();
+    }
+
+    const context = await browser.newContext(PHONE);
+    try {
+      const phone = await context.newPage();
+      await signIn(phone, 'crew', '/today');
+      await phone.waitForURL((url) => url.pathname === '/today');
+      for (const id of jobIds) await phone.locator(`[data-test="job-card"][data-order-id="${id}"]`).waitFor();
+      const job = phone.locator(`[data-test="job-card"][data-order-id="${jobIds[0]}"]`);
+      await job.locator('[data-test="job-done"]').click();
+      const dialog = phone.locator('.el-dialog').filter({ has: phone.locator('[data-test="report-submit"]') });
+      await dialog.waitFor();
+      await dialog.locator('[data-test="report-hours"] input').fill('0.8');
+      await dialog.locator('textarea').fill('Done before the rain');
+      const jpeg = await sharp({ create: { width: 2400, height: 1800, channels: 3, background: { r: 64, g: 128, b: 60 } } })
+        .jpeg()
+        .toBuffer();
+      await dialog.locator('[data-test="report-photos"]').setInputFiles({ name: 'field.jpg', mimeType: 'image/jpeg', buffer: jpeg });
+      await dialog.locator('img[alt="field.jpg"]').waitFor();
+      await dialog.locator('[data-test="report-submit"]').click();
+      await job.and(phone.locator('[data-status="done"]')).waitFor();
+      await phone.locator('[data-test="outbox-waiting"]').waitFor({ state: 'detached' });
+      await phone.screenshot({ path: path.join(shots, 'week-to-today-phone.png') });
+      const detail = await phone.evaluate(async (id) => (await (await fetch(`/api/work-orders/${id}`)).json()), jobIds[0]!);
+      expect(detail.order).toMatchObject({ status: 'done', actualHours: 0.8, photoCount: 1 });
+      // Shrunk on the server to 1600 px on the long side.
+      expect(detail.photos[0]).toMatchObject({ width: 1600, height: 1200 });
+      // The second job is still waiting for the crew.
+      expect(await phone.locator(`[data-test="job-card"][data-order-id="${jobIds[1]}"]`).getAttribute('data-status')).toBe('assigned');
+    } finally {
+      await context.close();
+    }
+  });
+});
