@@ -130,6 +130,9 @@ interface GenerationInput {
 async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: ExistingRow[]) {
   const dates = weekDates(q.weekStart);
   const weekEnd = dates[6]!;
+  // In the week under way, work goes on today or later.
+  const today = new Date().toISOString().slice(0, 10);
+  const notBefore = today > q.weekStart && today <= weekEnd ? today : undefined;
   const district = await districtRow(db, q.districtId);
   const { standards } = await loadStandards(db);
   const params = await loadParameters(db);
@@ -215,7 +218,7 @@ async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: Exi
       lastCheckedOn: done.get(`${f.id}|field_check`) ?? null,
       events: eventsOf.get(f.id) ?? [],
     };
-    const plan = planFieldWeek({ field, weather: w, weekStart: q.weekStart, kept: keptByField.get(f.id) ?? [], workDays: workDays.length ? workDays : ['mon', 'tue', 'wed', 'thu', 'fri'], mowers, standards, params });
+    const plan = planFieldWeek({ field, weather: w, weekStart: q.weekStart, kept: keptByField.get(f.id) ?? [], workDays: workDays.length ? workDays : ['mon', 'tue', 'wed', 'thu', 'fri'], mowers, standards, params, ...(notBefore ? { notBefore } : {}) });
     asked.push(...plan.orders);
     for (const n of plan.notes) if (/projected|No weather/.test(n)) notes.add(n.replace(/^No weather on file before .*?:/, 'Some fields have no weather before the week:'));
   }
@@ -249,6 +252,7 @@ async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: Exi
     sites: siteLocations,
     yard: { lat: district.yardLat, lng: district.yardLng },
     travel: params.travel,
+    ...(notBefore ? { notBefore } : {}),
   });
   const fieldNames = new Map(fieldRows.map((f) => [f.id, f.name]));
   return { orders: assigned.orders, warnings: [...notes, ...assigned.warnings.map((w) => w.replace(/field (\d+)/, (_, id: string) => fieldNames.get(Number(id)) ?? `field ${id}`))], crewRows, fieldCount: fieldRows.length };

@@ -282,3 +282,21 @@ describe('planFieldWeek without a mowing on record', () => {
     expect(later.notes.join(' ')).toMatch(/after this week began/);
   });
 });
+
+describe('a week already under way', () => {
+  test('should move what the past days asked for onto the first day still open', () => {
+    const plan = planFieldWeek({ field: field({ lastCheckedOn: '2026-05-10' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays, notBefore: '2026-06-03' });
+    expect(plan.orders.every((o) => o.askedDate >= '2026-06-03')).toBe(true);
+    expect(plan.orders.find((o) => o.task === 'field_check')?.askedDate).toBe('2026-06-03');
+    const { orders } = assignWeek({
+      weekStart: WEEK,
+      orders: plan.orders,
+      crews: [{ id: 1, hoursPerDay: 8, workDays: allDays }],
+      sites: new Map([[10, { lat: 38, lng: -77 }]]),
+      yard: { lat: 38, lng: -77 },
+      travel: DEFAULT_PARAMETERS.travel,
+      notBefore: '2026-06-03',
+    });
+    expect(orders.every((o) => o.plannedDate >= '2026-06-03')).toBe(true);
+  });
+});

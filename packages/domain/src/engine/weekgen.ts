@@ -102,6 +102,8 @@ export interface FieldWeekInput {
   kept: readonly KeptOrder[];
   /** Days any crew of the district works (mowing can fall only on these). */
   workDays: readonly Weekday[];
+  /** First day work can still be planned on (today, when the week has begun); default Monday. */
+  notBefore?: string;
   mowers?: readonly PlanMower[];
   standards?: Standards;
   params?: DepartmentParameters;
@@ -168,6 +170,8 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
   const planning = params.planning ?? DEFAULT_PARAMETERS.planning;
   const dates = weekDates(weekStart);
   const weekEnd = dates[6] as string;
+  // Days of the week already past cannot take new work: what they asked for moves to `start`.
+  const start = input.notBefore && input.notBefore > weekStart ? (input.notBefore < weekEnd ? input.notBefore : weekEnd) : weekStart;
   const std = levelStandard(field.maintenanceLevel, standards);
   const level = field.maintenanceLevel;
   const orders: AskedOrder[] = [];
@@ -236,10 +240,10 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
         continue;
       }
       if (!next || next.date > weekEnd) break;
-      if (next.date < weekStart) {
-        // The rule asked for a cut before this week and none is on record: mow first thing.
-        asked.push({ date: weekStart, heightMm: next.heightBeforeMm, reason: 'overdue', overdueSince: next.date });
-        cutIdx = idx(weekStart);
+      if (next.date < start) {
+        // The rule asked for a cut before now and none is on record: mow first thing.
+        asked.push({ date: start, heightMm: next.heightBeforeMm, reason: 'overdue', overdueSince: next.date });
+        cutIdx = idx(start);
         continue;
       }
       asked.push({ date: next.date, heightMm: next.heightBeforeMm, reason: next.reason });
@@ -260,7 +264,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
         plannedHours: round(hours),
         reason: why,
         details: { hocMm: round(hocMm, 1), triggerMm: round(trigger, 1), heightBeforeMm: round(a.heightMm, 1), mowerKind: spec.kind, mowerId: mower?.id ?? null, hoursMethod: method, overdueSince: a.overdueSince ?? null },
-        latestDate: a.reason === 'overdue' ? weekStart : a.date,
+        latestDate: a.date,
         flexible: false,
         equipmentKind: 'mower',
       });
@@ -290,12 +294,12 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
       });
     };
     const nextMonday = addDaysIso(weekStart, 7);
-    const events = [...field.events].filter((e) => e.startsOn >= weekStart && e.startsOn <= nextMonday).sort((a, b) => (a.startsOn < b.startsOn ? -1 : a.startsOn > b.startsOn ? 1 : a.id - b.id));
+    const events = [...field.events].filter((e) => e.startsOn >= start && e.startsOn <= nextMonday).sort((a, b) => (a.startsOn < b.startsOn ? -1 : a.startsOn > b.startsOn ? 1 : a.id - b.id));
     for (const e of events) {
       const last = lastPaintBefore(e.startsOn);
       if (last && isoToDayNumber(e.startsOn) - isoToDayNumber(last) <= planning.paintFreshDays) continue;
       let date = addDaysIso(e.startsOn, -planning.paintDaysBeforeEvent);
-      if (date < weekStart) date = weekStart;
+      if (date < start) date = start;
       if (date > weekEnd) continue; // next Monday's booking is painted on this week's days only if in reach
       paintOn(date, `Lines for ${e.title} on ${dayName(e.startsOn)} ${e.startsOn}`, e.startsOn, { eventId: e.id, eventTitle: e.title, eventOn: e.startsOn });
     }
@@ -303,7 +307,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
       const last = lastPaintBefore(weekEnd);
       const due = last ? addDaysIso(last, std.lineRepaintDays) : weekStart;
       if (due <= weekEnd) {
-        const date = due < weekStart ? weekStart : due;
+        const date = due < start ? start : due;
         paintOn(date, last ? `Repaint: level ${level} repaints every ${std.lineRepaintDays} days (last painted ${last})` : `No painting on record: level ${level} keeps lines`, null, {});
       }
     }
@@ -331,7 +335,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
       const need = productForArea(app.nGPerM2, product, field.areaM2, params.fertiliserBagKg, params.costs.fertiliserPerKg);
       const spreader = planning.spreader;
       const hours = hoursPerMowing(field.areaM2, spreader) + spreader.setupMin / 60;
-      const date = app.date < weekStart ? weekStart : app.date;
+      const date = app.date < start ? start : app.date;
       orders.push({
         fieldId: field.id,
         siteId: field.siteId,
@@ -365,12 +369,12 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
       const base = { grossMm: round(gross, 1), volumeL: round(irrigationVolumeLitres(schedule.appliedMm, field.areaM2), 0), shortfallMm: round(schedule.shortfallMm, 1) };
       if (field.irrigation === 'automatic') {
         if (keptDays.size === 0) {
-          const firstRun = runs.map((r) => r.date).sort()[0] ?? weekStart;
+          const firstRun = runs.map((r) => r.date).filter((d) => d >= start).sort()[0] ?? start;
           orders.push({
             fieldId: field.id,
             siteId: field.siteId,
             task: 'irrigate',
-            askedDate: weekStart < firstRun ? weekStart : firstRun,
+            askedDate: start < firstRun ? start : firstRun,
             plannedHours: planning.controllerSetHours,
             reason: `Water budget: ${round(gross, 1)} mm gross this week; set the controller to the run times`,
             details: { ...base, system: 'automatic', runs },
@@ -381,7 +385,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
         }
       } else {
         for (const run of runs) {
-          if (keptDays.has(run.date) || run.totalMinutes <= 0) continue;
+          if (keptDays.has(run.date) || run.totalMinutes <= 0 || run.date < start) continue;
           orders.push({
             fieldId: field.id,
             siteId: field.siteId,
@@ -403,7 +407,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
   if (keptOf('field_check').length === 0) {
     const due = field.lastCheckedOn ? addDaysIso(field.lastCheckedOn, std.fieldCheckDays) : weekStart;
     if (due <= weekEnd) {
-      const date = due < weekStart ? weekStart : due;
+      const date = due < start ? start : due;
       orders.push({
         fieldId: field.id,
         siteId: field.siteId,
@@ -459,6 +463,8 @@ export interface AssignInput {
   sites: ReadonlyMap<number, LatLng>;
   yard: LatLng;
   travel: TravelSettings;
+  /** First day work can still go on (today, when the week has begun). */
+  notBefore?: string;
 }
 
 /**
@@ -469,7 +475,9 @@ export interface AssignInput {
  * the crew's hours onto the lightest day. Deterministic: ties break by id and date.
  */
 export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warnings: string[] } {
-  const dates = weekDates(input.weekStart);
+  const week = weekDates(input.weekStart);
+  const open = week.filter((d) => !input.notBefore || d >= input.notBefore);
+  const dates = open.length ? open : week.slice(6);
   const warnings: string[] = [];
   const crews = [...input.crews].filter((c) => c.workDays.length > 0).sort((a, b) => a.id - b.id);
   const bySite = new Map<number, AskedOrder[]>();
