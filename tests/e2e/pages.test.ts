@@ -185,6 +185,8 @@ describe('crews, equipment, weather and bookings pages', () => {
       const fieldId = await page.evaluate(async () => ((await (await fetch('/api/fields')).json()).items as { id: number }[])[0]!.id);
       await page.goto(`${baseUrl}/fields/${fieldId}`);
       await page.locator('[data-test="field-bookings"]').waitFor();
+      // Count only once the card has its bookings (they load after the card appears).
+      await page.waitForLoadState('networkidle');
       const before = await page.locator('[data-test="booking"]').count();
       await page.locator('[data-test="new-booking"]').click();
       const dialog = page.locator('[data-test="booking-dialog"]');
@@ -192,7 +194,8 @@ describe('crews, equipment, weather and bookings pages', () => {
       await dialog.locator('[data-test="booking-title"] input, input[data-test="booking-title"]').first().fill('Kestrel Hill JV v Copperbeech');
       await dialog.locator('[data-test="booking-submit"]').click();
       await dialog.waitFor({ state: 'hidden' });
-      await expect.poll(() => page.locator('[data-test="booking"]').count()).toBe(before + 1);
+      await expect.poll(() => page.locator('[data-test="booking"]', { hasText: 'Kestrel Hill JV v Copperbeech' }).count()).toBe(1);
+      expect(await page.locator('[data-test="booking"]').count()).toBe(before + 1);
       const mine = page.locator('[data-test="booking"]', { hasText: 'Kestrel Hill JV v Copperbeech' });
       expect(await mine.locator('[data-test^="edit-booking-"]').count()).toBe(1);
       await page.locator('[data-test="field-bookings"]').scrollIntoViewIfNeeded();
