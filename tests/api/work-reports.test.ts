@@ -281,6 +281,19 @@ describe('work photos', () => {
     expect(await rows(workPhotos)).toBe(before);
   });
 
+  test('should store a photo uploaded twice at once only once', async () => {
+    const id = await northWork();
+    const crew = await api.signIn('crew');
+    const image = await png(64, 48);
+    const clientRef = ref();
+    const answers = await Promise.all([1, 2].map(() => crew.post(`/api/work-orders/${id}/photos`).field('clientRef', clientRef).attach('photo', image, 'a.png')));
+    expect(answers.map((a) => a.status).sort()).toEqual([200, 201]);
+    expect(new Set(answers.map((a) => a.body.photo.id)).size).toBe(1);
+    expect((await db().select({ n: count() }).from(workPhotos).where(eq(workPhotos.workOrderId, id)))[0]!.n).toBe(1);
+    const served = await crew.get(answers[0]!.body.photo.url);
+    expect(served.status).toBe(200);
+  });
+
   test('should keep at most six photos on an order and store a retried upload once', async () => {
     const id = await northWork();
     const crew = await api.signIn('crew');

@@ -83,12 +83,20 @@ export async function addWorkPhoto(ctx: Ctx, orderId: number, upload: PhotoUploa
       const [row] = await tx
         .insert(workPhotos)
         .values({ workOrderId: orderId, fileName, mime: 'image/jpeg', width: image.info.width, height: image.info.height, bytes: image.data.length, createdBy: ctx.actor.id })
+        .onConflictDoNothing({ target: [workPhotos.workOrderId, workPhotos.fileName] })
         .returning();
+      if (!row) {
+        // The same upload arrived twice at once: the first one stored it (same bytes, same file).
+        const [first] = await tx.select().from(workPhotos).where(and(eq(workPhotos.workOrderId, orderId), eq(workPhotos.fileName, fileName)));
+        return answer(orderId, first!, true);
+      }
       await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'work_photo', entityId: row!.id, districtId: order.districtId, before: null, after: row! });
       return answer(orderId, row!, false);
     });
   } catch (err) {
-    await fs.rm(file, { force: true });
+    // A retry name may already belong to a stored photo: remove the file only if no row has it.
+    const [kept] = await ctx.db.select({ id: workPhotos.id }).from(workPhotos).where(and(eq(workPhotos.workOrderId, orderId), eq(workPhotos.fileName, fileName)));
+    if (!kept) await fs.rm(file, { force: true });
     throw err;
   }
 }

@@ -93,7 +93,8 @@ export const workPhotos = pgTable(
     createdBy: integer('created_by').references(() => users.id),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('work_photos_order_idx').on(t.workOrderId)],
+  // One row per file: a retried upload (same order, same phone reference, same name) is stored once.
+  (t) => [index('work_photos_order_idx').on(t.workOrderId), uniqueIndex('work_photos_file_key').on(t.workOrderId, t.fileName)],
 );
 
 /**

@@ -1,0 +1,1 @@
+CREATE UNIQUE INDEX "work_photos_file_key" ON "work_photos" USING btree ("work_order_id","file_name");
