@@ -5,11 +5,12 @@
  */
 import { and, asc, eq, lte } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { addDaysIso, defineAbilityFor, greatCircleKm, planFieldWeek, prepareWeather, type Actor, type DailyWeather, type Level } from '@swardwise/domain';
+import { addDaysIso, defineAbilityFor, greatCircleKm, planFieldWeek, prepareWeather, type Actor, type Level } from '@swardwise/domain';
 import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
 import { districts, fields, sites, users, weatherDays, weatherStations, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
 import { loadParameters, loadStandards } from '../../apps/api/src/services/standards.ts';
+import { dailyWeatherOf } from '../../apps/api/src/services/weather.ts';
 import { generateWeek } from '../../apps/api/src/services/week-plans.ts';
 
 let database: Database;
@@ -52,16 +53,7 @@ describe('week plan on the demo city', () => {
     const stations = await database.db.select().from(weatherStations);
     const station = stations.sort((a, b) => greatCircleKm(f!, a) - greatCircleKm(f!, b))[0]!;
     const rows = await database.db.select().from(weatherDays).where(and(eq(weatherDays.stationId, station.id), lte(weatherDays.date, addDaysIso(WARM, 13)))).orderBy(asc(weatherDays.date));
-    const days: DailyWeather[] = rows.map((r) => {
-      const d: DailyWeather = { date: r.date, tmaxC: r.tmaxC, tminC: r.tminC, rainMm: r.rainMm };
-      if (r.rhMaxPct !== null) d.rhMaxPct = r.rhMaxPct;
-      if (r.rhMinPct !== null) d.rhMinPct = r.rhMinPct;
-      if (r.windMs !== null) d.windMs = r.windMs;
-      if (r.sunshineH !== null) d.sunshineH = r.sunshineH;
-      if (r.solarMJ !== null) d.solarMJ = r.solarMJ;
-      return d;
-    });
-    const weather = prepareWeather(days, { latDeg: station.lat, elevationM: station.elevationM, coastal: station.coastal === 1 });
+    const weather = prepareWeather(rows.map(dailyWeatherOf), { latDeg: station.lat, elevationM: station.elevationM, coastal: station.coastal === 1 });
     const { standards } = await loadStandards(database.db);
     const params = await loadParameters(database.db);
     const field = f!.field;

@@ -22,6 +22,7 @@ import {
   isoToDayNumber,
   linePlan,
   longAxis,
+  mondayOf,
   monthOf,
   monthlyNSplitByGp,
   mowTriggerHeightMm,
@@ -35,9 +36,6 @@ import {
   runTimeMinutes,
   simulateMowing,
   stripePassPlan,
-  weekdayOf,
-  WEEKDAYS,
-  type DailyWeather,
   type Level,
   type PlayLevel,
   type SiteKind,
@@ -48,6 +46,7 @@ import { fieldChecks, sites, weatherDays, weatherStations } from '../db/schema/i
 import type { Ctx } from './context.ts';
 import { getField } from './fields.ts';
 import { loadParameters, loadStandards } from './standards.ts';
+import { dailyWeatherOf } from './weather.ts';
 
 /** One input of a block: raw SI value and its unit token, so the portal can convert it. */
 export interface NeedInput {
@@ -62,23 +61,9 @@ const input = (key: string, label: string, value: NeedInput['value'], unit: stri
 
 type WeatherRow = typeof weatherDays.$inferSelect;
 
-function toDaily(r: WeatherRow): DailyWeather {
-  const d: DailyWeather = { date: r.date, tmaxC: r.tmaxC, tminC: r.tminC, rainMm: r.rainMm };
-  if (r.rhMaxPct !== null) d.rhMaxPct = r.rhMaxPct;
-  if (r.rhMinPct !== null) d.rhMinPct = r.rhMinPct;
-  if (r.windMs !== null) d.windMs = r.windMs;
-  if (r.sunshineH !== null) d.sunshineH = r.sunshineH;
-  if (r.solarMJ !== null) d.solarMJ = r.solarMJ;
-  return d;
-}
-
 /** Penman–Monteith needs more than temperatures; the engine takes Hargreaves otherwise. */
 const hasMoreThanTemperatures = (r: WeatherRow) => r.rhMaxPct !== null || r.windMs !== null || r.sunshineH !== null || r.solarMJ !== null;
 
-/** Monday of the week of an ISO date. */
-function mondayOf(iso: string): string {
-  return addDaysIso(iso, -((WEEKDAYS.indexOf(weekdayOf(iso)) + 6) % 7));
-}
 
 /**
  * Level of play and visibility are not recorded per field yet: they are read from the site
@@ -145,7 +130,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
     weekStart = run[0]!.date;
     weatherNote ??= `The weather on file starts on ${weekStart}; the week is shortened to the days with weather.`;
   }
-  const prepared = prepareWeather(run.map(toDaily), { latDeg: station.lat, elevationM: station.elevationM, coastal: station.coastal === 1 });
+  const prepared = prepareWeather(run.map(dailyWeatherOf), { latDeg: station.lat, elevationM: station.elevationM, coastal: station.coastal === 1 });
   const w0 = prepared.dates.indexOf(weekStart);
   const w1 = prepared.dates.indexOf(weekEnd);
   const weekDays = w1 - w0 + 1;

@@ -1,12 +1,23 @@
 /** Weather stations and their days: station files, the hosted service, and gaps. */
 import Papa from 'papaparse';
 import { and, asc, eq, gte, lte, sql } from 'drizzle-orm';
-import { AppError, addDaysIso, weatherDaySchema, type WeatherDayInput } from '@swardwise/domain';
+import { AppError, addDaysIso, weatherDaySchema, type DailyWeather, type WeatherDayInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { weatherDays, weatherStations } from '../db/schema/index.ts';
 import { fetchWeather, type WeatherClientSettings } from '../weather/client.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, notFound, type Ctx } from './context.ts';
+
+/** A stored day as the turf engine takes it: missing humidity, wind and sunshine stay absent. */
+export function dailyWeatherOf(r: typeof weatherDays.$inferSelect): DailyWeather {
+  const d: DailyWeather = { date: r.date, tmaxC: r.tmaxC, tminC: r.tminC, rainMm: r.rainMm };
+  if (r.rhMaxPct !== null) d.rhMaxPct = r.rhMaxPct;
+  if (r.rhMinPct !== null) d.rhMinPct = r.rhMinPct;
+  if (r.windMs !== null) d.windMs = r.windMs;
+  if (r.sunshineH !== null) d.sunshineH = r.sunshineH;
+  if (r.solarMJ !== null) d.solarMJ = r.solarMJ;
+  return d;
+}
 
 export async function listStations(ctx: Ctx) {
   authorize(ctx, 'read', 'Weather');

@@ -17,7 +17,6 @@ import {
   weekDates,
   MOWER_KINDS,
   type AskedOrder,
-  type DailyWeather,
   type GenerateWeekInput,
   type Level,
   type PlanEquipment,
@@ -32,19 +31,8 @@ import type { Db, Queryable } from '../db/client.ts';
 import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, weatherDays, weatherStations, workOrders } from '../db/schema/index.ts';
 import { authorize, type Ctx } from './context.ts';
 import { loadParameters, loadStandards } from './standards.ts';
-import { notifyCrews, readScope, workOrderRow, workOrderRows, type WorkMoveNotice, type WorkOrderRow, type WriteDeps } from './work-orders.ts';
-
-type WeatherRow = typeof weatherDays.$inferSelect;
-
-function toDaily(r: WeatherRow): DailyWeather {
-  const d: DailyWeather = { date: r.date, tmaxC: r.tmaxC, tminC: r.tminC, rainMm: r.rainMm };
-  if (r.rhMaxPct !== null) d.rhMaxPct = r.rhMaxPct;
-  if (r.rhMinPct !== null) d.rhMinPct = r.rhMinPct;
-  if (r.windMs !== null) d.windMs = r.windMs;
-  if (r.sunshineH !== null) d.sunshineH = r.sunshineH;
-  if (r.solarMJ !== null) d.solarMJ = r.solarMJ;
-  return d;
-}
+import { dailyWeatherOf } from './weather.ts';
+import { notifyCrews, readScope, workOrderRows, type WorkMoveNotice, type WorkOrderRow, type WriteDeps } from './work-orders.ts';
 
 async function districtRow(db: Queryable, id: number) {
   const [d] = await db.select({ id: districts.id, name: districts.name, yardName: districts.yardName, yardLat: districts.yardLat, yardLng: districts.yardLng }).from(districts).where(eq(districts.id, id));
@@ -84,7 +72,7 @@ async function stationWeather(db: Queryable, until: string) {
     let start = rows.length - 1;
     while (start > 0 && isoToDayNumber(rows[start - 1]!.date) === isoToDayNumber(rows[start]!.date) - 1) start--;
     const run = rows.slice(Math.max(0, start));
-    const w = prepareWeather(run.map(toDaily), { latDeg: s.lat, elevationM: s.elevationM, coastal: s.coastal === 1 });
+    const w = prepareWeather(run.map(dailyWeatherOf), { latDeg: s.lat, elevationM: s.elevationM, coastal: s.coastal === 1 });
     prepared.set(stationId, w);
     return w;
   };
@@ -212,7 +200,8 @@ async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: Exi
       clippings: f.clippings,
       irrigation: f.irrigation,
       status: f.status,
-      lastMowedOn: f.lastMowedOn && done.get(`${f.id}|mow`) && done.get(`${f.id}|mow`)! > f.lastMowedOn ? done.get(`${f.id}|mow`)! : (f.lastMowedOn ?? done.get(`${f.id}|mow`) ?? null),
+      // The later of the field's record and the last mowing logged done.
+      lastMowedOn: [f.lastMowedOn, done.get(`${f.id}|mow`) ?? null].filter((d): d is string => d !== null).sort().pop() ?? null,
       lastPaintedOn: done.get(`${f.id}|paint_lines`) ?? null,
       lastFedOn: done.get(`${f.id}|feed`) ?? null,
       lastCheckedOn: done.get(`${f.id}|field_check`) ?? null,
@@ -517,12 +506,11 @@ export async function confirmWeek(ctx: Ctx, q: WeekQuery & { crewId?: number | u
     return after;
   });
   const byCrew = new Map<number, WorkMoveNotice>();
-  for (const a of changed) {
-    const row = await workOrderRow(ctx.db, a.id);
-    if (!row || a.crewId === null) continue;
-    const n = byCrew.get(a.crewId) ?? { crewId: a.crewId, kind: 'assigned', orders: [] };
+  for (const row of await boardRows(ctx.db, changed.map((a) => a.id))) {
+    if (row.crewId === null) continue;
+    const n = byCrew.get(row.crewId) ?? { crewId: row.crewId, kind: 'assigned', orders: [] };
     n.orders.push(row);
-    byCrew.set(a.crewId, n);
+    byCrew.set(row.crewId, n);
   }
   const emailed = await notifyCrews(ctx.db, deps.mailer, [...byCrew.values()], deps.actorName, deps.publicUrl);
   return { assigned: changed.length, emailed, board: await getWeekBoard(ctx, q) };

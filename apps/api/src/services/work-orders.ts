@@ -4,7 +4,7 @@
  * assigned or moved.
  */
 import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
-import { AppError, WORK_TASK_LABELS, addDaysIso, weekdayOf, WEEKDAYS, type CreateWorkOrderInput, type UpdateWorkOrderInput } from '@swardwise/domain';
+import { AppError, WORK_TASK_LABELS, mondayOf, type CreateWorkOrderInput, type UpdateWorkOrderInput } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { crews, equipment, fields, sites, users, workOrders, workPhotos } from '../db/schema/index.ts';
 import type { Mailer } from '../mail/mailer.ts';
@@ -17,11 +17,6 @@ export interface WorkOrderFilter {
   to: string;
   crewId?: number | undefined;
   districtId?: number | undefined;
-}
-
-/** Monday of the week of an ISO date. */
-export function mondayOf(iso: string): string {
-  return addDaysIso(iso, -((WEEKDAYS.indexOf(weekdayOf(iso)) + 6) % 7));
 }
 
 const rowSelect = {

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { addDaysIso, dayNumberToIso, dayOfYear, isoToDayNumber, monthOf, weekdayOf } from './dates.ts';
+import { addDaysIso, dayNumberToIso, dayOfYear, isoToDayNumber, mondayOf, monthOf, weekdayOf } from './dates.ts';
 
 describe('dates', () => {
   test('should give FAO-56 day numbers J', () => {
@@ -32,6 +32,14 @@ describe('dates', () => {
       expect(isoToDayNumber(iso)).toBe(d);
     }
     expect(dayNumberToIso(end)).toBe('2200-12-31');
+  });
+
+  test('should find the Monday of any day, Sunday belonging to the week before', () => {
+    expect(mondayOf('2026-11-30')).toBe('2026-11-30');
+    expect(mondayOf('2026-12-02')).toBe('2026-11-30');
+    expect(mondayOf('2026-12-06')).toBe('2026-11-30');
+    expect(mondayOf('2026-12-07')).toBe('2026-12-07');
+    expect(mondayOf('2027-01-01')).toBe('2026-12-28');
   });
 
   test('should reject malformed and impossible dates', () => {

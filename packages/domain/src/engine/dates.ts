@@ -71,6 +71,11 @@ export function weekdayOf(iso: string): Weekday {
   return WEEKDAYS[idx] as Weekday;
 }
 
+/** The Monday of the week an ISO date falls in (weeks run Monday to Sunday). */
+export function mondayOf(iso: string): string {
+  return addDaysIso(iso, -((WEEKDAYS.indexOf(weekdayOf(iso)) + 6) % 7));
+}
+
 /** Month 1–12 of an ISO date. */
 export function monthOf(iso: string): number {
   isoToDayNumber(iso);

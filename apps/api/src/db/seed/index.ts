@@ -3,12 +3,11 @@
  * again changes nothing (a marker row in `settings` records that it ran).
  */
 import { eq } from 'drizzle-orm';
-import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, addDaysIso, hocFor, hoursPerMowingPolygon, mowerTypeFor, surfaceScore, weekdayOf, type Level } from '@swardwise/domain';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, addDaysIso, hocFor, hoursPerMowingPolygon, mondayOf, mowerTypeFor, surfaceScore, weekdayOf, type Level } from '@swardwise/domain';
 import type { Db } from '../client.ts';
 import { crews, districts, equipment, fieldChecks, fieldEvents, fields, settings, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../schema/index.ts';
 import { outlineFacts } from '../../services/fields.ts';
 import { hashPassword } from '../../services/users.ts';
-import { mondayOf } from '../../services/work-orders.ts';
 import { buildDemoCity } from './demo-city.ts';
 import { demoFieldEvents } from './demo-events.ts';
 import { demoFieldHistory } from './demo-history.ts';

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { cautionsFor, cellKey, crewDayMap, filterOptions, groupCells, loadBar, mondayOf, weekLabel } from './board.ts';
+import { cautionsFor, cellKey, crewDayMap, filterOptions, groupCells, loadBar, weekLabel } from './board.ts';
 import { bigBoard, board, crewDay, DATES, order } from './sample.ts';
 
 const NO_FILTER = { siteIds: [], tasks: [] };
@@ -84,14 +84,6 @@ describe('loadBar', () => {
 });
 
 describe('week dates', () => {
-  test('should find the Monday of any day, Sunday belonging to the week before', () => {
-    expect(mondayOf('2026-11-30')).toBe('2026-11-30');
-    expect(mondayOf('2026-12-02')).toBe('2026-11-30');
-    expect(mondayOf('2026-12-06')).toBe('2026-11-30');
-    expect(mondayOf('2026-12-07')).toBe('2026-12-07');
-    expect(mondayOf('2027-01-01')).toBe('2026-12-28');
-  });
-
   test('should name the week from Monday to Sunday', () => {
     expect(weekLabel('2026-11-30')).toBe('30 Nov – 6 Dec 2026');
   });

@@ -17,12 +17,6 @@ export function cellKey(crewId: number | null, date: string): CellKey {
   return `${crewId ?? UNASSIGNED}|${date}`;
 }
 
-/** The Monday of the week an ISO date falls in. */
-export function mondayOf(iso: string): string {
-  const back = { mon: 0, tue: 1, wed: 2, thu: 3, fri: 4, sat: 5, sun: 6 }[weekdayOf(iso)];
-  return addDaysIso(iso, -back);
-}
-
 /** Today in the browser's own calendar, as YYYY-MM-DD. */
 export function localToday(now = new Date()): string {
   const pad = (n: number) => String(n).padStart(2, '0');
