@@ -8,8 +8,8 @@ import { parse } from '../http/validate.ts';
 import { createCrew, deleteCrew, listCrews, updateCrew } from '../services/crews.ts';
 import { createEquipment, deleteEquipment, listEquipment, updateEquipment } from '../services/equipment.ts';
 
-const districtQuery = z.object({ districtId: idSchema.optional() });
-const versionQuery = z.object({ version: z.coerce.number().pipe(versionSchema) });
+export const districtQuery = z.object({ districtId: idSchema.optional() });
+export const versionQuery = z.object({ version: z.coerce.number().pipe(versionSchema) });
 
 export function crewsRouter({ db }: AppDeps): Router {
   const router = Router();

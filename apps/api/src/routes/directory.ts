@@ -8,7 +8,7 @@ import { parse } from '../http/validate.ts';
 import { listAudit } from '../services/audit.ts';
 import { listDistricts } from '../services/districts.ts';
 
-const auditQuerySchema = z.object({
+export const auditQuerySchema = z.object({
   entity: z.string().trim().max(40).optional(),
   entityId: idSchema.optional(),
   limit: z.coerce.number().int().min(1).max(1000).default(200),

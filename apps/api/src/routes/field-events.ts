@@ -13,7 +13,7 @@ const today = () => new Date().toISOString().slice(0, 10);
 const DEFAULT_DAYS = 92;
 const MAX_DAYS = 400;
 
-const listQuery = z
+export const listQuery = z
   .object({
     from: isoDate.optional(),
     to: isoDate.optional(),
@@ -27,7 +27,7 @@ const listQuery = z
   })
   .refine((q) => q.from <= q.to, { path: ['to'], message: 'the end date is before the start date' })
   .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / 86_400_000 <= MAX_DAYS, { path: ['to'], message: `ask for at most ${MAX_DAYS} days at a time` });
-const versionQuery = z.object({ version: z.coerce.number().pipe(versionSchema) });
+export const versionQuery = z.object({ version: z.coerce.number().pipe(versionSchema) });
 
 export function fieldEventsRouter({ db }: AppDeps): Router {
   const router = Router();

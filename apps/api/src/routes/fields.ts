@@ -7,7 +7,7 @@ import { parse } from '../http/validate.ts';
 import { createField, deleteField, getField, listFieldsJson, updateField } from '../services/fields.ts';
 import { fieldNeeds } from '../services/needs.ts';
 
-const deleteQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
+export const deleteQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
 
 export function fieldsRouter({ db }: AppDeps): Router {
   const router = Router();

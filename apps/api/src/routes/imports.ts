@@ -8,7 +8,7 @@ import { parse } from '../http/validate.ts';
 import { authorize } from '../services/context.ts';
 import { commitImport, getImport, listImports, previewImport, undoImport } from '../services/imports.ts';
 
-const listQuerySchema = z.object({ limit: z.coerce.number().int().min(1).max(100).default(20) });
+export const listQuerySchema = z.object({ limit: z.coerce.number().int().min(1).max(100).default(20) });
 
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: IMPORT_MAX_BYTES, files: 1, fields: 10 } }).single('file');
 

@@ -7,7 +7,9 @@ import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { listDays, listStations, pullFromService, uploadStationCsv } from '../services/weather.ts';
 
-const MAX_CSV_BYTES = 2 * 1024 * 1024;
+export const MAX_CSV_BYTES = 2 * 1024 * 1024;
+/** `commit=false` (the default) only checks the file and shows its rows; `true` saves them. */
+export const csvQuerySchema = z.object({ commit: z.enum(['true', 'false']).default('false') });
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_CSV_BYTES, files: 1 } });
 
 /** multer's own errors become our error shape (413 for a file over the limit). */
@@ -41,7 +43,7 @@ export function weatherRouter({ db, config }: AppDeps): Router {
   router.post('/stations/:id/csv', async (req, res) => {
     const ctx = ctxOf(db, req);
     const { id } = parse(idParamSchema, req.params, 'params');
-    const { commit } = parse(z.object({ commit: z.enum(['true', 'false']).default('false') }), req.query, 'query');
+    const { commit } = parse(csvQuerySchema, req.query, 'query');
     await receiveFile(req, res);
     const file = req.file;
     if (!file) throw new AppError('invalid', 'weather/no_file', 'Choose a station file (.csv) to upload');

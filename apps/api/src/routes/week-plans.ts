@@ -7,7 +7,7 @@ import { getRecords } from '../services/records.ts';
 import { confirmWeek, generateWeek, getWeekBoard } from '../services/week-plans.ts';
 import { writeDeps } from './work-orders.ts';
 
-const confirmSchema = weekQuerySchema.extend({ crewId: idSchema.optional() });
+export const confirmSchema = weekQuerySchema.extend({ crewId: idSchema.optional() });
 
 export function weekPlansRouter(deps: AppDeps): Router {
   const { db } = deps;

@@ -9,7 +9,7 @@ import { parse } from '../http/validate.ts';
 import { createWorkOrder, deleteWorkOrder, listWorkOrders, updateWorkOrder, type WriteDeps } from '../services/work-orders.ts';
 
 const today = () => new Date().toISOString().slice(0, 10);
-const querySchema = z
+export const querySchema = z
   .object({
     from: z.iso.date('use a date as YYYY-MM-DD').optional(),
     to: z.iso.date('use a date as YYYY-MM-DD').optional(),
@@ -19,7 +19,7 @@ const querySchema = z
   .transform((q) => ({ ...q, from: q.from ?? today(), to: q.to ?? addDaysIso(q.from ?? today(), 6) }))
   .refine((q) => q.from <= q.to, { path: ['to'], message: 'the end date is before the start date' })
   .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / 86_400_000 <= 92, { path: ['to'], message: 'ask for at most 92 days at a time' });
-const deleteQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
+export const deleteQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
 
 /** Who is writing (for the crew lead's e-mail) and where the portal lives. */
 export async function writeDeps({ db, mailer, config }: AppDeps, req: Request): Promise<WriteDeps> {

@@ -25,8 +25,8 @@ const receivePhoto: RequestHandler = (req, res, next) => {
   });
 };
 
-const photoParamsSchema = z.object({ id: idSchema, photoId: idSchema });
-const photoBodySchema = z.object({
+export const photoParamsSchema = z.object({ id: idSchema, photoId: idSchema });
+export const photoBodySchema = z.object({
   clientRef: z.string().trim().min(8).max(64).regex(/^[A-Za-z0-9_-]+$/, 'a client reference uses letters, digits, - and _').optional(),
 });
 
