@@ -16,6 +16,7 @@ import type { MailSink } from './mail/sink.ts';
 import { loadUser, requireUser } from './http/auth.ts';
 import { errorHandler, notFound } from './http/errors.ts';
 import { DrizzleSessionStore } from './http/session-store.ts';
+import { serveOpenApi } from './openapi/document.ts';
 import { authRouter } from './routes/auth.ts';
 import { crewsRouter } from './routes/crews.ts';
 import { devRouter } from './routes/dev.ts';
@@ -54,6 +55,8 @@ export function createApp(
   const { db, config, logger } = full;
   const app = express();
   const store = new DrizzleSessionStore(db);
+  // The developer routes exist only beside the local mail sink, never in production.
+  const devRoutes = Boolean(full.mailSink) && !config.production;
 
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -107,6 +110,7 @@ export function createApp(
     await db.execute('select 1');
     res.json({ status: 'ok' });
   });
+  app.get('/api/openapi.json', serveOpenApi({ dev: devRoutes, cookieName: COOKIE_NAME }));
   app.use('/api/auth', authRouter(full));
   app.use('/api', requireUser);
   app.use('/api/users', usersRouter(full));
@@ -123,7 +127,7 @@ export function createApp(
   app.use('/api/map', mapRouter(full));
   app.use('/api', directoryRouter(full));
   app.use('/api', crewsRouter(full));
-  if (full.mailSink && !config.production) app.use('/api/dev', devRouter(full));
+  if (devRoutes) app.use('/api/dev', devRouter(full));
   app.use('/api', notFound('route'));
 
   // The built portal, with the single-page app's routes answered by index.html.

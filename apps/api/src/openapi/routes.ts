@@ -1,0 +1,844 @@
+/**
+ * Every route of the API, for the OpenAPI document: who may call it and the very zod
+ * schemas its router parses with (imported, never copied). `tests/api/openapi.test.ts`
+ * fails when a route of the Express app is missing here, or listed here but not served.
+ */
+import type { z } from 'zod';
+import type { oas31 } from 'zod-openapi';
+import {
+  acceptInviteSchema,
+  createCrewSchema,
+  createEquipmentSchema,
+  createFieldEventSchema,
+  createFieldSchema,
+  createImportSchema,
+  createSiteSchema,
+  createWorkOrderSchema,
+  dateRangeQuerySchema,
+  forgotPasswordSchema,
+  generateWeekSchema,
+  idParamSchema,
+  IMPORT_MAX_BYTES,
+  IMPORT_MAX_ROWS,
+  inviteUserSchema,
+  levelParamSchema,
+  listQuerySchema,
+  mapQuerySchema,
+  needsQuerySchema,
+  resetPasswordSchema,
+  signInSchema,
+  updateCrewSchema,
+  updateEquipmentSchema,
+  updateFieldEventSchema,
+  updateFieldSchema,
+  updateLevelStandardSchema,
+  updateProfileSchema,
+  updateSiteSchema,
+  updateUserSchema,
+  updateWorkOrderSchema,
+  weatherRangeSchema,
+  weekQuerySchema,
+  workReportSchema,
+} from '@swardwise/domain';
+import { districtQuery, versionQuery as crewVersionQuery } from '../routes/crews.ts';
+import { auditQuerySchema } from '../routes/directory.ts';
+import { listQuery as fieldEventsQuery, versionQuery as fieldEventVersionQuery } from '../routes/field-events.ts';
+import { deleteQuerySchema as fieldDeleteQuery } from '../routes/fields.ts';
+import { listQuerySchema as importsQuery } from '../routes/imports.ts';
+import { csvQuerySchema, MAX_CSV_BYTES } from '../routes/weather.ts';
+import { confirmSchema } from '../routes/week-plans.ts';
+import { querySchema as workOrdersQuery, deleteQuerySchema as workOrderDeleteQuery } from '../routes/work-orders.ts';
+import { photoBodySchema, photoParamsSchema } from '../routes/work-reports.ts';
+import { PHOTO_MAX_BYTES, PHOTOS_PER_ORDER } from '../services/work-photos.ts';
+import { allowed, publicAccess, signedIn, type Access } from './access.ts';
+import { bool, date, int, nullable, ref, row, rows, shape, str, strings, type ErrorStatus } from './answers.ts';
+
+export type Method = 'get' | 'post' | 'patch' | 'delete';
+
+/** One success answer. `body` takes a zod schema (rendered as the answer's output) or an OpenAPI schema. */
+export interface Answer {
+  status: 200 | 201 | 202 | 204;
+  description: string;
+  body?: z.ZodType | oas31.SchemaObject | oas31.ReferenceObject;
+  /** Default `application/json`. */
+  contentType?: string;
+}
+
+/** A multipart/form-data upload: one file part plus the text fields its schema parses. */
+export interface Upload {
+  file: string;
+  fields?: z.ZodObject;
+  /** What the file part may be, for the `encoding` of the part. */
+  mediaTypes: string;
+  maxBytes: number;
+  description: string;
+}
+
+export interface RouteDoc {
+  method: Method;
+  /** The full path as Express mounts it, e.g. `/api/fields/:id`. */
+  path: string;
+  tag: string;
+  summary: string;
+  description?: string;
+  access: Access;
+  params?: z.ZodType<unknown, Record<string, unknown>>;
+  query?: z.ZodType<unknown, Record<string, unknown>>;
+  body?: z.ZodType;
+  upload?: Upload;
+  answers: Answer[];
+  /** Failures beyond the ones every route of its kind has (400 with input, 401 unless public, 403 with a role check, 404 with an id in the path). */
+  errors?: ErrorStatus[];
+  /** Served only outside production, by processes with the local mail sink. */
+  devOnly?: boolean;
+}
+
+const MB = 1024 * 1024;
+const json = (status: Answer['status'], description: string, body: Answer['body']): Answer => ({ status, description, body });
+const noContent = (description: string): Answer => ({ status: 204, description });
+const items = (what: string, extra: Record<string, oas31.SchemaObject> = {}) => shape({ items: rows(what), ...extra });
+const VERSION_NOTE = 'Send the `version` you last read; a stale one answers 409 and changes nothing.';
+
+const service: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/health',
+    tag: 'Service',
+    summary: 'Check that the API and its database answer',
+    access: publicAccess(),
+    answers: [json(200, 'The API and its database answer.', shape({ status: { type: 'string', enum: ['ok'] } }))],
+  },
+  {
+    method: 'get',
+    path: '/api/openapi.json',
+    tag: 'Service',
+    summary: 'This OpenAPI document',
+    description: 'Public: it describes routes and shapes, never data. Every other route still checks the caller.',
+    access: publicAccess(),
+    answers: [json(200, 'The OpenAPI 3.1 document of this API.', row('OpenAPI 3.1 document'))],
+  },
+];
+
+const auth: RouteDoc[] = [
+  {
+    method: 'post',
+    path: '/api/auth/sign-in',
+    tag: 'Auth',
+    summary: 'Sign in with e-mail and password',
+    description: 'Starts a session: the answer sets the session cookie that every other route reads. Failed attempts are limited per address and account.',
+    access: publicAccess(),
+    body: signInSchema,
+    answers: [json(200, 'Signed in; the session cookie is set.', shape({ user: ref('SessionUser') }))],
+    errors: [429],
+  },
+  {
+    method: 'post',
+    path: '/api/auth/sign-out',
+    tag: 'Auth',
+    summary: 'End the session',
+    access: publicAccess('Without a session it does nothing and still answers 204.'),
+    answers: [noContent('The session is ended and its cookie cleared.')],
+  },
+  {
+    method: 'get',
+    path: '/api/auth/me',
+    tag: 'Auth',
+    summary: 'The signed-in user',
+    access: signedIn(),
+    answers: [json(200, 'The signed-in user.', shape({ user: ref('SessionUser') }))],
+  },
+  {
+    method: 'patch',
+    path: '/api/auth/me',
+    tag: 'Auth',
+    summary: 'Change one’s own name or units',
+    description: VERSION_NOTE,
+    access: allowed('update', 'User', { probe: (actor) => ({ id: actor.id, districtId: actor.districtId }) }),
+    body: updateProfileSchema,
+    answers: [json(200, 'The user after the change.', shape({ user: ref('SessionUser') }))],
+    errors: [409],
+  },
+  {
+    method: 'post',
+    path: '/api/auth/accept-invite',
+    tag: 'Auth',
+    summary: 'Accept an invitation: set a password and sign in',
+    access: publicAccess('The invitation token is the credential.'),
+    body: acceptInviteSchema,
+    answers: [json(200, 'The account is active and signed in; the session cookie is set.', shape({ user: ref('SessionUser') }))],
+    errors: [429],
+  },
+  {
+    method: 'post',
+    path: '/api/auth/forgot-password',
+    tag: 'Auth',
+    summary: 'Ask for a password reset link by e-mail',
+    description: 'The same answer whether or not the address has an account.',
+    access: publicAccess(),
+    body: forgotPasswordSchema,
+    answers: [json(202, 'If the address has an account, a reset link is on its way.', shape({ message: str() }))],
+    errors: [429],
+  },
+  {
+    method: 'post',
+    path: '/api/auth/reset-password',
+    tag: 'Auth',
+    summary: 'Set a new password with a reset token and sign in',
+    access: publicAccess('The reset token is the credential.'),
+    body: resetPasswordSchema,
+    answers: [json(200, 'The password is changed and the user signed in; other sessions of the account are ended.', shape({ user: ref('SessionUser') }))],
+    errors: [429],
+  },
+];
+
+const users: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/users',
+    tag: 'Users',
+    summary: 'List user accounts',
+    // The service checks reading a user other than oneself in one's own district.
+    access: allowed('read', 'User', { probe: (actor) => ({ districtId: actor.districtId ?? -1, id: -1 }) }),
+    answers: [json(200, 'Accounts the caller may read, by role and name.', items('Accounts with role, scope, active flag, last sign-in and whether the invitation is still open'))],
+  },
+  {
+    method: 'post',
+    path: '/api/users',
+    tag: 'Users',
+    summary: 'Invite a person (an account with a role and scope)',
+    access: allowed('create', 'User'),
+    body: inviteUserSchema,
+    answers: [
+      json(
+        201,
+        'The account is created, waiting for the person to accept the invitation.',
+        shape({ user: row('The new account'), inviteUrl: str('The invitation link, to pass on by hand when e-mail is off'), emailed: bool('True when the invitation was e-mailed') }),
+      ),
+    ],
+    errors: [409],
+  },
+  {
+    method: 'patch',
+    path: '/api/users/:id',
+    tag: 'Users',
+    summary: 'Change a user’s name, role, scope or active flag',
+    description: `${VERSION_NOTE} Nobody may deactivate themselves or change their own role.`,
+    access: allowed('update', 'User', { note: 'Changing a role or deactivating an account needs the administrator.' }),
+    params: idParamSchema,
+    body: updateUserSchema,
+    answers: [json(200, 'The account after the change.', shape({ user: row('The account') }))],
+    errors: [409],
+  },
+];
+
+const weather: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/weather/stations',
+    tag: 'Weather',
+    summary: 'Weather stations with the days on file',
+    access: allowed('read', 'Weather'),
+    answers: [json(200, 'Stations with their counts of days, first and last date and forecast days.', items('Stations', { service: bool('True when a hosted weather service is configured') }))],
+  },
+  {
+    method: 'get',
+    path: '/api/weather/stations/:id/days',
+    tag: 'Weather',
+    summary: 'Daily weather of a station in a date range',
+    description: 'SI units: °C, mm, m/s, MJ/m².',
+    access: allowed('read', 'Weather'),
+    params: idParamSchema,
+    query: weatherRangeSchema,
+    answers: [json(200, 'The days on file and the dates without weather.', shape({ days: rows('Days on file, oldest first'), gaps: { type: 'array', items: { type: 'string', format: 'date' }, description: 'Dates of the range with no weather' } }))],
+  },
+  {
+    method: 'post',
+    path: '/api/weather/stations/:id/csv',
+    tag: 'Weather',
+    summary: 'Check, and with `commit=true` save, a station file (CSV)',
+    description: 'Columns `date,tmax_c,tmin_c` and optionally humidity, wind, sunshine, solar radiation and rain. Without `commit=true` nothing is saved; a file with a bad row is never saved.',
+    access: allowed('create', 'Weather'),
+    params: idParamSchema,
+    query: csvQuerySchema,
+    upload: { file: 'file', mediaTypes: 'text/csv', maxBytes: MAX_CSV_BYTES, description: `The station file, a .csv text file of at most ${MAX_CSV_BYTES / MB} MB` },
+    answers: [json(200, 'Each row as read with its errors, and a summary.', shape({ committed: bool('True when the days were saved'), rows: rows('Rows of the file with their errors'), summary: shape({ rows: int(), valid: int(), invalid: int() }) }))],
+    errors: [413, 415],
+  },
+  {
+    method: 'post',
+    path: '/api/weather/stations/:id/pull',
+    tag: 'Weather',
+    summary: 'Fetch a date range from the hosted weather service and save it',
+    access: allowed('create', 'Weather'),
+    params: idParamSchema,
+    body: weatherRangeSchema,
+    answers: [json(200, 'Days saved and dates the service had no weather for.', shape({ saved: int('Days saved'), missing: strings('Dates the service had no weather for') }))],
+    errors: [503],
+  },
+];
+
+const workOrders: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/work-orders',
+    tag: 'Work orders',
+    summary: 'Work orders in a date range (default: today and the next 6 days)',
+    access: allowed('read', 'WorkOrder'),
+    query: workOrdersQuery,
+    answers: [json(200, 'Work orders the caller may read.', items('Work orders with field, site, crew and equipment names'))],
+  },
+  {
+    method: 'post',
+    path: '/api/work-orders',
+    tag: 'Work orders',
+    summary: 'Add a work order by hand',
+    access: allowed('create', 'WorkOrder'),
+    body: createWorkOrderSchema,
+    answers: [json(201, 'The work order is created; an assigned crew lead is e-mailed.', ref('WorkOrderWithMail'))],
+  },
+  {
+    method: 'patch',
+    path: '/api/work-orders/:id',
+    tag: 'Work orders',
+    summary: 'Move, assign or re-time a work order',
+    description: `${VERSION_NOTE} Any change pins the order against re-generation of the week.`,
+    access: allowed('update', 'WorkOrder'),
+    params: idParamSchema,
+    body: updateWorkOrderSchema,
+    answers: [json(200, 'The work order after the change; the crew lead is e-mailed when it moved to or from a crew.', ref('WorkOrderWithMail'))],
+    errors: [409],
+  },
+  {
+    method: 'delete',
+    path: '/api/work-orders/:id',
+    tag: 'Work orders',
+    summary: 'Delete a work order nobody has logged',
+    description: VERSION_NOTE,
+    access: allowed('delete', 'WorkOrder'),
+    params: idParamSchema,
+    query: workOrderDeleteQuery,
+    answers: [noContent('The work order is deleted.')],
+    errors: [409],
+  },
+  {
+    method: 'get',
+    path: '/api/work-orders/:id',
+    tag: 'Work orders',
+    summary: 'One work order as a crew works it: the order, its reports and photos',
+    access: allowed('read', 'WorkOrder'),
+    params: idParamSchema,
+    answers: [json(200, 'The order, its reports (oldest first) and its photos with their URLs.', shape({ order: row('The work order'), updates: rows('Reports on the order'), photos: rows('Photos with id, size and `url`') }))],
+  },
+  {
+    method: 'post',
+    path: '/api/work-orders/:id/reports',
+    tag: 'Work orders',
+    summary: 'Report on a work order: started, done (with hours) or skipped (with a reason)',
+    description: 'A report sent again with the same `clientRef` counts once and answers 200 with the first report.',
+    access: allowed('log', 'WorkOrder'),
+    params: idParamSchema,
+    body: workReportSchema,
+    answers: [
+      json(201, 'The report is saved.', shape({ order: row('The work order after the report'), update: row('The report'), duplicate: bool('False') })),
+      json(200, 'The same report was already saved (same `clientRef`); nothing changed.', shape({ order: row('The work order'), update: row('The report saved first'), duplicate: bool('True') })),
+    ],
+    errors: [409],
+  },
+  {
+    method: 'post',
+    path: '/api/work-orders/:id/photos',
+    tag: 'Work orders',
+    summary: 'Add a photo to a work order',
+    description: `The photo is resized to 1,600 px, stored as JPEG without its metadata; at most ${PHOTOS_PER_ORDER} per order. A photo sent again with the same \`clientRef\` is stored once. The caller is checked before the upload is read.`,
+    access: allowed('log', 'WorkOrder'),
+    params: idParamSchema,
+    upload: { file: 'photo', fields: photoBodySchema, mediaTypes: 'image/jpeg, image/png, image/webp, image/heic', maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` },
+    answers: [
+      json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo'), duplicate: bool('False') })),
+      json(200, 'The same photo was already stored (same `clientRef`).', shape({ photo: row('The photo stored first'), duplicate: bool('True') })),
+    ],
+    errors: [409, 413, 415],
+  },
+  {
+    method: 'get',
+    path: '/api/work-orders/:id/photos/:photoId',
+    tag: 'Work orders',
+    summary: 'The image of a work order’s photo',
+    access: allowed('read', 'WorkOrder'),
+    params: photoParamsSchema,
+    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+  },
+];
+
+const weekPlans: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/week-plans',
+    tag: 'Week plan',
+    summary: 'The week plan board of a district',
+    access: allowed('read', 'WorkOrder', { probe: (actor) => ({ districtId: actor.districtId }), except: ['crew', 'partner'], note: 'The board is for foremen and the department.' }),
+    query: weekQuerySchema,
+    answers: [json(200, 'The board: crews × days with loads and routes.', ref('WeekBoard'))],
+  },
+  {
+    method: 'post',
+    path: '/api/week-plans/generate',
+    tag: 'Week plan',
+    summary: 'Generate (or with `dryRun`, preview) the week plan of a district',
+    description: 'Keeps every order a person touched (moved, assigned, added by hand, started, done, skipped) and plans around it.',
+    access: allowed('create', 'WorkOrder', { probe: (actor) => ({ districtId: actor.districtId }) }),
+    body: generateWeekSchema,
+    answers: [
+      json(
+        200,
+        'What the run adds, changes, removes and keeps, and the board after it (before it, with `dryRun`).',
+        shape({ dryRun: bool(), diff: row('Orders to insert, update, remove and keep'), warnings: strings('What could not be planned as the rule asks, in words'), board: ref('WeekBoard') }),
+      ),
+    ],
+    errors: [409],
+  },
+  {
+    method: 'post',
+    path: '/api/week-plans/confirm',
+    tag: 'Week plan',
+    summary: 'Assign every suggested crew of the week (optionally of one crew); one e-mail per crew lead',
+    access: allowed('update', 'WorkOrder', { probe: (actor) => ({ districtId: actor.districtId }) }),
+    body: confirmSchema,
+    answers: [json(200, 'How many orders were assigned and crew leads e-mailed, and the board after it.', shape({ assigned: int('Orders assigned'), emailed: int('Crew leads e-mailed'), board: ref('WeekBoard') }))],
+    errors: [409],
+  },
+  {
+    method: 'get',
+    path: '/api/records',
+    tag: 'Records',
+    summary: 'Planned against actual hours and mowings asked against done, by field, crew and week',
+    access: allowed('read', 'WorkOrder'),
+    query: dateRangeQuerySchema,
+    answers: [
+      json(
+        200,
+        'Tallies of the range (hours rounded to 0.01 h).',
+        shape({
+          from: date(),
+          to: date(),
+          districtId: nullable(int()),
+          asOf: date('The department’s today: later orders are not yet late'),
+          byField: rows('Tallies per field'),
+          byCrew: rows('Tallies per crew'),
+          byWeek: rows('Tallies per week'),
+          lateMowings: rows('Mowings done late or missed, latest first'),
+          totals: row('Tallies of the whole range'),
+        }),
+      ),
+    ],
+  },
+];
+
+const sites: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/sites',
+    tag: 'Sites',
+    summary: 'List sites (parks, schools, complexes)',
+    access: allowed('read', 'Site'),
+    query: listQuerySchema,
+    answers: [json(200, 'Sites the caller may read.', items('Sites'))],
+  },
+  {
+    method: 'post',
+    path: '/api/sites',
+    tag: 'Sites',
+    summary: 'Add a site',
+    access: allowed('create', 'Site'),
+    body: createSiteSchema,
+    answers: [json(201, 'The site as stored.', shape({ site: row('The site') }))],
+  },
+  {
+    method: 'get',
+    path: '/api/sites/:id',
+    tag: 'Sites',
+    summary: 'One site with its fields',
+    access: allowed('read', 'Site'),
+    params: idParamSchema,
+    answers: [json(200, 'The site and its fields.', shape({ site: row('The site'), fields: rows('Fields of the site the caller may read') }))],
+  },
+  {
+    method: 'patch',
+    path: '/api/sites/:id',
+    tag: 'Sites',
+    summary: 'Change a site',
+    description: VERSION_NOTE,
+    access: allowed('update', 'Site'),
+    params: idParamSchema,
+    body: updateSiteSchema,
+    answers: [json(200, 'The site after the change.', shape({ site: row('The site') }))],
+    errors: [409],
+  },
+];
+
+const fields: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/fields',
+    tag: 'Fields',
+    summary: 'List fields with their outlines (GeoJSON, WGS84)',
+    access: allowed('read', 'Field'),
+    query: listQuerySchema,
+    answers: [json(200, 'Fields the caller may read.', items('Fields with maintenance level, status and outline (GeoJSON Polygon, [longitude, latitude])'))],
+  },
+  {
+    method: 'post',
+    path: '/api/fields',
+    tag: 'Fields',
+    summary: 'Add a field to a site',
+    access: allowed('create', 'Field'),
+    body: createFieldSchema,
+    answers: [json(201, 'The field as stored.', shape({ field: row('The field') }))],
+  },
+  {
+    method: 'get',
+    path: '/api/fields/:id',
+    tag: 'Fields',
+    summary: 'One field',
+    access: allowed('read', 'Field'),
+    params: idParamSchema,
+    answers: [json(200, 'The field.', shape({ field: row('The field') }))],
+  },
+  {
+    method: 'get',
+    path: '/api/fields/:id/needs',
+    tag: 'Fields',
+    summary: 'What a field needs on a date: growth potential, mowings, feed, water and lines',
+    description: 'Supports decisions; product labels, local codes and licensed practice decide.',
+    access: allowed('read', 'Field'),
+    params: idParamSchema,
+    query: needsQuerySchema,
+    answers: [json(200, 'The field’s needs from its level, grass and the weather of the nearest station (SI units).', shape({ needs: row('Needs of the field') }))],
+  },
+  {
+    method: 'patch',
+    path: '/api/fields/:id',
+    tag: 'Fields',
+    summary: 'Change a field (level, status, outline, …)',
+    description: VERSION_NOTE,
+    access: allowed('update', 'Field'),
+    params: idParamSchema,
+    body: updateFieldSchema,
+    answers: [json(200, 'The field after the change.', shape({ field: row('The field') }))],
+    errors: [409],
+  },
+  {
+    method: 'delete',
+    path: '/api/fields/:id',
+    tag: 'Fields',
+    summary: 'Delete a field',
+    description: VERSION_NOTE,
+    access: allowed('delete', 'Field'),
+    params: idParamSchema,
+    query: fieldDeleteQuery,
+    answers: [noContent('The field is deleted.')],
+    errors: [409],
+  },
+];
+
+const fieldEvents: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/field-events',
+    tag: 'Field events',
+    summary: 'Bookings of fields (games, tournaments, …) in a date range (default: the next 92 days)',
+    access: allowed('read', 'FieldEvent'),
+    query: fieldEventsQuery,
+    answers: [json(200, 'Bookings the caller may read.', items('Bookings'))],
+  },
+  {
+    method: 'post',
+    path: '/api/field-events',
+    tag: 'Field events',
+    summary: 'Book a field',
+    access: allowed('create', 'FieldEvent'),
+    body: createFieldEventSchema,
+    answers: [json(201, 'The booking as stored.', shape({ event: row('The booking') }))],
+  },
+  {
+    method: 'patch',
+    path: '/api/field-events/:id',
+    tag: 'Field events',
+    summary: 'Change a booking',
+    description: VERSION_NOTE,
+    access: allowed('update', 'FieldEvent'),
+    params: idParamSchema,
+    body: updateFieldEventSchema,
+    answers: [json(200, 'The booking after the change.', shape({ event: row('The booking') }))],
+    errors: [409],
+  },
+  {
+    method: 'delete',
+    path: '/api/field-events/:id',
+    tag: 'Field events',
+    summary: 'Cancel a booking',
+    description: VERSION_NOTE,
+    access: allowed('delete', 'FieldEvent'),
+    params: idParamSchema,
+    query: fieldEventVersionQuery,
+    answers: [noContent('The booking is deleted.')],
+    errors: [409],
+  },
+];
+
+const standards: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/standards',
+    tag: 'Standards',
+    summary: 'The Standards: each maintenance level, and the department’s parameters',
+    access: allowed('read', 'Standards'),
+    answers: [json(200, 'The four levels and the department parameters.', shape({ levels: rows('Maintenance levels 1–4 with HOC, mowing, feed, water and line settings'), parameters: row('Department parameters') }))],
+  },
+  {
+    method: 'patch',
+    path: '/api/standards/:level',
+    tag: 'Standards',
+    summary: 'Change one maintenance level',
+    description: VERSION_NOTE,
+    access: allowed('update', 'Standards'),
+    params: levelParamSchema,
+    body: updateLevelStandardSchema,
+    answers: [json(200, 'The level after the change.', shape({ standard: row('The level') }))],
+    errors: [409],
+  },
+];
+
+const importNote = 'Only the person who uploaded an import may commit or undo it.';
+const imports: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/imports',
+    tag: 'Imports',
+    summary: 'Recent imports',
+    access: allowed('create', 'Import'),
+    query: importsQuery,
+    answers: [json(200, 'Imports the caller may read, newest first.', items('Imports', { lastCommittedId: nullable(int('The caller’s last committed import, the one that may be undone')) }))],
+  },
+  {
+    method: 'post',
+    path: '/api/imports',
+    tag: 'Imports',
+    summary: 'Upload sites or fields (CSV) or field outlines (GeoJSON) for a preview',
+    description: `Nothing is saved but the preview; at most ${IMPORT_MAX_ROWS} rows. The caller is checked before the upload is read.`,
+    access: allowed('create', 'Import'),
+    upload: { file: 'file', fields: createImportSchema, mediaTypes: 'text/csv, application/geo+json, application/json', maxBytes: IMPORT_MAX_BYTES, description: `The file, at most ${IMPORT_MAX_BYTES / MB} MB` },
+    answers: [json(201, 'The preview: each row with what importing would do and its errors.', shape({ import: row('The import with its rows and summary') }))],
+    errors: [413, 415],
+  },
+  {
+    method: 'get',
+    path: '/api/imports/:id',
+    tag: 'Imports',
+    summary: 'One import with its rows',
+    access: allowed('create', 'Import'),
+    params: idParamSchema,
+    answers: [json(200, 'The import.', shape({ import: row('The import with its rows and summary') }))],
+  },
+  {
+    method: 'post',
+    path: '/api/imports/:id/commit',
+    tag: 'Imports',
+    summary: 'Import a preview without errors',
+    access: allowed('create', 'Import', { note: importNote }),
+    params: idParamSchema,
+    answers: [json(200, 'The rows are saved.', shape({ import: row('The committed import') }))],
+    errors: [409],
+  },
+  {
+    method: 'post',
+    path: '/api/imports/:id/undo',
+    tag: 'Imports',
+    summary: 'Undo one’s last import, if nobody changed its rows since',
+    access: allowed('create', 'Import', { note: importNote }),
+    params: idParamSchema,
+    answers: [json(200, 'The rows are back as they were.', shape({ import: row('The undone import') }))],
+    errors: [409],
+  },
+];
+
+const map: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/map',
+    tag: 'Map',
+    summary: 'Districts, sites and fields with their state on a day (GeoJSON geometry, WGS84)',
+    access: allowed('read', 'Field'),
+    query: mapQuerySchema,
+    answers: [
+      json(
+        200,
+        'What the status board map shows.',
+        shape({
+          asOf: date('The day the values describe: today, or the latest day with weather when today has none'),
+          requested: date('The day asked for'),
+          weatherNote: nullable(str('Plain words when `asOf` is not the day asked for, or weather is missing')),
+          districts: rows('Districts with their boundary (GeoJSON Polygon)'),
+          sites: rows('Sites with their position'),
+          fields: rows('Fields with outline, status, predicted height, overdue mowing and surface score'),
+        }),
+      ),
+    ],
+  },
+  {
+    method: 'get',
+    path: '/api/map/basemap',
+    tag: 'Map',
+    summary: 'The basemap: a bundled vector map or the configured tile server',
+    access: allowed('read', 'Field'),
+    answers: [json(200, 'The basemap to draw under the fields.', shape({ basemap: { description: 'GeoJSON FeatureCollection of the bundled basemap, or null' }, tileUrl: nullable(str('Tile URL template')), attribution: nullable(str()) }))],
+  },
+];
+
+const directory: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/districts',
+    tag: 'Directory',
+    summary: 'Districts',
+    access: allowed('read', 'District'),
+    answers: [json(200, 'Districts the caller may read.', items('Districts with their yard'))],
+  },
+  {
+    method: 'get',
+    path: '/api/audit',
+    tag: 'Directory',
+    summary: 'The audit log: who changed what, with the row before and after',
+    access: allowed('read', 'AuditEntry'),
+    query: auditQuerySchema,
+    answers: [json(200, 'Entries the caller may read, newest first.', items('Audit entries'))],
+  },
+];
+
+const crews: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/crews',
+    tag: 'Crews',
+    summary: 'Crews',
+    access: allowed('read', 'Crew'),
+    query: districtQuery,
+    answers: [json(200, 'Crews the caller may read.', items('Crews with hours per day, members and working days'))],
+  },
+  {
+    method: 'post',
+    path: '/api/crews',
+    tag: 'Crews',
+    summary: 'Add a crew',
+    access: allowed('create', 'Crew'),
+    body: createCrewSchema,
+    answers: [json(201, 'The crew as stored.', shape({ crew: row('The crew') }))],
+  },
+  {
+    method: 'patch',
+    path: '/api/crews/:id',
+    tag: 'Crews',
+    summary: 'Change a crew',
+    description: VERSION_NOTE,
+    access: allowed('update', 'Crew'),
+    params: idParamSchema,
+    body: updateCrewSchema,
+    answers: [json(200, 'The crew after the change.', shape({ crew: row('The crew') }))],
+    errors: [409],
+  },
+  {
+    method: 'delete',
+    path: '/api/crews/:id',
+    tag: 'Crews',
+    summary: 'Delete a crew without a crew lead',
+    description: VERSION_NOTE,
+    access: allowed('delete', 'Crew'),
+    params: idParamSchema,
+    query: crewVersionQuery,
+    answers: [noContent('The crew is deleted.')],
+    errors: [409],
+  },
+  {
+    method: 'get',
+    path: '/api/equipment',
+    tag: 'Equipment',
+    summary: 'Mowers, line markers, spreaders and other equipment',
+    access: allowed('read', 'Equipment'),
+    query: districtQuery,
+    answers: [json(200, 'Equipment the caller may read.', items('Equipment with kind, widths (m), speeds (km/h), HOC range (mm) and hour meter (h)'))],
+  },
+  {
+    method: 'post',
+    path: '/api/equipment',
+    tag: 'Equipment',
+    summary: 'Add equipment',
+    access: allowed('create', 'Equipment'),
+    body: createEquipmentSchema,
+    answers: [json(201, 'The equipment as stored.', shape({ equipment: row('The equipment') }))],
+  },
+  {
+    method: 'patch',
+    path: '/api/equipment/:id',
+    tag: 'Equipment',
+    summary: 'Change equipment',
+    description: VERSION_NOTE,
+    access: allowed('update', 'Equipment'),
+    params: idParamSchema,
+    body: updateEquipmentSchema,
+    answers: [json(200, 'The equipment after the change.', shape({ equipment: row('The equipment') }))],
+    errors: [409],
+  },
+  {
+    method: 'delete',
+    path: '/api/equipment/:id',
+    tag: 'Equipment',
+    summary: 'Delete equipment',
+    description: VERSION_NOTE,
+    access: allowed('delete', 'Equipment'),
+    params: idParamSchema,
+    query: crewVersionQuery,
+    answers: [noContent('The equipment is deleted.')],
+    errors: [409],
+  },
+];
+
+const dev: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/dev/mail',
+    tag: 'Development',
+    summary: 'Messages caught by the local mail sink',
+    description: 'Only in development and tests; production never serves it.',
+    access: allowed('manage', 'Settings'),
+    devOnly: true,
+    answers: [json(200, 'The sink’s port and its messages, newest last.', shape({ port: nullable(int()), items: rows('Messages') }))],
+  },
+  {
+    method: 'delete',
+    path: '/api/dev/mail',
+    tag: 'Development',
+    summary: 'Empty the local mail sink',
+    description: 'Only in development and tests; production never serves it.',
+    access: allowed('manage', 'Settings'),
+    devOnly: true,
+    answers: [noContent('The sink is empty.')],
+  },
+];
+
+export const ROUTES: readonly RouteDoc[] = [
+  ...service,
+  ...auth,
+  ...users,
+  ...weather,
+  ...workOrders,
+  ...weekPlans,
+  ...sites,
+  ...fields,
+  ...fieldEvents,
+  ...standards,
+  ...imports,
+  ...map,
+  ...directory,
+  ...crews,
+  ...dev,
+];

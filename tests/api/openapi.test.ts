@@ -1,0 +1,247 @@
+import { compileErrors, dereference, validate } from '@readme/openapi-parser';
+import { Ajv2020 } from 'ajv/dist/2020.js';
+import express, { Router, type Express } from 'express';
+import type { OpenAPIV3_1 } from 'openapi-types';
+import supertest from 'supertest';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { COOKIE_NAME } from '../../apps/api/src/app.ts';
+import { buildOpenApiDocument, openApiPath } from '../../apps/api/src/openapi/document.ts';
+import { startTestApi, type TestApi } from '../support/app.ts';
+
+let api: TestApi;
+let served: OpenAPIV3_1.Document;
+
+beforeAll(async () => {
+  api = await startTestApi();
+  served = (await supertest(api.app).get('/api/openapi.json')).body as OpenAPIV3_1.Document;
+});
+afterAll(() => api.close());
+
+interface Layer {
+  rawPath?: unknown;
+  route?: { path: unknown; methods: Record<string, boolean> };
+  handle?: { stack?: Layer[] };
+}
+
+/** Every `METHOD /path` the app serves, walking mounted routers and joining their mount paths (Express 5). */
+function servedRoutes(app: Express): string[] {
+  const found: string[] = [];
+  const walk = (stack: Layer[], prefix: string) => {
+    for (const layer of stack) {
+      if (layer.route) {
+        if (typeof layer.route.path !== 'string') throw new Error(`route path ${String(layer.route.path)} under ${prefix} is not a string; the walker reads only strings`);
+        for (const method of Object.keys(layer.route.methods).filter((m) => m !== '_all')) found.push(`${method.toUpperCase()} ${join(prefix, layer.route.path)}`);
+      } else if (layer.handle?.stack) {
+        if (typeof layer.rawPath !== 'string') throw new Error(`a router mounted under ${prefix} has no string mount path (Express's router changed?)`);
+        walk(layer.handle.stack, join(prefix, layer.rawPath));
+      }
+    }
+  };
+  walk((app as unknown as { router: { stack: Layer[] } }).router.stack, '');
+  return [...new Set(found)].sort();
+}
+const join = (a: string, b: string) => (a + (b === '/' ? '' : b)).replace(/\/+/g, '/') || '/';
+
+/** `METHOD /api/x/:id` for every operation of the document. */
+function documentedRoutes(doc: OpenAPIV3_1.Document): string[] {
+  return Object.entries(doc.paths ?? {})
+    .flatMap(([path, item]) =>
+      ['get', 'post', 'put', 'patch', 'delete'].filter((m) => item && m in item).map((m) => `${m.toUpperCase()} ${path.replace(/\{([^}]+)\}/g, ':$1')}`),
+    )
+    .sort();
+}
+
+/** What the document lacks and what it lists in vain, as a message naming each route. */
+function compare(app: Express, doc: OpenAPIV3_1.Document) {
+  const apiRoutes = servedRoutes(app).filter((r) => / \/api(\/|$)/.test(r));
+  const documented = documentedRoutes(doc);
+  const missing = apiRoutes.filter((r) => !documented.includes(r));
+  const extra = documented.filter((r) => !apiRoutes.includes(r));
+  const message = [
+    missing.length ? `Served but missing from the OpenAPI document (add them to apps/api/src/openapi/routes.ts):\n  ${missing.join('\n  ')}` : '',
+    extra.length ? `In the OpenAPI document but not served by the app (remove them from apps/api/src/openapi/routes.ts):\n  ${extra.join('\n  ')}` : '',
+  ]
+    .filter(Boolean)
+    .join('\n');
+  return { apiRoutes, missing, extra, message };
+}
+
+describe('GET /api/openapi.json', () => {
+  test('should be served without signing in, as JSON', async () => {
+    const res = await supertest(api.app).get('/api/openapi.json');
+    expect(res.status).toBe(200);
+    expect(res.type).toBe('application/json');
+    expect(res.body.openapi).toBe('3.1.0');
+    expect(res.body.info.title).toBe('Swardwise API');
+  });
+
+  test('should be a valid OpenAPI 3.1 document', async () => {
+    const result = await validate(structuredClone(served) as never);
+    expect(result.valid, result.valid ? '' : compileErrors(result)).toBe(true);
+    expect(result.warnings).toEqual([]);
+  });
+
+  test('should document every route the app serves, and no other', () => {
+    const { apiRoutes, missing, extra, message } = compare(api.app, served);
+    // The walker must have reached the nested routers, or an empty comparison would pass.
+    expect(apiRoutes).toContain('GET /api/work-orders/:id/photos/:photoId');
+    expect(apiRoutes).toContain('GET /api/districts');
+    expect(apiRoutes.length).toBeGreaterThan(50);
+    expect({ missing, extra }, message).toEqual({ missing: [], extra: [] });
+  });
+
+  test('should leave out the development routes when production does not serve them', () => {
+    const production = buildOpenApiDocument({ dev: false, cookieName: COOKIE_NAME });
+    expect(Object.keys(production.paths ?? {}).filter((p) => p.startsWith('/api/dev'))).toEqual([]);
+    expect(Object.keys(served.paths ?? {})).toContain('/api/dev/mail');
+  });
+});
+
+describe('route comparison', () => {
+  test('should name a served route the document lacks, and a documented route nobody serves', () => {
+    const app = express();
+    const things = Router();
+    things.get('/:id/parts/:partId', (_req, res) => void res.end());
+    app.use('/api/things', things);
+    app.get('/api/openapi.json', (_req, res) => void res.end());
+    const doc = { openapi: '3.1.0', info: { title: 't', version: '1' }, paths: { '/api/openapi.json': { get: {} }, '/api/gone': { delete: {} } } } as unknown as OpenAPIV3_1.Document;
+    const { missing, extra, message } = compare(app, doc);
+    expect(missing).toEqual(['GET /api/things/:id/parts/:partId']);
+    expect(extra).toEqual(['DELETE /api/gone']);
+    expect(message).toContain('missing from the OpenAPI document');
+    expect(message).toContain('  GET /api/things/:id/parts/:partId');
+  });
+
+  test('should turn Express parameters into OpenAPI templates', () => {
+    expect(openApiPath('/api/work-orders/:id/photos/:photoId')).toBe('/api/work-orders/{id}/photos/{photoId}');
+  });
+});
+
+describe('the operations', () => {
+  const operations = () =>
+    Object.entries(served.paths ?? {}).flatMap(([path, item]) =>
+      Object.entries(item ?? {}).map(([method, op]) => ({ route: `${method.toUpperCase()} ${path}`, op: op as OpenAPIV3_1.OperationObject & { 'x-swardwise-access': { kind: string; roles: { role: string; scope: string[] }[] } } })),
+    );
+
+  test('should say who may call each route, from the shared abilities', () => {
+    for (const { route, op } of operations()) {
+      expect(op.description, route).toMatch(/^Who: /);
+      expect(op['x-swardwise-access'], route).toBeDefined();
+    }
+    const field = served.paths!['/api/fields/{id}']!.patch as never as { description: string; 'x-swardwise-access': { roles: unknown[] } };
+    expect(field.description).toContain('Who: Administrator; Department head; District foreman (own district).');
+    expect(field['x-swardwise-access'].roles).toEqual([
+      { role: 'admin', scope: [] },
+      { role: 'head', scope: [] },
+      { role: 'foreman', scope: ['own district'] },
+    ]);
+    expect((served.paths!['/api/users']!.get as { description: string }).description).toBe('Who: Administrator; District foreman (own district).');
+    expect((served.paths!['/api/week-plans']!.get as { description: string }).description).not.toContain('Crew lead');
+  });
+
+  test('should mark public routes as needing no session, and the others as needing one', () => {
+    const open = operations()
+      .filter(({ op }) => op.security?.length === 0)
+      .map(({ route }) => route)
+      .sort();
+    expect(open).toEqual([
+      'GET /api/health',
+      'GET /api/openapi.json',
+      'POST /api/auth/accept-invite',
+      'POST /api/auth/forgot-password',
+      'POST /api/auth/reset-password',
+      'POST /api/auth/sign-in',
+      'POST /api/auth/sign-out',
+    ]);
+    expect(served.security).toEqual([{ session: [] }]);
+    expect(served.components?.securitySchemes?.session).toMatchObject({ type: 'apiKey', in: 'cookie', name: COOKIE_NAME });
+  });
+
+  test('should describe bodies, parameters and uploads from the schemas the routes parse with', () => {
+    const patchField = served.paths!['/api/fields/{id}']!.patch!;
+    expect(patchField.parameters).toEqual([expect.objectContaining({ in: 'path', name: 'id', required: true, schema: expect.objectContaining({ type: 'integer' }) })]);
+    expect(patchField.requestBody).toMatchObject({ content: { 'application/json': { schema: { $ref: '#/components/schemas/UpdateField' } } } });
+    const updateField = served.components!.schemas!.UpdateField!;
+    expect(updateField.required).toEqual(['version']);
+    expect(Object.keys(updateField.properties!)).toEqual(expect.arrayContaining(['name', 'maintenanceLevel', 'geometry', 'version']));
+
+    const upload = served.paths!['/api/imports']!.post!.requestBody as OpenAPIV3_1.RequestBodyObject;
+    const form = upload.content['multipart/form-data']!;
+    expect(form.schema).toMatchObject({ required: ['kind', 'file'], properties: { kind: { enum: ['sites_csv', 'fields_csv', 'outlines_geojson'] }, file: { type: 'string', format: 'binary' } } });
+
+    const days = served.paths!['/api/weather/stations/{id}/days']!.get!.parameters as OpenAPIV3_1.ParameterObject[];
+    expect(days.map((p) => `${p.in}:${p.name}:${p.required}`)).toEqual(['path:id:true', 'query:from:true', 'query:to:true']);
+  });
+
+  test('should answer failures with the one error shape', () => {
+    const bad = served.components!.responses!.BadRequest as OpenAPIV3_1.ResponseObject;
+    expect(bad.content!['application/json']!.schema).toEqual({ $ref: '#/components/schemas/ErrorBody' });
+    const errorBody = served.components!.schemas!.ErrorBody!;
+    expect(errorBody.required).toEqual(['error']);
+    expect((errorBody.properties!.error as OpenAPIV3_1.SchemaObject).required).toEqual(['code', 'message']);
+    for (const { route, op } of operations()) {
+      expect(op.responses?.['500'], route).toEqual({ $ref: '#/components/responses/ServerError' });
+      if (op.security?.length !== 0) expect(op.responses?.['401'], route).toEqual({ $ref: '#/components/responses/Unauthenticated' });
+      if (route.includes('{')) expect(op.responses?.['404'], route).toEqual({ $ref: '#/components/responses/NotFound' });
+    }
+  });
+});
+
+describe('the documented answers', () => {
+  let resolved: OpenAPIV3_1.Document | undefined;
+  /** Checks a real answer against the schema the document gives for its status. */
+  async function conforms(agent: ReturnType<typeof supertest.agent>, method: 'get', path: string, url: string) {
+    resolved ??= (await dereference(structuredClone(served) as never)) as OpenAPIV3_1.Document;
+    const doc = resolved;
+    const res = await agent[method](url);
+    const answer = doc.paths![path]![method]!.responses![`${res.status}`] as OpenAPIV3_1.ResponseObject | undefined;
+    expect(answer, `${url} answered ${res.status}, which the document does not list: ${JSON.stringify(res.body).slice(0, 300)}`).toBeDefined();
+    const schema = answer!.content?.['application/json']?.schema;
+    if (!schema) return res.status;
+    const ajv = new Ajv2020({ strict: false, validateFormats: false, allErrors: true });
+    const check = ajv.compile(schema);
+    expect(check(res.body), `${url} (${res.status}): ${ajv.errorsText(check.errors)}`).toBe(true);
+    return res.status;
+  }
+
+  test('should match what the API sends to a signed-in head, foreman and administrator', async () => {
+    const { fixture } = api;
+    const head = await api.signIn('head');
+    const foreman = await api.signIn('foreman');
+    const admin = await api.signIn('admin');
+    const anonymous = supertest.agent(api.app);
+    const monday = '2026-06-01';
+    const checks: [ReturnType<typeof supertest.agent>, string, string, number][] = [
+      [anonymous, '/api/health', '/api/health', 200],
+      [anonymous, '/api/auth/me', '/api/auth/me', 401],
+      [head, '/api/auth/me', '/api/auth/me', 200],
+      [admin, '/api/users', '/api/users', 200],
+      [head, '/api/users', '/api/users', 403],
+      [head, '/api/weather/stations', '/api/weather/stations', 200],
+      [head, '/api/weather/stations/{id}/days', `/api/weather/stations/${fixture.weather.stationId}/days?from=${fixture.weather.start}&to=${fixture.weather.end}`, 200],
+      [head, '/api/weather/stations/{id}/days', `/api/weather/stations/${fixture.weather.stationId}/days?from=2026-02-30&to=2026-03-01`, 400],
+      [foreman, '/api/work-orders', '/api/work-orders', 200],
+      [foreman, '/api/week-plans', `/api/week-plans?districtId=${fixture.districts.north}&weekStart=${monday}`, 200],
+      [head, '/api/records', `/api/records?from=2026-05-01&to=2026-06-30`, 200],
+      [head, '/api/sites', '/api/sites', 200],
+      [head, '/api/sites/{id}', `/api/sites/${fixture.sites.northPark}`, 200],
+      [head, '/api/sites/{id}', '/api/sites/999999', 404],
+      [head, '/api/fields', '/api/fields', 200],
+      [head, '/api/fields/{id}', `/api/fields/${fixture.fields.northSoccer}`, 200],
+      [head, '/api/field-events', '/api/field-events', 200],
+      [head, '/api/standards', '/api/standards', 200],
+      [head, '/api/imports', '/api/imports', 200],
+      [head, '/api/map', '/api/map', 200],
+      [head, '/api/map/basemap', '/api/map/basemap', 200],
+      [head, '/api/districts', '/api/districts', 200],
+      [head, '/api/audit', '/api/audit', 200],
+      [foreman, '/api/crews', '/api/crews', 200],
+      [foreman, '/api/equipment', '/api/equipment', 200],
+      [admin, '/api/dev/mail', '/api/dev/mail', 200],
+      [anonymous, '/api/openapi.json', '/api/openapi.json', 200],
+    ];
+    for (const [agent, path, url, status] of checks) {
+      expect(await conforms(agent, 'get', path, url), url).toBe(status);
+    }
+  });
+});
