@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { addDaysIso } from '@swardwise/domain';
+import { addDaysIso, DEFAULT_TIME_ZONE, localToday } from '@swardwise/domain';
 import { auditLog, fieldEvents } from '../../apps/api/src/db/schema/index.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
@@ -10,7 +10,7 @@ beforeAll(async () => {
 });
 afterAll(() => api.close());
 
-const SOON = addDaysIso(new Date().toISOString().slice(0, 10), 5);
+const SOON = addDaysIso(localToday(DEFAULT_TIME_ZONE), 5);
 const game = (fieldId: number, over: Record<string, unknown> = {}) => ({ fieldId, kind: 'game', title: 'Invented league game', startsOn: SOON, startTime: '18:30', ...over });
 const count = async () => (await api.database.db.select().from(fieldEvents)).length;
 

@@ -5,10 +5,11 @@
  */
 import { and, asc, eq, lte } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { addDaysIso, defineAbilityFor, greatCircleKm, planFieldWeek, prepareWeather, type Actor, type Level } from '@swardwise/domain';
+import { addDaysIso, DEFAULT_TIME_ZONE, defineAbilityFor, greatCircleKm, planFieldWeek, prepareWeather, type Actor, type Level } from '@swardwise/domain';
 import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
 import { districts, fields, sites, users, weatherDays, weatherStations, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
+import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
 import { loadParameters, loadStandards } from '../../apps/api/src/services/standards.ts';
 import { dailyWeatherOf } from '../../apps/api/src/services/weather.ts';
 import { generateWeek } from '../../apps/api/src/services/week-plans.ts';
@@ -26,7 +27,7 @@ beforeAll(async () => {
   districtId = d!.id;
   const [foreman] = await database.db.select().from(users).where(and(eq(users.role, 'foreman'), eq(users.districtId, districtId)));
   const actor: Actor = { id: foreman!.id, role: 'foreman', districtId, crewId: null, siteIds: [] };
-  ctx = { db: database.db, actor, ability: defineAbilityFor(actor) };
+  ctx = { db: database.db, actor, ability: defineAbilityFor(actor), clock: new DepartmentClock(database.db, DEFAULT_TIME_ZONE) };
 });
 afterAll(() => database.close());
 

@@ -1,5 +1,6 @@
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { addDaysIso, DEFAULT_TIME_ZONE, localToday } from '@swardwise/domain';
 import { giveWork } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
@@ -34,8 +35,8 @@ describe('work orders by role', () => {
 
   test('should take a longer range and refuse a bad one', async () => {
     const foreman = await api.signIn('foreman');
-    const from = new Date().toISOString().slice(0, 10);
-    const to = new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10);
+    const from = localToday(DEFAULT_TIME_ZONE);
+    const to = addDaysIso(from, 30);
     expect(got(await foreman.get('/api/work-orders').query({ from, to }))).toEqual(sorted(ids.northToday!, ids.schoolSoon!, ids.northLater!));
     const back = await foreman.get('/api/work-orders').query({ from: to, to: from });
     expect(back.status).toBe(400);

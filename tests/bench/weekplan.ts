@@ -7,10 +7,11 @@
  */
 import { performance } from 'node:perf_hooks';
 import { eq } from 'drizzle-orm';
-import { GRASSES, SPORTS, addDaysIso, defineAbilityFor, longAxis, polygonAreaM2, type Actor, type Polygon } from '@swardwise/domain';
+import { DEFAULT_TIME_ZONE, GRASSES, SPORTS, addDaysIso, defineAbilityFor, longAxis, polygonAreaM2, type Actor, type Polygon } from '@swardwise/domain';
 import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { crews, districts, fields, sites, users, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
+import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
 import { generateWeek, getWeekBoard } from '../../apps/api/src/services/week-plans.ts';
 
 const TARGET_FIELDS = Number(process.env.BENCH_FIELDS ?? 1000);
@@ -61,7 +62,7 @@ for (let i = 0; i < rows.length; i += 500) await db.insert(fields).values(rows.s
 for (let c = 0; c < 6; c++) await db.insert(crews).values({ districtId: district!.id, name: `Bench crew ${c + 1}`, hoursPerDay: 9, members: [] });
 const [foreman] = await db.select().from(users).where(eq(users.role, 'foreman'));
 const actor: Actor = { id: foreman!.id, role: 'foreman', districtId: district!.id, crewId: null, siteIds: [] };
-const ctx = { db, actor, ability: defineAbilityFor(actor) };
+const ctx = { db, actor, ability: defineAbilityFor(actor), clock: new DepartmentClock(db, DEFAULT_TIME_ZONE) };
 const q = { districtId: district!.id, weekStart: WEEK };
 
 const t0 = performance.now();

@@ -8,7 +8,7 @@ import path from 'node:path';
 import sharp from 'sharp';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
-import { mondayOf } from '@swardwise/domain';
+import { DEFAULT_TIME_ZONE, localToday, mondayOf } from '@swardwise/domain';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { launchBrowser } from './browser.ts';
 
@@ -39,8 +39,8 @@ async function signIn(page: Page, who: 'foreman' | 'crew', landing: string) {
 
 describe('from the week plan to the crew’s phone', () => {
   test('should carry two jobs the foreman assigns to the crew lead’s Today, where one is logged done with a photo', async () => {
-    // The server's clock decides "today" for both the board and Today.
-    const today = new Date().toISOString().slice(0, 10);
+    // The department's clock decides "today" for both the board and Today.
+    const today = localToday(process.env.DEPARTMENT_TIME_ZONE || DEFAULT_TIME_ZONE);
     const monday = mondayOf(today);
     const foreman = await browser.newPage({ viewport: TALL });
     let jobIds: number[] = [];

@@ -6,6 +6,7 @@ import { loadConfig } from '../../apps/api/src/config.ts';
 import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
 import { createMailer } from '../../apps/api/src/mail/mailer.ts';
 import { startMailSink, type MailSink } from '../../apps/api/src/mail/sink.ts';
+import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
 import { buildFixture, PASSWORD, type Fixture } from './fixture.ts';
 
 export interface TestApi {
@@ -14,24 +15,29 @@ export interface TestApi {
   fixture: Fixture;
   /** The SMTP sink this API sends its e-mail to. */
   mail: MailSink;
+  /** The department clock the API reads "today" from. */
+  clock: DepartmentClock;
   /** A cookie-keeping client signed in as the fixture user. */
   signIn(user: keyof Fixture['users']): Promise<ReturnType<typeof supertest.agent>>;
   close(): Promise<void>;
 }
 
-export async function startTestApi(env: Record<string, string> = {}): Promise<TestApi> {
+/** `now`: the server's clock (by default the real one), for tests that stand at a chosen instant. */
+export async function startTestApi(env: Record<string, string> = {}, options: { now?: () => Date } = {}): Promise<TestApi> {
   const database = await openDatabase({ pgliteDir: 'memory://' });
   const fixture = await buildFixture(database.db);
   const config = loadConfig({ NODE_ENV: 'test', PUBLIC_URL: 'http://portal.test', ...env });
   const logger = pino({ level: 'silent' });
   const mail = await startMailSink();
   const mailer = createMailer({ host: '127.0.0.1', port: mail.port, secure: false, ignoreTLS: true, from: config.mailFrom }, logger);
-  const { app } = createApp({ db: database.db, config, logger, sessionSecret: 'test-secret', mailer, mailSink: mail });
+  const clock = new DepartmentClock(database.db, config.departmentTimeZone, options.now);
+  const { app } = createApp({ db: database.db, config, logger, sessionSecret: 'test-secret', mailer, mailSink: mail, clock });
   return {
     database,
     app,
     fixture,
     mail,
+    clock,
     async signIn(key) {
       const agent = supertest.agent(app);
       const res = await agent.post('/api/auth/sign-in').send({ email: fixture.users[key].email, password: PASSWORD });

@@ -2,9 +2,9 @@
  * A small city built row by row for API tests: two districts, three sites, four fields,
  * two crews and one user per role (plus a second foreman and a deactivated account).
  */
-import { addDaysIso, DEFAULT_STANDARDS, LEVELS, type Polygon, type Role } from '@swardwise/domain';
+import { addDaysIso, DEFAULT_STANDARDS, DEFAULT_TIME_ZONE, LEVELS, localToday, type Polygon, type Role } from '@swardwise/domain';
 import type { Db } from '../../apps/api/src/db/client.ts';
-import { eq, sql } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import { crews, districts, fields, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { hashPassword } from '../../apps/api/src/services/users.ts';
 import { polygonAreaM2 } from '@swardwise/domain';
@@ -154,8 +154,9 @@ export async function buildFixture(db: Db): Promise<Fixture> {
   };
 }
 
-/** Gives a crew a work order on a field (a mowing, `daysFromToday` from the database's today). */
+/** Gives a crew a work order on a field (a mowing, `daysFromToday` from the department's today in the default zone the test API uses). */
 export async function giveWork(db: Db, fieldId: number, crewId: number, daysFromToday = 0): Promise<number> {
+  const today = localToday(DEFAULT_TIME_ZONE);
   const [field] = await db
     .select({ siteId: fields.siteId, districtId: sites.districtId })
     .from(fields)
@@ -168,8 +169,8 @@ export async function giveWork(db: Db, fieldId: number, crewId: number, daysFrom
       siteId: field!.siteId,
       districtId: field!.districtId,
       task: 'mow',
-      weekStart: sql`current_date`,
-      plannedDate: sql`current_date + ${daysFromToday}::int`,
+      weekStart: today,
+      plannedDate: addDaysIso(today, daysFromToday),
       crewId,
       plannedHours: 1,
       status: 'assigned',

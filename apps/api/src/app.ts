@@ -14,6 +14,7 @@ import type { Db } from './db/client.ts';
 import { createMailer, type Mailer } from './mail/mailer.ts';
 import type { MailSink } from './mail/sink.ts';
 import { loadUser, requireUser } from './http/auth.ts';
+import { withClock } from './http/clock.ts';
 import { errorHandler, notFound } from './http/errors.ts';
 import { DrizzleSessionStore } from './http/session-store.ts';
 import { serveOpenApi } from './openapi/document.ts';
@@ -25,6 +26,7 @@ import { fieldEventsRouter } from './routes/field-events.ts';
 import { fieldsRouter } from './routes/fields.ts';
 import { importsRouter } from './routes/imports.ts';
 import { mapRouter } from './routes/map.ts';
+import { settingsRouter } from './routes/settings.ts';
 import { sitesRouter } from './routes/sites.ts';
 import { standardsRouter } from './routes/standards.ts';
 import { usersRouter } from './routes/users.ts';
@@ -32,6 +34,7 @@ import { weatherRouter } from './routes/weather.ts';
 import { recordsRouter, weekPlansRouter } from './routes/week-plans.ts';
 import { workOrdersRouter } from './routes/work-orders.ts';
 import { workReportsRouter } from './routes/work-reports.ts';
+import { DepartmentClock } from './services/clock.ts';
 
 export interface AppDeps {
   db: Db;
@@ -41,17 +44,20 @@ export interface AppDeps {
   mailer: Mailer;
   /** The local SMTP sink, when this process runs one (development and tests only). */
   mailSink?: MailSink | undefined;
+  /** The department clock (its time zone a setting); tests pass one standing at a chosen instant. */
+  clock: DepartmentClock;
 }
 
 export const COOKIE_NAME = 'swardwise.sid';
 const SESSION_DAYS = 14;
 
 export function createApp(
-  deps: Omit<AppDeps, 'config' | 'mailer'> & { config: Config; mailer?: Mailer },
+  deps: Omit<AppDeps, 'config' | 'mailer' | 'clock'> & { config: Config; mailer?: Mailer; clock?: DepartmentClock },
 ): { app: Express; store: DrizzleSessionStore } {
   // Without a mailer, e-mail is off (logged), as in a deployment with no SMTP settings.
   const mailer = deps.mailer ?? createMailer(null, deps.logger);
-  const full: AppDeps = { ...deps, mailer, config: { ...deps.config, cookieName: COOKIE_NAME } };
+  const clock = deps.clock ?? new DepartmentClock(deps.db, deps.config.departmentTimeZone);
+  const full: AppDeps = { ...deps, mailer, clock, config: { ...deps.config, cookieName: COOKIE_NAME } };
   const { db, config, logger } = full;
   const app = express();
   const store = new DrizzleSessionStore(db);
@@ -104,6 +110,7 @@ export function createApp(
       },
     }),
   );
+  app.use('/api', withClock(clock));
   app.use('/api', loadUser(db));
 
   app.get('/api/health', async (_req, res) => {
@@ -125,6 +132,7 @@ export function createApp(
   app.use('/api/standards', standardsRouter(full));
   app.use('/api/imports', importsRouter(full));
   app.use('/api/map', mapRouter(full));
+  app.use('/api/settings', settingsRouter(full));
   app.use('/api', directoryRouter(full));
   app.use('/api', crewsRouter(full));
   if (devRoutes) app.use('/api/dev', devRouter(full));

@@ -1,6 +1,7 @@
 /** Settings read once from the environment; every default suits the demo on one machine. */
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { DEFAULT_TIME_ZONE, isTimeZone } from '@swardwise/domain';
 
 export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
 
@@ -38,6 +39,8 @@ export interface Config {
   weatherTimeoutMs: number;
   /** Folder of uploaded files (crews' work photos), created on first use. */
   uploadsDir: string;
+  /** The department's IANA time zone until an administrator sets one in the settings. */
+  departmentTimeZone: string;
 }
 
 function bool(value: string | undefined, fallback: boolean): boolean {
@@ -48,6 +51,10 @@ function bool(value: string | undefined, fallback: boolean): boolean {
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   const port = Number(env.PORT ?? 3000);
   if (!Number.isInteger(port) || port < 0 || port > 65535) throw new Error(`PORT must be a port number, got "${env.PORT}"`);
+  const departmentTimeZone = env.DEPARTMENT_TIME_ZONE || DEFAULT_TIME_ZONE;
+  if (!isTimeZone(departmentTimeZone)) {
+    throw new Error(`DEPARTMENT_TIME_ZONE must be an IANA time zone such as America/Chicago, got "${env.DEPARTMENT_TIME_ZONE}"`);
+  }
   return {
     port,
     host: env.HOST ?? '0.0.0.0',
@@ -80,5 +87,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     weatherApiKey: env.WEATHER_API_KEY || undefined,
     weatherTimeoutMs: Number(env.WEATHER_TIMEOUT_MS ?? 10_000),
     uploadsDir: path.resolve(env.UPLOADS_DIR ?? './data/uploads'),
+    departmentTimeZone,
   };
 }

@@ -6,6 +6,7 @@ import { openDatabase } from './db/client.ts';
 import { seedDemoCity } from './db/seed/index.ts';
 import { createMailer, type SmtpSettings } from './mail/mailer.ts';
 import { startMailSink, type MailSink } from './mail/sink.ts';
+import { DepartmentClock } from './services/clock.ts';
 import { sessionSecretFor } from './services/settings.ts';
 
 async function main() {
@@ -14,8 +15,12 @@ async function main() {
   const started = Date.now();
   const database = await openDatabase({ databaseUrl: config.databaseUrl, pgliteDir: config.pgliteDir });
   logger.info({ kind: database.kind, dir: database.kind === 'pglite' ? config.pgliteDir : undefined, ms: Date.now() - started }, 'database ready');
+  // A stored time zone this runtime does not know stops the start here, with the reason.
+  const clock = new DepartmentClock(database.db, config.departmentTimeZone);
+  await clock.ready();
+  logger.info({ timeZone: clock.timeZone, today: clock.today() }, 'department clock');
   if (config.seedDemo) {
-    const seeded = await seedDemoCity(database.db);
+    const seeded = await seedDemoCity(database.db, clock.today());
     if (seeded) logger.info(seeded, 'demo city seeded (invented data)');
   }
   const sessionSecret = await sessionSecretFor(database.db, config.sessionSecret);
@@ -29,7 +34,7 @@ async function main() {
     logger.info({ port: mailSink.port }, 'development mail sink listening; messages at /api/dev/mail');
   }
   const mailer = createMailer(smtp, logger);
-  const { app, store } = createApp({ db: database.db, config, logger, sessionSecret, mailer, mailSink });
+  const { app, store } = createApp({ db: database.db, config, logger, sessionSecret, mailer, mailSink, clock });
   const server = app.listen(config.port, config.host, () => {
     logger.info({ url: `http://localhost:${config.port}`, production: config.production }, 'Swardwise is listening');
   });

@@ -2,6 +2,7 @@
 import type { RequestHandler } from 'express';
 import { AppError, type Actor } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
+import type { Clock } from '../services/clock.ts';
 import { contextFor, type Ctx } from '../services/context.ts';
 import { actorOf, sessionUser, type SessionUser } from '../services/users.ts';
 
@@ -9,6 +10,8 @@ declare module 'express-serve-static-core' {
   interface Request {
     user?: SessionUser;
     actor?: Actor;
+    /** The department clock, put on every API request by `withClock`. */
+    clock?: Clock;
   }
 }
 
@@ -38,7 +41,8 @@ export const requireUser: RequestHandler = (req, _res, next) => {
 };
 
 /** The service context for this request; only after `requireUser`. */
-export function ctxOf(db: Db, req: { actor?: Actor }): Ctx {
+export function ctxOf(db: Db, req: { actor?: Actor; clock?: Clock }): Ctx {
   if (!req.actor) throw new AppError('unauthenticated', 'auth/unauthenticated', 'Sign in to continue');
-  return contextFor(db, req.actor);
+  if (!req.clock) throw new Error('the department clock is not on the request (withClock runs before the routes)');
+  return contextFor(db, req.actor, req.clock);
 }

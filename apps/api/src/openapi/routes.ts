@@ -51,6 +51,9 @@ import { querySchema as workOrdersQuery, deleteQuerySchema as workOrderDeleteQue
 import { photoBodySchema, photoParamsSchema } from '../routes/work-reports.ts';
 import { PHOTO_MAX_BYTES, PHOTOS_PER_ORDER } from '../services/work-photos.ts';
 import { allowed, publicAccess, signedIn, type Access } from './access.ts';
+
+/** The list queries default their dates to the department's today; the documented input is the same whatever the day. */
+const DOC_TODAY = '2000-01-01';
 import { bool, date, int, nullable, ref, row, rows, shape, str, strings, type ErrorStatus } from './answers.ts';
 
 export type Method = 'get' | 'post' | 'patch' | 'delete';
@@ -284,7 +287,7 @@ const workOrders: RouteDoc[] = [
     tag: 'Work orders',
     summary: 'Work orders in a date range (default: today and the next 6 days)',
     access: allowed('read', 'WorkOrder'),
-    query: workOrdersQuery,
+    query: workOrdersQuery(DOC_TODAY),
     answers: [json(200, 'Work orders the caller may read.', items('Work orders with field, site, crew and equipment names'))],
   },
   {
@@ -548,7 +551,7 @@ const fieldEvents: RouteDoc[] = [
     tag: 'Field events',
     summary: 'Bookings of fields (games, tournaments, …) in a date range (default: the next 92 days)',
     access: allowed('read', 'FieldEvent'),
-    query: fieldEventsQuery,
+    query: fieldEventsQuery(DOC_TODAY),
     answers: [json(200, 'Bookings the caller may read.', items('Bookings'))],
   },
   {

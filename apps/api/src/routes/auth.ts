@@ -19,8 +19,10 @@ function startSession(req: Request, user: SessionUser): Promise<void> {
   });
 }
 
-export function authRouter({ db, config, mailer }: AppDeps): Router {
+export function authRouter({ db, config, mailer, clock }: AppDeps): Router {
   const router = Router();
+  // The session answer carries the department's time zone: the portal's "today" is its local date.
+  const session = (user: SessionUser) => ({ user, timeZone: clock.timeZone });
 
   const signInLimiter = rateLimit({
     windowMs: config.loginWindowMs,
@@ -39,7 +41,7 @@ export function authRouter({ db, config, mailer }: AppDeps): Router {
     const input = parse(signInSchema, req.body, 'body');
     const user = await verifyCredentials(db, input.email, input.password);
     await startSession(req, user);
-    res.json({ user });
+    res.json(session(user));
   });
 
   router.post('/sign-out', (req, res, next) => {
@@ -51,20 +53,20 @@ export function authRouter({ db, config, mailer }: AppDeps): Router {
   });
 
   router.get('/me', requireUser, (req, res) => {
-    res.json({ user: req.user });
+    res.json(session(req.user!));
   });
 
   router.patch('/me', requireUser, async (req, res) => {
     const input = parse(updateProfileSchema, req.body, 'body');
     const user = await updateProfile(ctxOf(db, req), input);
-    res.json({ user });
+    res.json(session(user));
   });
 
   router.post('/accept-invite', signInLimiter, async (req, res) => {
     const input = parse(acceptInviteSchema, req.body, 'body');
     const user = await acceptInvite(db, input.token, input.password);
     await startSession(req, user);
-    res.json({ user });
+    res.json(session(user));
   });
 
   // The same answer whether or not the account exists, so the form cannot be used to probe e-mails.
@@ -79,7 +81,7 @@ export function authRouter({ db, config, mailer }: AppDeps): Router {
     const input = parse(resetPasswordSchema, req.body, 'body');
     const user = await resetPassword(db, input.token, input.password);
     await startSession(req, user);
-    res.json({ user });
+    res.json(session(user));
   });
 
   return router;

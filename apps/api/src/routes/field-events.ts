@@ -8,12 +8,12 @@ import { parse } from '../http/validate.ts';
 import { createFieldEvent, deleteFieldEvent, listFieldEvents, updateFieldEvent } from '../services/field-events.ts';
 
 const isoDate = z.iso.date('use a date as YYYY-MM-DD');
-const today = () => new Date().toISOString().slice(0, 10);
 /** Without dates: the coming three months, what a season's bookings list needs at a glance. */
 const DEFAULT_DAYS = 92;
 const MAX_DAYS = 400;
 
-export const listQuery = z
+/** `today` is the department's. */
+export const listQuery = (today: string) => z
   .object({
     from: isoDate.optional(),
     to: isoDate.optional(),
@@ -22,7 +22,7 @@ export const listQuery = z
     districtId: idSchema.optional(),
   })
   .transform((q) => {
-    const from = q.from ?? (q.to ? addDaysIso(q.to, -DEFAULT_DAYS) : today());
+    const from = q.from ?? (q.to ? addDaysIso(q.to, -DEFAULT_DAYS) : today);
     return { ...q, from, to: q.to ?? addDaysIso(from, DEFAULT_DAYS) };
   })
   .refine((q) => q.from <= q.to, { path: ['to'], message: 'the end date is before the start date' })
@@ -33,7 +33,8 @@ export function fieldEventsRouter({ db }: AppDeps): Router {
   const router = Router();
 
   router.get('/', async (req, res) => {
-    res.json({ items: await listFieldEvents(ctxOf(db, req), parse(listQuery, req.query, 'query')) });
+    const ctx = ctxOf(db, req);
+    res.json({ items: await listFieldEvents(ctx, parse(listQuery(ctx.clock.today()), req.query, 'query')) });
   });
   router.post('/', async (req, res) => {
     const ctx = ctxOf(db, req);

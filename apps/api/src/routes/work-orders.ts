@@ -8,15 +8,15 @@ import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { createWorkOrder, deleteWorkOrder, listWorkOrders, updateWorkOrder, type WriteDeps } from '../services/work-orders.ts';
 
-const today = () => new Date().toISOString().slice(0, 10);
-export const querySchema = z
+/** Without dates: the department's today and the six days after it. */
+export const querySchema = (today: string) => z
   .object({
     from: z.iso.date('use a date as YYYY-MM-DD').optional(),
     to: z.iso.date('use a date as YYYY-MM-DD').optional(),
     crewId: idSchema.optional(),
     districtId: idSchema.optional(),
   })
-  .transform((q) => ({ ...q, from: q.from ?? today(), to: q.to ?? addDaysIso(q.from ?? today(), 6) }))
+  .transform((q) => ({ ...q, from: q.from ?? today, to: q.to ?? addDaysIso(q.from ?? today, 6) }))
   .refine((q) => q.from <= q.to, { path: ['to'], message: 'the end date is before the start date' })
   .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / 86_400_000 <= 92, { path: ['to'], message: 'ask for at most 92 days at a time' });
 export const deleteQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
@@ -31,7 +31,8 @@ export function workOrdersRouter(deps: AppDeps): Router {
   const { db } = deps;
   const router = Router();
   router.get('/', async (req, res) => {
-    res.json({ items: await listWorkOrders(ctxOf(db, req), parse(querySchema, req.query, 'query')) });
+    const ctx = ctxOf(db, req);
+    res.json({ items: await listWorkOrders(ctx, parse(querySchema(ctx.clock.today()), req.query, 'query')) });
   });
   router.post('/', async (req, res) => {
     const ctx = ctxOf(db, req);

@@ -1,15 +1,18 @@
 /** The caller's identity, passed explicitly into every service. */
 import { AppError, asSubject, defineAbilityFor, type Action, type Actor, type AppAbility, type ScopedRow, type SubjectName } from '@swardwise/domain';
 import type { Queryable } from '../db/client.ts';
+import type { Clock } from './clock.ts';
 
 export interface Ctx {
   db: Queryable;
   actor: Actor;
   ability: AppAbility;
+  /** The department clock: every "today" and local date comes from here. */
+  clock: Clock;
 }
 
-export function contextFor(db: Queryable, actor: Actor): Ctx {
-  return { db, actor, ability: defineAbilityFor(actor) };
+export function contextFor(db: Queryable, actor: Actor, clock: Clock): Ctx {
+  return { db, actor, ability: defineAbilityFor(actor), clock };
 }
 
 /** Throws 403 unless the actor may do `action` on the subject (or on this row of it). */

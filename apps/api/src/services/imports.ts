@@ -109,7 +109,7 @@ export async function commitImport(ctx: Ctx, id: number) {
     if (summary.errors > 0) {
       throw new AppError('conflict', 'import/has_errors', `${summary.errors} row${summary.errors === 1 ? ' has' : 's have'} errors; fix ${summary.errors === 1 ? 'it' : 'them'} in the file and upload it again`, { errors: summary.errors });
     }
-    const txCtx = contextFor(tx, ctx.actor);
+    const txCtx = contextFor(tx, ctx.actor, ctx.clock);
     // Check again inside the transaction: rows may have changed since the preview.
     const stored = record.rows as ImportRow[];
     const plan = await planImport(txCtx, record.kind, stored.map((r) => ({ row: r.row, data: r.data })));

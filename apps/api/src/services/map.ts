@@ -104,13 +104,9 @@ function compact(polygon: Polygon): Polygon {
   return { type: 'Polygon', coordinates: polygon.coordinates.map((ring) => ring.map((p) => [round6(p[0]), round6(p[1])])) as Polygon['coordinates'] };
 }
 
-function todayIso(): string {
-  return new Date().toISOString().slice(0, 10);
-}
-
 async function cached(ctx: Ctx, query: MapQuery) {
   authorize(ctx, 'read', 'Field');
-  const requested = query.asOf ?? todayIso();
+  const requested = query.asOf ?? ctx.clock.today();
   // Kept as JSON too: serialising 3,000 outlines costs more than the lookup.
   return cachedAnswer(ctx, 'map', requested, async () => {
     const answer = await buildMap(ctx, requested);

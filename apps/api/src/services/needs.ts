@@ -103,7 +103,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
   const allDays = await ctx.db.select().from(weatherDays).where(eq(weatherDays.stationId, station.id)).orderBy(asc(weatherDays.date));
 
   // The week asked for, or else the latest week with weather on or before it.
-  const requested = date ?? new Date().toISOString().slice(0, 10);
+  const requested = date ?? ctx.clock.today();
   const askedStart = mondayOf(requested);
   const askedEnd = addDaysIso(askedStart, 6);
   const have = new Set(allDays.map((d) => d.date));

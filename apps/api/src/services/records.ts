@@ -27,7 +27,7 @@ const empty = (): Tally => ({ plannedHours: 0, actualHours: 0, plannedHoursDone:
 const r2 = (v: number) => Math.round(v * 100) / 100;
 const finish = <T extends Tally>(t: T): T => ({ ...t, plannedHours: r2(t.plannedHours), actualHours: r2(t.actualHours), plannedHoursDone: r2(t.plannedHoursDone) });
 
-export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = new Date().toISOString().slice(0, 10)) {
+export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.today()) {
   authorize(ctx, 'read', 'WorkOrder', q.districtId ? { districtId: q.districtId } : undefined);
   const conditions = [gte(workOrders.plannedDate, q.from), lte(workOrders.plannedDate, q.to), readScope(ctx)];
   if (q.districtId) conditions.push(eq(workOrders.districtId, q.districtId));
@@ -69,7 +69,8 @@ export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = new Date()
     const crewKey = String(r.crewId ?? 'none');
     const c = byCrew.get(crewKey) ?? { ...empty(), crewId: r.crewId, crewName: r.crewName ?? 'No crew' };
     const w = byWeek.get(r.weekStart) ?? { ...empty(), weekStart: r.weekStart };
-    const doneOn = r.doneAt ? new Date(r.doneAt).toISOString().slice(0, 10) : null;
+    // The department's date of the moment it was done: 23:30 local is still that day.
+    const doneOn = r.doneAt ? ctx.clock.dateOf(r.doneAt) : null;
     const dueBy = typeof r.details.dueBy === 'string' ? r.details.dueBy : r.plannedDate;
     const isLate = r.status === 'done' && doneOn !== null && doneOn > dueBy;
     if (r.task === 'mow' && isLate && doneOn) late.push({ id: r.id, fieldName: r.fieldName, siteName: r.siteName, dueBy, doneOn, daysLate: Math.round((Date.parse(doneOn) - Date.parse(dueBy)) / 86_400_000) });

@@ -115,11 +115,10 @@ interface GenerationInput {
 }
 
 /** Everything the engine needs for a district's week, read in a few queries. */
-async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: ExistingRow[]) {
+async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: ExistingRow[], today: string) {
   const dates = weekDates(q.weekStart);
   const weekEnd = dates[6]!;
-  // In the week under way, work goes on today or later.
-  const today = new Date().toISOString().slice(0, 10);
+  // In the week under way, work goes on today (the department's) or later.
   const notBefore = today > q.weekStart && today <= weekEnd ? today : undefined;
   const district = await districtRow(db, q.districtId);
   const { standards } = await loadStandards(db);
@@ -342,7 +341,7 @@ export async function generateWeek(ctx: Ctx, input: GenerateWeekInput) {
   authorize(ctx, 'create', 'WorkOrder', { districtId: input.districtId });
   const q = { districtId: input.districtId, weekStart: input.weekStart };
   const existing = await weekRows(ctx.db, q.districtId, q.weekStart);
-  const plan = await planDistrictWeek(ctx.db, q, existing);
+  const plan = await planDistrictWeek(ctx.db, q, existing, ctx.clock.today());
   const rec = reconcileWeek(existing, plan.orders);
 
   const fieldInfo = new Map(

@@ -139,14 +139,14 @@ export async function reportWork(ctx: Ctx, id: number, input: WorkReportInput): 
     const earlier = await earlierAnswer(ctx, id, input.clientRef);
     if (earlier) return earlier;
   }
-  const reportedAt = input.reportedAt ? new Date(input.reportedAt) : new Date();
-  if (reportedAt.getTime() > Date.now() + CLOCK_SKEW_MS) {
+  const reportedAt = input.reportedAt ? new Date(input.reportedAt) : ctx.clock.now();
+  if (reportedAt.getTime() > ctx.clock.now().getTime() + CLOCK_SKEW_MS) {
     throw new AppError('invalid', 'request/invalid', 'The report is dated in the future; check the phone’s clock', {
       issues: [{ path: 'body.reportedAt', message: 'the time is in the future' }],
     });
   }
-  // The crew's own calendar day: the date as written with the phone's offset.
-  const reportedOn = input.reportedAt ? input.reportedAt.slice(0, 10) : reportedAt.toISOString().slice(0, 10);
+  // The department's calendar day of the moment reported, whatever the phone's offset.
+  const reportedOn = ctx.clock.dateOf(reportedAt);
 
   try {
     return await (ctx.db as Db).transaction(async (tx) => {

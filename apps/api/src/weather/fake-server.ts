@@ -6,7 +6,7 @@
 import type { AddressInfo } from 'node:net';
 import type { Server } from 'node:http';
 import express from 'express';
-import { addDaysIso, dayOfYear, isoToDayNumber } from '@swardwise/domain';
+import { addDaysIso, dayOfYear, DEFAULT_TIME_ZONE, isoToDayNumber, localToday } from '@swardwise/domain';
 import type { ProviderDay } from './provider.ts';
 
 export type FakeBehaviour = 'ok' | 'slow' | 'error' | 'malformed' | 'gaps' | 'not_json';
@@ -51,9 +51,10 @@ export function fakeDay(lat: number, lng: number, date: string, today: string): 
   };
 }
 
-export async function startFakeWeather(options: { port?: number; apiKey?: string; today?: string; slowMs?: number } = {}): Promise<FakeWeather> {
+/** `today` (the last observed day) defaults to the local date in `timeZone`, by default the demo city's. */
+export async function startFakeWeather(options: { port?: number; apiKey?: string; today?: string; timeZone?: string; slowMs?: number } = {}): Promise<FakeWeather> {
   const apiKey = options.apiKey ?? 'fake-weather-key';
-  const today = options.today ?? new Date().toISOString().slice(0, 10);
+  const today = options.today ?? localToday(options.timeZone ?? DEFAULT_TIME_ZONE);
   let behaviour: FakeBehaviour = 'ok';
   let count = 0;
   const app = express();
@@ -100,6 +101,6 @@ export async function startFakeWeather(options: { port?: number; apiKey?: string
 // `node --import tsx apps/api/src/weather/fake-server.ts` runs it on its own (the dev script does).
 if (import.meta.url === `file://${process.argv[1]}`) {
   const port = Number(process.env.FAKE_WEATHER_PORT ?? 3099);
-  const fake = await startFakeWeather({ port, apiKey: process.env.WEATHER_API_KEY ?? 'dev-weather-key' });
+  const fake = await startFakeWeather({ port, apiKey: process.env.WEATHER_API_KEY ?? 'dev-weather-key', timeZone: process.env.DEPARTMENT_TIME_ZONE || undefined });
   console.warn(`fake weather service on ${fake.url} (key ${fake.apiKey})`);
 }

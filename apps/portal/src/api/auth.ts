@@ -2,28 +2,34 @@ import type { UnitSystem } from '@swardwise/domain';
 import { api } from './client.ts';
 import type { SessionUser } from './types.ts';
 
-export async function fetchMe(): Promise<SessionUser> {
-  return (await api.get<{ user: SessionUser }>('/auth/me')).user;
+/** The signed-in session: the user and the department's IANA time zone (its "today" is a local date there). */
+export interface SessionAnswer {
+  user: SessionUser;
+  timeZone: string;
 }
 
-export async function signIn(email: string, password: string): Promise<SessionUser> {
-  return (await api.post<{ user: SessionUser }>('/auth/sign-in', { email, password })).user;
+export function fetchMe(): Promise<SessionAnswer> {
+  return api.get<SessionAnswer>('/auth/me');
+}
+
+export function signIn(email: string, password: string): Promise<SessionAnswer> {
+  return api.post<SessionAnswer>('/auth/sign-in', { email, password });
 }
 
 export async function signOut(): Promise<void> {
   await api.post<void>('/auth/sign-out');
 }
 
-export async function updateMe(patch: { version: number; name?: string; units?: UnitSystem }): Promise<SessionUser> {
-  return (await api.patch<{ user: SessionUser }>('/auth/me', patch)).user;
+export function updateMe(patch: { version: number; name?: string; units?: UnitSystem }): Promise<SessionAnswer> {
+  return api.patch<SessionAnswer>('/auth/me', patch);
 }
 
-export async function acceptInvite(token: string, password: string): Promise<SessionUser> {
-  return (await api.post<{ user: SessionUser }>('/auth/accept-invite', { token, password })).user;
+export function acceptInvite(token: string, password: string): Promise<SessionAnswer> {
+  return api.post<SessionAnswer>('/auth/accept-invite', { token, password });
 }
 
-export async function resetPassword(token: string, password: string): Promise<SessionUser> {
-  return (await api.post<{ user: SessionUser }>('/auth/reset-password', { token, password })).user;
+export function resetPassword(token: string, password: string): Promise<SessionAnswer> {
+  return api.post<SessionAnswer>('/auth/reset-password', { token, password });
 }
 
 export async function forgotPassword(email: string): Promise<string> {

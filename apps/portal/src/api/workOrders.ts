@@ -38,7 +38,7 @@ export interface WorkReportBody {
   actualHours: number | null;
   note: string;
   clientRef: string;
-  /** The phone's clock with its offset, so the crew's calendar day is kept. */
+  /** The moment reported, with the phone's offset; the API takes the department's date of it. */
   reportedAt: string;
 }
 

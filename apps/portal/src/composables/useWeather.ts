@@ -1,5 +1,5 @@
 import { computed, type MaybeRefOrGetter, toValue } from 'vue';
-import { et0PenmanMonteith, type WeatherDayInput } from '@swardwise/domain';
+import { addDaysIso, et0PenmanMonteith, type WeatherDayInput } from '@swardwise/domain';
 import { listStations, listWeatherDays } from '../api/weather.ts';
 import type { WeatherDayRow, WeatherStationRow } from '../api/types.ts';
 import { useAsync } from './useAsync.ts';
@@ -48,8 +48,7 @@ export function useStationDays(query: MaybeRefOrGetter<{ station: WeatherStation
     if (!q || !answer) return [];
     const byDate = new Map(answer.days.map((d) => [d.date, d]));
     const out: StationDay[] = [];
-    for (let t = Date.parse(`${q.from}T00:00:00Z`); t <= Date.parse(`${q.to}T00:00:00Z`); t += 86_400_000) {
-      const date = new Date(t).toISOString().slice(0, 10);
+    for (let date = q.from; date <= q.to; date = addDaysIso(date, 1)) {
       const day = byDate.get(date) ?? null;
       out.push({ date, day, et0Mm: day ? dayEt0(day, q.station) : null });
     }

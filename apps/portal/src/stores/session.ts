@@ -1,4 +1,4 @@
-import { defineAbilityFor, type Actor, type Role, type UnitSystem } from '@swardwise/domain';
+import { DEFAULT_TIME_ZONE, defineAbilityFor, isTimeZone, localToday, localWeekStart, type Actor, type Role, type UnitSystem } from '@swardwise/domain';
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
 import { ability } from '../ability.ts';
@@ -21,6 +21,8 @@ export const LANDING: Record<Role, string> = {
 
 export const useSessionStore = defineStore('session', () => {
   const user = ref<SessionUser | null>(null);
+  /** The department's IANA time zone, from the session answer. */
+  const timeZone = ref(DEFAULT_TIME_ZONE);
   const loaded = ref(false);
   /** True once the person chose to sign out, so the end of the session is not treated as an expiry. */
   const signedOut = ref(false);
@@ -35,12 +37,32 @@ export const useSessionStore = defineStore('session', () => {
     ability.update(next ? defineAbilityFor(actorOf(next)).rules : []);
   }
 
+  function setSession(answer: auth.SessionAnswer) {
+    setTimeZone(answer.timeZone);
+    setUser(answer.user);
+  }
+
+  /** Takes the department's zone (from a session answer or after an administrator changed it); a name the browser does not know is ignored. */
+  function setTimeZone(next: string | undefined) {
+    if (next && isTimeZone(next)) timeZone.value = next;
+  }
+
+  /** The department's local date (YYYY-MM-DD) at `now`: the one "today" of every page. */
+  function today(now: Date = new Date()): string {
+    return localToday(timeZone.value, now);
+  }
+
+  /** Monday of the department's current week. */
+  function weekStart(now: Date = new Date()): string {
+    return localWeekStart(timeZone.value, now);
+  }
+
   /** Asks the API once who is signed in; a 401 simply means nobody. */
   function load(): Promise<void> {
     if (loaded.value) return Promise.resolve();
     loading ??= auth
       .fetchMe()
-      .then(setUser, (error: unknown) => {
+      .then(setSession, (error: unknown) => {
         if (!(error instanceof ApiError && error.status === 401)) throw error;
         setUser(null);
       })
@@ -52,17 +74,17 @@ export const useSessionStore = defineStore('session', () => {
   }
 
   async function signIn(email: string, password: string) {
-    setUser(await auth.signIn(email, password));
+    setSession(await auth.signIn(email, password));
     loaded.value = true;
   }
 
   async function acceptInvite(token: string, password: string) {
-    setUser(await auth.acceptInvite(token, password));
+    setSession(await auth.acceptInvite(token, password));
     loaded.value = true;
   }
 
   async function resetPassword(token: string, password: string) {
-    setUser(await auth.resetPassword(token, password));
+    setSession(await auth.resetPassword(token, password));
     loaded.value = true;
   }
 
@@ -78,7 +100,7 @@ export const useSessionStore = defineStore('session', () => {
 
   async function setUnits(next: UnitSystem) {
     if (!user.value || user.value.units === next) return;
-    setUser(await auth.updateMe({ version: user.value.version, units: next }));
+    setSession(await auth.updateMe({ version: user.value.version, units: next }));
   }
 
   /** Called when any request finds the session gone (401). */
@@ -86,5 +108,5 @@ export const useSessionStore = defineStore('session', () => {
     setUser(null);
   }
 
-  return { user, loaded, signedOut, units, landing, load, signIn, acceptInvite, resetPassword, signOut, setUnits, expire };
+  return { user, timeZone, loaded, signedOut, units, landing, load, signIn, acceptInvite, resetPassword, signOut, setUnits, expire, setTimeZone, today, weekStart };
 });

@@ -50,7 +50,7 @@ export function newRef(): string {
   return `r${Date.now().toString(36)}${Math.random().toString(36).slice(2, 12)}`;
 }
 
-/** The local time with its UTC offset (the API keeps the crew's calendar day from it). */
+/** The phone's time with its UTC offset: the moment of the report (the API dates it in the department's zone). */
 export function localIso(date = new Date()): string {
   const pad = (n: number) => String(Math.trunc(Math.abs(n))).padStart(2, '0');
   const offset = -date.getTimezoneOffset();

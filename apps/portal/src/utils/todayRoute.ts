@@ -19,12 +19,6 @@ export interface CrewDayPlan {
   stops: RouteStopJobs[];
 }
 
-/** The browser's calendar date, YYYY-MM-DD (a crew's day is its local day). */
-export function localDate(date = new Date()): string {
-  const pad = (n: number) => String(n).padStart(2, '0');
-  return `${date.getFullYear()}-${pad(date.getMonth() + 1)}-${pad(date.getDate())}`;
-}
-
 export function dayLabel(date: string, today: string): string {
   const long = new Date(`${date}T12:00:00`).toLocaleDateString('en-US', { weekday: 'long', month: 'short', day: 'numeric' });
   if (date === today) return `Today, ${long}`;

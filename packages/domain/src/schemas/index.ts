@@ -9,3 +9,4 @@ export * from './standards.ts';
 export * from './weather.ts';
 export * from './crews.ts';
 export * from './work.ts';
+export * from './settings.ts';

@@ -3,7 +3,7 @@
  * again changes nothing (a marker row in `settings` records that it ran).
  */
 import { eq } from 'drizzle-orm';
-import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, addDaysIso, hocFor, hoursPerMowingPolygon, mondayOf, mowerTypeFor, surfaceScore, weekdayOf, type Level } from '@swardwise/domain';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, DEFAULT_TIME_ZONE, LEVELS, addDaysIso, localToday, hocFor, hoursPerMowingPolygon, mondayOf, mowerTypeFor, surfaceScore, weekdayOf, type Level } from '@swardwise/domain';
 import type { Db } from '../client.ts';
 import { crews, districts, equipment, fieldChecks, fieldEvents, fields, settings, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../schema/index.ts';
 import { outlineFacts } from '../../services/fields.ts';
@@ -26,8 +26,11 @@ export interface SeedSummary {
   fieldEvents: number;
 }
 
-/** Returns what was inserted, or null when the demo city (or any data) is already there. */
-export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
+/**
+ * Returns what was inserted, or null when the demo city (or any data) is already there.
+ * `today` is the department's date (the server passes its clock's); the demo city's zone by default.
+ */
+export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TIME_ZONE)): Promise<SeedSummary | null> {
   const [marker] = await db.select().from(settings).where(eq(settings.key, MARKER));
   if (marker) return null;
   const existing = await db.select({ id: districts.id }).from(districts).limit(1);
@@ -191,7 +194,6 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
 
     // A few days of invented mowing work per crew from the day of seeding, so crew leads
     // have work (and the fields of it) to see; the foreman's week plan takes over from here.
-    const today = new Date().toISOString().slice(0, 10);
     const crewsByDistrict = new Map<string, number[]>();
     for (const c of city.crews) crewsByDistrict.set(c.districtCode, [...(crewsByDistrict.get(c.districtCode) ?? []), crewIds.get(c.name)!]);
     const siteOf = new Map(city.sites.map((s) => [s.key, s]));

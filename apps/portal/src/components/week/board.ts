@@ -17,12 +17,6 @@ export function cellKey(crewId: number | null, date: string): CellKey {
   return `${crewId ?? UNASSIGNED}|${date}`;
 }
 
-/** Today in the browser's own calendar, as YYYY-MM-DD. */
-export function localToday(now = new Date()): string {
-  const pad = (n: number) => String(n).padStart(2, '0');
-  return `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}`;
-}
-
 export interface BoardFilter {
   siteIds: readonly number[];
   tasks: readonly WorkTask[];

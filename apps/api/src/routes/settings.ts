@@ -1,0 +1,25 @@
+/** Department settings (the time zone); administrators only. */
+import { Router } from 'express';
+import { updateDepartmentSettingsSchema } from '@swardwise/domain';
+import type { AppDeps } from '../app.ts';
+import { ctxOf } from '../http/auth.ts';
+import { parse } from '../http/validate.ts';
+import { authorize } from '../services/context.ts';
+import { getDepartmentSettings, updateDepartmentSettings } from '../services/settings.ts';
+
+export function settingsRouter({ db, clock }: AppDeps): Router {
+  const router = Router();
+
+  router.get('/', async (req, res) => {
+    res.json(await getDepartmentSettings(ctxOf(db, req), clock));
+  });
+
+  router.patch('/', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    // Who is asking, before the body is read.
+    authorize(ctx, 'manage', 'Settings');
+    res.json(await updateDepartmentSettings(ctx, clock, parse(updateDepartmentSettingsSchema, req.body, 'body')));
+  });
+
+  return router;
+}
