@@ -28,6 +28,7 @@ import {
   resetPasswordSchema,
   signInSchema,
   updateCrewSchema,
+  updateDepartmentSettingsSchema,
   updateEquipmentSchema,
   updateFieldEventSchema,
   updateFieldSchema,
@@ -612,6 +613,28 @@ const standards: RouteDoc[] = [
   },
 ];
 
+const settings: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/settings',
+    tag: 'Settings',
+    summary: 'The department settings: its time zone (IANA name), where it comes from and its version',
+    access: allowed('manage', 'Settings'),
+    answers: [json(200, 'The settings.', shape({ timeZone: str('IANA time-zone name'), source: str('setting or default'), defaultTimeZone: str(), version: int() }))],
+  },
+  {
+    method: 'patch',
+    path: '/api/settings',
+    tag: 'Settings',
+    summary: 'Change the department time zone; "today" and week boundaries follow at once',
+    description: VERSION_NOTE,
+    access: allowed('manage', 'Settings'),
+    body: updateDepartmentSettingsSchema,
+    answers: [json(200, 'The settings after the change.', shape({ timeZone: str('IANA time-zone name'), source: str('setting or default'), defaultTimeZone: str(), version: int() }))],
+    errors: [409],
+  },
+];
+
 const importNote = 'Only the person who uploaded an import may commit or undo it.';
 const imports: RouteDoc[] = [
   {
@@ -839,6 +862,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...fields,
   ...fieldEvents,
   ...standards,
+  ...settings,
   ...imports,
   ...map,
   ...directory,

@@ -8,7 +8,9 @@ export const timeZoneSchema = z
   .string({ error: 'the time zone is a name such as America/Chicago' })
   .trim()
   .refine(isTimeZone, 'use an IANA time zone such as America/Chicago or America/New_York')
-  .transform((name) => new Intl.DateTimeFormat('en-US', { timeZone: name }).resolvedOptions().timeZone);
+  // `overwrite` keeps the input type (the OpenAPI document describes it as a plain string); it
+  // runs even after a failed check, so an unknown name is passed through for the refine to report.
+  .overwrite((name) => (isTimeZone(name) ? new Intl.DateTimeFormat('en-US', { timeZone: name }).resolvedOptions().timeZone : name));
 
 export const updateDepartmentSettingsSchema = z.object({
   timeZone: timeZoneSchema,
