@@ -16,6 +16,8 @@ export interface TestApi {
   mail: MailSink;
   /** A cookie-keeping client signed in as the fixture user. */
   signIn(user: keyof Fixture['users']): Promise<ReturnType<typeof supertest.agent>>;
+  /** The same for any account with the fixture password (see `addUser`). */
+  signInAs(email: string): Promise<ReturnType<typeof supertest.agent>>;
   close(): Promise<void>;
 }
 
@@ -32,10 +34,13 @@ export async function startTestApi(env: Record<string, string> = {}): Promise<Te
     app,
     fixture,
     mail,
-    async signIn(key) {
+    signIn(key) {
+      return this.signInAs(fixture.users[key].email);
+    },
+    async signInAs(email) {
       const agent = supertest.agent(app);
-      const res = await agent.post('/api/auth/sign-in').send({ email: fixture.users[key].email, password: PASSWORD });
-      if (res.status !== 200) throw new Error(`sign-in as ${key} failed: ${res.status} ${JSON.stringify(res.body)}`);
+      const res = await agent.post('/api/auth/sign-in').send({ email, password: PASSWORD });
+      if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
       return agent;
     },
     close: async () => {
