@@ -29,20 +29,19 @@ export async function startTestApi(env: Record<string, string> = {}): Promise<Te
   const mail = await startMailSink();
   const mailer = createMailer({ host: '127.0.0.1', port: mail.port, secure: false, ignoreTLS: true, from: config.mailFrom }, logger);
   const { app } = createApp({ db: database.db, config, logger, sessionSecret: 'test-secret', mailer, mailSink: mail });
+  async function signInAs(email: string) {
+    const agent = supertest.agent(app);
+    const res = await agent.post('/api/auth/sign-in').send({ email, password: PASSWORD });
+    if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+    return agent;
+  }
   return {
     database,
     app,
     fixture,
     mail,
-    signIn(key) {
-      return this.signInAs(fixture.users[key].email);
-    },
-    async signInAs(email) {
-      const agent = supertest.agent(app);
-      const res = await agent.post('/api/auth/sign-in').send({ email, password: PASSWORD });
-      if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
-      return agent;
-    },
+    signIn: (key) => signInAs(fixture.users[key].email),
+    signInAs,
     close: async () => {
       await mail.close();
       await database.close();
