@@ -6,6 +6,7 @@ import { districts, fields, sites } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
 import { cachedAnswer } from './answer-cache.ts';
+import { followMove } from './scope-copies.ts';
 import { fieldCrewIds, fieldScope } from './scope.ts';
 
 const listColumns = {
@@ -123,6 +124,8 @@ export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput)
       .where(and(eq(fields.id, id), eq(fields.version, version)))
       .returning({ id: fields.id });
     if (!updated) throw versionConflict('field');
+    // The field's work and bookings go with it to its new site (and district).
+    if (changes.siteId !== undefined && changes.siteId !== before.siteId) await followMove(tx, ctx.actor.id, { fieldId: id });
     const after = (await getFieldRow(tx, id))!;
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'field', entityId: id, districtId: after.districtId, before, after });
     return after;

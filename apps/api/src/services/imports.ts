@@ -13,6 +13,7 @@ import { authorize, can, contextFor, notFound, type Ctx } from './context.ts';
 import { createField, updateField } from './fields.ts';
 import { readUpload, type UploadedFile } from './import-files.ts';
 import { planImport } from './import-rows.ts';
+import { followMove } from './scope-copies.ts';
 import { createSite, updateSite } from './sites.ts';
 
 type ImportRecord = typeof imports.$inferSelect;
@@ -215,6 +216,8 @@ export async function undoImport(ctx: Ctx, id: number) {
         .set({ ...restored, version: sql`${table.version} + 1`, updatedAt: new Date() } as never)
         .where(eq(table.id, u.id));
       const [after] = await tx.select().from(table).where(eq(table.id, u.id));
+      // A restored site or field may sit elsewhere than the import left it: copies follow.
+      await followMove(tx, ctx.actor.id, u.entity === 'site' ? { siteId: u.id } : { fieldId: u.id });
       const districtId =
         u.entity === 'site'
           ? (after as typeof sites.$inferSelect).districtId
