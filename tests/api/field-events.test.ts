@@ -2,6 +2,7 @@ import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { addDaysIso, DEFAULT_TIME_ZONE, localToday } from '@swardwise/domain';
 import { auditLog, fieldEvents } from '../../apps/api/src/db/schema/index.ts';
+import { addUser } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
 let api: TestApi;
@@ -76,6 +77,36 @@ describe('field events', () => {
     expect((await partner.delete(`/api/field-events/${park.body.event.id}?version=1`)).status).toBe(403);
     expect((await partner.delete(`/api/field-events/${own.body.event.id}?version=2`)).status).toBe(204);
     await foreman.delete(`/api/field-events/${park.body.event.id}?version=1`);
+  });
+
+  test('should let a partner change or cancel only the bookings he made, not the department’s or another partner’s', async () => {
+    const { db } = api.database;
+    const field = api.fixture.fields.northSchoolFootball;
+    const other = await addUser(db, 'otherPartner', 'partner', { siteIds: [api.fixture.sites.northSchool] });
+    const partner = await api.signIn('partner');
+    const otherPartner = await api.signInAs(other.email);
+    const foreman = await api.signIn('foreman');
+    const mine = (await partner.post('/api/field-events').send(game(field, { title: 'Invented school game' }))).body.event;
+    const theirs = (await otherPartner.post('/api/field-events').send(game(field, { title: 'Invented league game' }))).body.event;
+    const department = (await foreman.post('/api/field-events').send(game(field, { kind: 'ceremony', title: 'Invented department day' }))).body.event;
+    expect([mine.createdBy, theirs.createdBy, department.createdBy]).toEqual([api.fixture.users.partner.id, other.id, api.fixture.users.foreman.id]);
+
+    for (const booking of [theirs, department]) {
+      const edit = await partner.patch(`/api/field-events/${booking.id}`).send({ version: 1, title: 'Taken over', startsOn: addDaysIso(SOON, 1) });
+      expect(edit.status).toBe(403);
+      expect(edit.body.error.code).toBe('auth/forbidden');
+      expect((await partner.delete(`/api/field-events/${booking.id}?version=1`)).status).toBe(403);
+      const [row] = await db.select().from(fieldEvents).where(eq(fieldEvents.id, booking.id));
+      expect(row).toMatchObject({ title: booking.title, startsOn: SOON, version: 1 });
+    }
+    // He still sees them (the field's calendar), and changes his own.
+    const list = await partner.get(`/api/field-events?fieldId=${field}`);
+    expect(list.body.items.map((e: { id: number }) => e.id).sort()).toEqual([mine.id, theirs.id, department.id].sort());
+    expect((await partner.patch(`/api/field-events/${mine.id}`).send({ version: 1, notes: 'Kick-off moved' })).status).toBe(200);
+    expect((await partner.delete(`/api/field-events/${mine.id}?version=2`)).status).toBe(204);
+    // The other partner changes his own, and the foreman any in his district.
+    expect((await otherPartner.delete(`/api/field-events/${theirs.id}?version=1`)).status).toBe(204);
+    expect((await foreman.delete(`/api/field-events/${department.id}?version=1`)).status).toBe(204);
   });
 
   test('should let a crew lead and the head read bookings but change none', async () => {

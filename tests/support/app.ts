@@ -19,6 +19,8 @@ export interface TestApi {
   clock: DepartmentClock;
   /** A cookie-keeping client signed in as the fixture user. */
   signIn(user: keyof Fixture['users']): Promise<ReturnType<typeof supertest.agent>>;
+  /** The same for any account with the fixture password (see `addUser`). */
+  signInAs(email: string): Promise<ReturnType<typeof supertest.agent>>;
   close(): Promise<void>;
 }
 
@@ -32,18 +34,20 @@ export async function startTestApi(env: Record<string, string> = {}, options: { 
   const mailer = createMailer({ host: '127.0.0.1', port: mail.port, secure: false, ignoreTLS: true, from: config.mailFrom }, logger);
   const clock = new DepartmentClock(database.db, config.departmentTimeZone, options.now);
   const { app } = createApp({ db: database.db, config, logger, sessionSecret: 'test-secret', mailer, mailSink: mail, clock });
+  async function signInAs(email: string) {
+    const agent = supertest.agent(app);
+    const res = await agent.post('/api/auth/sign-in').send({ email, password: PASSWORD });
+    if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+    return agent;
+  }
   return {
     database,
     app,
     fixture,
     mail,
     clock,
-    async signIn(key) {
-      const agent = supertest.agent(app);
-      const res = await agent.post('/api/auth/sign-in').send({ email: fixture.users[key].email, password: PASSWORD });
-      if (res.status !== 200) throw new Error(`sign-in as ${key} failed: ${res.status} ${JSON.stringify(res.body)}`);
-      return agent;
-    },
+    signIn: (key) => signInAs(fixture.users[key].email),
+    signInAs,
     close: async () => {
       await mail.close();
       await database.close();

@@ -179,3 +179,25 @@ export async function giveWork(db: Db, fieldId: number, crewId: number, daysFrom
     .returning({ id: workOrders.id });
   return row!.id;
 }
+
+/** Adds a crew to a district (for tests that need two crews in one district). */
+export async function addCrew(db: Db, districtId: number, name: string): Promise<number> {
+  const [row] = await db.insert(crews).values({ districtId, name, hoursPerDay: 8, members: [] }).returning({ id: crews.id });
+  return row!.id;
+}
+
+/** Adds an active user who signs in with `PASSWORD` (see `TestApi.signInAs`). */
+export async function addUser(
+  db: Db,
+  key: string,
+  role: Role,
+  scope: { districtId?: number; crewId?: number; siteIds?: number[] } = {},
+): Promise<{ id: number; email: string; role: Role }> {
+  const email = `${key.toLowerCase()}@test.example`;
+  const [row] = await db
+    .insert(users)
+    .values({ email, name: `Test ${key}`, role, passwordHash: await hashPassword(PASSWORD), districtId: scope.districtId ?? null, crewId: scope.crewId ?? null })
+    .returning({ id: users.id });
+  if (scope.siteIds?.length) await db.insert(userSites).values(scope.siteIds.map((siteId) => ({ userId: row!.id, siteId })));
+  return { id: row!.id, email, role };
+}

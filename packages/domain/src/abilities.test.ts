@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { asSubject, defineAbilityFor, districtScope, type Action, type Actor, type SubjectName } from './abilities.ts';
+import { asSubject, defineAbilityFor, districtScope, OWN_ACCOUNT_FIELDS, PERMISSION_FIELDS, type Action, type Actor, type SubjectName } from './abilities.ts';
 
 const D1 = 1;
 const D2 = 2;
@@ -95,6 +95,20 @@ const cases: Case[] = [
   ['crew', 'read', 'User', { id: 98, districtId: D1 }, false],
   ['partner', 'update', 'User', { id: 5 }, true],
   ['partner', 'update', 'User', { id: 6 }, false],
+  // Bookings: a partner changes only the bookings he made himself
+  ['partner', 'create', 'FieldEvent', { siteId: SITE_A, districtId: D1 }, true],
+  ['partner', 'read', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 3 }, true],
+  ['partner', 'update', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 5 }, true],
+  ['partner', 'delete', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 5 }, true],
+  ['partner', 'update', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 3 }, false],
+  ['partner', 'delete', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 3 }, false],
+  ['partner', 'update', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 6 }, false],
+  ['partner', 'delete', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 6 }, false],
+  ['partner', 'update', 'FieldEvent', { siteId: SITE_A, districtId: D1 }, false],
+  ['partner', 'update', 'FieldEvent', { siteId: SITE_B, districtId: D2, createdBy: 5 }, false],
+  ['foreman', 'update', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 5 }, true],
+  ['foreman', 'delete', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 5 }, true],
+  ['crew', 'update', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 4 }, false],
   // Standards and settings: the head sets them
   ['head', 'update', 'Standards', null, true],
   ['foreman', 'read', 'Standards', null, true],
@@ -126,7 +140,29 @@ const cases: Case[] = [
   ['foreman', 'update', 'Request', { siteId: SITE_B, districtId: D2 }, false],
 ];
 
+type FieldCase = [role: string, field: string, allowed: boolean];
+/** Each role on its own account: name, units and password yes; role, scope and `active` only the admin. */
+const ownAccountCases: FieldCase[] = Object.keys(actors).flatMap((role) => [
+  ...OWN_ACCOUNT_FIELDS.map((field): FieldCase => [role, field, true]),
+  ...PERMISSION_FIELDS.map((field): FieldCase => [role, field, role === 'admin']),
+]);
+
 describe('abilities', () => {
+  test.each(ownAccountCases)('should let %s change %s of his own account: %s', (role, field, allowed) => {
+    const actor = actors[role]!;
+    const ability = defineAbilityFor(actor);
+    expect(ability.can('update', asSubject('User', { id: actor.id, districtId: actor.districtId }), field)).toBe(allowed);
+  });
+
+  test('should let only the admin change any attribute of another account', () => {
+    for (const [role, actor] of Object.entries(actors)) {
+      const ability = defineAbilityFor(actor);
+      for (const field of [...OWN_ACCOUNT_FIELDS, ...PERMISSION_FIELDS]) {
+        expect(ability.can('update', asSubject('User', { id: 99, districtId: D1 }), field), `${role} ${field}`).toBe(role === 'admin');
+      }
+    }
+  });
+
   test.each(cases)('should let %s %s %s %j: %s', (role, action, subjectName, row, allowed) => {
     const ability = defineAbilityFor(actors[role]!);
     const result = row ? ability.can(action, asSubject(subjectName, row)) : ability.can(action, subjectName);

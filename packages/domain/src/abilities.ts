@@ -53,14 +53,27 @@ export interface ScopedRow {
   crewId?: number | null;
   /** Crews with work on the row (a field) in the current window. */
   crewIds?: number[];
+  /** Who made the row (a booking). */
+  createdBy?: number | null;
 }
+
+/**
+ * The attributes of a user's own account they may change themselves. Role, scope (district,
+ * crew, sites) and `active` are the administrator's: a user never widens their own scope.
+ */
+export const OWN_ACCOUNT_FIELDS = ['name', 'units', 'password'] as const;
+
+/** The attributes of an account only an administrator changes: who may do what, and where. */
+export const PERMISSION_FIELDS = ['role', 'districtId', 'crewId', 'siteIds', 'active'] as const;
+export type PermissionField = (typeof PERMISSION_FIELDS)[number];
 
 export function defineAbilityFor(actor: Actor): AppAbility {
   const { can, cannot, build } = new AbilityBuilder<AppAbility>(createMongoAbility);
 
-  // Everyone may read and update their own account (name, unit preference, password).
+  // Everyone may read their own account and change its name, unit preference and password;
+  // nothing else of it (field-level rule: role, scope and `active` stay the administrator's).
   can('read', 'User', { id: actor.id });
-  can('update', 'User', { id: actor.id });
+  can('update', 'User', [...OWN_ACCOUNT_FIELDS], { id: actor.id });
 
   switch (actor.role) {
     case 'admin':
@@ -110,8 +123,10 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can('read', 'Site', { id: { $in: sites } });
       can('read', 'Field', { siteId: { $in: sites } });
       can('read', 'WorkOrder', { siteId: { $in: sites } });
-      // School athletic directors and league contacts book games on their fields.
-      can('manage', 'FieldEvent', { siteId: { $in: sites } });
+      // School athletic directors and league contacts book games on their fields, and change
+      // or cancel only the bookings they made themselves, not the department's or another partner's.
+      can(['read', 'create'], 'FieldEvent', { siteId: { $in: sites } });
+      can(['update', 'delete'], 'FieldEvent', { siteId: { $in: sites }, createdBy: actor.id });
       can(['read', 'create'], 'Request', { siteId: { $in: sites } });
       can('read', 'Standards');
       break;

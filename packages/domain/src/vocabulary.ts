@@ -100,12 +100,17 @@ export const CLIPPINGS_LABELS: Record<Clippings, string> = {
   removed: 'Removed',
 };
 
-export const FIELD_STATUSES = ['open', 'restricted', 'closed'] as const;
+/**
+ * `retired`: no longer kept (built over, handed back, merged into another field). It stays
+ * with its records, since a field with work on record is never deleted, and is not planned.
+ */
+export const FIELD_STATUSES = ['open', 'restricted', 'closed', 'retired'] as const;
 export type FieldStatus = (typeof FIELD_STATUSES)[number];
 export const FIELD_STATUS_LABELS: Record<FieldStatus, string> = {
   open: 'Open',
   restricted: 'Restricted',
   closed: 'Closed',
+  retired: 'Retired',
 };
 
 export const SITE_KINDS = ['park', 'school', 'complex'] as const;

@@ -9,7 +9,7 @@ import { fieldNeeds } from '../services/needs.ts';
 
 export const deleteQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
 
-export function fieldsRouter({ db }: AppDeps): Router {
+export function fieldsRouter({ db, config }: AppDeps): Router {
   const router = Router();
 
   router.get('/', async (req, res) => {
@@ -45,7 +45,7 @@ export function fieldsRouter({ db }: AppDeps): Router {
     const ctx = ctxOf(db, req);
     const { id } = parse(idParamSchema, req.params, 'params');
     const { version } = parse(deleteQuerySchema, req.query, 'query');
-    await deleteField(ctx, id, version);
+    await deleteField(ctx, id, version, config.uploadsDir);
     res.status(204).end();
   });
 

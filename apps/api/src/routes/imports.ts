@@ -26,7 +26,7 @@ const receiveFile: RequestHandler = (req, res, next) => {
   });
 };
 
-export function importsRouter({ db }: AppDeps): Router {
+export function importsRouter({ db, config }: AppDeps): Router {
   const router = Router();
   // Refuse roles before reading a (possibly large) upload.
   router.use((req, _res, next) => {
@@ -58,7 +58,7 @@ export function importsRouter({ db }: AppDeps): Router {
 
   router.post('/:id/undo', async (req, res) => {
     const { id } = parse(idParamSchema, req.params, 'params');
-    res.json({ import: await undoImport(ctxOf(db, req), id) });
+    res.json({ import: await undoImport(ctxOf(db, req), id, config.uploadsDir) });
   });
 
   return router;

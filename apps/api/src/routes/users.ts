@@ -5,7 +5,7 @@ import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { ROLE_LABELS } from '@swardwise/domain';
 import { invitationMail } from '../mail/messages.ts';
-import { inviteUser, listUsers, updateUser } from '../services/users.ts';
+import { checkUserAttributes, inviteUser, listUsers, updateUser } from '../services/users.ts';
 
 export function usersRouter({ db, config, mailer }: AppDeps): Router {
   const router = Router();
@@ -25,6 +25,9 @@ export function usersRouter({ db, config, mailer }: AppDeps): Router {
   router.patch('/:id', async (req, res) => {
     const ctx = ctxOf(db, req);
     const { id } = parse(idParamSchema, req.params, 'params');
+    // Who may change which attribute is known before the body's values are read.
+    const sent = req.body && typeof req.body === 'object' ? Object.keys(req.body as object) : [];
+    checkUserAttributes(ctx, { id }, sent);
     const input = parse(updateUserSchema, req.body, 'body');
     res.json({ user: await updateUser(ctx, id, input) });
   });

@@ -28,12 +28,14 @@ export async function dataFingerprint(db: Ctx['db']): Promise<string> {
   return String((res.rows[0] as { v: string }).v);
 }
 
-/** What a caller may see depends only on this. */
+/**
+ * What a caller may see depends only on this: the whole scope of the role (district, crew
+ * and sites), never a part of it, so two crews of one district never share an answer.
+ */
 export function scopeKey(ctx: Ctx): string {
   const a = ctx.actor;
-  if (a.role === 'admin' || a.role === 'head') return a.role;
-  if (a.role === 'partner') return `partner:${[...a.siteIds].sort((x, y) => x - y).join(',')}`;
-  return `${a.role}:${a.districtId ?? '-'}`;
+  const sites = [...new Set(a.siteIds)].sort((x, y) => x - y).join(',');
+  return `${a.role}:d=${a.districtId ?? '-'}:c=${a.crewId ?? '-'}:s=${sites}`;
 }
 
 const LIMIT = 32;

@@ -1,11 +1,14 @@
 /** Playing surfaces and lawns, each with its outline and maintenance level. */
-import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
+import fs from 'node:fs/promises';
+import path from 'node:path';
+import { and, asc, count, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import { AppError, longAxis, polygonAreaM2, type CreateFieldInput, type Polygon, type UpdateFieldInput } from '@swardwise/domain';
-import type { Db } from '../db/client.ts';
-import { districts, fields, sites } from '../db/schema/index.ts';
+import type { Db, Queryable } from '../db/client.ts';
+import { districts, fieldChecks, fields, sites, workOrders, workPhotos } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
 import { cachedAnswer } from './answer-cache.ts';
+import { followMove } from './scope-copies.ts';
 import { fieldCrewIds, fieldScope } from './scope.ts';
 
 const listColumns = {
@@ -123,22 +126,77 @@ export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput)
       .where(and(eq(fields.id, id), eq(fields.version, version)))
       .returning({ id: fields.id });
     if (!updated) throw versionConflict('field');
+    // The field's work and bookings go with it to its new site (and district).
+    if (changes.siteId !== undefined && changes.siteId !== before.siteId) await followMove(tx, ctx.actor.id, { fieldId: id });
     const after = (await getFieldRow(tx, id))!;
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'field', entityId: id, districtId: after.districtId, before, after });
     return after;
   });
 }
 
-export async function deleteField(ctx: Ctx, id: number, version: number) {
-  return (ctx.db as Db).transaction(async (tx) => {
+/** What a field has on record that deleting it would lose: work started or done, and field checks. */
+export async function workHistoryOf(db: Queryable, fieldId: number): Promise<{ workOrders: number; fieldChecks: number }> {
+  const [orders] = await db
+    .select({ n: count() })
+    .from(workOrders)
+    .where(and(eq(workOrders.fieldId, fieldId), inArray(workOrders.status, ['started', 'done'])));
+  const [checks] = await db.select({ n: count() }).from(fieldChecks).where(eq(fieldChecks.fieldId, fieldId));
+  return { workOrders: orders?.n ?? 0, fieldChecks: checks?.n ?? 0 };
+}
+
+/**
+ * Refuses (409) to delete a field with work on record: its done work, reports, photos and
+ * checks are the department's records. Retiring the field keeps them and takes it off the plan.
+ */
+export async function refuseDeleteWithHistory(db: Queryable, field: { id: number; name: string }): Promise<void> {
+  const history = await workHistoryOf(db, field.id);
+  if (!history.workOrders && !history.fieldChecks) return;
+  const what = [
+    history.workOrders ? `${history.workOrders} work order${history.workOrders === 1 ? '' : 's'} started or done` : null,
+    history.fieldChecks ? `${history.fieldChecks} field check${history.fieldChecks === 1 ? '' : 's'}` : null,
+  ].filter(Boolean);
+  throw new AppError(
+    'conflict',
+    'field/has_work_history',
+    `“${field.name}” has work on record (${what.join(' and ')}), which deleting it would lose; retire the field instead: it leaves the week plan and keeps its records`,
+    { fieldId: field.id, ...history },
+  );
+}
+
+/**
+ * Deletes a field with what cascades from it (open work orders, their photos and reports,
+ * bookings) inside the caller's transaction. Returns the photo files to remove once the
+ * transaction has committed (a rolled-back delete must not lose them).
+ */
+export async function removeField(db: Queryable, fieldId: number, version?: number): Promise<{ deleted: boolean; photoFiles: string[] }> {
+  const photos = await db
+    .select({ fileName: workPhotos.fileName })
+    .from(workPhotos)
+    .innerJoin(workOrders, eq(workOrders.id, workPhotos.workOrderId))
+    .where(eq(workOrders.fieldId, fieldId));
+  const [deleted] = await db
+    .delete(fields)
+    .where(version === undefined ? eq(fields.id, fieldId) : and(eq(fields.id, fieldId), eq(fields.version, version)))
+    .returning({ id: fields.id });
+  return { deleted: !!deleted, photoFiles: deleted ? photos.map((p) => p.fileName) : [] };
+}
+
+/** Removes photo files from the uploads folder (after the rows are gone); a missing file is no error. */
+export async function removePhotoFiles(uploadsDir: string, fileNames: readonly string[]): Promise<void> {
+  await Promise.all(fileNames.map((name) => fs.rm(path.join(uploadsDir, path.basename(name)), { force: true })));
+}
+
+export async function deleteField(ctx: Ctx, id: number, version: number, uploadsDir: string) {
+  const photoFiles = await (ctx.db as Db).transaction(async (tx) => {
     const before = await getFieldRow(tx, id);
     if (!before) throw notFound('field', id);
     authorize(ctx, 'delete', 'Field', before);
-    const [deleted] = await tx
-      .delete(fields)
-      .where(and(eq(fields.id, id), eq(fields.version, version)))
-      .returning({ id: fields.id });
-    if (!deleted) throw versionConflict('field');
+    if (before.version !== version) throw versionConflict('field');
+    await refuseDeleteWithHistory(tx, before);
+    const removed = await removeField(tx, id, version);
+    if (!removed.deleted) throw versionConflict('field');
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'field', entityId: id, districtId: before.districtId, before, after: null });
+    return removed.photoFiles;
   });
+  await removePhotoFiles(uploadsDir, photoFiles);
 }

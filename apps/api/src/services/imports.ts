@@ -10,9 +10,10 @@ import type { Db, Queryable } from '../db/client.ts';
 import { fields, imports, sites, users } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, contextFor, notFound, type Ctx } from './context.ts';
-import { createField, updateField } from './fields.ts';
+import { createField, refuseDeleteWithHistory, removeField, removePhotoFiles, updateField } from './fields.ts';
 import { readUpload, type UploadedFile } from './import-files.ts';
 import { planImport } from './import-rows.ts';
+import { followMove } from './scope-copies.ts';
 import { createSite, updateSite } from './sites.ts';
 
 type ImportRecord = typeof imports.$inferSelect;
@@ -171,9 +172,10 @@ function restorable(before: Record<string, unknown>) {
   return rest;
 }
 
-export async function undoImport(ctx: Ctx, id: number) {
+export async function undoImport(ctx: Ctx, id: number, uploadsDir: string) {
   authorize(ctx, 'create', 'Import');
-  return (ctx.db as Db).transaction(async (tx) => {
+  const photoFiles: string[] = [];
+  const undone = await (ctx.db as Db).transaction(async (tx) => {
     const record = await ownImport(ctx, tx, id);
     if (record.status !== 'committed') throw new AppError('conflict', 'import/not_committed', `Only a committed import can be undone; this one is ${record.status}`);
     const [later] = await tx
@@ -190,8 +192,10 @@ export async function undoImport(ctx: Ctx, id: number) {
     for (const fieldId of createdFieldIds) {
       const [row] = await tx.select().from(fields).where(eq(fields.id, fieldId));
       if (!row || row.version !== 1) throw changedSince('field', fieldId);
+      // Work done on an imported field since is the department's record: the undo stops, as a delete would.
+      await refuseDeleteWithHistory(tx, row);
       const [site] = await tx.select({ districtId: sites.districtId }).from(sites).where(eq(sites.id, row.siteId));
-      await tx.delete(fields).where(eq(fields.id, fieldId));
+      photoFiles.push(...(await removeField(tx, fieldId)).photoFiles);
       await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'field', entityId: fieldId, districtId: site?.districtId ?? null, before: row, after: null });
     }
     for (const siteId of createdSiteIds) {
@@ -215,6 +219,8 @@ export async function undoImport(ctx: Ctx, id: number) {
         .set({ ...restored, version: sql`${table.version} + 1`, updatedAt: new Date() } as never)
         .where(eq(table.id, u.id));
       const [after] = await tx.select().from(table).where(eq(table.id, u.id));
+      // A restored site or field may sit elsewhere than the import left it: copies follow.
+      await followMove(tx, ctx.actor.id, u.entity === 'site' ? { siteId: u.id } : { fieldId: u.id });
       const districtId =
         u.entity === 'site'
           ? (after as typeof sites.$inferSelect).districtId
@@ -233,4 +239,6 @@ export async function undoImport(ctx: Ctx, id: number) {
     });
     return present((await loadImport(tx, id))!);
   });
+  await removePhotoFiles(uploadsDir, photoFiles);
+  return undone;
 }

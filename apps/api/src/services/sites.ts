@@ -5,6 +5,7 @@ import type { Db } from '../db/client.ts';
 import { districts, fields, sites } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+import { followMove } from './scope-copies.ts';
 import { siteScope } from './scope.ts';
 
 const fieldCounts = (db: Ctx['db']) =>
@@ -100,6 +101,8 @@ export async function updateSite(ctx: Ctx, id: number, input: UpdateSiteInput) {
       .where(and(eq(sites.id, id), eq(sites.version, version)))
       .returning({ id: sites.id });
     if (!updated) throw versionConflict('site');
+    // The work and bookings of the site's fields go with it to its new district.
+    if (changes.districtId !== undefined && changes.districtId !== before.districtId) await followMove(tx, ctx.actor.id, { siteId: id });
     const after = (await getSiteRow(tx, id))!;
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'site', entityId: id, districtId: after.districtId, before, after });
     return after;

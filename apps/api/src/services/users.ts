@@ -2,7 +2,18 @@
 import crypto from 'node:crypto';
 import { hash, verify } from '@node-rs/argon2';
 import { and, asc, eq, gt, inArray, isNull, sql } from 'drizzle-orm';
-import { AppError, type Actor, type InviteUserInput, type Role, type UnitSystem, type UpdateUserInput } from '@swardwise/domain';
+import {
+  AppError,
+  asSubject,
+  OWN_ACCOUNT_FIELDS,
+  PERMISSION_FIELDS,
+  scopeIssues,
+  type Actor,
+  type InviteUserInput,
+  type Role,
+  type UnitSystem,
+  type UpdateUserInput,
+} from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { crews, districts, sessions, sites, users, userSites, userTokens } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
@@ -107,7 +118,7 @@ export async function listUsers(ctx: Ctx): Promise<UserRow[]> {
 }
 
 /** Validates that a role's scope points at real rows and fits together (a crew lead's district is the crew's). */
-async function resolveScope(db: Queryable, input: { role: Role; districtId?: number | null; crewId?: number | null; siteIds?: number[] }) {
+async function resolveScope(db: Queryable, input: { role: Role; districtId?: number | null | undefined; crewId?: number | null | undefined; siteIds?: number[] | undefined }) {
   let districtId: number | null = null;
   let crewId: number | null = null;
   let siteIds: number[] = [];
@@ -168,6 +179,7 @@ export async function inviteUser(ctx: Ctx, input: InviteUserInput, publicUrl: st
     });
     const user = (await findUser(tx, created!.id))!;
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'user', entityId: user.id, districtId: user.districtId, before: null, after: user });
+    await auditPermissions(tx, ctx.actor.id, undefined, user);
     return { user, inviteUrl: `${publicUrl}/accept-invite?token=${token}` };
   });
 }
@@ -226,24 +238,80 @@ export async function resetPassword(db: Queryable, token: string, password: stri
   return user;
 }
 
+/** Role, scope and `active` of an account: what a permission-change audit entry records. */
+function permissionsOf(row: UserRow | undefined) {
+  return row ? { role: row.role, districtId: row.districtId, crewId: row.crewId, siteIds: row.siteIds, active: row.active } : null;
+}
+
+/** Writes a permission change (role, scope, active) as its own audit entry, when there is one. */
+async function auditPermissions(db: Queryable, actorId: number, before: UserRow | undefined, after: UserRow) {
+  const was = permissionsOf(before);
+  const now = permissionsOf(after)!;
+  if (was && JSON.stringify(was) === JSON.stringify(now)) return;
+  await writeAudit(db, { actorId, action: was ? 'update' : 'create', entity: 'user_permissions', entityId: after.id, districtId: after.districtId, before: was, after: now });
+}
+
+const USER_ATTRIBUTES = [...OWN_ACCOUNT_FIELDS, ...PERMISSION_FIELDS] as const;
+
+/**
+ * Refuses (403) a change to an account that sends an attribute the caller may not change on
+ * it: anyone's own name, units and password, but role, scope and `active` only an
+ * administrator's. Called by the route before the body is read, and by the service again.
+ */
+export function checkUserAttributes(ctx: Ctx, row: { id: number; districtId?: number | null }, keys: readonly string[]): void {
+  const subject = asSubject('User', { id: row.id, districtId: row.districtId ?? null });
+  const refused = USER_ATTRIBUTES.filter((k) => keys.includes(k) && !ctx.ability.can('update', subject, k));
+  if (!refused.length) return;
+  throw new AppError(
+    'forbidden',
+    'user/forbidden_attribute',
+    `Only an administrator may change the ${refused.map((k) => ATTRIBUTE_WORDS[k]).join(', ')} of an account`,
+    { issues: refused.map((k) => ({ path: `body.${k}`, message: 'only an administrator may change this' })) },
+  );
+}
+
+const ATTRIBUTE_WORDS: Record<(typeof USER_ATTRIBUTES)[number], string> = {
+  name: 'name',
+  units: 'units',
+  password: 'password',
+  role: 'role',
+  districtId: 'district',
+  crewId: 'crew',
+  siteIds: 'sites',
+  active: 'active state',
+};
+
 export async function updateUser(ctx: Ctx, id: number, input: UpdateUserInput): Promise<UserRow> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await findUser(tx, id);
     if (!before) throw notFound('user', id);
     authorize({ ...ctx, db: tx }, 'update', 'User', { id, districtId: before.districtId });
-    if (input.role !== before.role || input.active === false) {
-      // Role and scope are the administrator's to change, not the user's own.
-      authorize({ ...ctx, db: tx }, 'manage', 'User');
-    }
-    if (id === ctx.actor.id && (input.active === false || input.role !== before.role)) {
+    checkUserAttributes(ctx, before, Object.keys(input).filter((k) => input[k as keyof UpdateUserInput] !== undefined));
+    const role = input.role ?? before.role;
+    if (id === ctx.actor.id && (input.active === false || role !== before.role)) {
       throw new AppError('invalid', 'user/self_lockout', 'You cannot deactivate yourself or change your own role');
     }
-    const scope = await resolveScope(tx, input);
+    // With a role the scope is the one sent; without, what is not sent stays as it is.
+    const wanted =
+      input.role !== undefined
+        ? { role, districtId: input.districtId, crewId: input.crewId, siteIds: input.siteIds }
+        : {
+            role,
+            districtId: input.districtId !== undefined ? input.districtId : before.districtId,
+            crewId: input.crewId !== undefined ? input.crewId : before.crewId,
+            siteIds: input.siteIds ?? before.siteIds,
+          };
+    const missing = scopeIssues(wanted);
+    if (missing.length) {
+      throw new AppError('invalid', 'request/invalid', missing[0]!.message, { issues: missing.map((i) => ({ path: `body.${i.path}`, message: i.message })) });
+    }
+    const scope = await resolveScope(tx, wanted);
     const [updated] = await tx
       .update(users)
       .set({
         name: input.name ?? before.name,
-        role: input.role,
+        units: input.units ?? before.units,
+        role,
         districtId: scope.districtId,
         crewId: scope.crewId,
         active: input.active ?? before.active,
@@ -254,12 +322,13 @@ export async function updateUser(ctx: Ctx, id: number, input: UpdateUserInput): 
       .returning({ id: users.id });
     if (!updated) throw versionConflict('user');
     await replaceSites(tx, id, scope.siteIds);
-    if (input.active === false || input.role !== before.role) {
+    if (input.active === false || role !== before.role) {
       // A deactivated or re-scoped user signs in again.
       await tx.delete(sessions).where(eq(sessions.userId, id));
     }
     const after = (await findUser(tx, id))!;
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'user', entityId: id, districtId: after.districtId, before, after });
+    await auditPermissions(tx, ctx.actor.id, before, after);
     return after;
   });
 }

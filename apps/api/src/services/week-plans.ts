@@ -2,7 +2,7 @@
  * The district's week plan: generated from the turf engine and the weather, kept by hand,
  * shown as a board of crews × days with each crew-day's load and route.
  */
-import { and, asc, desc, eq, gte, inArray, lte, max, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, gte, inArray, lte, max, ne, sql } from 'drizzle-orm';
 import {
   AppError,
   addDaysIso,
@@ -144,7 +144,8 @@ async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: Exi
     })
     .from(fields)
     .innerJoin(sites, eq(sites.id, fields.siteId))
-    .where(eq(sites.districtId, q.districtId))
+    // Retired fields are not kept any more: the week asks nothing of them.
+    .where(and(eq(sites.districtId, q.districtId), ne(fields.status, 'retired')))
     .orderBy(asc(fields.id));
   const fieldIds = fieldRows.map((f) => f.id);
   const done = await lastDone(db, fieldIds);

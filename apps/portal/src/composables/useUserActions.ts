@@ -30,15 +30,8 @@ export function useUserActions(reload: () => Promise<void>) {
       return;
     }
     try {
-      // The API checks the whole scope on every change, so the current one goes along.
-      const patch = updateUserSchema.parse({
-        version: user.version,
-        role: user.role,
-        districtId: user.districtId,
-        crewId: user.crewId,
-        siteIds: user.siteIds,
-        active,
-      });
+      // Without a role the API keeps the stored role and scope: only `active` changes.
+      const patch = updateUserSchema.parse({ version: user.version, active });
       await updateUser(user.id, patch);
       ElMessage.success(`${user.name} is ${active ? 'active again' : 'deactivated'}.`);
       await reload();

@@ -11,11 +11,11 @@ const field = (districtId: number, maintenanceLevel: Level, status: FieldStatus,
 
 describe('tallyFields', () => {
   test('should count fields per level and status, zero where there are none', () => {
-    const t = tallyFields([field(1, 2, 'open'), field(1, 2, 'closed', 500), field(1, 4, 'restricted')]);
-    expect(t.total).toBe(3);
-    expect(t.areaM2).toBe(2500);
-    expect(t.byLevel).toEqual({ 1: 0, 2: 2, 3: 0, 4: 1 });
-    expect(t.byStatus).toEqual({ open: 1, restricted: 1, closed: 1 });
+    const t = tallyFields([field(1, 2, 'open'), field(1, 2, 'closed', 500), field(1, 4, 'restricted'), field(1, 3, 'retired', 250)]);
+    expect(t.total).toBe(4);
+    expect(t.areaM2).toBe(2750);
+    expect(t.byLevel).toEqual({ 1: 0, 2: 2, 3: 1, 4: 1 });
+    expect(t.byStatus).toEqual({ open: 1, restricted: 1, closed: 1, retired: 1 });
   });
 
   test('should keep each district’s fields apart', () => {

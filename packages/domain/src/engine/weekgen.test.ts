@@ -146,6 +146,12 @@ describe('planFieldWeek', () => {
     expect(late.notes.join(' ')).toMatch(/projected/);
   });
 
+  test('should plan nothing on a retired field, not even its check, and say why', () => {
+    const retired = planFieldWeek({ field: field({ status: 'retired', lastCheckedOn: null }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    expect(retired.orders).toEqual([]);
+    expect(retired.notes).toEqual(['The field is retired: nothing is planned for it.']);
+  });
+
   test('should refuse a week that does not start on a Monday', () => {
     expect(() => weekDates('2026-06-02')).toThrow(/Monday/);
   });

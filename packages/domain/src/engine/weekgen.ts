@@ -177,6 +177,8 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
   const orders: AskedOrder[] = [];
   const notes: string[] = [];
   const keptOf = (task: WorkTask) => kept.filter((k) => k.fieldId === field.id && k.task === task && k.status !== 'skipped');
+  // A retired field is no longer kept: nothing is asked of it, not even a field check.
+  if (field.status === 'retired') return { fieldId: field.id, orders: [], notes: ['The field is retired: nothing is planned for it.'] };
 
   const first = weather.dates[0];
   if (!first || first > weekEnd) {

@@ -41,13 +41,14 @@ describe('map themes', () => {
     expect(styleFor('status', field({ status: 'restricted' }), resolve).fillColor).toBe('var(--sw-status-restricted)');
     expect(styleFor('status', field({ status: 'closed' }), resolve).dashArray).toBeDefined();
     expect(styleFor('status', field({ status: 'open' }), resolve).dashArray).toBeUndefined();
+    expect(styleFor('status', field({ status: 'retired' }), resolve)).toMatchObject({ fillColor: 'var(--sw-status-retired)', dashArray: '5 4' });
     expect(styleFor('mowing', field({ overdue: true }), resolve).dashArray).toBeDefined();
     expect(styleFor('level', field(), resolve, true).weight).toBeGreaterThan(styleFor('level', field(), resolve).weight);
   });
 
   test('should count fields per legend entry, zero for empty entries', () => {
     const counts = tally('status', [field(), field({ status: 'closed' }), field()]);
-    expect(counts).toEqual({ 'status-open': 2, 'status-restricted': 0, 'status-closed': 1 });
+    expect(counts).toEqual({ 'status-open': 2, 'status-restricted': 0, 'status-closed': 1, 'status-retired': 0 });
   });
 
   test('should accept only known theme names from the address', () => {

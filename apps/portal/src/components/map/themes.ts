@@ -2,7 +2,7 @@
  * Map themes: which legend entry a field falls in and how its polygon is drawn. Colours
  * are design-token names (styles/tokens.css); the map resolves them to values once.
  */
-import { FIELD_STATUS_LABELS, LEVEL_NAMES, LEVELS } from '@swardwise/domain';
+import { FIELD_STATUS_LABELS, LEVEL_NAMES, LEVELS, type FieldStatus } from '@swardwise/domain';
 
 export const MAP_THEMES = [
   { key: 'level', label: 'Maintenance level' },
@@ -19,7 +19,7 @@ export function isMapTheme(value: unknown): value is MapTheme {
 /** What a theme needs of a field. */
 export interface ThemedField {
   maintenanceLevel: number;
-  status: 'open' | 'restricted' | 'closed';
+  status: FieldStatus;
   score: number | null;
   daysSinceMowing: number | null;
   overdue: boolean | null;
@@ -67,6 +67,7 @@ const LEGENDS: Record<MapTheme, LegendEntry[]> = {
     { key: 'status-open', label: FIELD_STATUS_LABELS.open, token: '--sw-status-open' },
     { key: 'status-restricted', label: FIELD_STATUS_LABELS.restricted, token: '--sw-status-restricted' },
     { key: 'status-closed', label: FIELD_STATUS_LABELS.closed, token: '--sw-status-closed', dashed: true },
+    { key: 'status-retired', label: FIELD_STATUS_LABELS.retired, token: '--sw-status-retired', dashed: true },
   ],
 };
 
