@@ -4,3 +4,4 @@ export * from './abilities.ts';
 export * from './schemas/index.ts';
 export * from './geometry.ts';
 export * from './engine/index.ts';
+export * from './contracts/index.ts';

@@ -1,6 +1,6 @@
 /** Playing surfaces and lawns, each with its outline and maintenance level. */
 import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
-import { AppError, longAxis, polygonAreaM2, type CreateFieldInput, type Polygon, type UpdateFieldInput } from '@swardwise/domain';
+import { AppError, longAxis, polygonAreaM2, type CreateFieldInput, type FieldDetail, type FieldRow, type Polygon, type UpdateFieldInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { districts, fields, sites } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
@@ -56,7 +56,7 @@ async function getFieldRow(db: Ctx['db'], id: number) {
   return row;
 }
 
-export async function listFields(ctx: Ctx, filter: { districtId?: number | undefined; siteId?: number | undefined; q?: string | undefined }) {
+export async function listFields(ctx: Ctx, filter: { districtId?: number | undefined; siteId?: number | undefined; q?: string | undefined }): Promise<FieldRow<Date>[]> {
   authorize(ctx, 'read', 'Field');
   const conditions: (SQL | undefined)[] = [fieldScope(ctx.actor)];
   if (filter.districtId) conditions.push(eq(sites.districtId, filter.districtId));
@@ -75,7 +75,7 @@ export async function listFieldsJson(ctx: Ctx, filter: { districtId?: number | u
   return cachedAnswer(ctx, 'fields', key, async () => JSON.stringify({ items: await listFields(ctx, filter) }));
 }
 
-export async function getField(ctx: Ctx, id: number) {
+export async function getField(ctx: Ctx, id: number): Promise<FieldDetail<Date>> {
   const row = await getFieldRow(ctx.db, id);
   if (!row) throw notFound('field', id);
   authorize(ctx, 'read', 'Field', row);
@@ -88,7 +88,7 @@ async function siteOf(db: Ctx['db'], siteId: number) {
   return site;
 }
 
-export async function createField(ctx: Ctx, input: CreateFieldInput) {
+export async function createField(ctx: Ctx, input: CreateFieldInput): Promise<FieldDetail<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const site = await siteOf(tx, input.siteId);
     authorize(ctx, 'create', 'Field', { siteId: site.id, districtId: site.districtId });
@@ -102,7 +102,7 @@ export async function createField(ctx: Ctx, input: CreateFieldInput) {
   });
 }
 
-export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput) {
+export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput): Promise<FieldDetail<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await getFieldRow(tx, id);
     if (!before) throw notFound('field', id);
@@ -129,7 +129,7 @@ export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput)
   });
 }
 
-export async function deleteField(ctx: Ctx, id: number, version: number) {
+export async function deleteField(ctx: Ctx, id: number, version: number): Promise<void> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await getFieldRow(tx, id);
     if (!before) throw notFound('field', id);
