@@ -1,13 +1,12 @@
-import type { UnitSystem } from '@swardwise/domain';
+import type { ForgotPasswordAnswer, SessionAnswer, SessionUser, UnitSystem } from '@swardwise/domain';
 import { api } from './client.ts';
-import type { SessionUser } from './types.ts';
 
-export async function fetchMe(): Promise<SessionUser> {
-  return (await api.get<{ user: SessionUser }>('/auth/me')).user;
+export async function getMe(): Promise<SessionUser> {
+  return (await api.get<SessionAnswer>('/auth/me')).user;
 }
 
 export async function signIn(email: string, password: string): Promise<SessionUser> {
-  return (await api.post<{ user: SessionUser }>('/auth/sign-in', { email, password })).user;
+  return (await api.post<SessionAnswer>('/auth/sign-in', { email, password })).user;
 }
 
 export async function signOut(): Promise<void> {
@@ -15,17 +14,17 @@ export async function signOut(): Promise<void> {
 }
 
 export async function updateMe(patch: { version: number; name?: string; units?: UnitSystem }): Promise<SessionUser> {
-  return (await api.patch<{ user: SessionUser }>('/auth/me', patch)).user;
+  return (await api.patch<SessionAnswer>('/auth/me', patch)).user;
 }
 
 export async function acceptInvite(token: string, password: string): Promise<SessionUser> {
-  return (await api.post<{ user: SessionUser }>('/auth/accept-invite', { token, password })).user;
+  return (await api.post<SessionAnswer>('/auth/accept-invite', { token, password })).user;
 }
 
 export async function resetPassword(token: string, password: string): Promise<SessionUser> {
-  return (await api.post<{ user: SessionUser }>('/auth/reset-password', { token, password })).user;
+  return (await api.post<SessionAnswer>('/auth/reset-password', { token, password })).user;
 }
 
 export async function forgotPassword(email: string): Promise<string> {
-  return (await api.post<{ message: string }>('/auth/forgot-password', { email })).message;
+  return (await api.post<ForgotPasswordAnswer>('/auth/forgot-password', { email })).message;
 }

@@ -1,4 +1,4 @@
-import { listEquipment } from '../api/crews.ts';
+import { listEquipment } from '../api/equipment.ts';
 import { useAsync } from './useAsync.ts';
 
 export function useEquipment() {

@@ -1,5 +1,5 @@
 import type { MaybeRefOrGetter } from 'vue';
-import { listFieldEvents, type FieldEventQuery } from '../api/fieldEvents.ts';
+import { type FieldEventQuery, listFieldEvents } from '../api/fieldEvents.ts';
 import { useAsync } from './useAsync.ts';
 
 /** Bookings matching a query (by default the API's: from today for three months). */

@@ -1,5 +1,5 @@
 import type { MaybeRefOrGetter } from 'vue';
-import { getFieldNeeds } from '../api/needs.ts';
+import { getFieldNeeds } from '../api/fields.ts';
 import { useAsync } from './useAsync.ts';
 
 /** What the turf engine says a field needs for the week of `date` (today when undefined). */

@@ -1,8 +1,7 @@
-import type { ImportKind } from '@swardwise/domain';
+import type { ImportKind, ImportRecord } from '@swardwise/domain';
 import { computed, ref, shallowRef } from 'vue';
 import { commitImport, listImports, undoImport, uploadImport } from '../api/imports.ts';
 import { errorMessage } from '../api/messages.ts';
-import type { ImportRecord } from '../api/types.ts';
 import { useAsync } from './useAsync.ts';
 
 /**

@@ -1,7 +1,7 @@
-import { asSubject } from '@swardwise/domain';
+import { asSubject, type MapField, type MapSite } from '@swardwise/domain';
 import { computed } from 'vue';
 import { ability } from '../ability.ts';
-import { getBasemap, getMap, type MapField, type MapSite } from '../api/map.ts';
+import { getBasemap, getMap } from '../api/map.ts';
 import { useAsync } from './useAsync.ts';
 
 export interface SearchHit {

@@ -1,7 +1,7 @@
 import type { MaybeRefOrGetter } from 'vue';
-import { fetchRecords } from '../api/weekPlans.ts';
+import { getRecords } from '../api/records.ts';
 import { useAsync } from './useAsync.ts';
 
 export function useRecords(query: MaybeRefOrGetter<{ districtId?: number; from: string; to: string }>) {
-  return useAsync((q, signal) => fetchRecords(q, signal), query);
+  return useAsync((q, signal) => getRecords(q, signal), query);
 }

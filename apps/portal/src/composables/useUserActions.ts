@@ -1,8 +1,7 @@
-import { updateUserSchema } from '@swardwise/domain';
+import { updateUserSchema, type UserRow } from '@swardwise/domain';
 import { ElMessage, ElMessageBox } from 'element-plus';
 import { ApiError } from '../api/client.ts';
 import { errorMessage } from '../api/messages.ts';
-import type { UserRow } from '../api/types.ts';
 import { updateUser } from '../api/users.ts';
 
 const CONFLICT = 'Someone else changed this user in the meantime. Reload the list to see their change, then make yours again.';

@@ -1,7 +1,6 @@
 import { computed, type MaybeRefOrGetter, toValue } from 'vue';
-import { et0PenmanMonteith, type WeatherDayInput } from '@swardwise/domain';
+import { et0PenmanMonteith, type WeatherDayInput, type WeatherDayRow, type WeatherStationRow } from '@swardwise/domain';
 import { listStations, listWeatherDays } from '../api/weather.ts';
-import type { WeatherDayRow, WeatherStationRow } from '../api/types.ts';
 import { useAsync } from './useAsync.ts';
 
 export function useStations() {

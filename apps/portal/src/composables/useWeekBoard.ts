@@ -1,10 +1,11 @@
-import { asSubject, type WorkTask } from '@swardwise/domain';
+import { asSubject, type PlanDiff, type WeekBoard, type WorkOrderRow, type WorkTask } from '@swardwise/domain';
 import { ElMessage } from 'element-plus';
 import { computed, onScopeDispose, reactive, ref, shallowRef, toValue, watch, type MaybeRefOrGetter } from 'vue';
 import { ability } from '../ability.ts';
 import { ApiError } from '../api/client.ts';
 import { errorMessage } from '../api/messages.ts';
-import { confirmWeek, fetchWeekBoard, generateWeek, updateWorkOrder, type PlanDiff, type PlanOrder, type WeekBoard } from '../api/weekPlans.ts';
+import { confirmWeek, generateWeek, getWeekBoard } from '../api/weekPlans.ts';
+import { updateWorkOrder } from '../api/workOrders.ts';
 import { crewDayMap, filterOptions, groupCells, type CellKey } from '../components/week/board.ts';
 import { useSessionStore } from '../stores/session.ts';
 
@@ -15,7 +16,7 @@ export interface WeekKey {
   weekStart: string;
 }
 
-export type OrderChange = Partial<Pick<PlanOrder, 'crewId' | 'plannedDate' | 'plannedHours' | 'pinned' | 'notes'>>;
+export type OrderChange = Partial<Pick<WorkOrderRow, 'crewId' | 'plannedDate' | 'plannedHours' | 'pinned' | 'notes'>>;
 
 function sameJson(a: unknown, b: unknown): boolean {
   return JSON.stringify(a) === JSON.stringify(b);
@@ -70,7 +71,7 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
     if (!quiet) loading.value = true;
     error.value = null;
     try {
-      const next = await fetchWeekBoard({ districtId, weekStart }, mine.signal);
+      const next = await getWeekBoard({ districtId, weekStart }, mine.signal);
       data.value = quiet ? keepUnchanged(data.value, next) : next;
     } catch (cause) {
       if (mine.signal.aborted) return;
@@ -92,7 +93,7 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
   onScopeDispose(() => controller?.abort());
 
   const crewDays = computed(() => crewDayMap(data.value?.crewDays ?? []));
-  let lastCells: Map<CellKey, PlanOrder[]> | undefined;
+  let lastCells: Map<CellKey, WorkOrderRow[]> | undefined;
   const cells = computed(() => {
     // Plain copies: the grouping then reads no reactive proxies in its loop over every order.
     const plain = { siteIds: [...filter.siteIds], tasks: [...filter.tasks] };
@@ -105,14 +106,14 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
     return !!board && ability.can('update', asSubject('WorkOrder', { districtId: board.districtId }));
   });
 
-  function replaceOrder(id: number, next: (o: PlanOrder) => PlanOrder) {
+  function replaceOrder(id: number, next: (o: WorkOrderRow) => WorkOrderRow) {
     const board = data.value;
     if (!board) return;
     data.value = { ...board, orders: board.orders.map((o) => (o.id === id ? next(o) : o)) };
   }
 
   /** Saves a change of one order; the card moves at once and goes back if the API refuses. */
-  async function change(order: PlanOrder, patch: OrderChange): Promise<boolean> {
+  async function change(order: WorkOrderRow, patch: OrderChange): Promise<boolean> {
     const before = data.value?.orders.find((o) => o.id === order.id);
     if (!before || saving.has(order.id)) return false;
     replaceOrder(order.id, (o) => ({ ...o, ...patch, crewName: patch.crewId === undefined ? o.crewName : crewName(patch.crewId), pinned: patch.pinned ?? true }));

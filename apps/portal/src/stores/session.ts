@@ -1,14 +1,9 @@
-import { defineAbilityFor, type Actor, type Role, type UnitSystem } from '@swardwise/domain';
+import { actorOf, defineAbilityFor, type Role, type SessionUser, type UnitSystem } from '@swardwise/domain';
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
 import { ability } from '../ability.ts';
 import * as auth from '../api/auth.ts';
 import { ApiError } from '../api/client.ts';
-import type { SessionUser } from '../api/types.ts';
-
-export function actorOf(user: SessionUser): Actor {
-  return { id: user.id, role: user.role, districtId: user.districtId, crewId: user.crewId, siteIds: user.siteIds };
-}
 
 /** Where each role lands after sign-in and when a route is not theirs. */
 export const LANDING: Record<Role, string> = {
@@ -39,7 +34,7 @@ export const useSessionStore = defineStore('session', () => {
   function load(): Promise<void> {
     if (loaded.value) return Promise.resolve();
     loading ??= auth
-      .fetchMe()
+      .getMe()
       .then(setUser, (error: unknown) => {
         if (!(error instanceof ApiError && error.status === 401)) throw error;
         setUser(null);

@@ -1,11 +1,10 @@
-import { defineAbilityFor, type Role } from '@swardwise/domain';
+import { defineAbilityFor, type Role, type WeekBoard } from '@swardwise/domain';
 import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
 import { createPinia, setActivePinia } from 'pinia';
 import { afterEach, describe, expect, test, vi } from 'vitest';
 import { createMemoryHistory, createRouter } from 'vue-router';
 import { ability } from '../ability.ts';
-import type { WeekBoard } from '../api/weekPlans.ts';
 import { DRAG_TYPE } from '../components/week/board.ts';
 import { board, DATES, diffItem, order, WEEK } from '../components/week/sample.ts';
 import { CONFLICT_MESSAGE } from '../composables/useWeekBoard.ts';

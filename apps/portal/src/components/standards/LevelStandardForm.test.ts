@@ -1,7 +1,6 @@
-import { DEFAULT_STANDARDS, updateLevelStandardSchema } from '@swardwise/domain';
+import { DEFAULT_STANDARDS, updateLevelStandardSchema, type StandardsRow } from '@swardwise/domain';
 import { flushPromises, mount } from '@vue/test-utils';
 import { describe, expect, test } from 'vitest';
-import type { StandardsRow } from '../../api/standards.ts';
 import LevelStandardForm from './LevelStandardForm.vue';
 import { bodyFrom, formFrom } from './standardForm.ts';
 
