@@ -3,13 +3,11 @@ import { ElMessage } from 'element-plus';
 import { computed, onScopeDispose, reactive, ref, shallowRef, toValue, watch, type MaybeRefOrGetter } from 'vue';
 import { ability } from '../ability.ts';
 import { ApiError } from '../api/client.ts';
-import { errorMessage } from '../api/messages.ts';
+import { errorMessage, isConflict } from '../api/messages.ts';
 import { confirmWeek, generateWeek, getWeekBoard } from '../api/weekPlans.ts';
 import { updateWorkOrder } from '../api/workOrders.ts';
 import { crewDayMap, filterOptions, groupCells, type CellKey } from '../components/week/board.ts';
 import { useSessionStore } from '../stores/session.ts';
-
-export const CONFLICT_MESSAGE = 'Someone else changed this work order — reloaded.';
 
 export interface WeekKey {
   districtId: number | null;
@@ -127,8 +125,8 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
       return true;
     } catch (cause) {
       saving.delete(order.id);
-      if (cause instanceof ApiError && cause.status === 409) {
-        ElMessage.warning(CONFLICT_MESSAGE);
+      if (isConflict(cause)) {
+        ElMessage.warning(errorMessage(cause));
         await load(true);
       } else {
         replaceOrder(order.id, () => before);

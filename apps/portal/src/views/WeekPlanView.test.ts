@@ -5,9 +5,9 @@ import { createPinia, setActivePinia } from 'pinia';
 import { afterEach, describe, expect, test, vi } from 'vitest';
 import { createMemoryHistory, createRouter } from 'vue-router';
 import { ability } from '../ability.ts';
+import { messageFor } from '../api/messages.ts';
 import { DRAG_TYPE } from '../components/week/board.ts';
 import { board, DATES, diffItem, order, WEEK } from '../components/week/sample.ts';
-import { CONFLICT_MESSAGE } from '../composables/useWeekBoard.ts';
 import { useSessionStore } from '../stores/session.ts';
 import WeekPlanView from './WeekPlanView.vue';
 
@@ -105,7 +105,7 @@ describe('WeekPlanView', () => {
     await w.get(`[data-test="board-cell"][data-crew="11"][data-date="${DATES[3]}"]`).trigger('drop', { dataTransfer: transfer(77) });
     await settle();
     expect(calls.find((c) => c.method === 'PATCH')!.body).toMatchObject({ version: 5 });
-    expect(document.body.textContent).toContain(CONFLICT_MESSAGE);
+    expect(document.body.textContent).toContain(messageFor('work_order/version_conflict'));
     expect(gets(calls)).toHaveLength(2);
     // The card shows where the other person put it, not where it was dropped.
     expect(w.find(`[data-test="board-cell"][data-crew="11"][data-date="${DATES[3]}"] [data-test="order-card"]`).exists()).toBe(false);
