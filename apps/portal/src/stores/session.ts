@@ -4,6 +4,7 @@ import { computed, ref } from 'vue';
 import { ability } from '../ability.ts';
 import * as auth from '../api/auth.ts';
 import { ApiError } from '../api/client.ts';
+import { queryClient } from '../api/queryClient.ts';
 
 /** Where each role lands after sign-in and when a route is not theirs. */
 export const LANDING: Record<Role, string> = {
@@ -25,6 +26,8 @@ export const useSessionStore = defineStore('session', () => {
   const landing = computed(() => (user.value ? LANDING[user.value.role] : '/sign-in'));
 
   function setUser(next: SessionUser | null) {
+    // Answers cached for one person are not another's to see (nor a signed-out screen's).
+    if (!next || next.id !== user.value?.id) queryClient.clear();
     user.value = next;
     if (next) signedOut.value = false;
     ability.update(next ? defineAbilityFor(actorOf(next)).rules : []);

@@ -1,4 +1,5 @@
 import { defineAbilityFor, type Role, type WeekBoard } from '@swardwise/domain';
+import { VueQueryPlugin } from '@tanstack/vue-query';
 import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
 import { createPinia, setActivePinia } from 'pinia';
@@ -6,6 +7,7 @@ import { afterEach, describe, expect, test, vi } from 'vitest';
 import { createMemoryHistory, createRouter } from 'vue-router';
 import { ability } from '../ability.ts';
 import { messageFor } from '../api/messages.ts';
+import { createQueryClient } from '../api/queryClient.ts';
 import { DRAG_TYPE } from '../components/week/board.ts';
 import { board, DATES, diffItem, order, WEEK } from '../components/week/sample.ts';
 import { useSessionStore } from '../stores/session.ts';
@@ -41,7 +43,7 @@ async function mountView(role: Role) {
   ability.update(defineAbilityFor({ id: 3, role, districtId, crewId: null, siteIds: [] }).rules);
   const router = createRouter({ history: createMemoryHistory(), routes: [{ path: '/:any(.*)*', component: { template: '<div />' } }] });
   await router.push(`/week?week=${WEEK}`);
-  const w = mount(WeekPlanView, { global: { plugins: [pinia, router, ElementPlus] }, attachTo: document.body });
+  const w = mount(WeekPlanView, { global: { plugins: [pinia, router, ElementPlus, [VueQueryPlugin, { queryClient: createQueryClient() }]] }, attachTo: document.body });
   await flushPromises();
   return w;
 }
