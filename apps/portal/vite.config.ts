@@ -17,9 +17,6 @@ export default defineConfig(({ mode }) => ({
       dts: false,
     }),
   ],
-  resolve: {
-    alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) },
-  },
   server: {
     port: 5173,
     proxy: { '/api': `http://127.0.0.1:${apiPort}` },

@@ -12,7 +12,7 @@ import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { pino } from 'pino';
 import { chromium } from 'playwright-core';
-import { GRASSES, SPORTS, addDaysIso, polygonAreaM2, longAxis, type Polygon } from '@swardwise/domain';
+import { GRASSES, SPORTS, addDaysIso, polygonAreaM2, longAxis, type Level, type Polygon } from '@swardwise/domain';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { openDatabase } from '../../apps/api/src/db/client.ts';
@@ -62,7 +62,7 @@ for (let i = 0; i < EXTRA_FIELDS; i++) {
     grass: pick(GRASSES),
     rootzone: 'native_soil' as const,
     irrigation: 'none' as const,
-    maintenanceLevel: 1 + Math.floor(rand() * 4),
+    maintenanceLevel: (1 + Math.floor(rand() * 4)) as Level,
     clippings: 'returned' as const,
     status: pick(['open', 'open', 'open', 'restricted', 'closed'] as const),
     geometry,

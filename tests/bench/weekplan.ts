@@ -7,7 +7,7 @@
  */
 import { performance } from 'node:perf_hooks';
 import { eq } from 'drizzle-orm';
-import { DEFAULT_TIME_ZONE, GRASSES, SPORTS, addDaysIso, defineAbilityFor, longAxis, polygonAreaM2, type Actor, type Polygon } from '@swardwise/domain';
+import { DEFAULT_TIME_ZONE, GRASSES, SPORTS, addDaysIso, defineAbilityFor, longAxis, polygonAreaM2, type Actor, type Level, type Polygon } from '@swardwise/domain';
 import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { crews, districts, fields, sites, users, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
@@ -50,7 +50,7 @@ for (let i = 0; i < TARGET_FIELDS - have; i++) {
     grass: pick(GRASSES),
     rootzone: 'native_soil' as const,
     irrigation: pick(['none', 'quick_coupler', 'automatic'] as const),
-    maintenanceLevel: 1 + Math.floor(rand() * 4),
+    maintenanceLevel: (1 + Math.floor(rand() * 4)) as Level,
     clippings: 'returned' as const,
     geometry,
     areaM2: polygonAreaM2(geometry),

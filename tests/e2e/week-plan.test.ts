@@ -122,7 +122,7 @@ describe('the week plan board', () => {
       const patched = page.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${job.id}`) && r.request().method() === 'PATCH');
       await card(page, job.id).dragTo(cell(page, other.id, job.plannedDate));
       expect((await patched).status()).toBe(409);
-      await expect.poll(() => page.getByText('Someone else changed this work order — reloaded.').count()).toBeGreaterThan(0);
+      await expect.poll(() => page.getByText('Someone else changed this work order since you opened it').count()).toBeGreaterThan(0);
       // The reloaded card shows the other change and stays with its crew.
       await expect.poll(() => cell(page, job.crewId!, job.plannedDate).locator(`[data-order-id="${job.id}"]`).textContent()).toContain('2.5 h');
       const after = (await apiBoard(page, districtId)).orders.find((o) => o.id === job.id)!;

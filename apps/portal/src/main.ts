@@ -11,14 +11,17 @@ import './styles/element.css';
 import './styles/base.css';
 
 import { abilitiesPlugin } from '@casl/vue';
+import { VueQueryPlugin } from '@tanstack/vue-query';
 import { createPinia } from 'pinia';
 import { createApp } from 'vue';
 import { ability } from './ability.ts';
+import { queryClient } from './api/queryClient.ts';
 import App from './App.vue';
 import { router } from './router/index.ts';
 
 const app = createApp(App);
 app.use(createPinia());
 app.use(router);
+app.use(VueQueryPlugin, { queryClient });
 app.use(abilitiesPlugin, ability, { useGlobalProperties: true });
 app.mount('#app');

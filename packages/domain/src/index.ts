@@ -5,3 +5,4 @@ export * from './schemas/index.ts';
 export * from './geometry.ts';
 export * from './clock.ts';
 export * from './engine/index.ts';
+export * from './contracts/index.ts';

@@ -5,16 +5,9 @@
 import type { AddressInfo } from 'node:net';
 import { simpleParser } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
+import type { SinkMessage } from '@swardwise/domain';
 
-export interface SinkMessage {
-  id: number;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string | null;
-}
+export type { SinkMessage };
 
 export interface MailSink {
   port: number;

@@ -1,5 +1,6 @@
 /** Writes and reads the audit log of every change. */
 import { and, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
+import type { AuditEntry } from '@swardwise/domain';
 import { auditLog, users } from '../db/schema/index.ts';
 import type { Queryable } from '../db/client.ts';
 import { authorize, type Ctx } from './context.ts';
@@ -27,7 +28,7 @@ export async function writeAudit(db: Queryable, entry: AuditInput): Promise<void
   await db.insert(auditLog).values({ ...entry, before: redact(entry.before), after: redact(entry.after) });
 }
 
-export async function listAudit(ctx: Ctx, filter: { entity?: string | undefined; entityId?: number | undefined; limit: number }) {
+export async function listAudit(ctx: Ctx, filter: { entity?: string | undefined; entityId?: number | undefined; limit: number }): Promise<AuditEntry<Date>[]> {
   authorize(ctx, 'read', 'AuditEntry');
   const conditions: SQL[] = [];
   if (filter.entity) conditions.push(eq(auditLog.entity, filter.entity));

@@ -1,12 +1,12 @@
 /** Mowing crews of a district. */
 import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
-import { AppError, type CreateCrewInput, type UpdateCrewInput } from '@swardwise/domain';
+import { AppError, type CreateCrewInput, type CrewRow, type StoredCrew, type UpdateCrewInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { crews, districts, users } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
 
-export async function listCrews(ctx: Ctx, filter: { districtId?: number | undefined }) {
+export async function listCrews(ctx: Ctx, filter: { districtId?: number | undefined }): Promise<CrewRow[]> {
   authorize(ctx, 'read', 'Crew', ctx.actor.role === 'crew' ? { id: ctx.actor.crewId ?? -1, districtId: ctx.actor.districtId } : undefined);
   const conditions: (SQL | undefined)[] = [];
   if (ctx.actor.role === 'foreman') conditions.push(eq(crews.districtId, ctx.actor.districtId ?? -1));
@@ -37,7 +37,7 @@ async function crewRow(db: Ctx['db'], id: number) {
   return row;
 }
 
-export async function createCrew(ctx: Ctx, input: CreateCrewInput) {
+export async function createCrew(ctx: Ctx, input: CreateCrewInput): Promise<StoredCrew<Date>> {
   authorize(ctx, 'create', 'Crew', { districtId: input.districtId });
   return (ctx.db as Db).transaction(async (tx) => {
     const [d] = await tx.select({ id: districts.id }).from(districts).where(eq(districts.id, input.districtId));
@@ -48,7 +48,7 @@ export async function createCrew(ctx: Ctx, input: CreateCrewInput) {
   });
 }
 
-export async function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput) {
+export async function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput): Promise<StoredCrew<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await crewRow(tx, id);
     if (!before) throw notFound('crew', id);
@@ -71,7 +71,7 @@ export async function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput) {
   });
 }
 
-export async function deleteCrew(ctx: Ctx, id: number, version: number) {
+export async function deleteCrew(ctx: Ctx, id: number, version: number): Promise<void> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await crewRow(tx, id);
     if (!before) throw notFound('crew', id);

@@ -1,9 +1,10 @@
 /** Districts with their yards and a count of what they hold. */
 import { asc, eq, sql } from 'drizzle-orm';
+import type { DistrictRow } from '@swardwise/domain';
 import { districts, fields, sites } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 
-export async function listDistricts(ctx: Ctx) {
+export async function listDistricts(ctx: Ctx): Promise<DistrictRow[]> {
   authorize(ctx, 'read', 'District', ctx.actor.districtId ? { id: ctx.actor.districtId } : undefined);
   const counts = ctx.db
     .select({

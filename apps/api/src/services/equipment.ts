@@ -1,6 +1,6 @@
 /** A district's mowers, line markers, spreaders and sprayers, with hour meters and blade care. */
 import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
-import { AppError, type CreateEquipmentInput, type UpdateEquipmentInput } from '@swardwise/domain';
+import { AppError, type CreateEquipmentInput, type EquipmentRow, type UpdateEquipmentInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { crews, districts, equipment } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
@@ -48,7 +48,7 @@ async function getRow(db: Ctx['db'], id: number) {
   return row;
 }
 
-export async function listEquipment(ctx: Ctx, filter: { districtId?: number | undefined }) {
+export async function listEquipment(ctx: Ctx, filter: { districtId?: number | undefined }): Promise<EquipmentRow<Date>[]> {
   authorize(ctx, 'read', 'Equipment');
   const conditions: (SQL | undefined)[] = [];
   if (ctx.actor.role === 'foreman') conditions.push(eq(equipment.districtId, ctx.actor.districtId ?? -1));
@@ -70,7 +70,7 @@ async function checkCrew(db: Ctx['db'], crewId: number | null | undefined, distr
   }
 }
 
-export async function createEquipment(ctx: Ctx, input: CreateEquipmentInput) {
+export async function createEquipment(ctx: Ctx, input: CreateEquipmentInput): Promise<EquipmentRow<Date>> {
   authorize(ctx, 'create', 'Equipment', { districtId: input.districtId });
   return (ctx.db as Db).transaction(async (tx) => {
     await checkCrew(tx, input.crewId, input.districtId);
@@ -81,7 +81,7 @@ export async function createEquipment(ctx: Ctx, input: CreateEquipmentInput) {
   });
 }
 
-export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipmentInput) {
+export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipmentInput): Promise<EquipmentRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before: Row | undefined = await getRow(tx, id);
     if (!before) throw notFound('equipment', id);
@@ -106,7 +106,7 @@ export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipme
   });
 }
 
-export async function deleteEquipment(ctx: Ctx, id: number, version: number) {
+export async function deleteEquipment(ctx: Ctx, id: number, version: number): Promise<void> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await getRow(tx, id);
     if (!before) throw notFound('equipment', id);

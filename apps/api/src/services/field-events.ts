@@ -3,7 +3,7 @@
  * and mowing is timed before them. Each row carries its field's site and district for scope.
  */
 import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
-import { AppError, type Actor, type CreateFieldEventInput, type UpdateFieldEventInput } from '@swardwise/domain';
+import { AppError, type Actor, type CreateFieldEventInput, type FieldEventRow, type UpdateFieldEventInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { fieldEvents, fields, sites } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
@@ -57,7 +57,7 @@ function eventScope(actor: Actor): SQL | undefined {
   }
 }
 
-export async function listFieldEvents(ctx: Ctx, filter: FieldEventFilter) {
+export async function listFieldEvents(ctx: Ctx, filter: FieldEventFilter): Promise<FieldEventRow<Date>[]> {
   authorize(ctx, 'read', 'FieldEvent');
   const conditions: (SQL | undefined)[] = [eventScope(ctx.actor), gte(fieldEvents.startsOn, filter.from), lte(fieldEvents.startsOn, filter.to)];
   if (filter.fieldId) conditions.push(eq(fieldEvents.fieldId, filter.fieldId));
@@ -80,7 +80,7 @@ async function fieldOf(db: Ctx['db'], fieldId: number) {
   return field;
 }
 
-export async function createFieldEvent(ctx: Ctx, input: CreateFieldEventInput) {
+export async function createFieldEvent(ctx: Ctx, input: CreateFieldEventInput): Promise<FieldEventRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const field = await fieldOf(tx, input.fieldId);
     authorize(ctx, 'create', 'FieldEvent', { siteId: field.siteId, districtId: field.districtId });
@@ -94,7 +94,7 @@ export async function createFieldEvent(ctx: Ctx, input: CreateFieldEventInput) {
   });
 }
 
-export async function updateFieldEvent(ctx: Ctx, id: number, input: UpdateFieldEventInput) {
+export async function updateFieldEvent(ctx: Ctx, id: number, input: UpdateFieldEventInput): Promise<FieldEventRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await getRow(tx, id);
     if (!before) throw notFound('field_event', id);
@@ -119,7 +119,7 @@ export async function updateFieldEvent(ctx: Ctx, id: number, input: UpdateFieldE
   });
 }
 
-export async function deleteFieldEvent(ctx: Ctx, id: number, version: number) {
+export async function deleteFieldEvent(ctx: Ctx, id: number, version: number): Promise<void> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await getRow(tx, id);
     if (!before) throw notFound('field_event', id);

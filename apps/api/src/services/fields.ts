@@ -2,7 +2,7 @@
 import fs from 'node:fs/promises';
 import path from 'node:path';
 import { and, asc, count, eq, inArray, sql, type SQL } from 'drizzle-orm';
-import { AppError, longAxis, polygonAreaM2, type CreateFieldInput, type Polygon, type UpdateFieldInput } from '@swardwise/domain';
+import { AppError, longAxis, polygonAreaM2, type CreateFieldInput, type FieldDetail, type FieldRow, type Polygon, type UpdateFieldInput } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { districts, fieldChecks, fields, sites, workOrders, workPhotos } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
@@ -59,7 +59,7 @@ async function getFieldRow(db: Ctx['db'], id: number) {
   return row;
 }
 
-export async function listFields(ctx: Ctx, filter: { districtId?: number | undefined; siteId?: number | undefined; q?: string | undefined }) {
+export async function listFields(ctx: Ctx, filter: { districtId?: number | undefined; siteId?: number | undefined; q?: string | undefined }): Promise<FieldRow<Date>[]> {
   authorize(ctx, 'read', 'Field');
   const conditions: (SQL | undefined)[] = [fieldScope(ctx.actor)];
   if (filter.districtId) conditions.push(eq(sites.districtId, filter.districtId));
@@ -78,7 +78,7 @@ export async function listFieldsJson(ctx: Ctx, filter: { districtId?: number | u
   return cachedAnswer(ctx, 'fields', key, async () => JSON.stringify({ items: await listFields(ctx, filter) }));
 }
 
-export async function getField(ctx: Ctx, id: number) {
+export async function getField(ctx: Ctx, id: number): Promise<FieldDetail<Date>> {
   const row = await getFieldRow(ctx.db, id);
   if (!row) throw notFound('field', id);
   authorize(ctx, 'read', 'Field', row);
@@ -91,7 +91,7 @@ async function siteOf(db: Ctx['db'], siteId: number) {
   return site;
 }
 
-export async function createField(ctx: Ctx, input: CreateFieldInput) {
+export async function createField(ctx: Ctx, input: CreateFieldInput): Promise<FieldDetail<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const site = await siteOf(tx, input.siteId);
     authorize(ctx, 'create', 'Field', { siteId: site.id, districtId: site.districtId });
@@ -105,7 +105,7 @@ export async function createField(ctx: Ctx, input: CreateFieldInput) {
   });
 }
 
-export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput) {
+export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput): Promise<FieldDetail<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await getFieldRow(tx, id);
     if (!before) throw notFound('field', id);
@@ -186,7 +186,7 @@ export async function removePhotoFiles(uploadsDir: string, fileNames: readonly s
   await Promise.all(fileNames.map((name) => fs.rm(path.join(uploadsDir, path.basename(name)), { force: true })));
 }
 
-export async function deleteField(ctx: Ctx, id: number, version: number, uploadsDir: string) {
+export async function deleteField(ctx: Ctx, id: number, version: number, uploadsDir: string): Promise<void> {
   const photoFiles = await (ctx.db as Db).transaction(async (tx) => {
     const before = await getFieldRow(tx, id);
     if (!before) throw notFound('field', id);

@@ -5,7 +5,7 @@
  * caller's last import can be undone.
  */
 import { and, desc, eq, gt, ne, or, sql, type SQL } from 'drizzle-orm';
-import { AppError, type ImportKind, type ImportRow, type ImportSummary } from '@swardwise/domain';
+import { AppError, type ImportKind, type ImportList, type ImportRecord as ImportAnswerRecord, type ImportRow, type ImportSummary } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { fields, imports, sites, users } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
@@ -51,7 +51,7 @@ async function loadImport(db: Queryable, id: number) {
 /** The district a foreman's imports belong to; department-wide for the others. */
 const importDistrict = (ctx: Ctx) => (ctx.actor.role === 'foreman' ? ctx.actor.districtId : null);
 
-export async function previewImport(ctx: Ctx, kind: ImportKind, file: UploadedFile) {
+export async function previewImport(ctx: Ctx, kind: ImportKind, file: UploadedFile): Promise<ImportAnswerRecord<Date>> {
   authorize(ctx, 'create', 'Import');
   const raw = readUpload(kind, file);
   const plan = await planImport(ctx, kind, raw);
@@ -66,14 +66,14 @@ function readable(ctx: Ctx, row: { userId: number; districtId: number | null }):
   return row.userId === ctx.actor.id || can(ctx, 'read', 'Import', { districtId: row.districtId });
 }
 
-export async function getImport(ctx: Ctx, id: number) {
+export async function getImport(ctx: Ctx, id: number): Promise<ImportAnswerRecord<Date>> {
   authorize(ctx, 'create', 'Import');
   const row = await loadImport(ctx.db, id);
   if (!row || !readable(ctx, row)) throw notFound('import', id);
   return present(row);
 }
 
-export async function listImports(ctx: Ctx, limit: number) {
+export async function listImports(ctx: Ctx, limit: number): Promise<ImportList<Date>> {
   authorize(ctx, 'create', 'Import');
   const scope: SQL | undefined =
     ctx.actor.role === 'foreman' ? or(eq(imports.userId, ctx.actor.id), eq(imports.districtId, ctx.actor.districtId ?? -1)) : undefined;
@@ -101,7 +101,7 @@ async function ownImport(ctx: Ctx, tx: Queryable, id: number) {
   return row;
 }
 
-export async function commitImport(ctx: Ctx, id: number) {
+export async function commitImport(ctx: Ctx, id: number): Promise<ImportAnswerRecord<Date>> {
   authorize(ctx, 'create', 'Import');
   return (ctx.db as Db).transaction(async (tx) => {
     const record = await ownImport(ctx, tx, id);
@@ -172,7 +172,7 @@ function restorable(before: Record<string, unknown>) {
   return rest;
 }
 
-export async function undoImport(ctx: Ctx, id: number, uploadsDir: string) {
+export async function undoImport(ctx: Ctx, id: number, uploadsDir: string): Promise<ImportAnswerRecord<Date>> {
   authorize(ctx, 'create', 'Import');
   const photoFiles: string[] = [];
   const undone = await (ctx.db as Db).transaction(async (tx) => {

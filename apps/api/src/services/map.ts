@@ -23,9 +23,14 @@ import {
   dayNumberToIso,
   mowTriggerHeightMm,
   type Grass,
+  type BasemapAnswer,
   type Level,
   type LevelStandard,
+  type MapAnswer,
+  type MapDistrict,
+  type MapField,
   type MapQuery,
+  type MapSite,
   type Polygon,
   type Standards,
 } from '@swardwise/domain';
@@ -33,68 +38,7 @@ import { districts, fieldChecks, fields, settings, sites, standards, weatherDays
 import { authorize, can, type Ctx } from './context.ts';
 import { fieldCrewIds, fieldScope, siteScope } from './scope.ts';
 
-export interface MapDistrict {
-  id: number;
-  name: string;
-  boundary: Polygon;
-}
-
-export interface MapSite {
-  id: number;
-  name: string;
-  kind: string;
-  districtId: number;
-  lat: number;
-  lng: number;
-}
-
-export interface MapField {
-  id: number;
-  siteId: number;
-  districtId: number;
-  name: string;
-  sport: string;
-  grass: string;
-  maintenanceLevel: number;
-  status: string;
-  areaM2: number;
-  longAxisDeg: number | null;
-  /** Long axis closer to east–west than north–south (low sun in players' eyes at one end). */
-  eastWest: boolean;
-  /** Latest surface score (0–100) and the day of that field check; null without checks. */
-  score: number | null;
-  scoredOn: string | null;
-  lastMowedOn: string | null;
-  /** Whole days from the last mowing to `asOf`; null when never mowed. */
-  daysSinceMowing: number | null;
-  hocMm: number;
-  /** Grass height the engine predicts at the end of `asOf`, mm; null without a last mowing or weather. */
-  predictedHeightMm: number | null;
-  /** Predicted height above 1.5 × HOC (one-third rule); null when it cannot be computed. */
-  overdue: boolean | null;
-  /** Day the predicted height first passed 1.5 × HOC. */
-  overdueSince: string | null;
-  version: number;
-  geometry: Polygon;
-}
-
-export interface MapAnswer {
-  /** The day the values describe: today, or the latest day with weather when today has none. */
-  asOf: string;
-  /** The day asked for (today unless `asOf` was given). */
-  requested: string;
-  /** Plain words when `asOf` is not the day asked for, or weather is missing. */
-  weatherNote: string | null;
-  districts: MapDistrict[];
-  sites: MapSite[];
-  fields: MapField[];
-}
-
-export interface BasemapAnswer {
-  basemap: unknown;
-  tileUrl: string | null;
-  attribution: string | null;
-}
+export type { BasemapAnswer, MapAnswer, MapDistrict, MapField, MapSite };
 
 const round6 = (v: number) => Math.round(v * 1e6) / 1e6;
 const round1 = (v: number) => Math.round(v * 10) / 10;
@@ -358,7 +302,8 @@ export async function basemap(ctx: Ctx, config: { mapTileUrl: string | undefined
   authorize(ctx, 'read', 'Field');
   const [row] = await ctx.db.select({ value: settings.value }).from(settings).where(eq(settings.key, 'basemap'));
   return {
-    basemap: row?.value ?? { type: 'FeatureCollection', features: [] },
+    // The seed stores it as GeoJSON (settings values are untyped JSON).
+    basemap: (row?.value as BasemapAnswer['basemap'] | undefined) ?? { type: 'FeatureCollection', features: [] },
     tileUrl: config.mapTileUrl ?? null,
     attribution: config.mapAttribution ?? null,
   };

@@ -36,11 +36,16 @@ import {
   runTimeMinutes,
   simulateMowing,
   stripePassPlan,
+  type FieldNeeds,
+  type HocNeed,
+  type LabourNeed,
   type Level,
+  type NeedInput,
   type PlayLevel,
   type SiteKind,
   type Sport,
   type Visibility,
+  type WaterNeed,
 } from '@swardwise/domain';
 import { fieldChecks, sites, weatherDays, weatherStations } from '../db/schema/index.ts';
 import type { Ctx } from './context.ts';
@@ -48,14 +53,7 @@ import { getField } from './fields.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 import { dailyWeatherOf } from './weather.ts';
 
-/** One input of a block: raw SI value and its unit token, so the portal can convert it. */
-export interface NeedInput {
-  key: string;
-  label: string;
-  value: number | string | boolean | null;
-  /** SI unit token (mm, m, m2, L, gN/m2, mm/day, h, km/h, d, %) or null for plain values. */
-  unit: string | null;
-}
+export type { FieldNeeds, NeedInput };
 
 const input = (key: string, label: string, value: NeedInput['value'], unit: string | null = null): NeedInput => ({ key, label, value, unit });
 
@@ -83,7 +81,7 @@ const sum = (xs: ArrayLike<number>) => {
 };
 const r = (v: number, digits = 3) => Math.round(v * 10 ** digits) / 10 ** digits;
 
-export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
+export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Promise<FieldNeeds> {
   const field = await getField(ctx, fieldId); // authorizes 'read' on this field's district and site
   const [site] = await ctx.db.select({ lat: sites.lat, lng: sites.lng, kind: sites.kind }).from(sites).where(eq(sites.id, field.siteId));
   const level = field.maintenanceLevel as Level;
@@ -145,7 +143,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
   const hocSource = field.hocOverrideMm !== null ? 'override' : std.hocByGrassMm[field.grass] !== undefined ? 'standards_grass' : 'standards_sport';
   const mowerKind = mowerTypeFor(hocMm);
   const mower = params.mowers[mowerKind];
-  const hoc = {
+  const hoc: HocNeed = {
     hocMm,
     source: hocSource,
     triggerHeightMm: mowTriggerHeightMm(hocMm),
@@ -235,7 +233,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
   const capacityHours = hoursPerMowingPolygon(field.geometry, mower);
   const plan = rectangular ? stripePassPlan(axis.lengthM, axis.widthM, mower, 'side_to_side') : null;
   const hoursPerMowing = plan ? plan.hours : capacityHours;
-  const labour = {
+  const labour: LabourNeed = {
     method: plan ? 'pass_plan' : 'field_capacity',
     hoursPerMowing,
     hoursPerWeek: hoursPerMowing * mowing.mowingsPerWeek,
@@ -267,7 +265,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
   const irrigated = daily.share > 0;
   const netMm = irrigated ? netIrrigationMm(etcWeek, effWeek, daily.share) : 0;
   const grossMm = irrigated ? grossIrrigationMm(netMm, daily.du) : 0;
-  const water = {
+  const water: WaterNeed = {
     irrigated,
     notIrrigatedReason: irrigated ? null : field.irrigation === 'none' ? 'The field has no irrigation.' : `Level ${level} (${std.name}) is not irrigated in the Standards.`,
     et0Method: hargreavesDays === 0 ? 'penman_monteith' : hargreavesDays === weekDays ? 'hargreaves' : 'mixed',
@@ -416,5 +414,3 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
     season: seasonBlock,
   };
 }
-
-export type FieldNeeds = Awaited<ReturnType<typeof fieldNeeds>>;

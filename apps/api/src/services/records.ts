@@ -4,7 +4,7 @@
  * counted late; one not done by its day is counted missed.
  */
 import { and, asc, eq, gte, lte, sql } from 'drizzle-orm';
-import type { DateRangeQuery } from '@swardwise/domain';
+import type { DateRangeQuery, Records } from '@swardwise/domain';
 import { crews, fields, sites, workOrders } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { readScope } from './work-orders.ts';
@@ -27,7 +27,7 @@ const empty = (): Tally => ({ plannedHours: 0, actualHours: 0, plannedHoursDone:
 const r2 = (v: number) => Math.round(v * 100) / 100;
 const finish = <T extends Tally>(t: T): T => ({ ...t, plannedHours: r2(t.plannedHours), actualHours: r2(t.actualHours), plannedHoursDone: r2(t.plannedHoursDone) });
 
-export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.today()) {
+export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.today()): Promise<Records> {
   authorize(ctx, 'read', 'WorkOrder', q.districtId ? { districtId: q.districtId } : undefined);
   const conditions = [gte(workOrders.plannedDate, q.from), lte(workOrders.plannedDate, q.to), readScope(ctx)];
   if (q.districtId) conditions.push(eq(workOrders.districtId, q.districtId));

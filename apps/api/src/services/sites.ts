@@ -1,6 +1,6 @@
 /** Parks, complexes and school campuses. */
 import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
-import { AppError, type CreateSiteInput, type UpdateSiteInput } from '@swardwise/domain';
+import { AppError, type CreateSiteInput, type SiteRow, type UpdateSiteInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { districts, fields, sites } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
@@ -43,14 +43,12 @@ function selectSites(db: Ctx['db']) {
     .leftJoin(fc, eq(fc.siteId, sites.id));
 }
 
-export type SiteRow = Awaited<ReturnType<typeof getSiteRow>>;
-
 async function getSiteRow(db: Ctx['db'], id: number) {
   const [row] = await selectSites(db).where(eq(sites.id, id));
   return row;
 }
 
-export async function listSites(ctx: Ctx, filter: { districtId?: number | undefined; q?: string | undefined }) {
+export async function listSites(ctx: Ctx, filter: { districtId?: number | undefined; q?: string | undefined }): Promise<SiteRow<Date>[]> {
   authorize(ctx, 'read', 'Site');
   const conditions: (SQL | undefined)[] = [siteScope(ctx.actor)];
   if (filter.districtId) conditions.push(eq(sites.districtId, filter.districtId));
@@ -61,7 +59,7 @@ export async function listSites(ctx: Ctx, filter: { districtId?: number | undefi
   return rows.filter((row) => can(ctx, 'read', 'Site', row));
 }
 
-export async function getSite(ctx: Ctx, id: number) {
+export async function getSite(ctx: Ctx, id: number): Promise<SiteRow<Date>> {
   const row = await getSiteRow(ctx.db, id);
   if (!row) throw notFound('site', id);
   authorize(ctx, 'read', 'Site', row);
@@ -73,7 +71,7 @@ async function checkDistrict(db: Ctx['db'], districtId: number) {
   if (!d) throw new AppError('invalid', 'request/invalid', 'No such district', { issues: [{ path: 'body.districtId', message: 'no such district' }] });
 }
 
-export async function createSite(ctx: Ctx, input: CreateSiteInput) {
+export async function createSite(ctx: Ctx, input: CreateSiteInput): Promise<SiteRow<Date>> {
   authorize(ctx, 'create', 'Site', { districtId: input.districtId });
   return (ctx.db as Db).transaction(async (tx) => {
     await checkDistrict(tx, input.districtId);
@@ -84,7 +82,7 @@ export async function createSite(ctx: Ctx, input: CreateSiteInput) {
   });
 }
 
-export async function updateSite(ctx: Ctx, id: number, input: UpdateSiteInput) {
+export async function updateSite(ctx: Ctx, id: number, input: UpdateSiteInput): Promise<SiteRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await getSiteRow(tx, id);
     if (!before) throw notFound('site', id);

@@ -1,6 +1,17 @@
 /** The department's Standards (one row per maintenance level) and its engine parameters. */
 import { asc, eq, sql } from 'drizzle-orm';
-import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, type DepartmentParameters, type Level, type LevelStandard, type Standards, type UpdateLevelStandardInput } from '@swardwise/domain';
+import {
+  DEFAULT_PARAMETERS,
+  DEFAULT_STANDARDS,
+  LEVELS,
+  type DepartmentParameters,
+  type Level,
+  type LevelStandard,
+  type Standards,
+  type StandardsAnswer,
+  type StandardsRow as StandardsAnswerRow,
+  type UpdateLevelStandardInput,
+} from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { settings, standards } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
@@ -9,13 +20,7 @@ import { authorize, notFound, versionConflict, type Ctx } from './context.ts';
 /** Settings key under which a department may keep its own engine parameters. */
 export const PARAMETERS_KEY = 'department_parameters';
 
-export interface StandardsRow {
-  level: Level;
-  data: LevelStandard;
-  version: number;
-  updatedAt: Date;
-  updatedBy: number | null;
-}
+export type StandardsRow = StandardsAnswerRow<Date>;
 
 async function rows(db: Queryable): Promise<StandardsRow[]> {
   const found = await db.select().from(standards).orderBy(asc(standards.level));
@@ -43,7 +48,7 @@ export async function loadParameters(db: Queryable): Promise<DepartmentParameter
   return row ? { ...DEFAULT_PARAMETERS, ...(row.value as Partial<DepartmentParameters>) } : DEFAULT_PARAMETERS;
 }
 
-export async function listStandards(ctx: Ctx) {
+export async function listStandards(ctx: Ctx): Promise<StandardsAnswer<Date>> {
   authorize(ctx, 'read', 'Standards');
   return { levels: await rows(ctx.db), parameters: await loadParameters(ctx.db) };
 }

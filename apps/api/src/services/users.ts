@@ -8,37 +8,22 @@ import {
   OWN_ACCOUNT_FIELDS,
   PERMISSION_FIELDS,
   scopeIssues,
-  type Actor,
+  type Invitation,
   type InviteUserInput,
   type Role,
+  type SessionUser,
   type UnitSystem,
   type UpdateUserInput,
+  type UserRow as UserAnswerRow,
 } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { crews, districts, sessions, sites, users, userSites, userTokens } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
 
-export interface SessionUser {
-  id: number;
-  email: string;
-  name: string;
-  role: Role;
-  districtId: number | null;
-  crewId: number | null;
-  siteIds: number[];
-  units: UnitSystem;
-  version: number;
-}
-
-export interface UserRow extends SessionUser {
-  active: boolean;
-  lastSignInAt: Date | null;
-  createdAt: Date;
-  districtName: string | null;
-  crewName: string | null;
-  pendingInvite: boolean;
-}
+export { actorOf } from '@swardwise/domain';
+export type { SessionUser };
+export type UserRow = UserAnswerRow<Date>;
 
 const INVITE_DAYS = 7;
 
@@ -75,10 +60,6 @@ function selectUsers(db: Queryable) {
 export function toSessionUser(row: UserRow): SessionUser {
   const { id, email, name, role, districtId, crewId, siteIds, units, version } = row;
   return { id, email, name, role, districtId, crewId, siteIds, units, version };
-}
-
-export function actorOf(user: SessionUser): Actor {
-  return { id: user.id, role: user.role, districtId: user.districtId, crewId: user.crewId, siteIds: user.siteIds };
 }
 
 export async function findUser(db: Queryable, id: number): Promise<UserRow | undefined> {
@@ -155,7 +136,7 @@ function newToken() {
   return { token, tokenHash: hashToken(token) };
 }
 
-export async function inviteUser(ctx: Ctx, input: InviteUserInput, publicUrl: string): Promise<{ user: UserRow; inviteUrl: string }> {
+export async function inviteUser(ctx: Ctx, input: InviteUserInput, publicUrl: string): Promise<Invitation<Date>> {
   authorize(ctx, 'create', 'User');
   return (ctx.db as Db).transaction(async (tx) => {
     const [existing] = await tx.select({ id: users.id }).from(users).where(eq(users.email, input.email));

@@ -1,7 +1,18 @@
 /** Weather stations and their days: station files, the hosted service, and gaps. */
 import Papa from 'papaparse';
 import { and, asc, eq, gte, lte, sql } from 'drizzle-orm';
-import { AppError, addDaysIso, weatherDaySchema, type DailyWeather, type WeatherDayInput } from '@swardwise/domain';
+import {
+  AppError,
+  addDaysIso,
+  weatherDaySchema,
+  type DailyWeather,
+  type PullAnswer,
+  type StationCsvAnswer,
+  type StationCsvRow,
+  type WeatherDayInput,
+  type WeatherDaysAnswer,
+  type WeatherStationRow,
+} from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { weatherDays, weatherStations } from '../db/schema/index.ts';
 import { fetchWeather, type WeatherClientSettings } from '../weather/client.ts';
@@ -19,7 +30,7 @@ export function dailyWeatherOf(r: typeof weatherDays.$inferSelect): DailyWeather
   return d;
 }
 
-export async function listStations(ctx: Ctx) {
+export async function listStations(ctx: Ctx): Promise<WeatherStationRow[]> {
   authorize(ctx, 'read', 'Weather');
   const counts = ctx.db
     .select({
@@ -57,7 +68,7 @@ async function station(ctx: Ctx, id: number) {
 }
 
 /** Days in a range, with the dates that have no weather listed as gaps. */
-export async function listDays(ctx: Ctx, stationId: number, from: string, to: string) {
+export async function listDays(ctx: Ctx, stationId: number, from: string, to: string): Promise<WeatherDaysAnswer<Date>> {
   authorize(ctx, 'read', 'Weather');
   await station(ctx, stationId);
   const days = await ctx.db
@@ -74,11 +85,7 @@ export async function listDays(ctx: Ctx, stationId: number, from: string, to: st
 /** The columns of a station file, in our own names (SI units). */
 export const STATION_CSV_COLUMNS = ['date', 'tmax_c', 'tmin_c', 'rh_max_pct', 'rh_min_pct', 'wind_ms', 'sunshine_h', 'solar_mj', 'rain_mm'] as const;
 
-export interface CsvRow {
-  line: number;
-  data: WeatherDayInput | null;
-  errors: { column: string; message: string }[];
-}
+export type CsvRow = StationCsvRow;
 
 const COLUMN_OF: Record<string, string> = {
   tmaxC: 'tmax_c',
@@ -170,7 +177,7 @@ async function saveDays(ctx: Ctx, stationId: number, days: WeatherDayInput[], so
 }
 
 /** Checks a station file and, when asked and clean, writes all of it or nothing. */
-export async function uploadStationCsv(ctx: Ctx, stationId: number, text: string, commit: boolean) {
+export async function uploadStationCsv(ctx: Ctx, stationId: number, text: string, commit: boolean): Promise<StationCsvAnswer> {
   authorize(ctx, 'create', 'Weather');
   await station(ctx, stationId);
   const preview = parseStationCsv(text);
@@ -190,7 +197,7 @@ export async function uploadStationCsv(ctx: Ctx, stationId: number, text: string
 }
 
 /** Pulls a range from the hosted service into a station. A malformed answer writes nothing; gaps are reported. */
-export async function pullFromService(ctx: Ctx, stationId: number, from: string, to: string, settings: WeatherClientSettings | null) {
+export async function pullFromService(ctx: Ctx, stationId: number, from: string, to: string, settings: WeatherClientSettings | null): Promise<PullAnswer> {
   authorize(ctx, 'create', 'Weather');
   const st = await station(ctx, stationId);
   const fetched = await fetchWeather(settings, { lat: st.lat, lng: st.lng }, from, to);

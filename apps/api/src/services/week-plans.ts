@@ -17,6 +17,9 @@ import {
   weekDates,
   MOWER_KINDS,
   type AskedOrder,
+  type ConfirmAnswer,
+  type DiffItem,
+  type GenerateAnswer,
   type GenerateWeekInput,
   type Level,
   type PlanEquipment,
@@ -24,7 +27,9 @@ import {
   type PlanMower,
   type PreparedWeather,
   type ScheduledOrder,
+  type WeekBoard,
   type WeekQuery,
+  type WorkTask,
   type Weekday,
 } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
@@ -258,7 +263,7 @@ async function weekRows(db: Queryable, districtId: number, weekStart: string) {
 }
 
 /** The board of a district's week: orders, crews, each crew-day's load and route. */
-export async function getWeekBoard(ctx: Ctx, q: WeekQuery) {
+export async function getWeekBoard(ctx: Ctx, q: WeekQuery): Promise<WeekBoard<Date>> {
   authorize(ctx, 'read', 'WorkOrder', { districtId: q.districtId });
   if (ctx.actor.role === 'crew' || ctx.actor.role === 'partner') throw new AppError('forbidden', 'auth/forbidden', 'The week plan board is for foremen and the department');
   const dates = weekDates(q.weekStart);
@@ -320,25 +325,13 @@ async function boardRows(db: Queryable, ids: number[]): Promise<WorkOrderRow[]> 
   return out;
 }
 
-interface DiffItem {
-  fieldId: number;
-  fieldName: string;
-  siteName: string;
-  task: string;
-  plannedDate: string;
-  plannedHours: number;
-  crewId: number | null;
-  crewName: string | null;
-  reason: string;
-}
-
 /**
  * Generates (or re-generates) the week. Kept orders (pinned, hand-made, started, done,
  * skipped) stay as they are and count as work in the engine; the rest is matched to the new
  * plan. `dryRun` shows the change and writes nothing. Every insert, update and delete is
  * audited, plus one entry for the run.
  */
-export async function generateWeek(ctx: Ctx, input: GenerateWeekInput) {
+export async function generateWeek(ctx: Ctx, input: GenerateWeekInput): Promise<GenerateAnswer<Date>> {
   authorize(ctx, 'create', 'WorkOrder', { districtId: input.districtId });
   const q = { districtId: input.districtId, weekStart: input.weekStart };
   const existing = await weekRows(ctx.db, q.districtId, q.weekStart);
@@ -349,7 +342,7 @@ export async function generateWeek(ctx: Ctx, input: GenerateWeekInput) {
     (await ctx.db.select({ id: fields.id, name: fields.name, siteName: sites.name }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(sites.districtId, q.districtId))).map((f) => [f.id, f]),
   );
   const crewName = new Map(plan.crewRows.map((c) => [c.id, c.name]));
-  const item = (o: { fieldId: number; task: string; plannedDate: string; plannedHours: number; crewId: number | null; reason: string }): DiffItem => ({
+  const item = (o: { fieldId: number; task: WorkTask; plannedDate: string; plannedHours: number; crewId: number | null; reason: string }): DiffItem => ({
     fieldId: o.fieldId,
     fieldName: fieldInfo.get(o.fieldId)?.name ?? '',
     siteName: fieldInfo.get(o.fieldId)?.siteName ?? '',
@@ -486,7 +479,7 @@ function toInsert(p: ScheduledOrder, q: GenerationInput, actorId: number): typeo
  * Confirms the suggested crews: every planned order of the week that has a crew becomes
  * assigned and pinned, and each crew lead gets one e-mail listing the crew's new work.
  */
-export async function confirmWeek(ctx: Ctx, q: WeekQuery & { crewId?: number | undefined }, deps: WriteDeps) {
+export async function confirmWeek(ctx: Ctx, q: WeekQuery & { crewId?: number | undefined }, deps: WriteDeps): Promise<ConfirmAnswer<Date>> {
   authorize(ctx, 'update', 'WorkOrder', { districtId: q.districtId });
   const dates = weekDates(q.weekStart);
   const changed = await (ctx.db as Db).transaction(async (tx) => {

@@ -4,7 +4,15 @@
  * assigned or moved.
  */
 import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
-import { AppError, WORK_TASK_LABELS, mondayOf, type CreateWorkOrderInput, type UpdateWorkOrderInput } from '@swardwise/domain';
+import {
+  AppError,
+  WORK_TASK_LABELS,
+  mondayOf,
+  type CreateWorkOrderInput,
+  type UpdateWorkOrderInput,
+  type WorkOrderRow as WorkOrderAnswerRow,
+  type WorkOrderWriteAnswer,
+} from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { crews, equipment, fields, sites, users, workOrders, workPhotos } from '../db/schema/index.ts';
 import type { Mailer } from '../mail/mailer.ts';
@@ -71,7 +79,7 @@ export function readScope(ctx: Ctx): SQL | undefined {
   return undefined;
 }
 
-export async function listWorkOrders(ctx: Ctx, filter: WorkOrderFilter) {
+export async function listWorkOrders(ctx: Ctx, filter: WorkOrderFilter): Promise<WorkOrderAnswerRow<Date>[]> {
   authorize(ctx, 'read', 'WorkOrder');
   const conditions: (SQL | undefined)[] = [gte(workOrders.plannedDate, filter.from), lte(workOrders.plannedDate, filter.to), readScope(ctx)];
   if (filter.crewId) conditions.push(eq(workOrders.crewId, filter.crewId));
@@ -144,7 +152,7 @@ export interface WriteDeps {
 }
 
 /** A foreman adds work by hand (aeration, topdressing, an extra mowing). Kept by every re-generation. */
-export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, deps: WriteDeps) {
+export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, deps: WriteDeps): Promise<WorkOrderWriteAnswer<Date>> {
   const f = await fieldScopeRow(ctx.db, input.fieldId);
   if (!f) throw new AppError('invalid', 'request/invalid', 'No such field', { issues: [{ path: 'body.fieldId', message: 'no such field' }] });
   authorize(ctx, 'create', 'WorkOrder', { districtId: f.districtId, siteId: f.siteId });
@@ -183,7 +191,7 @@ export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, dep
  * foremen on one order: the second gets a 409). Any change pins the order, so re-generating
  * the week keeps it; giving it a crew makes it assigned. Logged work cannot be moved.
  */
-export async function updateWorkOrder(ctx: Ctx, id: number, input: UpdateWorkOrderInput, deps: WriteDeps) {
+export async function updateWorkOrder(ctx: Ctx, id: number, input: UpdateWorkOrderInput, deps: WriteDeps): Promise<WorkOrderWriteAnswer<Date>> {
   const result = await (ctx.db as Db).transaction(async (tx) => {
     const [before] = await tx.select().from(workOrders).where(eq(workOrders.id, id));
     if (!before) throw notFound('work_order', id);
@@ -228,7 +236,7 @@ export async function updateWorkOrder(ctx: Ctx, id: number, input: UpdateWorkOrd
   return { ...row, emailed };
 }
 
-export async function deleteWorkOrder(ctx: Ctx, id: number, version: number, deps: WriteDeps) {
+export async function deleteWorkOrder(ctx: Ctx, id: number, version: number, deps: WriteDeps): Promise<void> {
   const before = await (ctx.db as Db).transaction(async (tx) => {
     const [row] = await tx.select().from(workOrders).where(eq(workOrders.id, id));
     if (!row) throw notFound('work_order', id);

@@ -9,7 +9,7 @@ import fs from 'node:fs/promises';
 import path from 'node:path';
 import sharp from 'sharp';
 import { and, count, eq } from 'drizzle-orm';
-import { AppError } from '@swardwise/domain';
+import { AppError, type PhotoAnswer } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { workPhotos } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
@@ -61,7 +61,7 @@ async function readImage(buffer: Buffer) {
   }
 }
 
-export async function addWorkPhoto(ctx: Ctx, orderId: number, upload: PhotoUpload, uploadsDir: string) {
+export async function addWorkPhoto(ctx: Ctx, orderId: number, upload: PhotoUpload, uploadsDir: string): Promise<PhotoAnswer<Date>> {
   const order = await orderFor(ctx, orderId, 'log');
   // A stable name per (order, phone reference): a retried upload finds its first copy.
   const fileName = upload.clientRef

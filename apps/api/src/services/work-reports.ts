@@ -5,7 +5,7 @@
  * forward and adds the hours to the mower's hour meter.
  */
 import { and, asc, eq, sql } from 'drizzle-orm';
-import { AppError, type WorkReportInput } from '@swardwise/domain';
+import { AppError, type ReportAnswer as ReportAnswerOf, type WorkOrderAnswer, type WorkReportInput } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { crews, equipment, fields, sites, workOrders, workPhotos, workUpdates } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
@@ -78,7 +78,7 @@ const updateColumns = {
 const photoUrl = (orderId: number, photoId: number) => `/api/work-orders/${orderId}/photos/${photoId}`;
 
 /** The order with what the crew reported on it and its photos. */
-export async function getWorkOrder(ctx: Ctx, id: number) {
+export async function getWorkOrder(ctx: Ctx, id: number): Promise<WorkOrderAnswer<Date>> {
   const order = await orderFor(ctx, id, 'read');
   const updates = await ctx.db
     .select({ ...updateColumns, createdBy: workUpdates.createdBy, createdAt: workUpdates.createdAt })
@@ -93,11 +93,7 @@ export async function getWorkOrder(ctx: Ctx, id: number) {
   return { order, updates, photos: photos.map((p) => ({ ...p, url: photoUrl(id, p.id) })) };
 }
 
-export interface ReportAnswer {
-  order: OrderRow;
-  update: { id: number; status: string; actualHours: number | null; note: string; reportedAt: Date };
-  duplicate: boolean;
-}
+export type ReportAnswer = ReportAnswerOf<Date>;
 
 async function earlierAnswer(ctx: Ctx, orderId: number, clientRef: string): Promise<ReportAnswer | null> {
   const [update] = await ctx.db

@@ -1,14 +1,7 @@
-import type { UnitSystem } from '@swardwise/domain';
+import type { ForgotPasswordAnswer, SessionAnswer, UnitSystem } from '@swardwise/domain';
 import { api } from './client.ts';
-import type { SessionUser } from './types.ts';
 
-/** The signed-in session: the user and the department's IANA time zone (its "today" is a local date there). */
-export interface SessionAnswer {
-  user: SessionUser;
-  timeZone: string;
-}
-
-export function fetchMe(): Promise<SessionAnswer> {
+export function getMe(): Promise<SessionAnswer> {
   return api.get<SessionAnswer>('/auth/me');
 }
 
@@ -33,5 +26,5 @@ export function resetPassword(token: string, password: string): Promise<SessionA
 }
 
 export async function forgotPassword(email: string): Promise<string> {
-  return (await api.post<{ message: string }>('/auth/forgot-password', { email })).message;
+  return (await api.post<ForgotPasswordAnswer>('/auth/forgot-password', { email })).message;
 }

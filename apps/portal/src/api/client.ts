@@ -38,6 +38,20 @@ function isErrorBody(value: unknown): value is ErrorBody {
   return typeof error === 'object' && error !== null && typeof error.code === 'string';
 }
 
+export const UNREACHABLE = 'The server cannot be reached. Check your connection and try again.';
+
+/**
+ * The error of a failed answer: the API's own error shape when it sent one, else one coded
+ * `http/<status>` (a proxy in front of the API may refuse a large body or a crash itself).
+ */
+export function errorOf(status: number, statusText: string, payload: unknown): ApiError {
+  if (isErrorBody(payload)) {
+    const { code, message, details } = payload.error;
+    return new ApiError(status, code, message, details?.issues ?? []);
+  }
+  return new ApiError(status, `http/${status}`, `The server answered ${status}${statusText ? ` ${statusText}` : ''}.`);
+}
+
 async function request<T>(method: string, path: string, options: RequestOptions = {}): Promise<T> {
   const init: RequestInit = {
     method,
@@ -58,7 +72,7 @@ async function request<T>(method: string, path: string, options: RequestOptions 
     response = await fetch(withQuery(`/api${path}`, options.query), init);
   } catch (cause) {
     if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
-    throw new ApiError(0, 'network/unreachable', 'The server cannot be reached. Check your connection and try again.');
+    throw new ApiError(0, 'network/unreachable', UNREACHABLE);
   }
 
   if (response.status === 204) return undefined as T;
@@ -72,13 +86,7 @@ async function request<T>(method: string, path: string, options: RequestOptions 
     }
   }
 
-  if (!response.ok) {
-    if (isErrorBody(payload)) {
-      const { code, message, details } = payload.error;
-      throw new ApiError(response.status, code, message, details?.issues ?? []);
-    }
-    throw new ApiError(response.status, `http/${response.status}`, `The server answered ${response.status} ${response.statusText}.`);
-  }
+  if (!response.ok) throw errorOf(response.status, response.statusText, payload);
   return payload as T;
 }
 

@@ -1,19 +1,12 @@
+import type { DevMailAnswer } from '@swardwise/domain';
 import { api } from './client.ts';
 
-export interface SinkMessage {
-  id: number;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-}
-
 /** What the development mail sink received (the route exists only when the API runs one). */
-export async function fetchDevMail(signal?: AbortSignal): Promise<{ port: number | null; items: SinkMessage[] }> {
-  return api.get('/dev/mail', undefined, signal);
+export function listDevMail(signal?: AbortSignal): Promise<DevMailAnswer> {
+  return api.get<DevMailAnswer>('/dev/mail', undefined, signal);
 }
 
-export async function clearDevMail(): Promise<void> {
+/** Empties the sink. */
+export async function removeDevMail(): Promise<void> {
   await api.delete<void>('/dev/mail');
 }

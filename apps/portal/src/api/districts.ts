@@ -1,6 +1,6 @@
+import type { DistrictList, DistrictRow } from '@swardwise/domain';
 import { api } from './client.ts';
-import type { DistrictRow, Items } from './types.ts';
 
 export async function listDistricts(signal?: AbortSignal): Promise<DistrictRow[]> {
-  return (await api.get<Items<DistrictRow>>('/districts', undefined, signal)).items;
+  return (await api.get<DistrictList>('/districts', undefined, signal)).items;
 }

@@ -1,7 +1,7 @@
-import type { CreateFieldEventInput, UpdateFieldEventInput } from '@swardwise/domain';
+import type { CreateFieldEventInput, FieldEventAnswer, FieldEventList, FieldEventRow, UpdateFieldEventInput } from '@swardwise/domain';
 import { api } from './client.ts';
-import type { FieldEventRow, Items } from './types.ts';
 
+/** Without dates the API answers from today for three months. */
 export interface FieldEventQuery {
   from?: string;
   to?: string;
@@ -11,17 +11,17 @@ export interface FieldEventQuery {
 }
 
 export async function listFieldEvents(query: FieldEventQuery, signal?: AbortSignal): Promise<FieldEventRow[]> {
-  return (await api.get<Items<FieldEventRow>>('/field-events', { ...query }, signal)).items;
+  return (await api.get<FieldEventList>('/field-events', { ...query }, signal)).items;
 }
 
 export async function createFieldEvent(input: CreateFieldEventInput): Promise<FieldEventRow> {
-  return (await api.post<{ event: FieldEventRow }>('/field-events', input)).event;
+  return (await api.post<FieldEventAnswer>('/field-events', input)).event;
 }
 
 export async function updateFieldEvent(id: number, input: UpdateFieldEventInput): Promise<FieldEventRow> {
-  return (await api.patch<{ event: FieldEventRow }>(`/field-events/${id}`, input)).event;
+  return (await api.patch<FieldEventAnswer>(`/field-events/${id}`, input)).event;
 }
 
-export async function deleteFieldEvent(id: number, version: number): Promise<void> {
-  await api.delete(`/field-events/${id}?version=${version}`);
+export async function removeFieldEvent(id: number, version: number): Promise<void> {
+  await api.delete<void>(`/field-events/${id}?version=${version}`);
 }

@@ -1,21 +1,20 @@
-import type { ImportKind } from '@swardwise/domain';
-import { api, ApiError } from './client.ts';
-import type { ImportListItem, ImportRecord } from './types.ts';
+import type { ImportAnswer, ImportKind, ImportList, ImportRecord } from '@swardwise/domain';
+import { api, ApiError, errorOf, UNREACHABLE } from './client.ts';
 
-export async function listImports(signal?: AbortSignal): Promise<{ items: ImportListItem[]; lastCommittedId: number | null }> {
-  return api.get<{ items: ImportListItem[]; lastCommittedId: number | null }>('/imports', { limit: 20 }, signal);
+export function listImports(signal?: AbortSignal): Promise<ImportList> {
+  return api.get<ImportList>('/imports', { limit: 20 }, signal);
 }
 
 export async function getImport(id: number, signal?: AbortSignal): Promise<ImportRecord> {
-  return (await api.get<{ import: ImportRecord }>(`/imports/${id}`, undefined, signal)).import;
+  return (await api.get<ImportAnswer>(`/imports/${id}`, undefined, signal)).import;
 }
 
 export async function commitImport(id: number): Promise<ImportRecord> {
-  return (await api.post<{ import: ImportRecord }>(`/imports/${id}/commit`)).import;
+  return (await api.post<ImportAnswer>(`/imports/${id}/commit`)).import;
 }
 
 export async function undoImport(id: number): Promise<ImportRecord> {
-  return (await api.post<{ import: ImportRecord }>(`/imports/${id}/undo`)).import;
+  return (await api.post<ImportAnswer>(`/imports/${id}/undo`)).import;
 }
 
 /**
@@ -31,7 +30,7 @@ export function uploadImport(kind: ImportKind, file: File, onProgress: (fraction
     xhr.upload.onprogress = (e) => {
       if (e.lengthComputable) onProgress(e.loaded / e.total);
     };
-    xhr.onerror = () => reject(new ApiError(0, 'network/unreachable', 'The server cannot be reached. Check your connection and try again.'));
+    xhr.onerror = () => reject(new ApiError(0, 'network/unreachable', UNREACHABLE));
     xhr.onload = () => {
       let body: unknown;
       try {
@@ -39,11 +38,8 @@ export function uploadImport(kind: ImportKind, file: File, onProgress: (fraction
       } catch {
         body = undefined;
       }
-      if (xhr.status >= 200 && xhr.status < 300) return resolve((body as { import: ImportRecord }).import);
-      const error = (body as { error?: { code: string; message: string; details?: { issues?: { path: string; message: string }[] } } } | undefined)?.error;
-      if (error) return reject(new ApiError(xhr.status, error.code, error.message, error.details?.issues ?? []));
-      // A proxy in front of the API may refuse a large body itself, with no JSON.
-      reject(new ApiError(xhr.status, `http/${xhr.status}`, xhr.status === 413 ? 'The file is too large to upload.' : `The server answered ${xhr.status}.`));
+      if (xhr.status >= 200 && xhr.status < 300) return resolve((body as ImportAnswer).import);
+      reject(errorOf(xhr.status, xhr.statusText, body));
     };
     const form = new FormData();
     form.append('kind', kind);

@@ -1,6 +1,21 @@
 import { ApiError } from './client.ts';
 
-/** What the portal tells people for the error codes it expects; anything else shows the server's message. */
+/** What a resource is called in a message, by the namespace of its error codes (`field_event/…`). */
+const NOUNS: Record<string, string> = {
+  user: 'user',
+  site: 'site',
+  field: 'field',
+  field_event: 'booking',
+  crew: 'crew',
+  equipment: 'machine',
+  work_order: 'work order',
+  standards: 'level',
+};
+
+/** Someone saved the row after this person read it (the API's `<resource>/version_conflict`, 409). */
+const conflict = (noun: string) => `Someone else changed this ${noun} since you opened it; reload to see their change, then make yours again.`;
+
+/** What the portal tells people for the error codes it expects; any other code shows the server's message. */
 const MESSAGES: Record<string, string> = {
   'auth/invalid_credentials': 'The e-mail or password is not right. Check both and try again.',
   'auth/rate_limited': 'Too many sign-in attempts. Wait a few minutes before trying again.',
@@ -8,27 +23,41 @@ const MESSAGES: Record<string, string> = {
   'auth/forbidden': 'This is outside what your account may see or change.',
   'auth/invalid_token': 'This invitation link is not valid any more. Ask your administrator for a new one.',
   'auth/deactivated': 'This account has been deactivated. Ask your administrator if you need access again.',
-  'user/version_conflict': 'Someone else changed this user in the meantime. Reload the list and make your change again.',
-  'network/unreachable': 'The server cannot be reached. Check your connection and try again.',
+  'http/413': 'The file is too large to upload.',
+  ...Object.fromEntries(Object.entries(NOUNS).map(([resource, noun]) => [`${resource}/version_conflict`, conflict(noun)])),
 };
+
+/** The message of an error code, or undefined when the portal has none of its own for it. */
+export function messageFor(code: string): string | undefined {
+  if (MESSAGES[code]) return MESSAGES[code];
+  if (code.endsWith('/version_conflict')) return conflict('item');
+  if (code.endsWith('/not_found')) return 'This item does not exist, or it is outside what your role may see.';
+  return undefined;
+}
+
+/** A stale write: the row changed since it was read (reload, then make the change again). */
+export function isConflict(error: unknown): error is ApiError {
+  return error instanceof ApiError && error.code.endsWith('/version_conflict');
+}
 
 export function errorMessage(error: unknown): string {
   if (error instanceof ApiError) {
-    if (MESSAGES[error.code]) return MESSAGES[error.code]!;
-    if (error.status === 429) return MESSAGES['auth/rate_limited']!;
-    if (error.code.endsWith('/version_conflict')) return 'Someone else changed this in the meantime. Reload and try again.';
-    if (error.code.endsWith('/not_found')) return 'This item does not exist, or it is outside what your role may see.';
-    return error.message;
+    if (error.status === 429 && !MESSAGES[error.code]) return MESSAGES['auth/rate_limited']!;
+    return messageFor(error.code) ?? error.message;
   }
   return error instanceof Error ? error.message : 'Something went wrong.';
 }
 
-/** Field-level messages of a 400, keyed by the form field (the `body.` prefix dropped). */
-export function fieldIssues(error: unknown): Record<string, string> {
+/**
+ * Field-level messages of a 400, keyed by the form field: the `body.` prefix dropped and, unless
+ * `nested`, only the first segment kept (`body.hocMm.soccer.cool` → `hocMm`).
+ */
+export function fieldIssues(error: unknown, nested = false): Record<string, string> {
   const out: Record<string, string> = {};
   if (!(error instanceof ApiError)) return out;
   for (const issue of error.issues) {
-    const key = issue.path.replace(/^body\./, '').split('.')[0] ?? issue.path;
+    const path = issue.path.replace(/^body\./, '');
+    const key = nested ? path : (path.split('.')[0] ?? path);
     out[key] ??= issue.message;
   }
   return out;

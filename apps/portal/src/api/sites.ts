@@ -1,19 +1,19 @@
-import type { CreateSiteInput, UpdateSiteInput } from '@swardwise/domain';
+import type { CreateSiteInput, SiteAnswer, SiteDetailAnswer, SiteList, SiteRow, UpdateSiteInput } from '@swardwise/domain';
 import { api } from './client.ts';
-import type { FieldRow, Items, SiteRow } from './types.ts';
 
 export async function listSites(query: { districtId?: number } = {}, signal?: AbortSignal): Promise<SiteRow[]> {
-  return (await api.get<Items<SiteRow>>('/sites', query, signal)).items;
+  return (await api.get<SiteList>('/sites', query, signal)).items;
 }
 
-export async function getSite(id: number, signal?: AbortSignal): Promise<{ site: SiteRow; fields: FieldRow[] }> {
-  return api.get<{ site: SiteRow; fields: FieldRow[] }>(`/sites/${id}`, undefined, signal);
+/** The site with its fields. */
+export function getSite(id: number, signal?: AbortSignal): Promise<SiteDetailAnswer> {
+  return api.get<SiteDetailAnswer>(`/sites/${id}`, undefined, signal);
 }
 
 export async function createSite(input: CreateSiteInput): Promise<SiteRow> {
-  return (await api.post<{ site: SiteRow }>('/sites', input)).site;
+  return (await api.post<SiteAnswer>('/sites', input)).site;
 }
 
 export async function updateSite(id: number, input: UpdateSiteInput): Promise<SiteRow> {
-  return (await api.patch<{ site: SiteRow }>(`/sites/${id}`, input)).site;
+  return (await api.patch<SiteAnswer>(`/sites/${id}`, input)).site;
 }

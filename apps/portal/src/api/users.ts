@@ -1,15 +1,15 @@
-import type { InviteUserInput, UpdateUserInput } from '@swardwise/domain';
+import type { InviteAnswer, InviteUserInput, UpdateUserInput, UserAnswer, UserRow, Items } from '@swardwise/domain';
 import { api } from './client.ts';
-import type { Items, UserRow } from './types.ts';
 
 export async function listUsers(signal?: AbortSignal): Promise<UserRow[]> {
   return (await api.get<Items<UserRow>>('/users', undefined, signal)).items;
 }
 
-export async function inviteUser(input: InviteUserInput): Promise<{ user: UserRow; inviteUrl: string }> {
-  return api.post<{ user: UserRow; inviteUrl: string }>('/users', input);
+/** Creates the account and its one-time link; the API also e-mails it. */
+export function inviteUser(input: InviteUserInput): Promise<InviteAnswer> {
+  return api.post<InviteAnswer>('/users', input);
 }
 
 export async function updateUser(id: number, patch: UpdateUserInput): Promise<UserRow> {
-  return (await api.patch<{ user: UserRow }>(`/users/${id}`, patch)).user;
+  return (await api.patch<UserAnswer>(`/users/${id}`, patch)).user;
 }

@@ -1,74 +1,52 @@
-import type { WorkReport, WorkStatus, WorkTask } from '@swardwise/domain';
+import type {
+  CreateWorkOrderInput,
+  PhotoAnswer,
+  ReportAnswer,
+  UpdateWorkOrderInput,
+  WorkOrderAnswer,
+  WorkOrderList,
+  WorkOrderRow,
+  WorkOrderWriteAnswer,
+  WorkReportInput,
+} from '@swardwise/domain';
 import { api } from './client.ts';
 
-export interface WorkOrderRow {
-  id: number;
-  fieldId: number;
-  fieldName: string;
-  siteId: number;
-  siteName: string;
-  districtId: number;
-  task: WorkTask;
-  plannedDate: string;
-  crewId: number | null;
-  crewName: string | null;
-  equipmentId?: number | null;
-  equipmentName?: string | null;
-  plannedHours: number;
-  actualHours: number | null;
-  status: WorkStatus;
-  reason: string;
-  notes?: string;
-  /** `mowerKind` from the week plan; older demo rows name the mower as `mower`. */
-  details: { hocMm?: number; mowerKind?: string; mower?: string } & Record<string, unknown>;
-  version: number;
-  siteLat?: number;
-  siteLng?: number;
-  photoCount?: number;
-}
-
 /** Work orders the caller may read, from `from` for a week unless `to` is given. */
-export async function fetchWorkOrders(query: { from?: string; to?: string; crewId?: number }, signal?: AbortSignal): Promise<WorkOrderRow[]> {
-  return (await api.get<{ items: WorkOrderRow[] }>('/work-orders', query, signal)).items;
+export async function listWorkOrders(query: { from?: string; to?: string; crewId?: number }, signal?: AbortSignal): Promise<WorkOrderRow[]> {
+  return (await api.get<WorkOrderList>('/work-orders', query, signal)).items;
 }
 
-/** A crew's report as the API takes it (`workReportSchema`). */
-export interface WorkReportBody {
-  status: WorkReport;
-  actualHours: number | null;
-  note: string;
-  clientRef: string;
-  /** The moment reported, with the phone's offset; the API takes the department's date of it. */
-  reportedAt: string;
+/** The order with the crew's reports and photos. */
+export function getWorkOrder(orderId: number, signal?: AbortSignal): Promise<WorkOrderAnswer> {
+  return api.get<WorkOrderAnswer>(`/work-orders/${orderId}`, undefined, signal);
 }
 
-export interface WorkUpdate {
-  id: number;
-  status: WorkStatus;
-  actualHours: number | null;
-  note: string;
-  reportedAt: string;
+export function createWorkOrder(body: CreateWorkOrderInput): Promise<WorkOrderWriteAnswer> {
+  return api.post<WorkOrderWriteAnswer>('/work-orders', body);
 }
 
-export interface WorkPhoto {
-  id: number;
-  width: number;
-  height: number;
-  bytes: number;
-  url: string;
+/** Sends the version the order was read at; a stale one answers 409. */
+export function updateWorkOrder(id: number, body: UpdateWorkOrderInput): Promise<WorkOrderWriteAnswer> {
+  return api.patch<WorkOrderWriteAnswer>(`/work-orders/${id}`, body);
 }
 
-export function reportWork(orderId: number, body: WorkReportBody) {
-  return api.post<{ order: WorkOrderRow; update: WorkUpdate; duplicate: boolean }>(`/work-orders/${orderId}/reports`, body);
+export function removeWorkOrder(id: number, version: number): Promise<void> {
+  return api.delete<void>(`/work-orders/${id}?version=${version}`);
 }
 
-export function uploadWorkPhoto(orderId: number, photo: Blob, name: string, clientRef: string) {
+/**
+ * A crew's report as the phone sends it: always with a client reference (a retry counts once)
+ * and the phone's clock with its offset (the API takes the department's local date of it).
+ */
+export type WorkReportBody = Omit<WorkReportInput, 'clientRef' | 'reportedAt' | 'version'> & { clientRef: string; reportedAt: string };
+
+export function reportWork(orderId: number, body: WorkReportBody): Promise<ReportAnswer> {
+  return api.post<ReportAnswer>(`/work-orders/${orderId}/reports`, body);
+}
+
+export function uploadWorkPhoto(orderId: number, photo: Blob, name: string, clientRef: string): Promise<PhotoAnswer> {
   const form = new FormData();
   form.append('clientRef', clientRef);
   form.append('photo', photo, name);
-  return api.upload<{ photo: WorkPhoto; duplicate: boolean }>(`/work-orders/${orderId}/photos`, form);
-}
-
-export function getWorkOrder(orderId: number, signal?: AbortSignal) {
-  return api.get<{ order: WorkOrderRow; updates: WorkUpdate[]; photos: WorkPhoto[] }>(`/work-orders/${orderId}`, undefined, signal);
+  return api.upload<PhotoAnswer>(`/work-orders/${orderId}/photos`, form);
 }

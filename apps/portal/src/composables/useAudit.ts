@@ -1,7 +1,8 @@
-import type { MaybeRefOrGetter } from 'vue';
+import { toValue, type MaybeRefOrGetter } from 'vue';
 import { listAudit } from '../api/audit.ts';
-import { useAsync } from './useAsync.ts';
+import { queryKeys } from '../api/queryKeys.ts';
+import { useApiQuery } from './useApiQuery.ts';
 
 export function useAudit(query: MaybeRefOrGetter<{ entity?: string; limit?: number }> = {}) {
-  return useAsync((q, signal) => listAudit(q, signal), query);
+  return useApiQuery(() => queryKeys.audit(toValue(query)), (signal) => listAudit(toValue(query), signal));
 }

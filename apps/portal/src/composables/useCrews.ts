@@ -1,6 +1,7 @@
 import { listCrews } from '../api/crews.ts';
-import { useAsync } from './useAsync.ts';
+import { queryKeys } from '../api/queryKeys.ts';
+import { useApiQuery } from './useApiQuery.ts';
 
 export function useCrews() {
-  return useAsync((_key: undefined, signal) => listCrews(signal));
+  return useApiQuery(queryKeys.crews(), listCrews);
 }

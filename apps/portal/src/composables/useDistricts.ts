@@ -1,6 +1,7 @@
 import { listDistricts } from '../api/districts.ts';
-import { useAsync } from './useAsync.ts';
+import { queryKeys } from '../api/queryKeys.ts';
+import { useApiQuery } from './useApiQuery.ts';
 
 export function useDistricts() {
-  return useAsync((_key: undefined, signal) => listDistricts(signal));
+  return useApiQuery(queryKeys.districts(), listDistricts);
 }

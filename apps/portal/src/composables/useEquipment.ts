@@ -1,6 +1,7 @@
-import { listEquipment } from '../api/crews.ts';
-import { useAsync } from './useAsync.ts';
+import { listEquipment } from '../api/equipment.ts';
+import { queryKeys } from '../api/queryKeys.ts';
+import { useApiQuery } from './useApiQuery.ts';
 
 export function useEquipment() {
-  return useAsync((_key: undefined, signal) => listEquipment(signal));
+  return useApiQuery(queryKeys.equipment(), listEquipment);
 }

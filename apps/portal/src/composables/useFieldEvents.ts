@@ -1,8 +1,9 @@
-import type { MaybeRefOrGetter } from 'vue';
+import { toValue, type MaybeRefOrGetter } from 'vue';
 import { listFieldEvents, type FieldEventQuery } from '../api/fieldEvents.ts';
-import { useAsync } from './useAsync.ts';
+import { queryKeys } from '../api/queryKeys.ts';
+import { useApiQuery } from './useApiQuery.ts';
 
 /** Bookings matching a query (by default the API's: from today for three months). */
 export function useFieldEvents(query: MaybeRefOrGetter<FieldEventQuery>) {
-  return useAsync((q, signal) => listFieldEvents(q, signal), query);
+  return useApiQuery(() => queryKeys.fieldEvents(toValue(query)), (signal) => listFieldEvents(toValue(query), signal));
 }

@@ -1,11 +1,12 @@
-import type { MaybeRefOrGetter } from 'vue';
+import { toValue, type MaybeRefOrGetter } from 'vue';
 import { getField, listFields } from '../api/fields.ts';
-import { useAsync } from './useAsync.ts';
+import { queryKeys } from '../api/queryKeys.ts';
+import { useApiQuery } from './useApiQuery.ts';
 
 export function useFields(query: MaybeRefOrGetter<{ districtId?: number; siteId?: number }> = {}) {
-  return useAsync((q, signal) => listFields(q, signal), query);
+  return useApiQuery(() => queryKeys.fields(toValue(query)), (signal) => listFields(toValue(query), signal));
 }
 
 export function useField(id: MaybeRefOrGetter<number>) {
-  return useAsync((fieldId, signal) => getField(fieldId, signal), id);
+  return useApiQuery(() => queryKeys.field(toValue(id)), (signal) => getField(toValue(id), signal));
 }

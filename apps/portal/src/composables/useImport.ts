@@ -1,9 +1,10 @@
-import type { ImportKind } from '@swardwise/domain';
+import type { ImportKind, ImportRecord } from '@swardwise/domain';
 import { computed, ref, shallowRef } from 'vue';
 import { commitImport, listImports, undoImport, uploadImport } from '../api/imports.ts';
 import { errorMessage } from '../api/messages.ts';
-import type { ImportRecord } from '../api/types.ts';
-import { useAsync } from './useAsync.ts';
+import { queryKeys } from '../api/queryKeys.ts';
+import { useApiQuery } from './useApiQuery.ts';
+import { useInvalidate } from './useInvalidate.ts';
 
 /**
  * The imports page's state: upload a file for a preview (with upload progress), commit a
@@ -16,7 +17,8 @@ export function useImport() {
   const busy = ref<'upload' | 'commit' | 'undo' | null>(null);
   const error = ref<string | null>(null);
   const notice = ref<string | null>(null);
-  const history = useAsync((_key: undefined, signal) => listImports(signal));
+  const history = useApiQuery(queryKeys.imports(), listImports);
+  const invalidate = useInvalidate();
 
   const canCommit = computed(() => {
     const c = current.value;
@@ -53,7 +55,8 @@ export function useImport() {
       current.value = await commitImport(current.value.id);
       const s = current.value.summary;
       notice.value = `Imported ${current.value.fileName}: ${s.create} created, ${s.update} updated.`;
-      await history.refetch();
+      // The sites and fields it wrote show on other pages too.
+      await invalidate('import');
     } catch (cause) {
       error.value = errorMessage(cause);
     } finally {
@@ -70,7 +73,7 @@ export function useImport() {
       const undone = await undoImport(last.id);
       if (current.value?.id === undone.id) current.value = undone;
       notice.value = `Undid ${undone.fileName}: ${undone.changes?.created ?? 0} removed, ${undone.changes?.updated ?? 0} restored.`;
-      await history.refetch();
+      await invalidate('import');
     } catch (cause) {
       error.value = errorMessage(cause);
     } finally {

@@ -1,8 +1,9 @@
-import { asSubject } from '@swardwise/domain';
+import { asSubject, type MapField, type MapSite } from '@swardwise/domain';
 import { computed } from 'vue';
 import { ability } from '../ability.ts';
-import { getBasemap, getMap, type MapField, type MapSite } from '../api/map.ts';
-import { useAsync } from './useAsync.ts';
+import { getBasemap, getMap } from '../api/map.ts';
+import { queryKeys } from '../api/queryKeys.ts';
+import { useApiQuery } from './useApiQuery.ts';
 
 export interface SearchHit {
   value: string;
@@ -13,8 +14,8 @@ export interface SearchHit {
 
 /** The map answer, the basemap, a name search and what the caller may change on the map. */
 export function useMapData() {
-  const map = useAsync((_k: undefined, signal) => getMap(signal));
-  const basemap = useAsync((_k: undefined, signal) => getBasemap(signal));
+  const map = useApiQuery(queryKeys.map(), getMap);
+  const basemap = useApiQuery(queryKeys.basemap(), getBasemap);
 
   const sitesById = computed(() => new Map((map.data.value?.sites ?? []).map((s) => [s.id, s])));
   /** Sites the caller may add a field to: the ability decides, as the API will. */

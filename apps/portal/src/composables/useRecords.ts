@@ -1,7 +1,8 @@
-import type { MaybeRefOrGetter } from 'vue';
-import { fetchRecords } from '../api/weekPlans.ts';
-import { useAsync } from './useAsync.ts';
+import { toValue, type MaybeRefOrGetter } from 'vue';
+import { queryKeys } from '../api/queryKeys.ts';
+import { getRecords } from '../api/records.ts';
+import { useApiQuery } from './useApiQuery.ts';
 
 export function useRecords(query: MaybeRefOrGetter<{ districtId?: number; from: string; to: string }>) {
-  return useAsync((q, signal) => fetchRecords(q, signal), query);
+  return useApiQuery(() => queryKeys.records(toValue(query)), (signal) => getRecords(toValue(query), signal));
 }

@@ -1,11 +1,12 @@
-import type { MaybeRefOrGetter } from 'vue';
+import { toValue, type MaybeRefOrGetter } from 'vue';
+import { queryKeys } from '../api/queryKeys.ts';
 import { getSite, listSites } from '../api/sites.ts';
-import { useAsync } from './useAsync.ts';
+import { useApiQuery } from './useApiQuery.ts';
 
 export function useSites(query: MaybeRefOrGetter<{ districtId?: number }> = {}) {
-  return useAsync((q, signal) => listSites(q, signal), query);
+  return useApiQuery(() => queryKeys.sites(toValue(query)), (signal) => listSites(toValue(query), signal));
 }
 
 export function useSite(id: MaybeRefOrGetter<number>) {
-  return useAsync((siteId, signal) => getSite(siteId, signal), id);
+  return useApiQuery(() => queryKeys.site(toValue(id)), (signal) => getSite(toValue(id), signal));
 }

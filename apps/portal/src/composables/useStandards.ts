@@ -1,6 +1,7 @@
+import { queryKeys } from '../api/queryKeys.ts';
 import { getStandards } from '../api/standards.ts';
-import { useAsync } from './useAsync.ts';
+import { useApiQuery } from './useApiQuery.ts';
 
 export function useStandards() {
-  return useAsync((_key, signal) => getStandards(signal));
+  return useApiQuery(queryKeys.standards(), getStandards);
 }

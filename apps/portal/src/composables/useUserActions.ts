@@ -1,16 +1,12 @@
-import { updateUserSchema } from '@swardwise/domain';
+import { updateUserSchema, type UserRow } from '@swardwise/domain';
 import { ElMessage, ElMessageBox } from 'element-plus';
-import { ApiError } from '../api/client.ts';
-import { errorMessage } from '../api/messages.ts';
-import type { UserRow } from '../api/types.ts';
+import { errorMessage, isConflict } from '../api/messages.ts';
 import { updateUser } from '../api/users.ts';
-
-const CONFLICT = 'Someone else changed this user in the meantime. Reload the list to see their change, then make yours again.';
 
 /** Deactivation and reactivation with a confirmation, and the shared answer to a 409. */
 export function useUserActions(reload: () => Promise<void>) {
-  async function conflict() {
-    await ElMessageBox.alert(CONFLICT, 'This user has changed', { confirmButtonText: 'Reload', type: 'warning' }).catch(() => undefined);
+  async function conflict(error: unknown) {
+    await ElMessageBox.alert(errorMessage(error), 'This user has changed', { confirmButtonText: 'Reload', type: 'warning' }).catch(() => undefined);
     await reload();
   }
 
@@ -36,7 +32,7 @@ export function useUserActions(reload: () => Promise<void>) {
       ElMessage.success(`${user.name} is ${active ? 'active again' : 'deactivated'}.`);
       await reload();
     } catch (error) {
-      if (error instanceof ApiError && error.code.endsWith('/version_conflict')) return conflict();
+      if (isConflict(error)) return conflict(error);
       ElMessage.error(errorMessage(error));
     }
   }

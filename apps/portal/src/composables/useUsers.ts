@@ -1,6 +1,7 @@
+import { queryKeys } from '../api/queryKeys.ts';
 import { listUsers } from '../api/users.ts';
-import { useAsync } from './useAsync.ts';
+import { useApiQuery } from './useApiQuery.ts';
 
 export function useUsers() {
-  return useAsync((_key: undefined, signal) => listUsers(signal));
+  return useApiQuery(queryKeys.users(), listUsers);
 }

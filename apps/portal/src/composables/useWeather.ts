@@ -1,11 +1,11 @@
 import { computed, type MaybeRefOrGetter, toValue } from 'vue';
-import { addDaysIso, et0PenmanMonteith, type WeatherDayInput } from '@swardwise/domain';
+import { addDaysIso, et0PenmanMonteith, type WeatherDayInput, type WeatherDayRow, type WeatherStationRow } from '@swardwise/domain';
+import { queryKeys } from '../api/queryKeys.ts';
 import { listStations, listWeatherDays } from '../api/weather.ts';
-import type { WeatherDayRow, WeatherStationRow } from '../api/types.ts';
-import { useAsync } from './useAsync.ts';
+import { useApiQuery } from './useApiQuery.ts';
 
 export function useStations() {
-  return useAsync((_key: undefined, signal) => listStations(signal));
+  return useApiQuery(queryKeys.stations(), listStations);
 }
 
 export interface StationDay {
@@ -41,7 +41,17 @@ export function dayEt0(day: Pick<WeatherDayInput, 'tmaxC' | 'tminC' | 'rhMaxPct'
 
 /** Every date of a range at a station, the days on file and the gaps between them. */
 export function useStationDays(query: MaybeRefOrGetter<{ station: WeatherStationRow; from: string; to: string } | null>) {
-  const state = useAsync((q, signal) => (q ? listWeatherDays(q.station.id, q.from, q.to, signal) : Promise.resolve(null)), query);
+  const state = useApiQuery(
+    () => {
+      const q = toValue(query);
+      return queryKeys.weatherDays(q?.station.id ?? null, q?.from ?? '', q?.to ?? '');
+    },
+    (signal) => {
+      const q = toValue(query)!;
+      return listWeatherDays(q.station.id, q.from, q.to, signal);
+    },
+    { enabled: () => toValue(query) !== null },
+  );
   const dates = computed<StationDay[]>(() => {
     const q = toValue(query);
     const answer = state.data.value;

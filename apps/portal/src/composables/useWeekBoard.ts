@@ -1,98 +1,56 @@
-import { asSubject, type WorkTask } from '@swardwise/domain';
+import { asSubject, type PlanDiff, type WeekBoard, type WorkOrderRow, type WorkTask } from '@swardwise/domain';
+import { useQueryClient } from '@tanstack/vue-query';
 import { ElMessage } from 'element-plus';
-import { computed, onScopeDispose, reactive, ref, shallowRef, toValue, watch, type MaybeRefOrGetter } from 'vue';
+import { computed, reactive, ref, shallowRef, toValue, type MaybeRefOrGetter } from 'vue';
 import { ability } from '../ability.ts';
 import { ApiError } from '../api/client.ts';
-import { errorMessage } from '../api/messages.ts';
-import { confirmWeek, fetchWeekBoard, generateWeek, updateWorkOrder, type PlanDiff, type PlanOrder, type WeekBoard } from '../api/weekPlans.ts';
+import { errorMessage, isConflict } from '../api/messages.ts';
+import { queryKeys } from '../api/queryKeys.ts';
+import { confirmWeek, generateWeek, getWeekBoard } from '../api/weekPlans.ts';
+import { updateWorkOrder } from '../api/workOrders.ts';
 import { crewDayMap, filterOptions, groupCells, type CellKey } from '../components/week/board.ts';
 import { useSessionStore } from '../stores/session.ts';
-
-export const CONFLICT_MESSAGE = 'Someone else changed this work order — reloaded.';
+import { useApiQuery } from './useApiQuery.ts';
+import { useInvalidate } from './useInvalidate.ts';
 
 export interface WeekKey {
   districtId: number | null;
   weekStart: string;
 }
 
-export type OrderChange = Partial<Pick<PlanOrder, 'crewId' | 'plannedDate' | 'plannedHours' | 'pinned' | 'notes'>>;
-
-function sameJson(a: unknown, b: unknown): boolean {
-  return JSON.stringify(a) === JSON.stringify(b);
-}
+export type OrderChange = Partial<Pick<WorkOrderRow, 'crewId' | 'plannedDate' | 'plannedHours' | 'pinned' | 'notes'>>;
 
 /**
- * The reloaded board with the previous objects of every order and crew-day that did not
- * change, so after a write only the cells it touched render again.
- */
-export function keepUnchanged(prev: WeekBoard | null, next: WeekBoard): WeekBoard {
-  if (!prev || prev.districtId !== next.districtId || prev.weekStart !== next.weekStart) return next;
-  const orders = new Map(prev.orders.map((o) => [o.id, o]));
-  const days = new Map(prev.crewDays.map((d) => [`${d.crewId}|${d.date}`, d]));
-  return {
-    ...next,
-    orders: next.orders.map((o) => {
-      const old = orders.get(o.id);
-      return old && sameJson(old, o) ? old : o;
-    }),
-    crewDays: next.crewDays.map((d) => {
-      const old = days.get(`${d.crewId}|${d.date}`);
-      return old && sameJson(old, d) ? old : d;
-    }),
-  };
-}
-
-/**
- * The week board of one district: loads it, groups its orders into crew-day cells once per
- * change, moves and edits orders with the version they were read at (a 409 reloads), and
- * previews then applies a generated plan.
+ * The week board of one district: loads it through the query cache, groups its orders into
+ * crew-day cells once per change, moves and edits orders with the version they were read at
+ * (a 409 reloads), and previews then applies a generated plan.
+ *
+ * After a write the board is asked again in the background. The cache keeps the objects of
+ * the orders and crew-days that came back unchanged (structural sharing), and the grouping
+ * keeps a cell's array while its orders are the same objects, so only the cells a write
+ * touched render again.
  */
 export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
   const session = useSessionStore();
-  const data = shallowRef<WeekBoard | null>(null);
-  const loading = ref(false);
-  const error = ref<string | null>(null);
+  const client = useQueryClient();
+  const invalidate = useInvalidate();
+  const queryKey = () => queryKeys.weekBoard(toValue(key).districtId, toValue(key).weekStart);
+  const query = useApiQuery(
+    queryKey,
+    (signal) => {
+      const { districtId, weekStart } = toValue(key);
+      return getWeekBoard({ districtId: districtId!, weekStart }, signal);
+    },
+    { enabled: () => toValue(key).districtId !== null },
+  );
+  // No district chosen (yet): no board, not the one of the district before.
+  const data = computed<WeekBoard | null>(() => (toValue(key).districtId === null ? null : query.data.value));
   /** Orders whose write is under way, so their cards can say so. */
   const saving = reactive(new Set<number>());
   const filter = reactive<{ siteIds: number[]; tasks: WorkTask[] }>({ siteIds: [], tasks: [] });
-  let controller: AbortController | null = null;
-
-  /** Loads the week; `quiet` keeps the board on screen (after a write) instead of showing the spinner. */
-  async function load(quiet = false) {
-    const { districtId, weekStart } = toValue(key);
-    controller?.abort();
-    if (districtId === null) {
-      data.value = null;
-      return;
-    }
-    const mine = new AbortController();
-    controller = mine;
-    if (!quiet) loading.value = true;
-    error.value = null;
-    try {
-      const next = await fetchWeekBoard({ districtId, weekStart }, mine.signal);
-      data.value = quiet ? keepUnchanged(data.value, next) : next;
-    } catch (cause) {
-      if (mine.signal.aborted) return;
-      if (cause instanceof ApiError && cause.status === 401) session.expire();
-      error.value = errorMessage(cause);
-    } finally {
-      if (controller === mine) loading.value = false;
-    }
-  }
-
-  watch(
-    () => ({ ...toValue(key) }),
-    (next, prev) => {
-      if (prev && next.districtId === prev.districtId && next.weekStart === prev.weekStart) return;
-      void load();
-    },
-    { immediate: true },
-  );
-  onScopeDispose(() => controller?.abort());
 
   const crewDays = computed(() => crewDayMap(data.value?.crewDays ?? []));
-  let lastCells: Map<CellKey, PlanOrder[]> | undefined;
+  let lastCells: Map<CellKey, WorkOrderRow[]> | undefined;
   const cells = computed(() => {
     // Plain copies: the grouping then reads no reactive proxies in its loop over every order.
     const plain = { siteIds: [...filter.siteIds], tasks: [...filter.tasks] };
@@ -105,14 +63,18 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
     return !!board && ability.can('update', asSubject('WorkOrder', { districtId: board.districtId }));
   });
 
-  function replaceOrder(id: number, next: (o: PlanOrder) => PlanOrder) {
-    const board = data.value;
-    if (!board) return;
-    data.value = { ...board, orders: board.orders.map((o) => (o.id === id ? next(o) : o)) };
+  function replaceOrder(id: number, next: (o: WorkOrderRow) => WorkOrderRow) {
+    client.setQueryData<WeekBoard>(queryKey(), (board) => board && { ...board, orders: board.orders.map((o) => (o.id === id ? next(o) : o)) });
+  }
+
+  /** Shows the board a write answered with; the other answers that list the week's orders go stale. */
+  async function showBoard(board: WeekBoard) {
+    client.setQueryData(queryKeys.weekBoard(board.districtId, board.weekStart), board);
+    await Promise.all([client.invalidateQueries({ queryKey: ['work-orders'] }), client.invalidateQueries({ queryKey: ['records'] })]);
   }
 
   /** Saves a change of one order; the card moves at once and goes back if the API refuses. */
-  async function change(order: PlanOrder, patch: OrderChange): Promise<boolean> {
+  async function change(order: WorkOrderRow, patch: OrderChange): Promise<boolean> {
     const before = data.value?.orders.find((o) => o.id === order.id);
     if (!before || saving.has(order.id)) return false;
     replaceOrder(order.id, (o) => ({ ...o, ...patch, crewName: patch.crewId === undefined ? o.crewName : crewName(patch.crewId), pinned: patch.pinned ?? true }));
@@ -122,13 +84,13 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
       if (saved && typeof saved.version === 'number') replaceOrder(order.id, () => saved);
       saving.delete(order.id);
       // The plan's hours and routes of both crew-days are the server's to compute.
-      await load(true);
+      await invalidate('workOrder');
       return true;
     } catch (cause) {
       saving.delete(order.id);
-      if (cause instanceof ApiError && cause.status === 409) {
-        ElMessage.warning(CONFLICT_MESSAGE);
-        await load(true);
+      if (isConflict(cause)) {
+        ElMessage.warning(errorMessage(cause));
+        await invalidate('workOrder');
       } else {
         replaceOrder(order.id, () => before);
         if (cause instanceof ApiError && cause.status === 401) session.expire();
@@ -163,7 +125,7 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
       planWarnings.value = answer.warnings ?? [];
       if (dryRun) diff.value = answer.diff;
       else {
-        data.value = answer.board;
+        await showBoard(answer.board);
         diff.value = null;
       }
       return answer.diff;
@@ -183,7 +145,7 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
     generating.value = 'confirm';
     try {
       const answer = await confirmWeek({ districtId: board.districtId, weekStart: board.weekStart });
-      data.value = answer.board;
+      await showBoard(answer.board);
       return { assigned: answer.assigned, emailed: answer.emailed };
     } catch (cause) {
       if (cause instanceof ApiError && cause.status === 401) session.expire();
@@ -199,9 +161,9 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
 
   return {
     data,
-    loading,
-    error,
-    refetch: () => load(),
+    loading: query.loading,
+    error: query.error,
+    refetch: query.refetch,
     cells,
     crewDays,
     filter,

@@ -1,6 +1,6 @@
+import type { SessionUser } from '@swardwise/domain';
 import { createPinia, setActivePinia } from 'pinia';
 import { beforeAll, beforeEach, describe, expect, test, vi } from 'vitest';
-import type { SessionUser } from '../api/types.ts';
 import { router, safeNext } from './index.ts';
 
 function me(user: Partial<SessionUser> | null) {

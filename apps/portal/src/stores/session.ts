@@ -1,14 +1,10 @@
-import { DEFAULT_TIME_ZONE, defineAbilityFor, isTimeZone, localToday, localWeekStart, type Actor, type Role, type UnitSystem } from '@swardwise/domain';
+import { actorOf, DEFAULT_TIME_ZONE, defineAbilityFor, isTimeZone, localToday, localWeekStart, type Role, type SessionAnswer, type SessionUser, type UnitSystem } from '@swardwise/domain';
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
 import { ability } from '../ability.ts';
 import * as auth from '../api/auth.ts';
 import { ApiError } from '../api/client.ts';
-import type { SessionUser } from '../api/types.ts';
-
-export function actorOf(user: SessionUser): Actor {
-  return { id: user.id, role: user.role, districtId: user.districtId, crewId: user.crewId, siteIds: user.siteIds };
-}
+import { queryClient } from '../api/queryClient.ts';
 
 /** Where each role lands after sign-in and when a route is not theirs. */
 export const LANDING: Record<Role, string> = {
@@ -32,12 +28,14 @@ export const useSessionStore = defineStore('session', () => {
   const landing = computed(() => (user.value ? LANDING[user.value.role] : '/sign-in'));
 
   function setUser(next: SessionUser | null) {
+    // Answers cached for one person are not another's to see (nor a signed-out screen's).
+    if (!next || next.id !== user.value?.id) queryClient.clear();
     user.value = next;
     if (next) signedOut.value = false;
     ability.update(next ? defineAbilityFor(actorOf(next)).rules : []);
   }
 
-  function setSession(answer: auth.SessionAnswer) {
+  function setSession(answer: SessionAnswer) {
     setTimeZone(answer.timeZone);
     setUser(answer.user);
   }
@@ -61,7 +59,7 @@ export const useSessionStore = defineStore('session', () => {
   function load(): Promise<void> {
     if (loaded.value) return Promise.resolve();
     loading ??= auth
-      .fetchMe()
+      .getMe()
       .then(setSession, (error: unknown) => {
         if (!(error instanceof ApiError && error.status === 401)) throw error;
         setUser(null);

@@ -2,22 +2,7 @@
  * Shows the engine's SI values in the user's units with the engine's own formatters, and
  * turns a needs block's inputs (value + unit token) into text.
  */
-import {
-  formatArea,
-  formatDepth,
-  formatHoc,
-  formatLength,
-  formatMass,
-  formatNRate,
-  formatSpeed,
-  formatTemperature,
-  formatVolume,
-  L_PER_US_GALLON,
-  m2ToFt2,
-  type DisplayValue,
-  type UnitSystem,
-} from '@swardwise/domain';
-import type { NeedInput } from '../api/needs.ts';
+import { formatArea, formatDepth, formatHoc, formatLength, formatMass, formatNRate, formatSpeed, formatTemperature, formatVolume, L_PER_US_GALLON, m2ToFt2, type DisplayValue, type NeedInput, type UnitSystem } from '@swardwise/domain';
 
 export const shown = (d: DisplayValue): string => `${d.value.toLocaleString('en-US')} ${d.unit}`;
 const num = (v: number, digits: number) => v.toLocaleString('en-US', { maximumFractionDigits: digits });

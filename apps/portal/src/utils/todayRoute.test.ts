@@ -1,6 +1,6 @@
-import { planRoute } from '@swardwise/domain';
+import { planRoute, type WorkOrderRow } from '@swardwise/domain';
 import { describe, expect, test } from 'vitest';
-import type { WorkOrderRow } from '../api/workOrders.ts';
+import { order as sampleOrder } from '../components/week/sample.ts';
 import { crewDays } from './todayRoute.ts';
 
 const yard = { lat: 37.6, lng: -66.5 };
@@ -11,25 +11,10 @@ const positions = new Map([
   [3, { lat: 37.6, lng: -66.46 }],
 ]);
 let nextId = 1;
+/** A row without its site's position, so the sites the page loaded place it (or nothing does). */
 function order(siteId: number, fieldName: string, plannedDate: string, plannedHours = 1): WorkOrderRow {
-  return {
-    id: nextId++,
-    fieldId: nextId,
-    fieldName,
-    siteId,
-    siteName: `Site ${siteId}`,
-    districtId: 1,
-    task: 'mow',
-    plannedDate,
-    crewId: 1,
-    crewName: 'Crew',
-    plannedHours,
-    actualHours: null,
-    status: 'assigned',
-    reason: '',
-    details: {},
-    version: 1,
-  };
+  const { siteLat: _lat, siteLng: _lng, ...row } = sampleOrder({ id: nextId++, fieldName, siteId, siteName: `Site ${siteId}`, plannedDate, crewId: 1, crewName: 'Crew', plannedHours, status: 'assigned', reason: '', details: {} });
+  return row as WorkOrderRow;
 }
 
 describe('crewDays', () => {

@@ -3,8 +3,7 @@
  * the district yard (the same `planRoute`, so the phone and the week plan agree), the jobs of
  * one site together, fields by name.
  */
-import { addDaysIso, planRoute, type LatLng } from '@swardwise/domain';
-import type { WorkOrderRow } from '../api/workOrders.ts';
+import { addDaysIso, planRoute, type LatLng, type WorkOrderRow } from '@swardwise/domain';
 
 export interface RouteStopJobs {
   siteId: number;

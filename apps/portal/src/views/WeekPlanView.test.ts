@@ -1,14 +1,15 @@
-import { defineAbilityFor, type Role } from '@swardwise/domain';
+import { defineAbilityFor, type Role, type WeekBoard } from '@swardwise/domain';
+import { VueQueryPlugin } from '@tanstack/vue-query';
 import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
 import { createPinia, setActivePinia } from 'pinia';
 import { afterEach, describe, expect, test, vi } from 'vitest';
 import { createMemoryHistory, createRouter } from 'vue-router';
 import { ability } from '../ability.ts';
-import type { WeekBoard } from '../api/weekPlans.ts';
+import { messageFor } from '../api/messages.ts';
+import { createQueryClient } from '../api/queryClient.ts';
 import { DRAG_TYPE } from '../components/week/board.ts';
 import { board, DATES, diffItem, order, WEEK } from '../components/week/sample.ts';
-import { CONFLICT_MESSAGE } from '../composables/useWeekBoard.ts';
 import { useSessionStore } from '../stores/session.ts';
 import WeekPlanView from './WeekPlanView.vue';
 
@@ -42,7 +43,7 @@ async function mountView(role: Role) {
   ability.update(defineAbilityFor({ id: 3, role, districtId, crewId: null, siteIds: [] }).rules);
   const router = createRouter({ history: createMemoryHistory(), routes: [{ path: '/:any(.*)*', component: { template: '<div />' } }] });
   await router.push(`/week?week=${WEEK}`);
-  const w = mount(WeekPlanView, { global: { plugins: [pinia, router, ElementPlus] }, attachTo: document.body });
+  const w = mount(WeekPlanView, { global: { plugins: [pinia, router, ElementPlus, [VueQueryPlugin, { queryClient: createQueryClient() }]] }, attachTo: document.body });
   await flushPromises();
   return w;
 }
@@ -106,7 +107,7 @@ describe('WeekPlanView', () => {
     await w.get(`[data-test="board-cell"][data-crew="11"][data-date="${DATES[3]}"]`).trigger('drop', { dataTransfer: transfer(77) });
     await settle();
     expect(calls.find((c) => c.method === 'PATCH')!.body).toMatchObject({ version: 5 });
-    expect(document.body.textContent).toContain(CONFLICT_MESSAGE);
+    expect(document.body.textContent).toContain(messageFor('work_order/version_conflict'));
     expect(gets(calls)).toHaveLength(2);
     // The card shows where the other person put it, not where it was dropped.
     expect(w.find(`[data-test="board-cell"][data-crew="11"][data-date="${DATES[3]}"] [data-test="order-card"]`).exists()).toBe(false);

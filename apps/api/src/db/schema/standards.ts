@@ -1,6 +1,6 @@
 /** The department's Standards (one row per maintenance level), field checks and imports. */
 import { date, index, integer, jsonb, pgTable, real, smallint, text, timestamp } from 'drizzle-orm/pg-core';
-import type { LevelStandard } from '@swardwise/domain';
+import type { ImportSummary, LevelStandard } from '@swardwise/domain';
 import { fields } from './city.ts';
 import { users } from './people.ts';
 
@@ -55,7 +55,7 @@ export const imports = pgTable(
     fileName: text('file_name').notNull(),
     /** Parsed rows with their errors, as shown in the preview. */
     rows: jsonb('rows').$type<unknown[]>().notNull(),
-    summary: jsonb('summary').$type<Record<string, number>>().notNull(),
+    summary: jsonb('summary').$type<ImportSummary>().notNull(),
     /** What the commit did, so it can be undone: ids created and rows as they were before an update. */
     changes: jsonb('changes').$type<{ created: { entity: string; id: number }[]; updated: { entity: string; id: number; before: Record<string, unknown> }[] }>(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),

@@ -1,10 +1,11 @@
 import { abilitiesPlugin } from '@casl/vue';
-import { defineAbilityFor, type Actor } from '@swardwise/domain';
+import { defineAbilityFor, type Actor, type FieldEventRow } from '@swardwise/domain';
+import { VueQueryPlugin } from '@tanstack/vue-query';
 import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
 import { createPinia } from 'pinia';
 import { afterEach, describe, expect, test, vi } from 'vitest';
-import type { FieldEventRow } from '../../api/types.ts';
+import { createQueryClient } from '../../api/queryClient.ts';
 import FieldBookingsCard from './FieldBookingsCard.vue';
 
 const field = { id: 40, name: 'Stadium', siteId: 8, districtId: 1, status: 'open' as const, statusNote: '' };
@@ -31,7 +32,7 @@ async function mountCard(actor: Actor) {
     'fetch',
     vi.fn(async () => new Response(JSON.stringify({ items: BOOKINGS }), { status: 200, headers: { 'Content-Type': 'application/json' } })),
   );
-  const w = mount(FieldBookingsCard, { props: { field }, global: { plugins: [createPinia(), ElementPlus, [abilitiesPlugin, defineAbilityFor(actor)]] } });
+  const w = mount(FieldBookingsCard, { props: { field }, global: { plugins: [createPinia(), ElementPlus, [abilitiesPlugin, defineAbilityFor(actor)], [VueQueryPlugin, { queryClient: createQueryClient() }]] } });
   await flushPromises();
   return w;
 }

@@ -1,15 +1,14 @@
 import { abilitiesPlugin } from '@casl/vue';
-import { defineAbilityFor, type Actor, type Polygon } from '@swardwise/domain';
+import { defineAbilityFor, type Actor, type CrewRow, type DistrictRow, type Polygon } from '@swardwise/domain';
 import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
 import { createPinia } from 'pinia';
 import { afterEach, describe, expect, test, vi } from 'vitest';
-import type { CrewRow, DistrictRow } from '../../api/types.ts';
 import CrewFormDialog from './CrewFormDialog.vue';
 import { workDaysText } from './crewForm.ts';
 
 const boundary: Polygon = { type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 0]]] };
-const district = (id: number, name: string): DistrictRow => ({ id, code: name.toLowerCase(), name, boundary, yard: { name: 'Yard', lat: 0, lng: 0 }, siteCount: 0, fieldCount: 0, fieldAreaM2: 0 });
+const district = (id: number, name: string): DistrictRow => ({ id, code: name.toLowerCase(), name, boundary, yard: { name: 'Yard', lat: 0, lng: 0 }, version: 1, siteCount: 0, fieldCount: 0, fieldAreaM2: 0 });
 const DISTRICTS = [district(1, 'North'), district(2, 'South')];
 const foreman: Actor = { id: 3, role: 'foreman', districtId: 1, crewId: null, siteIds: [] };
 const CREW: CrewRow = { id: 5, districtId: 1, districtName: 'North', name: 'North Crew A', hoursPerDay: 8, members: ['R. Alder'], workDays: ['mon', 'tue', 'wed', 'thu', 'fri'], leadUserId: null, leadName: null, version: 3 };

@@ -1,15 +1,14 @@
 import { abilitiesPlugin } from '@casl/vue';
-import { defineAbilityFor, type Actor, type Polygon } from '@swardwise/domain';
+import { defineAbilityFor, type Actor, type CrewRow, type DistrictRow, type EquipmentRow, type Polygon, type SessionUser } from '@swardwise/domain';
 import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
 import { createPinia, setActivePinia, type Pinia } from 'pinia';
 import { afterEach, describe, expect, test, vi } from 'vitest';
-import type { CrewRow, DistrictRow, EquipmentRow, SessionUser } from '../../api/types.ts';
 import { useSessionStore } from '../../stores/session.ts';
 import EquipmentFormDialog from './EquipmentFormDialog.vue';
 
 const boundary: Polygon = { type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 0]]] };
-const DISTRICTS: DistrictRow[] = [{ id: 1, code: 'north', name: 'North', boundary, yard: { name: 'Yard', lat: 0, lng: 0 }, siteCount: 0, fieldCount: 0, fieldAreaM2: 0 }];
+const DISTRICTS: DistrictRow[] = [{ id: 1, code: 'north', name: 'North', boundary, yard: { name: 'Yard', lat: 0, lng: 0 }, version: 1, siteCount: 0, fieldCount: 0, fieldAreaM2: 0 }];
 const CREWS: CrewRow[] = [{ id: 4, districtId: 1, districtName: 'North', name: 'North Crew A', hoursPerDay: 8, members: [], workDays: ['mon'], leadUserId: null, leadName: null, version: 1 }];
 const foreman: Actor = { id: 3, role: 'foreman', districtId: 1, crewId: null, siteIds: [] };
 const MOWER: EquipmentRow = {

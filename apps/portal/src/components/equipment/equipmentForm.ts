@@ -2,8 +2,7 @@
  * The equipment form in the person's units (inches, mph, inches of HOC — or metres, km/h,
  * millimetres) and its conversion to the SI body the API takes.
  */
-import { createEquipmentSchema, KM_PER_MILE, MM_PER_INCH, MOWER_KINDS, type CreateEquipmentInput, type EquipmentKind, type UnitSystem } from '@swardwise/domain';
-import type { EquipmentRow } from '../../api/types.ts';
+import { createEquipmentSchema, KM_PER_MILE, MM_PER_INCH, MOWER_KINDS, type CreateEquipmentInput, type EquipmentKind, type EquipmentRow, type UnitSystem } from '@swardwise/domain';
 
 export interface EquipmentModel {
   districtId: number | null;

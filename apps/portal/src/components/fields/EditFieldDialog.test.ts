@@ -1,8 +1,8 @@
+import type { FieldRow } from '@swardwise/domain';
 import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
 import { createPinia } from 'pinia';
 import { afterEach, describe, expect, test, vi } from 'vitest';
-import type { FieldRow } from '../../api/types.ts';
 import EditFieldDialog from './EditFieldDialog.vue';
 
 const FIELD: FieldRow = {
@@ -23,6 +23,9 @@ const FIELD: FieldRow = {
   statusNote: '',
   weeklyUseHours: 12,
   areaM2: 7140,
+  longAxisDeg: 12,
+  lastMowedOn: null,
+  crewIds: [],
   version: 5,
   updatedAt: '2026-11-30T10:00:00Z',
 };

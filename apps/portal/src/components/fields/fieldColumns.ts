@@ -1,17 +1,6 @@
-import {
-  FIELD_STATUS_LABELS,
-  GRASS_LABELS,
-  LEVEL_NAMES,
-  SPORT_LABELS,
-  type FieldStatus,
-  type Grass,
-  type Level,
-  type Sport,
-  type UnitSystem,
-} from '@swardwise/domain';
+import { FIELD_STATUS_LABELS, GRASS_LABELS, LEVEL_NAMES, SPORT_LABELS, type FieldRow, type FieldStatus, type Grass, type Level, type Sport, type UnitSystem } from '@swardwise/domain';
 import { h } from 'vue';
 import { RouterLink } from 'vue-router';
-import type { FieldRow } from '../../api/types.ts';
 import { formatHoc, formatLandArea, hocUnit, hocValue, landAreaUnit, landAreaValue } from '../../utils/units.ts';
 import { columnHelper, type DataColumn } from '../data-table/features.ts';
 import LevelTag from './LevelTag.vue';

@@ -1,6 +1,5 @@
 /** The light hover summary of a field: name, site and the value of the theme shown. */
-import { FIELD_STATUS_LABELS, LEVEL_NAMES, type Level } from '@swardwise/domain';
-import type { MapField } from '../../api/map.ts';
+import { FIELD_STATUS_LABELS, LEVEL_NAMES, type Level, type MapField } from '@swardwise/domain';
 import type { MapTheme } from './themes.ts';
 
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);

@@ -1,6 +1,6 @@
+import type { FieldNeeds } from '@swardwise/domain';
 import { mount } from '@vue/test-utils';
 import { describe, expect, test } from 'vitest';
-import type { FieldNeeds } from '../../api/needs.ts';
 import NeedCard from './NeedCard.vue';
 import { buildNeedCards } from './needCards.ts';
 

@@ -1,6 +1,5 @@
 /** The field page's needs cards, built from the API's answer in the user's units. */
-import { LEVEL_NAMES, type Level, type UnitSystem } from '@swardwise/domain';
-import type { FieldNeeds, NeedInput } from '../../api/needs.ts';
+import { LEVEL_NAMES, type FieldNeeds, type Level, type NeedInput, type UnitSystem } from '@swardwise/domain';
 import { depthText, hocText, hoursText, lengthText, massText, nRateText, volumeText } from '../../utils/needUnits.ts';
 
 export interface Figure {

@@ -1,7 +1,7 @@
+import type { FieldRecord } from '@swardwise/domain';
 import { mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
 import { beforeEach, describe, expect, test } from 'vitest';
-import type { FieldRecord } from '../../api/weekPlans.ts';
 import DataTable from '../data-table/DataTable.vue';
 import { actualShare, fieldRecordColumns, mowingShare } from './recordColumns.ts';
 

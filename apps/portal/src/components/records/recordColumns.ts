@@ -1,5 +1,5 @@
+import type { CrewRecord, FieldRecord, WeekRecord } from '@swardwise/domain';
 import { h } from 'vue';
-import type { CrewRecord, FieldRecord, WeekRecord } from '../../api/weekPlans.ts';
 import { columnHelper } from '../data-table/features.ts';
 import { weekLabel } from '../week/board.ts';
 

@@ -1,18 +1,17 @@
 import { abilitiesPlugin } from '@casl/vue';
-import { defineAbilityFor, type Actor, type Polygon } from '@swardwise/domain';
+import { defineAbilityFor, type Actor, type DistrictRow, type Polygon, type SiteRow } from '@swardwise/domain';
 import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
 import { createPinia } from 'pinia';
 import { afterEach, describe, expect, test, vi } from 'vitest';
-import type { DistrictRow, SiteRow } from '../../api/types.ts';
 import SiteFormDialog from './SiteFormDialog.vue';
 
 const boundary: Polygon = { type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 0]]] };
-const district = (id: number, name: string): DistrictRow => ({ id, code: name.toLowerCase(), name, boundary, yard: { name: 'Yard', lat: 0, lng: 0 }, siteCount: 0, fieldCount: 0, fieldAreaM2: 0 });
+const district = (id: number, name: string): DistrictRow => ({ id, code: name.toLowerCase(), name, boundary, yard: { name: 'Yard', lat: 0, lng: 0 }, version: 1, siteCount: 0, fieldCount: 0, fieldAreaM2: 0 });
 const DISTRICTS = [district(1, 'North'), district(2, 'South')];
 const foreman: Actor = { id: 3, role: 'foreman', districtId: 1, crewId: null, siteIds: [] };
 const head: Actor = { id: 2, role: 'head', districtId: null, crewId: null, siteIds: [] };
-const SITE: SiteRow = { id: 9, districtId: 1, districtName: 'North', name: 'Alder Green', kind: 'park', owner: 'city', address: '', lat: 37.6, lng: -66.5, notes: '', fieldCount: 0, fieldAreaM2: 0, version: 4 };
+const SITE: SiteRow = { id: 9, districtId: 1, districtName: 'North', name: 'Alder Green', kind: 'park', owner: 'city', address: '', lat: 37.6, lng: -66.5, notes: '', fieldCount: 0, fieldAreaM2: 0, version: 4, updatedAt: '2026-11-30T10:00:00Z' };
 
 function mountForm(actor: Actor, site: SiteRow | null = null) {
   return mount(SiteFormDialog, {

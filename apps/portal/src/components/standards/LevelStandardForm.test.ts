@@ -1,7 +1,6 @@
-import { DEFAULT_STANDARDS, updateLevelStandardSchema } from '@swardwise/domain';
+import { DEFAULT_STANDARDS, updateLevelStandardSchema, type StandardsRow } from '@swardwise/domain';
 import { flushPromises, mount } from '@vue/test-utils';
-import { describe, expect, test } from 'vitest';
-import type { StandardsRow } from '../../api/standards.ts';
+import { describe, expect, test, vi } from 'vitest';
 import LevelStandardForm from './LevelStandardForm.vue';
 import { bodyFrom, formFrom } from './standardForm.ts';
 
@@ -49,5 +48,21 @@ describe('LevelStandardForm', () => {
     expect(await form.validate()).toBe(false);
     expect(form.invalid).toEqual({ annualNShare: 'the feed share cannot be above 1 (100 %)', targetScore: 'the target score is 0–100' });
     wrapper.unmount();
+  });
+});
+
+describe('LevelStandardForm server errors', () => {
+  test('should show an issue the API found under the field it names, even a nested one', async () => {
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => new Response(JSON.stringify({ error: { code: 'request/invalid', message: 'Invalid body', details: { issues: [{ path: 'body.hocMm.soccer.cool', message: 'too low for this level' }] } } }), { status: 400 })),
+    );
+    const wrapper = mountForm();
+    await wrapper.get('[data-test="standards-form-2"]').trigger('submit');
+    await flushPromises();
+    await vi.waitFor(() => expect(wrapper.text()).toContain('too low for this level'));
+    expect(wrapper.get('[data-test="standards-form-error"]').text()).toContain('Invalid body');
+    wrapper.unmount();
+    vi.unstubAllGlobals();
   });
 });

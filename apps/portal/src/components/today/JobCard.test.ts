@@ -1,31 +1,29 @@
+import type { WorkOrderRow } from '@swardwise/domain';
 import { mount, RouterLinkStub } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
 import { createPinia, setActivePinia } from 'pinia';
 import { beforeEach, describe, expect, test } from 'vitest';
-import type { WorkOrderRow } from '../../api/workOrders.ts';
 import { useSessionStore } from '../../stores/session.ts';
 import type { QueuedReport } from '../../utils/reportQueue.ts';
+import { order as sampleOrder } from '../week/sample.ts';
 import JobCard from './JobCard.vue';
 
-const order = (patch: Partial<WorkOrderRow> = {}): WorkOrderRow => ({
-  id: 12,
-  fieldId: 3,
-  fieldName: 'Soccer 1',
-  siteId: 2,
-  siteName: 'Alder Run Park',
-  districtId: 1,
-  task: 'mow',
-  plannedDate: '2026-06-01',
-  crewId: 1,
-  crewName: 'Crew A',
-  plannedHours: 0.94,
-  actualHours: null,
-  status: 'assigned',
-  reason: '',
-  details: { hocMm: 50.8, mowerKind: 'reel' },
-  version: 1,
-  ...patch,
-});
+const order = (patch: Partial<WorkOrderRow> = {}): WorkOrderRow =>
+  sampleOrder({
+    id: 12,
+    fieldId: 3,
+    fieldName: 'Soccer 1',
+    siteId: 2,
+    siteName: 'Alder Run Park',
+    plannedDate: '2026-06-01',
+    crewId: 1,
+    crewName: 'Crew A',
+    plannedHours: 0.94,
+    status: 'assigned',
+    reason: '',
+    details: { hocMm: 50.8, mowerKind: 'reel' },
+    ...patch,
+  });
 
 function mountCard(props: { order: WorkOrderRow; queued?: QueuedReport; stop?: number }, units: 'imperial' | 'metric' = 'imperial') {
   const pinia = createPinia();

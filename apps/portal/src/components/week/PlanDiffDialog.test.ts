@@ -1,13 +1,13 @@
+import type { PlanDiff } from '@swardwise/domain';
 import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
 import { afterEach, describe, expect, test } from 'vitest';
-import type { PlanDiff } from '../../api/weekPlans.ts';
 import PlanDiffDialog from './PlanDiffDialog.vue';
 import { DATES, diffItem } from './sample.ts';
 
 function diffOf(over: Partial<PlanDiff>): PlanDiff {
   const d = { added: [], removed: [], changed: [], kept: [], ...over } as Omit<PlanDiff, 'summary'>;
-  return { ...d, summary: { added: d.added.length, removed: d.removed.length, changed: d.changed.length, kept: d.kept.length } };
+  return { ...d, summary: { added: d.added.length, removed: d.removed.length, changed: d.changed.length, kept: d.kept.length, unchanged: 0 } };
 }
 
 function mountDialog(diff: PlanDiff) {

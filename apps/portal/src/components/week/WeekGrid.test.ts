@@ -1,8 +1,8 @@
+import type { WeekBoard } from '@swardwise/domain';
 import { mount } from '@vue/test-utils';
 import { createPinia } from 'pinia';
 import { describe, expect, test } from 'vitest';
 import { createMemoryHistory, createRouter } from 'vue-router';
-import type { WeekBoard } from '../../api/weekPlans.ts';
 import WeekGrid from './WeekGrid.vue';
 import { crewDayMap, DRAG_TYPE, groupCells } from './board.ts';
 import { board, crewDay, DATES, order } from './sample.ts';

@@ -2,8 +2,7 @@
  * The week board's arithmetic, kept out of components so it runs once per change of the
  * orders or filters (not once per render) and can be tested without a DOM.
  */
-import { addDaysIso, CAUTIONS, weekdayOf, type CautionKey, type WorkTask } from '@swardwise/domain';
-import type { CrewDay, PlanOrder, WeekBoard } from '../../api/weekPlans.ts';
+import { addDaysIso, CAUTIONS, weekdayOf, type CautionKey, type CrewDay, type WeekBoard, type WorkOrderRow, type WorkTask } from '@swardwise/domain';
 
 /** Row key of the orders no crew has yet. */
 export const UNASSIGNED = 'none';
@@ -22,7 +21,7 @@ export interface BoardFilter {
   tasks: readonly WorkTask[];
 }
 
-export function matchesFilter(order: PlanOrder, filter: BoardFilter): boolean {
+export function matchesFilter(order: WorkOrderRow, filter: BoardFilter): boolean {
   if (filter.siteIds.length && !filter.siteIds.includes(order.siteId)) return false;
   if (filter.tasks.length && !filter.tasks.includes(order.task)) return false;
   return true;
@@ -45,12 +44,12 @@ function sameItems<T>(a: readonly T[] | undefined, b: readonly T[]): boolean {
  * array it had in `previous`, so only the cells a change touched render again.
  */
 export function groupCells(
-  orders: readonly PlanOrder[],
+  orders: readonly WorkOrderRow[],
   crewDays: ReadonlyMap<CellKey, CrewDay>,
   filter: BoardFilter,
-  previous?: ReadonlyMap<CellKey, PlanOrder[]>,
-): Map<CellKey, PlanOrder[]> {
-  const cells = new Map<CellKey, PlanOrder[]>();
+  previous?: ReadonlyMap<CellKey, WorkOrderRow[]>,
+): Map<CellKey, WorkOrderRow[]> {
+  const cells = new Map<CellKey, WorkOrderRow[]>();
   for (const order of orders) {
     if (!matchesFilter(order, filter)) continue;
     const key = cellKey(order.crewId, order.plannedDate);
@@ -109,7 +108,7 @@ export function loadBar(day: Pick<CrewDay, 'workHours' | 'driveHours' | 'loadUnl
 }
 
 /** Hours of the cell's orders; used where the plan has no crew-day (the unassigned row, a moved card). */
-export function sumHours(orders: readonly PlanOrder[]): number {
+export function sumHours(orders: readonly WorkOrderRow[]): number {
   return orders.reduce((s, o) => s + o.plannedHours, 0);
 }
 

@@ -1,12 +1,11 @@
 /** Invented week boards for component tests (shapes as the API contract gives them). */
-import { addDaysIso, WORK_TASKS } from '@swardwise/domain';
-import type { BoardCrew, CrewDay, DiffItem, PlanOrder, WeekBoard } from '../../api/weekPlans.ts';
+import { addDaysIso, WORK_TASKS, type BoardCrew, type CrewDay, type DiffItem, type WeekBoard, type WorkOrderRow } from '@swardwise/domain';
 
 export const WEEK = '2026-11-30';
 export const DATES = Array.from({ length: 7 }, (_, i) => addDaysIso(WEEK, i));
 
 let nextId = 1;
-export function order(over: Partial<PlanOrder> = {}): PlanOrder {
+export function order(over: Partial<WorkOrderRow> = {}): WorkOrderRow {
   const id = over.id ?? nextId++;
   return {
     id,
@@ -30,6 +29,7 @@ export function order(over: Partial<PlanOrder> = {}): PlanOrder {
     reason: 'The one-third rule asks for a cut by Tuesday',
     notes: '',
     details: { hocMm: 38, mowerKind: 'rotary' },
+    doneAt: null,
     version: 1,
     siteLat: 40.01,
     siteLng: -75.02,
@@ -61,7 +61,7 @@ export function crewDay(over: Partial<CrewDay> & Pick<CrewDay, 'crewId' | 'date'
   return day;
 }
 
-export function board(orders: PlanOrder[], crewDays: CrewDay[] = []): WeekBoard {
+export function board(orders: WorkOrderRow[], crewDays: CrewDay[] = []): WeekBoard {
   return {
     districtId: 1,
     districtName: 'North',
@@ -79,7 +79,7 @@ export function board(orders: PlanOrder[], crewDays: CrewDay[] = []): WeekBoard 
 
 /** A large week: `n` orders over the crews, days and ten sites, a tenth of them unassigned. */
 export function bigBoard(n: number): WeekBoard {
-  const orders: PlanOrder[] = [];
+  const orders: WorkOrderRow[] = [];
   for (let i = 0; i < n; i++) {
     const crew = i % 10 === 0 ? null : CREWS[i % CREWS.length]!;
     orders.push(

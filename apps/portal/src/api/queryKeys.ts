@@ -1,0 +1,52 @@
+/**
+ * Every cached answer's key, in one place. A key starts with its resource, so invalidating
+ * `['fields']` covers the list, each field and their needs.
+ */
+export const queryKeys = {
+  audit: (query: object) => ['audit', query] as const,
+  crews: () => ['crews'] as const,
+  devMail: () => ['dev-mail'] as const,
+  districts: () => ['districts'] as const,
+  equipment: () => ['equipment'] as const,
+  fieldEvents: (query: object) => ['field-events', query] as const,
+  fields: (query: object) => ['fields', 'list', query] as const,
+  field: (id: number) => ['fields', 'detail', id] as const,
+  fieldNeeds: (id: number, date: string | null) => ['fields', 'needs', id, date] as const,
+  imports: () => ['imports'] as const,
+  map: () => ['map'] as const,
+  /** Not under `map`: the bundled basemap does not change with the data. */
+  basemap: () => ['basemap'] as const,
+  records: (query: object) => ['records', query] as const,
+  sites: (query: object) => ['sites', 'list', query] as const,
+  site: (id: number) => ['sites', 'detail', id] as const,
+  standards: () => ['standards'] as const,
+  stations: () => ['weather', 'stations'] as const,
+  weatherDays: (stationId: number | null, from: string, to: string) => ['weather', 'days', stationId, from, to] as const,
+  weekBoard: (districtId: number | null, weekStart: string) => ['week-plans', 'board', districtId, weekStart] as const,
+  /** One crew's day sheet, by the link's crew, day and (when given) district. */
+  crewSheet: (link: object) => ['week-plans', 'sheet', link] as const,
+  workOrders: (query: object) => ['work-orders', 'list', query] as const,
+  workOrder: (id: number) => ['work-orders', 'detail', id] as const,
+  users: () => ['users'] as const,
+};
+
+/** What a write changes, by what was written. */
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail';
+
+/**
+ * The answers a write makes stale: the resource itself and every answer that shows it (a
+ * field's change shows in its site's counts, the district's totals, the map and the week plan).
+ */
+export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
+  site: [['sites'], ['fields'], ['districts'], ['map']],
+  field: [['fields'], ['sites'], ['districts'], ['map'], ['week-plans'], ['work-orders'], ['records']],
+  fieldEvent: [['field-events'], ['fields', 'needs'], ['week-plans']],
+  crew: [['crews'], ['equipment'], ['users'], ['week-plans'], ['work-orders']],
+  equipment: [['equipment'], ['week-plans']],
+  user: [['users'], ['crews']],
+  standards: [['standards'], ['fields', 'needs'], ['map'], ['week-plans']],
+  import: [['imports'], ['sites'], ['fields'], ['districts'], ['map']],
+  workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map']],
+  weather: [['weather'], ['fields', 'needs'], ['map']],
+  devMail: [['dev-mail']],
+};

@@ -1,0 +1,6 @@
+import type { Records } from '@swardwise/domain';
+import { api } from './client.ts';
+
+export function getRecords(query: { districtId?: number; from: string; to: string }, signal?: AbortSignal): Promise<Records> {
+  return api.get<Records>('/records', query, signal);
+}

@@ -1,0 +1,108 @@
+/** Work orders as the crews and the board read them, and what a crew reports on them. */
+import type { WorkStatus, WorkTask } from '../vocabulary.ts';
+import type { Instant, Items } from './common.ts';
+
+/**
+ * The engine's notes on an order, which vary by task: a mowing's HOC and mower kind, a
+ * watering's run time, a feed's product, a line plan's paint, the booking lines are painted for.
+ */
+export type WorkOrderDetails = {
+  hocMm?: number;
+  mowerKind?: 'reel' | 'rotary';
+  /** Older demo rows name the mower instead of its kind. */
+  mower?: string;
+  runTimeMin?: number;
+  productKg?: number;
+  paintL?: number;
+  eventTitle?: string;
+  eventOn?: string;
+} & Record<string, unknown>;
+
+/** A work order: a row of `GET /api/work-orders`, of the week board, and the order of every write. */
+export interface WorkOrderRow<At extends Instant = string> {
+  id: number;
+  fieldId: number;
+  fieldName: string;
+  siteId: number;
+  siteName: string;
+  siteLat: number;
+  siteLng: number;
+  districtId: number;
+  task: WorkTask;
+  /** Monday of the order's week. */
+  weekStart: string;
+  plannedDate: string;
+  crewId: number | null;
+  crewName: string | null;
+  equipmentId: number | null;
+  equipmentName: string | null;
+  plannedHours: number;
+  actualHours: number | null;
+  status: WorkStatus;
+  origin: 'generated' | 'manual';
+  /** Kept by hand: re-generating the week leaves it where it is. */
+  pinned: boolean;
+  /** Why the planner asked for it, in plain words. */
+  reason: string;
+  notes: string;
+  details: WorkOrderDetails;
+  doneAt: At | null;
+  version: number;
+  photoCount: number;
+}
+
+/** `POST /api/work-orders`, `PATCH /api/work-orders/:id`: the order and how many crew leads were e-mailed. */
+export type WorkOrderWriteAnswer<At extends Instant = string> = WorkOrderRow<At> & { emailed: number };
+
+/** One order as a crew works it, with who finished it. */
+export interface WorkOrderDetail<At extends Instant = string> extends WorkOrderRow<At> {
+  startedAt: At | null;
+  doneBy: number | null;
+}
+
+/** A report a crew made on an order. */
+export interface WorkUpdate<At extends Instant = string> {
+  id: number;
+  status: WorkStatus;
+  actualHours: number | null;
+  note: string;
+  /** The phone's clock when the crew reported (kept with its calendar day). */
+  reportedAt: At;
+}
+
+export interface WorkUpdateRow<At extends Instant = string> extends WorkUpdate<At> {
+  createdBy: number | null;
+  createdAt: At;
+}
+
+export interface WorkPhoto<At extends Instant = string> {
+  id: number;
+  width: number;
+  height: number;
+  bytes: number;
+  createdAt: At;
+  /** Where the portal loads it from (`GET /api/work-orders/:id/photos/:photoId`). */
+  url: string;
+}
+
+/** `GET /api/work-orders/:id`: the order with its reports and photos. */
+export interface WorkOrderAnswer<At extends Instant = string> {
+  order: WorkOrderDetail<At>;
+  updates: WorkUpdateRow<At>[];
+  photos: WorkPhoto<At>[];
+}
+
+/** `POST /api/work-orders/:id/reports` (201; 200 when `clientRef` was sent before and this is that report). */
+export interface ReportAnswer<At extends Instant = string> {
+  order: WorkOrderDetail<At>;
+  update: WorkUpdate<At>;
+  duplicate: boolean;
+}
+
+/** `POST /api/work-orders/:id/photos` (201; 200 for a photo sent before). */
+export interface PhotoAnswer<At extends Instant = string> {
+  photo: WorkPhoto<At>;
+  duplicate: boolean;
+}
+
+export type WorkOrderList<At extends Instant = string> = Items<WorkOrderRow<At>>;
