@@ -9,12 +9,14 @@ import session from 'express-session';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
+import { AppError } from '@swardwise/domain';
 import type { Config } from './config.ts';
 import type { Db } from './db/client.ts';
 import { createMailer, type Mailer } from './mail/mailer.ts';
 import type { MailSink } from './mail/sink.ts';
 import { loadUser, requireUser } from './http/auth.ts';
 import { errorHandler, notFound } from './http/errors.ts';
+import { MAX_JSON_DEPTH, nestedDeeperThan } from './http/json-depth.ts';
 import { DrizzleSessionStore } from './http/session-store.ts';
 import { authRouter } from './routes/auth.ts';
 import { crewsRouter } from './routes/crews.ts';
@@ -83,6 +85,14 @@ export function createApp(
     }),
   );
   app.use('/api', express.json({ limit: '2mb' }));
+  app.use('/api', (req, _res, next) => {
+    if (req.body !== undefined && nestedDeeperThan(req.body)) {
+      return next(new AppError('invalid', 'request/too_deep', `The request body nests arrays or objects more than ${MAX_JSON_DEPTH} levels deep`, {
+        issues: [{ path: 'body', message: `nested more than ${MAX_JSON_DEPTH} levels deep` }],
+      }));
+    }
+    next();
+  });
   app.use(
     '/api',
     session({

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { createEquipmentSchema, createFieldSchema, updateCrewSchema, updateEquipmentSchema, updateFieldSchema, updateSiteSchema } from './index.ts';
+import { createEquipmentSchema, createFieldSchema, idSchema, isoDateSchema, isoDateTimeSchema, passwordSchema, updateCrewSchema, updateEquipmentSchema, updateFieldSchema, updateSiteSchema, versionSchema } from './index.ts';
 
 describe('update schemas', () => {
   // A PATCH that names one key must not carry defaults for the others: they would overwrite
@@ -28,5 +28,28 @@ describe('update schemas', () => {
     expect(field).toMatchObject({ status: 'open', statusNote: '', hocOverrideMm: null, weeklyUseHours: 0 });
     const marker = createEquipmentSchema.parse({ districtId: 1, kind: 'line_marker', name: 'Marker' });
     expect(marker).toMatchObject({ crewId: null, hourMeterH: 0, active: true, notes: '' });
+  });
+});
+
+describe('bounds shared by every route', () => {
+  test('should keep ids and versions within PostgreSQL’s integer', () => {
+    expect(idSchema.parse('2147483647')).toBe(2147483647);
+    expect(idSchema.safeParse('2147483648').success).toBe(false);
+    expect(idSchema.safeParse('0').success).toBe(false);
+    expect(versionSchema.safeParse(2147483647).success).toBe(true);
+    expect(versionSchema.safeParse(3000000000).success).toBe(false);
+  });
+
+  test('should take calendar dates from 1900 to 2200 only', () => {
+    expect(isoDateSchema.safeParse('1900-01-01').success).toBe(true);
+    expect(isoDateSchema.safeParse('2200-12-31').success).toBe(true);
+    for (const bad of ['0000-01-01', '1899-12-31', '2201-01-01', '2026-02-29', '2026-13-01', '2026-1-1']) expect(isoDateSchema.safeParse(bad).success, bad).toBe(false);
+    expect(isoDateTimeSchema.safeParse('2026-06-02T20:30:00-05:00').success).toBe(true);
+    expect(isoDateTimeSchema.safeParse('0000-06-02T20:30:00Z').success).toBe(false);
+  });
+
+  test('should ask passwords of at least 12 characters', () => {
+    expect(passwordSchema.safeParse('elevenchars').error?.issues[0]?.message).toBe('use at least 12 characters');
+    expect(passwordSchema.safeParse('twelve-chars').success).toBe(true);
   });
 });
