@@ -9,12 +9,12 @@ import { startMailSink, type MailSink } from './mail/sink.ts';
 import { sessionSecretFor } from './services/settings.ts';
 
 async function main() {
-  const config = loadConfig();
+  const config = loadConfig(process.env, process.argv.slice(2));
   const logger = pino({ level: config.logLevel });
   const started = Date.now();
   const database = await openDatabase({ databaseUrl: config.databaseUrl, pgliteDir: config.pgliteDir });
   logger.info({ kind: database.kind, dir: database.kind === 'pglite' ? config.pgliteDir : undefined, ms: Date.now() - started }, 'database ready');
-  if (config.seedDemo) {
+  if (config.demo) {
     const seeded = await seedDemoCity(database.db);
     if (seeded) logger.info(seeded, 'demo city seeded (invented data)');
   }
@@ -29,7 +29,7 @@ async function main() {
     logger.info({ port: mailSink.port }, 'development mail sink listening; messages at /api/dev/mail');
   }
   const mailer = createMailer(smtp, logger);
-  const { app, store } = createApp({ db: database.db, config, logger, sessionSecret, mailer, mailSink });
+  const { app, store, background } = createApp({ db: database.db, config, logger, sessionSecret, mailer, mailSink });
   const server = app.listen(config.port, config.host, () => {
     logger.info({ url: `http://localhost:${config.port}`, production: config.production }, 'Swardwise is listening');
   });
@@ -39,7 +39,10 @@ async function main() {
   const stop = (signal: string) => {
     logger.info({ signal }, 'shutting down');
     server.close(() => {
-      void Promise.allSettled([database.close(), mailSink?.close()]).finally(() => process.exit(0));
+      void background
+        .idle()
+        .then(() => Promise.allSettled([database.close(), mailSink?.close()]))
+        .finally(() => process.exit(0));
     });
     setTimeout(() => process.exit(0), 5000).unref();
   };

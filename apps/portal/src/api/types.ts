@@ -195,7 +195,8 @@ export interface AuditEntry {
   at: string;
   actorId: number | null;
   actorName: string | null;
-  action: 'create' | 'update' | 'delete';
+  /** Row changes, and account events (entity `account`). */
+  action: 'create' | 'update' | 'delete' | 'sign_in' | 'sign_in_failed' | 'sign_out' | 'reset_requested';
   entity: string;
   entityId: number | null;
   districtId: number | null;
