@@ -23,6 +23,7 @@ import { sameOriginWrites } from './http/same-origin.ts';
 import { sessionLifetime } from './http/session-lifetime.ts';
 import { DrizzleSessionStore } from './http/session-store.ts';
 import { BackgroundTasks } from './services/background.ts';
+import { demoAnnouncement } from './services/first-run.ts';
 import { authRouter } from './routes/auth.ts';
 import { crewsRouter } from './routes/crews.ts';
 import { devRouter } from './routes/dev.ts';
@@ -134,6 +135,10 @@ export function createApp(
   app.get('/api/health', async (_req, res) => {
     await db.execute('select 1');
     res.json({ status: 'ok' });
+  });
+  // Public: what the sign-in page needs before anyone has signed in.
+  app.get('/api/config', async (_req, res) => {
+    res.json({ demo: await demoAnnouncement(db, config) });
   });
   app.use('/api/auth', authRouter(full));
   app.use('/api', requireUser);

@@ -1,11 +1,15 @@
-/** Starts Swardwise: opens the database, applies migrations, seeds the demo city once, serves. */
+/**
+ * Starts Swardwise: opens the database, applies migrations, seeds the demo city in demo
+ * mode (`--demo`, DEMO=true) or makes sure a new installation has its first administrator,
+ * serves. A start that cannot go on safely says why and exits with status 1.
+ */
 import { pino } from 'pino';
 import { createApp } from './app.ts';
 import { loadConfig } from './config.ts';
 import { openDatabase } from './db/client.ts';
-import { seedDemoCity } from './db/seed/index.ts';
 import { createMailer, type SmtpSettings } from './mail/mailer.ts';
 import { startMailSink, type MailSink } from './mail/sink.ts';
+import { prepareInstallation, StartupError } from './services/first-run.ts';
 import { sessionSecretFor } from './services/settings.ts';
 
 async function main() {
@@ -14,9 +18,14 @@ async function main() {
   const started = Date.now();
   const database = await openDatabase({ databaseUrl: config.databaseUrl, pgliteDir: config.pgliteDir });
   logger.info({ kind: database.kind, dir: database.kind === 'pglite' ? config.pgliteDir : undefined, ms: Date.now() - started }, 'database ready');
-  if (config.demo) {
-    const seeded = await seedDemoCity(database.db);
-    if (seeded) logger.info(seeded, 'demo city seeded (invented data)');
+  try {
+    await prepareInstallation(database.db, config, logger);
+  } catch (err) {
+    await database.close();
+    throw err;
+  }
+  if (config.production && !config.publicUrlSet) {
+    logger.warn({ publicUrl: config.publicUrl }, 'PUBLIC_URL is not set: links in e-mails point at this default, and writes are accepted from the address each browser used');
   }
   const sessionSecret = await sessionSecretFor(database.db, config.sessionSecret);
 
@@ -31,7 +40,7 @@ async function main() {
   const mailer = createMailer(smtp, logger);
   const { app, store, background } = createApp({ db: database.db, config, logger, sessionSecret, mailer, mailSink });
   const server = app.listen(config.port, config.host, () => {
-    logger.info({ url: `http://localhost:${config.port}`, production: config.production }, 'Swardwise is listening');
+    logger.info({ url: `http://localhost:${config.port}`, production: config.production, demo: config.demo }, config.demo ? 'Swardwise is listening (demo mode)' : 'Swardwise is listening');
   });
   const prune = setInterval(() => void store.prune().catch((err) => logger.warn({ err }, 'session prune failed')), 3600_000);
   prune.unref();
@@ -51,6 +60,7 @@ async function main() {
 }
 
 main().catch((err) => {
-  console.error(err);
+  // A refused start is a message for whoever deploys, not a stack trace.
+  console.error(err instanceof StartupError ? `Swardwise cannot start: ${err.message}` : err);
   process.exit(1);
 });
