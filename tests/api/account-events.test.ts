@@ -5,7 +5,7 @@
 import { and, eq, gt } from 'drizzle-orm';
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { auditLog, sessions } from '../../apps/api/src/db/schema/index.ts';
+import { auditLog, sessions, users } from '../../apps/api/src/db/schema/index.ts';
 import { PASSWORD } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
@@ -101,6 +101,21 @@ describe('session lifetime', () => {
     const row = await storedSession(api.fixture.users.partner.id);
     await setSignedInAt(row.sid, row.data, undefined);
     expect((await agent.get('/api/auth/me')).status).toBe(401);
+  });
+
+  test('should let a request carrying an ended session sign in afresh', async () => {
+    const agent = await api.signIn('foremanSouth');
+    const row = await storedSession(api.fixture.users.foremanSouth.id);
+    await setSignedInAt(row.sid, row.data, Date.now() - 31 * DAY);
+    const again = await agent.post('/api/auth/sign-in').send({ email: api.fixture.users.foremanSouth.email, password: PASSWORD });
+    expect(again.status).toBe(200);
+    expect((await agent.get('/api/auth/me')).status).toBe(200);
+    // Likewise after the account behind the cookie was deactivated: another account signs in.
+    await api.database.db.update(users).set({ active: false }).where(eq(users.id, api.fixture.users.foremanSouth.id));
+    const other = await agent.post('/api/auth/sign-in').send({ email: api.fixture.users.foreman.email, password: PASSWORD });
+    expect(other.status).toBe(200);
+    expect((await agent.get('/api/auth/me')).body.user.id).toBe(api.fixture.users.foreman.id);
+    await api.database.db.update(users).set({ active: true }).where(eq(users.id, api.fixture.users.foremanSouth.id));
   });
 
   test('should follow SESSION_MAX_DAYS', async () => {

@@ -37,6 +37,9 @@ describe('TRUST_PROXY', () => {
     expect(loadConfig({ TRUST_PROXY: 'loopback' }).trustProxy).toBe('loopback');
     expect(loadConfig({ TRUST_PROXY: '1' }).trustProxy).toBe(1);
     expect(() => loadConfig({ TRUST_PROXY: 'true' })).toThrow(/name the proxy/);
+    // HTTPS is the proxy's: a secure cookie without trusting it would never be sent.
+    expect(() => loadConfig({ COOKIE_SECURE: 'true' })).toThrow(/COOKIE_SECURE=true needs TRUST_PROXY/);
+    expect(loadConfig({ COOKIE_SECURE: 'true', TRUST_PROXY: 'loopback' }).cookieSecure).toBe(true);
   });
 });
 

@@ -106,6 +106,13 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, argv: string[] 
   // SEED_DEMO is its former name.
   const demo = argv.includes('--demo') || bool(env.DEMO ?? env.SEED_DEMO, !production);
   const days = 24 * 3600 * 1000;
+  const cookieSecure = bool(env.COOKIE_SECURE, false);
+  const trustProxy = trustProxyOf(env.TRUST_PROXY);
+  // The server speaks plain HTTP; HTTPS is a proxy's. Without trusting that proxy's
+  // X-Forwarded-Proto every request looks like http and the secure cookie is never sent.
+  if (cookieSecure && trustProxy === false) {
+    throw new Error('COOKIE_SECURE=true needs TRUST_PROXY naming the HTTPS proxy in front of this server (for example TRUST_PROXY=loopback)');
+  }
   return {
     port,
     host: env.HOST ?? '0.0.0.0',
@@ -116,8 +123,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, argv: string[] 
     publicUrl,
     publicUrlSet: Boolean(env.PUBLIC_URL),
     allowedOrigins: [...new Set([publicOrigin, ...(production ? [] : DEV_PORTAL_ORIGINS)])],
-    trustProxy: trustProxyOf(env.TRUST_PROXY),
-    cookieSecure: bool(env.COOKIE_SECURE, false),
+    trustProxy,
+    cookieSecure,
     logLevel: env.LOG_LEVEL ?? (env.NODE_ENV === 'test' ? 'silent' : 'info'),
     demo,
     adminEmail: env.ADMIN_EMAIL?.trim() || undefined,
