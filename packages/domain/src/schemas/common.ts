@@ -51,15 +51,17 @@ export const listQuerySchema = z.object({
 /** Calendar dates the product accepts: wide enough for any record, narrow enough for every date type. */
 export const DATE_RANGE = { first: '1900-01-01', last: '2200-12-31' } as const;
 
-/** An ISO calendar date, YYYY-MM-DD, that exists (no 31 April) and lies in `DATE_RANGE`. */
-export const isoDateSchema = z
-  .string({ error: 'use a date as YYYY-MM-DD' })
-  .regex(/^\d{4}-\d{2}-\d{2}$/, 'use a date as YYYY-MM-DD')
-  .refine((s) => {
+/** An ISO calendar date, YYYY-MM-DD, that exists (no 31 April) and lies in `DATE_RANGE`; one message per bad value. */
+export const isoDateSchema = z.string({ error: 'use a date as YYYY-MM-DD' }).superRefine((s, ctx) => {
+  const message = (() => {
+    if (!/^\d{4}-\d{2}-\d{2}$/.test(s)) return 'use a date as YYYY-MM-DD';
     const d = new Date(`${s}T00:00:00Z`);
-    return !Number.isNaN(d.getTime()) && d.toISOString().startsWith(s);
-  }, 'not a calendar date')
-  .refine((s) => s >= DATE_RANGE.first && s <= DATE_RANGE.last, `use a date between ${DATE_RANGE.first} and ${DATE_RANGE.last}`);
+    if (Number.isNaN(d.getTime()) || d.toISOString().slice(0, 10) !== s) return 'not a calendar date';
+    if (s < DATE_RANGE.first || s > DATE_RANGE.last) return `use a date between ${DATE_RANGE.first} and ${DATE_RANGE.last}`;
+    return null;
+  })();
+  if (message) ctx.addIssue({ code: 'custom', message });
+});
 
 /** An ISO 8601 date and time with its offset, in the years of `DATE_RANGE`. */
 export const isoDateTimeSchema = z.iso

@@ -44,6 +44,9 @@ describe('bounds shared by every route', () => {
     expect(isoDateSchema.safeParse('1900-01-01').success).toBe(true);
     expect(isoDateSchema.safeParse('2200-12-31').success).toBe(true);
     for (const bad of ['0000-01-01', '1899-12-31', '2201-01-01', '2026-02-29', '2026-13-01', '2026-1-1']) expect(isoDateSchema.safeParse(bad).success, bad).toBe(false);
+    // One message per bad value, the first thing wrong with it.
+    expect(isoDateSchema.safeParse('3 June').error?.issues.map((i) => i.message)).toEqual(['use a date as YYYY-MM-DD']);
+    expect(isoDateSchema.safeParse('0000-02-30').error?.issues.map((i) => i.message)).toEqual(['not a calendar date']);
     expect(isoDateTimeSchema.safeParse('2026-06-02T20:30:00-05:00').success).toBe(true);
     expect(isoDateTimeSchema.safeParse('0000-06-02T20:30:00Z').success).toBe(false);
   });
