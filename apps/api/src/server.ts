@@ -24,7 +24,7 @@ async function main() {
     await database.close();
     throw err;
   }
-  if (config.production && !config.publicUrlSet) {
+  if (config.production && !config.demo && !config.publicUrlSet) {
     logger.warn({ publicUrl: config.publicUrl }, 'PUBLIC_URL is not set: links in e-mails point at this default, and writes are accepted from the address each browser used');
   }
   const sessionSecret = await sessionSecretFor(database.db, config.sessionSecret);

@@ -134,7 +134,8 @@ describe('SignInView', () => {
     expect(notice.get('h2').text()).toBe('Demo city — invented data');
     expect(notice.text()).toContain('Sallowmere');
     expect(notice.text()).toContain('README');
-    expect(notice.text()).toContain('head@swardwise.example · demo-head-2026');
+    expect(notice.text()).toContain('head@swardwise.example');
+    expect(notice.text()).toContain('password demo-head-2026');
     await wrapper.get('[data-test="demo-use-head"]').trigger('click');
     expect((wrapper.get('input[data-test="email"]').element as HTMLInputElement).value).toBe('head@swardwise.example');
     expect((wrapper.get('input[data-test="password"]').element as HTMLInputElement).value).toBe('demo-head-2026');
