@@ -18,7 +18,9 @@ export default defineConfig(({ mode }) => ({
     }),
   ],
   server: {
+    // Fixed: the API accepts writes in development from this origin only (besides PUBLIC_URL).
     port: 5173,
+    strictPort: true,
     proxy: { '/api': `http://127.0.0.1:${apiPort}` },
   },
   build: {

@@ -92,8 +92,8 @@ describe('what a done report changes', () => {
     await db().update(workOrders).set({ equipmentId: mowerId }).where(eq(workOrders.id, id));
     await db().update(fields).set({ lastMowedOn: '2026-05-20' }).where(eq(fields.id, api.fixture.fields.northSoccer));
     const meterBefore = await meter();
-    const auditBefore = await rows(auditLog);
     const crew = await api.signIn('crew');
+    const auditBefore = await rows(auditLog);
     // Late in the evening west of UTC: the crew's date, not the UTC date, is the mowing date.
     const res = await crew.post(`/api/work-orders/${id}/reports`).send(done(2.25, { reportedAt: '2026-06-02T20:30:00-05:00' }));
     expect(res.status).toBe(201);

@@ -1,4 +1,4 @@
-import { eq } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { auditLog, fields, sites } from '../../apps/api/src/db/schema/index.ts';
 import { rectangle } from '../support/fixture.ts';
@@ -182,7 +182,7 @@ describe('deleting a field', () => {
     expect((await agent.delete(`/api/fields/${api.fixture.fields.southBaseball}?version=1`)).status).toBe(403);
     expect((await agent.delete(`/api/fields/${id}?version=1`)).status).toBe(204);
     expect(await api.database.db.select().from(fields).where(eq(fields.id, id))).toHaveLength(0);
-    const entries = await api.database.db.select().from(auditLog).where(eq(auditLog.entityId, id));
+    const entries = await api.database.db.select().from(auditLog).where(and(eq(auditLog.entity, 'field'), eq(auditLog.entityId, id)));
     expect(entries.map((e) => e.action)).toEqual(['create', 'delete']);
     expect(entries[1]!.before).toMatchObject({ name: 'Temporary pitch' });
     expect((await agent.get(`/api/fields/${id}`)).status).toBe(404);

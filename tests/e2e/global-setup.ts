@@ -1,6 +1,7 @@
 /**
  * Browser tests run against the real product: the portal is built, and the server starts
- * in production mode on a free port with a fresh PGlite folder seeded with the demo city.
+ * as `npm start` starts it — production mode with `--demo` — on a free port with a fresh
+ * PGlite folder seeded with the demo city.
  */
 import { execSync, spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
@@ -49,13 +50,16 @@ export default async function setup(project: TestProject) {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-e2e-'));
   const port = await freePort();
   let output = '';
-  const child = spawn(process.execPath, ['--import', 'tsx', 'apps/api/src/server.ts'], {
+  const baseUrl = `http://127.0.0.1:${port}`;
+  const child = spawn(process.execPath, ['--import', 'tsx', 'apps/api/src/server.ts', '--demo'], {
     cwd: repoRoot,
     env: {
       ...process.env,
       NODE_ENV: 'production',
       PORT: String(port),
       HOST: '127.0.0.1',
+      // The address the browser opens: the one origin writes are accepted from.
+      PUBLIC_URL: baseUrl,
       PGLITE_DIR: path.join(dataDir, 'pglite'),
       UPLOADS_DIR: path.join(dataDir, 'uploads'),
       LOG_LEVEL: 'warn',
@@ -65,7 +69,6 @@ export default async function setup(project: TestProject) {
   });
   child.stdout!.on('data', (d) => (output += d));
   child.stderr!.on('data', (d) => (output += d));
-  const baseUrl = `http://127.0.0.1:${port}`;
   await waitForHealth(baseUrl, child, () => output);
   project.provide('baseUrl', baseUrl);
 

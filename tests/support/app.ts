@@ -1,41 +1,59 @@
 /** A fresh API on its own in-memory PGlite, for one test file. */
-import { pino } from 'pino';
+import { pino, type Logger } from 'pino';
 import supertest from 'supertest';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
-import { createMailer } from '../../apps/api/src/mail/mailer.ts';
+import { createMailer, type Mailer } from '../../apps/api/src/mail/mailer.ts';
 import { startMailSink, type MailSink } from '../../apps/api/src/mail/sink.ts';
+import type { BackgroundTasks } from '../../apps/api/src/services/background.ts';
 import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
 import { buildFixture, PASSWORD, type Fixture } from './fixture.ts';
 
+type App = ReturnType<typeof createApp>['app'];
+
 export interface TestApi {
   database: Database;
-  app: ReturnType<typeof createApp>['app'];
+  app: App;
   fixture: Fixture;
   /** The SMTP sink this API sends its e-mail to. */
   mail: MailSink;
   /** The department clock the API reads "today" from. */
   clock: DepartmentClock;
+  /** Work the app finishes after answering (password-reset mail); await `idle()` before checking it. */
+  background: BackgroundTasks;
   /** A cookie-keeping client signed in as the fixture user. */
-  signIn(user: keyof Fixture['users']): Promise<ReturnType<typeof supertest.agent>>;
+  signIn(user: keyof Fixture['users'], app?: App): Promise<ReturnType<typeof supertest.agent>>;
   /** The same for any account with the fixture password (see `addUser`). */
-  signInAs(email: string): Promise<ReturnType<typeof supertest.agent>>;
+  signInAs(email: string, app?: App): Promise<ReturnType<typeof supertest.agent>>;
+  /**
+   * A second app over the same database with other settings (its own rate-limit counters),
+   * optionally with its own logger or mailer.
+   */
+  makeApp(env?: Record<string, string>, extra?: { logger?: Logger; mailer?: Mailer }): { app: App; background: BackgroundTasks };
   close(): Promise<void>;
 }
+
+const BASE_ENV = { NODE_ENV: 'test', PUBLIC_URL: 'http://portal.test' };
 
 /** `now`: the server's clock (by default the real one), for tests that stand at a chosen instant. */
 export async function startTestApi(env: Record<string, string> = {}, options: { now?: () => Date } = {}): Promise<TestApi> {
   const database = await openDatabase({ pgliteDir: 'memory://' });
   const fixture = await buildFixture(database.db);
-  const config = loadConfig({ NODE_ENV: 'test', PUBLIC_URL: 'http://portal.test', ...env });
-  const logger = pino({ level: 'silent' });
   const mail = await startMailSink();
-  const mailer = createMailer({ host: '127.0.0.1', port: mail.port, secure: false, ignoreTLS: true, from: config.mailFrom }, logger);
-  const clock = new DepartmentClock(database.db, config.departmentTimeZone, options.now);
-  const { app } = createApp({ db: database.db, config, logger, sessionSecret: 'test-secret', mailer, mailSink: mail, clock });
-  async function signInAs(email: string) {
-    const agent = supertest.agent(app);
+  const silent = pino({ level: 'silent' });
+  const baseConfig = loadConfig({ ...BASE_ENV, ...env });
+  const clock = new DepartmentClock(database.db, baseConfig.departmentTimeZone, options.now);
+  const makeApp: TestApi['makeApp'] = (overrides = {}, extra = {}) => {
+    const config = loadConfig({ ...BASE_ENV, ...overrides });
+    const logger = extra.logger ?? silent;
+    const mailer = extra.mailer ?? createMailer({ host: '127.0.0.1', port: mail.port, secure: false, ignoreTLS: true, from: config.mailFrom }, logger);
+    const { app, background } = createApp({ db: database.db, config, logger, sessionSecret: 'test-secret', mailer, mailSink: mail, clock });
+    return { app, background };
+  };
+  const { app, background } = makeApp(env);
+  async function signInAs(email: string, target: App = app) {
+    const agent = supertest.agent(target);
     const res = await agent.post('/api/auth/sign-in').send({ email, password: PASSWORD });
     if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
     return agent;
@@ -46,9 +64,12 @@ export async function startTestApi(env: Record<string, string> = {}, options: { 
     fixture,
     mail,
     clock,
-    signIn: (key) => signInAs(fixture.users[key].email),
+    background,
+    makeApp,
+    signIn: (key, target = app) => signInAs(fixture.users[key].email, target),
     signInAs,
     close: async () => {
+      await background.idle();
       await mail.close();
       await database.close();
     },

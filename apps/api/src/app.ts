@@ -1,6 +1,7 @@
 /**
- * The HTTP application, top to bottom as one pipeline: security headers, logs, body
- * parsing, sessions, the caller's identity, the API routes, the built portal, errors.
+ * The HTTP application, top to bottom as one pipeline: security headers, logs, the origin
+ * of writes, sessions, the caller's identity, body parsing (bounded by who is asking), the
+ * API routes, the built portal, errors.
  */
 import fs from 'node:fs';
 import path from 'node:path';
@@ -9,6 +10,7 @@ import session from 'express-session';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
+import { AppError } from '@swardwise/domain';
 import type { Config } from './config.ts';
 import type { Db } from './db/client.ts';
 import { createMailer, type Mailer } from './mail/mailer.ts';
@@ -16,8 +18,14 @@ import type { MailSink } from './mail/sink.ts';
 import { loadUser, requireUser } from './http/auth.ts';
 import { withClock } from './http/clock.ts';
 import { errorHandler, notFound } from './http/errors.ts';
+import { MAX_JSON_DEPTH, nestedDeeperThan } from './http/json-depth.ts';
+import { loggableUrl } from './http/request-log.ts';
+import { sameOriginWrites } from './http/same-origin.ts';
+import { sessionLifetime } from './http/session-lifetime.ts';
 import { DrizzleSessionStore } from './http/session-store.ts';
 import { serveOpenApi } from './openapi/document.ts';
+import { BackgroundTasks } from './services/background.ts';
+import { demoAnnouncement } from './services/first-run.ts';
 import { authRouter } from './routes/auth.ts';
 import { crewsRouter } from './routes/crews.ts';
 import { devRouter } from './routes/dev.ts';
@@ -46,18 +54,23 @@ export interface AppDeps {
   mailSink?: MailSink | undefined;
   /** The department clock (its time zone a setting); tests pass one standing at a chosen instant. */
   clock: DepartmentClock;
+  /** Work finished after the answer (password-reset look-ups and e-mail). */
+  background: BackgroundTasks;
 }
 
 export const COOKIE_NAME = 'swardwise.sid';
-const SESSION_DAYS = 14;
+/** JSON bodies: a signed-in user's edits (field outlines) may be large; nobody else's need be. */
+const JSON_LIMIT_SIGNED_IN = '2mb';
+const JSON_LIMIT_ANONYMOUS = '16kb';
 
 export function createApp(
-  deps: Omit<AppDeps, 'config' | 'mailer' | 'clock'> & { config: Config; mailer?: Mailer; clock?: DepartmentClock },
-): { app: Express; store: DrizzleSessionStore } {
+  deps: Omit<AppDeps, 'config' | 'mailer' | 'clock' | 'background'> & { config: Config; mailer?: Mailer; clock?: DepartmentClock },
+): { app: Express; store: DrizzleSessionStore; background: BackgroundTasks } {
   // Without a mailer, e-mail is off (logged), as in a deployment with no SMTP settings.
   const mailer = deps.mailer ?? createMailer(null, deps.logger);
   const clock = deps.clock ?? new DepartmentClock(deps.db, deps.config.departmentTimeZone);
-  const full: AppDeps = { ...deps, mailer, clock, config: { ...deps.config, cookieName: COOKIE_NAME } };
+  const background = new BackgroundTasks(deps.logger);
+  const full: AppDeps = { ...deps, mailer, clock, background, config: { ...deps.config, cookieName: COOKIE_NAME } };
   const { db, config, logger } = full;
   const app = express();
   const store = new DrizzleSessionStore(db);
@@ -65,7 +78,8 @@ export function createApp(
   const devRoutes = Boolean(full.mailSink) && !config.production;
 
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // Forwarded headers (client address, protocol) only from the proxy TRUST_PROXY names.
+  app.set('trust proxy', config.trustProxy);
   app.use(
     helmet({
       // Plain-http installations on a local network must keep working; HTTPS ones set COOKIE_SECURE.
@@ -85,13 +99,14 @@ export function createApp(
       logger,
       autoLogging: { ignore: (req) => req.url === '/api/health' },
       serializers: {
-        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: loggableUrl(req.url) }),
         res: (res: { statusCode: number }) => ({ status: res.statusCode }),
       },
       customProps: (req) => ({ userId: (req as { user?: { id: number } }).user?.id }),
     }),
   );
-  app.use('/api', express.json({ limit: '2mb' }));
+  // Before any body is read: a write from another site or port is refused here.
+  app.use('/api', sameOriginWrites(config));
   app.use(
     '/api',
     session({
@@ -105,19 +120,37 @@ export function createApp(
         httpOnly: true,
         sameSite: 'lax',
         secure: config.cookieSecure,
-        maxAge: SESSION_DAYS * 24 * 3600 * 1000,
+        maxAge: config.sessionIdleMs,
         path: '/',
       },
     }),
   );
   app.use('/api', withClock(clock));
+  app.use('/api', sessionLifetime(config));
   app.use('/api', loadUser(db));
+  // JSON bodies are read once the caller is known; multipart ones by the routes that take
+  // them, after their ability check (http/uploads.ts).
+  const jsonSignedIn = express.json({ limit: JSON_LIMIT_SIGNED_IN });
+  const jsonAnonymous = express.json({ limit: JSON_LIMIT_ANONYMOUS });
+  app.use('/api', (req, res, next) => (req.actor ? jsonSignedIn : jsonAnonymous)(req, res, next));
+  app.use('/api', (req, _res, next) => {
+    if (req.body !== undefined && nestedDeeperThan(req.body)) {
+      return next(new AppError('invalid', 'request/too_deep', `The request body nests arrays or objects more than ${MAX_JSON_DEPTH} levels deep`, {
+        issues: [{ path: 'body', message: `nested more than ${MAX_JSON_DEPTH} levels deep` }],
+      }));
+    }
+    next();
+  });
 
   app.get('/api/health', async (_req, res) => {
     await db.execute('select 1');
     res.json({ status: 'ok' });
   });
   app.get('/api/openapi.json', serveOpenApi({ dev: devRoutes, cookieName: COOKIE_NAME }));
+  // Public: what the sign-in page needs before anyone has signed in.
+  app.get('/api/config', async (_req, res) => {
+    res.json({ demo: await demoAnnouncement(db, config) });
+  });
   app.use('/api/auth', authRouter(full));
   app.use('/api', requireUser);
   app.use('/api/users', usersRouter(full));
@@ -146,7 +179,7 @@ export function createApp(
   }
 
   app.use(errorHandler);
-  return { app, store };
+  return { app, store, background };
 }
 
 /** CSP source of a tile URL template: its origin, with a `{s}` subdomain as a wildcard. */

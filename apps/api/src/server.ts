@@ -1,27 +1,36 @@
-/** Starts Swardwise: opens the database, applies migrations, seeds the demo city once, serves. */
+/**
+ * Starts Swardwise: opens the database, applies migrations, seeds the demo city in demo
+ * mode (`--demo`, DEMO=true) or makes sure a new installation has its first administrator,
+ * serves. A start that cannot go on safely says why and exits with status 1.
+ */
 import { pino } from 'pino';
 import { createApp } from './app.ts';
 import { loadConfig } from './config.ts';
 import { openDatabase } from './db/client.ts';
-import { seedDemoCity } from './db/seed/index.ts';
 import { createMailer, type SmtpSettings } from './mail/mailer.ts';
 import { startMailSink, type MailSink } from './mail/sink.ts';
 import { DepartmentClock } from './services/clock.ts';
+import { prepareInstallation, StartupError } from './services/first-run.ts';
 import { sessionSecretFor } from './services/settings.ts';
 
 async function main() {
-  const config = loadConfig();
+  const config = loadConfig(process.env, process.argv.slice(2));
   const logger = pino({ level: config.logLevel });
   const started = Date.now();
   const database = await openDatabase({ databaseUrl: config.databaseUrl, pgliteDir: config.pgliteDir });
   logger.info({ kind: database.kind, dir: database.kind === 'pglite' ? config.pgliteDir : undefined, ms: Date.now() - started }, 'database ready');
   // A stored time zone this runtime does not know stops the start here, with the reason.
   const clock = new DepartmentClock(database.db, config.departmentTimeZone);
-  await clock.ready();
-  logger.info({ timeZone: clock.timeZone, today: clock.today() }, 'department clock');
-  if (config.seedDemo) {
-    const seeded = await seedDemoCity(database.db, clock.today());
-    if (seeded) logger.info(seeded, 'demo city seeded (invented data)');
+  try {
+    await clock.ready();
+    logger.info({ timeZone: clock.timeZone, today: clock.today() }, 'department clock');
+    await prepareInstallation(database.db, config, logger, undefined, clock.today());
+  } catch (err) {
+    await database.close();
+    throw err;
+  }
+  if (config.production && !config.demo && !config.publicUrlSet) {
+    logger.warn({ publicUrl: config.publicUrl }, 'PUBLIC_URL is not set: links in e-mails point at this default, and writes are accepted from the address each browser used');
   }
   const sessionSecret = await sessionSecretFor(database.db, config.sessionSecret);
 
@@ -34,9 +43,9 @@ async function main() {
     logger.info({ port: mailSink.port }, 'development mail sink listening; messages at /api/dev/mail');
   }
   const mailer = createMailer(smtp, logger);
-  const { app, store } = createApp({ db: database.db, config, logger, sessionSecret, mailer, mailSink, clock });
+  const { app, store, background } = createApp({ db: database.db, config, logger, sessionSecret, mailer, mailSink, clock });
   const server = app.listen(config.port, config.host, () => {
-    logger.info({ url: `http://localhost:${config.port}`, production: config.production }, 'Swardwise is listening');
+    logger.info({ url: `http://localhost:${config.port}`, production: config.production, demo: config.demo }, config.demo ? 'Swardwise is listening (demo mode)' : 'Swardwise is listening');
   });
   const prune = setInterval(() => void store.prune().catch((err) => logger.warn({ err }, 'session prune failed')), 3600_000);
   prune.unref();
@@ -44,7 +53,10 @@ async function main() {
   const stop = (signal: string) => {
     logger.info({ signal }, 'shutting down');
     server.close(() => {
-      void Promise.allSettled([database.close(), mailSink?.close()]).finally(() => process.exit(0));
+      void background
+        .idle()
+        .then(() => Promise.allSettled([database.close(), mailSink?.close()]))
+        .finally(() => process.exit(0));
     });
     setTimeout(() => process.exit(0), 5000).unref();
   };
@@ -53,6 +65,7 @@ async function main() {
 }
 
 main().catch((err) => {
-  console.error(err);
+  // A refused start is a message for whoever deploys, not a stack trace.
+  console.error(err instanceof StartupError ? `Swardwise cannot start: ${err.message}` : err);
   process.exit(1);
 });

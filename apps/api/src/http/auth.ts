@@ -23,7 +23,8 @@ export function loadUser(db: Db): RequestHandler {
     try {
       const user = await sessionUser(db, userId);
       if (!user) {
-        req.session.destroy(() => next());
+        // A fresh, empty session rather than none, so this request may still sign in.
+        req.session.regenerate((err) => next(err));
         return;
       }
       req.user = user;

@@ -40,8 +40,20 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     error = new AppError(status === 415 ? 'unsupported' : 'invalid', 'request/invalid', (err as Error).message);
   } else {
     req.log?.error({ err }, 'unhandled error');
+    closeIfUnread(req, res);
     res.status(500).json({ error: { code: 'server/internal', message: 'Something went wrong on the server; nothing was saved' } });
     return;
   }
+  closeIfUnread(req, res);
   res.status(error.status).json(error.toBody());
 };
+
+/**
+ * A request refused before its body was read (403 ahead of an upload, 413 on the declared
+ * size) has the connection closed after the answer, instead of Node reading and discarding
+ * the rest of the body to keep the connection alive for another request.
+ */
+function closeIfUnread(req: Parameters<ErrorRequestHandler>[1], res: Parameters<ErrorRequestHandler>[2]): void {
+  const hasBody = Number(req.get('content-length') ?? 0) > 0 || req.get('transfer-encoding') !== undefined;
+  if (hasBody && !req.complete) res.setHeader('Connection', 'close');
+}

@@ -1,13 +1,12 @@
 /** Games, tournaments and other bookings of the fields. */
 import { Router } from 'express';
 import { z } from 'zod';
-import { addDaysIso, createFieldEventSchema, idParamSchema, idSchema, updateFieldEventSchema, versionSchema } from '@swardwise/domain';
+import { addDaysIso, createFieldEventSchema, idParamSchema, idSchema, isoDateSchema as isoDate, updateFieldEventSchema, versionSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { createFieldEvent, deleteFieldEvent, listFieldEvents, updateFieldEvent } from '../services/field-events.ts';
 
-const isoDate = z.iso.date('use a date as YYYY-MM-DD');
 /** Without dates: the coming three months, what a season's bookings list needs at a glance. */
 const DEFAULT_DAYS = 92;
 const MAX_DAYS = 400;

@@ -1,7 +1,7 @@
 import { Router, type Request } from 'express';
 import { eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { addDaysIso, createWorkOrderSchema, idParamSchema, idSchema, updateWorkOrderSchema, versionSchema } from '@swardwise/domain';
+import { addDaysIso, createWorkOrderSchema, idParamSchema, idSchema, isoDateSchema, updateWorkOrderSchema, versionSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app.ts';
 import { users } from '../db/schema/index.ts';
 import { ctxOf } from '../http/auth.ts';
@@ -11,8 +11,8 @@ import { createWorkOrder, deleteWorkOrder, listWorkOrders, updateWorkOrder, type
 /** Without dates: the department's today and the six days after it. */
 export const querySchema = (today: string) => z
   .object({
-    from: z.iso.date('use a date as YYYY-MM-DD').optional(),
-    to: z.iso.date('use a date as YYYY-MM-DD').optional(),
+    from: isoDateSchema.optional(),
+    to: isoDateSchema.optional(),
     crewId: idSchema.optional(),
     districtId: idSchema.optional(),
   })

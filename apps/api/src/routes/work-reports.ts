@@ -1,29 +1,16 @@
 /** One work order as a crew works it: read it, report on it, add and show its photos. */
-import { Router, type RequestHandler } from 'express';
-import multer from 'multer';
+import { Router } from 'express';
 import { z } from 'zod';
 import { AppError, idParamSchema, idSchema, workReportSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app.ts';
 import { ctxOf } from '../http/auth.ts';
+import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
 import { addWorkPhoto, PHOTO_MAX_BYTES, photoFile } from '../services/work-photos.ts';
 import { getWorkOrder, orderFor, reportWork } from '../services/work-reports.ts';
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: PHOTO_MAX_BYTES, files: 1, fields: 5 } }).single('photo');
-
-/** Multer's errors carry a code, not a status; give each a clear message and its 4xx. */
-const receivePhoto: RequestHandler = (req, res, next) => {
-  upload(req, res, (err: unknown) => {
-    if (!err) return next();
-    if (err instanceof multer.MulterError) {
-      if (err.code === 'LIMIT_FILE_SIZE') {
-        return next(new AppError('too_large', 'work_photo/too_large', `The photo is larger than ${PHOTO_MAX_BYTES / 1024 / 1024} MB; choose a smaller one`));
-      }
-      return next(new AppError('invalid', 'work_photo/bad_upload', `Send one photo in the form field “photo” (${err.message})`));
-    }
-    next(new AppError('invalid', 'work_photo/bad_upload', 'The upload could not be read; send the photo as multipart/form-data in the field “photo”'));
-  });
-};
+// The photo and the phone's reference for it.
+const receivePhoto = receiveUpload({ field: 'photo', maxFileBytes: PHOTO_MAX_BYTES, maxFields: 1, code: 'work_photo', what: 'The photo' });
 
 export const photoParamsSchema = z.object({ id: idSchema, photoId: idSchema });
 export const photoBodySchema = z.object({

@@ -5,9 +5,12 @@ import { auditLog, users } from '../db/schema/index.ts';
 import type { Queryable } from '../db/client.ts';
 import { authorize, type Ctx } from './context.ts';
 
+/** Changes to rows, and the account events (sign-in, failed sign-in, sign-out, reset request). */
+export type AuditAction = 'create' | 'update' | 'delete' | 'sign_in' | 'sign_in_failed' | 'sign_out' | 'reset_requested';
+
 export interface AuditInput {
   actorId: number | null;
-  action: 'create' | 'update' | 'delete';
+  action: AuditAction;
   entity: string;
   entityId: number | null;
   districtId: number | null;
@@ -21,6 +24,8 @@ function redact(row: object | null): Record<string, unknown> | null {
   const copy: Record<string, unknown> = JSON.parse(JSON.stringify(row));
   delete copy.passwordHash;
   delete copy.tokenHash;
+  delete copy.password;
+  delete copy.token;
   return copy;
 }
 

@@ -6,6 +6,7 @@
 import path from 'node:path';
 import Papa from 'papaparse';
 import { AppError, IMPORT_COLUMNS, IMPORT_KIND_LABELS, IMPORT_MAX_ROWS, type ImportKind } from '@swardwise/domain';
+import { MAX_JSON_DEPTH, nestedDeeperThan } from '../http/json-depth.ts';
 
 export interface UploadedFile {
   originalname: string;
@@ -82,6 +83,11 @@ function readGeoJson(file: UploadedFile): RawRow[] {
     doc = JSON.parse(text);
   } catch {
     throw unsupported(`${file.originalname} is not valid JSON; outlines are imported from a GeoJSON FeatureCollection`);
+  }
+  if (nestedDeeperThan(doc)) {
+    throw new AppError('invalid', 'import/too_deep', `${file.originalname} nests arrays or objects more than ${MAX_JSON_DEPTH} levels deep; a GeoJSON outline needs about 6`, {
+      issues: [{ path: 'body.file', message: `nested more than ${MAX_JSON_DEPTH} levels deep` }],
+    });
   }
   const collection = doc as { type?: unknown; features?: unknown };
   if (!collection || typeof collection !== 'object' || collection.type !== 'FeatureCollection' || !Array.isArray(collection.features)) {

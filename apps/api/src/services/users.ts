@@ -131,7 +131,7 @@ async function replaceSites(db: Queryable, userId: number, siteIds: number[]) {
 
 const hashToken = (token: string) => crypto.createHash('sha256').update(token).digest('hex');
 
-function newToken() {
+export function newToken() {
   const token = crypto.randomBytes(32).toString('base64url');
   return { token, tokenHash: hashToken(token) };
 }
@@ -197,12 +197,19 @@ const RESET_MINUTES = 60;
 /**
  * Starts a password reset for an active account with a password. Returns the link to
  * send, or null when there is no such account (the caller answers the same either way).
+ * Only the newest link works: issuing one retires the account's earlier unused ones.
  */
 export async function requestPasswordReset(db: Queryable, email: string, publicUrl: string): Promise<{ user: SessionUser; url: string } | null> {
   const [row] = await db.select({ id: users.id, hash: users.passwordHash, active: users.active }).from(users).where(eq(users.email, email));
   if (!row || !row.active || !row.hash) return null;
   const { token, tokenHash } = newToken();
-  await db.insert(userTokens).values({ userId: row.id, purpose: 'reset', tokenHash, expiresAt: new Date(Date.now() + RESET_MINUTES * 60_000) });
+  await (db as Db).transaction(async (tx) => {
+    await tx
+      .update(userTokens)
+      .set({ usedAt: new Date() })
+      .where(and(eq(userTokens.userId, row.id), eq(userTokens.purpose, 'reset'), isNull(userTokens.usedAt)));
+    await tx.insert(userTokens).values({ userId: row.id, purpose: 'reset', tokenHash, expiresAt: new Date(Date.now() + RESET_MINUTES * 60_000) });
+  });
   const user = await sessionUser(db, row.id);
   return user ? { user, url: `${publicUrl}/reset-password?token=${token}` } : null;
 }

@@ -13,3 +13,4 @@ export * from './work-orders.ts';
 export * from './week-plans.ts';
 export * from './records.ts';
 export * from './dev.ts';
+export * from './config.ts';

@@ -6,9 +6,12 @@ export const signInSchema = z.object({
 });
 export type SignInInput = z.infer<typeof signInSchema>;
 
+/** Shortest password accepted when one is set (invitation, reset, first administrator). */
+export const PASSWORD_MIN_LENGTH = 12;
+
 export const passwordSchema = z
   .string()
-  .min(10, 'use at least 10 characters')
+  .min(PASSWORD_MIN_LENGTH, `use at least ${PASSWORD_MIN_LENGTH} characters`)
   .max(200, 'use at most 200 characters');
 
 export const acceptInviteSchema = z.object({

@@ -1,11 +1,22 @@
 import { z } from 'zod';
 
+/** Largest value of PostgreSQL's `integer`, the type of every id and version column. */
+export const PG_INTEGER_MAX = 2_147_483_647;
+
 /** A positive integer id in a route parameter or body. */
-export const idSchema = z.coerce.number({ error: 'must be a number' }).int('must be a whole number').positive('must be a positive id');
+export const idSchema = z.coerce
+  .number({ error: 'must be a number' })
+  .int('must be a whole number')
+  .positive('must be a positive id')
+  .max(PG_INTEGER_MAX, `must be an id of at most ${PG_INTEGER_MAX}`);
 export const idParamSchema = z.object({ id: idSchema });
 
 /** The optimistic-concurrency version every editable row carries. */
-export const versionSchema = z.number({ error: 'version is required (the row version you last read)' }).int().min(1);
+export const versionSchema = z
+  .number({ error: 'version is required (the row version you last read)' })
+  .int('version must be a whole number')
+  .min(1, 'version must be at least 1')
+  .max(PG_INTEGER_MAX, `version must be at most ${PG_INTEGER_MAX}`);
 
 const position = z
   .tuple([z.number().min(-180).max(180), z.number().min(-90).max(90)], {
@@ -49,3 +60,23 @@ export const listQuerySchema = z.object({
   siteId: idSchema.optional(),
   q: z.string().trim().max(100).optional(),
 });
+
+/** Calendar dates the product accepts: wide enough for any record, narrow enough for every date type. */
+export const DATE_RANGE = { first: '1900-01-01', last: '2200-12-31' } as const;
+
+/** An ISO calendar date, YYYY-MM-DD, that exists (no 31 April) and lies in `DATE_RANGE`; one message per bad value. */
+export const isoDateSchema = z.string({ error: 'use a date as YYYY-MM-DD' }).superRefine((s, ctx) => {
+  const message = (() => {
+    if (!/^\d{4}-\d{2}-\d{2}$/.test(s)) return 'use a date as YYYY-MM-DD';
+    const d = new Date(`${s}T00:00:00Z`);
+    if (Number.isNaN(d.getTime()) || d.toISOString().slice(0, 10) !== s) return 'not a calendar date';
+    if (s < DATE_RANGE.first || s > DATE_RANGE.last) return `use a date between ${DATE_RANGE.first} and ${DATE_RANGE.last}`;
+    return null;
+  })();
+  if (message) ctx.addIssue({ code: 'custom', message });
+});
+
+/** An ISO 8601 date and time with its offset, in the years of `DATE_RANGE`. */
+export const isoDateTimeSchema = z.iso
+  .datetime({ offset: true, error: 'use a date and time (ISO 8601)' })
+  .refine((s) => s.slice(0, 10) >= DATE_RANGE.first && s.slice(0, 10) <= DATE_RANGE.last, `use a date between ${DATE_RANGE.first} and ${DATE_RANGE.last}`);

@@ -1,7 +1,7 @@
 /** Edits to one maintenance level of the Standards, and the query of a field's needs. */
 import { z } from 'zod';
 import { GRASSES, SPORTS } from '../vocabulary.ts';
-import { versionSchema } from './common.ts';
+import { isoDateSchema, versionSchema } from './common.ts';
 
 /** A height of cut in mm as the Standards accept it. */
 export const standardHocMmSchema = z
@@ -39,12 +39,4 @@ export const levelParamSchema = z.object({
   level: z.coerce.number({ error: 'level must be 1, 2, 3 or 4' }).int('level must be 1, 2, 3 or 4').min(1, 'level must be 1, 2, 3 or 4').max(4, 'level must be 1, 2, 3 or 4'),
 });
 
-const isoDate = z
-  .string()
-  .regex(/^\d{4}-\d{2}-\d{2}$/, 'date must be YYYY-MM-DD')
-  .refine((s) => {
-    const d = new Date(`${s}T00:00:00Z`);
-    return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
-  }, 'date is not a calendar date');
-
-export const needsQuerySchema = z.object({ date: isoDate.optional() });
+export const needsQuerySchema = z.object({ date: isoDateSchema.optional() });

@@ -1,6 +1,5 @@
 import { z } from 'zod';
-
-const isoDate = z.iso.date('use a date as YYYY-MM-DD');
+import { isoDateSchema as isoDate } from './common.ts';
 
 /** One day of weather from a station file or the hosted service. SI units. */
 export const weatherDaySchema = z

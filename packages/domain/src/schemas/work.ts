@@ -1,9 +1,7 @@
 /** Bodies and queries of the week plan, work orders, crew reports and field events. */
 import { z } from 'zod';
 import { FIELD_EVENT_KINDS, WORK_REPORTS, WORK_TASKS } from '../vocabulary.ts';
-import { idSchema, versionSchema } from './common.ts';
-
-const isoDate = z.iso.date('use a date as YYYY-MM-DD');
+import { idSchema, isoDateSchema as isoDate, isoDateTimeSchema, versionSchema } from './common.ts';
 const hours = z.number({ error: 'hours must be a number' }).min(0, 'hours cannot be negative').max(24, 'more than 24 hours in a day is not possible');
 const plannedHours = z.number({ error: 'planned hours must be a number' }).positive('planned hours must be more than 0').max(24, 'more than 24 hours in a day is not possible');
 
@@ -52,7 +50,7 @@ export const workReportSchema = z
     actualHours: hours.nullable().default(null),
     note: z.string().trim().max(2000, 'keep the note under 2,000 characters').default(''),
     clientRef: z.string().trim().min(8).max(64).regex(/^[A-Za-z0-9_-]+$/, 'a client reference uses letters, digits, - and _').optional(),
-    reportedAt: z.iso.datetime({ offset: true, error: 'reportedAt is a date and time (ISO 8601)' }).optional(),
+    reportedAt: isoDateTimeSchema.optional(),
     version: versionSchema.optional(),
   })
   .superRefine((v, ctx) => {

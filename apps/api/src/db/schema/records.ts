@@ -9,7 +9,8 @@ export const auditLog = pgTable(
     id: bigint('id', { mode: 'number' }).primaryKey().generatedAlwaysAsIdentity(),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
     actorId: integer('actor_id').references(() => users.id),
-    action: text('action').$type<'create' | 'update' | 'delete'>().notNull(),
+    /** create, update, delete; for accounts also sign_in, sign_in_failed, sign_out, reset_requested. */
+    action: text('action').$type<'create' | 'update' | 'delete' | 'sign_in' | 'sign_in_failed' | 'sign_out' | 'reset_requested'>().notNull(),
     entity: text('entity').notNull(),
     entityId: integer('entity_id'),
     /** District the row belongs to, so a foreman can read his district's history. */

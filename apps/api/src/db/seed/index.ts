@@ -12,7 +12,9 @@ import { buildDemoCity } from './demo-city.ts';
 import { demoFieldEvents } from './demo-events.ts';
 import { demoFieldHistory } from './demo-history.ts';
 
-const MARKER = 'demo_city';
+/** Settings key of the row that records the demo city was seeded. */
+export const DEMO_MARKER = 'demo_city';
+const MARKER = DEMO_MARKER;
 
 export interface SeedSummary {
   districts: number;
@@ -24,6 +26,12 @@ export interface SeedSummary {
   fieldChecks: number;
   workOrders: number;
   fieldEvents: number;
+}
+
+/** True when this database holds the invented demo city (and so its published sign-ins). */
+export async function hasDemoCity(db: Db): Promise<boolean> {
+  const [marker] = await db.select({ key: settings.key }).from(settings).where(eq(settings.key, DEMO_MARKER));
+  return Boolean(marker);
 }
 
 /**
