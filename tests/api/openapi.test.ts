@@ -145,6 +145,7 @@ describe('the operations', () => {
       .map(({ route }) => route)
       .sort();
     expect(open).toEqual([
+      'GET /api/config',
       'GET /api/health',
       'GET /api/openapi.json',
       'POST /api/auth/accept-invite',

@@ -114,6 +114,22 @@ const service: RouteDoc[] = [
   },
   {
     method: 'get',
+    path: '/api/config',
+    tag: 'Service',
+    summary: 'What the sign-in page needs before anyone signs in: in demo mode, the invented city and its published sign-ins',
+    access: publicAccess(),
+    answers: [
+      json(
+        200,
+        'The public configuration.',
+        shape({
+          demo: nullable(row('Null unless the server runs in demo mode: { city, note, signIns: [{ role, label, email, password }] } of the invented demo city')),
+        }),
+      ),
+    ],
+  },
+  {
+    method: 'get',
     path: '/api/openapi.json',
     tag: 'Service',
     summary: 'This OpenAPI document',

@@ -1,12 +1,12 @@
 /** Writes and reads the audit log of every change. */
 import { and, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
-import type { AuditEntry } from '@swardwise/domain';
+import type { AuditAction, AuditEntry } from '@swardwise/domain';
 import { auditLog, users } from '../db/schema/index.ts';
 import type { Queryable } from '../db/client.ts';
 import { authorize, type Ctx } from './context.ts';
 
 /** Changes to rows, and the account events (sign-in, failed sign-in, sign-out, reset request). */
-export type AuditAction = 'create' | 'update' | 'delete' | 'sign_in' | 'sign_in_failed' | 'sign_out' | 'reset_requested';
+export type { AuditAction } from '@swardwise/domain';
 
 export interface AuditInput {
   actorId: number | null;

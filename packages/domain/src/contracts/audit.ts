@@ -1,13 +1,16 @@
 /** The audit log of every change. */
 import type { Instant, Items } from './common.ts';
 
+/** Row changes, and account events (entity `account`). */
+export type AuditAction = 'create' | 'update' | 'delete' | 'sign_in' | 'sign_in_failed' | 'sign_out' | 'reset_requested';
+
 /** A row of `GET /api/audit`: who changed what, with the row before and after. */
 export interface AuditEntry<At extends Instant = string> {
   id: number;
   at: At;
   actorId: number | null;
   actorName: string | null;
-  action: 'create' | 'update' | 'delete';
+  action: AuditAction;
   entity: string;
   entityId: number | null;
   districtId: number | null;
