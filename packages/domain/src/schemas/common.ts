@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isoToDayNumber } from '../engine/dates.ts';
 
 /** Largest value of PostgreSQL's `integer`, the type of every id and version column. */
 export const PG_INTEGER_MAX = 2_147_483_647;
@@ -61,6 +62,16 @@ export const listQuerySchema = z.object({
   q: z.string().trim().max(100).optional(),
 });
 
+/** True for a YYYY-MM-DD that names a day of the proleptic Gregorian calendar (no 31 April). */
+function isCalendarDate(s: string): boolean {
+  try {
+    isoToDayNumber(s);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
 /** Calendar dates the product accepts: wide enough for any record, narrow enough for every date type. */
 export const DATE_RANGE = { first: '1900-01-01', last: '2200-12-31' } as const;
 
@@ -68,8 +79,7 @@ export const DATE_RANGE = { first: '1900-01-01', last: '2200-12-31' } as const;
 export const isoDateSchema = z.string({ error: 'use a date as YYYY-MM-DD' }).superRefine((s, ctx) => {
   const message = (() => {
     if (!/^\d{4}-\d{2}-\d{2}$/.test(s)) return 'use a date as YYYY-MM-DD';
-    const d = new Date(`${s}T00:00:00Z`);
-    if (Number.isNaN(d.getTime()) || d.toISOString().slice(0, 10) !== s) return 'not a calendar date';
+    if (!isCalendarDate(s)) return 'not a calendar date';
     if (s < DATE_RANGE.first || s > DATE_RANGE.last) return `use a date between ${DATE_RANGE.first} and ${DATE_RANGE.last}`;
     return null;
   })();
