@@ -17,6 +17,17 @@ describe('one-third rule (common practice)', () => {
   });
 });
 
+describe('mowing frequency: one-third rule (common practice) and the Standards minimum per week (department setting)', () => {
+  // Twelve weeks of steady growth (mean 20 °C, rain each day) from a Monday.
+  const days = Array.from({ length: 84 }, (_, i) => ({ date: e.addDaysIso('2026-04-06', i), tmaxC: 24, tminC: 16, rainMm: 4 }));
+  const weather = e.prepareWeather(days, { latDeg: 38, elevationM: 20 });
+
+  test.each(LEVELS)('should plan at least the level %d minimum per week in the season outlook', (level) => {
+    const o = e.fieldOutlook({ id: 1, areaM2: 7000, sport: 'soccer', grass: 'kentucky_bluegrass', maintenanceLevel: level, clippings: 'returned', irrigation: 'automatic' }, weather);
+    expect(o.mowingsPerWeek).toBeGreaterThanOrEqual(e.DEFAULT_STANDARDS[level].minMowingsPerWeek);
+  });
+});
+
 describe('heights of cut (common practice)', () => {
   test('should cut elite soccer at about 1 in', () => {
     expect(e.mmToIn(e.hocFor({ sport: 'soccer', grass: 'perennial_ryegrass', maintenanceLevel: 1 }))).toBeCloseTo(1, 1);

@@ -27,6 +27,7 @@ import {
   monthlyNSplitByGp,
   mowTriggerHeightMm,
   mowerTypeFor,
+  mowingPolicy,
   netIrrigationMm,
   overdueDate,
   planNApplications,
@@ -167,7 +168,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
   // Growth and mowing (one-third rule).
   const gpWeek = inWeek(daily.gp);
   const growthWeek = inWeek(daily.growthMm);
-  const mowOptions = { maxIntervalDays: std.maxMowingIntervalDays, minMowingsPerWeek: std.minMowingsPerWeek, frequencyMinGrowthMm: 0.1 * hocMm };
+  const mowOptions = mowingPolicy(hocMm, std);
   const seasonSim = simulateMowing(hocMm, daily.growthMm, hocMm, { startDate: prepared.startDate, ...mowOptions });
   const weekMowings = seasonSim.mowings.filter((m) => m.dayIndex >= w0 && m.dayIndex <= w1);
   const asOf = requested >= weekStart && requested <= weekEnd ? requested : weekEnd;
@@ -189,9 +190,11 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
   } else {
     const growthAfter = daily.growthMm.slice(lastIdx + 1);
     const from = prepared.dates[lastIdx + 1]!;
-    const sim = simulateMowing(hocMm, growthAfter, hocMm, { startDate: from, ...mowOptions });
+    // Cut to HOC that morning, then the day's growth: the week plan's convention.
+    const heightAfterCutDay = hocMm + daily.growthMm[lastIdx]!;
+    const sim = simulateMowing(hocMm, growthAfter, heightAfterCutDay, { startDate: from, ...mowOptions });
     nextMowingOn = sim.mowings[0]?.date ?? null;
-    overdueOn = overdueDate(hocMm, hocMm, growthAfter, from);
+    overdueOn = overdueDate(hocMm, heightAfterCutDay, growthAfter, from);
     lastCutNote = `Simulated from the last mowing on ${field.lastMowedOn} (cut to HOC).`;
     if (!nextMowingOn) nextMowingNote = `No further mowing falls due before ${prepared.dates[prepared.dates.length - 1]}, the last day of weather on file.`;
   }

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { checkCut, checkMowerForHoc, mowTriggerHeightMm, mowerTypeFor, overdueDate, simulateMowing } from './mowing.ts';
+import { checkCut, checkMowerForHoc, levelIntervalDays, mowTriggerHeightMm, mowerTypeFor, mowingPolicy, overdueDate, simulateMowing } from './mowing.ts';
 
 describe('mowing', () => {
   test('should trigger at 1.5 × HOC and flag cuts removing more than a third', () => {
@@ -33,6 +33,14 @@ describe('mowing', () => {
     expect(sim.frequencyMowings).toBeGreaterThan(0);
     expect(sim.growthMowings).toBe(0);
     for (const i of sim.intervalsDays) expect(i).toBeLessThanOrEqual(3);
+  });
+
+  test('should take the shorter of the level interval and ⌊7 ÷ least mowings per week⌋ as the policy', () => {
+    expect(levelIntervalDays({ maxMowingIntervalDays: 3, minMowingsPerWeek: 3 })).toBe(2);
+    expect(levelIntervalDays({ maxMowingIntervalDays: 4, minMowingsPerWeek: 2 })).toBe(3);
+    expect(levelIntervalDays({ maxMowingIntervalDays: 14, minMowingsPerWeek: 0.5 })).toBe(14);
+    expect(levelIntervalDays({ maxMowingIntervalDays: 10, minMowingsPerWeek: 0 })).toBe(10);
+    expect(mowingPolicy(40, { maxMowingIntervalDays: 4, minMowingsPerWeek: 2 })).toEqual({ maxIntervalDays: 4, minMowingsPerWeek: 2, frequencyMinGrowthMm: 4 });
   });
 
   test('should skip frequency cuts on dormant turf when a minimum growth is set', () => {

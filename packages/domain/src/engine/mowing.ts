@@ -182,14 +182,43 @@ export function overdueDate(hocMm: number, currentHeightMm: number, growthMmPerD
 
 const WEEK: readonly Weekday[] = ['sun', 'mon', 'tue', 'wed', 'thu', 'fri', 'sat'];
 
+/** What a level's Standards say about mowing frequency. */
+export interface LevelMowingRule {
+  /** Least mowings per week in the growing season. */
+  minMowingsPerWeek: number;
+  /** Longest allowed interval between mowings, days. */
+  maxMowingIntervalDays: number;
+}
+
+/** The mowing policy every plan and outlook runs `simulateMowing` with. */
+export interface MowingPolicy {
+  maxIntervalDays: number;
+  minMowingsPerWeek: number;
+  frequencyMinGrowthMm: number;
+}
+
+/**
+ * The one mowing policy of the engine, used alike by the season outlook, the week plan and
+ * the field page: the one-third rule (cut before 1.5 × HOC), the level's longest interval
+ * and its least mowings per week (the shorter of the interval and ⌊7 ÷ minimum⌋ days), and
+ * frequency cuts only once the grass has grown a tenth of HOC (department rule, so the
+ * frequency does not send mowers onto dormant turf).
+ */
+export function mowingPolicy(hocMm: number, rule: LevelMowingRule): MowingPolicy {
+  requirePositive(hocMm, 'invalid_hoc', 'HOC (mm)');
+  return { maxIntervalDays: rule.maxMowingIntervalDays, minMowingsPerWeek: rule.minMowingsPerWeek, frequencyMinGrowthMm: 0.1 * hocMm };
+}
+
+/** Longest interval (days) a level allows between cuts: its own maximum or ⌊7 ÷ least mowings per week⌋, whichever is shorter. */
+export function levelIntervalDays(rule: LevelMowingRule): number {
+  const fromFreq = rule.minMowingsPerWeek > 0 ? Math.max(1, Math.floor(7 / rule.minMowingsPerWeek)) : Infinity;
+  return Math.min(rule.maxMowingIntervalDays, fromFreq);
+}
+
 function maxIntervalFrom(o: MowingOptions): number | null {
-  let max: number | null = null;
-  if (o.maxIntervalDays !== undefined) max = requirePositive(o.maxIntervalDays, 'invalid_interval', 'maximum mowing interval (days)');
-  if (o.minMowingsPerWeek !== undefined && o.minMowingsPerWeek > 0) {
-    const fromFreq = Math.max(1, Math.floor(7 / o.minMowingsPerWeek));
-    max = max === null ? fromFreq : Math.min(max, fromFreq);
-  }
-  return max;
+  const max = o.maxIntervalDays === undefined ? Infinity : requirePositive(o.maxIntervalDays, 'invalid_interval', 'maximum mowing interval (days)');
+  const both = levelIntervalDays({ maxMowingIntervalDays: max, minMowingsPerWeek: o.minMowingsPerWeek ?? 0 });
+  return Number.isFinite(both) ? both : null;
 }
 
 /** Reel below 25 mm (1 in) HOC, rotary from 25 mm up (common practice). */

@@ -13,7 +13,9 @@ import { growthPotential, waterModifier } from './growth.ts';
 import { hoursPerMowing } from './labour.ts';
 import { defaultTemplateFor, linePlan } from './lines.ts';
 import type { LineTemplate } from './lines.ts';
-import { mowerTypeFor, simulateMowing } from './mowing.ts';
+import { mowerTypeFor, mowingPolicy, simulateMowing } from './mowing.ts';
+import type { MowingSimulation } from './mowing.ts';
+import type { Weekday } from './dates.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, grassSeason, hocFor, levelStandard } from './standards.ts';
 import type { DepartmentParameters, Standards } from './standards.ts';
 import { cropEvapotranspiration, effectiveRainMm, grossIrrigationMm, netIrrigationMm, turfKc } from './water.ts';
@@ -225,29 +227,56 @@ export function fieldDailySeries(field: OutlookField, weather: PreparedWeather, 
   return { season, kc, share, gmaxMmPerDay: gmax, du, gp, growthMm: growth, etcMm: etcDaily, grossNeedMm: grossDaily, weeklyGrossMm };
 }
 
+/** Options of a season outlook. */
+export interface OutlookOptions {
+  /** Weekdays the crews mow (default every day); the week plan uses the district crews' working days. */
+  mowingDays?: readonly Weekday[];
+}
+
+/**
+ * The season's mowings of a field: `simulateMowing` over the field's predicted growth from
+ * the first day of weather (cut to HOC the day before), with the engine's one mowing policy
+ * (`mowingPolicy`: one-third rule, the level's longest interval and least mowings per week),
+ * the same run the week plan makes week by week.
+ */
+export function fieldMowingSimulation(
+  field: OutlookField,
+  weather: PreparedWeather,
+  standards: Standards = DEFAULT_STANDARDS,
+  params: DepartmentParameters = DEFAULT_PARAMETERS,
+  options: OutlookOptions = {},
+  daily: FieldDailySeries = fieldDailySeries(field, weather, standards, params),
+): MowingSimulation {
+  const hocMm = hocFor(field, standards);
+  const policy = mowingPolicy(hocMm, levelStandard(field.maintenanceLevel, standards));
+  return simulateMowing(hocMm, daily.growthMm, hocMm, { startDate: weather.startDate, ...policy, ...(options.mowingDays ? { mowingDays: options.mowingDays } : {}) });
+}
+
 /**
  * Season projection for one field over a prepared weather series.
  * Growth: Gmax × GP × water modifier, where the water modifier is (effective rain +
  * irrigation) ÷ ETc over the last 14 days (department model; irrigation replaces the level's
- * share of ETc). Mowing: `simulateMowing` with the level's max interval, frequency cuts only
- * after a tenth of HOC of growth. N: annual N pro rata to the series' days (÷ 365). Water:
- * weekly net need ÷ DU. Paint: the level's repaint interval over the series.
+ * share of ETc). Mowing: `fieldMowingSimulation` (the engine's one mowing policy). N: annual
+ * N pro rata to the series' days (÷ 365). Water: weekly net need ÷ DU. Paint: the level's
+ * repaint interval over the series.
  */
-export function fieldOutlook(field: OutlookField, weather: PreparedWeather, standards: Standards = DEFAULT_STANDARDS, params: DepartmentParameters = DEFAULT_PARAMETERS): FieldOutlook {
+export function fieldOutlook(
+  field: OutlookField,
+  weather: PreparedWeather,
+  standards: Standards = DEFAULT_STANDARDS,
+  params: DepartmentParameters = DEFAULT_PARAMETERS,
+  options: OutlookOptions = {},
+): FieldOutlook {
   requireNonNegative(field.areaM2, 'invalid_area', 'field area (m²)');
   const std = levelStandard(field.maintenanceLevel, standards);
   const hocMm = hocFor(field, standards);
   const n = weather.dates.length;
   const daily = fieldDailySeries(field, weather, standards, params);
-  const { share, growthMm: growth } = daily;
+  const { share } = daily;
   const grossTotal = daily.weeklyGrossMm.reduce((s, v) => s + v, 0);
   const etcTotal = daily.etcMm.reduce((s, v) => s + v, 0);
 
-  const sim = simulateMowing(hocMm, growth, hocMm, {
-    startDate: weather.startDate,
-    maxIntervalDays: std.maxMowingIntervalDays,
-    frequencyMinGrowthMm: 0.1 * hocMm,
-  });
+  const sim = fieldMowingSimulation(field, weather, standards, params, options, daily);
   const mowerKind = mowerTypeFor(hocMm);
   const mowingHours = sim.mowings.length * hoursPerMowing(field.areaM2, params.mowers[mowerKind]);
 

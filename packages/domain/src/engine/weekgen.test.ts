@@ -1,12 +1,14 @@
 import { describe, expect, test } from 'vitest';
 import { addDaysIso } from './dates.ts';
-import { prepareWeather, fieldDailySeries } from './outlook.ts';
+import { prepareWeather, fieldDailySeries, fieldMowingSimulation } from './outlook.ts';
 import type { DailyWeather } from './outlook.ts';
 import { simulateMowing } from './mowing.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor } from './standards.ts';
 import { assignWeek, crewDayLoads, isKept, planFieldWeek, reconcileWeek, weekDates } from './weekgen.ts';
 import type { ExistingOrder, PlanField } from './weekgen.ts';
 import type { Polygon } from '../schemas/common.ts';
+import type { Level } from '../vocabulary.ts';
+import { WEEKDAYS } from './dates.ts';
 
 const WEEK = '2026-06-01'; // a Monday
 const days = (start: string, n: number, t: { tmax: number; tmin: number; rain?: number }): DailyWeather[] =>
@@ -44,6 +46,30 @@ const field = (over: Partial<PlanField> = {}): PlanField => ({
 const allDays = ['mon', 'tue', 'wed', 'thu', 'fri'] as const;
 const mowDates = (p: ReturnType<typeof planFieldWeek>) => p.orders.filter((o) => o.task === 'mow').map((o) => o.askedDate);
 
+describe('one mowing policy: season outlook and week plan', () => {
+  // Twelve weeks of steady growth from a Monday: mean 20 °C (GP 1 for cool-season grass), rain every day.
+  const steady = prepareWeather(days('2026-04-06', 84, { tmax: 24, tmin: 16, rain: 4 }), { latDeg: 38, elevationM: 20 });
+  const mondays = Array.from({ length: 10 }, (_, k) => addDaysIso('2026-04-13', 7 * k));
+
+  test.each([1, 2, 3, 4] as Level[])('should mow in the outlook what the week plan writes at level %d, never below the level minimum', (level) => {
+    const std = DEFAULT_STANDARDS[level];
+    for (const workDays of [WEEKDAYS, allDays]) {
+      const f = field({ maintenanceLevel: level, lastMowedOn: null, lastPaintedOn: null, lastCheckedOn: null });
+      const outlook = fieldMowingSimulation({ ...f }, steady, DEFAULT_STANDARDS, DEFAULT_PARAMETERS, { mowingDays: workDays });
+      const outlookDates = outlook.mowings.map((m) => m.date);
+      for (const monday of mondays) {
+        const sunday = addDaysIso(monday, 6);
+        const plan = planFieldWeek({ field: f, weather: steady, weekStart: monday, kept: [], workDays });
+        const inWeek = outlookDates.filter((d) => d >= monday && d <= sunday);
+        expect(mowDates(plan)).toEqual(inWeek);
+        // The Standards' least mowings per week (level 4: one in any two weeks).
+        if (std.minMowingsPerWeek >= 1) expect(inWeek.length).toBeGreaterThanOrEqual(std.minMowingsPerWeek);
+        else expect(outlookDates.filter((d) => d >= addDaysIso(monday, -7) && d <= sunday).length).toBeGreaterThanOrEqual(1);
+      }
+    }
+  });
+});
+
 describe('planFieldWeek', () => {
   test('should ask more mowings in a warm week than in a cool one', () => {
     const warm = planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
@@ -63,7 +89,8 @@ describe('planFieldWeek', () => {
     // The plan looks a week past Sunday; past the last day of weather it repeats the last week's mean growth.
     const tail = daily.growthMm.slice(-7).reduce((a, b) => a + b, 0) / 7;
     const growth = [...daily.growthMm.slice(from), ...new Array<number>(7).fill(tail)];
-    const sim = simulateMowing(hoc, growth, hoc, {
+    // Cut to HOC on the morning of 31 May; that day's growth follows the cut.
+    const sim = simulateMowing(hoc, growth, hoc + daily.growthMm[from - 1]!, {
       startDate: '2026-06-01',
       maxIntervalDays: std.maxMowingIntervalDays,
       minMowingsPerWeek: std.minMowingsPerWeek,

@@ -26,7 +26,7 @@ import { hoursPerMowing, hoursPerMowingPolygon, stripePassPlan } from './labour.
 import type { LatLng, TravelSettings } from './labour.ts';
 import { defaultTemplateFor, linePlan } from './lines.ts';
 import { longAxis } from '../geometry.ts';
-import { mowTriggerHeightMm, mowerTypeFor, simulateMowing } from './mowing.ts';
+import { levelIntervalDays, mowTriggerHeightMm, mowerTypeFor, mowingPolicy, simulateMowing } from './mowing.ts';
 import { fieldDailySeries } from './outlook.ts';
 import type { PreparedWeather } from './outlook.ts';
 import { planRoute } from './routing.ts';
@@ -213,7 +213,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
     const trigger = mowTriggerHeightMm(hocMm);
     const { spec, mower } = chooseMower(hocMm, input.mowers ?? [], params);
     const { hours, method } = mowingHours(field, spec);
-    const mowOptions = { maxIntervalDays: std.maxMowingIntervalDays, minMowingsPerWeek: std.minMowingsPerWeek, frequencyMinGrowthMm: 0.1 * hocMm, mowingDays: input.workDays.length ? input.workDays : WEEKDAYS };
+    const mowOptions = { ...mowingPolicy(hocMm, std), mowingDays: input.workDays.length ? input.workDays : WEEKDAYS };
     const keptCuts = new Set(keptOf('mow').map((k) => k.plannedDate));
     const asked: Array<{ date: string; heightMm: number; reason: 'growth' | 'frequency' | 'overdue'; overdueSince?: string }> = [];
     // A last cut on or after Monday belongs to a later week than the one planned (planning
@@ -224,15 +224,19 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
     if (cutIdx < 0 && idx(weekStart) > 0) {
       // No cut on record since the weather began: assume the field was mowed as the rule
       // asked until this week (a season run from the first day of weather), not overdue.
-      const season = simulateMowing(hocMm, growth.slice(0, idx(weekStart)), hocMm, { ...mowOptions, startDate: first as string });
-      const lastAssumed = season.mowings[season.mowings.length - 1];
+      // The run goes on past the week's start, as the season outlook's does, so a cut late in
+      // the week before sees the weekend's growth exactly as the outlook's run saw it.
+      const season = simulateMowing(hocMm, growth.slice(0, idx(horizon) + 1), hocMm, { ...mowOptions, startDate: first as string });
+      const lastAssumed = season.mowings.filter((m) => m.dayIndex < idx(weekStart)).pop();
       cutIdx = lastAssumed ? lastAssumed.dayIndex : -1;
       notes.push(field.lastMowedOn && !lastCut ? `The last mowing on record (${field.lastMowedOn}) is after this week began: the plan assumes the one-third rule was kept up to the week.` : 'No mowing on record: the plan assumes the field was mowed as the one-third rule asked before this week.');
     }
     for (let guard = 0; guard < 20; guard++) {
       const from = Math.max(0, cutIdx + 1);
       if (from > idx(weekEnd)) break;
-      const sim = simulateMowing(hocMm, growth.slice(from, idx(horizon) + 1), hocMm, { ...mowOptions, startDate: addDaysIso(first as string, from), daysSinceCutAtStart: from - cutIdx - 1 });
+      // A cut on day c leaves the grass at HOC that morning; day c's growth follows the cut.
+      const startHeight = cutIdx >= 0 && cutIdx < growth.length ? hocMm + (growth[cutIdx] as number) : hocMm;
+      const sim = simulateMowing(hocMm, growth.slice(from, idx(horizon) + 1), startHeight, { ...mowOptions, startDate: addDaysIso(first as string, from), daysSinceCutAtStart: from - cutIdx - 1 });
       const next = sim.mowings[0];
       const nextKept = [...keptCuts].filter((d) => idx(d) >= from).sort()[0];
       if (nextKept && (!next || nextKept <= next.date)) {
@@ -255,7 +259,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
           ? `Overdue: the one-third rule asked for a cut on ${a.overdueSince} and none is on record`
           : a.reason === 'growth'
             ? `One-third rule: the grass would pass ${round(trigger, 0)} mm (1.5 × HOC ${round(hocMm, 0)} mm) before the next mowing day`
-            : `Level ${level} (${LEVEL_NAMES[level]}) asks a cut at least every ${Math.min(std.maxMowingIntervalDays, Math.floor(7 / std.minMowingsPerWeek))} days`;
+            : `Level ${level} (${LEVEL_NAMES[level]}) asks a cut at least every ${levelIntervalDays(std)} days`;
       orders.push({
         fieldId: field.id,
         siteId: field.siteId,
