@@ -287,13 +287,13 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
     inputs: [
       input('station', 'Weather station', `${station.name} (${r(station.distanceKm, 1)} km)`),
       input('elevation', 'Station elevation', station.elevationM, 'm'),
-      input('kc', `Kc (${season}-season turf${std.reducedKc ? ', reduced by 0.10' : ''})`, daily.kc),
+      input('kc', `Kc (department's ${season}-season turf Kc${std.reducedKc ? `, less ${params.turfKc.reducedBy}` : ''})`, daily.kc),
       input('share', 'Standards: share of ETc replaced', std.irrigationShareOfEtc, '%'),
       input('du', 'Distribution uniformity (DU)', daily.du, '%'),
       input('precipRate', 'Precipitation rate', params.irrigation.precipRateMmPerH, 'mm/h'),
       input('area', 'Field area', field.areaM2, 'm2'),
     ],
-    how: 'ET0 by FAO-56 Penman–Monteith from the station\u2019s daily temperature, humidity, wind and sunshine (Hargreaves on days with temperatures only). ETc = Kc × ET0 (FAO-56 Table 12 turf). Effective rain: the first 0.1 in of each day is lost, the rest counts (TexasET rule). Net need = share × ETc − effective rain; gross need = net ÷ DU; run time = gross ÷ precipitation rate; volume = gross × area.',
+    how: 'ET0 by FAO-56 Penman–Monteith from the station\u2019s daily temperature, humidity, wind and sunshine (Hargreaves on days with temperatures only). ETc = Kc × ET0, with the department\u2019s turf Kc (annual planning values for mowed turf, by default 0.8 cool-season and 0.6 warm-season: University of California ANR turfgrass water guidance). Effective rain: the first 0.1 in of each day is lost, the rest counts (TexasET rule). Net need = share × ETc − effective rain; gross need = net × SM, the scheduling multiplier SM = 1 ÷ (0.4 + 0.6 × DU) of the lower-quarter DU; run time = gross ÷ precipitation rate; volume = gross × area.',
     cautions: [CAUTIONS.water],
   };
 

@@ -6,7 +6,7 @@
  */
 import type { Clippings, Grass, IrrigationKind, Level, Sport } from '../vocabulary.ts';
 import { fail, requireNonNegative, requireRange, requireTmaxTmin } from './check.ts';
-import { dayOfYear, isoToDayNumber } from './dates.ts';
+import { WEEKDAYS, dayOfYear, isoToDayNumber, weekdayOf } from './dates.ts';
 import { et0Hargreaves, et0PenmanMonteith } from './fao56.ts';
 import { annualNitrogen, productForArea } from './feed.ts';
 import { growthPotential, waterModifier } from './growth.ts';
@@ -18,7 +18,7 @@ import type { MowingSimulation } from './mowing.ts';
 import type { Weekday } from './dates.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, grassSeason, hocFor, levelStandard } from './standards.ts';
 import type { DepartmentParameters, Standards } from './standards.ts';
-import { cropEvapotranspiration, effectiveRainMm, grossIrrigationMm, netIrrigationMm, turfKc } from './water.ts';
+import { departmentTurfKc, effectiveRainMm, netIrrigationMm, schedulingMultiplier, wateringDayMinutes, weekIrrigation } from './water.ts';
 
 /** One day of weather. Optional fields feed FAO-56 Penman–Monteith; without them, Hargreaves. */
 export interface DailyWeather {
@@ -161,70 +161,102 @@ export const WATER_STRESS_WINDOW_DAYS = 14;
 /** The day-by-day part of a field's outlook: growth, ETc and irrigation need. */
 export interface FieldDailySeries {
   season: 'cool' | 'warm';
+  /** The department's turf Kc used (`departmentTurfKc`). */
   kc: number;
   /** Share of ETc irrigation replaces (0 when the field or its level is not irrigated). */
   share: number;
   /** Maximum growth rate used, mm/day at GP = 1. */
   gmaxMmPerDay: number;
+  /** Lower-quarter distribution uniformity. */
   du: number;
   gp: Float64Array;
   /** Predicted vertical growth, mm/day (Gmax × GP × 14-day water modifier). */
   growthMm: number[];
   etcMm: Float64Array;
-  /** Gross irrigation need of each day, mm: max(0, share × ETc − effective rain) ÷ DU (0 when not irrigated). */
+  /** Gross irrigation need of each day, mm: max(0, share × ETc − effective rain) × SM (0 when not irrigated). */
   grossNeedMm: Float64Array;
-  /** Gross need per block of 7 days from the start of the series (the last block may be shorter), mm. */
+  /** Gross depth the week plan schedules on each day, mm (on the department's watering days). */
+  irrigationMm: Float64Array;
+  /**
+   * Gross depth scheduled per week, mm: weeks run Monday to Sunday as in the week plan; the
+   * first and last may be partial and count only days of the series.
+   */
   weeklyGrossMm: number[];
 }
 
 /**
- * Daily growth and water for a field over a prepared weather series, as `fieldOutlook` uses
- * them: Kc from FAO-56 Table 12 (reduced by 0.10 where the level says), ETc = Kc × ET0, growth
- * = Gmax × GP × water modifier over the last 14 days of (effective rain + irrigation) ÷ ETc
- * (department model), weekly gross need = net need (share × ΣETc − Σ effective rain) ÷ DU.
+ * Daily growth and water for a field over a prepared weather series, as `fieldOutlook` and
+ * the week plan use them. Kc: the department's turf Kc (`departmentTurfKc`), ETc = Kc × ET0.
+ * Irrigation: each Monday-to-Sunday week's need (`weekIrrigation`: share × ΣETc − Σ effective
+ * rain, × SM) is scheduled on the department's watering days as the week plan schedules it
+ * (`wateringDayMinutes`, cycle and soak cap). Growth = Gmax × GP × water modifier, where the
+ * modifier is (effective rain + scheduled irrigation ÷ SM, the depth counted toward the
+ * need) ÷ ETc over the last 14 days (department model).
  */
 export function fieldDailySeries(field: OutlookField, weather: PreparedWeather, standards: Standards = DEFAULT_STANDARDS, params: DepartmentParameters = DEFAULT_PARAMETERS): FieldDailySeries {
   const season = grassSeason(field.grass);
   const std = levelStandard(field.maintenanceLevel, standards);
   const n = weather.dates.length;
-  const kc = turfKc(season, { reduced: std.reducedKc });
+  const kc = departmentTurfKc(season, std.reducedKc, params.turfKc ?? DEFAULT_PARAMETERS.turfKc);
   const share = field.irrigation !== 'none' && std.irrigationShareOfEtc !== null ? std.irrigationShareOfEtc : 0;
   const gmax = requireNonNegative(field.maxGrowthMmPerDay ?? params.maxGrowthMmPerDay[field.grass], 'invalid_growth_rate', 'maximum growth rate (mm/day)');
   const gp = season === 'cool' ? weather.gpCool : weather.gpWarm;
   const du = field.distributionUniformity ?? params.irrigation.distributionUniformity;
+  const sm = schedulingMultiplier(du);
 
   const growth = new Array<number>(n);
   const etcDaily = new Float64Array(n);
   const grossDaily = new Float64Array(n);
+  const irrigation = new Float64Array(n);
   const weeklyGrossMm: number[] = [];
-  for (let i = 0; i < n; i++) etcDaily[i] = cropEvapotranspiration(kc, weather.et0Mm[i] as number);
-  let etcWindow = 0;
-  let rainWindow = 0;
-  let weekEtc = 0;
-  let weekRain = 0;
-  for (let i = 0; i < n; i++) {
-    const etc = etcDaily[i] as number;
-    const eff = weather.effectiveRainMm[i] as number;
-    etcWindow += etc;
-    rainWindow += eff;
-    if (i >= WATER_STRESS_WINDOW_DAYS) {
-      etcWindow -= etcDaily[i - WATER_STRESS_WINDOW_DAYS] as number;
-      rainWindow -= weather.effectiveRainMm[i - WATER_STRESS_WINDOW_DAYS] as number;
-    }
-    const supply = Math.max(0, rainWindow) + share * Math.max(0, etcWindow);
-    growth[i] = gmax * (gp[i] as number) * waterModifier(supply, Math.max(0, etcWindow));
-    if (share > 0) {
-      grossDaily[i] = grossIrrigationMm(netIrrigationMm(etc, eff, share), du);
-      weekEtc += etc;
-      weekRain += eff;
-    }
-    if ((i + 1) % 7 === 0 || i === n - 1) {
-      weeklyGrossMm.push(share > 0 ? grossIrrigationMm(netIrrigationMm(weekEtc, weekRain, share), du) : 0);
-      weekEtc = 0;
-      weekRain = 0;
+  const eff = weather.effectiveRainMm;
+  for (let i = 0; i < n; i++) etcDaily[i] = kc * Math.max(0, weather.et0Mm[i] as number);
+
+  if (share > 0) {
+    const irr = { ...DEFAULT_PARAMETERS.irrigation, ...params.irrigation };
+    const planning = params.planning ?? DEFAULT_PARAMETERS.planning;
+    // Positions (0 = Monday) of the watering days in a Monday-to-Sunday week.
+    const wateringPos = [...new Set(planning.wateringDays)].map((d) => (WEEKDAYS.indexOf(d) + 6) % 7).sort((a, b) => a - b);
+    // Index of the Monday on or before the first day (negative when the series starts mid-week).
+    let monday = -((WEEKDAYS.indexOf(weekdayOf(weather.startDate)) + 6) % 7);
+    for (; monday < n; monday += 7) {
+      const a = Math.max(0, monday);
+      const b = Math.min(n, monday + 7);
+      let etc = 0;
+      let rain = 0;
+      for (let i = a; i < b; i++) {
+        etc += etcDaily[i] as number;
+        rain += eff[i] as number;
+        grossDaily[i] = netIrrigationMm(etcDaily[i] as number, eff[i] as number, share) * sm;
+      }
+      const week = weekIrrigation(etc, rain, share, du, planning.minIrrigationMm);
+      let applied = 0;
+      if (week.scheduled) {
+        const depth = (wateringDayMinutes(week.grossMm, wateringPos.length, irr.precipRateMmPerH, irr.maxRunMinPerCycle, irr.maxCyclesPerDay) / 60) * irr.precipRateMmPerH;
+        for (const p of wateringPos) {
+          const i = monday + p;
+          if (i < 0 || i >= n) continue;
+          irrigation[i] = depth;
+          applied += depth;
+        }
+      }
+      weeklyGrossMm.push(applied);
     }
   }
-  return { season, kc, share, gmaxMmPerDay: gmax, du, gp, growthMm: growth, etcMm: etcDaily, grossNeedMm: grossDaily, weeklyGrossMm };
+
+  let etcWindow = 0;
+  let supplyWindow = 0;
+  for (let i = 0; i < n; i++) {
+    etcWindow += etcDaily[i] as number;
+    supplyWindow += (eff[i] as number) + (irrigation[i] as number) / sm;
+    if (i >= WATER_STRESS_WINDOW_DAYS) {
+      const k = i - WATER_STRESS_WINDOW_DAYS;
+      etcWindow -= etcDaily[k] as number;
+      supplyWindow -= (eff[k] as number) + (irrigation[k] as number) / sm;
+    }
+    growth[i] = gmax * (gp[i] as number) * waterModifier(Math.max(0, supplyWindow), Math.max(0, etcWindow));
+  }
+  return { season, kc, share, gmaxMmPerDay: gmax, du, gp, growthMm: growth, etcMm: etcDaily, grossNeedMm: grossDaily, irrigationMm: irrigation, weeklyGrossMm };
 }
 
 /** Options of a season outlook. */
@@ -254,11 +286,11 @@ export function fieldMowingSimulation(
 
 /**
  * Season projection for one field over a prepared weather series.
- * Growth: Gmax × GP × water modifier, where the water modifier is (effective rain +
- * irrigation) ÷ ETc over the last 14 days (department model; irrigation replaces the level's
- * share of ETc). Mowing: `fieldMowingSimulation` (the engine's one mowing policy). N: annual
- * N pro rata to the series' days (÷ 365). Water: weekly net need ÷ DU. Paint: the level's
- * repaint interval over the series.
+ * Growth: Gmax × GP × water modifier, where the modifier is (effective rain + scheduled
+ * irrigation) ÷ ETc over the last 14 days (department model). Mowing:
+ * `fieldMowingSimulation` (the engine's one mowing policy). N: annual N pro rata to the
+ * series' days (÷ 365). Water: the gross depth the week plan schedules (each week's net need
+ * × SM on the watering days). Paint: the level's repaint interval over the series.
  */
 export function fieldOutlook(
   field: OutlookField,

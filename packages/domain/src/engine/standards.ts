@@ -10,6 +10,7 @@ import type { Grass, GrassSeason, Level, Sport } from '../vocabulary.ts';
 import { fail, requirePositive } from './check.ts';
 import type { Weekday } from './dates.ts';
 import { G_PER_M2_PER_LB_PER_1000FT2 } from './units.ts';
+import type { TurfKcSettings } from './water.ts';
 
 /** What one maintenance level asks for. */
 export interface LevelStandard {
@@ -27,7 +28,7 @@ export interface LevelStandard {
   annualNShare: number;
   /** Share of ETc that irrigation replaces; null: not irrigated at this level. */
   irrigationShareOfEtc: number | null;
-  /** Use the FAO-56 Table 12 Kc reduced by 0.10 (careful water management, fast growth not wanted). */
+  /** Use the department's turf Kc less its reduction (`turfKc.reducedBy`; FAO-56 Table 12 note: 0.10 where fast growth is not wanted). */
   reducedKc: boolean;
   /** Days between line repaints in season; null: no lines kept. */
   lineRepaintDays: number | null;
@@ -147,8 +148,19 @@ export interface DepartmentParameters {
    * acceptance range for this tester was found: a department setting.
    */
   hardnessSafeRangeG: { min: number; max: number };
-  /** Irrigation system defaults (department settings). */
-  irrigation: { distributionUniformity: number; precipRateMmPerH: number; maxRunMinPerCycle: number };
+  /**
+   * Turf crop coefficients of the water budget: annual planning values for turf under
+   * mowing, cool-season about 0.8 and warm-season about 0.6 (University of California ANR
+   * turfgrass water guidance; Meyer et al. 1985). FAO-56 Table 12 (0.90–0.95 cool, 0.80–0.85
+   * warm) describes a full grass cover and is kept only as a reference. `reducedBy` is taken
+   * off where a level asks for a reduced Kc (FAO-56 Table 12 note: 0.10).
+   */
+  turfKc: TurfKcSettings;
+  /**
+   * Irrigation system defaults (department settings). DU is the lower-quarter distribution
+   * uniformity of a catch-can audit; gross need = net × SM, SM = 1 ÷ (0.4 + 0.6 × DU).
+   */
+  irrigation: { distributionUniformity: number; precipRateMmPerH: number; maxRunMinPerCycle: number; maxCyclesPerDay: number };
   /** Line marking (trade press: about 200 linear ft of 4 in line per mixed gallon; 2 passes common practice). */
   lines: { coverageM2PerMixedL: number; dilutionWaterPerPaint: number; passes: number; markerSpeedKmh: number; setupMin: number };
   /**
@@ -209,7 +221,10 @@ export const DEFAULT_PARAMETERS: DepartmentParameters = {
   travel: { roadFactor: 1.3, speedKmh: 35, loadUnloadMin: 15 },
   costs: { currency: 'USD', waterPerM3: 1.2, labourPerHour: 32, paintPerLitre: 4.5, fertiliserPerKg: 1.6 },
   hardnessSafeRangeG: { min: 20, max: 100 },
-  irrigation: { distributionUniformity: 0.7, precipRateMmPerH: 12, maxRunMinPerCycle: 20 },
+  // University of California ANR turfgrass water guidance (Meyer et al. 1985): about 0.8
+  // cool-season, 0.6 warm-season; FAO-56 Table 12 note for the reduction.
+  turfKc: { cool: 0.8, warm: 0.6, reducedBy: 0.1 },
+  irrigation: { distributionUniformity: 0.7, precipRateMmPerH: 12, maxRunMinPerCycle: 20, maxCyclesPerDay: 4 },
   lines: {
     // 200 ft × 4 in = 66.7 ft² per US gallon of mixed paint → 1.64 m² per litre.
     coverageM2PerMixedL: (200 * 0.3048 * 0.1016) / 3.785411784,

@@ -70,6 +70,37 @@ describe('one mowing policy: season outlook and week plan', () => {
   });
 });
 
+describe('one water budget: season outlook and week plan', () => {
+  // Six dry, warm weeks from a Monday (only temperatures: Hargreaves ET0).
+  const dry = prepareWeather(days('2026-06-01', 42, { tmax: 30, tmin: 18, rain: 0 }), { latDeg: 38, elevationM: 20 });
+
+  test('should water in the outlook the depth the week plan schedules, week by week', () => {
+    const f = field({ maintenanceLevel: 2, irrigation: 'quick_coupler' });
+    const d = fieldDailySeries({ ...f }, dry, DEFAULT_STANDARDS, DEFAULT_PARAMETERS);
+    expect(d.weeklyGrossMm).toHaveLength(6);
+    d.weeklyGrossMm.forEach((mm, k) => {
+      const plan = planFieldWeek({ field: f, weather: dry, weekStart: addDaysIso('2026-06-01', 7 * k), kept: [], workDays: allDays });
+      const runs = plan.orders.filter((o) => o.task === 'irrigate');
+      expect(runs).toHaveLength(3); // Monday, Wednesday, Friday
+      expect(runs[0]!.details.volumeL).toBeCloseTo(mm * f.areaM2, -1);
+    });
+  });
+
+  test('should grow the turf on the water actually scheduled, not on a share of ETc', () => {
+    const f = { ...field({ maintenanceLevel: 1, irrigation: 'automatic' }) };
+    const full = fieldDailySeries(f, dry, DEFAULT_STANDARDS, DEFAULT_PARAMETERS);
+    // A watering restriction: one day a week, one 20-minute cycle (4 mm at 12 mm/h).
+    const restricted = { ...DEFAULT_PARAMETERS, planning: { ...DEFAULT_PARAMETERS.planning, wateringDays: ['mon' as const] }, irrigation: { ...DEFAULT_PARAMETERS.irrigation, maxCyclesPerDay: 1 } };
+    const short = fieldDailySeries(f, dry, DEFAULT_STANDARDS, restricted);
+    expect(short.weeklyGrossMm[2]).toBeCloseTo(4, 9);
+    const lastWeek = (xs: number[]) => xs.slice(-7).reduce((a, b) => a + b, 0);
+    expect(lastWeek(short.growthMm)).toBeLessThan(0.5 * lastWeek(full.growthMm));
+    // Full replacement of ETc keeps the water modifier near 1 once the 14-day window is filled
+    // (the window holds two weeks' watering days give or take one).
+    expect(full.growthMm[30]! / (full.gmaxMmPerDay * full.gp[30]!)).toBeGreaterThan(0.95);
+  });
+});
+
 describe('planFieldWeek', () => {
   test('should ask more mowings in a warm week than in a cool one', () => {
     const warm = planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });

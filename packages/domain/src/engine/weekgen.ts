@@ -7,8 +7,8 @@
  * - Lines: painted before each booking (department lead time), and every repaint interval of
  *   the level while the turf grows.
  * - Feed: the feed plan's applications (annual N split by monthly growth potential).
- * - Water: the week's gross need (share × ETc − effective rain) ÷ DU as run times on the
- *   allowed watering days.
+ * - Water: the week's gross need ((share × ETc − effective rain) × SM, `weekIrrigation`) as run
+ *   times on the allowed watering days.
  * - Field checks: every `fieldCheckDays` of the level.
  *
  * Orders that people kept (assigned, moved, logged or added by hand) count as done work:
@@ -32,7 +32,7 @@ import type { PreparedWeather } from './outlook.ts';
 import { planRoute } from './routing.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor, levelStandard } from './standards.ts';
 import type { DepartmentParameters, MowerSpec, Standards } from './standards.ts';
-import { grossIrrigationMm, irrigationVolumeLitres, netIrrigationMm, weeklyIrrigationSchedule } from './water.ts';
+import { irrigationVolumeLitres, weekIrrigation, weeklyIrrigationSchedule } from './water.ts';
 
 /** A field as the week plan needs it. */
 export interface PlanField {
@@ -365,10 +365,12 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
       etc += daily.etcMm[i] as number;
       eff += weather.effectiveRainMm[i] as number;
     }
-    const gross = grossIrrigationMm(netIrrigationMm(etc, eff, daily.share), daily.du);
+    const week = weekIrrigation(etc, eff, daily.share, daily.du, planning.minIrrigationMm);
+    const gross = week.grossMm;
     const keptDays = new Set(keptOf('irrigate').map((k) => k.plannedDate));
-    if (gross >= planning.minIrrigationMm) {
-      const schedule = weeklyIrrigationSchedule({ grossMmPerWeek: gross, precipRateMmPerH: params.irrigation.precipRateMmPerH, allowedDays: planning.wateringDays, maxRunMinPerCycle: params.irrigation.maxRunMinPerCycle });
+    if (week.scheduled) {
+      const irr = { ...DEFAULT_PARAMETERS.irrigation, ...params.irrigation };
+      const schedule = weeklyIrrigationSchedule({ grossMmPerWeek: gross, precipRateMmPerH: irr.precipRateMmPerH, allowedDays: planning.wateringDays, maxRunMinPerCycle: irr.maxRunMinPerCycle, maxCyclesPerDay: irr.maxCyclesPerDay });
       const runs = schedule.days.map((d) => ({ day: d.day, date: dates[WEEK_FROM_MONDAY.indexOf(d.day)] as string, cycles: d.cycles, minutesPerCycle: round(d.minutesPerCycle, 0), totalMinutes: round(d.totalMinutes, 0) }));
       const base = { grossMm: round(gross, 1), volumeL: round(irrigationVolumeLitres(schedule.appliedMm, field.areaM2), 0), shortfallMm: round(schedule.shortfallMm, 1) };
       if (field.irrigation === 'automatic') {
