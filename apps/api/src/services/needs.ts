@@ -208,7 +208,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
       input('season', 'Grass season', season),
       input('gmax', 'Maximum growth at GP 1', daily.gmaxMmPerDay, 'mm/day'),
     ],
-    how: 'Growth potential GP = exp(−½((T − To)/σ)²) from the daily mean temperature (Gelernter & Stowell 2005; To 20 °C cool-season, 31 °C warm-season). Daily growth = the grass\u2019s maximum growth × GP × a water modifier (rain and irrigation against ETc over the last 14 days).',
+    how: 'Growth potential GP = exp(−½((T − To)/σ)²) from the daily mean temperature (Gelernter & Stowell 2005; To 20 °C cool-season, 31 °C warm-season; warm-season GP stays at 1 from 31 °C up, as in the authors\u2019 later revision). Daily growth = the grass\u2019s maximum growth × GP × a water modifier (rain and the irrigation the water budget schedules, against ETc over the last 14 days).',
     cautions: [] as string[],
   };
   const mowing = {
