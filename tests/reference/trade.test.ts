@@ -29,19 +29,33 @@ describe('mowing frequency: one-third rule (common practice) and the Standards m
 });
 
 describe('heights of cut (common practice)', () => {
-  test('should cut elite soccer at about 1 in', () => {
-    expect(e.mmToIn(e.hocFor({ sport: 'soccer', grass: 'perennial_ryegrass', maintenanceLevel: 1 }))).toBeCloseTo(1, 1);
+  test('should cut elite soccer at 1 in', () => {
+    expect(e.mmToIn(e.hocFor({ sport: 'soccer', grass: 'perennial_ryegrass', maintenanceLevel: 1 }))).toBeCloseTo(1, 12);
+  });
+
+  test('should keep level 1 baseball outfields a little above soccer (common practice)', () => {
+    for (const grass of ['kentucky_bluegrass', 'bermudagrass'] as const) {
+      expect(e.hocFor({ sport: 'baseball', grass, maintenanceLevel: 1 })).toBeGreaterThan(e.hocFor({ sport: 'soccer', grass, maintenanceLevel: 1 }));
+    }
+  });
+
+  test('should store every default height as a whole number of eighths of an inch (US departments set mowers in inches)', () => {
+    for (const level of LEVELS) {
+      const std = e.DEFAULT_STANDARDS[level];
+      const heights = [...Object.values(std.hocMm).flatMap((h) => [h.cool, h.warm]), ...Object.values(std.hocByGrassMm)];
+      for (const mm of heights) expect(Math.abs(e.mmToIn(mm) * 8 - Math.round(e.mmToIn(mm) * 8))).toBeLessThan(1e-9);
+    }
   });
 
   test('should keep cool-season sports fields within 1–3 in and bermudagrass within 0.5–1.5 in', () => {
     for (const level of LEVELS) {
       for (const sport of ['soccer', 'football', 'lacrosse', 'baseball', 'softball'] as const) {
         const cool = e.mmToIn(e.hocFor({ sport, grass: 'kentucky_bluegrass', maintenanceLevel: level }));
-        expect(cool).toBeGreaterThanOrEqual(1 - 0.02);
-        expect(cool).toBeLessThanOrEqual(3 + 0.02);
+        expect(cool).toBeGreaterThanOrEqual(1 - 1e-9);
+        expect(cool).toBeLessThanOrEqual(3 + 1e-9);
         const bermuda = e.mmToIn(e.hocFor({ sport, grass: 'bermudagrass', maintenanceLevel: level }));
-        expect(bermuda).toBeGreaterThanOrEqual(0.5 - 0.02);
-        expect(bermuda).toBeLessThanOrEqual(1.5 + 0.02);
+        expect(bermuda).toBeGreaterThanOrEqual(0.5 - 1e-9);
+        expect(bermuda).toBeLessThanOrEqual(1.5 + 1e-9);
       }
     }
   });
@@ -52,10 +66,19 @@ describe('heights of cut (common practice)', () => {
 });
 
 describe('mower type (common practice)', () => {
-  test('should use reel mowers below about 1 in and rotary above', () => {
+  // 1 in used to go to a rotary (the limit was exclusive and in mm); common practice cuts 1 in
+  // and below with a reel, so the limit is inclusive and compared in inches (1 in = 25.4 mm).
+  test('should use reel mowers at 1 in and below and rotary above', () => {
     expect(e.mowerTypeFor(e.inToMm(0.75))).toBe('reel');
-    expect(e.mowerTypeFor(e.inToMm(1))).toBe('rotary');
+    expect(e.mowerTypeFor(e.inToMm(1))).toBe('reel');
+    expect(e.mowerTypeFor(25.4)).toBe('reel');
+    expect(e.mowerTypeFor(e.inToMm(1.125))).toBe('rotary');
     expect(e.mowerTypeFor(e.inToMm(2.5))).toBe('rotary');
+  });
+
+  test('should cut elite soccer (1 in) with a reel and a 2 in park field with a rotary', () => {
+    expect(e.mowerTypeFor(e.hocFor({ sport: 'soccer', grass: 'perennial_ryegrass', maintenanceLevel: 1 }))).toBe('reel');
+    expect(e.mowerTypeFor(e.hocFor({ sport: 'soccer', grass: 'tall_fescue', maintenanceLevel: 3 }))).toBe('rotary');
   });
 });
 

@@ -144,14 +144,14 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
   // HOC and mower.
   const hocMm = hocFor(outlookField, standards);
   const hocSource = field.hocOverrideMm !== null ? 'override' : std.hocByGrassMm[field.grass] !== undefined ? 'standards_grass' : 'standards_sport';
-  const mowerKind = mowerTypeFor(hocMm);
+  const mowerKind = mowerTypeFor(hocMm, params.mowerSettings);
   const mower = params.mowers[mowerKind];
   const hoc = {
     hocMm,
     source: hocSource,
     triggerHeightMm: mowTriggerHeightMm(hocMm),
     mowerKind,
-    mowerWarnings: checkMowerForHoc(mower, hocMm),
+    mowerWarnings: checkMowerForHoc(mower, hocMm, params.mowerSettings),
     inputs: [
       input('level', 'Maintenance level', `${level} ${std.name}`),
       input('sport', 'Sport', field.sport),
@@ -161,7 +161,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
       input('override', 'Field override', field.hocOverrideMm, 'mm'),
       input('mowerRange', 'Default mower setting range', `${mower.hocMinMm}–${mower.hocMaxMm} mm`),
     ],
-    how: 'The field override wins when set; else the Standards HOC for this grass at the level, else the Standards HOC for the sport and grass season. A reel mower is usual below 25 mm (1 in), a rotary from 25 mm up. The mower is the department default of that kind until equipment is recorded.',
+    how: `The field override wins when set; else the Standards HOC for this grass at the level, else the Standards HOC for the sport and grass season. A reel mower is usual up to ${params.mowerSettings.reelUpToHoc} ${params.mowerSettings.unit} inclusive (compared in the unit the department sets mowers in, to its step), a rotary above. The mower is the department default of that kind until equipment is recorded.`,
     cautions: [] as string[],
   };
 

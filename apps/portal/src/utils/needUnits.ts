@@ -5,7 +5,7 @@
 import {
   formatArea,
   formatDepth,
-  formatHoc,
+  formatHocText,
   formatLength,
   formatMass,
   formatNRate,
@@ -22,7 +22,7 @@ import type { NeedInput } from '../api/needs.ts';
 export const shown = (d: DisplayValue): string => `${d.value.toLocaleString('en-US')} ${d.unit}`;
 const num = (v: number, digits: number) => v.toLocaleString('en-US', { maximumFractionDigits: digits });
 
-export const hocText = (mm: number, u: UnitSystem) => shown(formatHoc(mm, u));
+export const hocText = (mm: number, u: UnitSystem) => formatHocText(mm, u);
 export const depthText = (mm: number, u: UnitSystem) => shown(formatDepth(mm, u));
 export const areaText = (m2: number, u: UnitSystem) => shown(formatArea(m2, u));
 export const lengthText = (m: number, u: UnitSystem) => shown(formatLength(m, u));

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { checkCut, checkMowerForHoc, levelIntervalDays, mowTriggerHeightMm, mowerTypeFor, mowingPolicy, overdueDate, simulateMowing } from './mowing.ts';
+import { checkCut, checkMowerForHoc, hocSetting, levelIntervalDays, mowTriggerHeightMm, mowerTypeFor, mowingPolicy, overdueDate, simulateMowing } from './mowing.ts';
 
 describe('mowing', () => {
   test('should trigger at 1.5 × HOC and flag cuts removing more than a third', () => {
@@ -63,10 +63,21 @@ describe('mowing', () => {
     expect(overdueDate(20, 20, [1, 1], '2025-06-01')).toBeNull();
   });
 
-  test('should choose reel below 25 mm and rotary from 25 mm', () => {
+  // Was "reel below 25 mm, rotary from 25 mm": 1 in (25.4 mm) went to a rotary, while common
+  // practice cuts 1 in and below with a reel. The limit is now inclusive and in the unit and
+  // step the department sets mowers in (an eighth of an inch by default).
+  test('should choose reel at 1 in and below and rotary above, in the department setting unit', () => {
     expect(mowerTypeFor(24.9)).toBe('reel');
-    expect(mowerTypeFor(25)).toBe('rotary');
+    expect(mowerTypeFor(25.4)).toBe('reel');
+    expect(mowerTypeFor(Math.fround(25.4))).toBe('reel'); // a single-precision database value
+    expect(mowerTypeFor(25)).toBe('reel'); // 0.98 in, set at 1 in
+    expect(mowerTypeFor(28.575)).toBe('rotary'); // 1⅛ in
     expect(mowerTypeFor(76)).toBe('rotary');
+    const metric = { unit: 'mm' as const, step: 1, reelUpToHoc: 25 };
+    expect(hocSetting(25.4, metric)).toBe(25);
+    expect(mowerTypeFor(25.4, metric)).toBe('reel');
+    expect(mowerTypeFor(26, metric)).toBe('rotary');
+    expect(hocSetting(34.925)).toBe(1.375);
   });
 
   test('should warn when a mower cannot hold the HOC or is the wrong kind', () => {

@@ -6,7 +6,9 @@
 import { dayNumberToIso, isoToDayNumber, weekdayOf } from './dates.ts';
 import type { Weekday } from './dates.ts';
 import { fail, requireNonNegative, requirePositive } from './check.ts';
-import type { MowerSpec } from './standards.ts';
+import { DEFAULT_PARAMETERS } from './standards.ts';
+import type { MowerSettings, MowerSpec } from './standards.ts';
+import { MM_PER_INCH } from './units.ts';
 
 /** Height (mm) the grass may reach before it must be mowed: 1.5 × HOC (one-third rule). */
 export function mowTriggerHeightMm(hocMm: number): number {
@@ -221,9 +223,29 @@ function maxIntervalFrom(o: MowingOptions): number | null {
   return Number.isFinite(both) ? both : null;
 }
 
-/** Reel below 25 mm (1 in) HOC, rotary from 25 mm up (common practice). */
-export function mowerTypeFor(hocMm: number): 'reel' | 'rotary' {
-  return requirePositive(hocMm, 'invalid_hoc', 'HOC (mm)') < 25 ? 'reel' : 'rotary';
+/**
+ * A HOC as the department sets its mowers: in its unit (in or mm), to the nearest step (an
+ * eighth of an inch by default). Working in the setting's own unit keeps 25.4 mm at exactly
+ * 1 in, and a stored 25.399999 mm (single-precision database value) at 1 in too.
+ */
+export function hocSetting(hocMm: number, settings: MowerSettings = DEFAULT_PARAMETERS.mowerSettings): number {
+  requirePositive(hocMm, 'invalid_hoc', 'HOC (mm)');
+  const step = requirePositive(settings.step, 'invalid_mower_settings', 'mower setting step');
+  const value = settings.unit === 'in' ? hocMm / MM_PER_INCH : hocMm;
+  return Math.round(value / step) * step;
+}
+
+/** A mower setting written in its unit, e.g. "1 in" or "25 mm". */
+function settingText(value: number, settings: MowerSettings): string {
+  return `${Math.round(value * 1000) / 1000} ${settings.unit}`;
+}
+
+/**
+ * Reel mower up to the department's reel limit, inclusive (common practice: reel at 1 in and
+ * below), rotary above; compared in the unit and step the department sets mowers in.
+ */
+export function mowerTypeFor(hocMm: number, settings: MowerSettings = DEFAULT_PARAMETERS.mowerSettings): 'reel' | 'rotary' {
+  return hocSetting(hocMm, settings) <= settings.reelUpToHoc + 1e-9 ? 'reel' : 'rotary';
 }
 
 export interface MowerWarning {
@@ -232,17 +254,18 @@ export interface MowerWarning {
 }
 
 /** Warnings when a mower cannot hold a HOC or is the wrong kind for it (common practice). */
-export function checkMowerForHoc(mower: Pick<MowerSpec, 'kind' | 'hocMinMm' | 'hocMaxMm'>, hocMm: number): MowerWarning[] {
+export function checkMowerForHoc(mower: Pick<MowerSpec, 'kind' | 'hocMinMm' | 'hocMaxMm'>, hocMm: number, settings: MowerSettings = DEFAULT_PARAMETERS.mowerSettings): MowerWarning[] {
   requirePositive(hocMm, 'invalid_hoc', 'HOC (mm)');
   if (mower.hocMinMm > mower.hocMaxMm) fail('invalid_mower', `mower HOC range is inverted (${mower.hocMinMm}–${mower.hocMaxMm} mm)`);
   const out: MowerWarning[] = [];
-  if (hocMm < mower.hocMinMm) out.push({ code: 'hoc_below_range', message: `HOC ${hocMm} mm is below this mower's lowest setting (${mower.hocMinMm} mm)` });
-  if (hocMm > mower.hocMaxMm) out.push({ code: 'hoc_above_range', message: `HOC ${hocMm} mm is above this mower's highest setting (${mower.hocMaxMm} mm)` });
-  const want = mowerTypeFor(hocMm);
+  if (hocMm < mower.hocMinMm - 1e-6) out.push({ code: 'hoc_below_range', message: `HOC ${hocMm} mm is below this mower's lowest setting (${mower.hocMinMm} mm)` });
+  if (hocMm > mower.hocMaxMm + 1e-6) out.push({ code: 'hoc_above_range', message: `HOC ${hocMm} mm is above this mower's highest setting (${mower.hocMaxMm} mm)` });
+  const want = mowerTypeFor(hocMm, settings);
   if (want !== mower.kind) {
+    const limit = settingText(settings.reelUpToHoc, settings);
     out.push({
       code: 'kind_mismatch',
-      message: want === 'reel' ? `a reel mower is usual below 25 mm (1 in); this is a ${mower.kind} mower` : `a rotary mower is usual from 25 mm (1 in) up; this is a ${mower.kind} mower`,
+      message: want === 'reel' ? `a reel mower is usual at ${limit} and below; this is a ${mower.kind} mower` : `a rotary mower is usual above ${limit}; this is a ${mower.kind} mower`,
     });
   }
   return out;

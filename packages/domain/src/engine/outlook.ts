@@ -309,7 +309,7 @@ export function fieldOutlook(
   const etcTotal = daily.etcMm.reduce((s, v) => s + v, 0);
 
   const sim = fieldMowingSimulation(field, weather, standards, params, options, daily);
-  const mowerKind = mowerTypeFor(hocMm);
+  const mowerKind = mowerTypeFor(hocMm, params.mowerSettings);
   const mowingHours = sim.mowings.length * hoursPerMowing(field.areaM2, params.mowers[mowerKind]);
 
   const nYear = annualNitrogen({ grass: field.grass, level: field.maintenanceLevel, clippings: field.clippings, irrigated: share > 0 }, standards);

@@ -1,9 +1,11 @@
 /**
  * The department's Standards (maintenance levels 1–4) and department parameters.
- * Heights of cut follow the trade's common practice (elite soccer about 25 mm / 1 in;
- * sports fields 25–75 mm; low-maintenance areas up to about 75–90 mm; bermudagrass
- * 12–38 mm). Everything else here is a department setting: the defaults are this
- * product's demo choices, not published values, and each department edits them.
+ * Heights of cut follow the trade's common practice (elite soccer about 1 in; sports fields
+ * 1–3 in; low-maintenance areas up to about 3–3½ in; bermudagrass ½–1½ in) and are set as
+ * the inch values a US department sets its mowers to (whole inches and eighths), kept as the
+ * exact millimetres (1 in = 25.4 mm). Everything else here is a department setting: the
+ * defaults are this product's demo choices, not published values, and each department edits
+ * them.
  */
 import { GRASSES, GRASS_SEASON, LEVEL_NAMES, LEVELS, SPORTS } from '../vocabulary.ts';
 import type { Grass, GrassSeason, Level, Sport } from '../vocabulary.ts';
@@ -44,13 +46,37 @@ type HocRow = Record<Sport, Record<GrassSeason, number>>;
 const hocRow = (cool: Partial<Record<Sport, number>> & { default: number }, warm: Partial<Record<Sport, number>> & { default: number }): HocRow =>
   Object.fromEntries(SPORTS.map((s) => [s, { cool: cool[s] ?? cool.default, warm: warm[s] ?? warm.default }])) as HocRow;
 
+/**
+ * Heights in inches (eighths) as exact millimetres, so that stored values read back as the
+ * inch a crew sets (25.4 mm is 1 in, not 0.98 in).
+ */
+const IN = {
+  half: 12.7,
+  fiveEighths: 15.875,
+  threeQuarters: 19.05,
+  sevenEighths: 22.225,
+  one: 25.4,
+  oneQuarter: 31.75,
+  oneHalf: 38.1,
+  oneThreeQuarters: 44.45,
+  two: 50.8,
+  twoHalf: 63.5,
+  twoThreeQuarters: 69.85,
+  three: 76.2,
+  threeHalf: 88.9,
+} as const;
+
 /** Demo defaults of the Standards table (department settings; heights from common practice). */
 export const DEFAULT_STANDARDS: Standards = {
   1: {
     level: 1,
     name: LEVEL_NAMES[1],
-    hocMm: hocRow({ default: 25, football: 32, softball: 32, field_hockey: 22, multi_use: 38, lawn: 50 }, { default: 16, football: 19, softball: 19, field_hockey: 13, multi_use: 25, lawn: 32 }),
-    hocByGrassMm: { st_augustinegrass: 64 },
+    // Baseball outfields a little above soccer's 1 in (common practice), as softball.
+    hocMm: hocRow(
+      { default: IN.one, football: IN.oneQuarter, baseball: IN.oneQuarter, softball: IN.oneQuarter, field_hockey: IN.sevenEighths, multi_use: IN.oneHalf, lawn: IN.two },
+      { default: IN.fiveEighths, football: IN.threeQuarters, baseball: IN.threeQuarters, softball: IN.threeQuarters, field_hockey: IN.half, multi_use: IN.one, lawn: IN.oneQuarter },
+    ),
+    hocByGrassMm: { st_augustinegrass: IN.twoHalf },
     minMowingsPerWeek: 3,
     maxMowingIntervalDays: 3,
     annualNShare: 1,
@@ -63,8 +89,11 @@ export const DEFAULT_STANDARDS: Standards = {
   2: {
     level: 2,
     name: LEVEL_NAMES[2],
-    hocMm: hocRow({ default: 32, football: 38, softball: 38, field_hockey: 25, multi_use: 45, lawn: 63 }, { default: 19, football: 25, softball: 25, field_hockey: 16, multi_use: 32, lawn: 38 }),
-    hocByGrassMm: { st_augustinegrass: 70 },
+    hocMm: hocRow(
+      { default: IN.oneQuarter, football: IN.oneHalf, softball: IN.oneHalf, field_hockey: IN.one, multi_use: IN.oneThreeQuarters, lawn: IN.twoHalf },
+      { default: IN.threeQuarters, football: IN.one, softball: IN.one, field_hockey: IN.fiveEighths, multi_use: IN.oneQuarter, lawn: IN.oneHalf },
+    ),
+    hocByGrassMm: { st_augustinegrass: IN.twoThreeQuarters },
     minMowingsPerWeek: 2,
     maxMowingIntervalDays: 4,
     annualNShare: 0.85,
@@ -77,8 +106,8 @@ export const DEFAULT_STANDARDS: Standards = {
   3: {
     level: 3,
     name: LEVEL_NAMES[3],
-    hocMm: hocRow({ default: 50, field_hockey: 38, multi_use: 63, lawn: 75 }, { default: 32, field_hockey: 25, multi_use: 38, lawn: 38 }),
-    hocByGrassMm: { st_augustinegrass: 76 },
+    hocMm: hocRow({ default: IN.two, field_hockey: IN.oneHalf, multi_use: IN.twoHalf, lawn: IN.three }, { default: IN.oneQuarter, field_hockey: IN.one, multi_use: IN.oneHalf, lawn: IN.oneHalf }),
+    hocByGrassMm: { st_augustinegrass: IN.three },
     minMowingsPerWeek: 1,
     maxMowingIntervalDays: 7,
     annualNShare: 0.65,
@@ -91,8 +120,8 @@ export const DEFAULT_STANDARDS: Standards = {
   4: {
     level: 4,
     name: LEVEL_NAMES[4],
-    hocMm: hocRow({ default: 75, lawn: 90 }, { default: 38, lawn: 50 }),
-    hocByGrassMm: { st_augustinegrass: 89 },
+    hocMm: hocRow({ default: IN.three, lawn: IN.threeHalf }, { default: IN.oneHalf, lawn: IN.two }),
+    hocByGrassMm: { st_augustinegrass: IN.threeHalf },
     minMowingsPerWeek: 0.5,
     maxMowingIntervalDays: 14,
     annualNShare: 0.3,
@@ -121,6 +150,15 @@ export interface MowerSpec {
   hocMaxMm: number;
 }
 
+/** The unit and step a department sets mower heights in, and where reel mowing stops. */
+export interface MowerSettings {
+  unit: 'in' | 'mm';
+  /** Smallest change of setting, in `unit` (1/8 in; 1 mm). */
+  step: number;
+  /** Highest HOC cut with a reel mower, in `unit`; above it a rotary. */
+  reelUpToHoc: number;
+}
+
 /** Department parameters: the engine's tunable numbers. */
 export interface DepartmentParameters {
   /**
@@ -130,6 +168,12 @@ export interface DepartmentParameters {
   maxGrowthMmPerDay: Record<Grass, number>;
   /** Default mowers by kind (demo defaults). */
   mowers: Record<'reel' | 'rotary', MowerSpec>;
+  /**
+   * How the department sets its mowers: the unit (US departments: inches), the step of a
+   * setting (an eighth of an inch; a millimetre) and the highest HOC cut with a reel mower
+   * (common practice: reel at 1 in and below, rotary above).
+   */
+  mowerSettings: MowerSettings;
   /** Soluble-N limit per application, g N/m² (LSU AgCenter: ≤ 1 lb N/1000 ft² ≈ 4.88 g/m²). */
   solubleNLimitGPerM2: number;
   /** Ceiling per application with slow-release N, g N/m² (department rule, no published source). */
@@ -215,6 +259,7 @@ export const DEFAULT_PARAMETERS: DepartmentParameters = {
     reel: { kind: 'reel', widthM: 2.8, speedKmh: 6, efficiency: 0.8, overlapM: 0.1, turnTimeS: 15, hocMinMm: 6, hocMaxMm: 38 },
     rotary: { kind: 'rotary', widthM: 1.83, speedKmh: 8, efficiency: 0.8, overlapM: 0.1, turnTimeS: 10, hocMinMm: 25, hocMaxMm: 125 },
   },
+  mowerSettings: { unit: 'in', step: 1 / 8, reelUpToHoc: 1 },
   solubleNLimitGPerM2: G_PER_M2_PER_LB_PER_1000FT2,
   slowReleaseNCeilingGPerM2: 2 * G_PER_M2_PER_LB_PER_1000FT2,
   minNPerApplicationGPerM2: 0.5 * G_PER_M2_PER_LB_PER_1000FT2,

@@ -142,7 +142,7 @@ function growthThroughWeek(daily: number[], weather: PreparedWeather, weekEnd: s
 
 /** Picks the mower for a HOC: the kind the HOC asks for whose range holds it, widest first; else the department default. */
 export function chooseMower(hocMm: number, mowers: readonly PlanMower[], params: DepartmentParameters = DEFAULT_PARAMETERS, crewId: number | null = null): { spec: MowerSpec; mower: PlanMower | null } {
-  const kind = mowerTypeFor(hocMm);
+  const kind = mowerTypeFor(hocMm, params.mowerSettings ?? DEFAULT_PARAMETERS.mowerSettings);
   const fits = mowers
     .filter((m) => m.kind === kind && m.hocMinMm <= hocMm + 1e-9 && m.hocMaxMm >= hocMm - 1e-9)
     .sort((a, b) => Number(b.crewId === crewId && crewId !== null) - Number(a.crewId === crewId && crewId !== null) || b.widthM - a.widthM || a.id - b.id);
@@ -267,7 +267,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
         askedDate: a.date,
         plannedHours: round(hours),
         reason: why,
-        details: { hocMm: round(hocMm, 1), triggerMm: round(trigger, 1), heightBeforeMm: round(a.heightMm, 1), mowerKind: spec.kind, mowerId: mower?.id ?? null, hoursMethod: method, overdueSince: a.overdueSince ?? null },
+        details: { hocMm: round(hocMm, 3), triggerMm: round(trigger, 1), heightBeforeMm: round(a.heightMm, 1), mowerKind: spec.kind, mowerId: mower?.id ?? null, hoursMethod: method, overdueSince: a.overdueSince ?? null },
         latestDate: a.date,
         flexible: false,
         equipmentKind: 'mower',

@@ -206,7 +206,7 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
       const n = perDistrict.get(site.districtCode) ?? 0;
       perDistrict.set(site.districtCode, n + 1);
       const hocMm = hocFor({ ...f, maintenanceLevel: f.maintenanceLevel as Level }, DEFAULT_STANDARDS);
-      const mower = DEFAULT_PARAMETERS.mowers[mowerTypeFor(hocMm)];
+      const mower = DEFAULT_PARAMETERS.mowers[mowerTypeFor(hocMm, DEFAULT_PARAMETERS.mowerSettings)];
       return [
         {
           fieldId: fieldRows[i]!.id,
