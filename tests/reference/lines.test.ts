@@ -92,6 +92,32 @@ describe('baseball (Official Baseball Rules 2.01) and softball (from memory)', (
     for (const s of foul) expect(e.mToFt(e.segmentLengthM(s))).toBeGreaterThanOrEqual(320);
   });
 
+  // The lane was drawn 3 ft into fair territory (towards second base).
+  test.each([
+    ['baseball', e.baseballTemplate(), 90],
+    ['softball', e.softballTemplate(), 60],
+  ] as const)('should draw the %s running lane in foul territory beside the first-base line, last half of home to first, 3 ft wide (Official Baseball Rules 5.09(a)(11))', (_name, t, basesFt) => {
+    // Home plate at the origin, first-base line along (1, −1)/√2; distance into foul territory
+    // is measured away from second base: d = −(x + y)/√2.
+    const foulSide = (x: number, y: number) => -(x + y) / Math.SQRT2;
+    const along = (x: number, y: number) => (x - y) / Math.SQRT2;
+    const lane = byLabel(t, 'running lane');
+    expect(lane.length).toBeGreaterThan(0);
+    for (const seg of lane) {
+      if (seg.kind !== 'line') throw new Error('the running lane is straight lines');
+      for (let k = 0; k <= 20; k++) {
+        const x = seg.from[0] + ((seg.to[0] - seg.from[0]) * k) / 20;
+        const y = seg.from[1] + ((seg.to[1] - seg.from[1]) * k) / 20;
+        expect(foulSide(x, y)).toBeGreaterThanOrEqual(-1e-9);
+        expect(e.mToFt(along(x, y))).toBeGreaterThanOrEqual(basesFt / 2 - 1e-9);
+        expect(e.mToFt(along(x, y))).toBeLessThanOrEqual(basesFt + 1e-9);
+      }
+    }
+    const outer = lane.find((s) => s.kind === 'line' && Math.abs(foulSide(s.from[0], s.from[1]) - foulSide(s.to[0], s.to[1])) < 1e-9)!;
+    expect(outer.kind === 'line' && e.mToFt(foulSide(outer.from[0], outer.from[1]))).toBeCloseTo(3, 9);
+    expect(e.mToFt(e.segmentLengthM(outer))).toBeCloseTo(basesFt / 2, 9);
+  });
+
   test('should label softball as from memory', () => {
     expect(e.softballTemplate().source).toBe('from memory');
   });

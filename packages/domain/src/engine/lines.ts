@@ -227,9 +227,11 @@ function diamond(opts: { id: string; sport: Sport; name: string; source: string;
     const start = ftToM(opts.runningLaneFt);
     const end = ftToM(opts.runningLaneFt * 2);
     const off = ftToM(3);
-    // Parallel to the first-base line, 3 ft into foul territory, from half-way to first base.
-    const px = (d: number) => d * c + off * c;
-    const py = (d: number) => -d * c + off * c;
+    // Official Baseball Rules 5.09(a)(11): the lane lies in foul territory beside the
+    // first-base line, from half-way to first base, 3 ft wide. The first-base line runs
+    // along (c, −c); foul territory is on the side of (−c, −c), away from second base.
+    const px = (d: number) => d * c - off * c;
+    const py = (d: number) => -d * c - off * c;
     segs.push(line(px(start), py(start), px(end), py(end), 'running lane'), line(start * c, -start * c, px(start), py(start), 'running lane'));
   }
   return { id: opts.id, sport: opts.sport, name: opts.name, source: opts.source, lengthM: f * c, widthM: 2 * f * c, lineWidthM: ftToM(opts.lineWidthIn / 12), segments: segs };
@@ -237,8 +239,9 @@ function diamond(opts: { id: string; sport: Sport; name: string; source: string;
 
 /**
  * Baseball (Official Baseball Rules 2.01): foul lines from home plate, 320 ft or more
- * preferred (default 325 ft, department choice); 90 ft bases (running lane from 45 ft to
- * first base, 3 ft wide). Batter's boxes 4 × 6 ft, 6 in from the plate: from memory.
+ * preferred (default 325 ft, department choice); 90 ft bases; running lane in foul territory
+ * beside the first-base line from 45 ft to first base, 3 ft wide (Official Baseball Rules
+ * 5.09(a)(11)). Batter's boxes 4 × 6 ft, 6 in from the plate: from memory.
  */
 export function baseballTemplate(foulLineFt = 325): LineTemplate {
   requireRange(foulLineFt, 150, 450, 'invalid_dimension', 'foul line length (ft)');
