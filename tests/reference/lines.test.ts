@@ -72,6 +72,39 @@ describe('American football (NFHS, secondary sources)', () => {
     expect([...ys].sort((a, b) => a - b)).toEqual([53.333, 106.667]);
   });
 
+  test('should add the marks the NFHS rule book asks for (from memory, labelled in the template source)', () => {
+    expect(t.source).toMatch(/from memory/);
+    // 24 in short marks 4 in inside each sideline at every yard line that is not a 5-yd line.
+    const short = byLabel(t, 'sideline short mark');
+    expect(short).toHaveLength(160);
+    for (const s of short) expect(e.mToFt(e.segmentLengthM(s)) * 12).toBeCloseTo(24, 9);
+    const ys = new Set(short.map((s) => (s.kind === 'line' ? Math.round(e.mToFt(Math.min(s.from[1], s.to[1])) * 12 * 1000) / 1000 : 0)));
+    expect([...ys].sort((a, b) => a - b)).toEqual([4, 160 * 12 - 4 - 24]);
+    // 12 in nine-yard marks at each 10-yd line, 9 yd from each sideline.
+    const nine = byLabel(t, 'nine-yard mark');
+    expect(nine).toHaveLength(18);
+    for (const s of nine) expect(s.kind === 'line' && Math.min(e.mToFt(Math.abs(s.to[1] - 0)), e.mToFt(Math.abs(s.to[1] - t.widthM)))).toBeCloseTo(27, 9);
+    // Numerals 10 … 50 … 10 on both sides: 36 digits, 6 ft high.
+    const numbers = byLabel(t, 'number');
+    const nearYs = numbers.flatMap((s) => (s.kind === 'line' ? [s.from[1], s.to[1]] : [])).filter((y) => y < t.widthM / 2);
+    expect(e.mToFt(Math.min(...nearYs))).toBeCloseTo(21, 9); // 6 ft high, tops 9 yd (27 ft) from the sideline
+    expect(e.mToFt(Math.max(...nearYs))).toBeCloseTo(27, 9);
+    expect(numbers.length).toBe(2 * (8 + 11 + 11 + 10 + 11 + 10 + 11 + 11 + 8));
+    // Team boxes between the 25-yd lines, coaching lines 6 ft out, limit lines outside.
+    expect(byLabel(t, 'coaching line')).toHaveLength(2);
+    for (const s of byLabel(t, 'coaching line')) expect(e.mToFt(e.segmentLengthM(s))).toBeCloseTo(150, 9);
+    expect(byLabel(t, 'team box')).toHaveLength(6);
+    expect(byLabel(t, 'limit line').length).toBeGreaterThan(0);
+  });
+
+  test('should leave numerals and team areas out on request and list every element in the line plan', () => {
+    const bare = e.footballTemplate({ numbers: false, teamAreas: false });
+    expect(byLabel(bare, 'number')).toHaveLength(0);
+    expect(byLabel(bare, 'team box')).toHaveLength(0);
+    const plan = e.linePlan(t, e.DEFAULT_PARAMETERS.lines, { days: 70, repaintDays: 7 });
+    expect(plan.elements.map((x) => x.label)).toEqual(['sideline', 'end line', 'goal line', 'yard line', 'hash mark', 'sideline short mark', 'nine-yard mark', 'number', 'limit line', 'coaching line', 'team box']);
+  });
+
   test('should move the hash marks to 60 ft for NCAA', () => {
     const ncaa = e.footballTemplate(60);
     const h = byLabel(ncaa, 'hash mark')[0]!;

@@ -343,6 +343,8 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
     reason: lp ? null : field.sport === 'lawn' || field.sport === 'multi_use' ? 'No lines are kept on this kind of field.' : `Level ${level} (${std.name}) keeps no lines in the Standards.`,
     template: template && lp ? { id: template.id, name: template.name, source: template.source, lineWidthM: template.lineWidthM } : null,
     lineLengthM: lp?.lineLengthM ?? 0,
+    /** What the totals include, element by element (lines, marks, numerals, team areas). */
+    elements: lp?.elements ?? [],
     paintedAreaM2: lp?.paintedAreaM2 ?? 0,
     mixedLitres: lp?.mixedLitres ?? 0,
     concentrateLitres: lp?.concentrateLitres ?? 0,

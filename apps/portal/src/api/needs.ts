@@ -72,6 +72,8 @@ export interface FieldNeeds {
     reason: string | null;
     template: { id: string; name: string; source: string; lineWidthM: number } | null;
     lineLengthM: number;
+    /** What the totals include, element by element. */
+    elements: { label: string; count: number; lengthM: number; paintedAreaM2: number; equivalentLengthM: number }[];
     paintedAreaM2: number;
     mixedLitres: number;
     concentrateLitres: number;

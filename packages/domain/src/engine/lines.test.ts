@@ -17,13 +17,15 @@ describe('lines', () => {
     const templates = [l.soccerTemplate(), l.smallSidedSoccerTemplate('7v7'), l.smallSidedSoccerTemplate('9v9'), l.footballTemplate(), l.lacrosseTemplate(), l.fieldHockeyTemplate()];
     for (const t of templates) {
       expect(l.totalLineLengthM(t)).toBeGreaterThan(2 * (t.lengthM + t.widthM));
+      // Team areas and limit lines lie outside the field, within the template's margin.
+      const m = t.marginM ?? 0;
       for (const s of t.segments) {
         if (s.kind !== 'line') continue;
         for (const [x, y] of [s.from, s.to]) {
-          expect(x).toBeGreaterThanOrEqual(-1e-9);
-          expect(x).toBeLessThanOrEqual(t.lengthM + 1e-9);
-          expect(y).toBeGreaterThanOrEqual(-1e-9);
-          expect(y).toBeLessThanOrEqual(t.widthM + 1e-9);
+          expect(x).toBeGreaterThanOrEqual(-m - 1e-9);
+          expect(x).toBeLessThanOrEqual(t.lengthM + m + 1e-9);
+          expect(y).toBeGreaterThanOrEqual(-m - 1e-9);
+          expect(y).toBeLessThanOrEqual(t.widthM + m + 1e-9);
         }
       }
     }
@@ -38,6 +40,20 @@ describe('lines', () => {
     expect(p.mixedLitres).toBeCloseTo(100, 12);
     expect(p.concentrateLitres).toBeCloseTo(25, 12);
     expect(p.waterLitres).toBeCloseTo(75, 12);
+  });
+
+  test('should list what each total includes, element by element', () => {
+    const t = l.footballTemplate();
+    const els = l.lineElements(t);
+    expect(els.reduce((s, e) => s + e.lengthM, 0)).toBeCloseTo(l.totalLineLengthM(t), 9);
+    expect(els.reduce((s, e) => s + e.paintedAreaM2, 0)).toBeCloseTo(l.templatePaintedAreaM2(t), 9);
+    const plan = l.linePlan(t, { coverageM2PerMixedL: 1.6, dilutionWaterPerPaint: 1, passes: 2, markerSpeedKmh: 3, setupMin: 20 }, { days: 28, repaintDays: 7 });
+    expect(plan.elements.map((e) => e.label)).toEqual(els.map((e) => e.label));
+    expect(plan.paintedAreaM2).toBeCloseTo(l.templatePaintedAreaM2(t), 9);
+    expect(plan.lineLengthM).toBeCloseTo(l.totalLineLengthM(t), 9);
+    // Numerals are 8 in strokes: twice the paint of a 4 in line of the same length.
+    const numbers = els.find((e) => e.label === 'number')!;
+    expect(numbers.equivalentLengthM).toBeCloseTo(2 * numbers.lengthM, 9);
   });
 
   test('should time marking and count repaints', () => {

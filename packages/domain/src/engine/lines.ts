@@ -11,7 +11,7 @@ import { ftToM } from './units.ts';
 export type Point = readonly [number, number];
 
 export type LineSegment =
-  | { kind: 'line'; from: Point; to: Point; label: string }
+  | { kind: 'line'; from: Point; to: Point; label: string; /** Painted width when not the template's line width (e.g. a numeral's stroke), m. */ widthM?: number }
   | { kind: 'arc'; center: Point; radiusM: number; startRad: number; endRad: number; label: string };
 
 export interface LineTemplate {
@@ -24,6 +24,8 @@ export interface LineTemplate {
   widthM: number;
   /** Line width, m. */
   lineWidthM: number;
+  /** How far markings reach outside the field's frame (team areas, limit lines), m; 0 when none. */
+  marginM?: number;
   segments: LineSegment[];
 }
 
@@ -36,6 +38,42 @@ export function segmentLengthM(s: LineSegment): number {
 /** Total line length of a template, m. */
 export function totalLineLengthM(t: Pick<LineTemplate, 'segments'>): number {
   return t.segments.reduce((s, seg) => s + segmentLengthM(seg), 0);
+}
+
+/** Painted area of one segment, m²: its length × its own width, else the template's line width. */
+export function segmentPaintedAreaM2(s: LineSegment, lineWidthM: number): number {
+  return segmentLengthM(s) * (s.kind === 'line' && s.widthM !== undefined ? s.widthM : lineWidthM);
+}
+
+/** Painted area of a template, m². */
+export function templatePaintedAreaM2(t: Pick<LineTemplate, 'segments' | 'lineWidthM'>): number {
+  return t.segments.reduce((s, seg) => s + segmentPaintedAreaM2(seg, t.lineWidthM), 0);
+}
+
+/** One element of a layout (all segments with one label) and what it adds to a repaint. */
+export interface LineElement {
+  label: string;
+  /** Pieces painted (lines, arcs, marks or numeral strokes). */
+  count: number;
+  lengthM: number;
+  paintedAreaM2: number;
+  /** Length of template-width line that takes the same paint (painted area ÷ line width), m. */
+  equivalentLengthM: number;
+}
+
+/** What each total of a layout includes: its elements in the order they are drawn. */
+export function lineElements(t: Pick<LineTemplate, 'segments' | 'lineWidthM'>): LineElement[] {
+  const out = new Map<string, LineElement>();
+  for (const seg of t.segments) {
+    const e = out.get(seg.label) ?? { label: seg.label, count: 0, lengthM: 0, paintedAreaM2: 0, equivalentLengthM: 0 };
+    const area = segmentPaintedAreaM2(seg, t.lineWidthM);
+    e.count += 1;
+    e.lengthM += segmentLengthM(seg);
+    e.paintedAreaM2 += area;
+    e.equivalentLengthM += area / t.lineWidthM;
+    out.set(seg.label, e);
+  }
+  return [...out.values()];
 }
 
 const line = (x1: number, y1: number, x2: number, y2: number, label: string): LineSegment => ({ kind: 'line', from: [x1, y1], to: [x2, y2], label });
@@ -144,27 +182,121 @@ export function smallSidedSoccerTemplate(format: keyof typeof SMALL_SIDED_SOCCER
   };
 }
 
+/** Seven-segment strokes of the numerals a football field carries (0–5), as [u1, v1, u2, v2] in a 4 × 6 box (ft). */
+const NUMERAL_STROKES: Record<string, ReadonlyArray<readonly [number, number, number, number]>> = (() => {
+  const seg = { a: [0, 6, 4, 6], b: [4, 6, 4, 3], c: [4, 3, 4, 0], d: [0, 0, 4, 0], e: [0, 0, 0, 3], f: [0, 3, 0, 6], g: [0, 3, 4, 3] } as const;
+  const of = (keys: string) => [...keys].map((k) => seg[k as keyof typeof seg]);
+  return { '0': of('abcdef'), '1': of('bc'), '2': of('abged'), '3': of('abgcd'), '4': of('fgbc'), '5': of('afgcd') };
+})();
+
+/** Options of the football layout. */
+export interface FootballOptions {
+  /** Hash marks (inbounds lines) from each sideline, ft: NFHS 53 ft 4 in, NCAA 60 ft. */
+  hashFromSidelineFt?: number;
+  /** Yard-line numerals (default true). */
+  numbers?: boolean;
+  /** Team boxes, coaching lines and limit lines outside the field (default true). */
+  teamAreas?: boolean;
+}
+
 /**
  * American football, NFHS (secondary sources): 360 × 160 ft including 30 ft end zones,
- * 4 in lines, yard lines every 5 yd from goal line to goal line, hash marks at every other
- * yard 53 ft 4 in from each sideline (NCAA: 60 ft). Hash-mark length 2 ft: from memory.
- * Team boxes and numbers are not included.
+ * 4 in lines; goal lines and yard lines every 5 yd across the field; hash marks (inbounds
+ * lines) 24 in long at every other yard, 53 ft 4 in from each sideline (NCAA 60 ft).
+ * From memory (NFHS rule book, not confirmed in print here): 24 in short marks at each yard
+ * line 4 in inside each sideline; 12 in nine-yard marks 9 yd from each sideline at every
+ * 10-yd line; numerals 6 ft high and 4 ft wide every 10 yd, tops 9 yd from the sideline,
+ * drawn here as seven-segment strokes 8 in wide; limit lines 6 ft outside the sidelines and
+ * end lines as 12 in dashes with 24 in gaps; between the 25-yd lines a solid coaching line
+ * 6 ft and a team-box line 12 ft outside each sideline, closed at both ends. Direction
+ * arrows, end-zone and mid-field decoration are not included.
  */
-export function footballTemplate(hashFromSidelineFt = 53 + 4 / 12): LineTemplate {
-  const L = ftToM(360);
-  const W = ftToM(160);
-  const ez = ftToM(30);
-  const yd = ftToM(3);
+export function footballTemplate(hashFromSidelineFt: number | FootballOptions = 53 + 4 / 12): LineTemplate {
+  const o: FootballOptions = typeof hashFromSidelineFt === 'number' ? { hashFromSidelineFt } : hashFromSidelineFt;
+  const numbers = o.numbers ?? true;
+  const teamAreas = o.teamAreas ?? true;
+  const ft = ftToM;
+  const L = ft(360);
+  const W = ft(160);
+  const ez = ft(30);
+  const yd = ft(3);
+  const xAt = (yardLine: number) => ez + yardLine * yd;
   const segs: LineSegment[] = boundary(L, W, 'end line', 'sideline');
-  for (let k = 0; k <= 100; k += 5) segs.push(line(ez + k * yd, 0, ez + k * yd, W, k === 0 || k === 100 ? 'goal line' : 'yard line'));
-  const hashLen = ftToM(2);
-  const h1 = ftToM(hashFromSidelineFt);
+  for (let k = 0; k <= 100; k += 5) segs.push(line(xAt(k), 0, xAt(k), W, k === 0 || k === 100 ? 'goal line' : 'yard line'));
+  const hashLen = ft(2);
+  const h1 = ft(o.hashFromSidelineFt ?? 53 + 4 / 12);
+  const inset = ft(4 / 12);
   for (let k = 1; k < 100; k++) {
     if (k % 5 === 0) continue;
-    const x = ez + k * yd;
+    const x = xAt(k);
     segs.push(line(x, h1, x, h1 + hashLen, 'hash mark'), line(x, W - h1, x, W - h1 - hashLen, 'hash mark'));
+    segs.push(line(x, inset, x, inset + hashLen, 'sideline short mark'), line(x, W - inset, x, W - inset - hashLen, 'sideline short mark'));
   }
-  return { id: 'football_nfhs', sport: 'football', name: 'American football (NFHS)', source: 'NFHS (secondary sources); hash-mark length from memory', lengthM: L, widthM: W, lineWidthM: ftToM(4 / 12), segments: segs };
+  for (let k = 10; k <= 90; k += 10) {
+    const x = xAt(k);
+    const nine = 9 * yd;
+    segs.push(line(x, nine - ft(1), x, nine, 'nine-yard mark'), line(x, W - nine + ft(1), x, W - nine, 'nine-yard mark'));
+  }
+  if (numbers) {
+    const stroke = ft(8 / 12);
+    const gap = ft(1);
+    for (let k = 10; k <= 90; k += 10) {
+      const digits = String(Math.min(k, 100 - k)).split('');
+      const x = xAt(k);
+      // Near side reads from the near sideline (bottom 7 yd, top 9 yd out); far side turned half round.
+      for (const far of [false, true]) {
+        digits.forEach((digit, i) => {
+          const u0 = i === 0 ? -gap / 2 - ft(4) : gap / 2;
+          for (const [u1, v1, u2, v2] of NUMERAL_STROKES[digit] ?? []) {
+            const px = (u: number) => (far ? x - (u0 + ft(u)) : x + u0 + ft(u));
+            const py = (v: number) => (far ? W - 7 * yd - ft(v) : 7 * yd + ft(v));
+            segs.push({ kind: 'line', from: [px(u1), py(v1)], to: [px(u2), py(v2)], label: 'number', widthM: stroke });
+          }
+        });
+      }
+    }
+  }
+  let marginM = 0;
+  if (teamAreas) {
+    const out6 = ft(6);
+    const out12 = ft(12);
+    marginM = out12;
+    const x25 = xAt(25);
+    const x75 = xAt(75);
+    // Limit lines: dashes along the ends and the sidelines, solid coaching line between the 25s.
+    const dashes = (x1: number, y1: number, x2: number, y2: number) => {
+      const len = Math.hypot(x2 - x1, y2 - y1);
+      for (let a = 0; a + ft(1) <= len + 1e-9; a += ft(3)) {
+        const t1 = a / len;
+        const t2 = (a + ft(1)) / len;
+        segs.push(line(x1 + (x2 - x1) * t1, y1 + (y2 - y1) * t1, x1 + (x2 - x1) * t2, y1 + (y2 - y1) * t2, 'limit line'));
+      }
+    };
+    for (const y of [-out6, W + out6]) {
+      dashes(-out6, y, x25, y);
+      dashes(x75, y, L + out6, y);
+      segs.push(line(x25, y, x75, y, 'coaching line'));
+    }
+    dashes(-out6, -out6 + ft(3), -out6, W + out6 - ft(3));
+    dashes(L + out6, -out6 + ft(3), L + out6, W + out6 - ft(3));
+    for (const [yc, yt] of [
+      [-out6, -out12],
+      [W + out6, W + out12],
+    ] as const) {
+      segs.push(line(x25, yt, x75, yt, 'team box'), line(x25, yc, x25, yt, 'team box'), line(x75, yc, x75, yt, 'team box'));
+    }
+  }
+  return {
+    id: 'football_nfhs',
+    sport: 'football',
+    name: 'American football (NFHS)',
+    source: 'NFHS (secondary sources); short marks, nine-yard marks, numerals, team areas and hash-mark length from memory',
+    lengthM: L,
+    widthM: W,
+    lineWidthM: ft(4 / 12),
+    marginM,
+    segments: segs,
+  };
 }
 
 /**
@@ -327,6 +459,10 @@ export function repaintsInSeason(seasonDays: number, intervalDays: number | null
 
 export interface LinePlan extends PaintNeed {
   templateId: string;
+  /** Length of template-width line that takes the same paint as the whole layout, m (numerals are wider strokes). */
+  equivalentLengthM: number;
+  /** What the totals include, element by element. */
+  elements: LineElement[];
   repaints: number;
   hoursPerRepaint: number;
   seasonMixedLitres: number;
@@ -337,12 +473,16 @@ export interface LinePlan extends PaintNeed {
 /** A season's line plan for one template. */
 export function linePlan(template: LineTemplate, s: PaintSettings & { markerSpeedKmh: number; setupMin: number }, season: { days: number; repaintDays: number | null; extraEvents?: number }): LinePlan {
   const length = totalLineLengthM(template);
-  const one = paintNeed(length, template.lineWidthM, s);
+  const area = templatePaintedAreaM2(template);
+  const equivalent = area / template.lineWidthM;
+  const one = { ...paintNeed(equivalent, template.lineWidthM, s), lineLengthM: length };
   const repaints = repaintsInSeason(season.days, season.repaintDays, season.extraEvents ?? 0);
-  const hoursPerRepaint = markingHours(length, s.passes, s.markerSpeedKmh, s.setupMin);
+  const hoursPerRepaint = markingHours(equivalent, s.passes, s.markerSpeedKmh, s.setupMin);
   return {
     ...one,
     templateId: template.id,
+    equivalentLengthM: equivalent,
+    elements: lineElements(template),
     repaints,
     hoursPerRepaint,
     seasonMixedLitres: one.mixedLitres * repaints,

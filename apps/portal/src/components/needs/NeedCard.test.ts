@@ -20,7 +20,7 @@ function needs(): FieldNeeds {
     labour: { ...explained([{ key: 'area', label: 'Field area', value: 4046.8564224, unit: 'm2' }]), method: 'field_capacity', hoursPerMowing: 0.5, hoursPerWeek: 1, seasonHours: 30, passPlan: null, capacityHours: 0.5 },
     water: { ...explained(), cautions: ['Watering restrictions are local law.'], irrigated: true, notIrrigatedReason: null, et0Method: 'penman_monteith', et0Mm: 25.4, kc: 0.95, etcMm: 24.13, rainMm: 0, effectiveRainMm: 0, shareOfEtc: 0.8, netMm: 19.3, grossMm: 27.6, runTimeMin: 138, volumeL: 3785.411784 },
     feed: { ...explained(), annualNGPerM2: 4.8824, reasons: [], monthlyNGPerM2: [], product: { analysis: '28-0-6', slowReleaseShare: 0.5, bagKg: 22.7 }, applications: [], nextApplication: null, productKgSeason: 10 },
-    lines: { ...explained(), kept: false, reason: 'No lines are kept on this kind of field.', template: null, lineLengthM: 0, paintedAreaM2: 0, mixedLitres: 0, concentrateLitres: 0, waterLitres: 0, hoursPerRepaint: 0, repaintDays: null, repaints: 0, seasonConcentrateLitres: 0, seasonHours: 0 },
+    lines: { ...explained(), kept: false, reason: 'No lines are kept on this kind of field.', template: null, lineLengthM: 0, elements: [], paintedAreaM2: 0, mixedLitres: 0, concentrateLitres: 0, waterLitres: 0, hoursPerRepaint: 0, repaintDays: null, repaints: 0, seasonConcentrateLitres: 0, seasonHours: 0 },
     level: { ...explained(), assigned: 2, recommended: 3, points: 4, reasons: ['x'], targetScore: 75, latestCheck: null, scoreMet: null, workCompliance: { tracked: false, note: 'Not tracked yet.' } },
     season: { stationId: 1, start: '2026-06-01', end: '2026-06-07', dates: [], gp: [], growthMm: [], waterNeedMm: [], mowings: [], feedApplications: [] },
   };

@@ -130,7 +130,12 @@ export function buildNeedCards(x: FieldNeeds, u: UnitSystem): NeedCardModel[] {
             { label: 'Repaints in season', value: `${lines.repaints} (every ${lines.repaintDays} days)` },
           ]
         : [{ label: 'Lines', value: 'None kept', test: 'needs-line-length' }],
-      notes: lines.reason ? [{ text: lines.reason, type: 'info' }] : [],
+      notes: [
+        ...(lines.reason ? [{ text: lines.reason, type: 'info' as const }] : []),
+        ...(lines.elements.length
+          ? [{ text: `The totals include, as line of the layout\u2019s width: ${lines.elements.map((e) => `${e.label} ×${e.count} ${lengthText(e.equivalentLengthM, u)}`).join('; ')}.`, type: 'info' as const }]
+          : []),
+      ],
       inputs: lines.inputs,
       how: lines.how,
       cautions: lines.cautions,
