@@ -37,7 +37,6 @@ export function demoSeasonTotals(): { department: SeasonTotals; byDistrict: Reco
   const empty = (): SeasonTotals => ({ fields: 0, days: 0, mowings: 0, mowingHours: 0, lineHours: 0, labourHours: 0, waterM3: 0, paintMixedL: 0, paintConcentrateL: 0, nKg: 0 });
   const department = empty();
   const byDistrict: Record<string, SeasonTotals> = {};
-  const dilution = DEFAULT_PARAMETERS.lines.dilutionWaterPerPaint;
   city.fields.forEach((f, i) => {
     const site = siteOf.get(f.siteKey)!;
     const weather = prepared.get(nearest(site.lat, site.lng))!;
@@ -47,8 +46,7 @@ export function demoSeasonTotals(): { department: SeasonTotals; byDistrict: Reco
       DEFAULT_STANDARDS,
       DEFAULT_PARAMETERS,
     );
-    // Older outlooks reported concentrate only; mixed = concentrate × (1 + parts water).
-    const mixed = (o as { paintMixedL?: number }).paintMixedL ?? o.paintConcentrateL * (1 + dilution);
+    const mixed = o.paintMixedL;
     for (const t of [department, (byDistrict[site.districtCode] ??= empty())]) {
       t.fields += 1;
       t.days = Math.max(t.days, o.days);

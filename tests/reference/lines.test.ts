@@ -184,16 +184,48 @@ describe("men's lacrosse (from memory)", () => {
   });
 });
 
-describe('line paint (trade press, common practice)', () => {
-  test('should cover about 200 linear ft of 4 in line per mixed gallon in one pass (trade press)', () => {
-    const s = { ...e.DEFAULT_PARAMETERS.lines, passes: 1 };
-    const p = e.paintNeed(e.ftToM(200), e.ftToM(4 / 12), s);
-    expect(e.litresToUsGallons(p.mixedLitres)).toBeCloseTo(1, 9);
+describe('line paint (trade press, trade guidance, common practice)', () => {
+  const lines = e.DEFAULT_PARAMETERS.lines;
+  const gallons = (l: number) => e.litresToUsGallons(l);
+
+  test('should give about 200 linear ft of 4 in finished line per mixed gallon in a first coat, both directions included (trade press; two directions common practice)', () => {
+    const p = e.paintNeed(e.ftToM(200), e.ftToM(4 / 12), lines.firstCoat);
+    expect(gallons(p.mixedLitres)).toBeCloseTo(1, 9);
+    expect(lines.firstCoat.passes).toBe(2);
   });
 
-  test('should default to a dilution within 1:1 to 4:1 and two passes (common practice)', () => {
-    expect(e.DEFAULT_PARAMETERS.lines.dilutionWaterPerPaint).toBeGreaterThanOrEqual(1);
-    expect(e.DEFAULT_PARAMETERS.lines.dilutionWaterPerPaint).toBeLessThanOrEqual(4);
-    expect(e.DEFAULT_PARAMETERS.lines.passes).toBe(2);
+  test('should touch up in one pass at the first coat\'s rate per pass, more dilute (trade guidance: 1:1 first application, 3:1 or 4:1 touch-ups)', () => {
+    expect(lines.touchUp.passes).toBe(1);
+    // Per pass, the same paint on the line: coverage × passes is the coat's coverage of one pass.
+    expect(lines.touchUp.coverageM2PerMixedL / lines.touchUp.passes).toBeCloseTo(lines.firstCoat.coverageM2PerMixedL * lines.firstCoat.passes, 9);
+    expect(lines.firstCoat.dilutionWaterPerPaint).toBe(1);
+    expect(lines.touchUp.dilutionWaterPerPaint).toBeGreaterThanOrEqual(3);
+    for (const coat of [lines.firstCoat, lines.touchUp]) {
+      expect(coat.dilutionWaterPerPaint).toBeGreaterThanOrEqual(1);
+      expect(coat.dilutionWaterPerPaint).toBeLessThanOrEqual(4); // 1:1 to 4:1 (common practice)
+    }
+  });
+
+  // The engine used to put about 47 gal of mixed paint on every football repaint (coverage
+  // applied per pass and doubled for two passes, without numerals); trade guidance is of the
+  // order of 15 gal.
+  test('should repaint a full football field, numerals and hash marks but not the border, with about 15 gal of mixed paint (trade guidance, secondary sources)', () => {
+    const field = e.footballTemplate({ numbers: true, teamAreas: false });
+    const plan = e.linePlan(field, lines, { days: 70, repaintDays: 7 });
+    expect(gallons(plan.touchUp.mixedLitres)).toBeGreaterThan(12);
+    expect(gallons(plan.touchUp.mixedLitres)).toBeLessThan(18);
+    // A first coat of the same layout in both directions: twice the mixed paint, at 1:1.
+    expect(gallons(plan.firstCoat.mixedLitres)).toBeCloseTo(2 * gallons(plan.touchUp.mixedLitres), 9);
+    expect(gallons(plan.firstCoat.concentrateLitres)).toBeCloseTo(gallons(plan.firstCoat.mixedLitres) / 2, 9);
+  });
+
+  test('should repaint a 105 × 68 m soccer pitch (12 cm lines) at the 200 ft per mixed gallon rate of 4 in line (trade press)', () => {
+    const pitch = e.soccerTemplate(105, 68, 0.12);
+    const plan = e.linePlan(pitch, lines, { days: 70, repaintDays: 7 });
+    // 716.9 m of 12 cm line is 2,778 ft of 4 in line: about 13.9 gal in a first coat, 6.9 in a touch-up.
+    const ftOf4In = e.m2ToFt2(716.9 * 0.12) / (4 / 12);
+    expect(gallons(plan.firstCoat.mixedLitres)).toBeCloseTo(ftOf4In / 200, 1);
+    expect(gallons(plan.touchUp.mixedLitres)).toBeCloseTo(ftOf4In / 400, 1);
+    expect(gallons(plan.firstCoat.mixedLitres)).toBeCloseTo(13.9, 1);
   });
 });

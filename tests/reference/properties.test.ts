@@ -53,7 +53,7 @@ describe('engine properties', () => {
   test('should scale paint in proportion to line length', () => {
     fc.assert(
       fc.property(fc.double({ min: 1, max: 5000, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true }), (len, k) => {
-        const s = e.DEFAULT_PARAMETERS.lines;
+        const s = e.DEFAULT_PARAMETERS.lines.touchUp;
         const one = e.paintNeed(len, 0.1, s);
         const scaled = e.paintNeed(len * k, 0.1, s);
         expect(scaled.concentrateLitres).toBeCloseTo(one.concentrateLitres * k, 6);

@@ -79,8 +79,12 @@ export interface FieldNeeds {
     concentrateLitres: number;
     waterLitres: number;
     hoursPerRepaint: number;
+    firstCoat: { mixedLitres: number; concentrateLitres: number; waterLitres: number; hours: number };
     repaintDays: number | null;
     repaints: number;
+    firstCoats: number;
+    touchUps: number;
+    seasonMixedLitres: number;
     seasonConcentrateLitres: number;
     seasonHours: number;
   };

@@ -406,13 +406,28 @@ export function defaultTemplateFor(sport: Sport): LineTemplate | null {
   }
 }
 
+/**
+ * One coat of line paint. Coverage means the finished line of that coat, all its passes
+ * together: the trade press's "about 200 linear ft of 4 in line per mixed gallon" is a
+ * finished line painted in two directions, not one pass.
+ */
 export interface PaintSettings {
-  /** Area one litre of mixed paint covers in one pass, m²/L. */
+  /** Area of finished line one litre of mixed paint gives in this coat (all passes), m²/L. */
   coverageM2PerMixedL: number;
   /** Parts water per part paint concentrate (1:1 to 4:1 common practice). */
   dilutionWaterPerPaint: number;
-  /** Passes (two directions is common practice). */
+  /** Passes of the marker in this coat (labour; the paint is in the coverage). */
   passes: number;
+}
+
+/** The department's line-marking settings: a first coat, a touch-up coat, the marker. */
+export interface LineSettings {
+  /** A layout painted afresh (start of the season, lines no longer showing). */
+  firstCoat: PaintSettings;
+  /** A repaint over lines that still show: lighter and often more dilute. */
+  touchUp: PaintSettings;
+  markerSpeedKmh: number;
+  setupMin: number;
 }
 
 export interface PaintNeed {
@@ -424,8 +439,9 @@ export interface PaintNeed {
 }
 
 /**
- * Paint for a line length: painted area = length × width; mixed = area × passes ÷ coverage;
- * concentrate = mixed ÷ (1 + dilution); water = mixed − concentrate.
+ * Paint for a line length in one coat: painted area = length × width; mixed = area ÷ the
+ * coat's coverage (finished line, all passes); concentrate = mixed ÷ (1 + dilution); water =
+ * mixed − concentrate.
  */
 export function paintNeed(lineLengthM: number, lineWidthM: number, s: PaintSettings): PaintNeed {
   requireNonNegative(lineLengthM, 'invalid_length', 'line length (m)');
@@ -434,7 +450,7 @@ export function paintNeed(lineLengthM: number, lineWidthM: number, s: PaintSetti
   requireRange(s.dilutionWaterPerPaint, 0, 10, 'invalid_dilution', 'dilution (parts water per part paint)');
   requirePositive(s.passes, 'invalid_passes', 'passes');
   const paintedAreaM2 = lineLengthM * lineWidthM;
-  const mixedLitres = (paintedAreaM2 * s.passes) / s.coverageM2PerMixedL;
+  const mixedLitres = paintedAreaM2 / s.coverageM2PerMixedL;
   const concentrateLitres = mixedLitres / (1 + s.dilutionWaterPerPaint);
   return { lineLengthM, paintedAreaM2, mixedLitres, concentrateLitres, waterLitres: mixedLitres - concentrateLitres };
 }
@@ -457,36 +473,64 @@ export function repaintsInSeason(seasonDays: number, intervalDays: number | null
   return (seasonDays > 0 ? Math.ceil(seasonDays / intervalDays) : 0) + extraEvents;
 }
 
-export interface LinePlan extends PaintNeed {
+/** Paint and labour of one coat of a whole layout. */
+export interface CoatPlan extends PaintNeed {
+  /** Marking hours of the coat (passes × equivalent length ÷ speed + set-up). */
+  hours: number;
+}
+
+/** One coat of a whole layout: paint from its painted area (numerals are wider strokes), labour from its equivalent length. */
+export function coatPlan(template: LineTemplate, coat: PaintSettings, marker: { markerSpeedKmh: number; setupMin: number }): CoatPlan {
+  const area = templatePaintedAreaM2(template);
+  const equivalent = area / template.lineWidthM;
+  return { ...paintNeed(equivalent, template.lineWidthM, coat), lineLengthM: totalLineLengthM(template), hours: markingHours(equivalent, coat.passes, marker.markerSpeedKmh, marker.setupMin) };
+}
+
+export interface LinePlan {
   templateId: string;
+  lineLengthM: number;
+  paintedAreaM2: number;
   /** Length of template-width line that takes the same paint as the whole layout, m (numerals are wider strokes). */
   equivalentLengthM: number;
   /** What the totals include, element by element. */
   elements: LineElement[];
+  firstCoat: CoatPlan;
+  touchUp: CoatPlan;
+  /** Paintings in the season: first coats + touch-ups. */
   repaints: number;
-  hoursPerRepaint: number;
+  firstCoats: number;
+  touchUps: number;
   seasonMixedLitres: number;
   seasonConcentrateLitres: number;
+  seasonWaterLitres: number;
   seasonHours: number;
 }
 
-/** A season's line plan for one template. */
-export function linePlan(template: LineTemplate, s: PaintSettings & { markerSpeedKmh: number; setupMin: number }, season: { days: number; repaintDays: number | null; extraEvents?: number }): LinePlan {
-  const length = totalLineLengthM(template);
-  const area = templatePaintedAreaM2(template);
-  const equivalent = area / template.lineWidthM;
-  const one = { ...paintNeed(equivalent, template.lineWidthM, s), lineLengthM: length };
+/**
+ * A season's line plan for one template: one first coat at the start of the season (or
+ * `firstCoats`), then touch-ups every repaint interval and for extra events.
+ */
+export function linePlan(template: LineTemplate, s: LineSettings, season: { days: number; repaintDays: number | null; extraEvents?: number; firstCoats?: number }): LinePlan {
+  const firstCoat = coatPlan(template, s.firstCoat, s);
+  const touchUp = coatPlan(template, s.touchUp, s);
   const repaints = repaintsInSeason(season.days, season.repaintDays, season.extraEvents ?? 0);
-  const hoursPerRepaint = markingHours(equivalent, s.passes, s.markerSpeedKmh, s.setupMin);
+  const firstCoats = Math.min(repaints, requireNonNegative(season.firstCoats ?? 1, 'invalid_events', 'first coats'));
+  const touchUps = repaints - firstCoats;
+  const total = (k: keyof PaintNeed | 'hours') => firstCoat[k] * firstCoats + touchUp[k] * touchUps;
   return {
-    ...one,
     templateId: template.id,
-    equivalentLengthM: equivalent,
+    lineLengthM: firstCoat.lineLengthM,
+    paintedAreaM2: firstCoat.paintedAreaM2,
+    equivalentLengthM: templatePaintedAreaM2(template) / template.lineWidthM,
     elements: lineElements(template),
+    firstCoat,
+    touchUp,
     repaints,
-    hoursPerRepaint,
-    seasonMixedLitres: one.mixedLitres * repaints,
-    seasonConcentrateLitres: one.concentrateLitres * repaints,
-    seasonHours: hoursPerRepaint * repaints,
+    firstCoats,
+    touchUps,
+    seasonMixedLitres: total('mixedLitres'),
+    seasonConcentrateLitres: total('concentrateLitres'),
+    seasonWaterLitres: total('waterLitres'),
+    seasonHours: total('hours'),
   };
 }

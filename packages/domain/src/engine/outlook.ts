@@ -137,6 +137,8 @@ export interface OutlookTotals {
   nKg: number;
   productKg: number;
   waterM3: number;
+  /** Mixed paint (concentrate + water) of the season's first coats and touch-ups, L. */
+  paintMixedL: number;
   paintConcentrateL: number;
   cost: { labour: number; water: number; paint: number; fertiliser: number; total: number };
 }
@@ -290,7 +292,8 @@ export function fieldMowingSimulation(
  * irrigation) ÷ ETc over the last 14 days (department model). Mowing:
  * `fieldMowingSimulation` (the engine's one mowing policy). N: annual N pro rata to the
  * series' days (÷ 365). Water: the gross depth the week plan schedules (each week's net need
- * × SM on the watering days). Paint: the level's repaint interval over the series.
+ * × SM on the watering days). Paint: a first coat at the start, then a touch-up every repaint
+ * interval of the level (`linePlan`).
  */
 export function fieldOutlook(
   field: OutlookField,
@@ -320,6 +323,7 @@ export function fieldOutlook(
   const lines = template ? linePlan(template, params.lines, { days: n, repaintDays: std.lineRepaintDays }) : null;
   const lineHours = lines ? lines.seasonHours : 0;
   const paintConcentrateL = lines ? lines.seasonConcentrateLitres : 0;
+  const paintMixedL = lines ? lines.seasonMixedLitres : 0;
 
   const waterM3 = (grossTotal * field.areaM2) / 1000;
   const labourHours = mowingHours + lineHours;
@@ -353,6 +357,7 @@ export function fieldOutlook(
     nKg: (nGPerM2 * field.areaM2) / 1000,
     productKg: product.productKg,
     waterM3,
+    paintMixedL,
     paintConcentrateL,
     cost,
   };
@@ -366,7 +371,7 @@ function cachedTemplate(sport: Sport): LineTemplate | null {
 }
 
 function emptyTotals(): OutlookTotals {
-  return { fields: 0, areaM2: 0, mowings: 0, mowingHours: 0, lineHours: 0, labourHours: 0, nKg: 0, productKg: 0, waterM3: 0, paintConcentrateL: 0, cost: { labour: 0, water: 0, paint: 0, fertiliser: 0, total: 0 } };
+  return { fields: 0, areaM2: 0, mowings: 0, mowingHours: 0, lineHours: 0, labourHours: 0, nKg: 0, productKg: 0, waterM3: 0, paintMixedL: 0, paintConcentrateL: 0, cost: { labour: 0, water: 0, paint: 0, fertiliser: 0, total: 0 } };
 }
 
 function addInto(t: OutlookTotals, r: OutlookTotals, sign = 1): void {
@@ -379,6 +384,7 @@ function addInto(t: OutlookTotals, r: OutlookTotals, sign = 1): void {
   t.nKg += sign * r.nKg;
   t.productKg += sign * r.productKg;
   t.waterM3 += sign * r.waterM3;
+  t.paintMixedL += sign * r.paintMixedL;
   t.paintConcentrateL += sign * r.paintConcentrateL;
   t.cost.labour += sign * r.cost.labour;
   t.cost.water += sign * r.cost.water;

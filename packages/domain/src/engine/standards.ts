@@ -12,6 +12,7 @@ import type { Grass, GrassSeason, Level, Sport } from '../vocabulary.ts';
 import { fail, requirePositive } from './check.ts';
 import type { Weekday } from './dates.ts';
 import { G_PER_M2_PER_LB_PER_1000FT2 } from './units.ts';
+import type { LineSettings } from './lines.ts';
 import type { TurfKcSettings } from './water.ts';
 
 /** What one maintenance level asks for. */
@@ -205,8 +206,11 @@ export interface DepartmentParameters {
    * uniformity of a catch-can audit; gross need = net × SM, SM = 1 ÷ (0.4 + 0.6 × DU).
    */
   irrigation: { distributionUniformity: number; precipRateMmPerH: number; maxRunMinPerCycle: number; maxCyclesPerDay: number };
-  /** Line marking (trade press: about 200 linear ft of 4 in line per mixed gallon; 2 passes common practice). */
-  lines: { coverageM2PerMixedL: number; dilutionWaterPerPaint: number; passes: number; markerSpeedKmh: number; setupMin: number };
+  /**
+   * Line marking: a first coat and a touch-up coat, each with its coverage of finished line
+   * per litre of mixed paint (all passes of the coat), dilution and passes, and the marker.
+   */
+  lines: LineSettings;
   /**
    * Soil-test sufficiency (department parameter, not a published value): below the level,
    * apply the maintenance rate of P2O5 / K2O in g/m² per year.
@@ -238,6 +242,8 @@ export interface PlanningParameters {
   paintDaysBeforeEvent: number;
   /** A painting this many days or fewer before a booking already serves it. */
   paintFreshDays: number;
+  /** Lines last painted longer ago than this no longer show: the next painting is a first coat, not a touch-up. */
+  firstCoatAfterDays: number;
   /** Routine repaints and feeding wait while the week's mean growth potential is below this (dormant turf). */
   dormantGp: number;
   /** Least gross irrigation need in a week worth a watering order, mm. */
@@ -271,10 +277,13 @@ export const DEFAULT_PARAMETERS: DepartmentParameters = {
   turfKc: { cool: 0.8, warm: 0.6, reducedBy: 0.1 },
   irrigation: { distributionUniformity: 0.7, precipRateMmPerH: 12, maxRunMinPerCycle: 20, maxCyclesPerDay: 4 },
   lines: {
-    // 200 ft × 4 in = 66.7 ft² per US gallon of mixed paint → 1.64 m² per litre.
-    coverageM2PerMixedL: (200 * 0.3048 * 0.1016) / 3.785411784,
-    dilutionWaterPerPaint: 1,
-    passes: 2,
+    // First coat: about 200 linear ft of 4 in line per mixed gallon (trade press), a finished
+    // line painted in two directions (common practice): 66.7 ft² per US gallon → 1.64 m²/L;
+    // mixed 1:1 for a first application (trade guidance, secondary sources).
+    firstCoat: { coverageM2PerMixedL: (200 * 0.3048 * 0.1016) / 3.785411784, dilutionWaterPerPaint: 1, passes: 2 },
+    // Touch-up over lines that still show: one pass at the first coat's rate per pass (so
+    // 400 ft per mixed gallon), mixed 3:1 (trade guidance: 3:1 or 4:1 for touch-ups).
+    touchUp: { coverageM2PerMixedL: (400 * 0.3048 * 0.1016) / 3.785411784, dilutionWaterPerPaint: 3, passes: 1 },
     markerSpeedKmh: 3,
     setupMin: 20,
   },
@@ -291,6 +300,7 @@ export const DEFAULT_PARAMETERS: DepartmentParameters = {
     controllerSetHours: 0.25,
     paintDaysBeforeEvent: 1,
     paintFreshDays: 2,
+    firstCoatAfterDays: 28,
     dormantGp: 0.1,
     minIrrigationMm: 2,
   },

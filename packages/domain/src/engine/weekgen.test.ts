@@ -176,6 +176,19 @@ describe('planFieldWeek', () => {
     expect(lawn.orders.some((o) => o.task === 'paint_lines')).toBe(false);
   });
 
+  test('should paint a first coat where no lines show and touch up lines that do', () => {
+    const touch = planFieldWeek({ field: field({ lastPaintedOn: '2026-05-24' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders.find((o) => o.task === 'paint_lines')!;
+    const first = planFieldWeek({ field: field({ lastPaintedOn: null }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders.find((o) => o.task === 'paint_lines')!;
+    const grownOut = planFieldWeek({ field: field({ lastPaintedOn: '2026-04-20' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders.find((o) => o.task === 'paint_lines')!;
+    expect(touch.details.coat).toBe('touch_up');
+    expect(first.details.coat).toBe('first');
+    expect(grownOut.details.coat).toBe('first');
+    // A touch-up: one pass, half the mixed paint, mixed 3:1 rather than 1:1.
+    expect(touch.details.mixedL as number).toBeCloseTo((first.details.mixedL as number) / 2, 0);
+    expect(touch.details.paintL as number).toBeLessThan((first.details.paintL as number) / 3);
+    expect(touch.plannedHours).toBeLessThan(first.plannedHours);
+  });
+
   test('should plan a field check when the level interval runs out', () => {
     // Level 2 checks every 14 days: 25 May + 14 = 8 June, next week.
     expect(planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders.some((o) => o.task === 'field_check')).toBe(false);

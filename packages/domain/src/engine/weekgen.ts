@@ -281,7 +281,12 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
     const lp = linePlan(template, params.lines, { days: 1, repaintDays: std.lineRepaintDays });
     const painted = [field.lastPaintedOn, ...keptOf('paint_lines').map((k) => k.plannedDate)].filter((d): d is string => d !== null).sort();
     const lastPaintBefore = (d: string) => [...painted].reverse().find((p) => p <= d) ?? null;
+    const firstCoatAfter = planning.firstCoatAfterDays ?? DEFAULT_PARAMETERS.planning.firstCoatAfterDays;
     const paintOn = (date: string, reason: string, latest: string | null, extra: Record<string, unknown>) => {
+      // A first coat where no lines show any more (none on record, or grown out); else a touch-up.
+      const before = [...painted].reverse().find((p) => p < date) ?? null;
+      const first = before === null || isoToDayNumber(date) - isoToDayNumber(before) > firstCoatAfter;
+      const coat = first ? lp.firstCoat : lp.touchUp;
       painted.push(date);
       painted.sort();
       orders.push({
@@ -289,9 +294,9 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
         siteId: field.siteId,
         task: 'paint_lines',
         askedDate: date,
-        plannedHours: round(lp.hoursPerRepaint),
+        plannedHours: round(coat.hours),
         reason,
-        details: { template: template.name, lineLengthM: round(lp.lineLengthM, 0), mixedL: round(lp.mixedLitres, 1), paintL: round(lp.concentrateLitres, 1), ...extra },
+        details: { template: template.name, coat: first ? 'first' : 'touch_up', lineLengthM: round(lp.lineLengthM, 0), mixedL: round(coat.mixedLitres, 1), paintL: round(coat.concentrateLitres, 1), ...extra },
         latestDate: latest,
         flexible: latest === null,
         equipmentKind: 'line_marker',
