@@ -90,12 +90,30 @@ describe('stripes (common practice)', () => {
   });
 });
 
-describe('surface hardness (department setting)', () => {
-  test('should take the safe range from the department parameters, not from a published range for the 2.25 kg tester', () => {
-    const check = { turfCoverPct: 90, weedsPct: 0, bareWornPct: 0, heightMm: 30, hocMm: 25, evenness: 4, hardnessG: 110 };
-    expect(e.surfaceScore(check, { min: 20, max: 100 }).flags).toContain('close_field_caution');
-    expect(e.surfaceScore(check, { min: 20, max: 120 }).flags).not.toContain('close_field_caution');
+describe('surface hardness: a range per tester (ASTM F1936 / F355 missile A; 2.25 kg tester, ASTM F1702, department setting)', () => {
+  const check = { turfCoverPct: 90, weedsPct: 0, bareWornPct: 0, heightMm: 30, hocMm: 25, evenness: 4 };
+
+  test('should hold F1936 / F355 missile A readings to an upper limit of 200 Gmax with 165 or lower as the target (REFERENCES, from memory)', () => {
+    expect(e.DEFAULT_PARAMETERS.hardnessRangesG.f355_missile_a).toMatchObject({ max: 200, target: 165 });
+    expect(e.surfaceScore({ ...check, hardnessG: 201, hardnessDevice: 'f355_missile_a' }).flags).toContain('close_field_caution');
+    expect(e.surfaceScore({ ...check, hardnessG: 170, hardnessDevice: 'f355_missile_a' }).flags).toEqual(['hardness_above_target']);
+  });
+
+  // The engine judged every reading against the 2.25 kg tester's range, so a 150 G reading by
+  // the F1936 method suggested closing a field that is within its limit.
+  test('should no longer suggest closing the field for a 150 G reading by the F1936 method', () => {
+    const r = e.surfaceScore({ ...check, hardnessG: 150, hardnessDevice: 'f355_missile_a' });
+    expect(r.flags).not.toContain('close_field_caution');
+    expect(r.cautions).toEqual([]);
+  });
+
+  test('should take the 2.25 kg tester\'s range from the department parameters, not from a published range (none found)', () => {
+    const reading = { ...check, hardnessG: 110, hardnessDevice: 'portable_2_25kg' as const };
+    const ranges = e.DEFAULT_PARAMETERS.hardnessRangesG;
+    expect(e.surfaceScore(reading, ranges).flags).toContain('close_field_caution');
+    expect(e.surfaceScore(reading, { ...ranges, portable_2_25kg: { min: 20, target: null, max: 120 } }).flags).not.toContain('close_field_caution');
     expect(e.CAUTIONS.hardness).toMatch(/department setting/);
+    expect(e.CAUTIONS.hardness).toMatch(/not comparable/);
   });
 });
 

@@ -57,6 +57,6 @@ describe('standards', () => {
       expect(['cool', 'warm']).toContain(grassSeason(g));
     }
     expect(DEFAULT_PARAMETERS.solubleNLimitGPerM2).toBeCloseTo(4.88, 2);
-    expect(DEFAULT_PARAMETERS.hardnessSafeRangeG.min).toBeLessThan(DEFAULT_PARAMETERS.hardnessSafeRangeG.max);
+    for (const r of Object.values(DEFAULT_PARAMETERS.hardnessRangesG)) expect(r.min ?? 0).toBeLessThan(r.target ?? r.max);
   });
 });

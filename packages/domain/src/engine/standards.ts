@@ -8,7 +8,7 @@
  * them.
  */
 import { GRASSES, GRASS_SEASON, LEVEL_NAMES, LEVELS, SPORTS } from '../vocabulary.ts';
-import type { Grass, GrassSeason, Level, Sport } from '../vocabulary.ts';
+import type { Grass, GrassSeason, HardnessDevice, Level, Sport } from '../vocabulary.ts';
 import { fail, requirePositive } from './check.ts';
 import type { Weekday } from './dates.ts';
 import { G_PER_M2_PER_LB_PER_1000FT2 } from './units.ts';
@@ -134,6 +134,16 @@ export const DEFAULT_STANDARDS: Standards = {
   },
 };
 
+/** The range of Gmax readings a department accepts from one tester. */
+export interface HardnessRange {
+  /** Below this the surface is soft or wet (null: no lower limit). */
+  min: number | null;
+  /** The level the department aims to stay at or under (null: only the limit). */
+  target: number | null;
+  /** Above this, consider closing the field. */
+  max: number;
+}
+
 /** A mower as the engine needs it. */
 export interface MowerSpec {
   kind: 'reel' | 'rotary';
@@ -189,10 +199,12 @@ export interface DepartmentParameters {
   /** Invented demo costs — replace with the department's own prices. */
   costs: { currency: string; waterPerM3: number; labourPerHour: number; paintPerLitre: number; fertiliserPerKg: number };
   /**
-   * Safe surface hardness for the 2.25 kg portable tester (ASTM F1702), Gmax. No published
-   * acceptance range for this tester was found: a department setting.
+   * Surface hardness range per tester, Gmax; readings from different testers are not
+   * comparable. ASTM F1936 / F355 missile A: upper limit 200, 165 or lower as the common
+   * target (REFERENCES, from memory). The 2.25 kg portable tester (ASTM F1702): no published
+   * acceptance range was found, so its range is a department setting.
    */
-  hardnessSafeRangeG: { min: number; max: number };
+  hardnessRangesG: Record<HardnessDevice, HardnessRange>;
   /**
    * Turf crop coefficients of the water budget: annual planning values for turf under
    * mowing, cool-season about 0.8 and warm-season about 0.6 (University of California ANR
@@ -271,7 +283,12 @@ export const DEFAULT_PARAMETERS: DepartmentParameters = {
   minNPerApplicationGPerM2: 0.5 * G_PER_M2_PER_LB_PER_1000FT2,
   travel: { roadFactor: 1.3, speedKmh: 35, loadUnloadMin: 15 },
   costs: { currency: 'USD', waterPerM3: 1.2, labourPerHour: 32, paintPerLitre: 4.5, fertiliserPerKg: 1.6 },
-  hardnessSafeRangeG: { min: 20, max: 100 },
+  hardnessRangesG: {
+    // ASTM F1936 / F355 missile A: upper limit 200 Gmax, 165 or lower as a common target (from memory).
+    f355_missile_a: { min: null, target: 165, max: 200 },
+    // 2.25 kg portable tester: no published acceptance range; demo department setting.
+    portable_2_25kg: { min: 20, target: null, max: 100 },
+  },
   // University of California ANR turfgrass water guidance (Meyer et al. 1985): about 0.8
   // cool-season, 0.6 warm-season; FAO-56 Table 12 note for the reduction.
   turfKc: { cool: 0.8, warm: 0.6, reducedBy: 0.1 },

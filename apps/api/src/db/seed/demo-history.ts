@@ -16,6 +16,8 @@ export interface DemoCheck {
   heightRatio: number;
   daysSinceCut: number;
   gmax: number;
+  /** The demo crews read hardness with the 2.25 kg portable tester. */
+  gmaxDevice: 'portable_2_25kg';
   evenness: number;
   notes: string;
 }
@@ -50,6 +52,7 @@ export function demoFieldHistory(city: DemoCity): DemoHistory[] {
         heightRatio: Math.round((1.05 + rand() * 0.4 + (level === 4 ? 0.2 : 0)) * 100) / 100,
         daysSinceCut: Math.round(1 + rand() * interval),
         gmax: Math.round(closedHard ? 112 + rand() * 10 : 45 + rand() * 40),
+        gmaxDevice: 'portable_2_25kg' as const,
         evenness: Math.max(1, Math.min(5, Math.round(2 + quality * 2.5 + rand()))),
         notes: closedHard ? 'Surface hard in the centre; closed pending aeration and watering' : '',
       };

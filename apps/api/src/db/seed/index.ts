@@ -94,8 +94,8 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
       history[i]!.checks.map((c) => {
         const hocMm = hocFor({ ...f, maintenanceLevel: f.maintenanceLevel as Level }, DEFAULT_STANDARDS);
         const scored = surfaceScore(
-          { turfCoverPct: c.turfCoverPct, weedsPct: c.weedsPct, bareWornPct: c.barePct, heightMm: c.heightRatio * hocMm, hocMm, hardnessG: c.gmax, evenness: c.evenness },
-          DEFAULT_PARAMETERS.hardnessSafeRangeG,
+          { turfCoverPct: c.turfCoverPct, weedsPct: c.weedsPct, bareWornPct: c.barePct, heightMm: c.heightRatio * hocMm, hocMm, hardnessG: c.gmax, hardnessDevice: c.gmaxDevice, evenness: c.evenness },
+          DEFAULT_PARAMETERS.hardnessRangesG,
         );
         return {
           fieldId: fieldRows[i]!.id,
@@ -106,6 +106,7 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
           heightMm: Math.round(c.heightRatio * hocMm),
           daysSinceCut: c.daysSinceCut,
           gmax: c.gmax,
+          gmaxDevice: c.gmaxDevice,
           evenness: c.evenness,
           notes: c.notes,
           score: Math.round(scored.score * 10) / 10,
