@@ -117,6 +117,14 @@ describe('surface hardness: a range per tester (ASTM F1936 / F355 missile A; 2.2
   });
 });
 
+describe('field check shares (arithmetic: cover, weeds and bare/worn divide one surface)', () => {
+  test('should refuse shares that add up to more than 100 % instead of scoring them', () => {
+    const check = { turfCoverPct: 90, weedsPct: 8, bareWornPct: 5, heightMm: 30, hocMm: 25, evenness: 4 };
+    expect(() => e.surfaceScore(check)).toThrow(expect.objectContaining({ code: 'engine/invalid_check' }));
+    expect(e.surfaceScore({ ...check, bareWornPct: 2 }).score).toBeGreaterThan(0);
+  });
+});
+
 describe('cautions', () => {
   test('should defer to the label, local codes and licensed practice', () => {
     expect(e.CAUTIONS.feed).toMatch(/label/);

@@ -123,12 +123,14 @@ export function daylightHours(sunsetHourAngleRad: number): number {
 
 /**
  * Solar radiation Rs (MJ m⁻² d⁻¹) from sunshine hours n, daylight hours N and Ra
- * (Ångström, FAO-56 eq. 35; as = 0.25, bs = 0.50 where no calibration exists).
+ * (Ångström, FAO-56 eq. 35; as = 0.25, bs = 0.50 where no calibration exists). In polar
+ * night (N = 0, so Ra = 0) there is no sun: Rs = 0, and any sunshine hours are refused.
  */
 export function solarRadiationFromSunshine(sunshineH: number, daylightH: number, ra: number, as = 0.25, bs = 0.5): number {
   requireNonNegative(sunshineH, 'invalid_sunshine', 'sunshine hours');
-  requirePositive(daylightH, 'invalid_sunshine', 'daylight hours');
+  requireNonNegative(daylightH, 'invalid_sunshine', 'daylight hours');
   if (sunshineH > daylightH + 1e-9) fail('invalid_sunshine', `sunshine hours (${sunshineH}) exceed daylight hours (${daylightH.toFixed(2)})`);
+  if (daylightH === 0) return 0;
   return (as + bs * (sunshineH / daylightH)) * ra;
 }
 

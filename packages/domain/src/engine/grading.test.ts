@@ -76,6 +76,9 @@ describe('grading', () => {
 
   test('should reject out-of-range checks', () => {
     expect(() => surfaceScore({ ...good, turfCoverPct: 120 }, safe)).toThrow(expect.objectContaining({ code: 'engine/invalid_check' }));
+    // Cover + weeds + bare is the whole surface: 95 + 4 + 3 = 102 % is refused, not scored.
+    expect(() => surfaceScore({ ...good, weedsPct: 4, bareWornPct: 3 }, safe)).toThrow(expect.objectContaining({ code: 'engine/invalid_check', message: expect.stringMatching(/100 %/) }));
+    expect(() => surfaceScore({ ...good, weedsPct: 3, bareWornPct: 2 }, safe)).not.toThrow();
     expect(() => surfaceScore({ ...good, hocMm: 0 }, safe)).toThrow(expect.objectContaining({ code: 'engine/invalid_hoc' }));
     expect(() => surfaceScore({ ...good, evenness: 6 }, safe)).toThrow(expect.objectContaining({ code: 'engine/invalid_check' }));
     expect(() => surfaceScore(good, { ...safe, portable_2_25kg: { min: 100, target: null, max: 20 } })).toThrow(expect.objectContaining({ code: 'engine/invalid_hardness_range' }));

@@ -116,6 +116,8 @@ export function surfaceScore(check: FieldCheckInput, ranges: Record<HardnessDevi
   requireRange(check.turfCoverPct, 0, 100, 'invalid_check', 'turf cover (%)');
   requireRange(check.weedsPct, 0, 100, 'invalid_check', 'weeds (%)');
   requireRange(check.bareWornPct, 0, 100, 'invalid_check', 'bare/worn (%)');
+  const whole = check.turfCoverPct + check.weedsPct + check.bareWornPct;
+  if (whole > 100 + 1e-9) fail('invalid_check', `turf cover, weeds and bare/worn share one surface: together they cannot pass 100 % (got ${Math.round(whole * 10) / 10} %)`, { totalPct: whole });
   requirePositive(check.heightMm, 'invalid_height', 'measured height (mm)');
   requirePositive(check.hocMm, 'invalid_hoc', 'HOC (mm)');
   requireRange(check.evenness, 1, 5, 'invalid_check', 'evenness (1–5)');
