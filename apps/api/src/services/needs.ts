@@ -331,7 +331,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string) {
       input('product', 'Default product (N-P-K)', `${product.n}-${product.p}-${product.k}, ${Math.round(product.slowReleaseShare * 100)} % slow-release N`),
       input('area', 'Field area', field.areaM2, 'm2'),
     ],
-    how: 'Annual N = the grass\u2019s published annual range (upper end when irrigated, lower when not) × the level\u2019s share, −25 % when clippings are returned. It is split over the months in proportion to each month\u2019s mean growth potential (months below GP 0.1 or without weather get none) and into applications that keep soluble N within 1 lb N/1000 ft² (4.9 g/m²). Product = N ÷ N %.',
+    how: 'Annual N = the grass\u2019s published annual range (upper end when irrigated, lower when not) × the level\u2019s share (a level fed below the published range says so), less 25–60 % when clippings are returned, more on older turf (Qian et al. 2003; 25 % when the turf\u2019s age is not recorded). It is split over the months in proportion to each month\u2019s mean growth potential (months below GP 0.1 or without weather get none) and into applications that keep soluble N within 1 lb N/1000 ft² (4.9 g/m²). Product = N ÷ N %.',
     cautions: [CAUTIONS.feed],
   };
 

@@ -125,6 +125,8 @@ export interface OutlookField {
   /** Line layout; default the sport's template (none for lawns and multi-use). */
   lineTemplate?: LineTemplate | null;
   distributionUniformity?: number;
+  /** Years since the turf was established (returned clippings save more N on older turf); unknown: young turf. */
+  turfAgeYears?: number | null;
 }
 
 export interface OutlookTotals {
@@ -315,7 +317,7 @@ export function fieldOutlook(
   const mowerKind = mowerTypeFor(hocMm, params.mowerSettings);
   const mowingHours = sim.mowings.length * hoursPerMowing(field.areaM2, params.mowers[mowerKind]);
 
-  const nYear = annualNitrogen({ grass: field.grass, level: field.maintenanceLevel, clippings: field.clippings, irrigated: share > 0 }, standards);
+  const nYear = annualNitrogen({ grass: field.grass, level: field.maintenanceLevel, clippings: field.clippings, irrigated: share > 0, turfAgeYears: field.turfAgeYears ?? null }, standards);
   const nGPerM2 = nYear.gPerM2 * Math.min(1, n / 365);
   const product = productForArea(nGPerM2, params.fertiliserProduct, field.areaM2, params.fertiliserBagKg, params.costs.fertiliserPerKg);
 
