@@ -23,8 +23,15 @@ export function degToRad(deg: number): number {
 /** Atmospheric pressure P (kPa) from elevation z (m) (FAO-56 eq. 7). */
 export function atmosphericPressure(elevationM: number): number {
   requireRange(elevationM, -500, 9000, 'invalid_elevation', 'elevation (m)');
-  return 101.3 * ((293 - 0.0065 * elevationM) / 293) ** 5.26;
+  // A station's elevation is the same every day: keep the last answer rather than a power per day.
+  if (elevationM !== lastElevationM) {
+    lastElevationM = elevationM;
+    lastPressureKPa = 101.3 * ((293 - 0.0065 * elevationM) / 293) ** 5.26;
+  }
+  return lastPressureKPa;
 }
+let lastElevationM = Number.NaN;
+let lastPressureKPa = Number.NaN;
 
 /** Psychrometric constant γ (kPa °C⁻¹) from pressure P (kPa) (FAO-56 eq. 8). */
 export function psychrometricConstant(pressureKPa: number): number {
@@ -105,15 +112,13 @@ export function sunsetHourAngle(latRad: number, declinationRad: number): number 
 
 /** Extraterrestrial radiation Ra (MJ m⁻² d⁻¹) for latitude (rad) and day of year (FAO-56 eq. 21). */
 export function extraterrestrialRadiation(latRad: number, doy: number): number {
-  const dr = inverseRelativeDistance(doy);
   const d = solarDeclination(doy);
-  const ws = sunsetHourAngle(latRad, d);
-  return (
-    ((24 * 60) / Math.PI) *
-    SOLAR_CONSTANT *
-    dr *
-    (ws * Math.sin(latRad) * Math.sin(d) + Math.cos(latRad) * Math.cos(d) * Math.sin(ws))
-  );
+  return raFromTerms(latRad, inverseRelativeDistance(doy), d, sunsetHourAngle(latRad, d));
+}
+
+/** FAO-56 eq. 21 from its terms dr, δ and ωs (computed once per day by `et0PenmanMonteith`). */
+function raFromTerms(latRad: number, dr: number, d: number, ws: number): number {
+  return ((24 * 60) / Math.PI) * SOLAR_CONSTANT * dr * (ws * Math.sin(latRad) * Math.sin(d) + Math.cos(latRad) * Math.cos(d) * Math.sin(ws));
 }
 
 /** Daylight hours N = 24 ωs / π (FAO-56 eq. 34). */
@@ -327,7 +332,7 @@ export function et0PenmanMonteith(input: Et0Input): Et0Result {
   const declination = solarDeclination(input.doy);
   const ws = sunsetHourAngle(latRad, declination);
   const daylightH = daylightHours(ws);
-  const ra = extraterrestrialRadiation(latRad, input.doy);
+  const ra = raFromTerms(latRad, dr, declination, ws);
   const rso = clearSkyRadiation(ra, input.elevationM);
 
   let rs: number;

@@ -58,11 +58,14 @@ export function dailyGrowthMm(maxRateMmPerDay: number, tMeanC: number, season: G
   return maxRateMmPerDay * growthPotential(tMeanC, season) * n * w;
 }
 
+/** Least water modifier: turf keeps some growth under drought until dormancy (department model). */
+export const WATER_MODIFIER_FLOOR = 0.2;
+
 /**
  * Water modifier from supply vs demand over a period: min(1, supply ÷ ETc), never below
  * `floor` (turf keeps some growth until dormancy). Department model, no published source.
  */
-export function waterModifier(supplyMm: number, etcMm: number, floor = 0.2): number {
+export function waterModifier(supplyMm: number, etcMm: number, floor = WATER_MODIFIER_FLOOR): number {
   requireNonNegative(supplyMm, 'invalid_water', 'water supply (mm)');
   requireNonNegative(etcMm, 'invalid_water', 'ETc (mm)');
   if (etcMm === 0) return 1;

@@ -479,11 +479,31 @@ export interface CoatPlan extends PaintNeed {
   hours: number;
 }
 
+interface TemplateMeasures {
+  lengthM: number;
+  areaM2: number;
+  equivalentLengthM: number;
+  elements: LineElement[];
+}
+const measured = new WeakMap<LineTemplate, TemplateMeasures>();
+/**
+ * Length, painted area and elements of a layout, measured once per template object: a season
+ * outlook asks them for every field, and a football layout has some 900 pieces.
+ */
+function measuresOf(template: LineTemplate): TemplateMeasures {
+  let m = measured.get(template);
+  if (!m) {
+    const areaM2 = templatePaintedAreaM2(template);
+    m = { lengthM: totalLineLengthM(template), areaM2, equivalentLengthM: areaM2 / template.lineWidthM, elements: lineElements(template) };
+    measured.set(template, m);
+  }
+  return m;
+}
+
 /** One coat of a whole layout: paint from its painted area (numerals are wider strokes), labour from its equivalent length. */
 export function coatPlan(template: LineTemplate, coat: PaintSettings, marker: { markerSpeedKmh: number; setupMin: number }): CoatPlan {
-  const area = templatePaintedAreaM2(template);
-  const equivalent = area / template.lineWidthM;
-  return { ...paintNeed(equivalent, template.lineWidthM, coat), lineLengthM: totalLineLengthM(template), hours: markingHours(equivalent, coat.passes, marker.markerSpeedKmh, marker.setupMin) };
+  const { lengthM, equivalentLengthM } = measuresOf(template);
+  return { ...paintNeed(equivalentLengthM, template.lineWidthM, coat), lineLengthM: lengthM, hours: markingHours(equivalentLengthM, coat.passes, marker.markerSpeedKmh, marker.setupMin) };
 }
 
 export interface LinePlan {
@@ -516,21 +536,21 @@ export function linePlan(template: LineTemplate, s: LineSettings, season: { days
   const repaints = repaintsInSeason(season.days, season.repaintDays, season.extraEvents ?? 0);
   const firstCoats = Math.min(repaints, requireNonNegative(season.firstCoats ?? 1, 'invalid_events', 'first coats'));
   const touchUps = repaints - firstCoats;
-  const total = (k: keyof PaintNeed | 'hours') => firstCoat[k] * firstCoats + touchUp[k] * touchUps;
   return {
     templateId: template.id,
     lineLengthM: firstCoat.lineLengthM,
     paintedAreaM2: firstCoat.paintedAreaM2,
-    equivalentLengthM: templatePaintedAreaM2(template) / template.lineWidthM,
-    elements: lineElements(template),
+    equivalentLengthM: measuresOf(template).equivalentLengthM,
+    // Shared between the plans of one template: read it, do not change it.
+    elements: measuresOf(template).elements,
     firstCoat,
     touchUp,
     repaints,
     firstCoats,
     touchUps,
-    seasonMixedLitres: total('mixedLitres'),
-    seasonConcentrateLitres: total('concentrateLitres'),
-    seasonWaterLitres: total('waterLitres'),
-    seasonHours: total('hours'),
+    seasonMixedLitres: firstCoat.mixedLitres * firstCoats + touchUp.mixedLitres * touchUps,
+    seasonConcentrateLitres: firstCoat.concentrateLitres * firstCoats + touchUp.concentrateLitres * touchUps,
+    seasonWaterLitres: firstCoat.waterLitres * firstCoats + touchUp.waterLitres * touchUps,
+    seasonHours: firstCoat.hours * firstCoats + touchUp.hours * touchUps,
   };
 }

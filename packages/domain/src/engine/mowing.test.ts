@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { checkCut, checkMowerForHoc, hocSetting, levelIntervalDays, mowTriggerHeightMm, mowerTypeFor, mowingPolicy, overdueDate, simulateMowing } from './mowing.ts';
+import { checkCut, checkMowerForHoc, countMowings, hocSetting, levelIntervalDays, mowTriggerHeightMm, mowerTypeFor, mowingPolicy, overdueDate, simulateMowing } from './mowing.ts';
 
 describe('mowing', () => {
   test('should trigger at 1.5 × HOC and flag cuts removing more than a third', () => {
@@ -54,6 +54,17 @@ describe('mowing', () => {
     expect(sim.mowings.every((m) => m.date === '2025-05-05' || m.date === '2025-05-12')).toBe(true);
     expect(sim.overdueDates.length).toBeGreaterThan(0);
     expect(sim.mowings.some((m) => m.scalpingRisk)).toBe(true);
+  });
+
+  test('should count what the simulation mows, without dates', () => {
+    let seed = 7;
+    const rand = () => ((seed = (seed * 16807) % 2147483647) / 2147483647);
+    for (let run = 0; run < 50; run++) {
+      const growth = Array.from({ length: 120 }, () => rand() * 6);
+      const options = { startDate: '2026-04-01', maxIntervalDays: 1 + Math.floor(rand() * 10), minMowingsPerWeek: rand() * 3, frequencyMinGrowthMm: rand() * 3, mowingDays: rand() < 0.5 ? (['mon', 'wed', 'fri'] as const) : undefined };
+      const sim = simulateMowing(25.4, growth, 25.4, options);
+      expect(countMowings(25.4, growth, 25.4, options)).toEqual({ mowings: sim.mowings.length, growthMowings: sim.growthMowings, mowingsPerWeek: sim.mowingsPerWeek, overdueDays: sim.overdueDates.length });
+    }
   });
 
   test('should predict the overdue date from a forecast', () => {

@@ -3,7 +3,7 @@
  * One-third rule (common practice): remove no more than a third of the leaf height in one
  * cut, i.e. mow before the grass exceeds 1.5 × HOC (at 2 in HOC, mow before 3 in).
  */
-import { dayNumberToIso, isoToDayNumber, weekdayOf } from './dates.ts';
+import { dayNumberToIso, isoToDayNumber } from './dates.ts';
 import type { Weekday } from './dates.ts';
 import { fail, requireNonNegative, requirePositive } from './check.ts';
 import { DEFAULT_PARAMETERS } from './standards.ts';
@@ -83,87 +83,147 @@ export interface MowingSimulation {
  * a cut is HOC; growth of day i is added at the end of day i.
  */
 export function simulateMowing(hocMm: number, growthMmPerDay: readonly number[], startHeightMm: number, options: MowingOptions): MowingSimulation {
+  const cuts: number[] = [];
+  const heights: number[] = [];
+  const byGrowth: boolean[] = [];
+  const overdue: number[] = [];
+  const run = runMowing(hocMm, growthMmPerDay, startHeightMm, options, { cuts, heights, byGrowth, overdue });
+  const mowings: MowingEvent[] = new Array<MowingEvent>(cuts.length);
+  const intervalsDays: number[] = new Array<number>(cuts.length);
+  let prev = -1 - (options.daysSinceCutAtStart ?? 0);
+  let between = 0;
+  for (let k = 0; k < cuts.length; k++) {
+    const i = cuts[k] as number;
+    const h = heights[k] as number;
+    const cut = checkCut(h, hocMm);
+    mowings[k] = { date: dayNumberToIso(run.day0 + i), dayIndex: i, heightBeforeMm: h, removalFraction: cut.removalFraction, scalpingRisk: cut.scalpingRisk, reason: byGrowth[k] ? 'growth' : 'frequency' };
+    intervalsDays[k] = i - prev;
+    if (k > 0) between += i - prev;
+    prev = i;
+  }
+  const n = growthMmPerDay.length;
+  return {
+    hocMm,
+    triggerHeightMm: run.trigger,
+    mowings,
+    intervalsDays,
+    meanIntervalDays: mowings.length > 1 ? between / (mowings.length - 1) : null,
+    mowingsPerWeek: run.mowingsPerWeek,
+    growthMowings: run.growthMowings,
+    frequencyMowings: run.mowings - run.growthMowings,
+    overdueIfNotMowedDate: run.overdueIfNotMowedIndex === null ? null : dayNumberToIso(run.day0 + Math.min(run.overdueIfNotMowedIndex, n)),
+    overdueDates: overdue.map((i) => dayNumberToIso(run.day0 + i)),
+    maxHeightMm: run.maxHeightMm,
+  };
+}
+
+/** The counts of a mowing run, as a season outlook needs them. */
+export interface MowingCounts {
+  mowings: number;
+  growthMowings: number;
+  mowingsPerWeek: number;
+  /** Days on which the grass stood above 1.5 × HOC. */
+  overdueDays: number;
+}
+
+/**
+ * The counts of `simulateMowing` without its dates and events: the same run, for outlooks that
+ * add up thousands of fields.
+ */
+export function countMowings(hocMm: number, growthMmPerDay: readonly number[], startHeightMm: number, options: MowingOptions): MowingCounts {
+  const run = runMowing(hocMm, growthMmPerDay, startHeightMm, options, null);
+  return { mowings: run.mowings, growthMowings: run.growthMowings, mowingsPerWeek: run.mowingsPerWeek, overdueDays: run.overdueDays };
+}
+
+interface MowingRun {
+  day0: number;
+  trigger: number;
+  mowings: number;
+  growthMowings: number;
+  mowingsPerWeek: number;
+  overdueDays: number;
+  /** Index of the day the unmown grass would first stand above 1.5 × HOC (n: the day after the series), or null. */
+  overdueIfNotMowedIndex: number | null;
+  maxHeightMm: number;
+}
+
+/** The one mowing decision of `simulateMowing` and `countMowings`; records cuts and overdue days when asked. */
+function runMowing(
+  hocMm: number,
+  growthMmPerDay: readonly number[],
+  startHeightMm: number,
+  options: MowingOptions,
+  record: { cuts: number[]; heights: number[]; byGrowth: boolean[]; overdue: number[] } | null,
+): MowingRun {
   const trigger = mowTriggerHeightMm(hocMm);
   requirePositive(startHeightMm, 'invalid_height', 'start height (mm)');
   const maxInterval = maxIntervalFrom(options);
   const minGrowthForFrequency = requireNonNegative(options.frequencyMinGrowthMm ?? 0, 'invalid_growth', 'minimum growth for a frequency cut (mm)');
-  const allowed = new Set<Weekday>(options.mowingDays ?? ['sun', 'mon', 'tue', 'wed', 'thu', 'fri', 'sat']);
-  if (allowed.size === 0) fail('invalid_mowing_days', 'at least one mowing day is needed');
+  const mowingDays = options.mowingDays ?? WEEK;
+  if (mowingDays.length === 0) fail('invalid_mowing_days', 'at least one mowing day is needed');
+  // Weekday flags by index (0 = Sunday); a name that is no weekday allows no day.
+  const allowedByWeekday = [false, false, false, false, false, false, false];
+  for (const d of mowingDays) {
+    const k = WEEK.indexOf(d);
+    if (k >= 0) allowedByWeekday[k] = true;
+  }
   const n = growthMmPerDay.length;
   const day0 = isoToDayNumber(options.startDate);
-  const dateAt = (i: number): string => dayNumberToIso(day0 + i);
-  for (const g of growthMmPerDay) requireNonNegative(g, 'invalid_growth', 'daily growth (mm)');
-  const days: Weekday[] = [];
-  const first = weekdayOf(options.startDate);
-  const firstIdx = WEEK.indexOf(first);
-  for (let i = 0; i < n; i++) days.push(WEEK[(firstIdx + i) % 7] as Weekday);
+  for (let i = 0; i < n; i++) {
+    const g = growthMmPerDay[i] as number;
+    if (!(g >= 0) || g === Infinity) requireNonNegative(g, 'invalid_growth', 'daily growth (mm)');
+  }
+  // 1970-01-01 (day 0) was a Thursday (index 4). No closures here: this runs for every field.
+  const firstIdx = (((day0 + 4) % 7) + 7) % 7;
   // Index of the next allowed day strictly after i (or n when none left).
-  const nextAllowed = new Array<number>(n).fill(n);
+  const nextAllowed = new Int32Array(n);
   let next = n;
   for (let i = n - 1; i >= 0; i--) {
     nextAllowed[i] = next;
-    if (allowed.has(days[i] as Weekday)) next = i;
+    if (allowedByWeekday[(firstIdx + i) % 7]) next = i;
   }
 
-  const mowings: MowingEvent[] = [];
-  const overdueDates: string[] = [];
+  let mowings = 0;
+  let growthMowings = 0;
+  let overdueDays = 0;
   let height = startHeightMm;
   let lastCut = -1 - (options.daysSinceCutAtStart ?? 0);
   let maxHeight = startHeightMm;
-  let overdueIfNotMowed: string | null = null;
+  let overdueIfNotMowed: number | null = null;
   let unmown = startHeightMm;
   for (let i = 0; i < n; i++) {
-    if (height > trigger + 1e-9) overdueDates.push(dateAt(i));
-    if (overdueIfNotMowed === null && unmown > trigger + 1e-9) overdueIfNotMowed = dateAt(i);
-    if (allowed.has(days[i] as Weekday)) {
+    if (height > trigger + 1e-9) {
+      overdueDays++;
+      record?.overdue.push(i);
+    }
+    if (overdueIfNotMowed === null && unmown > trigger + 1e-9) overdueIfNotMowed = i;
+    const today = growthMmPerDay[i] as number;
+    if (allowedByWeekday[(firstIdx + i) % 7]) {
       const j = nextAllowed[i] as number;
       // Height at the start of the next mowing day if not cut today (growth of days i..j−1).
       let ahead = height;
       for (let k = i; k < j && k < n; k++) ahead += growthMmPerDay[k] as number;
-      const byGrowth = j < n ? ahead > trigger : height + (growthMmPerDay[i] as number) > trigger;
+      const byGrowth = j < n ? ahead > trigger : height + today > trigger;
       const byFrequency = maxInterval !== null && (j < n ? j - lastCut > maxInterval : i - lastCut >= maxInterval);
       const frequencyDue = byFrequency && height - hocMm >= minGrowthForFrequency;
       if ((byGrowth || frequencyDue) && height > hocMm + 1e-9) {
-        const cut = checkCut(height, hocMm);
-        mowings.push({
-          date: dateAt(i),
-          dayIndex: i,
-          heightBeforeMm: height,
-          removalFraction: cut.removalFraction,
-          scalpingRisk: cut.scalpingRisk,
-          reason: byGrowth ? 'growth' : 'frequency',
-        });
+        mowings++;
+        if (byGrowth) growthMowings++;
+        if (record) {
+          record.cuts.push(i);
+          record.heights.push(height);
+          record.byGrowth.push(byGrowth);
+        }
         height = hocMm;
         lastCut = i;
       }
     }
-    height += growthMmPerDay[i] as number;
-    unmown += growthMmPerDay[i] as number;
+    height += today;
+    unmown += today;
     if (height > maxHeight) maxHeight = height;
   }
-  if (overdueIfNotMowed === null && unmown > trigger + 1e-9 && n > 0) overdueIfNotMowed = dateAt(n);
-
-  const intervalsDays: number[] = [];
-  let prev = -1 - (options.daysSinceCutAtStart ?? 0);
-  for (const m of mowings) {
-    intervalsDays.push(m.dayIndex - prev);
-    prev = m.dayIndex;
-  }
-  const between = intervalsDays.slice(1);
-  const meanIntervalDays = between.length ? between.reduce((s, v) => s + v, 0) / between.length : null;
-  return {
-    hocMm,
-    triggerHeightMm: trigger,
-    mowings,
-    intervalsDays,
-    meanIntervalDays,
-    mowingsPerWeek: n > 0 ? (mowings.length / n) * 7 : 0,
-    growthMowings: mowings.filter((m) => m.reason === 'growth').length,
-    frequencyMowings: mowings.filter((m) => m.reason === 'frequency').length,
-    overdueIfNotMowedDate: overdueIfNotMowed,
-    overdueDates,
-    maxHeightMm: maxHeight,
-  };
+  if (overdueIfNotMowed === null && unmown > trigger + 1e-9 && n > 0) overdueIfNotMowed = n;
+  return { day0, trigger, mowings, growthMowings, mowingsPerWeek: n > 0 ? (mowings / n) * 7 : 0, overdueDays, overdueIfNotMowedIndex: overdueIfNotMowed, maxHeightMm: maxHeight };
 }
 
 /**

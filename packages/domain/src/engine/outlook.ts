@@ -5,20 +5,20 @@
  * the water-stress bookkeeping documented below.
  */
 import type { Clippings, Grass, IrrigationKind, Level, Sport } from '../vocabulary.ts';
-import { fail, requireNonNegative, requireRange, requireTmaxTmin } from './check.ts';
+import { fail, requireFraction, requireNonNegative, requireRange, requireTmaxTmin } from './check.ts';
 import { WEEKDAYS, dayOfYear, isoToDayNumber, weekdayOf } from './dates.ts';
 import { et0Hargreaves, et0PenmanMonteith } from './fao56.ts';
 import { annualNitrogen, productForArea } from './feed.ts';
-import { growthPotential, waterModifier } from './growth.ts';
+import { WATER_MODIFIER_FLOOR, growthPotential } from './growth.ts';
 import { hoursPerMowing } from './labour.ts';
 import { defaultTemplateFor, linePlan } from './lines.ts';
 import type { LineTemplate } from './lines.ts';
-import { mowerTypeFor, mowingPolicy, simulateMowing } from './mowing.ts';
-import type { MowingSimulation } from './mowing.ts';
+import { countMowings, mowerTypeFor, mowingPolicy, simulateMowing } from './mowing.ts';
+import type { MowingOptions, MowingSimulation } from './mowing.ts';
 import type { Weekday } from './dates.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, grassSeason, hocFor, levelStandard } from './standards.ts';
 import type { DepartmentParameters, Standards } from './standards.ts';
-import { departmentTurfKc, effectiveRainMm, netIrrigationMm, schedulingMultiplier, wateringDayMinutes, weekIrrigation } from './water.ts';
+import { departmentTurfKc, effectiveRainMm, schedulingMultiplier, wateringDayMinutes, weekIrrigation } from './water.ts';
 
 /** One day of weather. Optional fields feed FAO-56 Penman–Monteith; without them, Hargreaves. */
 export interface DailyWeather {
@@ -72,6 +72,7 @@ export function prepareWeather(days: readonly DailyWeather[], site: { latDeg: nu
     hargreavesDays: 0,
   };
   let prevDay = Number.NaN;
+  let prevDoy = 0;
   for (let i = 0; i < n; i++) {
     const d = days[i] as DailyWeather;
     const dn = isoToDayNumber(d.date);
@@ -79,20 +80,29 @@ export function prepareWeather(days: readonly DailyWeather[], site: { latDeg: nu
     prevDay = dn;
     requireTmaxTmin(d.tmaxC, d.tminC);
     requireNonNegative(d.rainMm, 'invalid_rain', `rain on ${d.date} (mm)`);
-    const doy = dayOfYear(d.date);
+    // Consecutive days: the day of the year counts on, back to 1 on 1 January.
+    const doy = i === 0 || isNewYear(d.date) ? dayOfYear(d.date) : prevDoy + 1;
+    prevDoy = doy;
     const hasMore = d.rhMaxPct !== undefined || d.rhMeanPct !== undefined || d.tdewC !== undefined || d.windMs !== undefined || d.sunshineH !== undefined || d.solarMJ !== undefined;
     let et0: number;
     if (hasMore) {
-      const input: Parameters<typeof et0PenmanMonteith>[0] = { tmaxC: d.tmaxC, tminC: d.tminC, latDeg: site.latDeg, elevationM: site.elevationM, doy, coastal: site.coastal ?? false };
-      if (d.rhMaxPct !== undefined) input.rhMaxPct = d.rhMaxPct;
-      if (d.rhMinPct !== undefined) input.rhMinPct = d.rhMinPct;
-      if (d.rhMeanPct !== undefined) input.rhMeanPct = d.rhMeanPct;
-      if (d.tdewC !== undefined) input.tdewC = d.tdewC;
-      if (d.windMs !== undefined) input.windMs = d.windMs;
-      if (d.windHeightM !== undefined) input.windHeightM = d.windHeightM;
-      if (d.sunshineH !== undefined) input.sunshineH = d.sunshineH;
-      if (d.solarMJ !== undefined) input.solarMJ = d.solarMJ;
-      et0 = et0PenmanMonteith(input).et0Mm;
+      // One object shape for every day (missing values stay undefined, which the equation treats as missing).
+      et0 = et0PenmanMonteith({
+        tmaxC: d.tmaxC,
+        tminC: d.tminC,
+        latDeg: site.latDeg,
+        elevationM: site.elevationM,
+        doy,
+        coastal: site.coastal ?? false,
+        rhMaxPct: d.rhMaxPct,
+        rhMinPct: d.rhMinPct,
+        rhMeanPct: d.rhMeanPct,
+        tdewC: d.tdewC,
+        windMs: d.windMs,
+        windHeightM: d.windHeightM,
+        sunshineH: d.sunshineH,
+        solarMJ: d.solarMJ,
+      }).et0Mm;
     } else {
       et0 = et0Hargreaves(d.tmaxC, d.tminC, site.latDeg, doy);
       w.hargreavesDays++;
@@ -107,6 +117,11 @@ export function prepareWeather(days: readonly DailyWeather[], site: { latDeg: nu
     w.gpWarm[i] = growthPotential(t, 'warm');
   }
   return w;
+}
+
+/** True for an ISO date of 1 January (`????-01-01`). */
+function isNewYear(iso: string): boolean {
+  return iso.charCodeAt(5) === 48 && iso.charCodeAt(6) === 49 && iso.charCodeAt(8) === 48 && iso.charCodeAt(9) === 49;
 }
 
 /** What the outlook needs of a field. */
@@ -217,21 +232,23 @@ export function fieldDailySeries(field: OutlookField, weather: PreparedWeather, 
   for (let i = 0; i < n; i++) etcDaily[i] = kc * Math.max(0, weather.et0Mm[i] as number);
 
   if (share > 0) {
+    requireFraction(share, 'invalid_share', 'share of ETc', true);
     const irr = { ...DEFAULT_PARAMETERS.irrigation, ...params.irrigation };
     const planning = params.planning ?? DEFAULT_PARAMETERS.planning;
-    // Positions (0 = Monday) of the watering days in a Monday-to-Sunday week.
-    const wateringPos = [...new Set(planning.wateringDays)].map((d) => (WEEKDAYS.indexOf(d) + 6) % 7).sort((a, b) => a - b);
-    // Index of the Monday on or before the first day (negative when the series starts mid-week).
-    let monday = -((WEEKDAYS.indexOf(weekdayOf(weather.startDate)) + 6) % 7);
+    const wateringPos = wateringPositions(planning.wateringDays);
+    let monday = firstMondayIndex(weather);
     for (; monday < n; monday += 7) {
       const a = Math.max(0, monday);
       const b = Math.min(n, monday + 7);
       let etc = 0;
       let rain = 0;
       for (let i = a; i < b; i++) {
-        etc += etcDaily[i] as number;
-        rain += eff[i] as number;
-        grossDaily[i] = netIrrigationMm(etcDaily[i] as number, eff[i] as number, share) * sm;
+        const e = etcDaily[i] as number;
+        const r = eff[i] as number;
+        etc += e;
+        rain += r;
+        // netIrrigationMm for one day, inline: this runs for every day of every field.
+        grossDaily[i] = Math.max(0, share * e - r) * sm;
       }
       const week = weekIrrigation(etc, rain, share, du, planning.minIrrigationMm);
       let applied = 0;
@@ -258,9 +275,34 @@ export function fieldDailySeries(field: OutlookField, weather: PreparedWeather, 
       etcWindow -= etcDaily[k] as number;
       supplyWindow -= (eff[k] as number) + (irrigation[k] as number) / sm;
     }
-    growth[i] = gmax * (gp[i] as number) * waterModifier(Math.max(0, supplyWindow), Math.max(0, etcWindow));
+    // waterModifier(supply, ETc), inline.
+    const demand = Math.max(0, etcWindow);
+    const modifier = demand === 0 ? 1 : Math.max(WATER_MODIFIER_FLOOR, Math.min(1, Math.max(0, supplyWindow) / demand));
+    growth[i] = gmax * (gp[i] as number) * modifier;
   }
   return { season, kc, share, gmaxMmPerDay: gmax, du, gp, growthMm: growth, etcMm: etcDaily, grossNeedMm: grossDaily, irrigationMm: irrigation, weeklyGrossMm };
+}
+
+const mondayIndexOf = new WeakMap<PreparedWeather, number>();
+/** Index of the Monday on or before a series' first day (0 or negative), once per series. */
+function firstMondayIndex(weather: PreparedWeather): number {
+  let m = mondayIndexOf.get(weather);
+  if (m === undefined) {
+    m = -((WEEKDAYS.indexOf(weekdayOf(weather.startDate)) + 6) % 7);
+    mondayIndexOf.set(weather, m);
+  }
+  return m;
+}
+
+const positionsOf = new WeakMap<readonly Weekday[], number[]>();
+/** Positions (0 = Monday) of the watering days in a Monday-to-Sunday week, once per setting. */
+function wateringPositions(days: readonly Weekday[]): number[] {
+  let p = positionsOf.get(days);
+  if (!p) {
+    p = [...new Set(days)].map((d) => (WEEKDAYS.indexOf(d) + 6) % 7).sort((a, b) => a - b);
+    positionsOf.set(days, p);
+  }
+  return p;
 }
 
 /** Options of a season outlook. */
@@ -284,8 +326,13 @@ export function fieldMowingSimulation(
   daily: FieldDailySeries = fieldDailySeries(field, weather, standards, params),
 ): MowingSimulation {
   const hocMm = hocFor(field, standards);
+  return simulateMowing(hocMm, daily.growthMm, hocMm, outlookMowingOptions(hocMm, field, weather, standards, options));
+}
+
+/** The options of the outlook's mowing run: from the first day of weather, with the one mowing policy. */
+function outlookMowingOptions(hocMm: number, field: OutlookField, weather: PreparedWeather, standards: Standards, options: OutlookOptions): MowingOptions {
   const policy = mowingPolicy(hocMm, levelStandard(field.maintenanceLevel, standards));
-  return simulateMowing(hocMm, daily.growthMm, hocMm, { startDate: weather.startDate, ...policy, ...(options.mowingDays ? { mowingDays: options.mowingDays } : {}) });
+  return { startDate: weather.startDate, ...policy, ...(options.mowingDays ? { mowingDays: options.mowingDays } : {}) };
 }
 
 /**
@@ -310,12 +357,15 @@ export function fieldOutlook(
   const n = weather.dates.length;
   const daily = fieldDailySeries(field, weather, standards, params);
   const { share } = daily;
-  const grossTotal = daily.weeklyGrossMm.reduce((s, v) => s + v, 0);
-  const etcTotal = daily.etcMm.reduce((s, v) => s + v, 0);
+  let grossTotal = 0;
+  for (const v of daily.weeklyGrossMm) grossTotal += v;
+  let etcTotal = 0;
+  for (let i = 0; i < n; i++) etcTotal += daily.etcMm[i] as number;
 
-  const sim = fieldMowingSimulation(field, weather, standards, params, options, daily);
+  // The counts of `fieldMowingSimulation`'s run, without building a date per cut.
+  const sim = countMowings(hocMm, daily.growthMm, hocMm, outlookMowingOptions(hocMm, field, weather, standards, options));
   const mowerKind = mowerTypeFor(hocMm, params.mowerSettings);
-  const mowingHours = sim.mowings.length * hoursPerMowing(field.areaM2, params.mowers[mowerKind]);
+  const mowingHours = sim.mowings * hoursPerMowing(field.areaM2, params.mowers[mowerKind]);
 
   const nYear = annualNitrogen({ grass: field.grass, level: field.maintenanceLevel, clippings: field.clippings, irrigated: share > 0, turfAgeYears: field.turfAgeYears ?? null }, standards);
   const nGPerM2 = nYear.gPerM2 * Math.min(1, n / 365);
@@ -346,13 +396,13 @@ export function fieldOutlook(
     hocMm,
     mowerKind,
     mowingsPerWeek: sim.mowingsPerWeek,
-    overdueDays: sim.overdueDates.length,
+    overdueDays: sim.overdueDays,
     nGPerM2,
     grossIrrigationMm: grossTotal,
     etcMm: etcTotal,
     fields: 1,
     areaM2: field.areaM2,
-    mowings: sim.mowings.length,
+    mowings: sim.mowings,
     mowingHours,
     lineHours,
     labourHours,
