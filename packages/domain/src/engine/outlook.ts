@@ -7,7 +7,7 @@
 import type { Clippings, Grass, IrrigationKind, Level, Sport } from '../vocabulary.ts';
 import { fail, requireFraction, requireNonNegative, requireRange, requireTmaxTmin } from './check.ts';
 import { WEEKDAYS, dayOfYear, isoToDayNumber, weekdayOf } from './dates.ts';
-import { et0Hargreaves, et0PenmanMonteith } from './fao56.ts';
+import { et0Hargreaves, et0PenmanMonteithDay, et0Station } from './fao56.ts';
 import { annualNitrogen, productForArea } from './feed.ts';
 import { WATER_MODIFIER_FLOOR, growthPotential } from './growth.ts';
 import { hoursPerMowing } from './labour.ts';
@@ -71,6 +71,7 @@ export function prepareWeather(days: readonly DailyWeather[], site: { latDeg: nu
     gpWarm: new Float64Array(n),
     hargreavesDays: 0,
   };
+  const station = et0Station(site.latDeg, site.elevationM, site.coastal ?? false);
   let prevDay = Number.NaN;
   let prevDoy = 0;
   for (let i = 0; i < n; i++) {
@@ -86,23 +87,7 @@ export function prepareWeather(days: readonly DailyWeather[], site: { latDeg: nu
     const hasMore = d.rhMaxPct !== undefined || d.rhMeanPct !== undefined || d.tdewC !== undefined || d.windMs !== undefined || d.sunshineH !== undefined || d.solarMJ !== undefined;
     let et0: number;
     if (hasMore) {
-      // One object shape for every day (missing values stay undefined, which the equation treats as missing).
-      et0 = et0PenmanMonteith({
-        tmaxC: d.tmaxC,
-        tminC: d.tminC,
-        latDeg: site.latDeg,
-        elevationM: site.elevationM,
-        doy,
-        coastal: site.coastal ?? false,
-        rhMaxPct: d.rhMaxPct,
-        rhMinPct: d.rhMinPct,
-        rhMeanPct: d.rhMeanPct,
-        tdewC: d.tdewC,
-        windMs: d.windMs,
-        windHeightM: d.windHeightM,
-        sunshineH: d.sunshineH,
-        solarMJ: d.solarMJ,
-      }).et0Mm;
+      et0 = et0PenmanMonteithDay(station, doy, d);
     } else {
       et0 = et0Hargreaves(d.tmaxC, d.tminC, site.latDeg, doy);
       w.hargreavesDays++;
