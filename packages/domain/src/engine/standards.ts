@@ -274,8 +274,9 @@ export const DEFAULT_PARAMETERS: DepartmentParameters = {
     st_augustinegrass: 4,
   },
   mowers: {
-    reel: { kind: 'reel', widthM: 2.8, speedKmh: 6, efficiency: 0.8, overlapM: 0.1, turnTimeS: 15, hocMinMm: 6, hocMaxMm: 38 },
-    rotary: { kind: 'rotary', widthM: 1.83, speedKmh: 8, efficiency: 0.8, overlapM: 0.1, turnTimeS: 10, hocMinMm: 25, hocMaxMm: 125 },
+    // Setting ranges in inches as mowers are sold and set: reel ¼–1½ in, rotary 1–5 in.
+    reel: { kind: 'reel', widthM: 2.8, speedKmh: 6, efficiency: 0.8, overlapM: 0.1, turnTimeS: 15, hocMinMm: 6.35, hocMaxMm: 38.1 },
+    rotary: { kind: 'rotary', widthM: 1.83, speedKmh: 8, efficiency: 0.8, overlapM: 0.1, turnTimeS: 10, hocMinMm: 25.4, hocMaxMm: 127 },
   },
   mowerSettings: { unit: 'in', step: 1 / 8, reelUpToHoc: 1 },
   solubleNLimitGPerM2: G_PER_M2_PER_LB_PER_1000FT2,

@@ -161,12 +161,12 @@ export async function seedDemoCity(db: Db): Promise<SeedSummary | null> {
         .forEach((c, k) => {
           const crewId = crewIds.get(c.name)!;
           fleet.push(
-            { districtId, crewId, kind: 'reel_mower', name: `${code}-R${k + 1} triplex reel`, cuttingWidthM: 2.8, speedKmh: 6, fieldEfficiency: 0.8, hocMinMm: 6, hocMaxMm: 38, hourMeterH: 410 + k * 95, sharpenIntervalH: 100, lastSharpenedAtH: 330 + k * 95 },
-            { districtId, crewId, kind: 'rotary_mower', name: `${code}-M${k + 1} 72-inch rotary`, cuttingWidthM: 1.83, speedKmh: 8, fieldEfficiency: 0.8, hocMinMm: 25, hocMaxMm: 125, hourMeterH: 620 + k * 40, sharpenIntervalH: 50, lastSharpenedAtH: 600 + k * 40 },
+            { districtId, crewId, kind: 'reel_mower', name: `${code}-R${k + 1} triplex reel`, cuttingWidthM: 2.8, speedKmh: 6, fieldEfficiency: 0.8, hocMinMm: 6.35, hocMaxMm: 38.1, hourMeterH: 410 + k * 95, sharpenIntervalH: 100, lastSharpenedAtH: 330 + k * 95 },
+            { districtId, crewId, kind: 'rotary_mower', name: `${code}-M${k + 1} 72-inch rotary`, cuttingWidthM: 1.83, speedKmh: 8, fieldEfficiency: 0.8, hocMinMm: 25.4, hocMaxMm: 127, hourMeterH: 620 + k * 40, sharpenIntervalH: 50, lastSharpenedAtH: 600 + k * 40 },
           );
         });
       fleet.push(
-        { districtId, kind: 'flail_mower', name: `${code}-F1 flail`, cuttingWidthM: 2.2, speedKmh: 7, fieldEfficiency: 0.75, hocMinMm: 40, hocMaxMm: 150, hourMeterH: 280 },
+        { districtId, kind: 'flail_mower', name: `${code}-F1 flail`, cuttingWidthM: 2.2, speedKmh: 7, fieldEfficiency: 0.75, hocMinMm: 38.1, hocMaxMm: 152.4, hourMeterH: 280 },
         { districtId, kind: 'line_marker', name: `${code}-L1 line marker`, hourMeterH: 120 },
         { districtId, kind: 'spreader', name: `${code}-S1 rotary spreader`, hourMeterH: 60 },
       );
