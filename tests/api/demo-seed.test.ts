@@ -1,3 +1,4 @@
+import { eq } from 'drizzle-orm';
 import { pino } from 'pino';
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
@@ -5,7 +6,7 @@ import { ROLES } from '@swardwise/domain';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
-import { districts, fields, settings, sites, users } from '../../apps/api/src/db/schema/index.ts';
+import { districts, fieldChecks, fields, settings, sites, users } from '../../apps/api/src/db/schema/index.ts';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
 import { createMailer } from '../../apps/api/src/mail/mailer.ts';
@@ -36,6 +37,19 @@ describe('demo city seed', () => {
     const before = await counts();
     expect(await seedDemoCity(database.db)).toBeNull();
     expect(await counts()).toEqual(before);
+  });
+
+  test('should store the tester with every hardness reading, and refuse a reading without one', async () => {
+    const checks = await database.db.select().from(fieldChecks);
+    expect(checks.length).toBeGreaterThan(0);
+    for (const c of checks) expect(c.gmax === null ? c.gmaxDevice === null : c.gmaxDevice === 'portable_2_25kg').toBe(true);
+    const [one] = checks;
+    const row = { fieldId: one!.fieldId, checkedOn: '2026-11-30', turfCoverPct: 90, weedsPct: 2, barePct: 3, score: 80 };
+    await expect(database.db.insert(fieldChecks).values({ ...row, gmax: 150 })).rejects.toThrow();
+    await expect(database.db.insert(fieldChecks).values({ ...row, gmax: null, gmaxDevice: 'f355_missile_a' })).rejects.toThrow();
+    const [ok] = await database.db.insert(fieldChecks).values({ ...row, gmax: 150, gmaxDevice: 'f355_missile_a' }).returning();
+    expect(ok!.gmaxDevice).toBe('f355_missile_a');
+    await database.db.delete(fieldChecks).where(eq(fieldChecks.id, ok!.id));
   });
 
   test('should mark the data as invented demo data', async () => {

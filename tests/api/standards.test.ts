@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS } from '@swardwise/domain';
-import { auditLog, standards } from '../../apps/api/src/db/schema/index.ts';
+import { auditLog, settings, standards } from '../../apps/api/src/db/schema/index.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
 let api: TestApi;
@@ -23,6 +23,21 @@ describe('GET /api/standards', () => {
       expect(res.body.levels[0].version).toBeGreaterThanOrEqual(1);
       expect(res.body.levels[3].data.name).toBe(DEFAULT_STANDARDS[4].name);
       expect(res.body.parameters.irrigation).toEqual(DEFAULT_PARAMETERS.irrigation);
+    }
+  });
+});
+
+describe('department parameters', () => {
+  test("should keep a department's saved settings and give the defaults of settings it never saved", async () => {
+    // A department saved its DU before the turf Kc and the cycle limit became settings.
+    await api.database.db.insert(settings).values({ key: 'department_parameters', value: { irrigation: { distributionUniformity: 0.8 } } });
+    try {
+      const res = await (await api.signIn('head')).get('/api/standards');
+      expect(res.status).toBe(200);
+      expect(res.body.parameters.irrigation).toEqual({ ...DEFAULT_PARAMETERS.irrigation, distributionUniformity: 0.8 });
+      expect(res.body.parameters.turfKc).toEqual(DEFAULT_PARAMETERS.turfKc);
+    } finally {
+      await api.database.db.delete(settings).where(eq(settings.key, 'department_parameters'));
     }
   });
 });

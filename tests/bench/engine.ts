@@ -115,6 +115,8 @@ function weekPlans(outlooks: readonly e.FieldOutlook[]): e.CrewWeekPlan[] {
 }
 
 const outlookMs: number[] = [];
+// CPU time of the outlook (user + system): steadier than wall time on a machine shared with other work.
+const outlookCpuMs: number[] = [];
 const prepMs: number[] = [];
 const planMs: number[] = [];
 let lastOutlooks: e.FieldOutlook[] = [];
@@ -123,8 +125,11 @@ let lastPlans: e.CrewWeekPlan[] = [];
 const mem0 = process.memoryUsage();
 for (let r = 0; r < RUNS; r++) {
   const t0 = performance.now();
+  const c0 = process.cpuUsage();
   const { outlooks, prepMs: p } = seasonOutlook();
+  const c1 = process.cpuUsage(c0);
   const t1 = performance.now();
+  outlookCpuMs.push((c1.user + c1.system) / 1000);
   const plans = weekPlans(outlooks);
   const t2 = performance.now();
   outlookMs.push(t1 - t0);
@@ -139,7 +144,7 @@ const agg = e.aggregateOutlooks(lastOutlooks);
 const overloaded = lastPlans.filter((p) => p.load.overloaded).length;
 const stops = lastPlans.reduce((s, p) => s + p.days.reduce((t, d) => t + d.siteOrder.length, 0), 0);
 console.log(`engine bench: ${FIELDS} fields, ${sites.length} sites with their own 365-day weather, ${CREWS} crews; median of ${RUNS} runs`);
-console.log(`  season outlook (incl. weather prep): ${median(outlookMs).toFixed(0)} ms  (weather prep ${median(prepMs).toFixed(0)} ms, ${sites.length * 365} FAO-56 PM days)`);
+console.log(`  season outlook (incl. weather prep): ${median(outlookMs).toFixed(0)} ms  (CPU ${median(outlookCpuMs).toFixed(0)} ms; weather prep ${median(prepMs).toFixed(0)} ms, ${sites.length * 365} FAO-56 PM days)`);
 console.log(`  week plans + routing, 40 crews:      ${median(planMs).toFixed(1)} ms  (${stops} site visits routed, ${overloaded} crews overloaded)`);
 console.log(`  memory: heapUsed ${mb(mem0.heapUsed)} → ${mb(mem1.heapUsed)} MB (Δ ${mb(mem1.heapUsed - mem0.heapUsed)}), rss ${mb(mem0.rss)} → ${mb(mem1.rss)} MB (Δ ${mb(mem1.rss - mem0.rss)})`);
 console.log(`  department: ${agg.department.mowings} mowings, ${agg.department.labourHours.toFixed(0)} h, ${agg.department.nKg.toFixed(0)} kg N, ${agg.department.waterM3.toFixed(0)} m³ water, cost ${agg.department.cost.total.toFixed(0)} (invented demo prices)`);

@@ -6,7 +6,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
-import { formatHoc, type Role, type UnitSystem } from '@swardwise/domain';
+import { formatHocText, type Role, type UnitSystem } from '@swardwise/domain';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { launchBrowser } from './browser.ts';
 
@@ -37,10 +37,7 @@ interface FieldRow {
 }
 
 const COOL = ['kentucky_bluegrass', 'perennial_ryegrass', 'tall_fescue', 'fine_fescue'];
-const text = (mm: number, units: UnitSystem) => {
-  const d = formatHoc(mm, units);
-  return `${d.value.toLocaleString('en-US')} ${d.unit}`;
-};
+const text = (mm: number, units: UnitSystem) => formatHocText(mm, units);
 
 describe('field page', () => {
   test('should show a foreman the HOC, mowings per week and the season chart of a field', async () => {
@@ -51,7 +48,7 @@ describe('field page', () => {
       expect(fields.length).toBeGreaterThan(0);
       await page.goto(`${baseUrl}/fields/${fields[0]!.id}`);
       await page.locator('[data-test="needs-hoc"]').waitFor();
-      expect(await page.locator('[data-test="needs-hoc"]').innerText()).toMatch(/^\d+(\.\d+)? (in|mm)$/);
+      expect(await page.locator('[data-test="needs-hoc"]').innerText()).toMatch(/^(\d+|\d*[⅛¼⅜½⅝¾⅞]) (in|mm)$/);
       expect(await page.locator('[data-test="needs-mowings-per-week"]').innerText()).toMatch(/^\d+(\.\d)?$/);
       // Today is after the demo season: the page says which week it used instead.
       expect(await page.locator('[data-test="needs-weather-note"]').innerText()).toMatch(/latest week with weather/);

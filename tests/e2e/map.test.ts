@@ -101,7 +101,7 @@ describe('the map', () => {
       const fieldPage = await second.newPage();
       await fieldPage.goto(`${baseUrl}/fields/${drawnId}`);
       await fieldPage.locator('[data-test="needs-hoc"]').waitFor();
-      expect(await fieldPage.locator('[data-test="needs-hoc"]').innerText()).toMatch(/^\d+(\.\d+)? in$/);
+      expect(await fieldPage.locator('[data-test="needs-hoc"]').innerText()).toMatch(/^(\d+|\d*[⅛¼⅜½⅝¾⅞]) in$/);
       expect(await fieldPage.locator('[data-test="needs-mowings-per-week"]').innerText()).toMatch(/^\d+(\.\d)?$/);
       await second.close();
 

@@ -157,3 +157,12 @@ describe('FAO-56 Table 12 — Kc for turf grass', () => {
     near(e.turfKc('warm', { reduced: true }), 0.75, 1e-9);
   });
 });
+
+describe('FAO-56 eqs. 25, 34 and 35 in polar night (derived from the published formulas)', () => {
+  test('should give ωs = 0, N = 0, Ra = 0 and so Rs = 0 at 80° N on 21 December with zero sunshine hours', () => {
+    const ws = e.sunsetHourAngle(e.degToRad(80), e.solarDeclination(355));
+    expect(ws).toBe(0);
+    expect(e.daylightHours(ws)).toBe(0);
+    expect(e.solarRadiationFromSunshine(0, e.daylightHours(ws), e.extraterrestrialRadiation(e.degToRad(80), 355))).toBe(0);
+  });
+});

@@ -1,8 +1,9 @@
 /**
  * Growth potential: Gelernter & Stowell (2005), Golf Course Management, "Improved overseeding
  * programs 1: the role of weather". To 20 °C (68 °F) cool-season and 31 °C (88 °F)
- * warm-season are published; σ 5.5 °C cool and 7 °C warm are from memory. The GP values
- * below are derived from that formula (consistency checks, not external references).
+ * warm-season are published; σ 5.5 °C cool and 7 °C warm are from memory; the warm-season
+ * plateau from 31 °C up is the model authors' later revision. The GP values below are
+ * derived from that formula (consistency checks, not external references).
  */
 import { describe, expect, test } from 'vitest';
 import * as e from '@swardwise/domain/engine';
@@ -33,9 +34,23 @@ describe('growth potential (Gelernter & Stowell 2005)', () => {
   test.each([
     [20, 0.291],
     [25, 0.693],
-    [35, 0.849],
   ])('should give warm-season GP(%d °C) = %f (derived)', (t, gp) => {
     expect(e.growthPotential(t, 'warm')).toBeCloseTo(gp, 3);
+  });
+
+  // GP(35 °C) warm was 0.849 (the bell curve's right side, derived); the model authors' later
+  // revision holds the warm-season curve at 1 from its optimum up (REFERENCES, added after
+  // the first audit), so warm-season grass no longer slows in midsummer heat.
+  test.each([31, 33, 35, 40])('should hold warm-season GP at 1 at %d °C, from the optimum up (authors\' later revision)', (t) => {
+    expect(e.growthPotential(t, 'warm')).toBe(1);
+  });
+
+  test('should cross the cool- and warm-season curves near 24.8 °C (REFERENCES; derived)', () => {
+    const t = e.gpCrossoverC();
+    expect(t).toBeCloseTo(24.8, 1);
+    expect(e.growthPotential(t, 'cool')).toBeCloseTo(e.growthPotential(t, 'warm'), 12);
+    expect(e.growthPotential(t - 1, 'cool')).toBeGreaterThan(e.growthPotential(t - 1, 'warm'));
+    expect(e.growthPotential(t + 1, 'cool')).toBeLessThan(e.growthPotential(t + 1, 'warm'));
   });
 
   test('should put the monthly N share near GP × about 1 lb N/1000 ft² at full potential (secondary sources, loose)', () => {

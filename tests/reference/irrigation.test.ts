@@ -30,6 +30,25 @@ describe('distribution uniformity (UC Davis catch-can audits) and scheduling mul
   test('should give SM 1.22 at DU 0.70 (from memory)', () => {
     expect(e.schedulingMultiplier(0.7)).toBeCloseTo(1.22, 2);
   });
+
+  test('should take the gross need as net × SM with SM(0.7) = 1.2195, one method (irrigation associations; REFERENCES, added after the first audit)', () => {
+    expect(e.schedulingMultiplier(0.7)).toBeCloseTo(1.2195, 4);
+    expect(e.grossIrrigationMm(10, 0.7)).toBeCloseTo(12.195, 3);
+    expect(e.DEFAULT_PARAMETERS.irrigation.distributionUniformity).toBe(0.7);
+  });
+});
+
+describe('turf crop coefficients for irrigation budgets (University of California ANR turfgrass water guidance; Meyer et al. 1985)', () => {
+  test('should default to about 0.8 cool-season and 0.6 warm-season, below FAO-56 Table 12 for a full grass cover', () => {
+    expect(e.DEFAULT_PARAMETERS.turfKc.cool).toBe(0.8);
+    expect(e.DEFAULT_PARAMETERS.turfKc.warm).toBe(0.6);
+    expect(e.departmentTurfKc('cool', false, e.DEFAULT_PARAMETERS.turfKc)).toBeLessThan(e.turfKc('cool', { stage: 'mid' }));
+    expect(e.departmentTurfKc('warm', false, e.DEFAULT_PARAMETERS.turfKc)).toBeLessThan(e.turfKc('warm', { stage: 'mid' }));
+  });
+
+  test('should take 0.10 off where a level keeps growth slow (FAO-56 Table 12 note)', () => {
+    expect(e.departmentTurfKc('cool', true, e.DEFAULT_PARAMETERS.turfKc)).toBeCloseTo(0.7, 12);
+  });
 });
 
 describe('effective rain (Texas A&M TexasET network rule)', () => {

@@ -29,3 +29,16 @@ describe('effective field capacity (ASABE EP496)', () => {
     expect(e.DEFAULT_PARAMETERS.mowers.rotary.efficiency).toBe(0.8);
   });
 });
+
+describe('stripe passes (arithmetic; overlap between passes is common practice)', () => {
+  test('should count the passes whose n × width − (n − 1) × overlap first covers the field', () => {
+    const mower = { ...e.DEFAULT_PARAMETERS.mowers.rotary, widthM: 2.1, overlapM: 0.1 };
+    // 5 passes cover 5 × 2.1 − 4 × 0.1 = 10.1 m exactly: 5, not 6.
+    expect(e.stripePassPlan(50, 10.1, mower, 'lengthwise').passes).toEqual([5]);
+    for (const across of [5, 10.1, 33.3, 68, 105]) {
+      const [n] = e.stripePassPlan(200, across, mower, 'lengthwise').passes as [number];
+      expect(n * mower.widthM - (n - 1) * mower.overlapM).toBeGreaterThanOrEqual(across - 1e-9);
+      expect((n - 1) * mower.widthM - (n - 2) * mower.overlapM).toBeLessThan(across);
+    }
+  });
+});

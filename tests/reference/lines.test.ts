@@ -72,6 +72,39 @@ describe('American football (NFHS, secondary sources)', () => {
     expect([...ys].sort((a, b) => a - b)).toEqual([53.333, 106.667]);
   });
 
+  test('should add the marks the NFHS rule book asks for (from memory, labelled in the template source)', () => {
+    expect(t.source).toMatch(/from memory/);
+    // 24 in short marks 4 in inside each sideline at every yard line that is not a 5-yd line.
+    const short = byLabel(t, 'sideline short mark');
+    expect(short).toHaveLength(160);
+    for (const s of short) expect(e.mToFt(e.segmentLengthM(s)) * 12).toBeCloseTo(24, 9);
+    const ys = new Set(short.map((s) => (s.kind === 'line' ? Math.round(e.mToFt(Math.min(s.from[1], s.to[1])) * 12 * 1000) / 1000 : 0)));
+    expect([...ys].sort((a, b) => a - b)).toEqual([4, 160 * 12 - 4 - 24]);
+    // 12 in nine-yard marks at each 10-yd line, 9 yd from each sideline.
+    const nine = byLabel(t, 'nine-yard mark');
+    expect(nine).toHaveLength(18);
+    for (const s of nine) expect(s.kind === 'line' && Math.min(e.mToFt(Math.abs(s.to[1] - 0)), e.mToFt(Math.abs(s.to[1] - t.widthM)))).toBeCloseTo(27, 9);
+    // Numerals 10 … 50 … 10 on both sides: 36 digits, 6 ft high.
+    const numbers = byLabel(t, 'number');
+    const nearYs = numbers.flatMap((s) => (s.kind === 'line' ? [s.from[1], s.to[1]] : [])).filter((y) => y < t.widthM / 2);
+    expect(e.mToFt(Math.min(...nearYs))).toBeCloseTo(21, 9); // 6 ft high, tops 9 yd (27 ft) from the sideline
+    expect(e.mToFt(Math.max(...nearYs))).toBeCloseTo(27, 9);
+    expect(numbers.length).toBe(2 * (8 + 11 + 11 + 10 + 11 + 10 + 11 + 11 + 8));
+    // Team boxes between the 25-yd lines, coaching lines 6 ft out, limit lines outside.
+    expect(byLabel(t, 'coaching line')).toHaveLength(2);
+    for (const s of byLabel(t, 'coaching line')) expect(e.mToFt(e.segmentLengthM(s))).toBeCloseTo(150, 9);
+    expect(byLabel(t, 'team box')).toHaveLength(6);
+    expect(byLabel(t, 'limit line').length).toBeGreaterThan(0);
+  });
+
+  test('should leave numerals and team areas out on request and list every element in the line plan', () => {
+    const bare = e.footballTemplate({ numbers: false, teamAreas: false });
+    expect(byLabel(bare, 'number')).toHaveLength(0);
+    expect(byLabel(bare, 'team box')).toHaveLength(0);
+    const plan = e.linePlan(t, e.DEFAULT_PARAMETERS.lines, { days: 70, repaintDays: 7 });
+    expect(plan.elements.map((x) => x.label)).toEqual(['sideline', 'end line', 'goal line', 'yard line', 'hash mark', 'sideline short mark', 'nine-yard mark', 'number', 'limit line', 'coaching line', 'team box']);
+  });
+
   test('should move the hash marks to 60 ft for NCAA', () => {
     const ncaa = e.footballTemplate(60);
     const h = byLabel(ncaa, 'hash mark')[0]!;
@@ -90,6 +123,32 @@ describe('baseball (Official Baseball Rules 2.01) and softball (from memory)', (
     const foul = t.segments.filter((s) => s.label.includes('foul line'));
     expect(foul).toHaveLength(2);
     for (const s of foul) expect(e.mToFt(e.segmentLengthM(s))).toBeGreaterThanOrEqual(320);
+  });
+
+  // The lane was drawn 3 ft into fair territory (towards second base).
+  test.each([
+    ['baseball', e.baseballTemplate(), 90],
+    ['softball', e.softballTemplate(), 60],
+  ] as const)('should draw the %s running lane in foul territory beside the first-base line, last half of home to first, 3 ft wide (Official Baseball Rules 5.09(a)(11))', (_name, t, basesFt) => {
+    // Home plate at the origin, first-base line along (1, −1)/√2; distance into foul territory
+    // is measured away from second base: d = −(x + y)/√2.
+    const foulSide = (x: number, y: number) => -(x + y) / Math.SQRT2;
+    const along = (x: number, y: number) => (x - y) / Math.SQRT2;
+    const lane = byLabel(t, 'running lane');
+    expect(lane.length).toBeGreaterThan(0);
+    for (const seg of lane) {
+      if (seg.kind !== 'line') throw new Error('the running lane is straight lines');
+      for (let k = 0; k <= 20; k++) {
+        const x = seg.from[0] + ((seg.to[0] - seg.from[0]) * k) / 20;
+        const y = seg.from[1] + ((seg.to[1] - seg.from[1]) * k) / 20;
+        expect(foulSide(x, y)).toBeGreaterThanOrEqual(-1e-9);
+        expect(e.mToFt(along(x, y))).toBeGreaterThanOrEqual(basesFt / 2 - 1e-9);
+        expect(e.mToFt(along(x, y))).toBeLessThanOrEqual(basesFt + 1e-9);
+      }
+    }
+    const outer = lane.find((s) => s.kind === 'line' && Math.abs(foulSide(s.from[0], s.from[1]) - foulSide(s.to[0], s.to[1])) < 1e-9)!;
+    expect(outer.kind === 'line' && e.mToFt(foulSide(outer.from[0], outer.from[1]))).toBeCloseTo(3, 9);
+    expect(e.mToFt(e.segmentLengthM(outer))).toBeCloseTo(basesFt / 2, 9);
   });
 
   test('should label softball as from memory', () => {
@@ -125,16 +184,48 @@ describe("men's lacrosse (from memory)", () => {
   });
 });
 
-describe('line paint (trade press, common practice)', () => {
-  test('should cover about 200 linear ft of 4 in line per mixed gallon in one pass (trade press)', () => {
-    const s = { ...e.DEFAULT_PARAMETERS.lines, passes: 1 };
-    const p = e.paintNeed(e.ftToM(200), e.ftToM(4 / 12), s);
-    expect(e.litresToUsGallons(p.mixedLitres)).toBeCloseTo(1, 9);
+describe('line paint (trade press, trade guidance, common practice)', () => {
+  const lines = e.DEFAULT_PARAMETERS.lines;
+  const gallons = (l: number) => e.litresToUsGallons(l);
+
+  test('should give about 200 linear ft of 4 in finished line per mixed gallon in a first coat, both directions included (trade press; two directions common practice)', () => {
+    const p = e.paintNeed(e.ftToM(200), e.ftToM(4 / 12), lines.firstCoat);
+    expect(gallons(p.mixedLitres)).toBeCloseTo(1, 9);
+    expect(lines.firstCoat.passes).toBe(2);
   });
 
-  test('should default to a dilution within 1:1 to 4:1 and two passes (common practice)', () => {
-    expect(e.DEFAULT_PARAMETERS.lines.dilutionWaterPerPaint).toBeGreaterThanOrEqual(1);
-    expect(e.DEFAULT_PARAMETERS.lines.dilutionWaterPerPaint).toBeLessThanOrEqual(4);
-    expect(e.DEFAULT_PARAMETERS.lines.passes).toBe(2);
+  test('should touch up in one pass at the first coat\'s rate per pass, more dilute (trade guidance: 1:1 first application, 3:1 or 4:1 touch-ups)', () => {
+    expect(lines.touchUp.passes).toBe(1);
+    // Per pass, the same paint on the line: coverage × passes is the coat's coverage of one pass.
+    expect(lines.touchUp.coverageM2PerMixedL / lines.touchUp.passes).toBeCloseTo(lines.firstCoat.coverageM2PerMixedL * lines.firstCoat.passes, 9);
+    expect(lines.firstCoat.dilutionWaterPerPaint).toBe(1);
+    expect(lines.touchUp.dilutionWaterPerPaint).toBeGreaterThanOrEqual(3);
+    for (const coat of [lines.firstCoat, lines.touchUp]) {
+      expect(coat.dilutionWaterPerPaint).toBeGreaterThanOrEqual(1);
+      expect(coat.dilutionWaterPerPaint).toBeLessThanOrEqual(4); // 1:1 to 4:1 (common practice)
+    }
+  });
+
+  // The engine used to put about 47 gal of mixed paint on every football repaint (coverage
+  // applied per pass and doubled for two passes, without numerals); trade guidance is of the
+  // order of 15 gal.
+  test('should repaint a full football field, numerals and hash marks but not the border, with about 15 gal of mixed paint (trade guidance, secondary sources)', () => {
+    const field = e.footballTemplate({ numbers: true, teamAreas: false });
+    const plan = e.linePlan(field, lines, { days: 70, repaintDays: 7 });
+    expect(gallons(plan.touchUp.mixedLitres)).toBeGreaterThan(12);
+    expect(gallons(plan.touchUp.mixedLitres)).toBeLessThan(18);
+    // A first coat of the same layout in both directions: twice the mixed paint, at 1:1.
+    expect(gallons(plan.firstCoat.mixedLitres)).toBeCloseTo(2 * gallons(plan.touchUp.mixedLitres), 9);
+    expect(gallons(plan.firstCoat.concentrateLitres)).toBeCloseTo(gallons(plan.firstCoat.mixedLitres) / 2, 9);
+  });
+
+  test('should repaint a 105 × 68 m soccer pitch (12 cm lines) at the 200 ft per mixed gallon rate of 4 in line (trade press)', () => {
+    const pitch = e.soccerTemplate(105, 68, 0.12);
+    const plan = e.linePlan(pitch, lines, { days: 70, repaintDays: 7 });
+    // 716.9 m of 12 cm line is 2,778 ft of 4 in line: about 13.9 gal in a first coat, 6.9 in a touch-up.
+    const ftOf4In = e.m2ToFt2(716.9 * 0.12) / (4 / 12);
+    expect(gallons(plan.firstCoat.mixedLitres)).toBeCloseTo(ftOf4In / 200, 1);
+    expect(gallons(plan.touchUp.mixedLitres)).toBeCloseTo(ftOf4In / 400, 1);
+    expect(gallons(plan.firstCoat.mixedLitres)).toBeCloseTo(13.9, 1);
   });
 });

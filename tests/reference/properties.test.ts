@@ -6,6 +6,41 @@ import * as e from '@swardwise/domain/engine';
 const mower = e.DEFAULT_PARAMETERS.mowers.rotary;
 
 describe('engine properties', () => {
+  test('should give the same daily ET0 on the season path as the full FAO-56 computation, and the same refusals', () => {
+    const opt = <T>(a: fc.Arbitrary<T>) => fc.option(a, { nil: undefined });
+    fc.assert(
+      fc.property(
+        fc.double({ min: -89.9, max: 89.9, noNaN: true }),
+        fc.double({ min: -100, max: 3000, noNaN: true }),
+        fc.boolean(),
+        fc.integer({ min: 1, max: 366 }),
+        fc.double({ min: -30, max: 45, noNaN: true }),
+        fc.double({ min: 0, max: 20, noNaN: true }),
+        fc.record({ tdewC: opt(fc.double({ min: -40, max: 50, noNaN: true })), rhMaxPct: opt(fc.double({ min: -5, max: 105, noNaN: true })), rhMinPct: opt(fc.double({ min: 0, max: 100, noNaN: true })), rhMeanPct: opt(fc.double({ min: 0, max: 100, noNaN: true })), windMs: opt(fc.double({ min: 0, max: 12, noNaN: true })), windHeightM: opt(fc.double({ min: 0.2, max: 20, noNaN: true })), sunshineH: opt(fc.double({ min: 0, max: 24, noNaN: true })), solarMJ: opt(fc.double({ min: 0, max: 40, noNaN: true })) }),
+        (latDeg, elevationM, coastal, doy, tmin, range, extra) => {
+          const day = { tmaxC: tmin + range, tminC: tmin, ...extra };
+          let full: number | Error;
+          try {
+            full = e.et0PenmanMonteith({ ...day, latDeg, elevationM, doy, coastal }).et0Mm;
+          } catch (err) {
+            full = err as Error;
+          }
+          const station = e.et0Station(latDeg, elevationM, coastal);
+          if (full instanceof Error) expect(() => e.et0PenmanMonteithDay(station, doy, day)).toThrow(full.message);
+          else expect(e.et0PenmanMonteithDay(station, doy, day)).toBeCloseTo(full, 12);
+        },
+      ),
+      { numRuns: 2000 },
+    );
+    // Days at the edges of the checks refuse alike on both paths.
+    const station = e.et0Station(45, 100);
+    for (const bad of [{ rhMaxPct: 100.5 }, { rhMaxPct: 60, rhMinPct: 70 }, { rhMeanPct: -1 }, { tdewC: 31 }, { windMs: -0.1 }, { windMs: 2, windHeightM: 0.4 }, { sunshineH: 16 }, { solarMJ: -1 }]) {
+      const day = { tmaxC: 30, tminC: 15, ...bad };
+      expect(() => e.et0PenmanMonteith({ ...day, latDeg: 45, elevationM: 100, doy: 172 })).toThrow();
+      expect(() => e.et0PenmanMonteithDay(station, 172, day)).toThrow();
+    }
+  });
+
   test('should mow at least as often when the temperature is nearer the optimum', () => {
     fc.assert(
       fc.property(fc.double({ min: 5, max: 20, noNaN: true }), fc.double({ min: 5, max: 20, noNaN: true }), fc.integer({ min: 20, max: 80 }), (a, b, hoc) => {
@@ -53,7 +88,7 @@ describe('engine properties', () => {
   test('should scale paint in proportion to line length', () => {
     fc.assert(
       fc.property(fc.double({ min: 1, max: 5000, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true }), (len, k) => {
-        const s = e.DEFAULT_PARAMETERS.lines;
+        const s = e.DEFAULT_PARAMETERS.lines.touchUp;
         const one = e.paintNeed(len, 0.1, s);
         const scaled = e.paintNeed(len * k, 0.1, s);
         expect(scaled.concentrateLitres).toBeCloseTo(one.concentrateLitres * k, 6);

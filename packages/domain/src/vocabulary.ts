@@ -128,6 +128,18 @@ export const SITE_OWNER_LABELS: Record<SiteOwner, string> = {
   school_district: 'School district',
 };
 
+/**
+ * Surface hardness testers. A Gmax reading means something only with its device and method:
+ * ASTM F1936 with the F355 missile A (9.1 kg, 610 mm drop) and the 2.25 kg portable tester
+ * (ASTM F1702 style) read on different scales and are not comparable.
+ */
+export const HARDNESS_DEVICES = ['f355_missile_a', 'portable_2_25kg'] as const;
+export type HardnessDevice = (typeof HARDNESS_DEVICES)[number];
+export const HARDNESS_DEVICE_LABELS: Record<HardnessDevice, string> = {
+  f355_missile_a: 'ASTM F1936 / F355 missile A (9.1 kg)',
+  portable_2_25kg: '2.25 kg portable tester (ASTM F1702)',
+};
+
 export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
 export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 

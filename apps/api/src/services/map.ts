@@ -199,7 +199,8 @@ async function buildMap(ctx: Ctx, requested: string): Promise<MapAnswer> {
       scoredOn: f.scoredOn,
       lastMowedOn: f.lastMowedOn,
       daysSinceMowing: days,
-      hocMm: round1(hocMm),
+      // Exact to 0.001 mm so an eighth of an inch (31.75 mm = 1¼ in) reads back as set.
+      hocMm: Math.round(hocMm * 1000) / 1000,
       predictedHeightMm: predicted,
       overdue,
       overdueSince,

@@ -27,6 +27,7 @@ import {
   monthlyNSplitByGp,
   mowTriggerHeightMm,
   mowerTypeFor,
+  mowingPolicy,
   netIrrigationMm,
   overdueDate,
   planNApplications,
@@ -141,14 +142,14 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
   // HOC and mower.
   const hocMm = hocFor(outlookField, standards);
   const hocSource = field.hocOverrideMm !== null ? 'override' : std.hocByGrassMm[field.grass] !== undefined ? 'standards_grass' : 'standards_sport';
-  const mowerKind = mowerTypeFor(hocMm);
+  const mowerKind = mowerTypeFor(hocMm, params.mowerSettings);
   const mower = params.mowers[mowerKind];
   const hoc: HocNeed = {
     hocMm,
     source: hocSource,
     triggerHeightMm: mowTriggerHeightMm(hocMm),
     mowerKind,
-    mowerWarnings: checkMowerForHoc(mower, hocMm),
+    mowerWarnings: checkMowerForHoc(mower, hocMm, params.mowerSettings),
     inputs: [
       input('level', 'Maintenance level', `${level} ${std.name}`),
       input('sport', 'Sport', field.sport),
@@ -158,14 +159,14 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
       input('override', 'Field override', field.hocOverrideMm, 'mm'),
       input('mowerRange', 'Default mower setting range', `${mower.hocMinMm}–${mower.hocMaxMm} mm`),
     ],
-    how: 'The field override wins when set; else the Standards HOC for this grass at the level, else the Standards HOC for the sport and grass season. A reel mower is usual below 25 mm (1 in), a rotary from 25 mm up. The mower is the department default of that kind until equipment is recorded.',
+    how: `The field override wins when set; else the Standards HOC for this grass at the level, else the Standards HOC for the sport and grass season. A reel mower is usual up to ${params.mowerSettings.reelUpToHoc} ${params.mowerSettings.unit} inclusive (compared in the unit the department sets mowers in, to its step), a rotary above. The mower is the department default of that kind until equipment is recorded.`,
     cautions: [] as string[],
   };
 
   // Growth and mowing (one-third rule).
   const gpWeek = inWeek(daily.gp);
   const growthWeek = inWeek(daily.growthMm);
-  const mowOptions = { maxIntervalDays: std.maxMowingIntervalDays, minMowingsPerWeek: std.minMowingsPerWeek, frequencyMinGrowthMm: 0.1 * hocMm };
+  const mowOptions = mowingPolicy(hocMm, std);
   const seasonSim = simulateMowing(hocMm, daily.growthMm, hocMm, { startDate: prepared.startDate, ...mowOptions });
   const weekMowings = seasonSim.mowings.filter((m) => m.dayIndex >= w0 && m.dayIndex <= w1);
   const asOf = requested >= weekStart && requested <= weekEnd ? requested : weekEnd;
@@ -187,9 +188,11 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
   } else {
     const growthAfter = daily.growthMm.slice(lastIdx + 1);
     const from = prepared.dates[lastIdx + 1]!;
-    const sim = simulateMowing(hocMm, growthAfter, hocMm, { startDate: from, ...mowOptions });
+    // Cut to HOC that morning, then the day's growth: the week plan's convention.
+    const heightAfterCutDay = hocMm + daily.growthMm[lastIdx]!;
+    const sim = simulateMowing(hocMm, growthAfter, heightAfterCutDay, { startDate: from, ...mowOptions });
     nextMowingOn = sim.mowings[0]?.date ?? null;
-    overdueOn = overdueDate(hocMm, hocMm, growthAfter, from);
+    overdueOn = overdueDate(hocMm, heightAfterCutDay, growthAfter, from);
     lastCutNote = `Simulated from the last mowing on ${field.lastMowedOn} (cut to HOC).`;
     if (!nextMowingOn) nextMowingNote = `No further mowing falls due before ${prepared.dates[prepared.dates.length - 1]}, the last day of weather on file.`;
   }
@@ -203,7 +206,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
       input('season', 'Grass season', season),
       input('gmax', 'Maximum growth at GP 1', daily.gmaxMmPerDay, 'mm/day'),
     ],
-    how: 'Growth potential GP = exp(−½((T − To)/σ)²) from the daily mean temperature (Gelernter & Stowell 2005; To 20 °C cool-season, 31 °C warm-season). Daily growth = the grass\u2019s maximum growth × GP × a water modifier (rain and irrigation against ETc over the last 14 days).',
+    how: 'Growth potential GP = exp(−½((T − To)/σ)²) from the daily mean temperature (Gelernter & Stowell 2005; To 20 °C cool-season, 31 °C warm-season; warm-season GP stays at 1 from 31 °C up, as in the authors\u2019 later revision). Daily growth = the grass\u2019s maximum growth × GP × a water modifier (rain and the irrigation the water budget schedules, against ETc over the last 14 days).',
     cautions: [] as string[],
   };
   const mowing = {
@@ -282,13 +285,13 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
     inputs: [
       input('station', 'Weather station', `${station.name} (${r(station.distanceKm, 1)} km)`),
       input('elevation', 'Station elevation', station.elevationM, 'm'),
-      input('kc', `Kc (${season}-season turf${std.reducedKc ? ', reduced by 0.10' : ''})`, daily.kc),
+      input('kc', `Kc (department's ${season}-season turf Kc${std.reducedKc ? `, less ${params.turfKc.reducedBy}` : ''})`, daily.kc),
       input('share', 'Standards: share of ETc replaced', std.irrigationShareOfEtc, '%'),
       input('du', 'Distribution uniformity (DU)', daily.du, '%'),
       input('precipRate', 'Precipitation rate', params.irrigation.precipRateMmPerH, 'mm/h'),
       input('area', 'Field area', field.areaM2, 'm2'),
     ],
-    how: 'ET0 by FAO-56 Penman–Monteith from the station\u2019s daily temperature, humidity, wind and sunshine (Hargreaves on days with temperatures only). ETc = Kc × ET0 (FAO-56 Table 12 turf). Effective rain: the first 0.1 in of each day is lost, the rest counts (TexasET rule). Net need = share × ETc − effective rain; gross need = net ÷ DU; run time = gross ÷ precipitation rate; volume = gross × area.',
+    how: 'ET0 by FAO-56 Penman–Monteith from the station\u2019s daily temperature, humidity, wind and sunshine (Hargreaves on days with temperatures only). ETc = Kc × ET0, with the department\u2019s turf Kc (annual planning values for mowed turf, by default 0.8 cool-season and 0.6 warm-season: University of California ANR turfgrass water guidance). Effective rain: the first 0.1 in of each day is lost, the rest counts (TexasET rule). Net need = share × ETc − effective rain; gross need = net × SM, the scheduling multiplier SM = 1 ÷ (0.4 + 0.6 × DU) of the lower-quarter DU; run time = gross ÷ precipitation rate; volume = gross × area.',
     cautions: [CAUTIONS.water],
   };
 
@@ -326,7 +329,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
       input('product', 'Default product (N-P-K)', `${product.n}-${product.p}-${product.k}, ${Math.round(product.slowReleaseShare * 100)} % slow-release N`),
       input('area', 'Field area', field.areaM2, 'm2'),
     ],
-    how: 'Annual N = the grass\u2019s published annual range (upper end when irrigated, lower when not) × the level\u2019s share, −25 % when clippings are returned. It is split over the months in proportion to each month\u2019s mean growth potential (months below GP 0.1 or without weather get none) and into applications that keep soluble N within 1 lb N/1000 ft² (4.9 g/m²). Product = N ÷ N %.',
+    how: 'Annual N = the grass\u2019s published annual range (upper end when irrigated, lower when not) × the level\u2019s share (a level fed below the published range says so), less 25–60 % when clippings are returned, more on older turf (Qian et al. 2003; 25 % when the turf\u2019s age is not recorded). It is split over the months in proportion to each month\u2019s mean growth potential (months below GP 0.1 or without weather get none) and into applications that keep soluble N within 1 lb N/1000 ft² (4.9 g/m²). Product = N ÷ N %.',
     cautions: [CAUTIONS.feed],
   };
 
@@ -338,24 +341,35 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
     reason: lp ? null : field.sport === 'lawn' || field.sport === 'multi_use' ? 'No lines are kept on this kind of field.' : `Level ${level} (${std.name}) keeps no lines in the Standards.`,
     template: template && lp ? { id: template.id, name: template.name, source: template.source, lineWidthM: template.lineWidthM } : null,
     lineLengthM: lp?.lineLengthM ?? 0,
+    /** What the totals include, element by element (lines, marks, numerals, team areas). */
+    elements: lp?.elements ?? [],
     paintedAreaM2: lp?.paintedAreaM2 ?? 0,
-    mixedLitres: lp?.mixedLitres ?? 0,
-    concentrateLitres: lp?.concentrateLitres ?? 0,
-    waterLitres: lp?.waterLitres ?? 0,
-    hoursPerRepaint: lp?.hoursPerRepaint ?? 0,
+    // One repaint: a touch-up over lines that still show (the usual repaint).
+    mixedLitres: lp?.touchUp.mixedLitres ?? 0,
+    concentrateLitres: lp?.touchUp.concentrateLitres ?? 0,
+    waterLitres: lp?.touchUp.waterLitres ?? 0,
+    hoursPerRepaint: lp?.touchUp.hours ?? 0,
+    /** The first coat of the season (the layout painted afresh). */
+    firstCoat: { mixedLitres: lp?.firstCoat.mixedLitres ?? 0, concentrateLitres: lp?.firstCoat.concentrateLitres ?? 0, waterLitres: lp?.firstCoat.waterLitres ?? 0, hours: lp?.firstCoat.hours ?? 0 },
     repaintDays: std.lineRepaintDays,
     repaints: lp?.repaints ?? 0,
+    firstCoats: lp?.firstCoats ?? 0,
+    touchUps: lp?.touchUps ?? 0,
+    seasonMixedLitres: lp?.seasonMixedLitres ?? 0,
     seasonConcentrateLitres: lp?.seasonConcentrateLitres ?? 0,
     seasonHours: lp?.seasonHours ?? 0,
     inputs: [
-      input('coverage', 'Coverage of mixed paint', params.lines.coverageM2PerMixedL, 'm2/L'),
-      input('dilution', 'Parts water per part paint', params.lines.dilutionWaterPerPaint),
-      input('passes', 'Passes', params.lines.passes),
+      input('coverageFirst', 'First coat: finished line per litre of mixed paint', params.lines.firstCoat.coverageM2PerMixedL, 'm2/L'),
+      input('dilutionFirst', 'First coat: parts water per part paint', params.lines.firstCoat.dilutionWaterPerPaint),
+      input('passesFirst', 'First coat: passes', params.lines.firstCoat.passes),
+      input('coverageTouchUp', 'Touch-up: finished line per litre of mixed paint', params.lines.touchUp.coverageM2PerMixedL, 'm2/L'),
+      input('dilutionTouchUp', 'Touch-up: parts water per part paint', params.lines.touchUp.dilutionWaterPerPaint),
+      input('passesTouchUp', 'Touch-up: passes', params.lines.touchUp.passes),
       input('markerSpeed', 'Marker speed', params.lines.markerSpeedKmh, 'km/h'),
       input('repaintDays', 'Standards: days between repaints', std.lineRepaintDays, 'd'),
       input('seasonDays', 'Days of the season', prepared.dates.length, 'd'),
     ],
-    how: 'Line length from the sport\u2019s layout template (straight lines and arcs). Mixed paint = line length × line width × passes ÷ coverage; concentrate = mixed ÷ (1 + parts water); labour = length × passes ÷ marker speed + set-up. Repaints: one at the start of the season, then one every repaint interval.',
+    how: 'Line length from the sport\u2019s layout template (straight lines, arcs, marks, numerals and team areas, listed element by element). Mixed paint = painted area ÷ the coat\u2019s coverage of finished line (about 200 linear ft of 4 in line per mixed gallon for a first coat painted in both directions; a touch-up is one pass, so about twice that); concentrate = mixed ÷ (1 + parts water); labour = length × passes ÷ marker speed + set-up. The season: one first coat at the start, then a touch-up every repaint interval.',
     cautions: lp ? [CAUTIONS.lines] : [],
   };
 

@@ -42,10 +42,22 @@ export async function loadStandards(db: Queryable): Promise<{ standards: Standar
   return { standards: out, versions, missing: LEVELS.filter((l) => versions[l] === null) };
 }
 
-/** The department's parameters: its own saved ones over the defaults. */
+const isPlainObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
+
+/**
+ * The department's parameters: its own saved ones over the defaults, group by group, so a
+ * setting added to a group after the department saved it (e.g. a new irrigation or paint
+ * setting) takes its default instead of going missing.
+ */
 export async function loadParameters(db: Queryable): Promise<DepartmentParameters> {
   const [row] = await db.select().from(settings).where(eq(settings.key, PARAMETERS_KEY));
-  return row ? { ...DEFAULT_PARAMETERS, ...(row.value as Partial<DepartmentParameters>) } : DEFAULT_PARAMETERS;
+  if (!row || !isPlainObject(row.value)) return DEFAULT_PARAMETERS;
+  const out: Record<string, unknown> = { ...DEFAULT_PARAMETERS };
+  for (const [key, saved] of Object.entries(row.value)) {
+    const base = (DEFAULT_PARAMETERS as unknown as Record<string, unknown>)[key];
+    out[key] = isPlainObject(base) && isPlainObject(saved) ? { ...base, ...saved } : saved;
+  }
+  return out as unknown as DepartmentParameters;
 }
 
 export async function listStandards(ctx: Ctx): Promise<StandardsAnswer<Date>> {

@@ -2,12 +2,27 @@
  * Shows the engine's SI values in the user's units with the engine's own formatters, and
  * turns a needs block's inputs (value + unit token) into text.
  */
-import { formatArea, formatDepth, formatHoc, formatLength, formatMass, formatNRate, formatSpeed, formatTemperature, formatVolume, L_PER_US_GALLON, m2ToFt2, type DisplayValue, type NeedInput, type UnitSystem } from '@swardwise/domain';
+import {
+  formatArea,
+  formatDepth,
+  formatHocText,
+  formatLength,
+  formatMass,
+  formatNRate,
+  formatSpeed,
+  formatTemperature,
+  formatVolume,
+  L_PER_US_GALLON,
+  m2ToFt2,
+  type DisplayValue,
+  type NeedInput,
+  type UnitSystem,
+} from '@swardwise/domain';
 
 export const shown = (d: DisplayValue): string => `${d.value.toLocaleString('en-US')} ${d.unit}`;
 const num = (v: number, digits: number) => v.toLocaleString('en-US', { maximumFractionDigits: digits });
 
-export const hocText = (mm: number, u: UnitSystem) => shown(formatHoc(mm, u));
+export const hocText = (mm: number, u: UnitSystem) => formatHocText(mm, u);
 export const depthText = (mm: number, u: UnitSystem) => shown(formatDepth(mm, u));
 export const areaText = (m2: number, u: UnitSystem) => shown(formatArea(m2, u));
 export const lengthText = (m: number, u: UnitSystem) => shown(formatLength(m, u));

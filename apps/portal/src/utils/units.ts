@@ -1,4 +1,4 @@
-import type { UnitSystem } from '@swardwise/domain';
+import { formatHocText, type UnitSystem } from '@swardwise/domain';
 
 /** Exact definitions: international acre and foot, inch of 25.4 mm. */
 const M2_PER_ACRE = 4046.8564224;
@@ -20,9 +20,9 @@ export function formatSurfaceArea(m2: number, units: UnitSystem): string {
   return units === 'imperial' ? `${num(m2 / M2_PER_FT2, 0)} ft²` : `${num(m2, 0)} m²`;
 }
 
-/** Height of cut: inches to the eighth-inch crews set mowers by, or millimetres. */
+/** Height of cut: inches to the eighth-inch crews set mowers by ("1⅜ in"), or whole millimetres. */
 export function formatHoc(mm: number, units: UnitSystem): string {
-  return units === 'imperial' ? `${num(mm / MM_PER_IN, 2)} in` : `${num(mm, 0)} mm`;
+  return formatHocText(mm, units);
 }
 
 export function formatDateTime(iso: string | null): string {
@@ -41,12 +41,12 @@ export function landAreaValue(m2: number, units: UnitSystem): number {
 export const landAreaUnit = (units: UnitSystem) => (units === 'imperial' ? 'ac' : 'ha');
 export const hocUnit = (units: UnitSystem) => (units === 'imperial' ? 'in' : 'mm');
 
-/** A height of cut in the person's unit (inches to 0.01, or whole millimetres). */
+/** A height of cut in the person's unit (inches to 0.001, so eighths stay exact, or whole millimetres). */
 export function hocValue(mm: number, units: UnitSystem): number {
-  return units === 'imperial' ? Math.round((mm / MM_PER_IN) * 100) / 100 : Math.round(mm);
+  return units === 'imperial' ? Math.round((mm / MM_PER_IN) * 1000) / 1000 : Math.round(mm);
 }
 
-/** A height of cut entered in the person's unit, back to millimetres as stored. */
+/** A height of cut entered in the person's unit, back to millimetres as stored (1⅜ in → 34.925 mm exactly). */
 export function hocToMm(value: number, units: UnitSystem): number {
-  return units === 'imperial' ? Math.round(value * MM_PER_IN * 10) / 10 : value;
+  return units === 'imperial' ? Math.round(value * MM_PER_IN * 1000) / 1000 : value;
 }

@@ -96,13 +96,19 @@ export interface LinesNeed extends Explained {
   reason: string | null;
   template: { id: string; name: string; source: string; lineWidthM: number } | null;
   lineLengthM: number;
+  /** What the totals include, element by element. */
+  elements: { label: string; count: number; lengthM: number; paintedAreaM2: number; equivalentLengthM: number }[];
   paintedAreaM2: number;
   mixedLitres: number;
   concentrateLitres: number;
   waterLitres: number;
   hoursPerRepaint: number;
+  firstCoat: { mixedLitres: number; concentrateLitres: number; waterLitres: number; hours: number };
   repaintDays: number | null;
   repaints: number;
+  firstCoats: number;
+  touchUps: number;
+  seasonMixedLitres: number;
   seasonConcentrateLitres: number;
   seasonHours: number;
 }

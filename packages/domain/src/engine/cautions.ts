@@ -10,7 +10,7 @@ export const CAUTIONS = {
   mowing:
     'Mowing: check slopes before mowing (use equipment rated for the grade or hand mowing), clear debris, keep guards and discharge chutes in place, wear PPE and keep people clear of thrown objects.',
   hardness:
-    'Surface hardness above the department\'s safe range raises the risk of head injury: consider closing the field until it is corrected. The safe range for the 2.25 kg tester is a department setting, not a published standard.',
+    'Surface hardness above the limit for the tester used raises the risk of head injury: consider closing the field until it is corrected. Readings from different testers are not comparable; the range for the 2.25 kg tester is a department setting, not a published standard.',
   wetField:
     'Wet or waterlogged fields tear and compact under play and footing is poor: close or restrict them until they drain.',
   lightning: 'Lightning: clear fields when thunder is heard and wait at least 30 minutes after the last thunder before returning (local policy governs).',

@@ -45,5 +45,11 @@ describe('dates', () => {
   test('should reject malformed and impossible dates', () => {
     expect(() => isoToDayNumber('2025-6-2')).toThrow(expect.objectContaining({ code: 'engine/invalid_date' }));
     expect(() => isoToDayNumber('2025-02-30')).toThrow(expect.objectContaining({ code: 'engine/invalid_date' }));
+    for (const bad of ['2025-13-01', '2025-00-10', '2025-04-31', '2023-02-29', '2025-06-0x', '2025/06/02', ' 2025-06-02', '2025-06-02T00', '+025-06-02', '']) {
+      expect(() => isoToDayNumber(bad), bad).toThrow(expect.objectContaining({ code: 'engine/invalid_date' }));
+    }
+    expect(isoToDayNumber('2024-02-29')).toBe(isoToDayNumber('2024-03-01') - 1);
+    expect(isoToDayNumber('2000-02-29')).toBe(isoToDayNumber('2000-03-01') - 1);
+    expect(() => isoToDayNumber('1900-02-29')).toThrow(expect.objectContaining({ code: 'engine/invalid_date' }));
   });
 });

@@ -7,8 +7,6 @@ import { fail } from './check.ts';
 export const WEEKDAYS = ['sun', 'mon', 'tue', 'wed', 'thu', 'fri', 'sat'] as const;
 export type Weekday = (typeof WEEKDAYS)[number];
 
-const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
-
 /** Days since 1970-01-01 of a proleptic Gregorian date (H. Hinnant's days_from_civil). */
 function daysFromCivil(y: number, m: number, d: number): number {
   const yy = m <= 2 ? y - 1 : y;
@@ -34,17 +32,39 @@ function civilFromDays(z0: number): [number, number, number] {
 
 const pad2 = (n: number): string => (n < 10 ? `0${n}` : String(n));
 
+const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31] as const;
+const isLeap = (y: number) => (y % 4 === 0 && y % 100 !== 0) || y % 400 === 0;
+
+/** Digit value of the character at `i`, or −100 so that any sum with it goes negative. */
+function digitAt(s: string, i: number): number {
+  const c = s.charCodeAt(i) - 48;
+  return c >= 0 && c <= 9 ? c : -100;
+}
+
+function malformedDate(iso: unknown): never {
+  return fail('invalid_date', `date must be YYYY-MM-DD (got ${JSON.stringify(iso)})`, { value: iso });
+}
+
 /** Days since 1970-01-01 of an ISO date; throws `engine/invalid_date` when malformed. */
 export function isoToDayNumber(iso: string): number {
-  const m = ISO_DATE.exec(iso);
-  if (!m) fail('invalid_date', `date must be YYYY-MM-DD (got ${JSON.stringify(iso)})`, { value: iso });
-  const y = Number(m[1]);
-  const mo = Number(m[2]);
-  const d = Number(m[3]);
-  const day = daysFromCivil(y, mo, d);
-  const [by, bm, bd] = civilFromDays(day);
-  if (by !== y || bm !== mo || bd !== d) fail('invalid_date', `${iso} is not a calendar date`, { value: iso });
-  return day;
+  // Parsed by character codes, without a regular expression or closure: this runs once per
+  // day of weather.
+  if (typeof iso !== 'string' || iso.length !== 10 || iso.charCodeAt(4) !== 45 || iso.charCodeAt(7) !== 45) malformedDate(iso);
+  const y0 = digitAt(iso, 0);
+  const y1 = digitAt(iso, 1);
+  const y2 = digitAt(iso, 2);
+  const y3 = digitAt(iso, 3);
+  const m0 = digitAt(iso, 5);
+  const m1 = digitAt(iso, 6);
+  const d0 = digitAt(iso, 8);
+  const d1 = digitAt(iso, 9);
+  if (y0 < 0 || y1 < 0 || y2 < 0 || y3 < 0 || m0 < 0 || m1 < 0 || d0 < 0 || d1 < 0) malformedDate(iso);
+  const y = y0 * 1000 + y1 * 100 + y2 * 10 + y3;
+  const mo = m0 * 10 + m1;
+  const day = d0 * 10 + d1;
+  const inMonth = mo >= 1 && mo <= 12 ? (mo === 2 && isLeap(y) ? 29 : (DAYS_IN_MONTH[mo - 1] as number)) : 0;
+  if (day < 1 || day > inMonth) fail('invalid_date', `${iso} is not a calendar date`, { value: iso });
+  return daysFromCivil(y, mo, day);
 }
 
 /** ISO date of a day number (days since 1970-01-01). */

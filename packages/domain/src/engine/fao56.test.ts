@@ -37,6 +37,15 @@ describe('fao56', () => {
     expect(Number.isFinite(r.et0Mm)).toBe(true);
   });
 
+  test('should give Rs = 0 in polar night with zero sunshine hours, not throw', () => {
+    expect(f.solarRadiationFromSunshine(0, 0, 0)).toBe(0);
+    expect(() => f.solarRadiationFromSunshine(1, 0, 0)).toThrow(expect.objectContaining({ code: 'engine/invalid_sunshine' }));
+    const r = f.et0PenmanMonteith({ tmaxC: -10, tminC: -20, latDeg: 80, elevationM: 0, doy: 355, sunshineH: 0, rhMaxPct: 90, rhMinPct: 70, windMs: 3 });
+    expect(r.rs).toBe(0);
+    expect(r.rsMethod).toBe('sunshine');
+    expect(Number.isFinite(r.et0Mm)).toBe(true);
+  });
+
   test('should fall back to Tdew = Tmin, u2 = 2 and Rs from temperature', () => {
     const r = f.et0PenmanMonteith({ tmaxC: 30, tminC: 15, latDeg: 35, elevationM: 100, doy: 180 });
     expect(r.eaMethod).toBe('tmin_as_dewpoint');

@@ -23,8 +23,15 @@ export function degToRad(deg: number): number {
 /** Atmospheric pressure P (kPa) from elevation z (m) (FAO-56 eq. 7). */
 export function atmosphericPressure(elevationM: number): number {
   requireRange(elevationM, -500, 9000, 'invalid_elevation', 'elevation (m)');
-  return 101.3 * ((293 - 0.0065 * elevationM) / 293) ** 5.26;
+  // A station's elevation is the same every day: keep the last answer rather than a power per day.
+  if (elevationM !== lastElevationM) {
+    lastElevationM = elevationM;
+    lastPressureKPa = 101.3 * ((293 - 0.0065 * elevationM) / 293) ** 5.26;
+  }
+  return lastPressureKPa;
 }
+let lastElevationM = Number.NaN;
+let lastPressureKPa = Number.NaN;
 
 /** Psychrometric constant γ (kPa °C⁻¹) from pressure P (kPa) (FAO-56 eq. 8). */
 export function psychrometricConstant(pressureKPa: number): number {
@@ -105,15 +112,13 @@ export function sunsetHourAngle(latRad: number, declinationRad: number): number 
 
 /** Extraterrestrial radiation Ra (MJ m⁻² d⁻¹) for latitude (rad) and day of year (FAO-56 eq. 21). */
 export function extraterrestrialRadiation(latRad: number, doy: number): number {
-  const dr = inverseRelativeDistance(doy);
   const d = solarDeclination(doy);
-  const ws = sunsetHourAngle(latRad, d);
-  return (
-    ((24 * 60) / Math.PI) *
-    SOLAR_CONSTANT *
-    dr *
-    (ws * Math.sin(latRad) * Math.sin(d) + Math.cos(latRad) * Math.cos(d) * Math.sin(ws))
-  );
+  return raFromTerms(latRad, inverseRelativeDistance(doy), d, sunsetHourAngle(latRad, d));
+}
+
+/** FAO-56 eq. 21 from its terms dr, δ and ωs (computed once per day by `et0PenmanMonteith`). */
+function raFromTerms(latRad: number, dr: number, d: number, ws: number): number {
+  return ((24 * 60) / Math.PI) * SOLAR_CONSTANT * dr * (ws * Math.sin(latRad) * Math.sin(d) + Math.cos(latRad) * Math.cos(d) * Math.sin(ws));
 }
 
 /** Daylight hours N = 24 ωs / π (FAO-56 eq. 34). */
@@ -123,12 +128,14 @@ export function daylightHours(sunsetHourAngleRad: number): number {
 
 /**
  * Solar radiation Rs (MJ m⁻² d⁻¹) from sunshine hours n, daylight hours N and Ra
- * (Ångström, FAO-56 eq. 35; as = 0.25, bs = 0.50 where no calibration exists).
+ * (Ångström, FAO-56 eq. 35; as = 0.25, bs = 0.50 where no calibration exists). In polar
+ * night (N = 0, so Ra = 0) there is no sun: Rs = 0, and any sunshine hours are refused.
  */
 export function solarRadiationFromSunshine(sunshineH: number, daylightH: number, ra: number, as = 0.25, bs = 0.5): number {
   requireNonNegative(sunshineH, 'invalid_sunshine', 'sunshine hours');
-  requirePositive(daylightH, 'invalid_sunshine', 'daylight hours');
+  requireNonNegative(daylightH, 'invalid_sunshine', 'daylight hours');
   if (sunshineH > daylightH + 1e-9) fail('invalid_sunshine', `sunshine hours (${sunshineH}) exceed daylight hours (${daylightH.toFixed(2)})`);
+  if (daylightH === 0) return 0;
   return (as + bs * (sunshineH / daylightH)) * ra;
 }
 
@@ -325,7 +332,7 @@ export function et0PenmanMonteith(input: Et0Input): Et0Result {
   const declination = solarDeclination(input.doy);
   const ws = sunsetHourAngle(latRad, declination);
   const daylightH = daylightHours(ws);
-  const ra = extraterrestrialRadiation(latRad, input.doy);
+  const ra = raFromTerms(latRad, dr, declination, ws);
   const rso = clearSkyRadiation(ra, input.elevationM);
 
   let rs: number;
@@ -371,6 +378,84 @@ export function et0PenmanMonteith(input: Et0Input): Et0Result {
     rsMethod,
     windAssumed,
   };
+}
+
+/** The terms of a station that do not change from day to day, for `et0PenmanMonteithDay`. */
+export interface Et0Station {
+  latDeg: number;
+  latRad: number;
+  elevationM: number;
+  /** γ from the station's pressure (FAO-56 eq. 7 and 8). */
+  gamma: number;
+  coastal: boolean;
+}
+
+/** A station's fixed terms: latitude in radians, γ from its elevation. */
+export function et0Station(latDeg: number, elevationM: number, coastal = false): Et0Station {
+  requireRange(latDeg, -90, 90, 'invalid_latitude', 'latitude (°)');
+  return { latDeg, latRad: degToRad(latDeg), elevationM, gamma: psychrometricConstant(atmosphericPressure(elevationM)), coastal };
+}
+
+/** One day of a station's weather for `et0PenmanMonteithDay` (the optional inputs of `Et0Input`). */
+export type Et0Day = Pick<Et0Input, 'tmaxC' | 'tminC' | 'tdewC' | 'rhMaxPct' | 'rhMinPct' | 'rhMeanPct' | 'windMs' | 'windHeightM' | 'sunshineH' | 'solarMJ'>;
+
+const inRange = (v: number | undefined, lo: number, hi: number) => v === undefined || (v >= lo && v <= hi);
+/** e°(T), FAO-56 eq. 11, for temperatures already checked. */
+const e0 = (t: number) => 0.6108 * Math.exp((17.27 * t) / (t + 237.3));
+/** A day `et0PenmanMonteithDay` does not take: the full function gives the answer or the error. */
+function et0Refused(station: Et0Station, doy: number, d: Et0Day): number {
+  return et0PenmanMonteith({ ...d, latDeg: station.latDeg, elevationM: station.elevationM, doy, coastal: station.coastal }).et0Mm;
+}
+
+/**
+ * Daily ET0 (mm/day) by FAO Penman–Monteith for a prepared station: the same equations, in
+ * the same order, as `et0PenmanMonteith` (eq. 6, 7, 8, 11–14, 17–19, 21–25, 34, 35, 37–39,
+ * 47, 50), without the intermediate results, so that a season of weather for many stations
+ * costs no allocation per day. A day the checks of `et0PenmanMonteith` would refuse is passed
+ * to it, so it fails with the same message.
+ */
+export function et0PenmanMonteithDay(station: Et0Station, doy: number, d: Et0Day): number {
+  const { tmaxC, tminC } = d;
+  const valid =
+    tmaxC >= -60 && tmaxC <= 60 && tminC >= -60 && tminC <= tmaxC &&
+    doy >= 1 && doy <= 366 && Number.isInteger(doy) &&
+    (d.tdewC === undefined || (d.tdewC >= -60 && d.tdewC <= tmaxC)) &&
+    inRange(d.rhMaxPct, 0, 100) && inRange(d.rhMinPct, 0, 100) && inRange(d.rhMeanPct, 0, 100) &&
+    (d.rhMaxPct === undefined || d.rhMinPct === undefined || d.rhMinPct <= d.rhMaxPct) &&
+    inRange(d.windMs, 0, Infinity) && d.windMs !== Infinity && inRange(d.windHeightM, 0.5, 100) &&
+    inRange(d.sunshineH, 0, 24) && inRange(d.solarMJ, 0, Infinity) && d.solarMJ !== Infinity;
+  // No closures in here (this runs for every day of every station).
+  if (!valid) return et0Refused(station, doy, d);
+  const tMeanC = (tmaxC + tminC) / 2;
+  const delta = (4098 * e0(tMeanC)) / (tMeanC + 237.3) ** 2;
+  const es = (e0(tmaxC) + e0(tminC)) / 2;
+  let ea: number;
+  if (d.tdewC !== undefined) ea = e0(d.tdewC);
+  else if (d.rhMaxPct !== undefined && d.rhMinPct !== undefined) ea = (e0(tminC) * (d.rhMaxPct / 100) + e0(tmaxC) * (d.rhMinPct / 100)) / 2;
+  else if (d.rhMaxPct !== undefined) ea = e0(tminC) * (d.rhMaxPct / 100);
+  else if (d.rhMeanPct !== undefined) ea = (d.rhMeanPct / 100) * es;
+  else ea = e0(tminC);
+  const u2 = d.windMs === undefined ? 2 : (d.windMs * 4.87) / Math.log(67.8 * (d.windHeightM ?? 2) - 5.42);
+  const dr = 1 + 0.033 * Math.cos(((2 * Math.PI) / 365) * doy);
+  const declination = 0.409 * Math.sin(((2 * Math.PI) / 365) * doy - 1.39);
+  const ws = Math.acos(Math.min(1, Math.max(-1, -Math.tan(station.latRad) * Math.tan(declination))));
+  const daylightH = (24 / Math.PI) * ws;
+  const ra = raFromTerms(station.latRad, dr, declination, ws);
+  const rso = (0.75 + 2e-5 * station.elevationM) * ra;
+  let rs: number;
+  if (d.solarMJ !== undefined) rs = d.solarMJ;
+  else if (d.sunshineH !== undefined) {
+    if (d.sunshineH > daylightH + 1e-9) return et0Refused(station, doy, d);
+    rs = daylightH === 0 ? 0 : (0.25 + 0.5 * (d.sunshineH / daylightH)) * ra;
+  } else rs = (station.coastal ? 0.19 : 0.16) * Math.sqrt(tmaxC - tminC) * ra;
+  const rns = (1 - REFERENCE_ALBEDO) * rs;
+  let rnl = 0;
+  if (rso > 0) {
+    const tmaxK = tmaxC + 273.16;
+    const tminK = tminC + 273.16;
+    rnl = STEFAN_BOLTZMANN * ((tmaxK ** 4 + tminK ** 4) / 2) * (0.34 - 0.14 * Math.sqrt(ea)) * (1.35 * Math.min(1, rs / rso) - 0.35);
+  }
+  return penmanMonteithEt0({ delta, rn: rns - rnl, g: 0, gamma: station.gamma, tMeanC, u2, es, ea });
 }
 
 /** Hargreaves ET0 (mm/day) for a day at a latitude, Ra from eq. 21 (FAO-56 eq. 52). */

@@ -20,28 +20,58 @@ export const ANNUAL_N_RANGES_LB: Record<Grass, { low: number; high: number; sour
   st_augustinegrass: { low: 2, high: 4, source: 'from memory' },
 };
 
-/** Returned clippings cut the N need by about 25 % (Qian et al. 2003, J. Environ. Qual. 32:1694). */
-export const CLIPPINGS_RETURNED_N_FACTOR = 0.75;
+/**
+ * How much returned clippings cut the N need as the turf ages (Qian et al. 2003, J. Environ.
+ * Qual. 32:1694, a model study of Kentucky bluegrass lawns): about 25 % in the first ten
+ * years, up to about 60 % after 50 years (published); the steps between, 33 % at 11–25 years
+ * and 50 % at 26–50 years, are from memory.
+ */
+export const CLIPPINGS_N_REDUCTION_BY_AGE: ReadonlyArray<{ upToYears: number; reduction: number }> = [
+  { upToYears: 10, reduction: 0.25 },
+  { upToYears: 25, reduction: 0.33 },
+  { upToYears: 50, reduction: 0.5 },
+  { upToYears: Infinity, reduction: 0.6 },
+];
+
+/** Turf age assumed when a field's age is not known, years: young turf, the smallest reduction (stated default). */
+export const DEFAULT_TURF_AGE_YEARS = 5;
+
+/** Share (0–1) by which returned clippings cut the N need at a turf age (Qian et al. 2003; unknown age: young turf, 25 %). */
+export function clippingsNReduction(turfAgeYears: number | null = null): number {
+  const age = turfAgeYears === null ? DEFAULT_TURF_AGE_YEARS : requireNonNegative(turfAgeYears, 'invalid_turf_age', 'turf age (years)');
+  return (CLIPPINGS_N_REDUCTION_BY_AGE.find((r) => age <= r.upToYears) ?? { reduction: 0.6 }).reduction;
+}
+
+/** Returned clippings on young turf cut the N need by about 25 % (Qian et al. 2003). */
+export const CLIPPINGS_RETURNED_N_FACTOR = 1 - clippingsNReduction(null);
 
 export interface AnnualNInput {
   grass: Grass;
   level: Level;
   clippings: 'returned' | 'removed';
   irrigated: boolean;
+  /** Years since the turf was established; unknown (null or omitted): young turf is assumed. */
+  turfAgeYears?: number | null;
 }
 
 export interface AnnualN {
   gPerM2: number;
   lbPer1000Ft2: number;
   rangeLb: { low: number; high: number; source: string };
+  /** False when the level's share takes the rate below the published range (a department choice, not a published rate). */
+  withinPublishedRange: boolean;
   reasons: string[];
 }
 
+const lbText = (lb: number) => String(Math.round(lb * 100) / 100);
+
 /**
- * Annual N (g N/m²/yr) = base × level share × clippings factor, where base is the upper end
- * of the grass's published range when irrigated and the lower end when not (department rule),
- * the level share comes from the Standards, and returned clippings multiply by 0.75
- * (Qian et al. 2003).
+ * Annual N (g N/m²/yr) = base × level share × (1 − clippings reduction), where base is the
+ * upper end of the grass's published range when irrigated and the lower end when not
+ * (department rule), the level share comes from the Standards, and returned clippings cut
+ * the need by 25–60 % with the age of the turf (Qian et al. 2003). Where the level's share
+ * takes the rate below the published range (low-maintenance turf), the reasons say so: the
+ * rate is then the department's choice, not the published one.
  */
 export function annualNitrogen(input: AnnualNInput, standards: Standards = DEFAULT_STANDARDS): AnnualN {
   grassSeason(input.grass);
@@ -50,14 +80,21 @@ export function annualNitrogen(input: AnnualNInput, standards: Standards = DEFAU
   if (input.clippings !== 'returned' && input.clippings !== 'removed') fail('invalid_clippings', `clippings must be returned or removed (got ${JSON.stringify(input.clippings)})`);
   const reasons: string[] = [];
   const base = input.irrigated ? range.high : range.low;
-  reasons.push(`${input.irrigated ? 'irrigated: upper' : 'not irrigated: lower'} end of ${range.low}–${range.high} lb N/1000 ft²/yr (${range.source})`);
   let lb = base * std.annualNShare;
-  reasons.push(`level ${std.level} (${std.name}) receives ${Math.round(std.annualNShare * 100)} %`);
-  if (input.clippings === 'returned') {
-    lb *= CLIPPINGS_RETURNED_N_FACTOR;
-    reasons.push('clippings returned: −25 % (Qian et al. 2003)');
+  const below = lb < range.low - 1e-9;
+  if (below) {
+    reasons.push(`${lbText(lb)} lb N/1000 ft²/yr: level ${std.level} (${std.name}) receives ${Math.round(std.annualNShare * 100)} % of ${base} lb, below the published ${range.low}–${range.high} lb for maintained turf (${range.source}); a department choice for low-maintenance turf, not a published rate`);
+  } else {
+    reasons.push(`${input.irrigated ? 'irrigated: upper' : 'not irrigated: lower'} end of ${range.low}–${range.high} lb N/1000 ft²/yr (${range.source})`);
+    reasons.push(`level ${std.level} (${std.name}) receives ${Math.round(std.annualNShare * 100)} %`);
   }
-  return { gPerM2: lbPer1000Ft2ToGPerM2(lb), lbPer1000Ft2: lb, rangeLb: range, reasons };
+  if (input.clippings === 'returned') {
+    const cut = clippingsNReduction(input.turfAgeYears ?? null);
+    lb *= 1 - cut;
+    const age = input.turfAgeYears === null || input.turfAgeYears === undefined ? 'turf age not recorded: young turf assumed' : `turf ${input.turfAgeYears} years old`;
+    reasons.push(`clippings returned: −${Math.round(cut * 100)} % (${age}; Qian et al. 2003)`);
+  }
+  return { gPerM2: lbPer1000Ft2ToGPerM2(lb), lbPer1000Ft2: lb, rangeLb: range, withinPublishedRange: !below, reasons };
 }
 
 /**
@@ -150,10 +187,22 @@ export function planNApplications(
     carry = 0;
   });
   if (carry > 1e-9) {
-    // The season's last small remainder joins the last application when it fits under the limit.
+    // The season's last small remainder joins the last application when it fits under the
+    // limit; else the last application and the remainder are shared out in equal parts, each
+    // above half the limit (so at or above the department's minimum wherever the minimum is at
+    // most half the limit), never a small last pass below the minimum.
     const last = out[out.length - 1];
-    if (last && last.nGPerM2 + carry <= limit + 1e-9) last.nGPerM2 += carry;
-    else emit(lastMonthWithN, carry);
+    if (!last) emit(lastMonthWithN, carry);
+    else if (last.nGPerM2 + carry <= limit + 1e-9) last.nGPerM2 += carry;
+    else {
+      // The remainder comes from months after the last application (a month that reached the
+      // minimum would have been applied), so the shares fall in the last application's month
+      // and in the last month with N.
+      const total = last.nGPerM2 + carry;
+      const parts = Math.ceil(total / limit - 1e-9);
+      last.nGPerM2 = total / parts;
+      emit(lastMonthWithN, (total * (parts - 1)) / parts);
+    }
   }
   return out;
 }

@@ -2,8 +2,9 @@ import { describe, expect, test } from 'vitest';
 import { compliance, recommendLevel, surfaceScore } from './grading.ts';
 import { CAUTIONS } from './cautions.ts';
 
-const safe = { min: 20, max: 100 };
-const good = { turfCoverPct: 95, weedsPct: 2, bareWornPct: 2, heightMm: 30, hocMm: 25, hardnessG: 70, evenness: 5 };
+// A range per tester: the 2.25 kg tester's is a department setting, F1936's upper limit 200.
+const safe = { portable_2_25kg: { min: 20, target: null, max: 100 }, f355_missile_a: { min: null, target: 165, max: 200 } };
+const good = { turfCoverPct: 95, weedsPct: 2, bareWornPct: 2, heightMm: 30, hocMm: 25, hardnessG: 70, hardnessDevice: 'portable_2_25kg' as const, evenness: 5 };
 
 describe('grading', () => {
   test('should recommend Showcase for an elite, busy, visible, sand-based irrigated field', () => {
@@ -40,8 +41,24 @@ describe('grading', () => {
     expect(surfaceScore({ ...good, hardnessG: 10 }, safe).flags).toContain('soft_surface');
   });
 
+  test('should judge a reading by the range of the tester that took it', () => {
+    // 150 Gmax: within F1936's limit (200) and its 165 target, far over the 2.25 kg tester's range.
+    const f1936 = surfaceScore({ ...good, hardnessG: 150, hardnessDevice: 'f355_missile_a' }, safe);
+    expect(f1936.flags).toEqual([]);
+    expect(f1936.cautions).toEqual([]);
+    expect(f1936.components.find((c) => c.key === 'hardness')?.score).toBe(100);
+    expect(surfaceScore({ ...good, hardnessG: 150 }, safe).flags).toContain('close_field_caution');
+    const aboveTarget = surfaceScore({ ...good, hardnessG: 180, hardnessDevice: 'f355_missile_a' }, safe);
+    expect(aboveTarget.flags).toEqual(['hardness_above_target']);
+    expect(aboveTarget.components.find((c) => c.key === 'hardness')?.score).toBe(70);
+    expect(surfaceScore({ ...good, hardnessG: 210, hardnessDevice: 'f355_missile_a' }, safe).flags).toContain('close_field_caution');
+    const { hardnessDevice: _d, ...noDevice } = good;
+    expect(() => surfaceScore(noDevice, safe)).toThrow(expect.objectContaining({ code: 'engine/hardness_device_required' }));
+    expect(() => surfaceScore({ ...good, hardnessDevice: 'pogo' as never }, safe)).toThrow(expect.objectContaining({ code: 'engine/unknown_hardness_device' }));
+  });
+
   test('should spread the hardness weight when not measured and flag long grass', () => {
-    const { hardnessG: _h, ...noHardness } = good;
+    const { hardnessG: _h, hardnessDevice: _d, ...noHardness } = good;
     const s = surfaceScore({ ...noHardness, heightMm: 45 }, safe);
     expect(s.components.some((c) => c.key === 'hardness')).toBe(false);
     expect(s.components.reduce((t, c) => t + c.weight, 0)).toBeCloseTo(100, 9);
@@ -59,9 +76,12 @@ describe('grading', () => {
 
   test('should reject out-of-range checks', () => {
     expect(() => surfaceScore({ ...good, turfCoverPct: 120 }, safe)).toThrow(expect.objectContaining({ code: 'engine/invalid_check' }));
+    // Cover + weeds + bare is the whole surface: 95 + 4 + 3 = 102 % is refused, not scored.
+    expect(() => surfaceScore({ ...good, weedsPct: 4, bareWornPct: 3 }, safe)).toThrow(expect.objectContaining({ code: 'engine/invalid_check', message: expect.stringMatching(/100 %/) }));
+    expect(() => surfaceScore({ ...good, weedsPct: 3, bareWornPct: 2 }, safe)).not.toThrow();
     expect(() => surfaceScore({ ...good, hocMm: 0 }, safe)).toThrow(expect.objectContaining({ code: 'engine/invalid_hoc' }));
     expect(() => surfaceScore({ ...good, evenness: 6 }, safe)).toThrow(expect.objectContaining({ code: 'engine/invalid_check' }));
-    expect(() => surfaceScore(good, { min: 100, max: 20 })).toThrow(expect.objectContaining({ code: 'engine/invalid_hardness_range' }));
+    expect(() => surfaceScore(good, { ...safe, portable_2_25kg: { min: 100, target: null, max: 20 } })).toThrow(expect.objectContaining({ code: 'engine/invalid_hardness_range' }));
     expect(() => recommendLevel({ play: 'pro' as never, weeklyUseHours: 1, visibility: 'low', rootzone: 'native_soil', irrigation: 'none' })).toThrow(expect.objectContaining({ code: 'engine/invalid_rubric' }));
     expect(() => recommendLevel({ play: 'league', weeklyUseHours: 200, visibility: 'low', rootzone: 'native_soil', irrigation: 'none' })).toThrow(expect.objectContaining({ code: 'engine/invalid_rubric' }));
   });

@@ -3,12 +3,12 @@
  * from a field check, and compliance of a field with its level. The rubric points, score
  * weights and thresholds are this product's department defaults, not published values.
  */
-import type { IrrigationKind, Level, Rootzone } from '../vocabulary.ts';
-import { IRRIGATION_KINDS, ROOTZONES } from '../vocabulary.ts';
+import type { HardnessDevice, IrrigationKind, Level, Rootzone } from '../vocabulary.ts';
+import { HARDNESS_DEVICE_LABELS, HARDNESS_DEVICES, IRRIGATION_KINDS, ROOTZONES } from '../vocabulary.ts';
 import { fail, requireNonNegative, requirePositive, requireRange } from './check.ts';
 import { CAUTIONS } from './cautions.ts';
-import { DEFAULT_STANDARDS, levelStandard } from './standards.ts';
-import type { Standards } from './standards.ts';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, levelStandard } from './standards.ts';
+import type { HardnessRange, Standards } from './standards.ts';
 
 export const PLAY_LEVELS = ['elite', 'varsity', 'league', 'recreation', 'informal'] as const;
 export type PlayLevel = (typeof PLAY_LEVELS)[number];
@@ -72,8 +72,10 @@ export interface FieldCheckInput {
   bareWornPct: number;
   heightMm: number;
   hocMm: number;
-  /** Gmax with the 2.25 kg portable tester; omit when not measured. */
+  /** Gmax reading; omit when not measured. */
   hardnessG?: number;
+  /** The tester the reading was taken with; required with a reading (readings of different testers are not comparable). */
+  hardnessDevice?: HardnessDevice;
   /** Evenness 1 (rough) to 5 (true). */
   evenness: number;
 }
@@ -86,7 +88,7 @@ export interface ScoreComponent {
   points: number;
 }
 
-export type CheckFlag = 'close_field_caution' | 'soft_surface' | 'overdue_mowing' | 'scalped' | 'low_cover';
+export type CheckFlag = 'close_field_caution' | 'hardness_above_target' | 'soft_surface' | 'overdue_mowing' | 'scalped' | 'low_cover';
 
 export interface SurfaceScore {
   score: number;
@@ -103,19 +105,22 @@ const clamp = (v: number) => Math.max(0, Math.min(100, v));
 /**
  * Surface score 0–100 from a field check, as a weighted sum of components (department
  * rubric): cover = cover %; weeds = 100 − 2 × weeds %; bare = 100 − 3 × bare %; height 100
- * between HOC and 1.5 × HOC, falling 200 points per unit of ratio outside; hardness 100 inside
- * the safe range, falling 2 points per G outside; evenness (e − 1) × 25. Without a hardness
- * reading its weight is spread over the others. Hardness above the safe range flags a
- * close-the-field caution.
+ * between HOC and 1.5 × HOC, falling 200 points per unit of ratio outside; hardness 100
+ * within the tester's range (up to its target where one is set), falling 2 points per G
+ * outside; evenness (e − 1) × 25. Without a hardness reading its weight is spread over the
+ * others. Hardness is judged against the range of the tester that took it: above the
+ * limit flags a close-the-field caution, above the target (within the limit) a flag only.
+ * Cover + weeds + bare/worn is the whole surface, so it cannot pass 100 %.
  */
-export function surfaceScore(check: FieldCheckInput, safeRangeG: { min: number; max: number }): SurfaceScore {
+export function surfaceScore(check: FieldCheckInput, ranges: Record<HardnessDevice, HardnessRange> = DEFAULT_PARAMETERS.hardnessRangesG): SurfaceScore {
   requireRange(check.turfCoverPct, 0, 100, 'invalid_check', 'turf cover (%)');
   requireRange(check.weedsPct, 0, 100, 'invalid_check', 'weeds (%)');
   requireRange(check.bareWornPct, 0, 100, 'invalid_check', 'bare/worn (%)');
+  const whole = check.turfCoverPct + check.weedsPct + check.bareWornPct;
+  if (whole > 100 + 1e-9) fail('invalid_check', `turf cover, weeds and bare/worn share one surface: together they cannot pass 100 % (got ${Math.round(whole * 10) / 10} %)`, { totalPct: whole });
   requirePositive(check.heightMm, 'invalid_height', 'measured height (mm)');
   requirePositive(check.hocMm, 'invalid_hoc', 'HOC (mm)');
   requireRange(check.evenness, 1, 5, 'invalid_check', 'evenness (1–5)');
-  if (safeRangeG.min >= safeRangeG.max) fail('invalid_hardness_range', 'the safe hardness range must have min below max');
   const ratio = check.heightMm / check.hocMm;
   const heightScore = ratio < 1 ? clamp(100 - (1 - ratio) * 200) : ratio <= 1.5 ? 100 : clamp(100 - (ratio - 1.5) * 200);
   const parts: Array<[ScoreComponent['key'], number]> = [
@@ -128,12 +133,21 @@ export function surfaceScore(check: FieldCheckInput, safeRangeG: { min: number; 
   const cautions: string[] = [];
   if (check.hardnessG !== undefined) {
     const g = requireNonNegative(check.hardnessG, 'invalid_hardness', 'hardness (Gmax)');
-    const over = g > safeRangeG.max ? g - safeRangeG.max : g < safeRangeG.min ? safeRangeG.min - g : 0;
+    const device = check.hardnessDevice;
+    if (device === undefined) fail('hardness_device_required', 'name the tester the hardness reading was taken with: readings of different testers are not comparable');
+    if (!(HARDNESS_DEVICES as readonly string[]).includes(device)) fail('unknown_hardness_device', `hardness tester must be one of ${HARDNESS_DEVICES.join(', ')} (got ${JSON.stringify(device)})`);
+    const range = ranges[device];
+    if (!range) fail('invalid_hardness_range', `no hardness range is set for ${HARDNESS_DEVICE_LABELS[device]}`);
+    const upper = range.target ?? range.max;
+    if ((range.min !== null && range.min >= upper) || upper > range.max) fail('invalid_hardness_range', `the hardness range of ${HARDNESS_DEVICE_LABELS[device]} must run from its minimum up to its target and limit`);
+    const over = g > upper ? g - upper : range.min !== null && g < range.min ? range.min - g : 0;
     parts.push(['hardness', clamp(100 - 2 * over)]);
-    if (g > safeRangeG.max) {
+    if (g > range.max) {
       flags.push('close_field_caution');
       cautions.push(CAUTIONS.hardness);
-    } else if (g < safeRangeG.min) {
+    } else if (g > upper) {
+      flags.push('hardness_above_target');
+    } else if (range.min !== null && g < range.min) {
       flags.push('soft_surface');
       cautions.push(CAUTIONS.wetField);
     }

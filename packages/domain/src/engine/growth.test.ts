@@ -10,6 +10,14 @@ describe('growth', () => {
     expect(growthPotential(5, 'warm')).toBeLessThan(0.01);
   });
 
+  test('should hold warm-season GP at 1 from its optimum up and leave the cool-season curve symmetric', () => {
+    expect(growthPotential(31, 'warm')).toBe(1);
+    expect(growthPotential(35, 'warm')).toBe(1);
+    expect(growthPotential(45, 'warm')).toBe(1);
+    expect(growthPotential(30.9, 'warm')).toBeLessThan(1);
+    expect(growthPotential(30, 'cool')).toBeCloseTo(growthPotential(10, 'cool'), 12);
+  });
+
   test('should scale daily growth by GP and the modifiers', () => {
     expect(dailyGrowthMm(4, 20, 'cool')).toBe(4);
     expect(dailyGrowthMm(4, 20, 'cool', { nitrogen: 0.5, water: 0.5 })).toBe(1);

@@ -2,24 +2,43 @@
  * Growth potential and daily vertical growth.
  * GP = exp(−½((T − To)/σ)²) — Gelernter & Stowell (2005), Golf Course Management,
  * "Improved overseeding programs 1: the role of weather". To = 20 °C cool-season,
- * 31 °C warm-season (published); σ = 5.5 °C cool, 7 °C warm (from memory).
+ * 31 °C warm-season (published); σ = 5.5 °C cool, 7 °C warm (from memory). The warm-season
+ * curve is held at 1 from its optimum up, as in the model authors' later revision: warm-season
+ * grasses do not slow down in the heat the way the bell curve's right side would say.
  */
 import type { GrassSeason } from '../vocabulary.ts';
 import { fail, requireFraction, requireNonNegative, requirePositive, requireTemperature } from './check.ts';
 
-/** Curve parameters: To published (Gelernter & Stowell 2005); σ from memory. */
-export const GP_CURVES: Record<GrassSeason, { optimumC: number; sigmaC: number }> = {
-  cool: { optimumC: 20, sigmaC: 5.5 },
-  warm: { optimumC: 31, sigmaC: 7 },
+/**
+ * Curve parameters: To published (Gelernter & Stowell 2005); σ from memory; the warm-season
+ * plateau above To from the model authors' later revision.
+ */
+export const GP_CURVES: Record<GrassSeason, { optimumC: number; sigmaC: number; plateauAboveOptimum: boolean }> = {
+  cool: { optimumC: 20, sigmaC: 5.5, plateauAboveOptimum: false },
+  warm: { optimumC: 31, sigmaC: 7, plateauAboveOptimum: true },
 };
 
-/** Growth potential 0–1 for a mean daily air temperature (°C) (Gelernter & Stowell 2005). */
+/**
+ * Growth potential 0–1 for a mean daily air temperature (°C) (Gelernter & Stowell 2005);
+ * warm-season GP is 1 from its optimum (31 °C) up (the authors' later revision).
+ */
 export function growthPotential(tMeanC: number, season: GrassSeason): number {
   requireTemperature(tMeanC, 'mean temperature');
   const curve = GP_CURVES[season];
   if (!curve) fail('unknown_season', `grass season must be cool or warm (got ${JSON.stringify(season)})`);
+  if (curve.plateauAboveOptimum && tMeanC >= curve.optimumC) return 1;
   const z = (tMeanC - curve.optimumC) / curve.sigmaC;
   return Math.exp(-0.5 * z * z);
+}
+
+/**
+ * Mean temperature (°C) at which the cool- and warm-season curves give the same GP, between
+ * the two optima: (T − To,cool)/σcool = (To,warm − T)/σwarm. Derived, about 24.8 °C.
+ */
+export function gpCrossoverC(): number {
+  const c = GP_CURVES.cool;
+  const w = GP_CURVES.warm;
+  return (c.optimumC * w.sigmaC + w.optimumC * c.sigmaC) / (c.sigmaC + w.sigmaC);
 }
 
 /** Growth modifiers, each 0–1 (1 = not limiting). */
@@ -39,11 +58,14 @@ export function dailyGrowthMm(maxRateMmPerDay: number, tMeanC: number, season: G
   return maxRateMmPerDay * growthPotential(tMeanC, season) * n * w;
 }
 
+/** Least water modifier: turf keeps some growth under drought until dormancy (department model). */
+export const WATER_MODIFIER_FLOOR = 0.2;
+
 /**
  * Water modifier from supply vs demand over a period: min(1, supply ÷ ETc), never below
  * `floor` (turf keeps some growth until dormancy). Department model, no published source.
  */
-export function waterModifier(supplyMm: number, etcMm: number, floor = 0.2): number {
+export function waterModifier(supplyMm: number, etcMm: number, floor = WATER_MODIFIER_FLOOR): number {
   requireNonNegative(supplyMm, 'invalid_water', 'water supply (mm)');
   requireNonNegative(etcMm, 'invalid_water', 'ETc (mm)');
   if (etcMm === 0) return 1;

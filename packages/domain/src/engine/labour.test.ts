@@ -42,6 +42,11 @@ describe('labour', () => {
 
   test('should count extra passes for overlap', () => {
     expect(stripePassPlan(100, 60, { ...mower, overlapM: 0.1 }, 'lengthwise').passes).toEqual([32]);
+    // 5 passes of a 2.1 m mower with 0.1 m overlap cover 5 × 2.1 − 4 × 0.1 = 10.1 m exactly
+    // (the count was ⌈10.1 ÷ 2.0⌉ = 6, one pass too many).
+    expect(stripePassPlan(100, 10.1, { ...mower, widthM: 2.1, overlapM: 0.1 }, 'lengthwise').passes).toEqual([5]);
+    expect(stripePassPlan(100, 10.2, { ...mower, widthM: 2.1, overlapM: 0.1 }, 'lengthwise').passes).toEqual([6]);
+    expect(stripePassPlan(100, 1, { ...mower, widthM: 2.1, overlapM: 0.1 }, 'lengthwise').passes).toEqual([1]);
     expect(() => stripePassPlan(100, 60, { ...mower, overlapM: 2 }, 'lengthwise')).toThrow(expect.objectContaining({ code: 'engine/invalid_overlap' }));
   });
 

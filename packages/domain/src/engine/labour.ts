@@ -49,7 +49,8 @@ export interface PassPlan {
 }
 
 /**
- * Pass plan for a rectangular field: passes = ⌈across ÷ (width − overlap)⌉ per direction;
+ * Pass plan for a rectangular field: passes = ⌈(across − overlap) ÷ (width − overlap)⌉ per
+ * direction (n passes cover n × width − (n − 1) × overlap);
  * time = distance ÷ speed + turns × turn time. Lengthwise passes run along the long side;
  * side to side along the short side (stripes officials read across; common practice);
  * criss-cross mows both directions.
@@ -62,7 +63,9 @@ export function stripePassPlan(lengthM: number, widthM: number, mower: Pick<Mowe
   requireNonNegative(mower.overlapM, 'invalid_overlap', 'overlap (m)');
   const effective = mower.widthM - mower.overlapM;
   if (!(effective > 0)) fail('invalid_overlap', `overlap (${mower.overlapM} m) must be smaller than the cutting width (${mower.widthM} m)`);
-  const one = (passLength: number, across: number) => ({ passes: Math.ceil(across / effective - 1e-9), passLength });
+  // n passes cover n × width − (n − 1) × overlap = n × (width − overlap) + overlap, so the
+  // first pass covers a full width and each further pass adds width − overlap.
+  const one = (passLength: number, across: number) => ({ passes: Math.max(1, Math.ceil((across - mower.overlapM) / effective - 1e-9)), passLength });
   const dirs = direction === 'lengthwise' ? [one(lengthM, widthM)] : direction === 'side_to_side' ? [one(widthM, lengthM)] : direction === 'criss_cross' ? [one(lengthM, widthM), one(widthM, lengthM)] : fail('invalid_direction', `stripe direction must be lengthwise, side_to_side or criss_cross (got ${JSON.stringify(direction)})`);
   const passes = dirs.map((d) => d.passes);
   const passLengthsM = dirs.map((d) => d.passLength);

@@ -11,7 +11,7 @@ import { ftToM } from './units.ts';
 export type Point = readonly [number, number];
 
 export type LineSegment =
-  | { kind: 'line'; from: Point; to: Point; label: string }
+  | { kind: 'line'; from: Point; to: Point; label: string; /** Painted width when not the template's line width (e.g. a numeral's stroke), m. */ widthM?: number }
   | { kind: 'arc'; center: Point; radiusM: number; startRad: number; endRad: number; label: string };
 
 export interface LineTemplate {
@@ -24,6 +24,8 @@ export interface LineTemplate {
   widthM: number;
   /** Line width, m. */
   lineWidthM: number;
+  /** How far markings reach outside the field's frame (team areas, limit lines), m; 0 when none. */
+  marginM?: number;
   segments: LineSegment[];
 }
 
@@ -36,6 +38,42 @@ export function segmentLengthM(s: LineSegment): number {
 /** Total line length of a template, m. */
 export function totalLineLengthM(t: Pick<LineTemplate, 'segments'>): number {
   return t.segments.reduce((s, seg) => s + segmentLengthM(seg), 0);
+}
+
+/** Painted area of one segment, m²: its length × its own width, else the template's line width. */
+export function segmentPaintedAreaM2(s: LineSegment, lineWidthM: number): number {
+  return segmentLengthM(s) * (s.kind === 'line' && s.widthM !== undefined ? s.widthM : lineWidthM);
+}
+
+/** Painted area of a template, m². */
+export function templatePaintedAreaM2(t: Pick<LineTemplate, 'segments' | 'lineWidthM'>): number {
+  return t.segments.reduce((s, seg) => s + segmentPaintedAreaM2(seg, t.lineWidthM), 0);
+}
+
+/** One element of a layout (all segments with one label) and what it adds to a repaint. */
+export interface LineElement {
+  label: string;
+  /** Pieces painted (lines, arcs, marks or numeral strokes). */
+  count: number;
+  lengthM: number;
+  paintedAreaM2: number;
+  /** Length of template-width line that takes the same paint (painted area ÷ line width), m. */
+  equivalentLengthM: number;
+}
+
+/** What each total of a layout includes: its elements in the order they are drawn. */
+export function lineElements(t: Pick<LineTemplate, 'segments' | 'lineWidthM'>): LineElement[] {
+  const out = new Map<string, LineElement>();
+  for (const seg of t.segments) {
+    const e = out.get(seg.label) ?? { label: seg.label, count: 0, lengthM: 0, paintedAreaM2: 0, equivalentLengthM: 0 };
+    const area = segmentPaintedAreaM2(seg, t.lineWidthM);
+    e.count += 1;
+    e.lengthM += segmentLengthM(seg);
+    e.paintedAreaM2 += area;
+    e.equivalentLengthM += area / t.lineWidthM;
+    out.set(seg.label, e);
+  }
+  return [...out.values()];
 }
 
 const line = (x1: number, y1: number, x2: number, y2: number, label: string): LineSegment => ({ kind: 'line', from: [x1, y1], to: [x2, y2], label });
@@ -144,27 +182,121 @@ export function smallSidedSoccerTemplate(format: keyof typeof SMALL_SIDED_SOCCER
   };
 }
 
+/** Seven-segment strokes of the numerals a football field carries (0–5), as [u1, v1, u2, v2] in a 4 × 6 box (ft). */
+const NUMERAL_STROKES: Record<string, ReadonlyArray<readonly [number, number, number, number]>> = (() => {
+  const seg = { a: [0, 6, 4, 6], b: [4, 6, 4, 3], c: [4, 3, 4, 0], d: [0, 0, 4, 0], e: [0, 0, 0, 3], f: [0, 3, 0, 6], g: [0, 3, 4, 3] } as const;
+  const of = (keys: string) => [...keys].map((k) => seg[k as keyof typeof seg]);
+  return { '0': of('abcdef'), '1': of('bc'), '2': of('abged'), '3': of('abgcd'), '4': of('fgbc'), '5': of('afgcd') };
+})();
+
+/** Options of the football layout. */
+export interface FootballOptions {
+  /** Hash marks (inbounds lines) from each sideline, ft: NFHS 53 ft 4 in, NCAA 60 ft. */
+  hashFromSidelineFt?: number;
+  /** Yard-line numerals (default true). */
+  numbers?: boolean;
+  /** Team boxes, coaching lines and limit lines outside the field (default true). */
+  teamAreas?: boolean;
+}
+
 /**
  * American football, NFHS (secondary sources): 360 × 160 ft including 30 ft end zones,
- * 4 in lines, yard lines every 5 yd from goal line to goal line, hash marks at every other
- * yard 53 ft 4 in from each sideline (NCAA: 60 ft). Hash-mark length 2 ft: from memory.
- * Team boxes and numbers are not included.
+ * 4 in lines; goal lines and yard lines every 5 yd across the field; hash marks (inbounds
+ * lines) 24 in long at every other yard, 53 ft 4 in from each sideline (NCAA 60 ft).
+ * From memory (NFHS rule book, not confirmed in print here): 24 in short marks at each yard
+ * line 4 in inside each sideline; 12 in nine-yard marks 9 yd from each sideline at every
+ * 10-yd line; numerals 6 ft high and 4 ft wide every 10 yd, tops 9 yd from the sideline,
+ * drawn here as seven-segment strokes 8 in wide; limit lines 6 ft outside the sidelines and
+ * end lines as 12 in dashes with 24 in gaps; between the 25-yd lines a solid coaching line
+ * 6 ft and a team-box line 12 ft outside each sideline, closed at both ends. Direction
+ * arrows, end-zone and mid-field decoration are not included.
  */
-export function footballTemplate(hashFromSidelineFt = 53 + 4 / 12): LineTemplate {
-  const L = ftToM(360);
-  const W = ftToM(160);
-  const ez = ftToM(30);
-  const yd = ftToM(3);
+export function footballTemplate(hashFromSidelineFt: number | FootballOptions = 53 + 4 / 12): LineTemplate {
+  const o: FootballOptions = typeof hashFromSidelineFt === 'number' ? { hashFromSidelineFt } : hashFromSidelineFt;
+  const numbers = o.numbers ?? true;
+  const teamAreas = o.teamAreas ?? true;
+  const ft = ftToM;
+  const L = ft(360);
+  const W = ft(160);
+  const ez = ft(30);
+  const yd = ft(3);
+  const xAt = (yardLine: number) => ez + yardLine * yd;
   const segs: LineSegment[] = boundary(L, W, 'end line', 'sideline');
-  for (let k = 0; k <= 100; k += 5) segs.push(line(ez + k * yd, 0, ez + k * yd, W, k === 0 || k === 100 ? 'goal line' : 'yard line'));
-  const hashLen = ftToM(2);
-  const h1 = ftToM(hashFromSidelineFt);
+  for (let k = 0; k <= 100; k += 5) segs.push(line(xAt(k), 0, xAt(k), W, k === 0 || k === 100 ? 'goal line' : 'yard line'));
+  const hashLen = ft(2);
+  const h1 = ft(o.hashFromSidelineFt ?? 53 + 4 / 12);
+  const inset = ft(4 / 12);
   for (let k = 1; k < 100; k++) {
     if (k % 5 === 0) continue;
-    const x = ez + k * yd;
+    const x = xAt(k);
     segs.push(line(x, h1, x, h1 + hashLen, 'hash mark'), line(x, W - h1, x, W - h1 - hashLen, 'hash mark'));
+    segs.push(line(x, inset, x, inset + hashLen, 'sideline short mark'), line(x, W - inset, x, W - inset - hashLen, 'sideline short mark'));
   }
-  return { id: 'football_nfhs', sport: 'football', name: 'American football (NFHS)', source: 'NFHS (secondary sources); hash-mark length from memory', lengthM: L, widthM: W, lineWidthM: ftToM(4 / 12), segments: segs };
+  for (let k = 10; k <= 90; k += 10) {
+    const x = xAt(k);
+    const nine = 9 * yd;
+    segs.push(line(x, nine - ft(1), x, nine, 'nine-yard mark'), line(x, W - nine + ft(1), x, W - nine, 'nine-yard mark'));
+  }
+  if (numbers) {
+    const stroke = ft(8 / 12);
+    const gap = ft(1);
+    for (let k = 10; k <= 90; k += 10) {
+      const digits = String(Math.min(k, 100 - k)).split('');
+      const x = xAt(k);
+      // Near side reads from the near sideline (bottom 7 yd, top 9 yd out); far side turned half round.
+      for (const far of [false, true]) {
+        digits.forEach((digit, i) => {
+          const u0 = i === 0 ? -gap / 2 - ft(4) : gap / 2;
+          for (const [u1, v1, u2, v2] of NUMERAL_STROKES[digit] ?? []) {
+            const px = (u: number) => (far ? x - (u0 + ft(u)) : x + u0 + ft(u));
+            const py = (v: number) => (far ? W - 7 * yd - ft(v) : 7 * yd + ft(v));
+            segs.push({ kind: 'line', from: [px(u1), py(v1)], to: [px(u2), py(v2)], label: 'number', widthM: stroke });
+          }
+        });
+      }
+    }
+  }
+  let marginM = 0;
+  if (teamAreas) {
+    const out6 = ft(6);
+    const out12 = ft(12);
+    marginM = out12;
+    const x25 = xAt(25);
+    const x75 = xAt(75);
+    // Limit lines: dashes along the ends and the sidelines, solid coaching line between the 25s.
+    const dashes = (x1: number, y1: number, x2: number, y2: number) => {
+      const len = Math.hypot(x2 - x1, y2 - y1);
+      for (let a = 0; a + ft(1) <= len + 1e-9; a += ft(3)) {
+        const t1 = a / len;
+        const t2 = (a + ft(1)) / len;
+        segs.push(line(x1 + (x2 - x1) * t1, y1 + (y2 - y1) * t1, x1 + (x2 - x1) * t2, y1 + (y2 - y1) * t2, 'limit line'));
+      }
+    };
+    for (const y of [-out6, W + out6]) {
+      dashes(-out6, y, x25, y);
+      dashes(x75, y, L + out6, y);
+      segs.push(line(x25, y, x75, y, 'coaching line'));
+    }
+    dashes(-out6, -out6 + ft(3), -out6, W + out6 - ft(3));
+    dashes(L + out6, -out6 + ft(3), L + out6, W + out6 - ft(3));
+    for (const [yc, yt] of [
+      [-out6, -out12],
+      [W + out6, W + out12],
+    ] as const) {
+      segs.push(line(x25, yt, x75, yt, 'team box'), line(x25, yc, x25, yt, 'team box'), line(x75, yc, x75, yt, 'team box'));
+    }
+  }
+  return {
+    id: 'football_nfhs',
+    sport: 'football',
+    name: 'American football (NFHS)',
+    source: 'NFHS (secondary sources); short marks, nine-yard marks, numerals, team areas and hash-mark length from memory',
+    lengthM: L,
+    widthM: W,
+    lineWidthM: ft(4 / 12),
+    marginM,
+    segments: segs,
+  };
 }
 
 /**
@@ -227,9 +359,11 @@ function diamond(opts: { id: string; sport: Sport; name: string; source: string;
     const start = ftToM(opts.runningLaneFt);
     const end = ftToM(opts.runningLaneFt * 2);
     const off = ftToM(3);
-    // Parallel to the first-base line, 3 ft into foul territory, from half-way to first base.
-    const px = (d: number) => d * c + off * c;
-    const py = (d: number) => -d * c + off * c;
+    // Official Baseball Rules 5.09(a)(11): the lane lies in foul territory beside the
+    // first-base line, from half-way to first base, 3 ft wide. The first-base line runs
+    // along (c, −c); foul territory is on the side of (−c, −c), away from second base.
+    const px = (d: number) => d * c - off * c;
+    const py = (d: number) => -d * c - off * c;
     segs.push(line(px(start), py(start), px(end), py(end), 'running lane'), line(start * c, -start * c, px(start), py(start), 'running lane'));
   }
   return { id: opts.id, sport: opts.sport, name: opts.name, source: opts.source, lengthM: f * c, widthM: 2 * f * c, lineWidthM: ftToM(opts.lineWidthIn / 12), segments: segs };
@@ -237,8 +371,9 @@ function diamond(opts: { id: string; sport: Sport; name: string; source: string;
 
 /**
  * Baseball (Official Baseball Rules 2.01): foul lines from home plate, 320 ft or more
- * preferred (default 325 ft, department choice); 90 ft bases (running lane from 45 ft to
- * first base, 3 ft wide). Batter's boxes 4 × 6 ft, 6 in from the plate: from memory.
+ * preferred (default 325 ft, department choice); 90 ft bases; running lane in foul territory
+ * beside the first-base line from 45 ft to first base, 3 ft wide (Official Baseball Rules
+ * 5.09(a)(11)). Batter's boxes 4 × 6 ft, 6 in from the plate: from memory.
  */
 export function baseballTemplate(foulLineFt = 325): LineTemplate {
   requireRange(foulLineFt, 150, 450, 'invalid_dimension', 'foul line length (ft)');
@@ -271,13 +406,28 @@ export function defaultTemplateFor(sport: Sport): LineTemplate | null {
   }
 }
 
+/**
+ * One coat of line paint. Coverage means the finished line of that coat, all its passes
+ * together: the trade press's "about 200 linear ft of 4 in line per mixed gallon" is a
+ * finished line painted in two directions, not one pass.
+ */
 export interface PaintSettings {
-  /** Area one litre of mixed paint covers in one pass, m²/L. */
+  /** Area of finished line one litre of mixed paint gives in this coat (all passes), m²/L. */
   coverageM2PerMixedL: number;
   /** Parts water per part paint concentrate (1:1 to 4:1 common practice). */
   dilutionWaterPerPaint: number;
-  /** Passes (two directions is common practice). */
+  /** Passes of the marker in this coat (labour; the paint is in the coverage). */
   passes: number;
+}
+
+/** The department's line-marking settings: a first coat, a touch-up coat, the marker. */
+export interface LineSettings {
+  /** A layout painted afresh (start of the season, lines no longer showing). */
+  firstCoat: PaintSettings;
+  /** A repaint over lines that still show: lighter and often more dilute. */
+  touchUp: PaintSettings;
+  markerSpeedKmh: number;
+  setupMin: number;
 }
 
 export interface PaintNeed {
@@ -289,8 +439,9 @@ export interface PaintNeed {
 }
 
 /**
- * Paint for a line length: painted area = length × width; mixed = area × passes ÷ coverage;
- * concentrate = mixed ÷ (1 + dilution); water = mixed − concentrate.
+ * Paint for a line length in one coat: painted area = length × width; mixed = area ÷ the
+ * coat's coverage (finished line, all passes); concentrate = mixed ÷ (1 + dilution); water =
+ * mixed − concentrate.
  */
 export function paintNeed(lineLengthM: number, lineWidthM: number, s: PaintSettings): PaintNeed {
   requireNonNegative(lineLengthM, 'invalid_length', 'line length (m)');
@@ -299,7 +450,7 @@ export function paintNeed(lineLengthM: number, lineWidthM: number, s: PaintSetti
   requireRange(s.dilutionWaterPerPaint, 0, 10, 'invalid_dilution', 'dilution (parts water per part paint)');
   requirePositive(s.passes, 'invalid_passes', 'passes');
   const paintedAreaM2 = lineLengthM * lineWidthM;
-  const mixedLitres = (paintedAreaM2 * s.passes) / s.coverageM2PerMixedL;
+  const mixedLitres = paintedAreaM2 / s.coverageM2PerMixedL;
   const concentrateLitres = mixedLitres / (1 + s.dilutionWaterPerPaint);
   return { lineLengthM, paintedAreaM2, mixedLitres, concentrateLitres, waterLitres: mixedLitres - concentrateLitres };
 }
@@ -322,28 +473,84 @@ export function repaintsInSeason(seasonDays: number, intervalDays: number | null
   return (seasonDays > 0 ? Math.ceil(seasonDays / intervalDays) : 0) + extraEvents;
 }
 
-export interface LinePlan extends PaintNeed {
+/** Paint and labour of one coat of a whole layout. */
+export interface CoatPlan extends PaintNeed {
+  /** Marking hours of the coat (passes × equivalent length ÷ speed + set-up). */
+  hours: number;
+}
+
+interface TemplateMeasures {
+  lengthM: number;
+  areaM2: number;
+  equivalentLengthM: number;
+  elements: LineElement[];
+}
+const measured = new WeakMap<LineTemplate, TemplateMeasures>();
+/**
+ * Length, painted area and elements of a layout, measured once per template object: a season
+ * outlook asks them for every field, and a football layout has some 900 pieces.
+ */
+function measuresOf(template: LineTemplate): TemplateMeasures {
+  let m = measured.get(template);
+  if (!m) {
+    const areaM2 = templatePaintedAreaM2(template);
+    m = { lengthM: totalLineLengthM(template), areaM2, equivalentLengthM: areaM2 / template.lineWidthM, elements: lineElements(template) };
+    measured.set(template, m);
+  }
+  return m;
+}
+
+/** One coat of a whole layout: paint from its painted area (numerals are wider strokes), labour from its equivalent length. */
+export function coatPlan(template: LineTemplate, coat: PaintSettings, marker: { markerSpeedKmh: number; setupMin: number }): CoatPlan {
+  const { lengthM, equivalentLengthM } = measuresOf(template);
+  return { ...paintNeed(equivalentLengthM, template.lineWidthM, coat), lineLengthM: lengthM, hours: markingHours(equivalentLengthM, coat.passes, marker.markerSpeedKmh, marker.setupMin) };
+}
+
+export interface LinePlan {
   templateId: string;
+  lineLengthM: number;
+  paintedAreaM2: number;
+  /** Length of template-width line that takes the same paint as the whole layout, m (numerals are wider strokes). */
+  equivalentLengthM: number;
+  /** What the totals include, element by element. */
+  elements: LineElement[];
+  firstCoat: CoatPlan;
+  touchUp: CoatPlan;
+  /** Paintings in the season: first coats + touch-ups. */
   repaints: number;
-  hoursPerRepaint: number;
+  firstCoats: number;
+  touchUps: number;
   seasonMixedLitres: number;
   seasonConcentrateLitres: number;
+  seasonWaterLitres: number;
   seasonHours: number;
 }
 
-/** A season's line plan for one template. */
-export function linePlan(template: LineTemplate, s: PaintSettings & { markerSpeedKmh: number; setupMin: number }, season: { days: number; repaintDays: number | null; extraEvents?: number }): LinePlan {
-  const length = totalLineLengthM(template);
-  const one = paintNeed(length, template.lineWidthM, s);
+/**
+ * A season's line plan for one template: one first coat at the start of the season (or
+ * `firstCoats`), then touch-ups every repaint interval and for extra events.
+ */
+export function linePlan(template: LineTemplate, s: LineSettings, season: { days: number; repaintDays: number | null; extraEvents?: number; firstCoats?: number }): LinePlan {
+  const firstCoat = coatPlan(template, s.firstCoat, s);
+  const touchUp = coatPlan(template, s.touchUp, s);
   const repaints = repaintsInSeason(season.days, season.repaintDays, season.extraEvents ?? 0);
-  const hoursPerRepaint = markingHours(length, s.passes, s.markerSpeedKmh, s.setupMin);
+  const firstCoats = Math.min(repaints, requireNonNegative(season.firstCoats ?? 1, 'invalid_events', 'first coats'));
+  const touchUps = repaints - firstCoats;
   return {
-    ...one,
     templateId: template.id,
+    lineLengthM: firstCoat.lineLengthM,
+    paintedAreaM2: firstCoat.paintedAreaM2,
+    equivalentLengthM: measuresOf(template).equivalentLengthM,
+    // Shared between the plans of one template: read it, do not change it.
+    elements: measuresOf(template).elements,
+    firstCoat,
+    touchUp,
     repaints,
-    hoursPerRepaint,
-    seasonMixedLitres: one.mixedLitres * repaints,
-    seasonConcentrateLitres: one.concentrateLitres * repaints,
-    seasonHours: hoursPerRepaint * repaints,
+    firstCoats,
+    touchUps,
+    seasonMixedLitres: firstCoat.mixedLitres * firstCoats + touchUp.mixedLitres * touchUps,
+    seasonConcentrateLitres: firstCoat.concentrateLitres * firstCoats + touchUp.concentrateLitres * touchUps,
+    seasonWaterLitres: firstCoat.waterLitres * firstCoats + touchUp.waterLitres * touchUps,
+    seasonHours: firstCoat.hours * firstCoats + touchUp.hours * touchUps,
   };
 }

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { checkCut, checkMowerForHoc, mowTriggerHeightMm, mowerTypeFor, overdueDate, simulateMowing } from './mowing.ts';
+import { checkCut, checkMowerForHoc, countMowings, hocSetting, levelIntervalDays, mowTriggerHeightMm, mowerTypeFor, mowingPolicy, overdueDate, simulateMowing } from './mowing.ts';
 
 describe('mowing', () => {
   test('should trigger at 1.5 × HOC and flag cuts removing more than a third', () => {
@@ -35,6 +35,14 @@ describe('mowing', () => {
     for (const i of sim.intervalsDays) expect(i).toBeLessThanOrEqual(3);
   });
 
+  test('should take the shorter of the level interval and ⌊7 ÷ least mowings per week⌋ as the policy', () => {
+    expect(levelIntervalDays({ maxMowingIntervalDays: 3, minMowingsPerWeek: 3 })).toBe(2);
+    expect(levelIntervalDays({ maxMowingIntervalDays: 4, minMowingsPerWeek: 2 })).toBe(3);
+    expect(levelIntervalDays({ maxMowingIntervalDays: 14, minMowingsPerWeek: 0.5 })).toBe(14);
+    expect(levelIntervalDays({ maxMowingIntervalDays: 10, minMowingsPerWeek: 0 })).toBe(10);
+    expect(mowingPolicy(40, { maxMowingIntervalDays: 4, minMowingsPerWeek: 2 })).toEqual({ maxIntervalDays: 4, minMowingsPerWeek: 2, frequencyMinGrowthMm: 4 });
+  });
+
   test('should skip frequency cuts on dormant turf when a minimum growth is set', () => {
     const sim = simulateMowing(40, new Array(21).fill(0.05), 40, { startDate: '2025-01-01', maxIntervalDays: 3, frequencyMinGrowthMm: 4 });
     expect(sim.mowings).toHaveLength(0);
@@ -48,6 +56,17 @@ describe('mowing', () => {
     expect(sim.mowings.some((m) => m.scalpingRisk)).toBe(true);
   });
 
+  test('should count what the simulation mows, without dates', () => {
+    let seed = 7;
+    const rand = () => ((seed = (seed * 16807) % 2147483647) / 2147483647);
+    for (let run = 0; run < 50; run++) {
+      const growth = Array.from({ length: 120 }, () => rand() * 6);
+      const options = { startDate: '2026-04-01', maxIntervalDays: 1 + Math.floor(rand() * 10), minMowingsPerWeek: rand() * 3, frequencyMinGrowthMm: rand() * 3, mowingDays: rand() < 0.5 ? (['mon', 'wed', 'fri'] as const) : undefined };
+      const sim = simulateMowing(25.4, growth, 25.4, options);
+      expect(countMowings(25.4, growth, 25.4, options)).toEqual({ mowings: sim.mowings.length, growthMowings: sim.growthMowings, mowingsPerWeek: sim.mowingsPerWeek, overdueDays: sim.overdueDates.length });
+    }
+  });
+
   test('should predict the overdue date from a forecast', () => {
     // 24 → 26, 28, 30 (not above 30), 32 at the start of 5 June.
     expect(overdueDate(20, 24, [2, 2, 2, 2], '2025-06-01')).toBe('2025-06-05');
@@ -55,10 +74,21 @@ describe('mowing', () => {
     expect(overdueDate(20, 20, [1, 1], '2025-06-01')).toBeNull();
   });
 
-  test('should choose reel below 25 mm and rotary from 25 mm', () => {
+  // Was "reel below 25 mm, rotary from 25 mm": 1 in (25.4 mm) went to a rotary, while common
+  // practice cuts 1 in and below with a reel. The limit is now inclusive and in the unit and
+  // step the department sets mowers in (an eighth of an inch by default).
+  test('should choose reel at 1 in and below and rotary above, in the department setting unit', () => {
     expect(mowerTypeFor(24.9)).toBe('reel');
-    expect(mowerTypeFor(25)).toBe('rotary');
+    expect(mowerTypeFor(25.4)).toBe('reel');
+    expect(mowerTypeFor(Math.fround(25.4))).toBe('reel'); // a single-precision database value
+    expect(mowerTypeFor(25)).toBe('reel'); // 0.98 in, set at 1 in
+    expect(mowerTypeFor(28.575)).toBe('rotary'); // 1⅛ in
     expect(mowerTypeFor(76)).toBe('rotary');
+    const metric = { unit: 'mm' as const, step: 1, reelUpToHoc: 25 };
+    expect(hocSetting(25.4, metric)).toBe(25);
+    expect(mowerTypeFor(25.4, metric)).toBe('reel');
+    expect(mowerTypeFor(26, metric)).toBe('rotary');
+    expect(hocSetting(34.925)).toBe(1.375);
   });
 
   test('should warn when a mower cannot hold the HOC or is the wrong kind', () => {

@@ -21,7 +21,7 @@ describe('standards', () => {
   });
 
   test('should keep heights within common practice ranges', () => {
-    // Common practice: sports fields 25–75 mm cool season; bermudagrass 12–38 mm; low maintenance up to ~90 mm.
+    // Common practice: sports fields 1–3 in cool season; bermudagrass ½–1½ in (12.7–38.1 mm); low maintenance up to ~3½ in.
     for (const l of LEVELS) {
       for (const sport of SPORTS) {
         const warm = DEFAULT_STANDARDS[l].hocMm[sport].warm;
@@ -29,18 +29,19 @@ describe('standards', () => {
         expect(cool).toBeGreaterThanOrEqual(20);
         expect(cool).toBeLessThanOrEqual(90);
         if (sport !== 'lawn') expect(warm).toBeGreaterThanOrEqual(12);
-        if (sport !== 'lawn') expect(warm).toBeLessThanOrEqual(38);
+        if (sport !== 'lawn') expect(warm).toBeLessThanOrEqual(38.1);
       }
     }
-    expect(DEFAULT_STANDARDS[1].hocMm.soccer.cool).toBe(25);
+    // The defaults are inch values in exact mm (were metric round numbers: 25 mm read 0.98 in).
+    expect(DEFAULT_STANDARDS[1].hocMm.soccer.cool).toBe(25.4);
   });
 
   test('should pick the HOC for a field with the override winning', () => {
-    expect(hocFor({ sport: 'soccer', grass: 'perennial_ryegrass', maintenanceLevel: 1 })).toBe(25);
-    expect(hocFor({ sport: 'soccer', grass: 'bermudagrass', maintenanceLevel: 1 })).toBe(16);
-    expect(hocFor({ sport: 'soccer', grass: 'st_augustinegrass', maintenanceLevel: 3 })).toBe(76);
+    expect(hocFor({ sport: 'soccer', grass: 'perennial_ryegrass', maintenanceLevel: 1 })).toBe(25.4); // 1 in
+    expect(hocFor({ sport: 'soccer', grass: 'bermudagrass', maintenanceLevel: 1 })).toBe(15.875); // ⅝ in
+    expect(hocFor({ sport: 'soccer', grass: 'st_augustinegrass', maintenanceLevel: 3 })).toBe(76.2); // 3 in
     expect(hocFor({ sport: 'soccer', grass: 'bermudagrass', maintenanceLevel: 1, hocOverrideMm: 22 })).toBe(22);
-    expect(hocFor({ sport: 'lawn', grass: 'tall_fescue', maintenanceLevel: 4, hocOverrideMm: null })).toBe(90);
+    expect(hocFor({ sport: 'lawn', grass: 'tall_fescue', maintenanceLevel: 4, hocOverrideMm: null })).toBe(88.9); // 3½ in
   });
 
   test('should throw on unknown grass, level or a zero override', () => {
@@ -56,6 +57,6 @@ describe('standards', () => {
       expect(['cool', 'warm']).toContain(grassSeason(g));
     }
     expect(DEFAULT_PARAMETERS.solubleNLimitGPerM2).toBeCloseTo(4.88, 2);
-    expect(DEFAULT_PARAMETERS.hardnessSafeRangeG.min).toBeLessThan(DEFAULT_PARAMETERS.hardnessSafeRangeG.max);
+    for (const r of Object.values(DEFAULT_PARAMETERS.hardnessRangesG)) expect(r.min ?? 0).toBeLessThan(r.target ?? r.max);
   });
 });

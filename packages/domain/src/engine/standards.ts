@@ -1,15 +1,19 @@
 /**
  * The department's Standards (maintenance levels 1–4) and department parameters.
- * Heights of cut follow the trade's common practice (elite soccer about 25 mm / 1 in;
- * sports fields 25–75 mm; low-maintenance areas up to about 75–90 mm; bermudagrass
- * 12–38 mm). Everything else here is a department setting: the defaults are this
- * product's demo choices, not published values, and each department edits them.
+ * Heights of cut follow the trade's common practice (elite soccer about 1 in; sports fields
+ * 1–3 in; low-maintenance areas up to about 3–3½ in; bermudagrass ½–1½ in) and are set as
+ * the inch values a US department sets its mowers to (whole inches and eighths), kept as the
+ * exact millimetres (1 in = 25.4 mm). Everything else here is a department setting: the
+ * defaults are this product's demo choices, not published values, and each department edits
+ * them.
  */
 import { GRASSES, GRASS_SEASON, LEVEL_NAMES, LEVELS, SPORTS } from '../vocabulary.ts';
-import type { Grass, GrassSeason, Level, Sport } from '../vocabulary.ts';
+import type { Grass, GrassSeason, HardnessDevice, Level, Sport } from '../vocabulary.ts';
 import { fail, requirePositive } from './check.ts';
 import type { Weekday } from './dates.ts';
 import { G_PER_M2_PER_LB_PER_1000FT2 } from './units.ts';
+import type { LineSettings } from './lines.ts';
+import type { TurfKcSettings } from './water.ts';
 
 /** What one maintenance level asks for. */
 export interface LevelStandard {
@@ -27,7 +31,7 @@ export interface LevelStandard {
   annualNShare: number;
   /** Share of ETc that irrigation replaces; null: not irrigated at this level. */
   irrigationShareOfEtc: number | null;
-  /** Use the FAO-56 Table 12 Kc reduced by 0.10 (careful water management, fast growth not wanted). */
+  /** Use the department's turf Kc less its reduction (`turfKc.reducedBy`; FAO-56 Table 12 note: 0.10 where fast growth is not wanted). */
   reducedKc: boolean;
   /** Days between line repaints in season; null: no lines kept. */
   lineRepaintDays: number | null;
@@ -43,13 +47,37 @@ type HocRow = Record<Sport, Record<GrassSeason, number>>;
 const hocRow = (cool: Partial<Record<Sport, number>> & { default: number }, warm: Partial<Record<Sport, number>> & { default: number }): HocRow =>
   Object.fromEntries(SPORTS.map((s) => [s, { cool: cool[s] ?? cool.default, warm: warm[s] ?? warm.default }])) as HocRow;
 
+/**
+ * Heights in inches (eighths) as exact millimetres, so that stored values read back as the
+ * inch a crew sets (25.4 mm is 1 in, not 0.98 in).
+ */
+const IN = {
+  half: 12.7,
+  fiveEighths: 15.875,
+  threeQuarters: 19.05,
+  sevenEighths: 22.225,
+  one: 25.4,
+  oneQuarter: 31.75,
+  oneHalf: 38.1,
+  oneThreeQuarters: 44.45,
+  two: 50.8,
+  twoHalf: 63.5,
+  twoThreeQuarters: 69.85,
+  three: 76.2,
+  threeHalf: 88.9,
+} as const;
+
 /** Demo defaults of the Standards table (department settings; heights from common practice). */
 export const DEFAULT_STANDARDS: Standards = {
   1: {
     level: 1,
     name: LEVEL_NAMES[1],
-    hocMm: hocRow({ default: 25, football: 32, softball: 32, field_hockey: 22, multi_use: 38, lawn: 50 }, { default: 16, football: 19, softball: 19, field_hockey: 13, multi_use: 25, lawn: 32 }),
-    hocByGrassMm: { st_augustinegrass: 64 },
+    // Baseball outfields a little above soccer's 1 in (common practice), as softball.
+    hocMm: hocRow(
+      { default: IN.one, football: IN.oneQuarter, baseball: IN.oneQuarter, softball: IN.oneQuarter, field_hockey: IN.sevenEighths, multi_use: IN.oneHalf, lawn: IN.two },
+      { default: IN.fiveEighths, football: IN.threeQuarters, baseball: IN.threeQuarters, softball: IN.threeQuarters, field_hockey: IN.half, multi_use: IN.one, lawn: IN.oneQuarter },
+    ),
+    hocByGrassMm: { st_augustinegrass: IN.twoHalf },
     minMowingsPerWeek: 3,
     maxMowingIntervalDays: 3,
     annualNShare: 1,
@@ -62,8 +90,11 @@ export const DEFAULT_STANDARDS: Standards = {
   2: {
     level: 2,
     name: LEVEL_NAMES[2],
-    hocMm: hocRow({ default: 32, football: 38, softball: 38, field_hockey: 25, multi_use: 45, lawn: 63 }, { default: 19, football: 25, softball: 25, field_hockey: 16, multi_use: 32, lawn: 38 }),
-    hocByGrassMm: { st_augustinegrass: 70 },
+    hocMm: hocRow(
+      { default: IN.oneQuarter, football: IN.oneHalf, softball: IN.oneHalf, field_hockey: IN.one, multi_use: IN.oneThreeQuarters, lawn: IN.twoHalf },
+      { default: IN.threeQuarters, football: IN.one, softball: IN.one, field_hockey: IN.fiveEighths, multi_use: IN.oneQuarter, lawn: IN.oneHalf },
+    ),
+    hocByGrassMm: { st_augustinegrass: IN.twoThreeQuarters },
     minMowingsPerWeek: 2,
     maxMowingIntervalDays: 4,
     annualNShare: 0.85,
@@ -76,8 +107,8 @@ export const DEFAULT_STANDARDS: Standards = {
   3: {
     level: 3,
     name: LEVEL_NAMES[3],
-    hocMm: hocRow({ default: 50, field_hockey: 38, multi_use: 63, lawn: 75 }, { default: 32, field_hockey: 25, multi_use: 38, lawn: 38 }),
-    hocByGrassMm: { st_augustinegrass: 76 },
+    hocMm: hocRow({ default: IN.two, field_hockey: IN.oneHalf, multi_use: IN.twoHalf, lawn: IN.three }, { default: IN.oneQuarter, field_hockey: IN.one, multi_use: IN.oneHalf, lawn: IN.oneHalf }),
+    hocByGrassMm: { st_augustinegrass: IN.three },
     minMowingsPerWeek: 1,
     maxMowingIntervalDays: 7,
     annualNShare: 0.65,
@@ -90,8 +121,8 @@ export const DEFAULT_STANDARDS: Standards = {
   4: {
     level: 4,
     name: LEVEL_NAMES[4],
-    hocMm: hocRow({ default: 75, lawn: 90 }, { default: 38, lawn: 50 }),
-    hocByGrassMm: { st_augustinegrass: 89 },
+    hocMm: hocRow({ default: IN.three, lawn: IN.threeHalf }, { default: IN.oneHalf, lawn: IN.two }),
+    hocByGrassMm: { st_augustinegrass: IN.threeHalf },
     minMowingsPerWeek: 0.5,
     maxMowingIntervalDays: 14,
     annualNShare: 0.3,
@@ -102,6 +133,16 @@ export const DEFAULT_STANDARDS: Standards = {
     targetScore: 50,
   },
 };
+
+/** The range of Gmax readings a department accepts from one tester. */
+export interface HardnessRange {
+  /** Below this the surface is soft or wet (null: no lower limit). */
+  min: number | null;
+  /** The level the department aims to stay at or under (null: only the limit). */
+  target: number | null;
+  /** Above this, consider closing the field. */
+  max: number;
+}
 
 /** A mower as the engine needs it. */
 export interface MowerSpec {
@@ -120,6 +161,15 @@ export interface MowerSpec {
   hocMaxMm: number;
 }
 
+/** The unit and step a department sets mower heights in, and where reel mowing stops. */
+export interface MowerSettings {
+  unit: 'in' | 'mm';
+  /** Smallest change of setting, in `unit` (1/8 in; 1 mm). */
+  step: number;
+  /** Highest HOC cut with a reel mower, in `unit`; above it a rotary. */
+  reelUpToHoc: number;
+}
+
 /** Department parameters: the engine's tunable numbers. */
 export interface DepartmentParameters {
   /**
@@ -129,6 +179,12 @@ export interface DepartmentParameters {
   maxGrowthMmPerDay: Record<Grass, number>;
   /** Default mowers by kind (demo defaults). */
   mowers: Record<'reel' | 'rotary', MowerSpec>;
+  /**
+   * How the department sets its mowers: the unit (US departments: inches), the step of a
+   * setting (an eighth of an inch; a millimetre) and the highest HOC cut with a reel mower
+   * (common practice: reel at 1 in and below, rotary above).
+   */
+  mowerSettings: MowerSettings;
   /** Soluble-N limit per application, g N/m² (LSU AgCenter: ≤ 1 lb N/1000 ft² ≈ 4.88 g/m²). */
   solubleNLimitGPerM2: number;
   /** Ceiling per application with slow-release N, g N/m² (department rule, no published source). */
@@ -143,14 +199,30 @@ export interface DepartmentParameters {
   /** Invented demo costs — replace with the department's own prices. */
   costs: { currency: string; waterPerM3: number; labourPerHour: number; paintPerLitre: number; fertiliserPerKg: number };
   /**
-   * Safe surface hardness for the 2.25 kg portable tester (ASTM F1702), Gmax. No published
-   * acceptance range for this tester was found: a department setting.
+   * Surface hardness range per tester, Gmax; readings from different testers are not
+   * comparable. ASTM F1936 / F355 missile A: upper limit 200, 165 or lower as the common
+   * target (REFERENCES, from memory). The 2.25 kg portable tester (ASTM F1702): no published
+   * acceptance range was found, so its range is a department setting.
    */
-  hardnessSafeRangeG: { min: number; max: number };
-  /** Irrigation system defaults (department settings). */
-  irrigation: { distributionUniformity: number; precipRateMmPerH: number; maxRunMinPerCycle: number };
-  /** Line marking (trade press: about 200 linear ft of 4 in line per mixed gallon; 2 passes common practice). */
-  lines: { coverageM2PerMixedL: number; dilutionWaterPerPaint: number; passes: number; markerSpeedKmh: number; setupMin: number };
+  hardnessRangesG: Record<HardnessDevice, HardnessRange>;
+  /**
+   * Turf crop coefficients of the water budget: annual planning values for turf under
+   * mowing, cool-season about 0.8 and warm-season about 0.6 (University of California ANR
+   * turfgrass water guidance; Meyer et al. 1985). FAO-56 Table 12 (0.90–0.95 cool, 0.80–0.85
+   * warm) describes a full grass cover and is kept only as a reference. `reducedBy` is taken
+   * off where a level asks for a reduced Kc (FAO-56 Table 12 note: 0.10).
+   */
+  turfKc: TurfKcSettings;
+  /**
+   * Irrigation system defaults (department settings). DU is the lower-quarter distribution
+   * uniformity of a catch-can audit; gross need = net × SM, SM = 1 ÷ (0.4 + 0.6 × DU).
+   */
+  irrigation: { distributionUniformity: number; precipRateMmPerH: number; maxRunMinPerCycle: number; maxCyclesPerDay: number };
+  /**
+   * Line marking: a first coat and a touch-up coat, each with its coverage of finished line
+   * per litre of mixed paint (all passes of the coat), dilution and passes, and the marker.
+   */
+  lines: LineSettings;
   /**
    * Soil-test sufficiency (department parameter, not a published value): below the level,
    * apply the maintenance rate of P2O5 / K2O in g/m² per year.
@@ -182,6 +254,8 @@ export interface PlanningParameters {
   paintDaysBeforeEvent: number;
   /** A painting this many days or fewer before a booking already serves it. */
   paintFreshDays: number;
+  /** Lines last painted longer ago than this no longer show: the next painting is a first coat, not a touch-up. */
+  firstCoatAfterDays: number;
   /** Routine repaints and feeding wait while the week's mean growth potential is below this (dormant turf). */
   dormantGp: number;
   /** Least gross irrigation need in a week worth a watering order, mm. */
@@ -200,21 +274,34 @@ export const DEFAULT_PARAMETERS: DepartmentParameters = {
     st_augustinegrass: 4,
   },
   mowers: {
-    reel: { kind: 'reel', widthM: 2.8, speedKmh: 6, efficiency: 0.8, overlapM: 0.1, turnTimeS: 15, hocMinMm: 6, hocMaxMm: 38 },
-    rotary: { kind: 'rotary', widthM: 1.83, speedKmh: 8, efficiency: 0.8, overlapM: 0.1, turnTimeS: 10, hocMinMm: 25, hocMaxMm: 125 },
+    // Setting ranges in inches as mowers are sold and set: reel ¼–1½ in, rotary 1–5 in.
+    reel: { kind: 'reel', widthM: 2.8, speedKmh: 6, efficiency: 0.8, overlapM: 0.1, turnTimeS: 15, hocMinMm: 6.35, hocMaxMm: 38.1 },
+    rotary: { kind: 'rotary', widthM: 1.83, speedKmh: 8, efficiency: 0.8, overlapM: 0.1, turnTimeS: 10, hocMinMm: 25.4, hocMaxMm: 127 },
   },
+  mowerSettings: { unit: 'in', step: 1 / 8, reelUpToHoc: 1 },
   solubleNLimitGPerM2: G_PER_M2_PER_LB_PER_1000FT2,
   slowReleaseNCeilingGPerM2: 2 * G_PER_M2_PER_LB_PER_1000FT2,
   minNPerApplicationGPerM2: 0.5 * G_PER_M2_PER_LB_PER_1000FT2,
   travel: { roadFactor: 1.3, speedKmh: 35, loadUnloadMin: 15 },
   costs: { currency: 'USD', waterPerM3: 1.2, labourPerHour: 32, paintPerLitre: 4.5, fertiliserPerKg: 1.6 },
-  hardnessSafeRangeG: { min: 20, max: 100 },
-  irrigation: { distributionUniformity: 0.7, precipRateMmPerH: 12, maxRunMinPerCycle: 20 },
+  hardnessRangesG: {
+    // ASTM F1936 / F355 missile A: upper limit 200 Gmax, 165 or lower as a common target (from memory).
+    f355_missile_a: { min: null, target: 165, max: 200 },
+    // 2.25 kg portable tester: no published acceptance range; demo department setting.
+    portable_2_25kg: { min: 20, target: null, max: 100 },
+  },
+  // University of California ANR turfgrass water guidance (Meyer et al. 1985): about 0.8
+  // cool-season, 0.6 warm-season; FAO-56 Table 12 note for the reduction.
+  turfKc: { cool: 0.8, warm: 0.6, reducedBy: 0.1 },
+  irrigation: { distributionUniformity: 0.7, precipRateMmPerH: 12, maxRunMinPerCycle: 20, maxCyclesPerDay: 4 },
   lines: {
-    // 200 ft × 4 in = 66.7 ft² per US gallon of mixed paint → 1.64 m² per litre.
-    coverageM2PerMixedL: (200 * 0.3048 * 0.1016) / 3.785411784,
-    dilutionWaterPerPaint: 1,
-    passes: 2,
+    // First coat: about 200 linear ft of 4 in line per mixed gallon (trade press), a finished
+    // line painted in two directions (common practice): 66.7 ft² per US gallon → 1.64 m²/L;
+    // mixed 1:1 for a first application (trade guidance, secondary sources).
+    firstCoat: { coverageM2PerMixedL: (200 * 0.3048 * 0.1016) / 3.785411784, dilutionWaterPerPaint: 1, passes: 2 },
+    // Touch-up over lines that still show: one pass at the first coat's rate per pass (so
+    // 400 ft per mixed gallon), mixed 3:1 (trade guidance: 3:1 or 4:1 for touch-ups).
+    touchUp: { coverageM2PerMixedL: (400 * 0.3048 * 0.1016) / 3.785411784, dilutionWaterPerPaint: 3, passes: 1 },
     markerSpeedKmh: 3,
     setupMin: 20,
   },
@@ -231,6 +318,7 @@ export const DEFAULT_PARAMETERS: DepartmentParameters = {
     controllerSetHours: 0.25,
     paintDaysBeforeEvent: 1,
     paintFreshDays: 2,
+    firstCoatAfterDays: 28,
     dormantGp: 0.1,
     minIrrigationMm: 2,
   },

@@ -32,6 +32,15 @@ describe('units', () => {
   test('should format values per unit system', () => {
     expect(u.formatHoc(25.4, 'imperial')).toEqual({ value: 1, unit: 'in' });
     expect(u.formatHoc(25.4, 'metric')).toEqual({ value: 25, unit: 'mm' });
+    // Inches go to the eighth a mower is set to: 25 mm (0.98 in) reads 1 in, 35 mm 1⅜ in.
+    expect(u.formatHoc(25, 'imperial')).toEqual({ value: 1, unit: 'in' });
+    expect(u.formatHoc(34.925, 'imperial')).toEqual({ value: 1.375, unit: 'in' });
+    expect(u.formatHocText(34.925, 'imperial')).toBe('1⅜ in');
+    expect(u.formatHocText(15.875, 'imperial')).toBe('⅝ in');
+    expect(u.formatHocText(50.8, 'imperial')).toBe('2 in');
+    expect(u.formatHocText(49.9, 'imperial')).toBe('2 in');
+    expect(u.formatHocText(76.2, 'metric')).toBe('76 mm');
+    expect(u.inchesToEighthsText(0.06)).toBe('0');
     expect(u.formatArea(7140, 'metric')).toEqual({ value: 7140, unit: 'm²' });
     expect(u.formatArea(20_000, 'metric')).toEqual({ value: 2, unit: 'ha' });
     expect(u.formatArea(4046.8564224 * 1.5, 'imperial')).toEqual({ value: 1.5, unit: 'ac' });

@@ -64,9 +64,31 @@ function shown(value: number, unit: string, digits: number): DisplayValue {
   return { value: round(value, digits), unit };
 }
 
-/** Height of cut (mm inside) → in (2 decimals) or mm (0 decimals). */
+/**
+ * Height of cut (mm inside) → inches to the nearest eighth (the step US crews set mowers in;
+ * 0.125 = ⅛) or whole millimetres.
+ */
 export function formatHoc(mm: number, system: UnitSystem): DisplayValue {
-  return system === 'imperial' ? shown(mmToIn(mm), 'in', 2) : shown(mm, 'mm', 0);
+  if (system !== 'imperial') return shown(mm, 'mm', 0);
+  requireFinite(mm, 'invalid_value', 'value to format');
+  return { value: Math.round(mmToIn(mm) * 8) / 8, unit: 'in' };
+}
+
+const EIGHTHS = ['', '⅛', '¼', '⅜', '½', '⅝', '¾', '⅞'] as const;
+
+/** Inches to the nearest eighth as a crew writes them: "1", "⅝", "1⅜" (vulgar-fraction characters screen readers speak). */
+export function inchesToEighthsText(inches: number): string {
+  requireFinite(inches, 'invalid_value', 'inches to format');
+  const eighths = Math.round(Math.abs(inches) * 8);
+  const whole = Math.floor(eighths / 8);
+  const frac = EIGHTHS[eighths % 8] as string;
+  const sign = inches < 0 && eighths > 0 ? '−' : '';
+  return `${sign}${whole === 0 && frac ? '' : String(whole)}${frac}`;
+}
+
+/** A height of cut as text: "1⅜ in" (to the eighth) or "35 mm" (whole millimetres). */
+export function formatHocText(mm: number, system: UnitSystem): string {
+  return system === 'imperial' ? `${inchesToEighthsText(mmToIn(mm))} in` : `${shown(mm, 'mm', 0).value.toLocaleString('en-US')} mm`;
 }
 
 /** A length (m inside) → ft or m; long distances (≥ 1 km / 1 mi) as km or mi. */

@@ -9,6 +9,13 @@ describe('water', () => {
     expect(w.cropEvapotranspiration(0.85, 5)).toBeCloseTo(4.25, 12);
   });
 
+  test("should budget with the department's turf Kc and its reduction", () => {
+    const settings = { cool: 0.8, warm: 0.6, reducedBy: 0.1 };
+    expect(w.departmentTurfKc('cool', false, settings)).toBe(0.8);
+    expect(w.departmentTurfKc('warm', true, settings)).toBeCloseTo(0.5, 12);
+    expect(() => w.departmentTurfKc('warm', true, { ...settings, reducedBy: 0.6 })).toThrow(expect.objectContaining({ code: 'engine/invalid_kc' }));
+  });
+
   test('should apply the effective rain steps', () => {
     expect(w.effectiveRainMm(2.54)).toBe(0);
     expect(w.effectiveRainMm(25.4)).toBeCloseTo(0.9 * 25.4, 9);
@@ -20,8 +27,12 @@ describe('water', () => {
   test('should compute net and gross need', () => {
     expect(w.netIrrigationMm(30, 10, 0.8)).toBeCloseTo(14, 12);
     expect(w.netIrrigationMm(10, 30)).toBe(0);
-    expect(w.grossIrrigationMm(14, 0.7)).toBeCloseTo(20, 12);
-    expect(w.grossIrrigationWithMultiplierMm(10, 1)).toBeCloseTo(10, 12);
+    // One method: gross = net × SM, SM = 1 / (0.4 + 0.6 DU). Was net ÷ DU (20 mm here), a
+    // second method beside the multiplier that asked more water than the one taught.
+    expect(w.grossIrrigationMm(14, 0.7)).toBeCloseTo(14 / 0.82, 12);
+    expect(w.grossIrrigationMm(10, 1)).toBeCloseTo(10, 12);
+    expect(w.weekIrrigation(30, 10, 0.8, 0.7, 2)).toEqual({ netMm: 14, grossMm: 14 / 0.82, scheduled: true });
+    expect(w.weekIrrigation(10, 7, 0.8, 0.7, 2).scheduled).toBe(false); // 1.2 mm gross: below the least worth watering
   });
 
   test('should compute low-quarter DU from catch cans', () => {

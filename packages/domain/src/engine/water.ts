@@ -8,7 +8,11 @@ import type { Weekday } from './dates.ts';
 import { WEEKDAYS } from './dates.ts';
 import { inToMm, mmToIn } from './units.ts';
 
-/** Turf crop coefficients, FAO-56 Table 12 (turf grass, cool / warm season). */
+/**
+ * Turf crop coefficients of FAO-56 Table 12 (turf grass, cool / warm season). They describe a
+ * full cover of grass; the engine budgets with the department's turf Kc (`departmentTurfKc`)
+ * and keeps this table as the published reference.
+ */
 export const TURF_KC: Record<GrassSeason, { ini: number; mid: number; end: number }> = {
   cool: { ini: 0.9, mid: 0.95, end: 0.95 },
   warm: { ini: 0.8, mid: 0.85, end: 0.85 },
@@ -16,12 +20,33 @@ export const TURF_KC: Record<GrassSeason, { ini: number; mid: number; end: numbe
 /** FAO-56 Table 12 note: reduce turf Kc by 0.10 under careful water management where fast growth is not wanted. */
 export const TURF_KC_REDUCTION = 0.1;
 
-/** Kc for turf (FAO-56 Table 12), optionally reduced by 0.10 for lower levels / landscape use. */
+/** Kc for turf from FAO-56 Table 12 (full grass cover), optionally reduced by 0.10. Reference values, not the budget's. */
 export function turfKc(season: GrassSeason, options: { reduced?: boolean; stage?: 'ini' | 'mid' | 'end' } = {}): number {
   const row = TURF_KC[season];
   if (!row) fail('unknown_season', `grass season must be cool or warm (got ${JSON.stringify(season)})`);
   const kc = row[options.stage ?? 'mid'];
   return options.reduced ? kc - TURF_KC_REDUCTION : kc;
+}
+
+/** The department's turf crop coefficients (annual planning values) and its reduction for levels that keep growth slow. */
+export interface TurfKcSettings {
+  cool: number;
+  warm: number;
+  /** Subtracted where a level asks for a reduced Kc (FAO-56 Table 12 note: 0.10). */
+  reducedBy: number;
+}
+
+/**
+ * Kc the water budget uses: the department's annual turf coefficient for the grass season
+ * (defaults 0.8 cool-season, 0.6 warm-season: University of California ANR turfgrass water
+ * guidance, Meyer et al. 1985), less the department's reduction where the level asks for it.
+ */
+export function departmentTurfKc(season: GrassSeason, reduced: boolean, settings: TurfKcSettings): number {
+  const base = settings[season];
+  if (base === undefined) fail('unknown_season', `grass season must be cool or warm (got ${JSON.stringify(season)})`);
+  requirePositive(base, 'invalid_kc', `${season}-season turf Kc`);
+  const kc = reduced ? base - requireNonNegative(settings.reducedBy, 'invalid_kc', 'Kc reduction') : base;
+  return requirePositive(kc, 'invalid_kc', `reduced ${season}-season turf Kc`);
 }
 
 /** ETc = Kc × ET0, mm/day (FAO-56 eq. 56). */
@@ -66,20 +91,21 @@ export function distributionUniformityLowQuarter(catchCans: readonly number[]): 
   return low / mean;
 }
 
-/** Scheduling multiplier SM = 1 ÷ (0.4 + 0.6 × DU_LQ) (from memory). */
+/**
+ * Scheduling multiplier SM = 1 ÷ (0.4 + 0.6 × DU_LQ), with DU_LQ the lower-quarter
+ * distribution uniformity (irrigation associations' teaching; from memory). SM(0.70) = 1.22.
+ */
 export function schedulingMultiplier(duLowQuarter: number): number {
   requireFraction(duLowQuarter, 'invalid_du', 'DU');
   return 1 / (0.4 + 0.6 * duLowQuarter);
 }
 
-/** Gross irrigation (mm) = net ÷ DU (so the driest quarter still gets the net need). */
+/**
+ * Gross irrigation (mm) = net need × SM, SM = 1 ÷ (0.4 + 0.6 × DU_LQ) from the lower-quarter
+ * DU: the engine's one method for distribution uniformity (the run time that brings most of
+ * the area to the net need without soaking the whole field to the driest quarter's need).
+ */
 export function grossIrrigationMm(netMm: number, duLowQuarter: number): number {
-  requireNonNegative(netMm, 'invalid_water', 'net need (mm)');
-  return netMm / requireFraction(duLowQuarter, 'invalid_du', 'DU');
-}
-
-/** Gross irrigation (mm) = net × scheduling multiplier (from memory). */
-export function grossIrrigationWithMultiplierMm(netMm: number, duLowQuarter: number): number {
   requireNonNegative(netMm, 'invalid_water', 'net need (mm)');
   return netMm * schedulingMultiplier(duLowQuarter);
 }
@@ -149,9 +175,7 @@ export function weeklyIrrigationSchedule(o: ScheduleOptions): WeeklySchedule {
   for (const d of days) if (!WEEKDAYS.includes(d)) fail('invalid_weekday', `unknown weekday ${JSON.stringify(d)}`);
   if (days.length === 0) fail('no_watering_days', 'no watering day is allowed this week');
   days.sort((a, b) => WEEKDAYS.indexOf(a) - WEEKDAYS.indexOf(b));
-  const perDayMin = runTimeMinutes(o.grossMmPerWeek / days.length, o.precipRateMmPerH);
-  const cap = maxCycles * o.maxRunMinPerCycle;
-  const dayMin = Math.min(perDayMin, cap);
+  const dayMin = wateringDayMinutes(o.grossMmPerWeek, days.length, o.precipRateMmPerH, o.maxRunMinPerCycle, maxCycles);
   const cycles = dayMin === 0 ? 0 : Math.ceil(dayMin / o.maxRunMinPerCycle - 1e-9);
   const out: ScheduleDay[] = days.map((day) => ({
     day,
@@ -162,4 +186,35 @@ export function weeklyIrrigationSchedule(o: ScheduleOptions): WeeklySchedule {
   }));
   const appliedMm = out.reduce((s, d) => s + d.depthMm, 0);
   return { days: out, totalMinutes: dayMin * days.length, appliedMm, shortfallMm: Math.max(0, o.grossMmPerWeek - appliedMm) };
+}
+
+/**
+ * Minutes of one watering day when a week's gross depth is split evenly over `days` allowed
+ * days, capped at `maxCycles` cycles of `maxRunMin` (cycle and soak). The one rule behind
+ * `weeklyIrrigationSchedule` and the outlook's scheduled irrigation.
+ */
+export function wateringDayMinutes(grossMmPerWeek: number, days: number, precipRateMmPerH: number, maxRunMin: number, maxCycles: number): number {
+  if (days <= 0) return 0;
+  return Math.min(runTimeMinutes(grossMmPerWeek / days, precipRateMmPerH), maxCycles * maxRunMin);
+}
+
+/** What the water budget plans for one week of a field. */
+export interface WeekIrrigation {
+  /** Net need, mm: max(0, share × ΣETc − Σ effective rain). */
+  netMm: number;
+  /** Gross need, mm: net × SM. */
+  grossMm: number;
+  /** True when the gross need reaches the department's least depth worth watering. */
+  scheduled: boolean;
+}
+
+/**
+ * A week's water budget as the week plan schedules it: net need = share × ΣETc − Σ effective
+ * rain (never below 0), gross = net × SM (`grossIrrigationMm`), watered only when the gross
+ * need reaches the department's least depth worth an order.
+ */
+export function weekIrrigation(etcMm: number, effectiveRainTotalMm: number, shareOfEtc: number, duLowQuarter: number, minIrrigationMm: number): WeekIrrigation {
+  const netMm = netIrrigationMm(etcMm, effectiveRainTotalMm, shareOfEtc);
+  const grossMm = grossIrrigationMm(netMm, duLowQuarter);
+  return { netMm, grossMm, scheduled: grossMm > 0 && grossMm >= minIrrigationMm };
 }

@@ -1,12 +1,14 @@
 import { describe, expect, test } from 'vitest';
 import { addDaysIso } from './dates.ts';
-import { prepareWeather, fieldDailySeries } from './outlook.ts';
+import { prepareWeather, fieldDailySeries, fieldMowingSimulation } from './outlook.ts';
 import type { DailyWeather } from './outlook.ts';
 import { simulateMowing } from './mowing.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor } from './standards.ts';
 import { assignWeek, crewDayLoads, isKept, planFieldWeek, reconcileWeek, weekDates } from './weekgen.ts';
 import type { ExistingOrder, PlanField } from './weekgen.ts';
 import type { Polygon } from '../schemas/common.ts';
+import type { Level } from '../vocabulary.ts';
+import { WEEKDAYS } from './dates.ts';
 
 const WEEK = '2026-06-01'; // a Monday
 const days = (start: string, n: number, t: { tmax: number; tmin: number; rain?: number }): DailyWeather[] =>
@@ -44,6 +46,61 @@ const field = (over: Partial<PlanField> = {}): PlanField => ({
 const allDays = ['mon', 'tue', 'wed', 'thu', 'fri'] as const;
 const mowDates = (p: ReturnType<typeof planFieldWeek>) => p.orders.filter((o) => o.task === 'mow').map((o) => o.askedDate);
 
+describe('one mowing policy: season outlook and week plan', () => {
+  // Twelve weeks of steady growth from a Monday: mean 20 °C (GP 1 for cool-season grass), rain every day.
+  const steady = prepareWeather(days('2026-04-06', 84, { tmax: 24, tmin: 16, rain: 4 }), { latDeg: 38, elevationM: 20 });
+  const mondays = Array.from({ length: 10 }, (_, k) => addDaysIso('2026-04-13', 7 * k));
+
+  test.each([1, 2, 3, 4] as Level[])('should mow in the outlook what the week plan writes at level %d, never below the level minimum', (level) => {
+    const std = DEFAULT_STANDARDS[level];
+    for (const workDays of [WEEKDAYS, allDays]) {
+      const f = field({ maintenanceLevel: level, lastMowedOn: null, lastPaintedOn: null, lastCheckedOn: null });
+      const outlook = fieldMowingSimulation({ ...f }, steady, DEFAULT_STANDARDS, DEFAULT_PARAMETERS, { mowingDays: workDays });
+      const outlookDates = outlook.mowings.map((m) => m.date);
+      for (const monday of mondays) {
+        const sunday = addDaysIso(monday, 6);
+        const plan = planFieldWeek({ field: f, weather: steady, weekStart: monday, kept: [], workDays });
+        const inWeek = outlookDates.filter((d) => d >= monday && d <= sunday);
+        expect(mowDates(plan)).toEqual(inWeek);
+        // The Standards' least mowings per week (level 4: one in any two weeks).
+        if (std.minMowingsPerWeek >= 1) expect(inWeek.length).toBeGreaterThanOrEqual(std.minMowingsPerWeek);
+        else expect(outlookDates.filter((d) => d >= addDaysIso(monday, -7) && d <= sunday).length).toBeGreaterThanOrEqual(1);
+      }
+    }
+  });
+});
+
+describe('one water budget: season outlook and week plan', () => {
+  // Six dry, warm weeks from a Monday (only temperatures: Hargreaves ET0).
+  const dry = prepareWeather(days('2026-06-01', 42, { tmax: 30, tmin: 18, rain: 0 }), { latDeg: 38, elevationM: 20 });
+
+  test('should water in the outlook the depth the week plan schedules, week by week', () => {
+    const f = field({ maintenanceLevel: 2, irrigation: 'quick_coupler' });
+    const d = fieldDailySeries({ ...f }, dry, DEFAULT_STANDARDS, DEFAULT_PARAMETERS);
+    expect(d.weeklyGrossMm).toHaveLength(6);
+    d.weeklyGrossMm.forEach((mm, k) => {
+      const plan = planFieldWeek({ field: f, weather: dry, weekStart: addDaysIso('2026-06-01', 7 * k), kept: [], workDays: allDays });
+      const runs = plan.orders.filter((o) => o.task === 'irrigate');
+      expect(runs).toHaveLength(3); // Monday, Wednesday, Friday
+      expect(runs[0]!.details.volumeL).toBeCloseTo(mm * f.areaM2, -1);
+    });
+  });
+
+  test('should grow the turf on the water actually scheduled, not on a share of ETc', () => {
+    const f = { ...field({ maintenanceLevel: 1, irrigation: 'automatic' }) };
+    const full = fieldDailySeries(f, dry, DEFAULT_STANDARDS, DEFAULT_PARAMETERS);
+    // A watering restriction: one day a week, one 20-minute cycle (4 mm at 12 mm/h).
+    const restricted = { ...DEFAULT_PARAMETERS, planning: { ...DEFAULT_PARAMETERS.planning, wateringDays: ['mon' as const] }, irrigation: { ...DEFAULT_PARAMETERS.irrigation, maxCyclesPerDay: 1 } };
+    const short = fieldDailySeries(f, dry, DEFAULT_STANDARDS, restricted);
+    expect(short.weeklyGrossMm[2]).toBeCloseTo(4, 9);
+    const lastWeek = (xs: number[]) => xs.slice(-7).reduce((a, b) => a + b, 0);
+    expect(lastWeek(short.growthMm)).toBeLessThan(0.5 * lastWeek(full.growthMm));
+    // Full replacement of ETc keeps the water modifier near 1 once the 14-day window is filled
+    // (the window holds two weeks' watering days give or take one).
+    expect(full.growthMm[30]! / (full.gmaxMmPerDay * full.gp[30]!)).toBeGreaterThan(0.95);
+  });
+});
+
 describe('planFieldWeek', () => {
   test('should ask more mowings in a warm week than in a cool one', () => {
     const warm = planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
@@ -63,7 +120,8 @@ describe('planFieldWeek', () => {
     // The plan looks a week past Sunday; past the last day of weather it repeats the last week's mean growth.
     const tail = daily.growthMm.slice(-7).reduce((a, b) => a + b, 0) / 7;
     const growth = [...daily.growthMm.slice(from), ...new Array<number>(7).fill(tail)];
-    const sim = simulateMowing(hoc, growth, hoc, {
+    // Cut to HOC on the morning of 31 May; that day's growth follows the cut.
+    const sim = simulateMowing(hoc, growth, hoc + daily.growthMm[from - 1]!, {
       startDate: '2026-06-01',
       maxIntervalDays: std.maxMowingIntervalDays,
       minMowingsPerWeek: std.minMowingsPerWeek,
@@ -116,6 +174,19 @@ describe('planFieldWeek', () => {
     expect(plan.orders.filter((o) => o.task === 'paint_lines').map((o) => o.askedDate)).toEqual(['2026-06-03']);
     const lawn = planFieldWeek({ field: field({ sport: 'lawn', lastPaintedOn: null }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
     expect(lawn.orders.some((o) => o.task === 'paint_lines')).toBe(false);
+  });
+
+  test('should paint a first coat where no lines show and touch up lines that do', () => {
+    const touch = planFieldWeek({ field: field({ lastPaintedOn: '2026-05-24' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders.find((o) => o.task === 'paint_lines')!;
+    const first = planFieldWeek({ field: field({ lastPaintedOn: null }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders.find((o) => o.task === 'paint_lines')!;
+    const grownOut = planFieldWeek({ field: field({ lastPaintedOn: '2026-04-20' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders.find((o) => o.task === 'paint_lines')!;
+    expect(touch.details.coat).toBe('touch_up');
+    expect(first.details.coat).toBe('first');
+    expect(grownOut.details.coat).toBe('first');
+    // A touch-up: one pass, half the mixed paint, mixed 3:1 rather than 1:1.
+    expect(touch.details.mixedL as number).toBeCloseTo((first.details.mixedL as number) / 2, 0);
+    expect(touch.details.paintL as number).toBeLessThan((first.details.paintL as number) / 3);
+    expect(touch.plannedHours).toBeLessThan(first.plannedHours);
   });
 
   test('should plan a field check when the level interval runs out', () => {

@@ -7,8 +7,8 @@
  * - Lines: painted before each booking (department lead time), and every repaint interval of
  *   the level while the turf grows.
  * - Feed: the feed plan's applications (annual N split by monthly growth potential).
- * - Water: the week's gross need (share × ETc − effective rain) ÷ DU as run times on the
- *   allowed watering days.
+ * - Water: the week's gross need ((share × ETc − effective rain) × SM, `weekIrrigation`) as run
+ *   times on the allowed watering days.
  * - Field checks: every `fieldCheckDays` of the level.
  *
  * Orders that people kept (assigned, moved, logged or added by hand) count as done work:
@@ -26,13 +26,13 @@ import { hoursPerMowing, hoursPerMowingPolygon, stripePassPlan } from './labour.
 import type { LatLng, TravelSettings } from './labour.ts';
 import { defaultTemplateFor, linePlan } from './lines.ts';
 import { longAxis } from '../geometry.ts';
-import { mowTriggerHeightMm, mowerTypeFor, simulateMowing } from './mowing.ts';
+import { levelIntervalDays, mowTriggerHeightMm, mowerTypeFor, mowingPolicy, simulateMowing } from './mowing.ts';
 import { fieldDailySeries } from './outlook.ts';
 import type { PreparedWeather } from './outlook.ts';
 import { planRoute } from './routing.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor, levelStandard } from './standards.ts';
 import type { DepartmentParameters, MowerSpec, Standards } from './standards.ts';
-import { grossIrrigationMm, irrigationVolumeLitres, netIrrigationMm, weeklyIrrigationSchedule } from './water.ts';
+import { irrigationVolumeLitres, weekIrrigation, weeklyIrrigationSchedule } from './water.ts';
 
 /** A field as the week plan needs it. */
 export interface PlanField {
@@ -142,7 +142,7 @@ function growthThroughWeek(daily: number[], weather: PreparedWeather, weekEnd: s
 
 /** Picks the mower for a HOC: the kind the HOC asks for whose range holds it, widest first; else the department default. */
 export function chooseMower(hocMm: number, mowers: readonly PlanMower[], params: DepartmentParameters = DEFAULT_PARAMETERS, crewId: number | null = null): { spec: MowerSpec; mower: PlanMower | null } {
-  const kind = mowerTypeFor(hocMm);
+  const kind = mowerTypeFor(hocMm, params.mowerSettings ?? DEFAULT_PARAMETERS.mowerSettings);
   const fits = mowers
     .filter((m) => m.kind === kind && m.hocMinMm <= hocMm + 1e-9 && m.hocMaxMm >= hocMm - 1e-9)
     .sort((a, b) => Number(b.crewId === crewId && crewId !== null) - Number(a.crewId === crewId && crewId !== null) || b.widthM - a.widthM || a.id - b.id);
@@ -215,7 +215,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
     const trigger = mowTriggerHeightMm(hocMm);
     const { spec, mower } = chooseMower(hocMm, input.mowers ?? [], params);
     const { hours, method } = mowingHours(field, spec);
-    const mowOptions = { maxIntervalDays: std.maxMowingIntervalDays, minMowingsPerWeek: std.minMowingsPerWeek, frequencyMinGrowthMm: 0.1 * hocMm, mowingDays: input.workDays.length ? input.workDays : WEEKDAYS };
+    const mowOptions = { ...mowingPolicy(hocMm, std), mowingDays: input.workDays.length ? input.workDays : WEEKDAYS };
     const keptCuts = new Set(keptOf('mow').map((k) => k.plannedDate));
     const asked: Array<{ date: string; heightMm: number; reason: 'growth' | 'frequency' | 'overdue'; overdueSince?: string }> = [];
     // A last cut on or after Monday belongs to a later week than the one planned (planning
@@ -226,15 +226,19 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
     if (cutIdx < 0 && idx(weekStart) > 0) {
       // No cut on record since the weather began: assume the field was mowed as the rule
       // asked until this week (a season run from the first day of weather), not overdue.
-      const season = simulateMowing(hocMm, growth.slice(0, idx(weekStart)), hocMm, { ...mowOptions, startDate: first as string });
-      const lastAssumed = season.mowings[season.mowings.length - 1];
+      // The run goes on past the week's start, as the season outlook's does, so a cut late in
+      // the week before sees the weekend's growth exactly as the outlook's run saw it.
+      const season = simulateMowing(hocMm, growth.slice(0, idx(horizon) + 1), hocMm, { ...mowOptions, startDate: first as string });
+      const lastAssumed = season.mowings.filter((m) => m.dayIndex < idx(weekStart)).pop();
       cutIdx = lastAssumed ? lastAssumed.dayIndex : -1;
       notes.push(field.lastMowedOn && !lastCut ? `The last mowing on record (${field.lastMowedOn}) is after this week began: the plan assumes the one-third rule was kept up to the week.` : 'No mowing on record: the plan assumes the field was mowed as the one-third rule asked before this week.');
     }
     for (let guard = 0; guard < 20; guard++) {
       const from = Math.max(0, cutIdx + 1);
       if (from > idx(weekEnd)) break;
-      const sim = simulateMowing(hocMm, growth.slice(from, idx(horizon) + 1), hocMm, { ...mowOptions, startDate: addDaysIso(first as string, from), daysSinceCutAtStart: from - cutIdx - 1 });
+      // A cut on day c leaves the grass at HOC that morning; day c's growth follows the cut.
+      const startHeight = cutIdx >= 0 && cutIdx < growth.length ? hocMm + (growth[cutIdx] as number) : hocMm;
+      const sim = simulateMowing(hocMm, growth.slice(from, idx(horizon) + 1), startHeight, { ...mowOptions, startDate: addDaysIso(first as string, from), daysSinceCutAtStart: from - cutIdx - 1 });
       const next = sim.mowings[0];
       const nextKept = [...keptCuts].filter((d) => idx(d) >= from).sort()[0];
       if (nextKept && (!next || nextKept <= next.date)) {
@@ -257,7 +261,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
           ? `Overdue: the one-third rule asked for a cut on ${a.overdueSince} and none is on record`
           : a.reason === 'growth'
             ? `One-third rule: the grass would pass ${round(trigger, 0)} mm (1.5 × HOC ${round(hocMm, 0)} mm) before the next mowing day`
-            : `Level ${level} (${LEVEL_NAMES[level]}) asks a cut at least every ${Math.min(std.maxMowingIntervalDays, Math.floor(7 / std.minMowingsPerWeek))} days`;
+            : `Level ${level} (${LEVEL_NAMES[level]}) asks a cut at least every ${levelIntervalDays(std)} days`;
       orders.push({
         fieldId: field.id,
         siteId: field.siteId,
@@ -265,7 +269,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
         askedDate: a.date,
         plannedHours: round(hours),
         reason: why,
-        details: { hocMm: round(hocMm, 1), triggerMm: round(trigger, 1), heightBeforeMm: round(a.heightMm, 1), mowerKind: spec.kind, mowerId: mower?.id ?? null, hoursMethod: method, overdueSince: a.overdueSince ?? null },
+        details: { hocMm: round(hocMm, 3), triggerMm: round(trigger, 1), heightBeforeMm: round(a.heightMm, 1), mowerKind: spec.kind, mowerId: mower?.id ?? null, hoursMethod: method, overdueSince: a.overdueSince ?? null },
         latestDate: a.date,
         flexible: false,
         equipmentKind: 'mower',
@@ -279,7 +283,12 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
     const lp = linePlan(template, params.lines, { days: 1, repaintDays: std.lineRepaintDays });
     const painted = [field.lastPaintedOn, ...keptOf('paint_lines').map((k) => k.plannedDate)].filter((d): d is string => d !== null).sort();
     const lastPaintBefore = (d: string) => [...painted].reverse().find((p) => p <= d) ?? null;
+    const firstCoatAfter = planning.firstCoatAfterDays ?? DEFAULT_PARAMETERS.planning.firstCoatAfterDays;
     const paintOn = (date: string, reason: string, latest: string | null, extra: Record<string, unknown>) => {
+      // A first coat where no lines show any more (none on record, or grown out); else a touch-up.
+      const before = [...painted].reverse().find((p) => p < date) ?? null;
+      const first = before === null || isoToDayNumber(date) - isoToDayNumber(before) > firstCoatAfter;
+      const coat = first ? lp.firstCoat : lp.touchUp;
       painted.push(date);
       painted.sort();
       orders.push({
@@ -287,9 +296,9 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
         siteId: field.siteId,
         task: 'paint_lines',
         askedDate: date,
-        plannedHours: round(lp.hoursPerRepaint),
+        plannedHours: round(coat.hours),
         reason,
-        details: { template: template.name, lineLengthM: round(lp.lineLengthM, 0), mixedL: round(lp.mixedLitres, 1), paintL: round(lp.concentrateLitres, 1), ...extra },
+        details: { template: template.name, coat: first ? 'first' : 'touch_up', lineLengthM: round(lp.lineLengthM, 0), mixedL: round(coat.mixedLitres, 1), paintL: round(coat.concentrateLitres, 1), ...extra },
         latestDate: latest,
         flexible: latest === null,
         equipmentKind: 'line_marker',
@@ -363,10 +372,12 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
       etc += daily.etcMm[i] as number;
       eff += weather.effectiveRainMm[i] as number;
     }
-    const gross = grossIrrigationMm(netIrrigationMm(etc, eff, daily.share), daily.du);
+    const week = weekIrrigation(etc, eff, daily.share, daily.du, planning.minIrrigationMm);
+    const gross = week.grossMm;
     const keptDays = new Set(keptOf('irrigate').map((k) => k.plannedDate));
-    if (gross >= planning.minIrrigationMm) {
-      const schedule = weeklyIrrigationSchedule({ grossMmPerWeek: gross, precipRateMmPerH: params.irrigation.precipRateMmPerH, allowedDays: planning.wateringDays, maxRunMinPerCycle: params.irrigation.maxRunMinPerCycle });
+    if (week.scheduled) {
+      const irr = { ...DEFAULT_PARAMETERS.irrigation, ...params.irrigation };
+      const schedule = weeklyIrrigationSchedule({ grossMmPerWeek: gross, precipRateMmPerH: irr.precipRateMmPerH, allowedDays: planning.wateringDays, maxRunMinPerCycle: irr.maxRunMinPerCycle, maxCyclesPerDay: irr.maxCyclesPerDay });
       const runs = schedule.days.map((d) => ({ day: d.day, date: dates[WEEK_FROM_MONDAY.indexOf(d.day)] as string, cycles: d.cycles, minutesPerCycle: round(d.minutesPerCycle, 0), totalMinutes: round(d.totalMinutes, 0) }));
       const base = { grossMm: round(gross, 1), volumeL: round(irrigationVolumeLitres(schedule.appliedMm, field.areaM2), 0), shortfallMm: round(schedule.shortfallMm, 1) };
       if (field.irrigation === 'automatic') {

@@ -1,6 +1,7 @@
 /** The department's Standards (one row per maintenance level), field checks and imports. */
-import { date, index, integer, jsonb, pgTable, real, smallint, text, timestamp } from 'drizzle-orm/pg-core';
-import type { ImportSummary, LevelStandard } from '@swardwise/domain';
+import { sql } from 'drizzle-orm';
+import { check, date, index, integer, jsonb, pgTable, real, smallint, text, timestamp } from 'drizzle-orm/pg-core';
+import { HARDNESS_DEVICES, type HardnessDevice, type ImportSummary, type LevelStandard } from '@swardwise/domain';
 import { fields } from './city.ts';
 import { users } from './people.ts';
 
@@ -28,13 +29,19 @@ export const fieldChecks = pgTable(
     heightMm: real('height_mm'),
     daysSinceCut: integer('days_since_cut'),
     gmax: real('gmax'),
+    /** The tester the Gmax reading was taken with: readings of different testers are not comparable. */
+    gmaxDevice: text('gmax_device').$type<HardnessDevice>(),
     evenness: smallint('evenness'),
     notes: text('notes').notNull().default(''),
     score: real('score').notNull(),
     flags: jsonb('flags').$type<string[]>().notNull().default([]),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('field_checks_field_idx').on(t.fieldId, t.checkedOn)],
+  (t) => [
+    index('field_checks_field_idx').on(t.fieldId, t.checkedOn),
+    // A reading names its tester, and a tester is named only with a reading.
+    check('field_checks_gmax_device_check', sql`(${t.gmax} IS NULL) = (${t.gmaxDevice} IS NULL) AND (${t.gmaxDevice} IS NULL OR ${t.gmaxDevice} IN (${sql.raw(HARDNESS_DEVICES.map((d) => `'${d}'`).join(', '))}))`),
+  ],
 );
 
 /**

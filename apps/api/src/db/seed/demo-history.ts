@@ -16,6 +16,8 @@ export interface DemoCheck {
   heightRatio: number;
   daysSinceCut: number;
   gmax: number;
+  /** The demo crews read hardness with the 2.25 kg portable tester. */
+  gmaxDevice: 'portable_2_25kg';
   evenness: number;
   notes: string;
 }
@@ -42,14 +44,18 @@ export function demoFieldHistory(city: DemoCity): DemoHistory[] {
       const wear = i === 1 ? 0.08 : 0; // mid-season wear in goalmouths and centres
       const cover = Math.min(100, Math.round(70 + quality * 25 - wear * 100 + rand() * 8));
       const closedHard = field.status === 'closed' && i === CHECK_DATES.length - 1;
+      // Cover, weeds and bare/worn share one surface: together at most 100 %.
+      const weeds = Math.min(100 - cover, Math.round((1 - quality) * 18 + rand() * 6));
+      const bare = Math.min(100 - cover - weeds, Math.round(Math.max(0, 100 - cover - 5 + rand() * 4)));
       return {
         checkedOn,
         turfCoverPct: cover,
-        weedsPct: Math.round((1 - quality) * 18 + rand() * 6),
-        barePct: Math.round(Math.max(0, 100 - cover - 5 + rand() * 4)),
+        weedsPct: weeds,
+        barePct: bare,
         heightRatio: Math.round((1.05 + rand() * 0.4 + (level === 4 ? 0.2 : 0)) * 100) / 100,
         daysSinceCut: Math.round(1 + rand() * interval),
         gmax: Math.round(closedHard ? 112 + rand() * 10 : 45 + rand() * 40),
+        gmaxDevice: 'portable_2_25kg' as const,
         evenness: Math.max(1, Math.min(5, Math.round(2 + quality * 2.5 + rand()))),
         notes: closedHard ? 'Surface hard in the centre; closed pending aeration and watering' : '',
       };

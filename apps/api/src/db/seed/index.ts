@@ -105,8 +105,8 @@ export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TI
       history[i]!.checks.map((c) => {
         const hocMm = hocFor({ ...f, maintenanceLevel: f.maintenanceLevel as Level }, DEFAULT_STANDARDS);
         const scored = surfaceScore(
-          { turfCoverPct: c.turfCoverPct, weedsPct: c.weedsPct, bareWornPct: c.barePct, heightMm: c.heightRatio * hocMm, hocMm, hardnessG: c.gmax, evenness: c.evenness },
-          DEFAULT_PARAMETERS.hardnessSafeRangeG,
+          { turfCoverPct: c.turfCoverPct, weedsPct: c.weedsPct, bareWornPct: c.barePct, heightMm: c.heightRatio * hocMm, hocMm, hardnessG: c.gmax, hardnessDevice: c.gmaxDevice, evenness: c.evenness },
+          DEFAULT_PARAMETERS.hardnessRangesG,
         );
         return {
           fieldId: fieldRows[i]!.id,
@@ -117,6 +117,7 @@ export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TI
           heightMm: Math.round(c.heightRatio * hocMm),
           daysSinceCut: c.daysSinceCut,
           gmax: c.gmax,
+          gmaxDevice: c.gmaxDevice,
           evenness: c.evenness,
           notes: c.notes,
           score: Math.round(scored.score * 10) / 10,
@@ -171,12 +172,12 @@ export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TI
         .forEach((c, k) => {
           const crewId = crewIds.get(c.name)!;
           fleet.push(
-            { districtId, crewId, kind: 'reel_mower', name: `${code}-R${k + 1} triplex reel`, cuttingWidthM: 2.8, speedKmh: 6, fieldEfficiency: 0.8, hocMinMm: 6, hocMaxMm: 38, hourMeterH: 410 + k * 95, sharpenIntervalH: 100, lastSharpenedAtH: 330 + k * 95 },
-            { districtId, crewId, kind: 'rotary_mower', name: `${code}-M${k + 1} 72-inch rotary`, cuttingWidthM: 1.83, speedKmh: 8, fieldEfficiency: 0.8, hocMinMm: 25, hocMaxMm: 125, hourMeterH: 620 + k * 40, sharpenIntervalH: 50, lastSharpenedAtH: 600 + k * 40 },
+            { districtId, crewId, kind: 'reel_mower', name: `${code}-R${k + 1} triplex reel`, cuttingWidthM: 2.8, speedKmh: 6, fieldEfficiency: 0.8, hocMinMm: 6.35, hocMaxMm: 38.1, hourMeterH: 410 + k * 95, sharpenIntervalH: 100, lastSharpenedAtH: 330 + k * 95 },
+            { districtId, crewId, kind: 'rotary_mower', name: `${code}-M${k + 1} 72-inch rotary`, cuttingWidthM: 1.83, speedKmh: 8, fieldEfficiency: 0.8, hocMinMm: 25.4, hocMaxMm: 127, hourMeterH: 620 + k * 40, sharpenIntervalH: 50, lastSharpenedAtH: 600 + k * 40 },
           );
         });
       fleet.push(
-        { districtId, kind: 'flail_mower', name: `${code}-F1 flail`, cuttingWidthM: 2.2, speedKmh: 7, fieldEfficiency: 0.75, hocMinMm: 40, hocMaxMm: 150, hourMeterH: 280 },
+        { districtId, kind: 'flail_mower', name: `${code}-F1 flail`, cuttingWidthM: 2.2, speedKmh: 7, fieldEfficiency: 0.75, hocMinMm: 38.1, hocMaxMm: 152.4, hourMeterH: 280 },
         { districtId, kind: 'line_marker', name: `${code}-L1 line marker`, hourMeterH: 120 },
         { districtId, kind: 'spreader', name: `${code}-S1 rotary spreader`, hourMeterH: 60 },
       );
@@ -216,7 +217,7 @@ export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TI
       const n = perDistrict.get(site.districtCode) ?? 0;
       perDistrict.set(site.districtCode, n + 1);
       const hocMm = hocFor({ ...f, maintenanceLevel: f.maintenanceLevel as Level }, DEFAULT_STANDARDS);
-      const mower = DEFAULT_PARAMETERS.mowers[mowerTypeFor(hocMm)];
+      const mower = DEFAULT_PARAMETERS.mowers[mowerTypeFor(hocMm, DEFAULT_PARAMETERS.mowerSettings)];
       return [
         {
           fieldId: fieldRows[i]!.id,

@@ -2,7 +2,7 @@
  * The equipment form in the person's units (inches, mph, inches of HOC — or metres, km/h,
  * millimetres) and its conversion to the SI body the API takes.
  */
-import { createEquipmentSchema, KM_PER_MILE, MM_PER_INCH, MOWER_KINDS, type CreateEquipmentInput, type EquipmentKind, type EquipmentRow, type UnitSystem } from '@swardwise/domain';
+import { createEquipmentSchema, inchesToEighthsText, KM_PER_MILE, MM_PER_INCH, MOWER_KINDS, type CreateEquipmentInput, type EquipmentKind, type EquipmentRow, type UnitSystem } from '@swardwise/domain';
 
 export interface EquipmentModel {
   districtId: number | null;
@@ -38,8 +38,11 @@ export const widthToShown = (m: number, u: UnitSystem) => (u === 'imperial' ? ro
 export const widthToM = (v: number, u: UnitSystem) => (u === 'imperial' ? round((v * MM_PER_INCH) / 1000, 4) : v);
 export const speedToShown = (kmh: number, u: UnitSystem) => (u === 'imperial' ? round(kmh / KM_PER_MILE, 1) : round(kmh, 1));
 export const speedToKmh = (v: number, u: UnitSystem) => (u === 'imperial' ? round(v * KM_PER_MILE, 3) : v);
-export const hocToShown = (mm: number, u: UnitSystem) => (u === 'imperial' ? round(mm / MM_PER_INCH, 2) : round(mm, 0));
-export const hocToMmOf = (v: number, u: UnitSystem) => (u === 'imperial' ? round(v * MM_PER_INCH, 1) : v);
+// Inches to 0.001 so eighths stay exact (1⅜ in = 34.925 mm).
+export const hocToShown = (mm: number, u: UnitSystem) => (u === 'imperial' ? round(mm / MM_PER_INCH, 3) : round(mm, 0));
+export const hocToMmOf = (v: number, u: UnitSystem) => (u === 'imperial' ? round(v * MM_PER_INCH, 3) : v);
+/** A mower setting as text: inches to the eighth ("1⅜") or whole millimetres. */
+export const hocToText = (mm: number, u: UnitSystem) => (u === 'imperial' ? inchesToEighthsText(mm / MM_PER_INCH) : String(Math.round(mm)));
 
 export function emptyEquipment(): EquipmentModel {
   return {

@@ -124,12 +124,18 @@ export function buildNeedCards(x: FieldNeeds, u: UnitSystem): NeedCardModel[] {
         ? [
             { label: 'Layout', value: lines.template?.name ?? '—' },
             { label: 'Total line length', value: lengthText(lines.lineLengthM, u), test: 'needs-line-length' },
-            { label: 'Per repaint', value: `${volumeText(lines.concentrateLitres, u)} paint + ${volumeText(lines.waterLitres, u)} water` },
-            { label: 'Labour per repaint', value: hoursText(lines.hoursPerRepaint) },
+            { label: 'First coat', value: `${volumeText(lines.firstCoat.concentrateLitres, u)} paint + ${volumeText(lines.firstCoat.waterLitres, u)} water, ${hoursText(lines.firstCoat.hours)}` },
+            { label: 'Per touch-up', value: `${volumeText(lines.concentrateLitres, u)} paint + ${volumeText(lines.waterLitres, u)} water` },
+            { label: 'Labour per touch-up', value: hoursText(lines.hoursPerRepaint) },
             { label: 'Repaints in season', value: `${lines.repaints} (every ${lines.repaintDays} days)` },
           ]
         : [{ label: 'Lines', value: 'None kept', test: 'needs-line-length' }],
-      notes: lines.reason ? [{ text: lines.reason, type: 'info' }] : [],
+      notes: [
+        ...(lines.reason ? [{ text: lines.reason, type: 'info' as const }] : []),
+        ...(lines.elements.length
+          ? [{ text: `The totals include, as line of the layout\u2019s width: ${lines.elements.map((e) => `${e.label} ×${e.count} ${lengthText(e.equivalentLengthM, u)}`).join('; ')}.`, type: 'info' as const }]
+          : []),
+      ],
       inputs: lines.inputs,
       how: lines.how,
       cautions: lines.cautions,

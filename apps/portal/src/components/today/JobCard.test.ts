@@ -40,7 +40,8 @@ describe('JobCard', () => {
     expect(card.text()).toContain('Mow');
     expect(card.text()).toContain('Soccer 1');
     expect(card.text()).toContain('Alder Run Park');
-    expect(card.text()).toMatch(/HOC\s*2\.00 in/);
+    // Heights show to the eighth of an inch crews set mowers in (was "2.00 in").
+    expect(card.text()).toMatch(/HOC\s*2 in/);
     expect(card.text()).toMatch(/Mower\s*Reel mower/);
     expect(card.text()).toMatch(/Planned\s*0\.94 h/);
     expect(card.get('[aria-label="Stop 2"]').text()).toBe('2');
