@@ -1,5 +1,5 @@
 /** The caller's identity, passed explicitly into every service. */
-import { AppError, asSubject, defineAbilityFor, type Action, type Actor, type AppAbility, type ScopedRow, type SubjectName } from '@swardwise/domain';
+import { asSubject, errors, defineAbilityFor, type Action, type Actor, type AppAbility, type ScopedRow, type SubjectName } from '@swardwise/domain';
 import type { Queryable } from '../db/client.ts';
 import type { Clock } from './clock.ts';
 
@@ -19,22 +19,10 @@ export function contextFor(db: Queryable, actor: Actor, clock: Clock): Ctx {
 export function authorize(ctx: Ctx, action: Action, type: SubjectName, row?: ScopedRow): void {
   const allowed = row ? ctx.ability.can(action, asSubject(type, row)) : ctx.ability.can(action, type);
   if (!allowed) {
-    throw new AppError('forbidden', 'auth/forbidden', `Your role may not ${action} this ${type.toLowerCase()}`);
+    throw errors.forbidden(`Your role may not ${action} this ${type.toLowerCase()}`);
   }
 }
 
 export function can(ctx: Ctx, action: Action, type: SubjectName, row: ScopedRow): boolean {
   return ctx.ability.can(action, asSubject(type, row));
-}
-
-export function notFound(resource: string, id: number): AppError {
-  return new AppError('not_found', `${resource}/not_found`, `No ${resource} with id ${id}`);
-}
-
-export function versionConflict(resource: string): AppError {
-  return new AppError(
-    'conflict',
-    `${resource}/version_conflict`,
-    `Someone else changed this ${resource} since you opened it; reload to see their change, then apply yours again`,
-  );
 }

@@ -4,7 +4,8 @@
  */
 import { and, asc, desc, eq, gte, inArray, lte, max, ne, sql } from 'drizzle-orm';
 import {
-  AppError,
+  appError,
+  errors,
   addDaysIso,
   assignWeek,
   crewDayLoads,
@@ -41,7 +42,7 @@ import { notifyCrews, readScope, workOrderRows, type WorkMoveNotice, type WorkOr
 
 async function districtRow(db: Queryable, id: number) {
   const [d] = await db.select({ id: districts.id, name: districts.name, yardName: districts.yardName, yardLat: districts.yardLat, yardLng: districts.yardLng }).from(districts).where(eq(districts.id, id));
-  if (!d) throw new AppError('not_found', 'district/not_found', `No district with id ${id}`);
+  if (!d) throw errors.notFound('district', id);
   return d;
 }
 
@@ -265,7 +266,7 @@ async function weekRows(db: Queryable, districtId: number, weekStart: string) {
 /** The board of a district's week: orders, crews, each crew-day's load and route. */
 export async function getWeekBoard(ctx: Ctx, q: WeekQuery): Promise<WeekBoard<Date>> {
   authorize(ctx, 'read', 'WorkOrder', { districtId: q.districtId });
-  if (ctx.actor.role === 'crew' || ctx.actor.role === 'partner') throw new AppError('forbidden', 'auth/forbidden', 'The week plan board is for foremen and the department');
+  if (ctx.actor.role === 'crew' || ctx.actor.role === 'partner') throw errors.forbidden('The week plan board is for foremen and the department');
   const dates = weekDates(q.weekStart);
   const district = await districtRow(ctx.db, q.districtId);
   const params = await loadParameters(ctx.db);
@@ -419,7 +420,7 @@ function canonical(v: unknown): string {
   return JSON.stringify(v);
 }
 
-const stale = () => new AppError('conflict', 'week_plan/changed', 'The week changed while it was being generated (someone assigned or moved work); generate again to see the current plan');
+const stale = () => appError('week_plan/changed', 'The week changed while it was being generated (someone assigned or moved work); generate again to see the current plan');
 
 /**
  * Many orders in one statement: the rows travel as one JSON parameter (json_to_recordset),

@@ -5,7 +5,8 @@
  */
 import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import {
-  AppError,
+  appError,
+  errors,
   WORK_TASK_LABELS,
   mondayOf,
   type CreateWorkOrderInput,
@@ -18,7 +19,7 @@ import { crews, equipment, fields, sites, users, workOrders, workPhotos } from '
 import type { Mailer } from '../mail/mailer.ts';
 import { workMovedMail } from '../mail/messages.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+import { authorize, can, type Ctx } from './context.ts';
 
 export interface WorkOrderFilter {
   from: string;
@@ -142,7 +143,7 @@ async function checkCrewAndEquipment(db: Queryable, districtId: number, crewId: 
     else if (e.districtId !== districtId) issues.push({ path: 'body.equipmentId', message: 'this unit belongs to another district' });
     else if (!e.active) issues.push({ path: 'body.equipmentId', message: 'this unit is out of service' });
   }
-  if (issues.length) throw new AppError('invalid', 'request/invalid', issues.map((i) => i.message).join('; '), { issues });
+  if (issues.length) throw errors.invalid(issues.map((i) => i.message).join('; '), issues);
 }
 
 export interface WriteDeps {
@@ -154,7 +155,7 @@ export interface WriteDeps {
 /** A foreman adds work by hand (aeration, topdressing, an extra mowing). Kept by every re-generation. */
 export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, deps: WriteDeps): Promise<WorkOrderWriteAnswer<Date>> {
   const f = await fieldScopeRow(ctx.db, input.fieldId);
-  if (!f) throw new AppError('invalid', 'request/invalid', 'No such field', { issues: [{ path: 'body.fieldId', message: 'no such field' }] });
+  if (!f) throw errors.noSuch('field', 'body.fieldId');
   authorize(ctx, 'create', 'WorkOrder', { districtId: f.districtId, siteId: f.siteId });
   const id = await (ctx.db as Db).transaction(async (tx) => {
     await checkCrewAndEquipment(tx, f.districtId, input.crewId, input.equipmentId);
@@ -194,12 +195,12 @@ export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, dep
 export async function updateWorkOrder(ctx: Ctx, id: number, input: UpdateWorkOrderInput, deps: WriteDeps): Promise<WorkOrderWriteAnswer<Date>> {
   const result = await (ctx.db as Db).transaction(async (tx) => {
     const [before] = await tx.select().from(workOrders).where(eq(workOrders.id, id));
-    if (!before) throw notFound('work_order', id);
+    if (!before) throw errors.notFound('work_order', id);
     authorize(ctx, 'update', 'WorkOrder', before);
     const { version, ...changes } = input;
-    if (before.version !== version) throw versionConflict('work_order');
+    if (before.version !== version) throw errors.versionConflict('work_order');
     if ((before.status === 'done' || before.status === 'skipped') && (changes.plannedDate !== undefined || changes.crewId !== undefined)) {
-      throw new AppError('conflict', 'work_order/logged', `This work order is already ${before.status}; it can no longer be moved or reassigned`);
+      throw appError('work_order/logged', `This work order is already ${before.status}; it can no longer be moved or reassigned`);
     }
     await checkCrewAndEquipment(tx, before.districtId, changes.crewId, changes.equipmentId);
     const crewId = changes.crewId === undefined ? before.crewId : changes.crewId;
@@ -219,7 +220,7 @@ export async function updateWorkOrder(ctx: Ctx, id: number, input: UpdateWorkOrd
       })
       .where(and(eq(workOrders.id, id), eq(workOrders.version, version)))
       .returning();
-    if (!after) throw versionConflict('work_order');
+    if (!after) throw errors.versionConflict('work_order');
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'work_order', entityId: id, districtId: after.districtId, before, after });
     return { before, after };
   });
@@ -239,11 +240,11 @@ export async function updateWorkOrder(ctx: Ctx, id: number, input: UpdateWorkOrd
 export async function deleteWorkOrder(ctx: Ctx, id: number, version: number, deps: WriteDeps): Promise<void> {
   const before = await (ctx.db as Db).transaction(async (tx) => {
     const [row] = await tx.select().from(workOrders).where(eq(workOrders.id, id));
-    if (!row) throw notFound('work_order', id);
+    if (!row) throw errors.notFound('work_order', id);
     authorize(ctx, 'delete', 'WorkOrder', row);
-    if (row.status === 'done' || row.status === 'started') throw new AppError('conflict', 'work_order/logged', `This work order is ${row.status}: it is part of the records and cannot be deleted`);
+    if (row.status === 'done' || row.status === 'started') throw appError('work_order/logged', `This work order is ${row.status}: it is part of the records and cannot be deleted`);
     const [deleted] = await tx.delete(workOrders).where(and(eq(workOrders.id, id), eq(workOrders.version, version))).returning({ id: workOrders.id });
-    if (!deleted) throw versionConflict('work_order');
+    if (!deleted) throw errors.versionConflict('work_order');
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'work_order', entityId: id, districtId: row.districtId, before: row, after: null });
     return row;
   });
