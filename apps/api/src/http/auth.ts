@@ -42,8 +42,8 @@ export const requireUser: RequestHandler = (req, _res, next) => {
 };
 
 /** The service context for this request; only after `requireUser`. */
-export function ctxOf(db: Db, req: { actor?: Actor; clock?: Clock }): Ctx {
-  if (!req.actor) throw errors.unauthenticated();
+export function ctxOf(db: Db, req: { actor?: Actor; user?: SessionUser; clock?: Clock }): Ctx {
+  if (!req.actor || !req.user) throw errors.unauthenticated();
   if (!req.clock) throw new Error('the department clock is not on the request (withClock runs before the routes)');
-  return contextFor(db, req.actor, req.clock);
+  return contextFor(db, req.actor, req.user.name, req.clock);
 }

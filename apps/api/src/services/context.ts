@@ -6,13 +6,15 @@ import type { Clock } from './clock.ts';
 export interface Ctx {
   db: Queryable;
   actor: Actor;
+  /** The signed-in person's name, for what a service writes in their name (a crew lead's e-mail). */
+  actorName: string;
   ability: AppAbility;
   /** The department clock: every "today" and local date comes from here. */
   clock: Clock;
 }
 
-export function contextFor(db: Queryable, actor: Actor, clock: Clock): Ctx {
-  return { db, actor, ability: defineAbilityFor(actor), clock };
+export function contextFor(db: Queryable, actor: Actor, actorName: string, clock: Clock): Ctx {
+  return { db, actor, actorName, ability: defineAbilityFor(actor), clock };
 }
 
 /** Throws 403 unless the actor may do `action` on the subject (or on this row of it). */

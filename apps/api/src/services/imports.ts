@@ -9,7 +9,7 @@ import { type AppError, appError, errors, type ImportKind, type ImportList, type
 import type { Db, Queryable } from '../db/client.ts';
 import { fields, imports, sites, users } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, can, contextFor, type Ctx } from './context.ts';
+import { authorize, can, type Ctx } from './context.ts';
 import { createField, refuseDeleteWithHistory, removeField, removePhotoFiles, updateField } from './fields.ts';
 import { readUpload, type UploadedFile } from './import-files.ts';
 import { planImport } from './import-rows.ts';
@@ -110,7 +110,7 @@ export async function commitImport(ctx: Ctx, id: number): Promise<ImportAnswerRe
     if (summary.errors > 0) {
       throw appError('import/has_errors', `${summary.errors} row${summary.errors === 1 ? ' has' : 's have'} errors; fix ${summary.errors === 1 ? 'it' : 'them'} in the file and upload it again`, { errors: summary.errors });
     }
-    const txCtx = contextFor(tx, ctx.actor, ctx.clock);
+    const txCtx: Ctx = { ...ctx, db: tx };
     // Check again inside the transaction: rows may have changed since the preview.
     const stored = record.rows as ImportRow[];
     const plan = await planImport(txCtx, record.kind, stored.map((r) => ({ row: r.row, data: r.data })));

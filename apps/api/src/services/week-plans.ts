@@ -506,6 +506,6 @@ export async function confirmWeek(ctx: Ctx, q: WeekQuery & { crewId?: number | u
     n.orders.push(row);
     byCrew.set(row.crewId, n);
   }
-  const emailed = await notifyCrews(ctx.db, deps.mailer, [...byCrew.values()], deps.actorName, deps.publicUrl);
+  const emailed = await notifyCrews(ctx.db, deps.mailer, [...byCrew.values()], ctx.actorName, deps.publicUrl);
   return { assigned: changed.length, emailed, board: await getWeekBoard(ctx, q) };
 }

@@ -146,10 +146,10 @@ async function checkCrewAndEquipment(db: Queryable, districtId: number, crewId: 
   if (issues.length) throw errors.invalid(issues.map((i) => i.message).join('; '), issues);
 }
 
+/** Where the crew lead's e-mail goes out and where the portal lives (the writer's name is `ctx.actorName`). */
 export interface WriteDeps {
   mailer: Mailer;
   publicUrl: string;
-  actorName: string;
 }
 
 /** A foreman adds work by hand (aeration, topdressing, an extra mowing). Kept by every re-generation. */
@@ -183,7 +183,7 @@ export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, dep
     return row!.id;
   });
   const row = (await workOrderRow(ctx.db, id))!;
-  const emailed = row.crewId ? await notifyCrews(ctx.db, deps.mailer, [{ crewId: row.crewId, kind: 'assigned', orders: [row] }], deps.actorName, deps.publicUrl) : 0;
+  const emailed = row.crewId ? await notifyCrews(ctx.db, deps.mailer, [{ crewId: row.crewId, kind: 'assigned', orders: [row] }], ctx.actorName, deps.publicUrl) : 0;
   return { ...row, emailed };
 }
 
@@ -233,7 +233,7 @@ export async function updateWorkOrder(ctx: Ctx, id: number, input: UpdateWorkOrd
   } else if (after.crewId && after.plannedDate !== before.plannedDate) {
     notices.push({ crewId: after.crewId, kind: 'moved', orders: [{ ...row, fromDate: before.plannedDate }] });
   }
-  const emailed = await notifyCrews(ctx.db, deps.mailer, notices, deps.actorName, deps.publicUrl);
+  const emailed = await notifyCrews(ctx.db, deps.mailer, notices, ctx.actorName, deps.publicUrl);
   return { ...row, emailed };
 }
 
@@ -250,7 +250,7 @@ export async function deleteWorkOrder(ctx: Ctx, id: number, version: number, dep
   });
   if (before.crewId && before.status === 'assigned') {
     const [f] = await ctx.db.select({ fieldName: fields.name, siteName: sites.name }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(fields.id, before.fieldId));
-    await notifyCrews(ctx.db, deps.mailer, [{ crewId: before.crewId, kind: 'removed', orders: [{ task: before.task, fieldName: f?.fieldName ?? '', siteName: f?.siteName ?? '', plannedDate: before.plannedDate, plannedHours: before.plannedHours }] }], deps.actorName, deps.publicUrl);
+    await notifyCrews(ctx.db, deps.mailer, [{ crewId: before.crewId, kind: 'removed', orders: [{ task: before.task, fieldName: f?.fieldName ?? '', siteName: f?.siteName ?? '', plannedDate: before.plannedDate, plannedHours: before.plannedHours }] }], ctx.actorName, deps.publicUrl);
   }
 }
 
