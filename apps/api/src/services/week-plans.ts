@@ -35,6 +35,7 @@ import {
 } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, weatherDays, weatherStations, workOrders } from '../db/schema/index.ts';
+import { writeAudit, type AuditInput } from './audit.ts';
 import { authorize, type Ctx } from './context.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 import { dailyWeatherOf } from './weather.ts';
@@ -364,7 +365,7 @@ export async function generateWeek(ctx: Ctx, input: GenerateWeekInput): Promise<
 
   if (!input.dryRun) {
     await (ctx.db as Db).transaction(async (tx) => {
-      const audits: (typeof auditLog.$inferInsert)[] = [];
+      const audits: AuditInput[] = [];
       if (rec.remove.length) {
         const gone = await tx
           .delete(workOrders)
@@ -400,7 +401,7 @@ export async function generateWeek(ctx: Ctx, input: GenerateWeekInput): Promise<
         });
       }
       audits.push({ actorId: ctx.actor.id, action: 'create', entity: 'week_plan', entityId: null, districtId: q.districtId, before: null, after: { weekStart: q.weekStart, ...diff.summary, warnings: plan.warnings } });
-      await bulkInsertAudit(tx, audits);
+      await writeAudit(tx, audits);
     });
   }
   const board = await getWeekBoard(ctx, q);
@@ -447,15 +448,6 @@ async function bulkInsertOrders(tx: Queryable, rows: (typeof workOrders.$inferIn
   return out;
 }
 
-async function bulkInsertAudit(tx: Queryable, rows: (typeof auditLog.$inferInsert)[]): Promise<void> {
-  if (!rows.length) return;
-  const json = JSON.stringify(rows);
-  await tx.execute(sql`
-    insert into ${auditLog} (actor_id, action, entity, entity_id, district_id, before, after)
-    select "actorId", action, entity, "entityId", "districtId", before, after
-    from json_to_recordset(${json}::json) as x("actorId" int, action text, entity text, "entityId" int, "districtId" int, before jsonb, after jsonb)`);
-}
-
 function toInsert(p: ScheduledOrder, q: GenerationInput, actorId: number): typeof workOrders.$inferInsert {
   return {
     fieldId: p.fieldId,
@@ -494,9 +486,7 @@ export async function confirmWeek(ctx: Ctx, q: WeekQuery & { crewId?: number | u
       .where(inArray(workOrders.id, before.map((b) => b.id)))
       .returning();
     const byId = new Map(before.map((b) => [b.id, b]));
-    for (let i = 0; i < after.length; i += 500) {
-      await tx.insert(auditLog).values(after.slice(i, i + 500).map((a) => ({ actorId: ctx.actor.id, action: 'update' as const, entity: 'work_order', entityId: a.id, districtId: a.districtId, before: byId.get(a.id) ?? null, after: a })));
-    }
+    await writeAudit(tx, after.map((a) => ({ actorId: ctx.actor.id, action: 'update' as const, entity: 'work_order', entityId: a.id, districtId: a.districtId, before: byId.get(a.id) ?? null, after: a })));
     return after;
   });
   const byCrew = new Map<number, WorkMoveNotice>();
