@@ -30,6 +30,18 @@ export default tseslint.config(
     },
   },
   {
+    files: ['apps/api/src/**/*.ts'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector: "NewExpression[callee.name='AppError']",
+          message: 'Make errors with appError(code, message, details) or errors.* from @swardwise/domain: the code is checked and its status follows from it.',
+        },
+      ],
+    },
+  },
+  {
     files: ['tests/**/*.ts', '**/*.test.ts', 'tests/scripts/**', '**/bench/**'],
     rules: { 'no-console': 'off', '@typescript-eslint/no-non-null-assertion': 'off' },
   },

@@ -3,6 +3,7 @@ import { Ajv2020 } from 'ajv/dist/2020.js';
 import express, { Router, type Express } from 'express';
 import type { OpenAPIV3_1 } from 'openapi-types';
 import supertest from 'supertest';
+import { ERROR_CODES } from '@swardwise/domain';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { COOKIE_NAME } from '../../apps/api/src/app.ts';
 import { buildOpenApiDocument, openApiPath } from '../../apps/api/src/openapi/document.ts';
@@ -180,6 +181,8 @@ describe('the operations', () => {
     const errorBody = served.components!.schemas!.ErrorBody!;
     expect(errorBody.required).toEqual(['error']);
     expect((errorBody.properties!.error as OpenAPIV3_1.SchemaObject).required).toEqual(['code', 'message']);
+    const code = (errorBody.properties!.error as OpenAPIV3_1.SchemaObject).properties!.code as OpenAPIV3_1.SchemaObject;
+    expect((code.anyOf![0] as OpenAPIV3_1.SchemaObject).enum).toEqual(Object.keys(ERROR_CODES));
     for (const { route, op } of operations()) {
       expect(op.responses?.['500'], route).toEqual({ $ref: '#/components/responses/ServerError' });
       if (op.security?.length !== 0) expect(op.responses?.['401'], route).toEqual({ $ref: '#/components/responses/Unauthenticated' });

@@ -27,7 +27,7 @@ beforeAll(async () => {
   districtId = d!.id;
   const [foreman] = await database.db.select().from(users).where(and(eq(users.role, 'foreman'), eq(users.districtId, districtId)));
   const actor: Actor = { id: foreman!.id, role: 'foreman', districtId, crewId: null, siteIds: [] };
-  ctx = { db: database.db, actor, ability: defineAbilityFor(actor), clock: new DepartmentClock(database.db, DEFAULT_TIME_ZONE) };
+  ctx = { db: database.db, actor, actorName: foreman!.name, ability: defineAbilityFor(actor), clock: new DepartmentClock(database.db, DEFAULT_TIME_ZONE) };
 });
 afterAll(() => database.close());
 

@@ -134,10 +134,13 @@ describe('assigning and moving work', () => {
     expect(mail.to).toContain(api.fixture.users.crew.email);
     expect(mail.text).toContain('Aerate, Soccer 1 at Test Park North, 3.0 h planned');
     expect(mail.text).toContain('Tuesday, Jun 2');
+    // The writer's name comes with the session (ctx.actorName).
+    expect(mail.text).toContain('Test foreman assigned this work to North Crew:');
     const moved = await foreman.patch(`/api/work-orders/${created.body.id}`).send({ version: assigned.body.version, plannedDate: '2026-06-04' });
     expect(moved.status).toBe(200);
     const second = await api.mail.waitFor((m) => m.subject.includes('Work moved for North Crew') && m.text.includes('Aerate'));
     expect(second.text).toMatch(/Thursday, Jun 4 \(was Tuesday, Jun 2\)/);
+    expect(second.text).toContain('Test foreman moved this work of North Crew to another day:');
   });
 
   test('should confirm the suggested crews for the week with one e-mail per crew lead', async () => {

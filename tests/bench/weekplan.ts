@@ -62,7 +62,7 @@ for (let i = 0; i < rows.length; i += 500) await db.insert(fields).values(rows.s
 for (let c = 0; c < 6; c++) await db.insert(crews).values({ districtId: district!.id, name: `Bench crew ${c + 1}`, hoursPerDay: 9, members: [] });
 const [foreman] = await db.select().from(users).where(eq(users.role, 'foreman'));
 const actor: Actor = { id: foreman!.id, role: 'foreman', districtId: district!.id, crewId: null, siteIds: [] };
-const ctx = { db, actor, ability: defineAbilityFor(actor), clock: new DepartmentClock(db, DEFAULT_TIME_ZONE) };
+const ctx = { db, actor, actorName: foreman!.name, ability: defineAbilityFor(actor), clock: new DepartmentClock(db, DEFAULT_TIME_ZONE) };
 const q = { districtId: district!.id, weekStart: WEEK };
 
 const t0 = performance.now();

@@ -10,14 +10,14 @@ import session from 'express-session';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
-import { AppError } from '@swardwise/domain';
+import { appError } from '@swardwise/domain';
 import type { Config } from './config.ts';
 import type { Db } from './db/client.ts';
 import { createMailer, type Mailer } from './mail/mailer.ts';
 import type { MailSink } from './mail/sink.ts';
 import { loadUser, requireUser } from './http/auth.ts';
 import { withClock } from './http/clock.ts';
-import { errorHandler, notFound } from './http/errors.ts';
+import { errorHandler, noRoute } from './http/errors.ts';
 import { MAX_JSON_DEPTH, nestedDeeperThan } from './http/json-depth.ts';
 import { loggableUrl } from './http/request-log.ts';
 import { sameOriginWrites } from './http/same-origin.ts';
@@ -135,7 +135,7 @@ export function createApp(
   app.use('/api', (req, res, next) => (req.actor ? jsonSignedIn : jsonAnonymous)(req, res, next));
   app.use('/api', (req, _res, next) => {
     if (req.body !== undefined && nestedDeeperThan(req.body)) {
-      return next(new AppError('invalid', 'request/too_deep', `The request body nests arrays or objects more than ${MAX_JSON_DEPTH} levels deep`, {
+      return next(appError('request/too_deep', `The request body nests arrays or objects more than ${MAX_JSON_DEPTH} levels deep`, {
         issues: [{ path: 'body', message: `nested more than ${MAX_JSON_DEPTH} levels deep` }],
       }));
     }
@@ -169,7 +169,7 @@ export function createApp(
   app.use('/api', directoryRouter(full));
   app.use('/api', crewsRouter(full));
   if (devRoutes) app.use('/api/dev', devRouter(full));
-  app.use('/api', notFound('route'));
+  app.use('/api', noRoute);
 
   // The built portal, with the single-page app's routes answered by index.html.
   const index = path.join(config.portalDist, 'index.html');

@@ -1,6 +1,6 @@
 /** Who is asking: the session's user becomes `req.actor`, checked on every request. */
 import type { RequestHandler } from 'express';
-import { AppError, type Actor } from '@swardwise/domain';
+import { errors, type Actor } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import type { Clock } from '../services/clock.ts';
 import { contextFor, type Ctx } from '../services/context.ts';
@@ -37,13 +37,13 @@ export function loadUser(db: Db): RequestHandler {
 }
 
 export const requireUser: RequestHandler = (req, _res, next) => {
-  if (!req.actor) return next(new AppError('unauthenticated', 'auth/unauthenticated', 'Sign in to continue'));
+  if (!req.actor) return next(errors.unauthenticated());
   next();
 };
 
 /** The service context for this request; only after `requireUser`. */
-export function ctxOf(db: Db, req: { actor?: Actor; clock?: Clock }): Ctx {
-  if (!req.actor) throw new AppError('unauthenticated', 'auth/unauthenticated', 'Sign in to continue');
+export function ctxOf(db: Db, req: { actor?: Actor; user?: SessionUser; clock?: Clock }): Ctx {
+  if (!req.actor || !req.user) throw errors.unauthenticated();
   if (!req.clock) throw new Error('the department clock is not on the request (withClock runs before the routes)');
-  return contextFor(db, req.actor, req.clock);
+  return contextFor(db, req.actor, req.user.name, req.clock);
 }

@@ -1,13 +1,11 @@
 /** One error shape on every answer: `{ error: { code, message, details } }`. */
 import type { ErrorRequestHandler, RequestHandler } from 'express';
-import { AppError, DomainError } from '@swardwise/domain';
+import { AppError, DomainError, appError, errors } from '@swardwise/domain';
 import { ZodError } from 'zod';
 
-export const notFound =
-  (what = 'route'): RequestHandler =>
-  (req, _res, next) => {
-    next(new AppError('not_found', `${what}/not_found`, `No ${what} at ${req.method} ${req.path}`));
-  };
+export const noRoute: RequestHandler = (req, _res, next) => {
+  next(errors.noRoute(req.method, req.path));
+};
 
 /** Turns zod issues into `{ path, message }` pairs with the part of the request prefixed. */
 export function issuesOf(error: ZodError, part: string) {
@@ -28,21 +26,19 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof AppError) {
     error = err;
   } else if (err instanceof DomainError) {
-    error = new AppError('invalid', err.code, err.message, err.details);
+    error = errors.fromDomain(err);
   } else if (err instanceof ZodError) {
-    error = new AppError('invalid', 'request/invalid', 'The request is not valid', { issues: issuesOf(err, 'body') });
+    error = errors.invalid('The request is not valid', issuesOf(err, 'body'));
   } else if ((err as BodyParserError).type === 'entity.parse.failed') {
-    error = new AppError('invalid', 'request/malformed_json', 'The request body is not valid JSON');
+    error = appError('request/malformed_json', 'The request body is not valid JSON');
   } else if ((err as BodyParserError).type === 'entity.too.large') {
-    error = new AppError('too_large', 'request/too_large', 'The request body is too large');
+    error = appError('request/too_large', 'The request body is too large');
   } else if (typeof (err as BodyParserError).status === 'number' && (err as BodyParserError).status! < 500) {
     const status = (err as BodyParserError).status!;
-    error = new AppError(status === 415 ? 'unsupported' : 'invalid', 'request/invalid', (err as Error).message);
+    error = errors.refusedRequest(status, (err as Error).message);
   } else {
     req.log?.error({ err }, 'unhandled error');
-    closeIfUnread(req, res);
-    res.status(500).json({ error: { code: 'server/internal', message: 'Something went wrong on the server; nothing was saved' } });
-    return;
+    error = errors.internal();
   }
   closeIfUnread(req, res);
   res.status(error.status).json(error.toBody());

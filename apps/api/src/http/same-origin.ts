@@ -9,7 +9,7 @@
  * supertest pass, and still need a session cookie for anything but signing in.
  */
 import type { Request, RequestHandler } from 'express';
-import { AppError } from '@swardwise/domain';
+import { type AppError, appError } from '@swardwise/domain';
 import type { Config } from '../config.ts';
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
@@ -50,5 +50,5 @@ export function sameOriginWrites(config: Pick<Config, 'allowedOrigins' | 'public
 }
 
 function refused(): AppError {
-  return new AppError('forbidden', 'request/cross_origin', 'This change must be made from the Swardwise portal itself; the request came from another site or address');
+  return appError('request/cross_origin', 'This change must be made from the Swardwise portal itself; the request came from another site or address');
 }

@@ -8,7 +8,7 @@
  */
 import type { RequestHandler } from 'express';
 import multer from 'multer';
-import { AppError } from '@swardwise/domain';
+import { appError, type UploadResource } from '@swardwise/domain';
 
 export interface UploadLimits {
   /** Form field of the one file. */
@@ -20,7 +20,7 @@ export interface UploadLimits {
   /** Largest text field value, bytes. */
   maxFieldBytes?: number;
   /** Error code prefix of the route (`import`, `weather`, `work_photo`). */
-  code: string;
+  code: UploadResource;
   /** The file in words for messages ("The photo", "The file"). */
   what: string;
 }
@@ -47,7 +47,7 @@ export function receiveUpload(limits: UploadLimits): RequestHandler {
     },
   }).single(limits.field);
   const maxBody = limits.maxFileBytes + limits.maxFields * (fieldBytes + 200) + OVERHEAD_BYTES;
-  const tooLarge = (message: string) => new AppError('too_large', `${limits.code}/too_large`, message);
+  const tooLarge = (message: string) => appError(`${limits.code}/too_large`, message);
 
   return (req, res, next) => {
     const declared = Number(req.get('content-length'));
@@ -68,10 +68,10 @@ export function receiveUpload(limits: UploadLimits): RequestHandler {
           case 'LIMIT_FIELD_KEY':
             return next(tooLarge(`A form field is too long (at most ${fieldBytes} bytes); send the file in “${limits.field}” and short text fields only`));
           default:
-            return next(new AppError('invalid', `${limits.code}/bad_upload`, `Send one file in the form field “${limits.field}” (${err.message})`));
+            return next(appError(`${limits.code}/bad_upload`, `Send one file in the form field “${limits.field}” (${err.message})`));
         }
       }
-      next(new AppError('invalid', `${limits.code}/bad_upload`, `The upload could not be read; send it as multipart/form-data with the file in the field “${limits.field}”`));
+      next(appError(`${limits.code}/bad_upload`, `The upload could not be read; send it as multipart/form-data with the file in the field “${limits.field}”`));
     });
   };
 }

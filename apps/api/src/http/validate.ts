@@ -1,5 +1,5 @@
 /** Parses a request part with a domain zod schema; a failure becomes a 400 with per-field issues. */
-import { AppError } from '@swardwise/domain';
+import { errors } from '@swardwise/domain';
 import type { z } from 'zod';
 import { issuesOf } from './errors.ts';
 
@@ -8,9 +8,7 @@ export function parse<S extends z.ZodType>(schema: S, value: unknown, part: 'bod
   if (!result.success) {
     const issues = issuesOf(result.error, part);
     const first = issues[0];
-    throw new AppError('invalid', 'request/invalid', first ? `${first.path}: ${first.message}` : `The ${part} is not valid`, {
-      issues,
-    });
+    throw errors.invalid(first ? `${first.path}: ${first.message}` : `The ${part} is not valid`, issues);
   }
   return result.data;
 }

@@ -5,17 +5,23 @@
  */
 import { z } from 'zod';
 import type { oas31 } from 'zod-openapi';
-import { ROLES, UNIT_SYSTEMS, type ErrorBody } from '@swardwise/domain';
+import { ERROR_CODES, ROLES, UNIT_SYSTEMS, type ApiErrorCode, type ErrorBody } from '@swardwise/domain';
 
 type Schema = oas31.SchemaObject;
 
 /** `{ error: { code, message, details } }`, the one shape of every 4xx and 5xx answer. */
 export const errorBodySchema = z.object({
   error: z.object({
-    code: z.string().meta({
-      description: 'Stable code namespaced by resource; the same code always means the same thing.',
-      examples: ['request/invalid', 'auth/unauthenticated', 'auth/forbidden', 'field/not_found', 'field/version_conflict'],
-    }),
+    code: z
+      .union([
+        z.enum(Object.keys(ERROR_CODES) as [ApiErrorCode, ...ApiErrorCode[]]),
+        z.templateLiteral(['engine/', z.string()]).meta({ description: 'A bad input to a turf computation (400)' }),
+        z.templateLiteral(['geometry/', z.string()]).meta({ description: 'A field outline that is not a usable polygon (400)' }),
+      ])
+      .meta({
+        description: 'Stable code namespaced by resource; the same code always means the same thing. Its status is fixed by the code.',
+        examples: ['request/invalid', 'auth/unauthenticated', 'auth/forbidden', 'field/not_found', 'field/version_conflict'],
+      }),
     message: z.string().meta({ description: 'What went wrong, in plain words for a person.' }),
     details: z
       .object({

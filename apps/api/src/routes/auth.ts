@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { Router } from 'express';
 import { ipKeyGenerator, rateLimit, type Options } from 'express-rate-limit';
-import { AppError, acceptInviteSchema, forgotPasswordSchema, resetPasswordSchema, signInSchema, updateProfileSchema } from '@swardwise/domain';
+import { AppError, acceptInviteSchema, forgotPasswordSchema, resetPasswordSchema, signInSchema, updateProfileSchema, appError } from '@swardwise/domain';
 import type { Request } from 'express';
 import type { AppDeps } from '../app.ts';
 import { users } from '../db/schema/index.ts';
@@ -42,7 +42,7 @@ export function authRouter({ db, config, mailer, background, clock }: AppDeps): 
       standardHeaders: 'draft-8',
       legacyHeaders: false,
       ...options,
-      handler: (_req, _res, next) => next(new AppError('rate_limited', 'auth/rate_limited', options.message)),
+      handler: (_req, _res, next) => next(appError('auth/rate_limited', options.message)),
     });
   const tooManySignIns = 'Too many sign-in attempts; wait a few minutes and try again';
   // Failed attempts per account, from wherever they come (a spread-out guesser is still one guesser)…

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { AppError, createImportSchema, idParamSchema, IMPORT_MAX_BYTES } from '@swardwise/domain';
+import { createImportSchema, idParamSchema, IMPORT_MAX_BYTES, appError } from '@swardwise/domain';
 import type { AppDeps } from '../app.ts';
 import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
@@ -29,7 +29,7 @@ export function importsRouter({ db, config }: AppDeps): Router {
   router.post('/', receiveFile, async (req, res) => {
     const ctx = ctxOf(db, req);
     const { kind } = parse(createImportSchema, req.body, 'body');
-    if (!req.file) throw new AppError('invalid', 'import/no_file', 'Choose a file to upload', { issues: [{ path: 'body.file', message: 'choose a file' }] });
+    if (!req.file) throw appError('import/no_file', 'Choose a file to upload', { issues: [{ path: 'body.file', message: 'choose a file' }] });
     res.status(201).json({ import: await previewImport(ctx, kind, { originalname: req.file.originalname, buffer: req.file.buffer }) });
   });
 

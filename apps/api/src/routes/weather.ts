@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { AppError, idParamSchema, weatherRangeSchema } from '@swardwise/domain';
+import { idParamSchema, weatherRangeSchema, appError } from '@swardwise/domain';
 import type { AppDeps } from '../app.ts';
 import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
@@ -44,9 +44,9 @@ export function weatherRouter({ db, config }: AppDeps): Router {
       const { id } = parse(idParamSchema, req.params, 'params');
       const { commit } = parse(csvQuerySchema, req.query, 'query');
       const file = req.file;
-      if (!file) throw new AppError('invalid', 'weather/no_file', 'Choose a station file (.csv) to upload');
+      if (!file) throw appError('weather/no_file', 'Choose a station file (.csv) to upload');
       if (!/\.csv$/i.test(file.originalname) || file.buffer.includes(0)) {
-        throw new AppError('unsupported', 'weather/not_csv', 'A station file must be a .csv text file');
+        throw appError('weather/not_csv', 'A station file must be a .csv text file');
       }
       res.json(await uploadStationCsv(ctx, id, file.buffer.toString('utf8'), commit === 'true'));
     },

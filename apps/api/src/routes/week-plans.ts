@@ -19,7 +19,7 @@ export function weekPlansRouter(deps: AppDeps): Router {
     res.json(await generateWeek(ctxOf(db, req), parse(generateWeekSchema, req.body, 'body')));
   });
   router.post('/confirm', async (req, res) => {
-    res.json(await confirmWeek(ctxOf(db, req), parse(confirmSchema, req.body, 'body'), await writeDeps(deps, req)));
+    res.json(await confirmWeek(ctxOf(db, req), parse(confirmSchema, req.body, 'body'), writeDeps(deps)));
   });
   return router;
 }

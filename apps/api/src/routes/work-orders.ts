@@ -1,9 +1,7 @@
-import { Router, type Request } from 'express';
-import { eq } from 'drizzle-orm';
+import { Router } from 'express';
 import { z } from 'zod';
 import { addDaysIso, createWorkOrderSchema, idParamSchema, idSchema, isoDateSchema, updateWorkOrderSchema, versionSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app.ts';
-import { users } from '../db/schema/index.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { createWorkOrder, deleteWorkOrder, listWorkOrders, updateWorkOrder, type WriteDeps } from '../services/work-orders.ts';
@@ -21,10 +19,9 @@ export const querySchema = (today: string) => z
   .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / 86_400_000 <= 92, { path: ['to'], message: 'ask for at most 92 days at a time' });
 export const deleteQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
 
-/** Who is writing (for the crew lead's e-mail) and where the portal lives. */
-export async function writeDeps({ db, mailer, config }: AppDeps, req: Request): Promise<WriteDeps> {
-  const [me] = await db.select({ name: users.name }).from(users).where(eq(users.id, req.actor?.id ?? -1));
-  return { mailer, publicUrl: config.publicUrl, actorName: me?.name ?? 'The foreman' };
+/** How the crew lead's e-mail goes out and where the portal lives. */
+export function writeDeps({ mailer, config }: AppDeps): WriteDeps {
+  return { mailer, publicUrl: config.publicUrl };
 }
 
 export function workOrdersRouter(deps: AppDeps): Router {
@@ -36,18 +33,18 @@ export function workOrdersRouter(deps: AppDeps): Router {
   });
   router.post('/', async (req, res) => {
     const ctx = ctxOf(db, req);
-    res.status(201).json(await createWorkOrder(ctx, parse(createWorkOrderSchema, req.body, 'body'), await writeDeps(deps, req)));
+    res.status(201).json(await createWorkOrder(ctx, parse(createWorkOrderSchema, req.body, 'body'), writeDeps(deps)));
   });
   router.patch('/:id', async (req, res) => {
     const ctx = ctxOf(db, req);
     const { id } = parse(idParamSchema, req.params, 'params');
-    res.json(await updateWorkOrder(ctx, id, parse(updateWorkOrderSchema, req.body, 'body'), await writeDeps(deps, req)));
+    res.json(await updateWorkOrder(ctx, id, parse(updateWorkOrderSchema, req.body, 'body'), writeDeps(deps)));
   });
   router.delete('/:id', async (req, res) => {
     const ctx = ctxOf(db, req);
     const { id } = parse(idParamSchema, req.params, 'params');
     const { version } = parse(deleteQuerySchema, req.query, 'query');
-    await deleteWorkOrder(ctx, id, version, await writeDeps(deps, req));
+    await deleteWorkOrder(ctx, id, version, writeDeps(deps));
     res.status(204).end();
   });
   return router;

@@ -1,7 +1,7 @@
 /** One work order as a crew works it: read it, report on it, add and show its photos. */
 import { Router } from 'express';
 import { z } from 'zod';
-import { AppError, idParamSchema, idSchema, workReportSchema } from '@swardwise/domain';
+import { idParamSchema, idSchema, workReportSchema, appError } from '@swardwise/domain';
 import type { AppDeps } from '../app.ts';
 import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
@@ -47,7 +47,7 @@ export function workReportsRouter({ db, config }: AppDeps): Router {
       const { id } = parse(idParamSchema, req.params, 'params');
       const { clientRef } = parse(photoBodySchema, req.body, 'body');
       if (!req.file) {
-        throw new AppError('invalid', 'work_photo/no_file', 'Choose a photo to upload', { issues: [{ path: 'body.photo', message: 'choose a photo' }] });
+        throw appError('work_photo/no_file', 'Choose a photo to upload', { issues: [{ path: 'body.photo', message: 'choose a photo' }] });
       }
       const answer = await addWorkPhoto(ctx, id, { buffer: req.file.buffer, clientRef }, config.uploadsDir);
       res.status(answer.duplicate ? 200 : 201).json(answer);

@@ -18,19 +18,35 @@ export interface AuditInput {
   after: object | null;
 }
 
-/** Passwords and hashes never reach the log. */
-function redact(row: object | null): Record<string, unknown> | null {
+/**
+ * Keys that never reach the log, at any depth: passwords, tokens, secrets, API keys and their
+ * hashes (`passwordHash`, `tokenHash`, `clientSecret`, `api_key`). A flag such as
+ * `passwordReset: true` says that something happened, not what, and stays.
+ */
+const SECRET_KEY = /(password|passwd|token|secret|api_?key)(_?hash)?$/i;
+
+/** A copy of a row as JSON, without its secrets. */
+export function redact(row: object | null): Record<string, unknown> | null {
   if (!row) return null;
-  const copy: Record<string, unknown> = JSON.parse(JSON.stringify(row));
-  delete copy.passwordHash;
-  delete copy.tokenHash;
-  delete copy.password;
-  delete copy.token;
-  return copy;
+  return JSON.parse(JSON.stringify(row), (key, value: unknown) => (SECRET_KEY.test(key) ? undefined : value)) as Record<string, unknown>;
 }
 
-export async function writeAudit(db: Queryable, entry: AuditInput): Promise<void> {
-  await db.insert(auditLog).values({ ...entry, before: redact(entry.before), after: redact(entry.after) });
+/**
+ * The one way rows reach the audit log: one entry or many, each redacted first. Many entries
+ * travel as one JSON parameter (json_to_recordset): PGlite is slow with thousands of bound
+ * parameters, and a week plan writes thousands of entries at once.
+ */
+export async function writeAudit(db: Queryable, entries: AuditInput | readonly AuditInput[]): Promise<void> {
+  const rows = (Array.isArray(entries) ? (entries as readonly AuditInput[]) : [entries as AuditInput]).map((e) => ({ ...e, before: redact(e.before), after: redact(e.after) }));
+  if (rows.length === 0) return;
+  if (rows.length === 1) {
+    await db.insert(auditLog).values(rows[0]!);
+    return;
+  }
+  await db.execute(sql`
+    insert into ${auditLog} (actor_id, action, entity, entity_id, district_id, before, after)
+    select "actorId", action, entity, "entityId", "districtId", before, after
+    from json_to_recordset(${JSON.stringify(rows)}::json) as x("actorId" int, action text, entity text, "entityId" int, "districtId" int, before jsonb, after jsonb)`);
 }
 
 export async function listAudit(ctx: Ctx, filter: { entity?: string | undefined; entityId?: number | undefined; limit: number }): Promise<AuditEntry<Date>[]> {

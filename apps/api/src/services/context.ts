@@ -1,40 +1,30 @@
 /** The caller's identity, passed explicitly into every service. */
-import { AppError, asSubject, defineAbilityFor, type Action, type Actor, type AppAbility, type ScopedRow, type SubjectName } from '@swardwise/domain';
+import { asSubject, errors, defineAbilityFor, type Action, type Actor, type AppAbility, type ScopedRow, type SubjectName } from '@swardwise/domain';
 import type { Queryable } from '../db/client.ts';
 import type { Clock } from './clock.ts';
 
 export interface Ctx {
   db: Queryable;
   actor: Actor;
+  /** The signed-in person's name, for what a service writes in their name (a crew lead's e-mail). */
+  actorName: string;
   ability: AppAbility;
   /** The department clock: every "today" and local date comes from here. */
   clock: Clock;
 }
 
-export function contextFor(db: Queryable, actor: Actor, clock: Clock): Ctx {
-  return { db, actor, ability: defineAbilityFor(actor), clock };
+export function contextFor(db: Queryable, actor: Actor, actorName: string, clock: Clock): Ctx {
+  return { db, actor, actorName, ability: defineAbilityFor(actor), clock };
 }
 
 /** Throws 403 unless the actor may do `action` on the subject (or on this row of it). */
 export function authorize(ctx: Ctx, action: Action, type: SubjectName, row?: ScopedRow): void {
   const allowed = row ? ctx.ability.can(action, asSubject(type, row)) : ctx.ability.can(action, type);
   if (!allowed) {
-    throw new AppError('forbidden', 'auth/forbidden', `Your role may not ${action} this ${type.toLowerCase()}`);
+    throw errors.forbidden(`Your role may not ${action} this ${type.toLowerCase()}`);
   }
 }
 
 export function can(ctx: Ctx, action: Action, type: SubjectName, row: ScopedRow): boolean {
   return ctx.ability.can(action, asSubject(type, row));
-}
-
-export function notFound(resource: string, id: number): AppError {
-  return new AppError('not_found', `${resource}/not_found`, `No ${resource} with id ${id}`);
-}
-
-export function versionConflict(resource: string): AppError {
-  return new AppError(
-    'conflict',
-    `${resource}/version_conflict`,
-    `Someone else changed this ${resource} since you opened it; reload to see their change, then apply yours again`,
-  );
 }

@@ -1,10 +1,10 @@
 /** Mowing crews of a district. */
 import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
-import { AppError, type CreateCrewInput, type CrewRow, type StoredCrew, type UpdateCrewInput } from '@swardwise/domain';
+import { appError, errors, type CreateCrewInput, type CrewRow, type StoredCrew, type UpdateCrewInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { crews, districts, users } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+import { authorize, can, type Ctx } from './context.ts';
 
 export async function listCrews(ctx: Ctx, filter: { districtId?: number | undefined }): Promise<CrewRow[]> {
   authorize(ctx, 'read', 'Crew', ctx.actor.role === 'crew' ? { id: ctx.actor.crewId ?? -1, districtId: ctx.actor.districtId } : undefined);
@@ -41,7 +41,7 @@ export async function createCrew(ctx: Ctx, input: CreateCrewInput): Promise<Stor
   authorize(ctx, 'create', 'Crew', { districtId: input.districtId });
   return (ctx.db as Db).transaction(async (tx) => {
     const [d] = await tx.select({ id: districts.id }).from(districts).where(eq(districts.id, input.districtId));
-    if (!d) throw new AppError('invalid', 'request/invalid', 'No such district', { issues: [{ path: 'body.districtId', message: 'no such district' }] });
+    if (!d) throw errors.noSuch('district', 'body.districtId');
     const [row] = await tx.insert(crews).values(input).returning();
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'crew', entityId: row!.id, districtId: row!.districtId, before: null, after: row! });
     return row!;
@@ -51,21 +51,21 @@ export async function createCrew(ctx: Ctx, input: CreateCrewInput): Promise<Stor
 export async function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput): Promise<StoredCrew<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await crewRow(tx, id);
-    if (!before) throw notFound('crew', id);
+    if (!before) throw errors.notFound('crew', id);
     authorize(ctx, 'update', 'Crew', before);
     const { version, ...changes } = input;
     if (changes.districtId !== undefined && changes.districtId !== before.districtId) {
       // A crew lead's district follows his crew, so a crew with a lead stays where it is.
       authorize(ctx, 'create', 'Crew', { districtId: changes.districtId });
       const [lead] = await tx.select({ id: users.id }).from(users).where(eq(users.crewId, id)).limit(1);
-      if (lead) throw new AppError('conflict', 'crew/has_lead', 'Move the crew lead to another crew before moving this crew to another district');
+      if (lead) throw appError('crew/has_lead', 'Move the crew lead to another crew before moving this crew to another district');
     }
     const [updated] = await tx
       .update(crews)
       .set({ ...changes, version: sql`${crews.version} + 1`, updatedAt: new Date() })
       .where(and(eq(crews.id, id), eq(crews.version, version)))
       .returning();
-    if (!updated) throw versionConflict('crew');
+    if (!updated) throw errors.versionConflict('crew');
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'crew', entityId: id, districtId: updated.districtId, before, after: updated });
     return updated;
   });
@@ -74,12 +74,12 @@ export async function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput): 
 export async function deleteCrew(ctx: Ctx, id: number, version: number): Promise<void> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await crewRow(tx, id);
-    if (!before) throw notFound('crew', id);
+    if (!before) throw errors.notFound('crew', id);
     authorize(ctx, 'delete', 'Crew', before);
     const [lead] = await tx.select({ id: users.id }).from(users).where(eq(users.crewId, id)).limit(1);
-    if (lead) throw new AppError('conflict', 'crew/has_lead', 'This crew still has a crew lead account; move or deactivate it first');
+    if (lead) throw appError('crew/has_lead', 'This crew still has a crew lead account; move or deactivate it first');
     const [deleted] = await tx.delete(crews).where(and(eq(crews.id, id), eq(crews.version, version))).returning({ id: crews.id });
-    if (!deleted) throw versionConflict('crew');
+    if (!deleted) throw errors.versionConflict('crew');
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'crew', entityId: id, districtId: before.districtId, before, after: null });
   });
 }

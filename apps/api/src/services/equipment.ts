@@ -1,10 +1,10 @@
 /** A district's mowers, line markers, spreaders and sprayers, with hour meters and blade care. */
 import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
-import { AppError, type CreateEquipmentInput, type EquipmentRow, type UpdateEquipmentInput } from '@swardwise/domain';
+import { errors, type CreateEquipmentInput, type EquipmentRow, type UpdateEquipmentInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { crews, districts, equipment } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+import { authorize, can, type Ctx } from './context.ts';
 
 const columns = {
   id: equipment.id,
@@ -64,9 +64,9 @@ export async function listEquipment(ctx: Ctx, filter: { districtId?: number | un
 async function checkCrew(db: Ctx['db'], crewId: number | null | undefined, districtId: number) {
   if (crewId == null) return;
   const [crew] = await db.select({ districtId: crews.districtId }).from(crews).where(eq(crews.id, crewId));
-  if (!crew) throw new AppError('invalid', 'request/invalid', 'No such crew', { issues: [{ path: 'body.crewId', message: 'no such crew' }] });
+  if (!crew) throw errors.noSuch('crew', 'body.crewId');
   if (crew.districtId !== districtId) {
-    throw new AppError('invalid', 'request/invalid', 'That crew works in another district', { issues: [{ path: 'body.crewId', message: 'the crew works in another district' }] });
+    throw errors.invalid('That crew works in another district', [{ path: 'body.crewId', message: 'the crew works in another district' }]);
   }
 }
 
@@ -84,7 +84,7 @@ export async function createEquipment(ctx: Ctx, input: CreateEquipmentInput): Pr
 export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipmentInput): Promise<EquipmentRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before: Row | undefined = await getRow(tx, id);
-    if (!before) throw notFound('equipment', id);
+    if (!before) throw errors.notFound('equipment', id);
     authorize(ctx, 'update', 'Equipment', before);
     const { version, ...changes } = input;
     const districtId = changes.districtId ?? before.districtId;
@@ -92,14 +92,14 @@ export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipme
     await checkCrew(tx, changes.crewId === undefined ? before.crewId : changes.crewId, districtId);
     const merged = { ...before, ...changes };
     if (merged.hocMinMm != null && merged.hocMaxMm != null && merged.hocMinMm > merged.hocMaxMm) {
-      throw new AppError('invalid', 'request/invalid', 'The highest HOC is below the lowest', { issues: [{ path: 'body.hocMaxMm', message: 'the highest HOC is below the lowest' }] });
+      throw errors.invalid('The highest HOC is below the lowest', [{ path: 'body.hocMaxMm', message: 'the highest HOC is below the lowest' }]);
     }
     const [updated] = await tx
       .update(equipment)
       .set({ ...changes, version: sql`${equipment.version} + 1`, updatedAt: new Date() })
       .where(and(eq(equipment.id, id), eq(equipment.version, version)))
       .returning({ id: equipment.id });
-    if (!updated) throw versionConflict('equipment');
+    if (!updated) throw errors.versionConflict('equipment');
     const after = (await getRow(tx, id))!;
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'equipment', entityId: id, districtId: after.districtId, before, after });
     return withBladeCare(after);
@@ -109,13 +109,13 @@ export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipme
 export async function deleteEquipment(ctx: Ctx, id: number, version: number): Promise<void> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await getRow(tx, id);
-    if (!before) throw notFound('equipment', id);
+    if (!before) throw errors.notFound('equipment', id);
     authorize(ctx, 'delete', 'Equipment', before);
     const [deleted] = await tx
       .delete(equipment)
       .where(and(eq(equipment.id, id), eq(equipment.version, version)))
       .returning({ id: equipment.id });
-    if (!deleted) throw versionConflict('equipment');
+    if (!deleted) throw errors.versionConflict('equipment');
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'equipment', entityId: id, districtId: before.districtId, before, after: null });
   });
 }

@@ -3,11 +3,11 @@
  * and mowing is timed before them. Each row carries its field's site and district for scope.
  */
 import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
-import { AppError, type Actor, type CreateFieldEventInput, type FieldEventRow, type UpdateFieldEventInput } from '@swardwise/domain';
+import { errors, type Actor, type CreateFieldEventInput, type FieldEventRow, type UpdateFieldEventInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { fieldEvents, fields, sites } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+import { authorize, can, type Ctx } from './context.ts';
 
 export interface FieldEventFilter {
   from: string;
@@ -76,7 +76,7 @@ async function fieldOf(db: Ctx['db'], fieldId: number) {
     .from(fields)
     .innerJoin(sites, eq(sites.id, fields.siteId))
     .where(eq(fields.id, fieldId));
-  if (!field) throw new AppError('invalid', 'request/invalid', 'No such field', { issues: [{ path: 'body.fieldId', message: 'no such field' }] });
+  if (!field) throw errors.noSuch('field', 'body.fieldId');
   return field;
 }
 
@@ -97,7 +97,7 @@ export async function createFieldEvent(ctx: Ctx, input: CreateFieldEventInput): 
 export async function updateFieldEvent(ctx: Ctx, id: number, input: UpdateFieldEventInput): Promise<FieldEventRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await getRow(tx, id);
-    if (!before) throw notFound('field_event', id);
+    if (!before) throw errors.notFound('field_event', id);
     authorize(ctx, 'update', 'FieldEvent', before);
     const { version, ...changes } = input;
     let moved: { siteId: number; districtId: number } | undefined;
@@ -112,7 +112,7 @@ export async function updateFieldEvent(ctx: Ctx, id: number, input: UpdateFieldE
       .set({ ...changes, ...moved, version: sql`${fieldEvents.version} + 1`, updatedAt: new Date() })
       .where(and(eq(fieldEvents.id, id), eq(fieldEvents.version, version)))
       .returning({ id: fieldEvents.id });
-    if (!updated) throw versionConflict('field_event');
+    if (!updated) throw errors.versionConflict('field_event');
     const after = (await getRow(tx, id))!;
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'field_event', entityId: id, districtId: after.districtId, before, after });
     return after;
@@ -122,13 +122,13 @@ export async function updateFieldEvent(ctx: Ctx, id: number, input: UpdateFieldE
 export async function deleteFieldEvent(ctx: Ctx, id: number, version: number): Promise<void> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await getRow(tx, id);
-    if (!before) throw notFound('field_event', id);
+    if (!before) throw errors.notFound('field_event', id);
     authorize(ctx, 'delete', 'FieldEvent', before);
     const [deleted] = await tx
       .delete(fieldEvents)
       .where(and(eq(fieldEvents.id, id), eq(fieldEvents.version, version)))
       .returning({ id: fieldEvents.id });
-    if (!deleted) throw versionConflict('field_event');
+    if (!deleted) throw errors.versionConflict('field_event');
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'field_event', entityId: id, districtId: before.districtId, before, after: null });
   });
 }

@@ -2,11 +2,11 @@
 import fs from 'node:fs/promises';
 import path from 'node:path';
 import { and, asc, count, eq, inArray, sql, type SQL } from 'drizzle-orm';
-import { AppError, longAxis, polygonAreaM2, type CreateFieldInput, type FieldDetail, type FieldRow, type Polygon, type UpdateFieldInput } from '@swardwise/domain';
+import { longAxis, polygonAreaM2, appError, errors, type CreateFieldInput, type FieldDetail, type FieldRow, type Polygon, type UpdateFieldInput } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { districts, fieldChecks, fields, sites, workOrders, workPhotos } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+import { authorize, can, type Ctx } from './context.ts';
 import { cachedAnswer } from './answer-cache.ts';
 import { followMove } from './scope-copies.ts';
 import { fieldCrewIds, fieldScope } from './scope.ts';
@@ -80,14 +80,14 @@ export async function listFieldsJson(ctx: Ctx, filter: { districtId?: number | u
 
 export async function getField(ctx: Ctx, id: number): Promise<FieldDetail<Date>> {
   const row = await getFieldRow(ctx.db, id);
-  if (!row) throw notFound('field', id);
+  if (!row) throw errors.notFound('field', id);
   authorize(ctx, 'read', 'Field', row);
   return row;
 }
 
 async function siteOf(db: Ctx['db'], siteId: number) {
   const [site] = await db.select({ id: sites.id, districtId: sites.districtId }).from(sites).where(eq(sites.id, siteId));
-  if (!site) throw new AppError('invalid', 'request/invalid', 'No such site', { issues: [{ path: 'body.siteId', message: 'no such site' }] });
+  if (!site) throw errors.noSuch('site', 'body.siteId');
   return site;
 }
 
@@ -108,7 +108,7 @@ export async function createField(ctx: Ctx, input: CreateFieldInput): Promise<Fi
 export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput): Promise<FieldDetail<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await getFieldRow(tx, id);
-    if (!before) throw notFound('field', id);
+    if (!before) throw errors.notFound('field', id);
     authorize(ctx, 'update', 'Field', before);
     const { version, ...changes } = input;
     if (changes.siteId !== undefined && changes.siteId !== before.siteId) {
@@ -125,7 +125,7 @@ export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput)
       })
       .where(and(eq(fields.id, id), eq(fields.version, version)))
       .returning({ id: fields.id });
-    if (!updated) throw versionConflict('field');
+    if (!updated) throw errors.versionConflict('field');
     // The field's work and bookings go with it to its new site (and district).
     if (changes.siteId !== undefined && changes.siteId !== before.siteId) await followMove(tx, ctx.actor.id, { fieldId: id });
     const after = (await getFieldRow(tx, id))!;
@@ -155,8 +155,7 @@ export async function refuseDeleteWithHistory(db: Queryable, field: { id: number
     history.workOrders ? `${history.workOrders} work order${history.workOrders === 1 ? '' : 's'} started or done` : null,
     history.fieldChecks ? `${history.fieldChecks} field check${history.fieldChecks === 1 ? '' : 's'}` : null,
   ].filter(Boolean);
-  throw new AppError(
-    'conflict',
+  throw appError(
     'field/has_work_history',
     `“${field.name}” has work on record (${what.join(' and ')}), which deleting it would lose; retire the field instead: it leaves the week plan and keeps its records`,
     { fieldId: field.id, ...history },
@@ -189,12 +188,12 @@ export async function removePhotoFiles(uploadsDir: string, fileNames: readonly s
 export async function deleteField(ctx: Ctx, id: number, version: number, uploadsDir: string): Promise<void> {
   const photoFiles = await (ctx.db as Db).transaction(async (tx) => {
     const before = await getFieldRow(tx, id);
-    if (!before) throw notFound('field', id);
+    if (!before) throw errors.notFound('field', id);
     authorize(ctx, 'delete', 'Field', before);
-    if (before.version !== version) throw versionConflict('field');
+    if (before.version !== version) throw errors.versionConflict('field');
     await refuseDeleteWithHistory(tx, before);
     const removed = await removeField(tx, id, version);
-    if (!removed.deleted) throw versionConflict('field');
+    if (!removed.deleted) throw errors.versionConflict('field');
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'field', entityId: id, districtId: before.districtId, before, after: null });
     return removed.photoFiles;
   });

@@ -5,7 +5,7 @@
  */
 import path from 'node:path';
 import Papa from 'papaparse';
-import { AppError, IMPORT_COLUMNS, IMPORT_KIND_LABELS, IMPORT_MAX_ROWS, type ImportKind } from '@swardwise/domain';
+import { type AppError, IMPORT_COLUMNS, IMPORT_KIND_LABELS, IMPORT_MAX_ROWS, appError, type ImportKind } from '@swardwise/domain';
 import { MAX_JSON_DEPTH, nestedDeeperThan } from '../http/json-depth.ts';
 
 export interface UploadedFile {
@@ -25,7 +25,7 @@ const CSV_EXTENSIONS = ['.csv'];
 const GEOJSON_EXTENSIONS = ['.geojson', '.json'];
 
 function unsupported(message: string): AppError {
-  return new AppError('unsupported', 'import/unsupported_type', message);
+  return appError('import/unsupported_type', message);
 }
 
 function decodeText(file: UploadedFile, what: string): string {
@@ -41,7 +41,7 @@ function decodeText(file: UploadedFile, what: string): string {
 
 function readCsv(kind: 'sites_csv' | 'fields_csv', file: UploadedFile): RawRow[] {
   const text = decodeText(file, 'CSV');
-  if (text.trim() === '') throw new AppError('invalid', 'import/empty', `${file.originalname} is empty`);
+  if (text.trim() === '') throw appError('import/empty', `${file.originalname} is empty`);
   if (/^\s*[[{]/.test(text)) throw unsupported(`${file.originalname} looks like JSON, not CSV; ${IMPORT_KIND_LABELS[kind]} need comma-separated text`);
   const parsed = Papa.parse<Record<string, string>>(text, {
     header: true,
@@ -57,13 +57,13 @@ function readCsv(kind: 'sites_csv' | 'fields_csv', file: UploadedFile): RawRow[]
       missing.length ? `missing column${missing.length > 1 ? 's' : ''} ${missing.join(', ')}` : '',
       unknown.length ? `unknown column${unknown.length > 1 ? 's' : ''} ${unknown.join(', ')}` : '',
     ].filter(Boolean);
-    throw new AppError('invalid', 'import/columns', `The first line of ${file.originalname} must name the columns: ${parts.join('; ')}. Expected: ${known.join(',')}`, {
+    throw appError('import/columns', `The first line of ${file.originalname} must name the columns: ${parts.join('; ')}. Expected: ${known.join(',')}`, {
       missing,
       unknown,
     });
   }
-  if (parsed.data.length === 0) throw new AppError('invalid', 'import/empty', `${file.originalname} has a header line but no rows`);
-  if (parsed.data.length > IMPORT_MAX_ROWS) throw new AppError('too_large', 'import/too_many_rows', `${file.originalname} has ${parsed.data.length} rows; import at most ${IMPORT_MAX_ROWS} at a time`);
+  if (parsed.data.length === 0) throw appError('import/empty', `${file.originalname} has a header line but no rows`);
+  if (parsed.data.length > IMPORT_MAX_ROWS) throw appError('import/too_many_rows', `${file.originalname} has ${parsed.data.length} rows; import at most ${IMPORT_MAX_ROWS} at a time`);
 
   const lineErrors = new Map<number, string>();
   for (const e of parsed.errors) if (e.row !== undefined) lineErrors.set(e.row, e.message);
@@ -85,7 +85,7 @@ function readGeoJson(file: UploadedFile): RawRow[] {
     throw unsupported(`${file.originalname} is not valid JSON; outlines are imported from a GeoJSON FeatureCollection`);
   }
   if (nestedDeeperThan(doc)) {
-    throw new AppError('invalid', 'import/too_deep', `${file.originalname} nests arrays or objects more than ${MAX_JSON_DEPTH} levels deep; a GeoJSON outline needs about 6`, {
+    throw appError('import/too_deep', `${file.originalname} nests arrays or objects more than ${MAX_JSON_DEPTH} levels deep; a GeoJSON outline needs about 6`, {
       issues: [{ path: 'body.file', message: `nested more than ${MAX_JSON_DEPTH} levels deep` }],
     });
   }
@@ -93,9 +93,9 @@ function readGeoJson(file: UploadedFile): RawRow[] {
   if (!collection || typeof collection !== 'object' || collection.type !== 'FeatureCollection' || !Array.isArray(collection.features)) {
     throw unsupported(`${file.originalname} is not a GeoJSON FeatureCollection`);
   }
-  if (collection.features.length === 0) throw new AppError('invalid', 'import/empty', `${file.originalname} has no features`);
+  if (collection.features.length === 0) throw appError('import/empty', `${file.originalname} has no features`);
   if (collection.features.length > IMPORT_MAX_ROWS) {
-    throw new AppError('too_large', 'import/too_many_rows', `${file.originalname} has ${collection.features.length} features; import at most ${IMPORT_MAX_ROWS} at a time`);
+    throw appError('import/too_many_rows', `${file.originalname} has ${collection.features.length} features; import at most ${IMPORT_MAX_ROWS} at a time`);
   }
   return collection.features.map((feature: unknown, i: number) => {
     const f = (feature ?? {}) as { properties?: Record<string, unknown> | null; geometry?: unknown };

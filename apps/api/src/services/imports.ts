@@ -5,11 +5,11 @@
  * caller's last import can be undone.
  */
 import { and, desc, eq, gt, ne, or, sql, type SQL } from 'drizzle-orm';
-import { AppError, type ImportKind, type ImportList, type ImportRecord as ImportAnswerRecord, type ImportRow, type ImportSummary } from '@swardwise/domain';
+import { type AppError, appError, errors, type ImportKind, type ImportList, type ImportRecord as ImportAnswerRecord, type ImportRow, type ImportSummary } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { fields, imports, sites, users } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, can, contextFor, notFound, type Ctx } from './context.ts';
+import { authorize, can, type Ctx } from './context.ts';
 import { createField, refuseDeleteWithHistory, removeField, removePhotoFiles, updateField } from './fields.ts';
 import { readUpload, type UploadedFile } from './import-files.ts';
 import { planImport } from './import-rows.ts';
@@ -69,7 +69,7 @@ function readable(ctx: Ctx, row: { userId: number; districtId: number | null }):
 export async function getImport(ctx: Ctx, id: number): Promise<ImportAnswerRecord<Date>> {
   authorize(ctx, 'create', 'Import');
   const row = await loadImport(ctx.db, id);
-  if (!row || !readable(ctx, row)) throw notFound('import', id);
+  if (!row || !readable(ctx, row)) throw errors.notFound('import', id);
   return present(row);
 }
 
@@ -96,8 +96,8 @@ export async function listImports(ctx: Ctx, limit: number): Promise<ImportList<D
 async function ownImport(ctx: Ctx, tx: Queryable, id: number) {
   // Lock the row so two commits (or a commit and an undo) of one import cannot interleave.
   const [row] = await tx.select().from(imports).where(eq(imports.id, id)).for('update');
-  if (!row || !readable(ctx, row)) throw notFound('import', id);
-  if (row.userId !== ctx.actor.id) throw new AppError('forbidden', 'auth/forbidden', 'Only the person who uploaded an import may commit or undo it');
+  if (!row || !readable(ctx, row)) throw errors.notFound('import', id);
+  if (row.userId !== ctx.actor.id) throw errors.forbidden('Only the person who uploaded an import may commit or undo it');
   return row;
 }
 
@@ -105,17 +105,17 @@ export async function commitImport(ctx: Ctx, id: number): Promise<ImportAnswerRe
   authorize(ctx, 'create', 'Import');
   return (ctx.db as Db).transaction(async (tx) => {
     const record = await ownImport(ctx, tx, id);
-    if (record.status !== 'preview') throw new AppError('conflict', 'import/not_preview', `This import is already ${record.status}; upload the file again to import it anew`);
+    if (record.status !== 'preview') throw appError('import/not_preview', `This import is already ${record.status}; upload the file again to import it anew`);
     const summary = record.summary as ImportSummary;
     if (summary.errors > 0) {
-      throw new AppError('conflict', 'import/has_errors', `${summary.errors} row${summary.errors === 1 ? ' has' : 's have'} errors; fix ${summary.errors === 1 ? 'it' : 'them'} in the file and upload it again`, { errors: summary.errors });
+      throw appError('import/has_errors', `${summary.errors} row${summary.errors === 1 ? ' has' : 's have'} errors; fix ${summary.errors === 1 ? 'it' : 'them'} in the file and upload it again`, { errors: summary.errors });
     }
-    const txCtx = contextFor(tx, ctx.actor, ctx.clock);
+    const txCtx: Ctx = { ...ctx, db: tx };
     // Check again inside the transaction: rows may have changed since the preview.
     const stored = record.rows as ImportRow[];
     const plan = await planImport(txCtx, record.kind, stored.map((r) => ({ row: r.row, data: r.data })));
     if (plan.summary.errors > 0) {
-      throw new AppError('conflict', 'import/stale', `Since the preview, ${plan.summary.errors} row${plan.summary.errors === 1 ? '' : 's'} no longer pass the checks (someone changed the data); upload the file again`, { errors: plan.summary.errors });
+      throw appError('import/stale', `Since the preview, ${plan.summary.errors} row${plan.summary.errors === 1 ? '' : 's'} no longer pass the checks (someone changed the data); upload the file again`, { errors: plan.summary.errors });
     }
     const changes: Changes = { created: [], updated: [] };
     for (const write of plan.writes) {
@@ -159,7 +159,7 @@ export async function commitImport(ctx: Ctx, id: number): Promise<ImportAnswerRe
 }
 
 function changedSince(entity: string, id: number): AppError {
-  return new AppError('conflict', 'import/changed_since', `The ${entity} with id ${id} was changed after the import; undoing would lose that change, so nothing was undone`, { entity, id });
+  return appError('import/changed_since', `The ${entity} with id ${id} was changed after the import; undoing would lose that change, so nothing was undone`, { entity, id });
 }
 
 /** Stored columns of a row as they were before the import, ready to write back. */
@@ -177,13 +177,13 @@ export async function undoImport(ctx: Ctx, id: number, uploadsDir: string): Prom
   const photoFiles: string[] = [];
   const undone = await (ctx.db as Db).transaction(async (tx) => {
     const record = await ownImport(ctx, tx, id);
-    if (record.status !== 'committed') throw new AppError('conflict', 'import/not_committed', `Only a committed import can be undone; this one is ${record.status}`);
+    if (record.status !== 'committed') throw appError('import/not_committed', `Only a committed import can be undone; this one is ${record.status}`);
     const [later] = await tx
       .select({ id: imports.id })
       .from(imports)
       .where(and(eq(imports.userId, ctx.actor.id), eq(imports.status, 'committed'), ne(imports.id, id), gt(imports.committedAt, record.committedAt!)))
       .limit(1);
-    if (later) throw new AppError('conflict', 'import/not_last', `Only your last import can be undone; undo import ${later.id} first`);
+    if (later) throw appError('import/not_last', `Only your last import can be undone; undo import ${later.id} first`);
     const changes = record.changes ?? { created: [], updated: [] };
     const createdFieldIds = changes.created.filter((c) => c.entity === 'field').map((c) => c.id);
     const createdSiteIds = changes.created.filter((c) => c.entity === 'site').map((c) => c.id);
@@ -203,7 +203,7 @@ export async function undoImport(ctx: Ctx, id: number, uploadsDir: string): Prom
       if (!row || row.version !== 1) throw changedSince('site', siteId);
       const [others] = await tx.select({ n: sql<number>`count(*)::int` }).from(fields).where(eq(fields.siteId, siteId));
       if ((others?.n ?? 0) > 0) {
-        throw new AppError('conflict', 'import/changed_since', `Fields were added to the site “${row.name}” after the import; remove them first or keep the import`, { entity: 'site', id: siteId });
+        throw appError('import/changed_since', `Fields were added to the site “${row.name}” after the import; remove them first or keep the import`, { entity: 'site', id: siteId });
       }
       await tx.delete(sites).where(eq(sites.id, siteId));
       await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'site', entityId: siteId, districtId: row.districtId, before: row, after: null });

@@ -6,7 +6,7 @@
  */
 import { asc, desc, eq, sql } from 'drizzle-orm';
 import {
-  AppError,
+  appError,
   CAUTIONS,
   addDaysIso,
   annualNitrogen,
@@ -98,7 +98,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
   const here = { lat: site!.lat, lng: site!.lng };
   const ranked = stations.map((s) => ({ ...s, distanceKm: greatCircleKm(here, { lat: s.lat, lng: s.lng }) })).sort((a, b) => a.distanceKm - b.distanceKm);
   const station = ranked[0];
-  if (!station) throw new AppError('not_found', 'weather/none', 'No weather station has daily weather on file, so the needs of this field cannot be worked out yet. Add weather first.');
+  if (!station) throw appError('weather/none', 'No weather station has daily weather on file, so the needs of this field cannot be worked out yet. Add weather first.');
   const allDays = await ctx.db.select().from(weatherDays).where(eq(weatherDays.stationId, station.id)).orderBy(asc(weatherDays.date));
 
   // The week asked for, or else the latest week with weather on or before it.

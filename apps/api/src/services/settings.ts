@@ -1,12 +1,12 @@
 /** Installation settings kept in the database. */
 import crypto from 'node:crypto';
 import { eq, sql } from 'drizzle-orm';
-import type { UpdateDepartmentSettingsInput } from '@swardwise/domain';
+import { errors, type UpdateDepartmentSettingsInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { settings } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { readTimeZoneSetting, TIME_ZONE_KEY, type DepartmentClock } from './clock.ts';
-import { authorize, versionConflict, type Ctx } from './context.ts';
+import { authorize, type Ctx } from './context.ts';
 
 /** The cookie-signing secret: from SESSION_SECRET, else generated once and kept in the database. */
 export async function sessionSecretFor(db: Db, configured: string | undefined): Promise<string> {
@@ -48,7 +48,7 @@ export async function updateDepartmentSettings(ctx: Ctx, clock: DepartmentClock,
       .values({ key: TIME_ZONE_KEY, value })
       .onConflictDoUpdate({ target: settings.key, set: { value, updatedAt: new Date() }, setWhere: sql`coalesce((${settings.value}->>'version')::int, 1) = ${input.version}` })
       .returning();
-    if (!row || (!before && input.version !== 1)) throw versionConflict('settings');
+    if (!row || (!before && input.version !== 1)) throw errors.versionConflict('settings');
     await writeAudit(tx, {
       actorId: ctx.actor.id,
       action: before ? 'update' : 'create',

@@ -1,10 +1,10 @@
 /** Parks, complexes and school campuses. */
 import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
-import { AppError, type CreateSiteInput, type SiteRow, type UpdateSiteInput } from '@swardwise/domain';
+import { errors, type CreateSiteInput, type SiteRow, type UpdateSiteInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { districts, fields, sites } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+import { authorize, can, type Ctx } from './context.ts';
 import { followMove } from './scope-copies.ts';
 import { siteScope } from './scope.ts';
 
@@ -61,14 +61,14 @@ export async function listSites(ctx: Ctx, filter: { districtId?: number | undefi
 
 export async function getSite(ctx: Ctx, id: number): Promise<SiteRow<Date>> {
   const row = await getSiteRow(ctx.db, id);
-  if (!row) throw notFound('site', id);
+  if (!row) throw errors.notFound('site', id);
   authorize(ctx, 'read', 'Site', row);
   return row;
 }
 
 async function checkDistrict(db: Ctx['db'], districtId: number) {
   const [d] = await db.select({ id: districts.id }).from(districts).where(eq(districts.id, districtId));
-  if (!d) throw new AppError('invalid', 'request/invalid', 'No such district', { issues: [{ path: 'body.districtId', message: 'no such district' }] });
+  if (!d) throw errors.noSuch('district', 'body.districtId');
 }
 
 export async function createSite(ctx: Ctx, input: CreateSiteInput): Promise<SiteRow<Date>> {
@@ -85,7 +85,7 @@ export async function createSite(ctx: Ctx, input: CreateSiteInput): Promise<Site
 export async function updateSite(ctx: Ctx, id: number, input: UpdateSiteInput): Promise<SiteRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await getSiteRow(tx, id);
-    if (!before) throw notFound('site', id);
+    if (!before) throw errors.notFound('site', id);
     authorize(ctx, 'update', 'Site', before);
     const { version, ...changes } = input;
     if (changes.districtId !== undefined && changes.districtId !== before.districtId) {
@@ -98,7 +98,7 @@ export async function updateSite(ctx: Ctx, id: number, input: UpdateSiteInput): 
       .set({ ...changes, version: sql`${sites.version} + 1`, updatedAt: new Date() })
       .where(and(eq(sites.id, id), eq(sites.version, version)))
       .returning({ id: sites.id });
-    if (!updated) throw versionConflict('site');
+    if (!updated) throw errors.versionConflict('site');
     // The work and bookings of the site's fields go with it to its new district.
     if (changes.districtId !== undefined && changes.districtId !== before.districtId) await followMove(tx, ctx.actor.id, { siteId: id });
     const after = (await getSiteRow(tx, id))!;

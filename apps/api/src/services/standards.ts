@@ -11,11 +11,12 @@ import {
   type StandardsAnswer,
   type StandardsRow as StandardsAnswerRow,
   type UpdateLevelStandardInput,
+  errors,
 } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { settings, standards } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, notFound, versionConflict, type Ctx } from './context.ts';
+import { authorize, type Ctx } from './context.ts';
 
 /** Settings key under which a department may keep its own engine parameters. */
 export const PARAMETERS_KEY = 'department_parameters';
@@ -84,7 +85,7 @@ export async function updateLevelStandard(ctx: Ctx, level: Level, input: UpdateL
   authorize(ctx, 'update', 'Standards');
   return (ctx.db as Db).transaction(async (tx) => {
     const [before] = await tx.select().from(standards).where(eq(standards.level, level));
-    if (!before) throw notFound('standards', level);
+    if (!before) throw errors.notFound('standards', level);
     const { version, ...changes } = input;
     const data = merge({ ...DEFAULT_STANDARDS[level], ...before.data, level }, changes);
     const [after] = await tx
@@ -92,7 +93,7 @@ export async function updateLevelStandard(ctx: Ctx, level: Level, input: UpdateL
       .set({ data, version: sql`${standards.version} + 1`, updatedAt: new Date(), updatedBy: ctx.actor.id })
       .where(sql`${standards.level} = ${level} and ${standards.version} = ${version}`)
       .returning();
-    if (!after) throw versionConflict('standards');
+    if (!after) throw errors.versionConflict('standards');
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'standards', entityId: level, districtId: null, before, after });
     return { ...after, level: after.level as Level };
   });

@@ -3,7 +3,8 @@ import crypto from 'node:crypto';
 import { hash, verify } from '@node-rs/argon2';
 import { and, asc, eq, gt, inArray, isNull, sql } from 'drizzle-orm';
 import {
-  AppError,
+  appError,
+  errors,
   asSubject,
   OWN_ACCOUNT_FIELDS,
   PERMISSION_FIELDS,
@@ -19,7 +20,7 @@ import {
 import type { Db, Queryable } from '../db/client.ts';
 import { crews, districts, sessions, sites, users, userSites, userTokens } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+import { authorize, can, type Ctx } from './context.ts';
 
 export { actorOf } from '@swardwise/domain';
 export type { SessionUser };
@@ -81,11 +82,11 @@ export async function verifyCredentials(db: Queryable, email: string, password: 
   const [row] = await db.select({ id: users.id, hash: users.passwordHash, active: users.active }).from(users).where(eq(users.email, email));
   const ok = row?.hash ? await verify(row.hash, password) : (await verify(DUMMY_HASH, password), false);
   if (!row || !ok || !row.active) {
-    throw new AppError('unauthenticated', 'auth/invalid_credentials', 'The e-mail or password is not right');
+    throw errors.invalidCredentials();
   }
   await db.update(users).set({ lastSignInAt: new Date() }).where(eq(users.id, row.id));
   const user = await sessionUser(db, row.id);
-  if (!user) throw new AppError('unauthenticated', 'auth/invalid_credentials', 'The e-mail or password is not right');
+  if (!user) throw errors.invalidCredentials();
   return user;
 }
 
@@ -105,12 +106,12 @@ async function resolveScope(db: Queryable, input: { role: Role; districtId?: num
   let siteIds: number[] = [];
   if (input.role === 'foreman') {
     const [d] = await db.select({ id: districts.id }).from(districts).where(eq(districts.id, input.districtId!));
-    if (!d) throw new AppError('invalid', 'request/invalid', 'No such district', { issues: [{ path: 'body.districtId', message: 'no such district' }] });
+    if (!d) throw errors.noSuch('district', 'body.districtId');
     districtId = d.id;
   }
   if (input.role === 'crew') {
     const [c] = await db.select({ id: crews.id, districtId: crews.districtId }).from(crews).where(eq(crews.id, input.crewId!));
-    if (!c) throw new AppError('invalid', 'request/invalid', 'No such crew', { issues: [{ path: 'body.crewId', message: 'no such crew' }] });
+    if (!c) throw errors.noSuch('crew', 'body.crewId');
     crewId = c.id;
     districtId = c.districtId;
   }
@@ -118,7 +119,7 @@ async function resolveScope(db: Queryable, input: { role: Role; districtId?: num
     siteIds = [...new Set(input.siteIds ?? [])].sort((a, b) => a - b);
     const found = await db.select({ id: sites.id }).from(sites).where(inArray(sites.id, siteIds));
     if (found.length !== siteIds.length) {
-      throw new AppError('invalid', 'request/invalid', 'One of the sites does not exist', { issues: [{ path: 'body.siteIds', message: 'unknown site' }] });
+      throw errors.invalid('One of the sites does not exist', [{ path: 'body.siteIds', message: 'unknown site' }]);
     }
   }
   return { districtId, crewId, siteIds };
@@ -141,7 +142,7 @@ export async function inviteUser(ctx: Ctx, input: InviteUserInput, publicUrl: st
   return (ctx.db as Db).transaction(async (tx) => {
     const [existing] = await tx.select({ id: users.id }).from(users).where(eq(users.email, input.email));
     if (existing) {
-      throw new AppError('conflict', 'user/email_taken', `There is already an account for ${input.email}`, {
+      throw appError('user/email_taken', `There is already an account for ${input.email}`, {
         issues: [{ path: 'body.email', message: 'already in use' }],
       });
     }
@@ -173,8 +174,7 @@ async function consumeToken(db: Queryable, token: string, purpose: 'invite' | 'r
     .where(and(eq(userTokens.tokenHash, hashToken(token)), eq(userTokens.purpose, purpose), isNull(userTokens.usedAt), gt(userTokens.expiresAt, new Date())))
     .returning({ userId: userTokens.userId });
   if (!row) {
-    throw new AppError(
-      'invalid',
+    throw appError(
       'auth/invalid_token',
       purpose === 'invite' ? 'This invitation link is not valid or has expired; ask for a new one' : 'This reset link is not valid or has expired; ask for a new one',
     );
@@ -188,7 +188,7 @@ export async function acceptInvite(db: Queryable, token: string, password: strin
   await db.update(users).set({ passwordHash, updatedAt: new Date(), version: sql`${users.version} + 1` }).where(eq(users.id, userId));
   await writeAudit(db, { actorId: userId, action: 'update', entity: 'user', entityId: userId, districtId: null, before: null, after: { invitationAccepted: true } });
   const user = await sessionUser(db, userId);
-  if (!user) throw new AppError('forbidden', 'auth/deactivated', 'This account has been deactivated');
+  if (!user) throw errors.deactivated();
   return user;
 }
 
@@ -222,7 +222,7 @@ export async function resetPassword(db: Queryable, token: string, password: stri
   await db.delete(sessions).where(eq(sessions.userId, userId));
   await writeAudit(db, { actorId: userId, action: 'update', entity: 'user', entityId: userId, districtId: null, before: null, after: { passwordReset: true } });
   const user = await sessionUser(db, userId);
-  if (!user) throw new AppError('forbidden', 'auth/deactivated', 'This account has been deactivated');
+  if (!user) throw errors.deactivated();
   return user;
 }
 
@@ -250,8 +250,7 @@ export function checkUserAttributes(ctx: Ctx, row: { id: number; districtId?: nu
   const subject = asSubject('User', { id: row.id, districtId: row.districtId ?? null });
   const refused = USER_ATTRIBUTES.filter((k) => keys.includes(k) && !ctx.ability.can('update', subject, k));
   if (!refused.length) return;
-  throw new AppError(
-    'forbidden',
+  throw appError(
     'user/forbidden_attribute',
     `Only an administrator may change the ${refused.map((k) => ATTRIBUTE_WORDS[k]).join(', ')} of an account`,
     { issues: refused.map((k) => ({ path: `body.${k}`, message: 'only an administrator may change this' })) },
@@ -272,12 +271,12 @@ const ATTRIBUTE_WORDS: Record<(typeof USER_ATTRIBUTES)[number], string> = {
 export async function updateUser(ctx: Ctx, id: number, input: UpdateUserInput): Promise<UserRow> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await findUser(tx, id);
-    if (!before) throw notFound('user', id);
+    if (!before) throw errors.notFound('user', id);
     authorize({ ...ctx, db: tx }, 'update', 'User', { id, districtId: before.districtId });
     checkUserAttributes(ctx, before, Object.keys(input).filter((k) => input[k as keyof UpdateUserInput] !== undefined));
     const role = input.role ?? before.role;
     if (id === ctx.actor.id && (input.active === false || role !== before.role)) {
-      throw new AppError('invalid', 'user/self_lockout', 'You cannot deactivate yourself or change your own role');
+      throw appError('user/self_lockout', 'You cannot deactivate yourself or change your own role');
     }
     // With a role the scope is the one sent; without, what is not sent stays as it is.
     const wanted =
@@ -291,7 +290,7 @@ export async function updateUser(ctx: Ctx, id: number, input: UpdateUserInput): 
           };
     const missing = scopeIssues(wanted);
     if (missing.length) {
-      throw new AppError('invalid', 'request/invalid', missing[0]!.message, { issues: missing.map((i) => ({ path: `body.${i.path}`, message: i.message })) });
+      throw errors.invalid(missing[0]!.message, missing.map((i) => ({ path: `body.${i.path}`, message: i.message })));
     }
     const scope = await resolveScope(tx, wanted);
     const [updated] = await tx
@@ -308,7 +307,7 @@ export async function updateUser(ctx: Ctx, id: number, input: UpdateUserInput): 
       })
       .where(and(eq(users.id, id), eq(users.version, input.version)))
       .returning({ id: users.id });
-    if (!updated) throw versionConflict('user');
+    if (!updated) throw errors.versionConflict('user');
     await replaceSites(tx, id, scope.siteIds);
     if (input.active === false || role !== before.role) {
       // A deactivated or re-scoped user signs in again.
@@ -325,13 +324,13 @@ export async function updateProfile(ctx: Ctx, input: { version: number; name?: s
   const id = ctx.actor.id;
   authorize(ctx, 'update', 'User', { id });
   const before = await findUser(ctx.db, id);
-  if (!before) throw notFound('user', id);
+  if (!before) throw errors.notFound('user', id);
   const [updated] = await ctx.db
     .update(users)
     .set({ name: input.name ?? before.name, units: input.units ?? before.units, version: sql`${users.version} + 1`, updatedAt: new Date() })
     .where(and(eq(users.id, id), eq(users.version, input.version)))
     .returning({ id: users.id });
-  if (!updated) throw versionConflict('user');
+  if (!updated) throw errors.versionConflict('user');
   const after = (await findUser(ctx.db, id))!;
   await writeAudit(ctx.db, { actorId: id, action: 'update', entity: 'user', entityId: id, districtId: after.districtId, before, after });
   return toSessionUser(after);

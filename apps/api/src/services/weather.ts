@@ -2,7 +2,8 @@
 import Papa from 'papaparse';
 import { and, asc, eq, gte, lte, sql } from 'drizzle-orm';
 import {
-  AppError,
+  appError,
+  errors,
   addDaysIso,
   weatherDaySchema,
   type DailyWeather,
@@ -17,7 +18,7 @@ import type { Db } from '../db/client.ts';
 import { weatherDays, weatherStations } from '../db/schema/index.ts';
 import { fetchWeather, type WeatherClientSettings } from '../weather/client.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, notFound, type Ctx } from './context.ts';
+import { authorize, type Ctx } from './context.ts';
 
 /** A stored day as the turf engine takes it: missing humidity, wind and sunshine stay absent. */
 export function dailyWeatherOf(r: typeof weatherDays.$inferSelect): DailyWeather {
@@ -63,7 +64,7 @@ export async function listStations(ctx: Ctx): Promise<WeatherStationRow[]> {
 
 async function station(ctx: Ctx, id: number) {
   const [row] = await ctx.db.select().from(weatherStations).where(eq(weatherStations.id, id));
-  if (!row) throw notFound('weather station', id);
+  if (!row) throw errors.notFound('weather_station', id);
   return row;
 }
 
@@ -107,7 +108,7 @@ export function parseStationCsv(text: string): { rows: CsvRow[]; summary: { rows
   const headers = parsed.meta.fields ?? [];
   const missing = ['date', 'tmax_c', 'tmin_c'].filter((c) => !headers.includes(c));
   if (missing.length) {
-    throw new AppError('invalid', 'weather/csv_columns', `The file needs the columns ${missing.join(', ')} (expected: ${STATION_CSV_COLUMNS.join(', ')})`);
+    throw appError('weather/csv_columns', `The file needs the columns ${missing.join(', ')} (expected: ${STATION_CSV_COLUMNS.join(', ')})`);
   }
   const seen = new Set<string>();
   const rows: CsvRow[] = parsed.data.map((raw, i) => {
@@ -183,7 +184,7 @@ export async function uploadStationCsv(ctx: Ctx, stationId: number, text: string
   const preview = parseStationCsv(text);
   if (!commit) return { committed: false, ...preview };
   if (preview.summary.invalid > 0) {
-    throw new AppError('invalid', 'weather/csv_has_errors', `${preview.summary.invalid} row(s) have errors; fix them and upload again — nothing was saved`, {
+    throw appError('weather/csv_has_errors', `${preview.summary.invalid} row(s) have errors; fix them and upload again — nothing was saved`, {
       rows: preview.rows.filter((r) => r.errors.length),
     });
   }
@@ -202,7 +203,7 @@ export async function pullFromService(ctx: Ctx, stationId: number, from: string,
   const st = await station(ctx, stationId);
   const fetched = await fetchWeather(settings, { lat: st.lat, lng: st.lng }, from, to);
   if (fetched.rejected.length) {
-    throw new AppError('unavailable', 'weather/malformed_rows', `The weather service sent ${fetched.rejected.length} unusable day(s); nothing was saved`, {
+    throw appError('weather/malformed_rows', `The weather service sent ${fetched.rejected.length} unusable day(s); nothing was saved`, {
       rejected: fetched.rejected,
     });
   }

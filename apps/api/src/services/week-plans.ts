@@ -4,7 +4,8 @@
  */
 import { and, asc, desc, eq, gte, inArray, lte, max, ne, sql } from 'drizzle-orm';
 import {
-  AppError,
+  appError,
+  errors,
   addDaysIso,
   assignWeek,
   crewDayLoads,
@@ -34,6 +35,7 @@ import {
 } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, weatherDays, weatherStations, workOrders } from '../db/schema/index.ts';
+import { writeAudit, type AuditInput } from './audit.ts';
 import { authorize, type Ctx } from './context.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 import { dailyWeatherOf } from './weather.ts';
@@ -41,7 +43,7 @@ import { notifyCrews, readScope, workOrderRows, type WorkMoveNotice, type WorkOr
 
 async function districtRow(db: Queryable, id: number) {
   const [d] = await db.select({ id: districts.id, name: districts.name, yardName: districts.yardName, yardLat: districts.yardLat, yardLng: districts.yardLng }).from(districts).where(eq(districts.id, id));
-  if (!d) throw new AppError('not_found', 'district/not_found', `No district with id ${id}`);
+  if (!d) throw errors.notFound('district', id);
   return d;
 }
 
@@ -265,7 +267,7 @@ async function weekRows(db: Queryable, districtId: number, weekStart: string) {
 /** The board of a district's week: orders, crews, each crew-day's load and route. */
 export async function getWeekBoard(ctx: Ctx, q: WeekQuery): Promise<WeekBoard<Date>> {
   authorize(ctx, 'read', 'WorkOrder', { districtId: q.districtId });
-  if (ctx.actor.role === 'crew' || ctx.actor.role === 'partner') throw new AppError('forbidden', 'auth/forbidden', 'The week plan board is for foremen and the department');
+  if (ctx.actor.role === 'crew' || ctx.actor.role === 'partner') throw errors.forbidden('The week plan board is for foremen and the department');
   const dates = weekDates(q.weekStart);
   const district = await districtRow(ctx.db, q.districtId);
   const params = await loadParameters(ctx.db);
@@ -363,7 +365,7 @@ export async function generateWeek(ctx: Ctx, input: GenerateWeekInput): Promise<
 
   if (!input.dryRun) {
     await (ctx.db as Db).transaction(async (tx) => {
-      const audits: (typeof auditLog.$inferInsert)[] = [];
+      const audits: AuditInput[] = [];
       if (rec.remove.length) {
         const gone = await tx
           .delete(workOrders)
@@ -399,7 +401,7 @@ export async function generateWeek(ctx: Ctx, input: GenerateWeekInput): Promise<
         });
       }
       audits.push({ actorId: ctx.actor.id, action: 'create', entity: 'week_plan', entityId: null, districtId: q.districtId, before: null, after: { weekStart: q.weekStart, ...diff.summary, warnings: plan.warnings } });
-      await bulkInsertAudit(tx, audits);
+      await writeAudit(tx, audits);
     });
   }
   const board = await getWeekBoard(ctx, q);
@@ -419,7 +421,7 @@ function canonical(v: unknown): string {
   return JSON.stringify(v);
 }
 
-const stale = () => new AppError('conflict', 'week_plan/changed', 'The week changed while it was being generated (someone assigned or moved work); generate again to see the current plan');
+const stale = () => appError('week_plan/changed', 'The week changed while it was being generated (someone assigned or moved work); generate again to see the current plan');
 
 /**
  * Many orders in one statement: the rows travel as one JSON parameter (json_to_recordset),
@@ -444,15 +446,6 @@ async function bulkInsertOrders(tx: Queryable, rows: (typeof workOrders.$inferIn
   const out = new Array<number>(rows.length);
   for (const r of res.rows) out[r.n] = r.id;
   return out;
-}
-
-async function bulkInsertAudit(tx: Queryable, rows: (typeof auditLog.$inferInsert)[]): Promise<void> {
-  if (!rows.length) return;
-  const json = JSON.stringify(rows);
-  await tx.execute(sql`
-    insert into ${auditLog} (actor_id, action, entity, entity_id, district_id, before, after)
-    select "actorId", action, entity, "entityId", "districtId", before, after
-    from json_to_recordset(${json}::json) as x("actorId" int, action text, entity text, "entityId" int, "districtId" int, before jsonb, after jsonb)`);
 }
 
 function toInsert(p: ScheduledOrder, q: GenerationInput, actorId: number): typeof workOrders.$inferInsert {
@@ -493,9 +486,7 @@ export async function confirmWeek(ctx: Ctx, q: WeekQuery & { crewId?: number | u
       .where(inArray(workOrders.id, before.map((b) => b.id)))
       .returning();
     const byId = new Map(before.map((b) => [b.id, b]));
-    for (let i = 0; i < after.length; i += 500) {
-      await tx.insert(auditLog).values(after.slice(i, i + 500).map((a) => ({ actorId: ctx.actor.id, action: 'update' as const, entity: 'work_order', entityId: a.id, districtId: a.districtId, before: byId.get(a.id) ?? null, after: a })));
-    }
+    await writeAudit(tx, after.map((a) => ({ actorId: ctx.actor.id, action: 'update' as const, entity: 'work_order', entityId: a.id, districtId: a.districtId, before: byId.get(a.id) ?? null, after: a })));
     return after;
   });
   const byCrew = new Map<number, WorkMoveNotice>();
@@ -505,6 +496,6 @@ export async function confirmWeek(ctx: Ctx, q: WeekQuery & { crewId?: number | u
     n.orders.push(row);
     byCrew.set(row.crewId, n);
   }
-  const emailed = await notifyCrews(ctx.db, deps.mailer, [...byCrew.values()], deps.actorName, deps.publicUrl);
+  const emailed = await notifyCrews(ctx.db, deps.mailer, [...byCrew.values()], ctx.actorName, deps.publicUrl);
   return { assigned: changed.length, emailed, board: await getWeekBoard(ctx, q) };
 }

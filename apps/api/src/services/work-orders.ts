@@ -5,7 +5,8 @@
  */
 import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import {
-  AppError,
+  appError,
+  errors,
   WORK_TASK_LABELS,
   mondayOf,
   type CreateWorkOrderInput,
@@ -18,7 +19,7 @@ import { crews, equipment, fields, sites, users, workOrders, workPhotos } from '
 import type { Mailer } from '../mail/mailer.ts';
 import { workMovedMail } from '../mail/messages.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, can, notFound, versionConflict, type Ctx } from './context.ts';
+import { authorize, can, type Ctx } from './context.ts';
 
 export interface WorkOrderFilter {
   from: string;
@@ -142,19 +143,19 @@ async function checkCrewAndEquipment(db: Queryable, districtId: number, crewId: 
     else if (e.districtId !== districtId) issues.push({ path: 'body.equipmentId', message: 'this unit belongs to another district' });
     else if (!e.active) issues.push({ path: 'body.equipmentId', message: 'this unit is out of service' });
   }
-  if (issues.length) throw new AppError('invalid', 'request/invalid', issues.map((i) => i.message).join('; '), { issues });
+  if (issues.length) throw errors.invalid(issues.map((i) => i.message).join('; '), issues);
 }
 
+/** Where the crew lead's e-mail goes out and where the portal lives (the writer's name is `ctx.actorName`). */
 export interface WriteDeps {
   mailer: Mailer;
   publicUrl: string;
-  actorName: string;
 }
 
 /** A foreman adds work by hand (aeration, topdressing, an extra mowing). Kept by every re-generation. */
 export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, deps: WriteDeps): Promise<WorkOrderWriteAnswer<Date>> {
   const f = await fieldScopeRow(ctx.db, input.fieldId);
-  if (!f) throw new AppError('invalid', 'request/invalid', 'No such field', { issues: [{ path: 'body.fieldId', message: 'no such field' }] });
+  if (!f) throw errors.noSuch('field', 'body.fieldId');
   authorize(ctx, 'create', 'WorkOrder', { districtId: f.districtId, siteId: f.siteId });
   const id = await (ctx.db as Db).transaction(async (tx) => {
     await checkCrewAndEquipment(tx, f.districtId, input.crewId, input.equipmentId);
@@ -182,7 +183,7 @@ export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, dep
     return row!.id;
   });
   const row = (await workOrderRow(ctx.db, id))!;
-  const emailed = row.crewId ? await notifyCrews(ctx.db, deps.mailer, [{ crewId: row.crewId, kind: 'assigned', orders: [row] }], deps.actorName, deps.publicUrl) : 0;
+  const emailed = row.crewId ? await notifyCrews(ctx.db, deps.mailer, [{ crewId: row.crewId, kind: 'assigned', orders: [row] }], ctx.actorName, deps.publicUrl) : 0;
   return { ...row, emailed };
 }
 
@@ -194,12 +195,12 @@ export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, dep
 export async function updateWorkOrder(ctx: Ctx, id: number, input: UpdateWorkOrderInput, deps: WriteDeps): Promise<WorkOrderWriteAnswer<Date>> {
   const result = await (ctx.db as Db).transaction(async (tx) => {
     const [before] = await tx.select().from(workOrders).where(eq(workOrders.id, id));
-    if (!before) throw notFound('work_order', id);
+    if (!before) throw errors.notFound('work_order', id);
     authorize(ctx, 'update', 'WorkOrder', before);
     const { version, ...changes } = input;
-    if (before.version !== version) throw versionConflict('work_order');
+    if (before.version !== version) throw errors.versionConflict('work_order');
     if ((before.status === 'done' || before.status === 'skipped') && (changes.plannedDate !== undefined || changes.crewId !== undefined)) {
-      throw new AppError('conflict', 'work_order/logged', `This work order is already ${before.status}; it can no longer be moved or reassigned`);
+      throw appError('work_order/logged', `This work order is already ${before.status}; it can no longer be moved or reassigned`);
     }
     await checkCrewAndEquipment(tx, before.districtId, changes.crewId, changes.equipmentId);
     const crewId = changes.crewId === undefined ? before.crewId : changes.crewId;
@@ -219,7 +220,7 @@ export async function updateWorkOrder(ctx: Ctx, id: number, input: UpdateWorkOrd
       })
       .where(and(eq(workOrders.id, id), eq(workOrders.version, version)))
       .returning();
-    if (!after) throw versionConflict('work_order');
+    if (!after) throw errors.versionConflict('work_order');
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'work_order', entityId: id, districtId: after.districtId, before, after });
     return { before, after };
   });
@@ -232,24 +233,24 @@ export async function updateWorkOrder(ctx: Ctx, id: number, input: UpdateWorkOrd
   } else if (after.crewId && after.plannedDate !== before.plannedDate) {
     notices.push({ crewId: after.crewId, kind: 'moved', orders: [{ ...row, fromDate: before.plannedDate }] });
   }
-  const emailed = await notifyCrews(ctx.db, deps.mailer, notices, deps.actorName, deps.publicUrl);
+  const emailed = await notifyCrews(ctx.db, deps.mailer, notices, ctx.actorName, deps.publicUrl);
   return { ...row, emailed };
 }
 
 export async function deleteWorkOrder(ctx: Ctx, id: number, version: number, deps: WriteDeps): Promise<void> {
   const before = await (ctx.db as Db).transaction(async (tx) => {
     const [row] = await tx.select().from(workOrders).where(eq(workOrders.id, id));
-    if (!row) throw notFound('work_order', id);
+    if (!row) throw errors.notFound('work_order', id);
     authorize(ctx, 'delete', 'WorkOrder', row);
-    if (row.status === 'done' || row.status === 'started') throw new AppError('conflict', 'work_order/logged', `This work order is ${row.status}: it is part of the records and cannot be deleted`);
+    if (row.status === 'done' || row.status === 'started') throw appError('work_order/logged', `This work order is ${row.status}: it is part of the records and cannot be deleted`);
     const [deleted] = await tx.delete(workOrders).where(and(eq(workOrders.id, id), eq(workOrders.version, version))).returning({ id: workOrders.id });
-    if (!deleted) throw versionConflict('work_order');
+    if (!deleted) throw errors.versionConflict('work_order');
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'work_order', entityId: id, districtId: row.districtId, before: row, after: null });
     return row;
   });
   if (before.crewId && before.status === 'assigned') {
     const [f] = await ctx.db.select({ fieldName: fields.name, siteName: sites.name }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(fields.id, before.fieldId));
-    await notifyCrews(ctx.db, deps.mailer, [{ crewId: before.crewId, kind: 'removed', orders: [{ task: before.task, fieldName: f?.fieldName ?? '', siteName: f?.siteName ?? '', plannedDate: before.plannedDate, plannedHours: before.plannedHours }] }], deps.actorName, deps.publicUrl);
+    await notifyCrews(ctx.db, deps.mailer, [{ crewId: before.crewId, kind: 'removed', orders: [{ task: before.task, fieldName: f?.fieldName ?? '', siteName: f?.siteName ?? '', plannedDate: before.plannedDate, plannedHours: before.plannedHours }] }], ctx.actorName, deps.publicUrl);
   }
 }
 

@@ -9,11 +9,11 @@ import fs from 'node:fs/promises';
 import path from 'node:path';
 import sharp from 'sharp';
 import { and, count, eq } from 'drizzle-orm';
-import { AppError, type PhotoAnswer } from '@swardwise/domain';
+import { appError, errors, type PhotoAnswer } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { workPhotos } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
-import { notFound, type Ctx } from './context.ts';
+import type { Ctx } from './context.ts';
 import { orderFor } from './work-reports.ts';
 
 export const PHOTO_MAX_BYTES = 12 * 1024 * 1024;
@@ -42,13 +42,13 @@ async function readImage(buffer: Buffer) {
   try {
     meta = await sharp(buffer, { limitInputPixels: false }).metadata();
   } catch {
-    throw new AppError('unsupported', 'work_photo/not_an_image', 'This file is not a photo; send a JPEG, PNG or WebP image');
+    throw appError('work_photo/not_an_image', 'This file is not a photo; send a JPEG, PNG or WebP image');
   }
   if (!meta.format || !ACCEPTED_FORMATS.has(meta.format)) {
-    throw new AppError('unsupported', 'work_photo/unsupported_format', `A ${String(meta.format ?? 'file of this kind').toUpperCase()} image cannot be used; send a JPEG, PNG or WebP photo`);
+    throw appError('work_photo/unsupported_format', `A ${String(meta.format ?? 'file of this kind').toUpperCase()} image cannot be used; send a JPEG, PNG or WebP photo`);
   }
   if ((meta.width ?? 0) * (meta.height ?? 0) > MAX_INPUT_PIXELS) {
-    throw new AppError('too_large', 'work_photo/too_many_pixels', 'The image is larger than 50 megapixels; send a smaller photo');
+    throw appError('work_photo/too_many_pixels', 'The image is larger than 50 megapixels; send a smaller photo');
   }
   try {
     return await sharp(buffer, { limitInputPixels: MAX_INPUT_PIXELS })
@@ -57,7 +57,7 @@ async function readImage(buffer: Buffer) {
       .jpeg({ quality: PHOTO_QUALITY, mozjpeg: true })
       .toBuffer({ resolveWithObject: true });
   } catch {
-    throw new AppError('unsupported', 'work_photo/unreadable', 'The photo could not be read (the file may be damaged); take it again or choose another');
+    throw appError('work_photo/unreadable', 'The photo could not be read (the file may be damaged); take it again or choose another');
   }
 }
 
@@ -71,7 +71,7 @@ export async function addWorkPhoto(ctx: Ctx, orderId: number, upload: PhotoUploa
   if (earlier) return answer(orderId, earlier, true);
   const [{ n } = { n: 0 }] = await ctx.db.select({ n: count() }).from(workPhotos).where(eq(workPhotos.workOrderId, orderId));
   if (n >= PHOTOS_PER_ORDER) {
-    throw new AppError('conflict', 'work_photo/too_many', `A work order keeps at most ${PHOTOS_PER_ORDER} photos; this one has ${n}`);
+    throw appError('work_photo/too_many', `A work order keeps at most ${PHOTOS_PER_ORDER} photos; this one has ${n}`);
   }
 
   const image = await readImage(upload.buffer);
@@ -108,12 +108,12 @@ export async function photoFile(ctx: Ctx, orderId: number, photoId: number, uplo
     .select({ fileName: workPhotos.fileName, mime: workPhotos.mime })
     .from(workPhotos)
     .where(and(eq(workPhotos.id, photoId), eq(workPhotos.workOrderId, orderId)));
-  if (!photo) throw notFound('work_photo', photoId);
+  if (!photo) throw errors.notFound('work_photo', photoId);
   const file = path.join(uploadsDir, path.basename(photo.fileName));
   try {
     await fs.access(file);
   } catch {
-    throw new AppError('not_found', 'work_photo/file_missing', 'The photo’s file is missing from the server’s uploads folder');
+    throw appError('work_photo/file_missing', 'The photo’s file is missing from the server’s uploads folder');
   }
   return { file, mime: photo.mime };
 }

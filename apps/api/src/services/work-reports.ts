@@ -5,11 +5,11 @@
  * forward and adds the hours to the mower's hour meter.
  */
 import { and, asc, eq, sql } from 'drizzle-orm';
-import { AppError, type ReportAnswer as ReportAnswerOf, type WorkOrderAnswer, type WorkReportInput } from '@swardwise/domain';
+import { appError, errors, type ReportAnswer as ReportAnswerOf, type WorkOrderAnswer, type WorkReportInput } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { crews, equipment, fields, sites, workOrders, workPhotos, workUpdates } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, notFound, versionConflict, type Ctx } from './context.ts';
+import { authorize, type Ctx } from './context.ts';
 
 /** A report may carry the phone's clock a little ahead of the server's; more is a wrong clock. */
 const CLOCK_SKEW_MS = 15 * 60_000;
@@ -62,7 +62,7 @@ export type OrderRow = NonNullable<Awaited<ReturnType<typeof orderRow>>>;
 /** The order, if the caller may do `action` on it (404 when there is none, 403 when not his). */
 export async function orderFor(ctx: Ctx, id: number, action: 'read' | 'log', db: Queryable = ctx.db): Promise<OrderRow> {
   const row = await orderRow(db, id);
-  if (!row) throw notFound('work_order', id);
+  if (!row) throw errors.notFound('work_order', id);
   authorize(ctx, action, 'WorkOrder', row);
   return row;
 }
@@ -102,7 +102,7 @@ async function earlierAnswer(ctx: Ctx, orderId: number, clientRef: string): Prom
     .where(eq(workUpdates.clientRef, clientRef));
   if (!update) return null;
   if (update.workOrderId !== orderId) {
-    throw new AppError('conflict', 'work_report/client_ref_taken', 'This report reference was already used for another work order; send the report again as a new one');
+    throw appError('work_report/client_ref_taken', 'This report reference was already used for another work order; send the report again as a new one');
   }
   const { workOrderId: _orderId, ...rest } = update;
   void _orderId;
@@ -118,7 +118,7 @@ function checkTransition(current: OrderRow['status'], next: WorkReportInput['sta
       : next === 'started'
         ? 'This work order is already done; it cannot be started again'
         : 'This work order is already done; it cannot be skipped now';
-  throw new AppError('conflict', 'work_report/already_done', message, { status: current });
+  throw appError('work_report/already_done', message, { status: current });
 }
 
 function isUniqueViolation(err: unknown): boolean {
@@ -137,9 +137,7 @@ export async function reportWork(ctx: Ctx, id: number, input: WorkReportInput): 
   }
   const reportedAt = input.reportedAt ? new Date(input.reportedAt) : ctx.clock.now();
   if (reportedAt.getTime() > ctx.clock.now().getTime() + CLOCK_SKEW_MS) {
-    throw new AppError('invalid', 'request/invalid', 'The report is dated in the future; check the phone’s clock', {
-      issues: [{ path: 'body.reportedAt', message: 'the time is in the future' }],
-    });
+    throw errors.invalid('The report is dated in the future; check the phone’s clock', [{ path: 'body.reportedAt', message: 'the time is in the future' }]);
   }
   // The department's calendar day of the moment reported, whatever the phone's offset.
   const reportedOn = ctx.clock.dateOf(reportedAt);
@@ -147,7 +145,7 @@ export async function reportWork(ctx: Ctx, id: number, input: WorkReportInput): 
   try {
     return await (ctx.db as Db).transaction(async (tx) => {
       const before = await orderFor(ctx, id, 'log', tx);
-      if (input.version !== undefined && input.version !== before.version) throw versionConflict('work_order');
+      if (input.version !== undefined && input.version !== before.version) throw errors.versionConflict('work_order');
       checkTransition(before.status, input.status);
 
       const [update] = await tx
@@ -171,7 +169,7 @@ export async function reportWork(ctx: Ctx, id: number, input: WorkReportInput): 
         .set({ ...changes, version: sql`${workOrders.version} + 1` })
         .where(and(eq(workOrders.id, id), eq(workOrders.version, before.version)))
         .returning({ id: workOrders.id });
-      if (!bumped) throw versionConflict('work_order');
+      if (!bumped) throw errors.versionConflict('work_order');
       const after = (await orderRow(tx, id))!;
       const district = after.districtId;
       await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'work_update', entityId: update!.id, districtId: district, before: null, after: { workOrderId: id, ...update!, clientRef: input.clientRef ?? null } });

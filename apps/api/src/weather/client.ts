@@ -3,7 +3,7 @@
  * timeout, and turns every failure into a clear message. It validates each day and lists
  * the days the answer left out; it writes nothing itself.
  */
-import { AppError, addDaysIso, weatherDaySchema, type WeatherDayInput } from '@swardwise/domain';
+import { addDaysIso, errors, weatherDaySchema, type WeatherDayInput } from '@swardwise/domain';
 import { providerDaySchema, providerResponseSchema } from './provider.ts';
 
 export interface WeatherClientSettings {
@@ -20,12 +20,8 @@ export interface FetchedWeather {
   rejected: { date: string | null; message: string }[];
 }
 
-function unavailable(code: string, message: string): AppError {
-  return new AppError('unavailable', `weather/${code}`, message);
-}
-
 export async function fetchWeather(settings: WeatherClientSettings | null, at: { lat: number; lng: number }, from: string, to: string): Promise<FetchedWeather> {
-  if (!settings) throw unavailable('not_configured', 'No weather service is configured (WEATHER_API_URL); upload a station file instead');
+  if (!settings) throw errors.weatherService('not_configured', 'No weather service is configured (WEATHER_API_URL); upload a station file instead');
   const url = new URL('/v1/daily', settings.baseUrl);
   url.search = new URLSearchParams({ lat: String(at.lat), lng: String(at.lng), from, to }).toString();
   let res: Response;
@@ -33,20 +29,20 @@ export async function fetchWeather(settings: WeatherClientSettings | null, at: {
     res = await fetch(url, { headers: { 'x-api-key': settings.apiKey, accept: 'application/json' }, signal: AbortSignal.timeout(settings.timeoutMs) });
   } catch (err) {
     if ((err as Error).name === 'TimeoutError' || (err as Error).name === 'AbortError') {
-      throw unavailable('timeout', `The weather service did not answer within ${Math.round(settings.timeoutMs / 1000)} s; nothing was saved, try again later`);
+      throw errors.weatherService('timeout', `The weather service did not answer within ${Math.round(settings.timeoutMs / 1000)} s; nothing was saved, try again later`);
     }
-    throw unavailable('unreachable', 'The weather service cannot be reached; nothing was saved, try again later');
+    throw errors.weatherService('unreachable', 'The weather service cannot be reached; nothing was saved, try again later');
   }
-  if (res.status === 401 || res.status === 403) throw unavailable('rejected_key', 'The weather service refused the API key (WEATHER_API_KEY); nothing was saved');
-  if (!res.ok) throw unavailable('upstream_error', `The weather service answered with an error (${res.status}); nothing was saved, try again later`);
+  if (res.status === 401 || res.status === 403) throw errors.weatherService('rejected_key', 'The weather service refused the API key (WEATHER_API_KEY); nothing was saved');
+  if (!res.ok) throw errors.weatherService('upstream_error', `The weather service answered with an error (${res.status}); nothing was saved, try again later`);
   let body: unknown;
   try {
     body = await res.json();
   } catch {
-    throw unavailable('malformed', 'The weather service sent something that is not weather data; nothing was saved');
+    throw errors.weatherService('malformed', 'The weather service sent something that is not weather data; nothing was saved');
   }
   const parsed = providerResponseSchema.safeParse(body);
-  if (!parsed.success) throw unavailable('malformed', 'The weather service sent an answer in an unexpected shape; nothing was saved');
+  if (!parsed.success) throw errors.weatherService('malformed', 'The weather service sent an answer in an unexpected shape; nothing was saved');
 
   const days: WeatherDayInput[] = [];
   const rejected: FetchedWeather['rejected'] = [];

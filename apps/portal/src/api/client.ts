@@ -1,5 +1,11 @@
 import type { ErrorBody, FieldIssue } from '@swardwise/domain';
 
+/**
+ * Codes the portal gives a failure itself: no answer at all, or an answer without the API's
+ * error shape (`http/<status>`, e.g. a proxy refusing a large body).
+ */
+export type ClientErrorCode = 'network/unreachable' | `http/${number}`;
+
 /** An error answer of the API (or a network failure, code `network/unreachable`). */
 export class ApiError extends Error {
   readonly status: number;

@@ -1,6 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { ApiError } from './client.ts';
-import { errorMessage, isConflict, messageFor } from './messages.ts';
+import { isApiErrorCode } from '@swardwise/domain';
+import { MESSAGES, errorMessage, hasCode, isConflict, messageFor } from './messages.ts';
 
 describe('messages', () => {
   test('should word every version conflict the same way, naming the resource of its code', () => {
@@ -18,5 +19,17 @@ describe('messages', () => {
     expect(errorMessage(new ApiError(413, 'http/413', 'The server answered 413.'))).toBe('The file is too large to upload.');
     expect(errorMessage(new ApiError(409, 'crew/has_lead', 'Move the crew lead first'))).toBe('Move the crew lead first');
     expect(errorMessage(new Error('boom'))).toBe('boom');
+  });
+
+  test('should key its messages by codes the API answers with, or by the portal’s own', () => {
+    const keys = Object.keys(MESSAGES);
+    expect(keys.length).toBeGreaterThan(10);
+    for (const code of keys) expect(isApiErrorCode(code) || /^(http\/\d{3}|network\/unreachable)$/.test(code), code).toBe(true);
+  });
+
+  test('should tell an answer of one code from others', () => {
+    expect(hasCode(new ApiError(409, 'field/has_work_history', 'retire it'), 'field/has_work_history')).toBe(true);
+    expect(hasCode(new ApiError(409, 'field/version_conflict', 'stale'), 'field/has_work_history')).toBe(false);
+    expect(hasCode(new Error('field/has_work_history'), 'field/has_work_history')).toBe(false);
   });
 });

@@ -1,7 +1,8 @@
-import { ApiError } from './client.ts';
+import type { ApiErrorCode, VersionedResource } from '@swardwise/domain';
+import { ApiError, type ClientErrorCode } from './client.ts';
 
 /** What a resource is called in a message, by the namespace of its error codes (`field_event/…`). */
-const NOUNS: Record<string, string> = {
+const NOUNS: Partial<Record<VersionedResource, string>> = {
   user: 'user',
   site: 'site',
   field: 'field',
@@ -15,8 +16,15 @@ const NOUNS: Record<string, string> = {
 /** Someone saved the row after this person read it (the API's `<resource>/version_conflict`, 409). */
 const conflict = (noun: string) => `Someone else changed this ${noun} since you opened it; reload to see their change, then make yours again.`;
 
-/** What the portal tells people for the error codes it expects; any other code shows the server's message. */
-const MESSAGES: Record<string, string> = {
+const CONFLICTS = Object.fromEntries(Object.entries(NOUNS).map(([resource, noun]) => [`${resource}/version_conflict`, conflict(noun)])) as Partial<
+  Record<`${VersionedResource}/version_conflict`, string>
+>;
+
+/**
+ * What the portal tells people for the error codes it expects; any other code shows the server's
+ * message. Keyed by the API's own codes (a code it does not send does not compile).
+ */
+export const MESSAGES: Partial<Record<ApiErrorCode | ClientErrorCode, string>> = {
   'auth/invalid_credentials': 'The e-mail or password is not right. Check both and try again.',
   'auth/rate_limited': 'Too many sign-in attempts. Wait a few minutes before trying again.',
   'auth/unauthenticated': 'Your session has ended. Sign in again.',
@@ -24,15 +32,23 @@ const MESSAGES: Record<string, string> = {
   'auth/invalid_token': 'This invitation link is not valid any more. Ask your administrator for a new one.',
   'auth/deactivated': 'This account has been deactivated. Ask your administrator if you need access again.',
   'http/413': 'The file is too large to upload.',
-  ...Object.fromEntries(Object.entries(NOUNS).map(([resource, noun]) => [`${resource}/version_conflict`, conflict(noun)])),
+  ...CONFLICTS,
 };
+
+const known = (code: string) => MESSAGES[code as ApiErrorCode | ClientErrorCode];
 
 /** The message of an error code, or undefined when the portal has none of its own for it. */
 export function messageFor(code: string): string | undefined {
-  if (MESSAGES[code]) return MESSAGES[code];
+  const own = known(code);
+  if (own) return own;
   if (code.endsWith('/version_conflict')) return conflict('item');
   if (code.endsWith('/not_found')) return 'This item does not exist, or it is outside what your role may see.';
   return undefined;
+}
+
+/** An error answer of the API with this code. */
+export function hasCode(error: unknown, code: ApiErrorCode): error is ApiError {
+  return error instanceof ApiError && error.code === code;
 }
 
 /** A stale write: the row changed since it was read (reload, then make the change again). */
@@ -42,7 +58,7 @@ export function isConflict(error: unknown): error is ApiError {
 
 export function errorMessage(error: unknown): string {
   if (error instanceof ApiError) {
-    if (error.status === 429 && !MESSAGES[error.code]) return MESSAGES['auth/rate_limited']!;
+    if (error.status === 429 && !known(error.code)) return MESSAGES['auth/rate_limited']!;
     return messageFor(error.code) ?? error.message;
   }
   return error instanceof Error ? error.message : 'Something went wrong.';
