@@ -4,7 +4,7 @@
  * the daily weather of the nearest station. Each block carries the inputs it used, a short
  * note on how it is worked out, and the cautions that apply.
  */
-import { asc, desc, eq, sql } from 'drizzle-orm';
+import { asc, desc, eq } from 'drizzle-orm';
 import {
   AppError,
   CAUTIONS,
@@ -14,12 +14,10 @@ import {
   defaultTemplateFor,
   fieldDailySeries,
   grassSeason,
-  greatCircleKm,
   grossIrrigationMm,
   hocFor,
   hoursPerMowingPolygon,
   irrigationVolumeLitres,
-  isoToDayNumber,
   linePlan,
   longAxis,
   mondayOf,
@@ -31,7 +29,6 @@ import {
   netIrrigationMm,
   overdueDate,
   planNApplications,
-  prepareWeather,
   productForArea,
   recommendLevel,
   runTimeMinutes,
@@ -48,17 +45,15 @@ import {
   type Visibility,
   type WaterNeed,
 } from '@swardwise/domain';
-import { fieldChecks, sites, weatherDays, weatherStations } from '../db/schema/index.ts';
+import { fieldChecks, sites, weatherDays } from '../db/schema/index.ts';
 import type { Ctx } from './context.ts';
 import { getField } from './fields.ts';
 import { loadParameters, loadStandards } from './standards.ts';
-import { dailyWeatherOf } from './weather.ts';
+import { nearestStation, prepareStationWeather, stationsWithWeather, unbrokenRunAround, type WeatherRow } from './stations.ts';
 
 export type { FieldNeeds, NeedInput };
 
 const input = (key: string, label: string, value: NeedInput['value'], unit: string | null = null): NeedInput => ({ key, label, value, unit });
-
-type WeatherRow = typeof weatherDays.$inferSelect;
 
 /** Penman–Monteith needs more than temperatures; the engine takes Hargreaves otherwise. */
 const hasMoreThanTemperatures = (r: WeatherRow) => r.rhMaxPct !== null || r.windMs !== null || r.sunshineH !== null || r.solarMJ !== null;
@@ -90,14 +85,8 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
   const params = await loadParameters(ctx.db);
   const std = standards[level];
 
-  // The nearest station that has any daily weather.
-  const stations = await ctx.db
-    .select({ id: weatherStations.id, code: weatherStations.code, name: weatherStations.name, lat: weatherStations.lat, lng: weatherStations.lng, elevationM: weatherStations.elevationM, coastal: weatherStations.coastal })
-    .from(weatherStations)
-    .where(sql`exists (select 1 from ${weatherDays} where ${weatherDays.stationId} = ${weatherStations.id})`);
   const here = { lat: site!.lat, lng: site!.lng };
-  const ranked = stations.map((s) => ({ ...s, distanceKm: greatCircleKm(here, { lat: s.lat, lng: s.lng }) })).sort((a, b) => a.distanceKm - b.distanceKm);
-  const station = ranked[0];
+  const station = nearestStation(await stationsWithWeather(ctx.db), here);
   if (!station) throw new AppError('not_found', 'weather/none', 'No weather station has daily weather on file, so the needs of this field cannot be worked out yet. Add weather first.');
   const allDays = await ctx.db.select().from(weatherDays).where(eq(weatherDays.stationId, station.id)).orderBy(asc(weatherDays.date));
 
@@ -119,17 +108,12 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
   }
 
   // The unbroken run of days around the week: the season the chart and the mowing simulation use.
-  const endIdx = allDays.findIndex((d) => d.date === weekEnd);
-  let runStart = endIdx;
-  while (runStart > 0 && isoToDayNumber(allDays[runStart - 1]!.date) === isoToDayNumber(allDays[runStart]!.date) - 1) runStart--;
-  let runEnd = endIdx;
-  while (runEnd < allDays.length - 1 && isoToDayNumber(allDays[runEnd + 1]!.date) === isoToDayNumber(allDays[runEnd]!.date) + 1) runEnd++;
-  const run = allDays.slice(runStart, runEnd + 1);
+  const run = unbrokenRunAround(allDays, allDays.findIndex((d) => d.date === weekEnd));
   if (run[0]!.date > weekStart) {
     weekStart = run[0]!.date;
     weatherNote ??= `The weather on file starts on ${weekStart}; the week is shortened to the days with weather.`;
   }
-  const prepared = prepareWeather(run.map(dailyWeatherOf), { latDeg: station.lat, elevationM: station.elevationM, coastal: station.coastal === 1 });
+  const prepared = prepareStationWeather(station, run);
   const w0 = prepared.dates.indexOf(weekStart);
   const w1 = prepared.dates.indexOf(weekEnd);
   const weekDays = w1 - w0 + 1;

@@ -8,11 +8,8 @@ import {
   addDaysIso,
   assignWeek,
   crewDayLoads,
-  greatCircleKm,
   isKept,
-  isoToDayNumber,
   planFieldWeek,
-  prepareWeather,
   reconcileWeek,
   weekDates,
   MOWER_KINDS,
@@ -25,7 +22,6 @@ import {
   type PlanEquipment,
   type PlanField,
   type PlanMower,
-  type PreparedWeather,
   type ScheduledOrder,
   type WeekBoard,
   type WeekQuery,
@@ -33,10 +29,10 @@ import {
   type Weekday,
 } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
-import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, weatherDays, weatherStations, workOrders } from '../db/schema/index.ts';
+import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, workOrders } from '../db/schema/index.ts';
 import { authorize, type Ctx } from './context.ts';
 import { loadParameters, loadStandards } from './standards.ts';
-import { dailyWeatherOf } from './weather.ts';
+import { planningWeather } from './stations.ts';
 import { notifyCrews, readScope, workOrderRows, type WorkMoveNotice, type WorkOrderRow, type WriteDeps } from './work-orders.ts';
 
 async function districtRow(db: Queryable, id: number) {
@@ -57,43 +53,6 @@ async function districtCrews(db: Queryable, districtId: number) {
     .from(crews)
     .where(eq(crews.districtId, districtId))
     .orderBy(asc(crews.name), asc(crews.id));
-}
-
-/**
- * Weather for planning up to `until` per station: the latest unbroken run of days on or
- * before it (observations and forecasts), prepared once and shared by the station's fields.
- */
-async function stationWeather(db: Queryable, until: string) {
-  const stations = await db
-    .select({ id: weatherStations.id, name: weatherStations.name, lat: weatherStations.lat, lng: weatherStations.lng, elevationM: weatherStations.elevationM, coastal: weatherStations.coastal })
-    .from(weatherStations)
-    .where(sql`exists (select 1 from ${weatherDays} where ${weatherDays.stationId} = ${weatherStations.id})`);
-  const prepared = new Map<number, PreparedWeather>();
-  const load = async (stationId: number) => {
-    const cached = prepared.get(stationId);
-    if (cached) return cached;
-    const s = stations.find((x) => x.id === stationId)!;
-    const rows = await db.select().from(weatherDays).where(and(eq(weatherDays.stationId, stationId), lte(weatherDays.date, until))).orderBy(asc(weatherDays.date));
-    let start = rows.length - 1;
-    while (start > 0 && isoToDayNumber(rows[start - 1]!.date) === isoToDayNumber(rows[start]!.date) - 1) start--;
-    const run = rows.slice(Math.max(0, start));
-    const w = prepareWeather(run.map(dailyWeatherOf), { latDeg: s.lat, elevationM: s.elevationM, coastal: s.coastal === 1 });
-    prepared.set(stationId, w);
-    return w;
-  };
-  const nearest = (p: { lat: number; lng: number }) => {
-    let best: (typeof stations)[number] | undefined;
-    let bestKm = Infinity;
-    for (const s of stations) {
-      const km = greatCircleKm(p, s);
-      if (km < bestKm) {
-        best = s;
-        bestKm = km;
-      }
-    }
-    return best;
-  };
-  return { stations, load, nearest };
 }
 
 /** Last date each field had each task done (from the records). */
@@ -181,7 +140,7 @@ async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: Exi
   const kept = existing.filter(isKept);
   const keptByField = new Map<number, typeof kept>();
   for (const k of kept) keptByField.set(k.fieldId, [...(keptByField.get(k.fieldId) ?? []), k]);
-  const weather = await stationWeather(db, addDaysIso(weekEnd, 7));
+  const weather = await planningWeather(db, addDaysIso(weekEnd, 7));
   const asked: AskedOrder[] = [];
   const notes = new Set<string>();
   let noWeather = 0;
