@@ -227,3 +227,18 @@ describe('records', () => {
     expect((await (await api.signIn('head')).get('/api/records').query({ from: '2026-06-01', to: '2026-05-01' })).status).toBe(400);
   });
 });
+
+describe('week plan warnings', () => {
+  test('should word the engine warnings of the district week once, in plain language', async () => {
+    const foreman = await api.signIn('foreman');
+    const generate = (weekStart: string) => foreman.post('/api/week-plans/generate').send({ districtId: api.fixture.districts.north, weekStart, dryRun: true });
+    // The fixture's weather runs 2026-05-04 to 2026-06-07.
+    const after = await generate('2026-06-08');
+    expect(after.status).toBe(200);
+    expect(after.body.warnings).toContain('Weather on file ends 2026-06-07: growth for the last 7 day(s) of the week is projected from the week before.');
+    expect(new Set(after.body.warnings).size).toBe(after.body.warnings.length);
+    const before = await generate('2026-04-27');
+    expect(before.status).toBe(200);
+    expect(before.body.warnings).toEqual(['Some fields have no weather before the week: only field checks are planned for this field.']);
+  });
+});

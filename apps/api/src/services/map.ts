@@ -17,7 +17,6 @@ import {
   dailyGrowthMm,
   districtScope,
   grassSeason,
-  greatCircleKm,
   hocFor,
   isoToDayNumber,
   dayNumberToIso,
@@ -37,6 +36,7 @@ import {
 import { districts, fieldChecks, fields, settings, sites, standards, weatherDays, weatherStations } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { fieldCrewIds, fieldScope, siteScope } from './scope.ts';
+import { nearestStation } from './stations.ts';
 
 export type { BasemapAnswer, MapAnswer, MapDistrict, MapField, MapSite };
 
@@ -125,7 +125,8 @@ async function buildMap(ctx: Ctx, requested: string): Promise<MapAnswer> {
     .select({ id: weatherStations.id, lat: weatherStations.lat, lng: weatherStations.lng, latest: sql<string | null>`max(${weatherDays.date})` })
     .from(weatherStations)
     .leftJoin(weatherDays, eq(weatherDays.stationId, weatherStations.id))
-    .groupBy(weatherStations.id);
+    .groupBy(weatherStations.id)
+    .orderBy(asc(weatherStations.id));
 
   const visibleSites = siteRows.filter((s) => can(ctx, 'read', 'Site', s));
   const visibleFields = fieldRows.filter((f) => can(ctx, 'read', 'Field', f));
@@ -146,12 +147,7 @@ async function buildMap(ctx: Ctx, requested: string): Promise<MapAnswer> {
   // Nearest station (great-circle distance) with weather, per site.
   const stationOfSite = new Map<number, number>();
   for (const s of siteRows) {
-    let best: StationSeries | null = null;
-    let bestKm = Infinity;
-    for (const st of withWeather) {
-      const km = greatCircleKm(s, st);
-      if (km < bestKm) [best, bestKm] = [st, km];
-    }
+    const best = nearestStation(withWeather, s);
     if (best) stationOfSite.set(s.id, best.id);
   }
 

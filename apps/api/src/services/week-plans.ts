@@ -1,268 +1,20 @@
 /**
  * The district's week plan: generated from the turf engine and the weather, kept by hand,
- * shown as a board of crews × days with each crew-day's load and route.
+ * shown as a board of crews × days with each crew-day's load and route. Loading, the engine
+ * run, the bulk write and the crews' mail live in `week-plans/`.
  */
-import { and, asc, desc, eq, gte, inArray, lte, max, ne, sql } from 'drizzle-orm';
-import {
-  appError,
-  errors,
-  addDaysIso,
-  assignWeek,
-  crewDayLoads,
-  greatCircleKm,
-  isKept,
-  isoToDayNumber,
-  planFieldWeek,
-  prepareWeather,
-  reconcileWeek,
-  weekDates,
-  MOWER_KINDS,
-  type AskedOrder,
-  type ConfirmAnswer,
-  type DiffItem,
-  type GenerateAnswer,
-  type GenerateWeekInput,
-  type Level,
-  type PlanEquipment,
-  type PlanField,
-  type PlanMower,
-  type PreparedWeather,
-  type ScheduledOrder,
-  type WeekBoard,
-  type WeekQuery,
-  type WorkTask,
-  type Weekday,
-} from '@swardwise/domain';
-import type { Db, Queryable } from '../db/client.ts';
-import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, weatherDays, weatherStations, workOrders } from '../db/schema/index.ts';
-import { writeAudit, type AuditInput } from './audit.ts';
+import { and, desc, eq, gte, inArray, lte, sql } from 'drizzle-orm';
+import { errors, crewDayLoads, reconcileWeek, weekDates, type ConfirmAnswer, type DiffItem, type GenerateAnswer, type GenerateWeekInput, type WeekBoard, type WeekQuery, type WorkTask } from '@swardwise/domain';
+import type { Db } from '../db/client.ts';
+import { auditLog, fields, sites, workOrders } from '../db/schema/index.ts';
+import { writeAudit } from './audit.ts';
 import { authorize, type Ctx } from './context.ts';
-import { loadParameters, loadStandards } from './standards.ts';
-import { dailyWeatherOf } from './weather.ts';
-import { notifyCrews, readScope, workOrderRows, type WorkMoveNotice, type WorkOrderRow, type WriteDeps } from './work-orders.ts';
-
-async function districtRow(db: Queryable, id: number) {
-  const [d] = await db.select({ id: districts.id, name: districts.name, yardName: districts.yardName, yardLat: districts.yardLat, yardLng: districts.yardLng }).from(districts).where(eq(districts.id, id));
-  if (!d) throw errors.notFound('district', id);
-  return d;
-}
-
-async function districtCrews(db: Queryable, districtId: number) {
-  return db
-    .select({
-      id: crews.id,
-      name: crews.name,
-      hoursPerDay: crews.hoursPerDay,
-      workDays: crews.workDays,
-      leadName: sql<string | null>`(select ${users.name} from ${users} where ${users.crewId} = ${crews.id} and ${users.role} = 'crew' and ${users.active} order by ${users.id} limit 1)`,
-    })
-    .from(crews)
-    .where(eq(crews.districtId, districtId))
-    .orderBy(asc(crews.name), asc(crews.id));
-}
-
-/**
- * Weather for planning up to `until` per station: the latest unbroken run of days on or
- * before it (observations and forecasts), prepared once and shared by the station's fields.
- */
-async function stationWeather(db: Queryable, until: string) {
-  const stations = await db
-    .select({ id: weatherStations.id, name: weatherStations.name, lat: weatherStations.lat, lng: weatherStations.lng, elevationM: weatherStations.elevationM, coastal: weatherStations.coastal })
-    .from(weatherStations)
-    .where(sql`exists (select 1 from ${weatherDays} where ${weatherDays.stationId} = ${weatherStations.id})`);
-  const prepared = new Map<number, PreparedWeather>();
-  const load = async (stationId: number) => {
-    const cached = prepared.get(stationId);
-    if (cached) return cached;
-    const s = stations.find((x) => x.id === stationId)!;
-    const rows = await db.select().from(weatherDays).where(and(eq(weatherDays.stationId, stationId), lte(weatherDays.date, until))).orderBy(asc(weatherDays.date));
-    let start = rows.length - 1;
-    while (start > 0 && isoToDayNumber(rows[start - 1]!.date) === isoToDayNumber(rows[start]!.date) - 1) start--;
-    const run = rows.slice(Math.max(0, start));
-    const w = prepareWeather(run.map(dailyWeatherOf), { latDeg: s.lat, elevationM: s.elevationM, coastal: s.coastal === 1 });
-    prepared.set(stationId, w);
-    return w;
-  };
-  const nearest = (p: { lat: number; lng: number }) => {
-    let best: (typeof stations)[number] | undefined;
-    let bestKm = Infinity;
-    for (const s of stations) {
-      const km = greatCircleKm(p, s);
-      if (km < bestKm) {
-        best = s;
-        bestKm = km;
-      }
-    }
-    return best;
-  };
-  return { stations, load, nearest };
-}
-
-/** Last date each field had each task done (from the records). */
-async function lastDone(db: Queryable, fieldIds: number[]) {
-  const out = new Map<string, string>();
-  if (fieldIds.length === 0) return out;
-  const rows = await db
-    .select({ fieldId: workOrders.fieldId, task: workOrders.task, last: max(workOrders.plannedDate) })
-    .from(workOrders)
-    .where(and(inArray(workOrders.fieldId, fieldIds), eq(workOrders.status, 'done')))
-    .groupBy(workOrders.fieldId, workOrders.task);
-  for (const r of rows) if (r.last) out.set(`${r.fieldId}|${r.task}`, r.last);
-  const checks = await db.select({ fieldId: fieldChecks.fieldId, last: max(fieldChecks.checkedOn) }).from(fieldChecks).where(inArray(fieldChecks.fieldId, fieldIds)).groupBy(fieldChecks.fieldId);
-  for (const c of checks) {
-    const key = `${c.fieldId}|field_check`;
-    if (c.last && (!out.has(key) || out.get(key)! < c.last)) out.set(key, c.last);
-  }
-  return out;
-}
-
-interface GenerationInput {
-  districtId: number;
-  weekStart: string;
-}
-
-/** Everything the engine needs for a district's week, read in a few queries. */
-async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: ExistingRow[], today: string) {
-  const dates = weekDates(q.weekStart);
-  const weekEnd = dates[6]!;
-  // In the week under way, work goes on today (the department's) or later.
-  const notBefore = today > q.weekStart && today <= weekEnd ? today : undefined;
-  const district = await districtRow(db, q.districtId);
-  const { standards } = await loadStandards(db);
-  const params = await loadParameters(db);
-  const crewRows = await districtCrews(db, q.districtId);
-  const fieldRows = await db
-    .select({
-      id: fields.id,
-      name: fields.name,
-      siteId: fields.siteId,
-      siteLat: sites.lat,
-      siteLng: sites.lng,
-      sport: fields.sport,
-      grass: fields.grass,
-      areaM2: fields.areaM2,
-      geometry: fields.geometry,
-      maintenanceLevel: fields.maintenanceLevel,
-      hocOverrideMm: fields.hocOverrideMm,
-      clippings: fields.clippings,
-      irrigation: fields.irrigation,
-      status: fields.status,
-      lastMowedOn: fields.lastMowedOn,
-    })
-    .from(fields)
-    .innerJoin(sites, eq(sites.id, fields.siteId))
-    // Retired fields are not kept any more: the week asks nothing of them.
-    .where(and(eq(sites.districtId, q.districtId), ne(fields.status, 'retired')))
-    .orderBy(asc(fields.id));
-  const fieldIds = fieldRows.map((f) => f.id);
-  const done = await lastDone(db, fieldIds);
-  const events = await db
-    .select({ id: fieldEvents.id, fieldId: fieldEvents.fieldId, startsOn: fieldEvents.startsOn, title: fieldEvents.title })
-    .from(fieldEvents)
-    .where(and(eq(fieldEvents.districtId, q.districtId), gte(fieldEvents.startsOn, q.weekStart), lte(fieldEvents.startsOn, addDaysIso(q.weekStart, 7))));
-  const eventsOf = new Map<number, { id: number; startsOn: string; title: string }[]>();
-  for (const e of events) eventsOf.set(e.fieldId, [...(eventsOf.get(e.fieldId) ?? []), e]);
-  const units = await db.select().from(equipment).where(and(eq(equipment.districtId, q.districtId), eq(equipment.active, true))).orderBy(asc(equipment.id));
-  const mowers: PlanMower[] = units.flatMap((u) =>
-    MOWER_KINDS.includes(u.kind) && u.cuttingWidthM && u.speedKmh && u.fieldEfficiency && u.hocMinMm !== null && u.hocMaxMm !== null
-      ? [{ id: u.id, crewId: u.crewId, kind: u.kind.replace('_mower', '') as PlanMower['kind'], widthM: u.cuttingWidthM, speedKmh: u.speedKmh, efficiency: u.fieldEfficiency, hocMinMm: u.hocMinMm, hocMaxMm: u.hocMaxMm }]
-      : [],
-  );
-  const planEquipment: PlanEquipment[] = units.flatMap((u): PlanEquipment[] => {
-    if (MOWER_KINDS.includes(u.kind)) {
-      const e: PlanEquipment = { id: u.id, crewId: u.crewId, kind: 'mower', mowerKind: u.kind.replace('_mower', '') as NonNullable<PlanEquipment['mowerKind']> };
-      if (u.hocMinMm !== null) e.hocMinMm = u.hocMinMm;
-      if (u.hocMaxMm !== null) e.hocMaxMm = u.hocMaxMm;
-      return [e];
-    }
-    if (u.kind === 'line_marker' || u.kind === 'spreader') return [{ id: u.id, crewId: u.crewId, kind: u.kind }];
-    return [];
-  });
-
-  const workDays = [...new Set(crewRows.flatMap((c) => c.workDays))] as Weekday[];
-  const kept = existing.filter(isKept);
-  const keptByField = new Map<number, typeof kept>();
-  for (const k of kept) keptByField.set(k.fieldId, [...(keptByField.get(k.fieldId) ?? []), k]);
-  const weather = await stationWeather(db, addDaysIso(weekEnd, 7));
-  const asked: AskedOrder[] = [];
-  const notes = new Set<string>();
-  let noWeather = 0;
-  for (const f of fieldRows) {
-    const station = weather.nearest({ lat: f.siteLat, lng: f.siteLng });
-    if (!station) {
-      noWeather++;
-      continue;
-    }
-    const w = await weather.load(station.id);
-    const field: PlanField = {
-      id: f.id,
-      siteId: f.siteId,
-      site: { lat: f.siteLat, lng: f.siteLng },
-      sport: f.sport,
-      grass: f.grass,
-      areaM2: f.areaM2,
-      geometry: f.geometry,
-      maintenanceLevel: f.maintenanceLevel as Level,
-      hocOverrideMm: f.hocOverrideMm,
-      clippings: f.clippings,
-      irrigation: f.irrigation,
-      status: f.status,
-      // The later of the field's record and the last mowing logged done.
-      lastMowedOn: [f.lastMowedOn, done.get(`${f.id}|mow`) ?? null].filter((d): d is string => d !== null).sort().pop() ?? null,
-      lastPaintedOn: done.get(`${f.id}|paint_lines`) ?? null,
-      lastFedOn: done.get(`${f.id}|feed`) ?? null,
-      lastCheckedOn: done.get(`${f.id}|field_check`) ?? null,
-      events: eventsOf.get(f.id) ?? [],
-    };
-    const plan = planFieldWeek({ field, weather: w, weekStart: q.weekStart, kept: keptByField.get(f.id) ?? [], workDays: workDays.length ? workDays : ['mon', 'tue', 'wed', 'thu', 'fri'], mowers, standards, params, ...(notBefore ? { notBefore } : {}) });
-    asked.push(...plan.orders);
-    for (const n of plan.notes) if (/projected|No weather/.test(n)) notes.add(n.replace(/^No weather on file before .*?:/, 'Some fields have no weather before the week:'));
-  }
-  if (noWeather) notes.add(`${noWeather} field(s) have no weather station with data: only their hand-made work is shown. Add weather first.`);
-
-  // Crew hints: the crew that last worked each site in the four weeks before.
-  const hintRows = await db
-    .select({ siteId: workOrders.siteId, crewId: workOrders.crewId, last: max(workOrders.plannedDate) })
-    .from(workOrders)
-    .where(and(eq(workOrders.districtId, q.districtId), gte(workOrders.plannedDate, addDaysIso(q.weekStart, -28)), lte(workOrders.plannedDate, weekEnd), sql`${workOrders.crewId} is not null`))
-    .groupBy(workOrders.siteId, workOrders.crewId);
-  const siteCrewHint = new Map<number, number>();
-  const hintDate = new Map<number, string>();
-  for (const h of hintRows) {
-    if (h.crewId === null || !h.last) continue;
-    if (!hintDate.has(h.siteId) || hintDate.get(h.siteId)! < h.last) {
-      siteCrewHint.set(h.siteId, h.crewId);
-      hintDate.set(h.siteId, h.last);
-    }
-  }
-  const keptHours = new Map<string, number>();
-  for (const k of kept) if (k.crewId !== null && k.status !== 'skipped') keptHours.set(`${k.crewId}|${k.plannedDate}`, (keptHours.get(`${k.crewId}|${k.plannedDate}`) ?? 0) + k.plannedHours);
-  const siteLocations = new Map(fieldRows.map((f) => [f.siteId, { lat: f.siteLat, lng: f.siteLng }]));
-  const assigned = assignWeek({
-    weekStart: q.weekStart,
-    orders: asked,
-    crews: crewRows.map((c) => ({ id: c.id, hoursPerDay: c.hoursPerDay, workDays: c.workDays })),
-    keptHours,
-    siteCrewHint,
-    equipment: planEquipment,
-    sites: siteLocations,
-    yard: { lat: district.yardLat, lng: district.yardLng },
-    travel: params.travel,
-    ...(notBefore ? { notBefore } : {}),
-  });
-  const fieldNames = new Map(fieldRows.map((f) => [f.id, f.name]));
-  return { orders: assigned.orders, warnings: [...notes, ...assigned.warnings.map((w) => w.replace(/field (\d+)/, (_, id: string) => fieldNames.get(Number(id)) ?? `field ${id}`))], crewRows, fieldCount: fieldRows.length };
-}
-
-type ExistingRow = typeof workOrders.$inferSelect;
-
-async function weekRows(db: Queryable, districtId: number, weekStart: string) {
-  return db
-    .select()
-    .from(workOrders)
-    .where(and(eq(workOrders.districtId, districtId), gte(workOrders.plannedDate, weekStart), lte(workOrders.plannedDate, addDaysIso(weekStart, 6))))
-    .orderBy(asc(workOrders.id));
-}
+import { loadParameters } from './standards.ts';
+import { readScope, type WorkOrderRow, type WriteDeps } from './work-orders.ts';
+import { boardRows, districtCrews, districtRow, weekRows } from './week-plans/load.ts';
+import { mailNewWork } from './week-plans/mail.ts';
+import { planDistrictWeek } from './week-plans/plan.ts';
+import { writeGeneratedWeek } from './week-plans/write.ts';
 
 /** The board of a district's week: orders, crews, each crew-day's load and route. */
 export async function getWeekBoard(ctx: Ctx, q: WeekQuery): Promise<WeekBoard<Date>> {
@@ -320,13 +72,6 @@ export async function getWeekBoard(ctx: Ctx, q: WeekQuery): Promise<WeekBoard<Da
   };
 }
 
-async function boardRows(db: Queryable, ids: number[]): Promise<WorkOrderRow[]> {
-  const out: WorkOrderRow[] = [];
-  // One query per chunk keeps the statement small for very large weeks.
-  for (let i = 0; i < ids.length; i += 2000) out.push(...(await workOrderRows(db, ids.slice(i, i + 2000))));
-  return out;
-}
-
 /**
  * Generates (or re-generates) the week. Kept orders (pinned, hand-made, started, done,
  * skipped) stay as they are and count as work in the engine; the rest is matched to the new
@@ -364,108 +109,10 @@ export async function generateWeek(ctx: Ctx, input: GenerateWeekInput): Promise<
   };
 
   if (!input.dryRun) {
-    await (ctx.db as Db).transaction(async (tx) => {
-      const audits: AuditInput[] = [];
-      if (rec.remove.length) {
-        const gone = await tx
-          .delete(workOrders)
-          .where(and(inArray(workOrders.id, rec.remove.map((r) => r.id)), eq(workOrders.pinned, false), eq(workOrders.origin, 'generated'), inArray(workOrders.status, ['planned', 'assigned'])))
-          .returning({ id: workOrders.id });
-        if (gone.length !== rec.remove.length) throw stale();
-        for (const r of rec.remove) audits.push({ actorId: ctx.actor.id, action: 'delete', entity: 'work_order', entityId: r.id, districtId: r.districtId, before: r, after: null });
-      }
-      for (const u of rec.update) {
-        const p = u.next;
-        const [after] = await tx
-          .update(workOrders)
-          .set({ plannedDate: p.plannedDate, weekStart: q.weekStart, plannedHours: p.plannedHours, crewId: p.crewId, equipmentId: p.equipmentId, reason: p.reason, details: { ...p.details, dueBy: p.latestDate }, status: 'planned', version: sql`${workOrders.version} + 1`, updatedAt: new Date() })
-          .where(and(eq(workOrders.id, u.id), eq(workOrders.version, u.before.version), eq(workOrders.pinned, false)))
-          .returning();
-        if (!after) throw stale();
-        audits.push({ actorId: ctx.actor.id, action: 'update', entity: 'work_order', entityId: u.id, districtId: after.districtId, before: u.before, after });
-      }
-      // Unchanged orders take the newest reasons and details (heights, run times) without a new version.
-      const planned = new Map(plan.orders.map((o) => [`${o.fieldId}|${o.task}|${o.plannedDate}`, o]));
-      for (const u of rec.unchanged) {
-        const p = planned.get(`${u.fieldId}|${u.task}|${u.plannedDate}`);
-        const details = p ? { ...p.details, dueBy: p.latestDate } : null;
-        if (p && (p.reason !== u.reason || canonical(details) !== canonical(u.details))) await tx.update(workOrders).set({ reason: p.reason, details: details! }).where(eq(workOrders.id, u.id));
-      }
-      if (rec.insert.length) {
-        const rows = rec.insert.map((p) => toInsert(p, q, ctx.actor.id));
-        const ids = await bulkInsertOrders(tx, rows);
-        // The audit keeps what was planned (the engine's details stay on the order row).
-        rows.forEach((r, k) => {
-          const { details: _details, ...after } = r;
-          audits.push({ actorId: ctx.actor.id, action: 'create', entity: 'work_order', entityId: ids[k]!, districtId: q.districtId, before: null, after: { id: ids[k]!, ...after } });
-        });
-      }
-      audits.push({ actorId: ctx.actor.id, action: 'create', entity: 'week_plan', entityId: null, districtId: q.districtId, before: null, after: { weekStart: q.weekStart, ...diff.summary, warnings: plan.warnings } });
-      await writeAudit(tx, audits);
-    });
+    await writeGeneratedWeek(ctx, q, rec, plan.orders, diff.summary, plan.warnings);
   }
   const board = await getWeekBoard(ctx, q);
   return { dryRun: input.dryRun, diff, warnings: plan.warnings, board };
-}
-
-/** JSON with keys sorted: jsonb does not keep key order, so plain JSON.stringify would differ. */
-function canonical(v: unknown): string {
-  if (Array.isArray(v)) return `[${v.map(canonical).join(',')}]`;
-  if (v && typeof v === 'object') {
-    return `{${Object.keys(v as object)
-      .filter((k) => (v as Record<string, unknown>)[k] !== undefined)
-      .sort()
-      .map((k) => `${JSON.stringify(k)}:${canonical((v as Record<string, unknown>)[k])}`)
-      .join(',')}}`;
-  }
-  return JSON.stringify(v);
-}
-
-const stale = () => appError('week_plan/changed', 'The week changed while it was being generated (someone assigned or moved work); generate again to see the current plan');
-
-/**
- * Many orders in one statement: the rows travel as one JSON parameter (json_to_recordset),
- * which PGlite and PostgreSQL take far faster than thousands of bound parameters. Ids come
- * back in input order (WITH ORDINALITY).
- */
-async function bulkInsertOrders(tx: Queryable, rows: (typeof workOrders.$inferInsert)[]): Promise<number[]> {
-  const json = JSON.stringify(rows.map((r, i) => ({ n: i, ...r })));
-  const res = await tx.execute<{ id: number; n: number }>(sql`
-    with input as (
-      select * from json_to_recordset(${json}::json) as x(
-        n int, "fieldId" int, "siteId" int, "districtId" int, task text, "weekStart" date, "plannedDate" date,
-        "crewId" int, "equipmentId" int, "plannedHours" real, status text, origin text, pinned boolean,
-        reason text, details jsonb, "createdBy" int)
-    ), inserted as (
-      insert into ${workOrders} (field_id, site_id, district_id, task, week_start, planned_date, crew_id, equipment_id, planned_hours, status, origin, pinned, reason, details, created_by)
-      select "fieldId", "siteId", "districtId", task, "weekStart", "plannedDate", "crewId", "equipmentId", "plannedHours", status, origin, pinned, reason, details, "createdBy"
-      from input order by n
-      returning id, field_id, task, planned_date
-    )
-    select i.id, input.n from inserted i join input on input."fieldId" = i.field_id and input.task = i.task and input."plannedDate" = i.planned_date`);
-  const out = new Array<number>(rows.length);
-  for (const r of res.rows) out[r.n] = r.id;
-  return out;
-}
-
-function toInsert(p: ScheduledOrder, q: GenerationInput, actorId: number): typeof workOrders.$inferInsert {
-  return {
-    fieldId: p.fieldId,
-    siteId: p.siteId,
-    districtId: q.districtId,
-    task: p.task,
-    weekStart: q.weekStart,
-    plannedDate: p.plannedDate,
-    crewId: p.crewId,
-    equipmentId: p.equipmentId,
-    plannedHours: p.plannedHours,
-    status: 'planned',
-    origin: 'generated',
-    pinned: false,
-    reason: p.reason,
-    details: { ...p.details, dueBy: p.latestDate },
-    createdBy: actorId,
-  };
 }
 
 /**
@@ -489,13 +136,6 @@ export async function confirmWeek(ctx: Ctx, q: WeekQuery & { crewId?: number | u
     await writeAudit(tx, after.map((a) => ({ actorId: ctx.actor.id, action: 'update' as const, entity: 'work_order', entityId: a.id, districtId: a.districtId, before: byId.get(a.id) ?? null, after: a })));
     return after;
   });
-  const byCrew = new Map<number, WorkMoveNotice>();
-  for (const row of await boardRows(ctx.db, changed.map((a) => a.id))) {
-    if (row.crewId === null) continue;
-    const n = byCrew.get(row.crewId) ?? { crewId: row.crewId, kind: 'assigned', orders: [] };
-    n.orders.push(row);
-    byCrew.set(row.crewId, n);
-  }
-  const emailed = await notifyCrews(ctx.db, deps.mailer, [...byCrew.values()], ctx.actorName, deps.publicUrl);
+  const emailed = await mailNewWork(ctx.db, changed.map((a) => a.id), deps, ctx.actorName);
   return { assigned: changed.length, emailed, board: await getWeekBoard(ctx, q) };
 }

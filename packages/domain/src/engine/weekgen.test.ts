@@ -6,6 +6,7 @@ import { simulateMowing } from './mowing.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor } from './standards.ts';
 import { assignWeek, crewDayLoads, isKept, planFieldWeek, reconcileWeek, weekDates } from './weekgen.ts';
 import type { ExistingOrder, PlanField } from './weekgen.ts';
+import { weekWarningText } from './week-warnings.ts';
 import type { Polygon } from '../schemas/common.ts';
 import type { Level } from '../vocabulary.ts';
 import { WEEKDAYS } from './dates.ts';
@@ -214,13 +215,14 @@ describe('planFieldWeek', () => {
     const closed = planFieldWeek({ field: field({ status: 'closed', lastCheckedOn: null }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
     expect(closed.orders.map((o) => o.task)).toEqual(['field_check']);
     const late = planFieldWeek({ field: field(), weather: WARM, weekStart: '2026-06-08', kept: [], workDays: allDays });
-    expect(late.notes.join(' ')).toMatch(/projected/);
+    expect(late.warnings.map((w) => w.code)).toContain('weather_projected');
+    expect(late.warnings.map((w) => weekWarningText(w)).join(' ')).toMatch(/projected/);
   });
 
   test('should plan nothing on a retired field, not even its check, and say why', () => {
     const retired = planFieldWeek({ field: field({ status: 'retired', lastCheckedOn: null }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
     expect(retired.orders).toEqual([]);
-    expect(retired.notes).toEqual(['The field is retired: nothing is planned for it.']);
+    expect(retired.warnings.map((w) => weekWarningText(w))).toEqual(['The field is retired: nothing is planned for it.']);
   });
 
   test('should refuse a week that does not start on a Monday', () => {
@@ -287,7 +289,8 @@ describe('assignWeek', () => {
   test('should leave orders unassigned with a warning when no crew works', () => {
     const r = assignWeek({ weekStart: WEEK, orders: [asked(10, 1, '2026-06-02', 2)], crews: [], sites, yard, travel });
     expect(r.orders[0]?.crewId).toBeNull();
-    expect(r.warnings[0]).toMatch(/No crew/);
+    expect(r.warnings[0]).toEqual({ code: 'no_crew' });
+    expect(weekWarningText(r.warnings[0]!)).toMatch(/No crew/);
   });
 });
 
@@ -349,14 +352,14 @@ describe('planFieldWeek without a mowing on record', () => {
     const mows = plan.orders.filter((o) => o.task === 'mow');
     expect(mows.length).toBeGreaterThan(0);
     expect(mows.every((o) => !o.reason.startsWith('Overdue'))).toBe(true);
-    expect(plan.notes.join(' ')).toMatch(/No mowing on record/);
+    expect(plan.warnings.map((w) => weekWarningText(w)).join(' ')).toMatch(/No mowing on record/);
   });
 
   test('should plan a past week as if the rule was kept when the last cut on record is later', () => {
     const assumed = mowDates(planFieldWeek({ field: field({ lastMowedOn: null }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }));
     const later = planFieldWeek({ field: field({ lastMowedOn: '2026-06-20' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
     expect(mowDates(later)).toEqual(assumed);
-    expect(later.notes.join(' ')).toMatch(/after this week began/);
+    expect(later.warnings.map((w) => weekWarningText(w)).join(' ')).toMatch(/after this week began/);
   });
 });
 

@@ -16,6 +16,7 @@
  * Pure and deterministic: the same input gives the same plan.
  */
 import type { Polygon } from '../schemas/common.ts';
+import type { WeekWarning } from './week-warnings.ts';
 import type { Clippings, FieldStatus, Grass, IrrigationKind, Level, Sport, WorkStatus, WorkTask } from '../vocabulary.ts';
 import { LEVEL_NAMES } from '../vocabulary.ts';
 import { fail } from './check.ts';
@@ -112,8 +113,8 @@ export interface FieldWeekInput {
 export interface FieldWeekPlan {
   fieldId: number;
   orders: AskedOrder[];
-  /** Plain-language notes (e.g. weather projected past the last day on file). */
-  notes: string[];
+  /** What to say about the field's week (e.g. weather projected past the last day on file); worded by `weekWarningText`. */
+  warnings: WeekWarning[];
 }
 
 const round = (v: number, digits = 2) => Math.round(v * 10 ** digits) / 10 ** digits;
@@ -175,19 +176,19 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
   const std = levelStandard(field.maintenanceLevel, standards);
   const level = field.maintenanceLevel;
   const orders: AskedOrder[] = [];
-  const notes: string[] = [];
+  const warnings: WeekWarning[] = [];
   const keptOf = (task: WorkTask) => kept.filter((k) => k.fieldId === field.id && k.task === task && k.status !== 'skipped');
   // A retired field is no longer kept: nothing is asked of it, not even a field check.
-  if (field.status === 'retired') return { fieldId: field.id, orders: [], notes: ['The field is retired: nothing is planned for it.'] };
+  if (field.status === 'retired') return { fieldId: field.id, orders: [], warnings: [{ code: 'field_retired', fieldId: field.id }] };
 
   const first = weather.dates[0];
   if (!first || first > weekEnd) {
-    notes.push(`No weather on file before ${weekEnd}: only field checks are planned for this field.`);
+    warnings.push({ code: 'no_weather_before_week', fieldId: field.id, date: weekEnd });
   }
   const outlookField = { id: field.id, areaM2: field.areaM2, sport: field.sport, grass: field.grass, maintenanceLevel: level, hocOverrideMm: field.hocOverrideMm, clippings: field.clippings, irrigation: field.irrigation };
   const daily = first && first <= weekEnd ? fieldDailySeries(outlookField, weather, standards, params) : null;
   const open = field.status !== 'closed';
-  if (!open) notes.push('The field is closed: only its field check is planned.');
+  if (!open) warnings.push({ code: 'field_closed', fieldId: field.id });
 
   // Index of each week day in the growth series (may pass the weather's end: projected).
   const day0 = first ? isoToDayNumber(first) : 0;
@@ -199,7 +200,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
     const horizon = addDaysIso(weekEnd, 7);
     const { growth, projectedDays: projectedAll } = growthThroughWeek(daily.growthMm, weather, horizon);
     const projectedDays = Math.max(0, projectedAll - 7);
-    if (projectedDays > 0) notes.push(`Weather on file ends ${weather.dates[weather.dates.length - 1]}: growth for the last ${Math.min(7, projectedDays)} day(s) of the week is projected from the week before.`);
+    if (projectedDays > 0) warnings.push({ code: 'weather_projected', fieldId: field.id, date: weather.dates[weather.dates.length - 1]!, days: Math.min(7, projectedDays) });
     const w0 = Math.max(0, idx(weekStart));
     const gp = daily.gp;
     let gpSum = 0;
@@ -231,7 +232,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
       const season = simulateMowing(hocMm, growth.slice(0, idx(horizon) + 1), hocMm, { ...mowOptions, startDate: first as string });
       const lastAssumed = season.mowings.filter((m) => m.dayIndex < idx(weekStart)).pop();
       cutIdx = lastAssumed ? lastAssumed.dayIndex : -1;
-      notes.push(field.lastMowedOn && !lastCut ? `The last mowing on record (${field.lastMowedOn}) is after this week began: the plan assumes the one-third rule was kept up to the week.` : 'No mowing on record: the plan assumes the field was mowed as the one-third rule asked before this week.');
+      warnings.push({ code: 'mowing_assumed', fieldId: field.id, date: field.lastMowedOn && !lastCut ? field.lastMowedOn : null });
     }
     for (let guard = 0; guard < 20; guard++) {
       const from = Math.max(0, cutIdx + 1);
@@ -436,7 +437,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
     }
   }
 
-  return { fieldId: field.id, orders, notes };
+  return { fieldId: field.id, orders, warnings };
 }
 
 // ---------------------------------------------------------------------------------------
@@ -487,11 +488,11 @@ export interface AssignInput {
  * its latest date, else the first after (noted); flexible orders then move off days over
  * the crew's hours onto the lightest day. Deterministic: ties break by id and date.
  */
-export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warnings: string[] } {
+export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warnings: WeekWarning[] } {
   const week = weekDates(input.weekStart);
   const open = week.filter((d) => !input.notBefore || d >= input.notBefore);
   const dates = open.length ? open : week.slice(6);
-  const warnings: string[] = [];
+  const warnings: WeekWarning[] = [];
   const crews = [...input.crews].filter((c) => c.workDays.length > 0).sort((a, b) => a.id - b.id);
   const bySite = new Map<number, AskedOrder[]>();
   for (const o of input.orders) {
@@ -529,7 +530,7 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
     crewOfSite.set(siteId, chosen);
     if (chosen) load.set(chosen.id, (load.get(chosen.id) as number) + h);
   }
-  if (crews.length === 0 && input.orders.length > 0) warnings.push('No crew with working days in this district: every order is left unassigned.');
+  if (crews.length === 0 && input.orders.length > 0) warnings.push({ code: 'no_crew' });
 
   // Days.
   const scheduled: ScheduledOrder[] = [];
@@ -542,7 +543,7 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
       const onOrBefore = dates.filter((d) => d <= latest && d >= o.askedDate && works(d)).pop() ?? dates.filter((d) => d <= latest && works(d)).pop();
       const after = dates.find((d) => d > latest && works(d));
       date = onOrBefore ?? after ?? o.askedDate;
-      if (!onOrBefore && after && o.latestDate) warnings.push(`${o.task === 'mow' ? 'Mowing' : 'Work'} on field ${o.fieldId} falls after ${o.latestDate}: no working day of the crew before it.`);
+      if (!onOrBefore && after && o.latestDate) warnings.push({ code: 'due_date_missed', fieldId: o.fieldId, date: o.latestDate, task: o.task });
     }
     scheduled.push({ ...o, plannedDate: date, crewId: crew?.id ?? null, equipmentId: null });
   }
@@ -617,7 +618,7 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
     s.equipmentId = (own ?? pool)?.id ?? null;
   }
   scheduled.sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : a.siteId - b.siteId || a.fieldId - b.fieldId || (a.task < b.task ? -1 : a.task > b.task ? 1 : 0)));
-  return { orders: scheduled, warnings: [...new Set(warnings)] };
+  return { orders: scheduled, warnings: [...new Map(warnings.map((w) => [JSON.stringify(w), w])).values()] };
 }
 
 /** One crew-day as the board shows it. */

@@ -1,0 +1,167 @@
+/** What a district's week is planned from, read in a few queries. */
+import { and, asc, eq, gte, inArray, lte, max, ne, sql } from 'drizzle-orm';
+import { errors, addDaysIso, MOWER_KINDS, type Level, type PlanEquipment, type PlanField, type PlanMower } from '@swardwise/domain';
+import type { Queryable } from '../../db/client.ts';
+import { crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, workOrders } from '../../db/schema/index.ts';
+import { workOrderRows, type WorkOrderRow } from '../work-orders.ts';
+
+export interface GenerationInput {
+  districtId: number;
+  weekStart: string;
+}
+
+export type ExistingRow = typeof workOrders.$inferSelect;
+
+export async function districtRow(db: Queryable, id: number) {
+  const [d] = await db.select({ id: districts.id, name: districts.name, yardName: districts.yardName, yardLat: districts.yardLat, yardLng: districts.yardLng }).from(districts).where(eq(districts.id, id));
+  if (!d) throw errors.notFound('district', id);
+  return d;
+}
+
+export async function districtCrews(db: Queryable, districtId: number) {
+  return db
+    .select({
+      id: crews.id,
+      name: crews.name,
+      hoursPerDay: crews.hoursPerDay,
+      workDays: crews.workDays,
+      leadName: sql<string | null>`(select ${users.name} from ${users} where ${users.crewId} = ${crews.id} and ${users.role} = 'crew' and ${users.active} order by ${users.id} limit 1)`,
+    })
+    .from(crews)
+    .where(eq(crews.districtId, districtId))
+    .orderBy(asc(crews.name), asc(crews.id));
+}
+
+export async function weekRows(db: Queryable, districtId: number, weekStart: string) {
+  return db
+    .select()
+    .from(workOrders)
+    .where(and(eq(workOrders.districtId, districtId), gte(workOrders.plannedDate, weekStart), lte(workOrders.plannedDate, addDaysIso(weekStart, 6))))
+    .orderBy(asc(workOrders.id));
+}
+
+export async function boardRows(db: Queryable, ids: number[]): Promise<WorkOrderRow[]> {
+  const out: WorkOrderRow[] = [];
+  // One query per chunk keeps the statement small for very large weeks.
+  for (let i = 0; i < ids.length; i += 2000) out.push(...(await workOrderRows(db, ids.slice(i, i + 2000))));
+  return out;
+}
+
+/** Last date each field had each task done (from the records). */
+async function lastDone(db: Queryable, fieldIds: number[]) {
+  const out = new Map<string, string>();
+  if (fieldIds.length === 0) return out;
+  const rows = await db
+    .select({ fieldId: workOrders.fieldId, task: workOrders.task, last: max(workOrders.plannedDate) })
+    .from(workOrders)
+    .where(and(inArray(workOrders.fieldId, fieldIds), eq(workOrders.status, 'done')))
+    .groupBy(workOrders.fieldId, workOrders.task);
+  for (const r of rows) if (r.last) out.set(`${r.fieldId}|${r.task}`, r.last);
+  const checks = await db.select({ fieldId: fieldChecks.fieldId, last: max(fieldChecks.checkedOn) }).from(fieldChecks).where(inArray(fieldChecks.fieldId, fieldIds)).groupBy(fieldChecks.fieldId);
+  for (const c of checks) {
+    const key = `${c.fieldId}|field_check`;
+    if (c.last && (!out.has(key) || out.get(key)! < c.last)) out.set(key, c.last);
+  }
+  return out;
+}
+
+async function districtFieldRows(db: Queryable, districtId: number) {
+  return db
+    .select({
+      id: fields.id,
+      name: fields.name,
+      siteId: fields.siteId,
+      siteLat: sites.lat,
+      siteLng: sites.lng,
+      sport: fields.sport,
+      grass: fields.grass,
+      areaM2: fields.areaM2,
+      geometry: fields.geometry,
+      maintenanceLevel: fields.maintenanceLevel,
+      hocOverrideMm: fields.hocOverrideMm,
+      clippings: fields.clippings,
+      irrigation: fields.irrigation,
+      status: fields.status,
+      lastMowedOn: fields.lastMowedOn,
+    })
+    .from(fields)
+    .innerJoin(sites, eq(sites.id, fields.siteId))
+    // Retired fields are not kept any more: the week asks nothing of them.
+    .where(and(eq(sites.districtId, districtId), ne(fields.status, 'retired')))
+    .orderBy(asc(fields.id));
+}
+
+export type DistrictFieldRow = Awaited<ReturnType<typeof districtFieldRows>>[number];
+
+/** The district's fields as the engine takes them: with the last work done and the week's events. */
+export async function planFields(db: Queryable, q: GenerationInput) {
+  const fieldRows = await districtFieldRows(db, q.districtId);
+  const done = await lastDone(db, fieldRows.map((f) => f.id));
+  const events = await db
+    .select({ id: fieldEvents.id, fieldId: fieldEvents.fieldId, startsOn: fieldEvents.startsOn, title: fieldEvents.title })
+    .from(fieldEvents)
+    .where(and(eq(fieldEvents.districtId, q.districtId), gte(fieldEvents.startsOn, q.weekStart), lte(fieldEvents.startsOn, addDaysIso(q.weekStart, 7))));
+  const eventsOf = new Map<number, { id: number; startsOn: string; title: string }[]>();
+  for (const e of events) eventsOf.set(e.fieldId, [...(eventsOf.get(e.fieldId) ?? []), e]);
+  const toPlanField = (f: DistrictFieldRow): PlanField => ({
+    id: f.id,
+    siteId: f.siteId,
+    site: { lat: f.siteLat, lng: f.siteLng },
+    sport: f.sport,
+    grass: f.grass,
+    areaM2: f.areaM2,
+    geometry: f.geometry,
+    maintenanceLevel: f.maintenanceLevel as Level,
+    hocOverrideMm: f.hocOverrideMm,
+    clippings: f.clippings,
+    irrigation: f.irrigation,
+    status: f.status,
+    // The later of the field's record and the last mowing logged done.
+    lastMowedOn: [f.lastMowedOn, done.get(`${f.id}|mow`) ?? null].filter((d): d is string => d !== null).sort().pop() ?? null,
+    lastPaintedOn: done.get(`${f.id}|paint_lines`) ?? null,
+    lastFedOn: done.get(`${f.id}|feed`) ?? null,
+    lastCheckedOn: done.get(`${f.id}|field_check`) ?? null,
+    events: eventsOf.get(f.id) ?? [],
+  });
+  return { fieldRows, toPlanField };
+}
+
+/** The district's active equipment: mowers with their settings for the engine, and every unit the crews book. */
+export async function planEquipment(db: Queryable, districtId: number) {
+  const units = await db.select().from(equipment).where(and(eq(equipment.districtId, districtId), eq(equipment.active, true))).orderBy(asc(equipment.id));
+  const mowers: PlanMower[] = units.flatMap((u) =>
+    MOWER_KINDS.includes(u.kind) && u.cuttingWidthM && u.speedKmh && u.fieldEfficiency && u.hocMinMm !== null && u.hocMaxMm !== null
+      ? [{ id: u.id, crewId: u.crewId, kind: u.kind.replace('_mower', '') as PlanMower['kind'], widthM: u.cuttingWidthM, speedKmh: u.speedKmh, efficiency: u.fieldEfficiency, hocMinMm: u.hocMinMm, hocMaxMm: u.hocMaxMm }]
+      : [],
+  );
+  const booked: PlanEquipment[] = units.flatMap((u): PlanEquipment[] => {
+    if (MOWER_KINDS.includes(u.kind)) {
+      const e: PlanEquipment = { id: u.id, crewId: u.crewId, kind: 'mower', mowerKind: u.kind.replace('_mower', '') as NonNullable<PlanEquipment['mowerKind']> };
+      if (u.hocMinMm !== null) e.hocMinMm = u.hocMinMm;
+      if (u.hocMaxMm !== null) e.hocMaxMm = u.hocMaxMm;
+      return [e];
+    }
+    if (u.kind === 'line_marker' || u.kind === 'spreader') return [{ id: u.id, crewId: u.crewId, kind: u.kind }];
+    return [];
+  });
+  return { mowers, equipment: booked };
+}
+
+/** Crew hints: the crew that last worked each site in the four weeks before the week's end. */
+export async function siteCrewHints(db: Queryable, q: GenerationInput, weekEnd: string) {
+  const hintRows = await db
+    .select({ siteId: workOrders.siteId, crewId: workOrders.crewId, last: max(workOrders.plannedDate) })
+    .from(workOrders)
+    .where(and(eq(workOrders.districtId, q.districtId), gte(workOrders.plannedDate, addDaysIso(q.weekStart, -28)), lte(workOrders.plannedDate, weekEnd), sql`${workOrders.crewId} is not null`))
+    .groupBy(workOrders.siteId, workOrders.crewId);
+  const siteCrewHint = new Map<number, number>();
+  const hintDate = new Map<number, string>();
+  for (const h of hintRows) {
+    if (h.crewId === null || !h.last) continue;
+    if (!hintDate.has(h.siteId) || hintDate.get(h.siteId)! < h.last) {
+      siteCrewHint.set(h.siteId, h.crewId);
+      hintDate.set(h.siteId, h.last);
+    }
+  }
+  return siteCrewHint;
+}

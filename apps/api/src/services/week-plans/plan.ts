@@ -1,0 +1,88 @@
+/** The engine run for a district's week: each field's asked work, then crews and days. */
+import {
+  addDaysIso,
+  assignWeek,
+  isKept,
+  planFieldWeek,
+  weekDates,
+  weekWarningText,
+  DISTRICT_WEEK_WARNINGS,
+  type AskedOrder,
+  type DepartmentParameters,
+  type PlanMower,
+  type Standards,
+  type WeekWarning,
+  type Weekday,
+} from '@swardwise/domain';
+import type { Queryable } from '../../db/client.ts';
+import { loadParameters, loadStandards } from '../standards.ts';
+import { planningWeather } from '../stations.ts';
+import { districtCrews, districtRow, planEquipment, planFields, siteCrewHints, type ExistingRow, type GenerationInput } from './load.ts';
+
+interface AskInput {
+  q: GenerationInput;
+  kept: ExistingRow[];
+  workDays: Weekday[];
+  mowers: PlanMower[];
+  standards: Standards;
+  params: DepartmentParameters;
+  notBefore: string | undefined;
+}
+
+/** What each field asks of the week, with the warnings the district week shows. */
+async function askFields(db: Queryable, input: AskInput) {
+  const { q, kept, workDays, mowers, standards, params, notBefore } = input;
+  const keptByField = new Map<number, ExistingRow[]>();
+  for (const k of kept) keptByField.set(k.fieldId, [...(keptByField.get(k.fieldId) ?? []), k]);
+  const { fieldRows, toPlanField } = await planFields(db, q);
+  const weather = await planningWeather(db, addDaysIso(weekDates(q.weekStart)[6]!, 7));
+  const asked: AskedOrder[] = [];
+  const warnings: WeekWarning[] = [];
+  let noWeather = 0;
+  for (const f of fieldRows) {
+    const station = weather.nearest({ lat: f.siteLat, lng: f.siteLng });
+    if (!station) {
+      noWeather++;
+      continue;
+    }
+    const w = await weather.load(station.id);
+    const plan = planFieldWeek({ field: toPlanField(f), weather: w, weekStart: q.weekStart, kept: keptByField.get(f.id) ?? [], workDays: workDays.length ? workDays : ['mon', 'tue', 'wed', 'thu', 'fri'], mowers, standards, params, ...(notBefore ? { notBefore } : {}) });
+    asked.push(...plan.orders);
+    warnings.push(...plan.warnings.filter((n) => DISTRICT_WEEK_WARNINGS.has(n.code)));
+  }
+  if (noWeather) warnings.push({ code: 'no_station', fields: noWeather });
+  return { asked, warnings, fieldRows };
+}
+
+/** Everything the engine needs for a district's week, and its answer: the scheduled orders and the worded warnings. */
+export async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: ExistingRow[], today: string) {
+  const weekEnd = weekDates(q.weekStart)[6]!;
+  // In the week under way, work goes on today (the department's) or later.
+  const notBefore = today > q.weekStart && today <= weekEnd ? today : undefined;
+  const district = await districtRow(db, q.districtId);
+  const { standards } = await loadStandards(db);
+  const params = await loadParameters(db);
+  const crewRows = await districtCrews(db, q.districtId);
+  const units = await planEquipment(db, q.districtId);
+  const workDays = [...new Set(crewRows.flatMap((c) => c.workDays))] as Weekday[];
+  const kept = existing.filter(isKept);
+  const { asked, warnings, fieldRows } = await askFields(db, { q, kept, workDays, mowers: units.mowers, standards, params, notBefore });
+
+  const keptHours = new Map<string, number>();
+  for (const k of kept) if (k.crewId !== null && k.status !== 'skipped') keptHours.set(`${k.crewId}|${k.plannedDate}`, (keptHours.get(`${k.crewId}|${k.plannedDate}`) ?? 0) + k.plannedHours);
+  const assigned = assignWeek({
+    weekStart: q.weekStart,
+    orders: asked,
+    crews: crewRows.map((c) => ({ id: c.id, hoursPerDay: c.hoursPerDay, workDays: c.workDays })),
+    keptHours,
+    siteCrewHint: await siteCrewHints(db, q, weekEnd),
+    equipment: units.equipment,
+    sites: new Map(fieldRows.map((f) => [f.siteId, { lat: f.siteLat, lng: f.siteLng }])),
+    yard: { lat: district.yardLat, lng: district.yardLng },
+    travel: params.travel,
+    ...(notBefore ? { notBefore } : {}),
+  });
+  const fieldNames = new Map(fieldRows.map((f) => [f.id, f.name]));
+  const words = [...warnings, ...assigned.warnings].map((w) => weekWarningText(w, (id) => fieldNames.get(id)));
+  return { orders: assigned.orders, warnings: [...new Set(words)], crewRows, fieldCount: fieldRows.length };
+}

@@ -1,0 +1,54 @@
+/**
+ * What the week plan engine has to say about a week, as data: the engine returns these and
+ * the words are chosen here, in one place, for whoever shows them.
+ */
+import type { WorkTask } from '../vocabulary.ts';
+
+export type WeekWarning =
+  /** The field is retired: nothing is planned for it. */
+  | { code: 'field_retired'; fieldId: number }
+  /** The station's weather starts after the week (`date`: the week's Sunday): only field checks are planned. */
+  | { code: 'no_weather_before_week'; fieldId: number; date: string }
+  /** The field is closed: only its field check is planned. */
+  | { code: 'field_closed'; fieldId: number }
+  /** Weather on file ends on `date`: growth for the week's last `days` days is projected. */
+  | { code: 'weather_projected'; fieldId: number; date: string; days: number }
+  /** No mowing on record (`date` null), or the last one (`date`) falls after the week began: the one-third rule is assumed kept. */
+  | { code: 'mowing_assumed'; fieldId: number; date: string | null }
+  /** `fields` fields have no station with weather: only their hand-made work is shown. */
+  | { code: 'no_station'; fields: number }
+  /** No crew of the district has working days. */
+  | { code: 'no_crew' }
+  /** A task on a field lands after its latest date (`date`): the crew works no day before it. */
+  | { code: 'due_date_missed'; fieldId: number; date: string; task: WorkTask };
+
+/** The warnings a district's week shows from its fields' plans (the others explain one field only). */
+export const DISTRICT_WEEK_WARNINGS: ReadonlySet<WeekWarning['code']> = new Set(['no_weather_before_week', 'weather_projected']);
+
+/**
+ * The plain-language sentence of a warning, as the district week shows it. `fieldName` names
+ * a field by id (else "field <id>").
+ */
+export function weekWarningText(w: WeekWarning, fieldName: (id: number) => string | undefined = () => undefined): string {
+  const name = (id: number) => fieldName(id) ?? `field ${id}`;
+  switch (w.code) {
+    case 'field_retired':
+      return 'The field is retired: nothing is planned for it.';
+    case 'no_weather_before_week':
+      return 'Some fields have no weather before the week: only field checks are planned for this field.';
+    case 'field_closed':
+      return 'The field is closed: only its field check is planned.';
+    case 'weather_projected':
+      return `Weather on file ends ${w.date}: growth for the last ${w.days} day(s) of the week is projected from the week before.`;
+    case 'mowing_assumed':
+      return w.date
+        ? `The last mowing on record (${w.date}) is after this week began: the plan assumes the one-third rule was kept up to the week.`
+        : 'No mowing on record: the plan assumes the field was mowed as the one-third rule asked before this week.';
+    case 'no_station':
+      return `${w.fields} field(s) have no weather station with data: only their hand-made work is shown. Add weather first.`;
+    case 'no_crew':
+      return 'No crew with working days in this district: every order is left unassigned.';
+    case 'due_date_missed':
+      return `${w.task === 'mow' ? 'Mowing' : 'Work'} on ${name(w.fieldId)} falls after ${w.date}: no working day of the crew before it.`;
+  }
+}
