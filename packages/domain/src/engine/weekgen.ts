@@ -29,10 +29,10 @@ import { defaultTemplateFor, linePlan } from './lines.ts';
 import { longAxis } from '../geometry.ts';
 import { levelIntervalDays, mowTriggerHeightMm, mowerTypeFor, mowingPolicy, simulateMowing } from './mowing.ts';
 import { fieldDailySeries } from './outlook.ts';
-import type { PreparedWeather } from './outlook.ts';
+import type { FieldDailySeries, OutlookField, PreparedWeather } from './outlook.ts';
 import { planRoute } from './routing.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor, levelStandard } from './standards.ts';
-import type { DepartmentParameters, MowerSpec, Standards } from './standards.ts';
+import type { DepartmentParameters, LevelStandard, MowerSpec, PlanningParameters, Standards } from './standards.ts';
 import { irrigationVolumeLitres, weekIrrigation, weeklyIrrigationSchedule } from './water.ts';
 
 /** A field as the week plan needs it. */
@@ -163,281 +163,349 @@ export function mowingHours(field: Pick<PlanField, 'geometry' | 'sport'>, mower:
   return { hours: hoursPerMowingPolygon(field.geometry, mower), method: 'field_capacity' };
 }
 
+/** What every part of one field's week reads, built once per field; `orders` and `warnings` collect in plan order. */
+interface FieldWeekContext {
+  input: FieldWeekInput;
+  field: PlanField;
+  weather: PreparedWeather;
+  weekStart: string;
+  weekEnd: string;
+  dates: string[];
+  /** First day new work can fall on. */
+  start: string;
+  standards: Standards;
+  params: DepartmentParameters;
+  planning: PlanningParameters;
+  std: LevelStandard;
+  level: Level;
+  outlookField: OutlookField;
+  /** First day of weather on file. */
+  first: string | undefined;
+  /** Index of a date in the growth series (may pass the weather's end: projected). */
+  idx: (iso: string) => number;
+  keptOf: (task: WorkTask) => KeptOrder[];
+  orders: AskedOrder[];
+  warnings: WeekWarning[];
+}
+
 /** What one field asks of the crews in the week. */
 export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
   const { field, weather, weekStart, kept } = input;
   const standards = input.standards ?? DEFAULT_STANDARDS;
   const params = input.params ?? DEFAULT_PARAMETERS;
-  const planning = params.planning ?? DEFAULT_PARAMETERS.planning;
   const dates = weekDates(weekStart);
   const weekEnd = dates[6] as string;
   // Days of the week already past cannot take new work: what they asked for moves to `start`.
   const start = input.notBefore && input.notBefore > weekStart ? (input.notBefore < weekEnd ? input.notBefore : weekEnd) : weekStart;
-  const std = levelStandard(field.maintenanceLevel, standards);
   const level = field.maintenanceLevel;
-  const orders: AskedOrder[] = [];
-  const warnings: WeekWarning[] = [];
-  const keptOf = (task: WorkTask) => kept.filter((k) => k.fieldId === field.id && k.task === task && k.status !== 'skipped');
+  const first = weather.dates[0];
+  const day0 = first ? isoToDayNumber(first) : 0;
+  const ctx: FieldWeekContext = {
+    input,
+    field,
+    weather,
+    weekStart,
+    weekEnd,
+    dates,
+    start,
+    standards,
+    params,
+    planning: params.planning ?? DEFAULT_PARAMETERS.planning,
+    std: levelStandard(level, standards),
+    level,
+    outlookField: { id: field.id, areaM2: field.areaM2, sport: field.sport, grass: field.grass, maintenanceLevel: level, hocOverrideMm: field.hocOverrideMm, clippings: field.clippings, irrigation: field.irrigation },
+    first,
+    idx: (iso: string) => isoToDayNumber(iso) - day0,
+    keptOf: (task: WorkTask) => kept.filter((k) => k.fieldId === field.id && k.task === task && k.status !== 'skipped'),
+    orders: [],
+    warnings: [],
+  };
   // A retired field is no longer kept: nothing is asked of it, not even a field check.
   if (field.status === 'retired') return { fieldId: field.id, orders: [], warnings: [{ code: 'field_retired', fieldId: field.id }] };
 
-  const first = weather.dates[0];
-  if (!first || first > weekEnd) {
-    warnings.push({ code: 'no_weather_before_week', fieldId: field.id, date: weekEnd });
-  }
-  const outlookField = { id: field.id, areaM2: field.areaM2, sport: field.sport, grass: field.grass, maintenanceLevel: level, hocOverrideMm: field.hocOverrideMm, clippings: field.clippings, irrigation: field.irrigation };
-  const daily = first && first <= weekEnd ? fieldDailySeries(outlookField, weather, standards, params) : null;
+  if (!first || first > weekEnd) ctx.warnings.push({ code: 'no_weather_before_week', fieldId: field.id, date: weekEnd });
+  const daily = first && first <= weekEnd ? fieldDailySeries(ctx.outlookField, weather, standards, params) : null;
   const open = field.status !== 'closed';
-  if (!open) warnings.push({ code: 'field_closed', fieldId: field.id });
-
-  // Index of each week day in the growth series (may pass the weather's end: projected).
-  const day0 = first ? isoToDayNumber(first) : 0;
-  const idx = (iso: string) => isoToDayNumber(iso) - day0;
-  let weekGp: number | null = null;
+  if (!open) ctx.warnings.push({ code: 'field_closed', fieldId: field.id });
 
   if (daily && open) {
-    // The run looks a week past Sunday so Friday's cut sees the weekend's growth.
-    const horizon = addDaysIso(weekEnd, 7);
-    const { growth, projectedDays: projectedAll } = growthThroughWeek(daily.growthMm, weather, horizon);
-    const projectedDays = Math.max(0, projectedAll - 7);
-    if (projectedDays > 0) warnings.push({ code: 'weather_projected', fieldId: field.id, date: weather.dates[weather.dates.length - 1]!, days: Math.min(7, projectedDays) });
-    const w0 = Math.max(0, idx(weekStart));
-    const gp = daily.gp;
-    let gpSum = 0;
-    let gpN = 0;
-    for (let i = w0; i <= Math.min(idx(weekEnd), gp.length - 1); i++) {
-      gpSum += gp[i] as number;
-      gpN++;
-    }
-    weekGp = gpN ? gpSum / gpN : gp.length ? (gp[gp.length - 1] as number) : 0;
-
-    // Mowing: simulate from the last cut (on record or kept in this week).
-    const hocMm = hocFor(outlookField, standards);
-    const trigger = mowTriggerHeightMm(hocMm);
-    const { spec, mower } = chooseMower(hocMm, input.mowers ?? [], params);
-    const { hours, method } = mowingHours(field, spec);
-    const mowOptions = { ...mowingPolicy(hocMm, std), mowingDays: input.workDays.length ? input.workDays : WEEKDAYS };
-    const keptCuts = new Set(keptOf('mow').map((k) => k.plannedDate));
-    const asked: Array<{ date: string; heightMm: number; reason: 'growth' | 'frequency' | 'overdue'; overdueSince?: string }> = [];
-    // A last cut on or after Monday belongs to a later week than the one planned (planning
-    // back in time): the week is planned as if the rule had been kept up to it.
-    const lastCut = field.lastMowedOn && field.lastMowedOn < weekStart ? field.lastMowedOn : null;
-    let cutIdx = lastCut ? idx(lastCut) : -1;
-    if (cutIdx >= growth.length) cutIdx = growth.length - 1;
-    if (cutIdx < 0 && idx(weekStart) > 0) {
-      // No cut on record since the weather began: assume the field was mowed as the rule
-      // asked until this week (a season run from the first day of weather), not overdue.
-      // The run goes on past the week's start, as the season outlook's does, so a cut late in
-      // the week before sees the weekend's growth exactly as the outlook's run saw it.
-      const season = simulateMowing(hocMm, growth.slice(0, idx(horizon) + 1), hocMm, { ...mowOptions, startDate: first as string });
-      const lastAssumed = season.mowings.filter((m) => m.dayIndex < idx(weekStart)).pop();
-      cutIdx = lastAssumed ? lastAssumed.dayIndex : -1;
-      warnings.push({ code: 'mowing_assumed', fieldId: field.id, date: field.lastMowedOn && !lastCut ? field.lastMowedOn : null });
-    }
-    for (let guard = 0; guard < 20; guard++) {
-      const from = Math.max(0, cutIdx + 1);
-      if (from > idx(weekEnd)) break;
-      // A cut on day c leaves the grass at HOC that morning; day c's growth follows the cut.
-      const startHeight = cutIdx >= 0 && cutIdx < growth.length ? hocMm + (growth[cutIdx] as number) : hocMm;
-      const sim = simulateMowing(hocMm, growth.slice(from, idx(horizon) + 1), startHeight, { ...mowOptions, startDate: addDaysIso(first as string, from), daysSinceCutAtStart: from - cutIdx - 1 });
-      const next = sim.mowings[0];
-      const nextKept = [...keptCuts].filter((d) => idx(d) >= from).sort()[0];
-      if (nextKept && (!next || nextKept <= next.date)) {
-        cutIdx = idx(nextKept);
-        continue;
-      }
-      if (!next || next.date > weekEnd) break;
-      if (next.date < start) {
-        // The rule asked for a cut before now and none is on record: mow first thing.
-        asked.push({ date: start, heightMm: next.heightBeforeMm, reason: 'overdue', overdueSince: next.date });
-        cutIdx = idx(start);
-        continue;
-      }
-      asked.push({ date: next.date, heightMm: next.heightBeforeMm, reason: next.reason });
-      cutIdx = next.dayIndex + from;
-    }
-    for (const a of asked) {
-      const why =
-        a.reason === 'overdue'
-          ? `Overdue: the one-third rule asked for a cut on ${a.overdueSince} and none is on record`
-          : a.reason === 'growth'
-            ? `One-third rule: the grass would pass ${round(trigger, 0)} mm (1.5 × HOC ${round(hocMm, 0)} mm) before the next mowing day`
-            : `Level ${level} (${LEVEL_NAMES[level]}) asks a cut at least every ${levelIntervalDays(std)} days`;
-      orders.push({
-        fieldId: field.id,
-        siteId: field.siteId,
-        task: 'mow',
-        askedDate: a.date,
-        plannedHours: round(hours),
-        reason: why,
-        details: { hocMm: round(hocMm, 3), triggerMm: round(trigger, 1), heightBeforeMm: round(a.heightMm, 1), mowerKind: spec.kind, mowerId: mower?.id ?? null, hoursMethod: method, overdueSince: a.overdueSince ?? null },
-        latestDate: a.date,
-        flexible: false,
-        equipmentKind: 'mower',
-      });
-    }
+    const { growth, weekGp } = weekGrowth(ctx, daily);
+    mowingOrders(ctx, growth);
+    lineOrders(ctx, weekGp);
+    if (weekGp >= ctx.planning.dormantGp && ctx.keptOf('feed').length === 0) feedOrders(ctx, daily);
+    if (daily.share > 0) irrigationOrders(ctx, daily);
   }
+  fieldCheckOrders(ctx);
+  return { fieldId: field.id, orders: ctx.orders, warnings: ctx.warnings };
+}
 
-  // Lines: before bookings, and every repaint interval while the turf grows.
-  const template = std.lineRepaintDays === null ? null : defaultTemplateFor(field.sport);
-  if (daily && open && template && std.lineRepaintDays !== null) {
-    const lp = linePlan(template, params.lines, { days: 1, repaintDays: std.lineRepaintDays });
-    const painted = [field.lastPaintedOn, ...keptOf('paint_lines').map((k) => k.plannedDate)].filter((d): d is string => d !== null).sort();
-    const lastPaintBefore = (d: string) => [...painted].reverse().find((p) => p <= d) ?? null;
-    const firstCoatAfter = planning.firstCoatAfterDays ?? DEFAULT_PARAMETERS.planning.firstCoatAfterDays;
-    const paintOn = (date: string, reason: string, latest: string | null, extra: Record<string, unknown>) => {
-      // A first coat where no lines show any more (none on record, or grown out); else a touch-up.
-      const before = [...painted].reverse().find((p) => p < date) ?? null;
-      const first = before === null || isoToDayNumber(date) - isoToDayNumber(before) > firstCoatAfter;
-      const coat = first ? lp.firstCoat : lp.touchUp;
-      painted.push(date);
-      painted.sort();
-      orders.push({
-        fieldId: field.id,
-        siteId: field.siteId,
-        task: 'paint_lines',
-        askedDate: date,
-        plannedHours: round(coat.hours),
-        reason,
-        details: { template: template.name, coat: first ? 'first' : 'touch_up', lineLengthM: round(lp.lineLengthM, 0), mixedL: round(coat.mixedLitres, 1), paintL: round(coat.concentrateLitres, 1), ...extra },
-        latestDate: latest,
-        flexible: latest === null,
-        equipmentKind: 'line_marker',
-      });
-    };
-    const nextMonday = addDaysIso(weekStart, 7);
-    const events = [...field.events].filter((e) => e.startsOn >= start && e.startsOn <= nextMonday).sort((a, b) => (a.startsOn < b.startsOn ? -1 : a.startsOn > b.startsOn ? 1 : a.id - b.id));
-    for (const e of events) {
-      const last = lastPaintBefore(e.startsOn);
-      if (last && isoToDayNumber(e.startsOn) - isoToDayNumber(last) <= planning.paintFreshDays) continue;
-      let date = addDaysIso(e.startsOn, -planning.paintDaysBeforeEvent);
-      if (date < start) date = start;
-      if (date > weekEnd) continue; // next Monday's booking is painted on this week's days only if in reach
-      paintOn(date, `Lines for ${e.title} on ${dayName(e.startsOn)} ${e.startsOn}`, e.startsOn, { eventId: e.id, eventTitle: e.title, eventOn: e.startsOn });
-    }
-    if ((weekGp ?? 0) >= planning.dormantGp) {
-      const last = lastPaintBefore(weekEnd);
-      const due = last ? addDaysIso(last, std.lineRepaintDays) : weekStart;
-      if (due <= weekEnd) {
-        const date = due < start ? start : due;
-        paintOn(date, last ? `Repaint: level ${level} repaints every ${std.lineRepaintDays} days (last painted ${last})` : `No painting on record: level ${level} keeps lines`, null, {});
-      }
-    }
+/** The growth series through a week past Sunday, and the week's mean growth potential. */
+function weekGrowth(ctx: FieldWeekContext, daily: FieldDailySeries): { growth: number[]; weekGp: number } {
+  const { weather, weekStart, weekEnd, idx } = ctx;
+  // The run looks a week past Sunday so Friday's cut sees the weekend's growth.
+  const { growth, projectedDays: projectedAll } = growthThroughWeek(daily.growthMm, weather, addDaysIso(weekEnd, 7));
+  const projectedDays = Math.max(0, projectedAll - 7);
+  if (projectedDays > 0) ctx.warnings.push({ code: 'weather_projected', fieldId: ctx.field.id, date: weather.dates[weather.dates.length - 1]!, days: Math.min(7, projectedDays) });
+  const w0 = Math.max(0, idx(weekStart));
+  const gp = daily.gp;
+  let gpSum = 0;
+  let gpN = 0;
+  for (let i = w0; i <= Math.min(idx(weekEnd), gp.length - 1); i++) {
+    gpSum += gp[i] as number;
+    gpN++;
   }
+  return { growth, weekGp: gpN ? gpSum / gpN : gp.length ? (gp[gp.length - 1] as number) : 0 };
+}
 
-  // Feed: the plan's application in this week (or one missed in the last fortnight).
-  if (daily && open && (weekGp ?? 0) >= planning.dormantGp && keptOf('feed').length === 0) {
-    const year = Number(weekStart.slice(0, 4));
-    const monthGp: (number | null)[] = new Array<number | null>(12).fill(null);
-    const monthDays = new Array<number>(12).fill(0);
-    weather.dates.forEach((d, i) => {
-      if (Number(d.slice(0, 4)) !== year) return;
-      const m = monthOf(d) - 1;
-      monthGp[m] = (monthGp[m] ?? 0) + (daily.gp[i] as number);
-      monthDays[m] = (monthDays[m] as number) + 1;
+interface AskedCut {
+  date: string;
+  heightMm: number;
+  reason: 'growth' | 'frequency' | 'overdue';
+  overdueSince?: string;
+}
+
+/** Mowing: the one-third rule simulated from the last cut (on record or kept in this week). */
+function mowingOrders(ctx: FieldWeekContext, growth: number[]): void {
+  const { field, std, level, params } = ctx;
+  const hocMm = hocFor(ctx.outlookField, ctx.standards);
+  const trigger = mowTriggerHeightMm(hocMm);
+  const { spec, mower } = chooseMower(hocMm, ctx.input.mowers ?? [], params);
+  const { hours, method } = mowingHours(field, spec);
+  for (const a of askedCuts(ctx, growth, hocMm)) {
+    const why =
+      a.reason === 'overdue'
+        ? `Overdue: the one-third rule asked for a cut on ${a.overdueSince} and none is on record`
+        : a.reason === 'growth'
+          ? `One-third rule: the grass would pass ${round(trigger, 0)} mm (1.5 × HOC ${round(hocMm, 0)} mm) before the next mowing day`
+          : `Level ${level} (${LEVEL_NAMES[level]}) asks a cut at least every ${levelIntervalDays(std)} days`;
+    ctx.orders.push({
+      fieldId: field.id,
+      siteId: field.siteId,
+      task: 'mow',
+      askedDate: a.date,
+      plannedHours: round(hours),
+      reason: why,
+      details: { hocMm: round(hocMm, 3), triggerMm: round(trigger, 1), heightBeforeMm: round(a.heightMm, 1), mowerKind: spec.kind, mowerId: mower?.id ?? null, hoursMethod: method, overdueSince: a.overdueSince ?? null },
+      latestDate: a.date,
+      flexible: false,
+      equipmentKind: 'mower',
     });
-    const meanGp = monthGp.map((g, m) => (g === null ? null : g / (monthDays[m] as number)));
-    const irrigated = daily.share > 0;
-    const annual = annualNitrogen({ grass: field.grass, level, clippings: field.clippings, irrigated }, standards);
-    const product = params.fertiliserProduct;
-    const apps = planNApplications(monthlyNSplitByGp(annual.gPerM2, meanGp), { slowReleaseShare: product.slowReleaseShare, year, params });
-    const fedAfter = field.lastFedOn ? addDaysIso(field.lastFedOn, 14) : null;
-    const app = apps.find((a) => a.date !== null && a.date >= addDaysIso(weekStart, -14) && a.date <= weekEnd && (fedAfter === null || a.date > fedAfter));
-    if (app && app.date) {
-      const need = productForArea(app.nGPerM2, product, field.areaM2, params.fertiliserBagKg, params.costs.fertiliserPerKg);
-      const spreader = planning.spreader;
-      const hours = hoursPerMowing(field.areaM2, spreader) + spreader.setupMin / 60;
-      const date = app.date < start ? start : app.date;
-      orders.push({
-        fieldId: field.id,
-        siteId: field.siteId,
-        task: 'feed',
-        askedDate: date,
-        plannedHours: round(hours),
-        reason: `Feed plan: ${round(app.nGPerM2, 2)} g N/m² planned for ${app.date}${app.date < weekStart ? ' (not yet applied)' : ''}`,
-        details: { nGPerM2: round(app.nGPerM2, 3), product: `${product.n}-${product.p}-${product.k}`, productKg: round(need.productKg, 1), bags: need.bags },
-        latestDate: null,
-        flexible: true,
-        equipmentKind: 'spreader',
-      });
-    }
   }
+}
 
-  // Water: the week's gross need as run times on the allowed days.
-  if (daily && open && daily.share > 0) {
-    let etc = 0;
-    let eff = 0;
-    for (const d of dates) {
-      const i = idx(d);
-      if (i < 0 || i >= daily.etcMm.length) continue;
-      etc += daily.etcMm[i] as number;
-      eff += weather.effectiveRainMm[i] as number;
-    }
-    const week = weekIrrigation(etc, eff, daily.share, daily.du, planning.minIrrigationMm);
-    const gross = week.grossMm;
-    const keptDays = new Set(keptOf('irrigate').map((k) => k.plannedDate));
-    if (week.scheduled) {
-      const irr = { ...DEFAULT_PARAMETERS.irrigation, ...params.irrigation };
-      const schedule = weeklyIrrigationSchedule({ grossMmPerWeek: gross, precipRateMmPerH: irr.precipRateMmPerH, allowedDays: planning.wateringDays, maxRunMinPerCycle: irr.maxRunMinPerCycle, maxCyclesPerDay: irr.maxCyclesPerDay });
-      const runs = schedule.days.map((d) => ({ day: d.day, date: dates[WEEK_FROM_MONDAY.indexOf(d.day)] as string, cycles: d.cycles, minutesPerCycle: round(d.minutesPerCycle, 0), totalMinutes: round(d.totalMinutes, 0) }));
-      const base = { grossMm: round(gross, 1), volumeL: round(irrigationVolumeLitres(schedule.appliedMm, field.areaM2), 0), shortfallMm: round(schedule.shortfallMm, 1) };
-      if (field.irrigation === 'automatic') {
-        if (keptDays.size === 0) {
-          const firstRun = runs.map((r) => r.date).filter((d) => d >= start).sort()[0] ?? start;
-          orders.push({
-            fieldId: field.id,
-            siteId: field.siteId,
-            task: 'irrigate',
-            askedDate: start < firstRun ? start : firstRun,
-            plannedHours: planning.controllerSetHours,
-            reason: `Water budget: ${round(gross, 1)} mm gross this week; set the controller to the run times`,
-            details: { ...base, system: 'automatic', runs },
-            latestDate: firstRun,
-            flexible: false,
-            equipmentKind: null,
-          });
-        }
-      } else {
-        for (const run of runs) {
-          if (keptDays.has(run.date) || run.totalMinutes <= 0 || run.date < start) continue;
-          orders.push({
-            fieldId: field.id,
-            siteId: field.siteId,
-            task: 'irrigate',
-            askedDate: run.date,
-            plannedHours: planning.quickCouplerHoursPerDay,
-            reason: `Water budget: ${round(gross / runs.length, 1)} mm on ${dayName(run.date)} (${run.cycles} × ${run.minutesPerCycle} min, cycle and soak)`,
-            details: { ...base, system: 'quick_coupler', runTimeMin: run.totalMinutes, cycles: run.cycles, minutesPerCycle: run.minutesPerCycle },
-            latestDate: run.date,
-            flexible: false,
-            equipmentKind: null,
-          });
-        }
-      }
-    }
+/** The cuts the rule asks for in the week, stepping from one cut (asked or kept) to the next. */
+function askedCuts(ctx: FieldWeekContext, growth: number[], hocMm: number): AskedCut[] {
+  const { field, weekStart, weekEnd, start, idx } = ctx;
+  const first = ctx.first as string;
+  const horizon = addDaysIso(weekEnd, 7);
+  const mowOptions = { ...mowingPolicy(hocMm, ctx.std), mowingDays: ctx.input.workDays.length ? ctx.input.workDays : WEEKDAYS };
+  const keptCuts = new Set(ctx.keptOf('mow').map((k) => k.plannedDate));
+  const asked: AskedCut[] = [];
+  // A last cut on or after Monday belongs to a later week than the one planned (planning
+  // back in time): the week is planned as if the rule had been kept up to it.
+  const lastCut = field.lastMowedOn && field.lastMowedOn < weekStart ? field.lastMowedOn : null;
+  let cutIdx = lastCut ? idx(lastCut) : -1;
+  if (cutIdx >= growth.length) cutIdx = growth.length - 1;
+  if (cutIdx < 0 && idx(weekStart) > 0) {
+    // No cut on record since the weather began: assume the field was mowed as the rule
+    // asked until this week (a season run from the first day of weather), not overdue.
+    // The run goes on past the week's start, as the season outlook's does, so a cut late in
+    // the week before sees the weekend's growth exactly as the outlook's run saw it.
+    const season = simulateMowing(hocMm, growth.slice(0, idx(horizon) + 1), hocMm, { ...mowOptions, startDate: first });
+    const lastAssumed = season.mowings.filter((m) => m.dayIndex < idx(weekStart)).pop();
+    cutIdx = lastAssumed ? lastAssumed.dayIndex : -1;
+    ctx.warnings.push({ code: 'mowing_assumed', fieldId: field.id, date: field.lastMowedOn && !lastCut ? field.lastMowedOn : null });
   }
+  for (let guard = 0; guard < 20; guard++) {
+    const from = Math.max(0, cutIdx + 1);
+    if (from > idx(weekEnd)) break;
+    // A cut on day c leaves the grass at HOC that morning; day c's growth follows the cut.
+    const startHeight = cutIdx >= 0 && cutIdx < growth.length ? hocMm + (growth[cutIdx] as number) : hocMm;
+    const sim = simulateMowing(hocMm, growth.slice(from, idx(horizon) + 1), startHeight, { ...mowOptions, startDate: addDaysIso(first, from), daysSinceCutAtStart: from - cutIdx - 1 });
+    const next = sim.mowings[0];
+    const nextKept = [...keptCuts].filter((d) => idx(d) >= from).sort()[0];
+    if (nextKept && (!next || nextKept <= next.date)) {
+      cutIdx = idx(nextKept);
+      continue;
+    }
+    if (!next || next.date > weekEnd) break;
+    if (next.date < start) {
+      // The rule asked for a cut before now and none is on record: mow first thing.
+      asked.push({ date: start, heightMm: next.heightBeforeMm, reason: 'overdue', overdueSince: next.date });
+      cutIdx = idx(start);
+      continue;
+    }
+    asked.push({ date: next.date, heightMm: next.heightBeforeMm, reason: next.reason });
+    cutIdx = next.dayIndex + from;
+  }
+  return asked;
+}
 
-  // Field check by the level's frequency.
-  if (keptOf('field_check').length === 0) {
-    const due = field.lastCheckedOn ? addDaysIso(field.lastCheckedOn, std.fieldCheckDays) : weekStart;
+/** Lines: before bookings, and every repaint interval while the turf grows. */
+function lineOrders(ctx: FieldWeekContext, weekGp: number): void {
+  const { field, std, level, planning, weekStart, weekEnd, start } = ctx;
+  const template = std.lineRepaintDays === null ? null : defaultTemplateFor(field.sport);
+  if (!template || std.lineRepaintDays === null) return;
+  const lp = linePlan(template, ctx.params.lines, { days: 1, repaintDays: std.lineRepaintDays });
+  const painted = [field.lastPaintedOn, ...ctx.keptOf('paint_lines').map((k) => k.plannedDate)].filter((d): d is string => d !== null).sort();
+  const lastPaintBefore = (d: string) => [...painted].reverse().find((p) => p <= d) ?? null;
+  const firstCoatAfter = planning.firstCoatAfterDays ?? DEFAULT_PARAMETERS.planning.firstCoatAfterDays;
+  const paintOn = (date: string, reason: string, latest: string | null, extra: Record<string, unknown>) => {
+    // A first coat where no lines show any more (none on record, or grown out); else a touch-up.
+    const before = [...painted].reverse().find((p) => p < date) ?? null;
+    const first = before === null || isoToDayNumber(date) - isoToDayNumber(before) > firstCoatAfter;
+    const coat = first ? lp.firstCoat : lp.touchUp;
+    painted.push(date);
+    painted.sort();
+    ctx.orders.push({
+      fieldId: field.id,
+      siteId: field.siteId,
+      task: 'paint_lines',
+      askedDate: date,
+      plannedHours: round(coat.hours),
+      reason,
+      details: { template: template.name, coat: first ? 'first' : 'touch_up', lineLengthM: round(lp.lineLengthM, 0), mixedL: round(coat.mixedLitres, 1), paintL: round(coat.concentrateLitres, 1), ...extra },
+      latestDate: latest,
+      flexible: latest === null,
+      equipmentKind: 'line_marker',
+    });
+  };
+  const nextMonday = addDaysIso(weekStart, 7);
+  const events = [...field.events].filter((e) => e.startsOn >= start && e.startsOn <= nextMonday).sort((a, b) => (a.startsOn < b.startsOn ? -1 : a.startsOn > b.startsOn ? 1 : a.id - b.id));
+  for (const e of events) {
+    const last = lastPaintBefore(e.startsOn);
+    if (last && isoToDayNumber(e.startsOn) - isoToDayNumber(last) <= planning.paintFreshDays) continue;
+    let date = addDaysIso(e.startsOn, -planning.paintDaysBeforeEvent);
+    if (date < start) date = start;
+    if (date > weekEnd) continue; // next Monday's booking is painted on this week's days only if in reach
+    paintOn(date, `Lines for ${e.title} on ${dayName(e.startsOn)} ${e.startsOn}`, e.startsOn, { eventId: e.id, eventTitle: e.title, eventOn: e.startsOn });
+  }
+  if (weekGp >= planning.dormantGp) {
+    const last = lastPaintBefore(weekEnd);
+    const due = last ? addDaysIso(last, std.lineRepaintDays) : weekStart;
     if (due <= weekEnd) {
       const date = due < start ? start : due;
-      orders.push({
-        fieldId: field.id,
-        siteId: field.siteId,
-        task: 'field_check',
-        askedDate: date,
-        plannedHours: planning.fieldCheckHours,
-        reason: field.lastCheckedOn ? `Level ${level} checks every ${std.fieldCheckDays} days (last ${field.lastCheckedOn})` : 'No field check on record',
-        details: {},
-        latestDate: null,
-        flexible: true,
-        equipmentKind: null,
-      });
+      paintOn(date, last ? `Repaint: level ${level} repaints every ${std.lineRepaintDays} days (last painted ${last})` : `No painting on record: level ${level} keeps lines`, null, {});
     }
   }
+}
 
-  return { fieldId: field.id, orders, warnings };
+/** Mean growth potential of each month of the planned year, over the days of weather on file (null: no day). */
+function monthlyMeanGp(ctx: FieldWeekContext, daily: FieldDailySeries, year: number): (number | null)[] {
+  const monthGp: (number | null)[] = new Array<number | null>(12).fill(null);
+  const monthDays = new Array<number>(12).fill(0);
+  ctx.weather.dates.forEach((d, i) => {
+    if (Number(d.slice(0, 4)) !== year) return;
+    const m = monthOf(d) - 1;
+    monthGp[m] = (monthGp[m] ?? 0) + (daily.gp[i] as number);
+    monthDays[m] = (monthDays[m] as number) + 1;
+  });
+  return monthGp.map((g, m) => (g === null ? null : g / (monthDays[m] as number)));
+}
+
+/** Feed: the plan's application in this week (or one missed in the last fortnight). */
+function feedOrders(ctx: FieldWeekContext, daily: FieldDailySeries): void {
+  const { field, params, planning, weekStart, weekEnd, start } = ctx;
+  const year = Number(weekStart.slice(0, 4));
+  const meanGp = monthlyMeanGp(ctx, daily, year);
+  const irrigated = daily.share > 0;
+  const annual = annualNitrogen({ grass: field.grass, level: ctx.level, clippings: field.clippings, irrigated }, ctx.standards);
+  const product = params.fertiliserProduct;
+  const apps = planNApplications(monthlyNSplitByGp(annual.gPerM2, meanGp), { slowReleaseShare: product.slowReleaseShare, year, params });
+  const fedAfter = field.lastFedOn ? addDaysIso(field.lastFedOn, 14) : null;
+  const app = apps.find((a) => a.date !== null && a.date >= addDaysIso(weekStart, -14) && a.date <= weekEnd && (fedAfter === null || a.date > fedAfter));
+  if (!app || !app.date) return;
+  const need = productForArea(app.nGPerM2, product, field.areaM2, params.fertiliserBagKg, params.costs.fertiliserPerKg);
+  const spreader = planning.spreader;
+  const hours = hoursPerMowing(field.areaM2, spreader) + spreader.setupMin / 60;
+  const date = app.date < start ? start : app.date;
+  ctx.orders.push({
+    fieldId: field.id,
+    siteId: field.siteId,
+    task: 'feed',
+    askedDate: date,
+    plannedHours: round(hours),
+    reason: `Feed plan: ${round(app.nGPerM2, 2)} g N/m² planned for ${app.date}${app.date < weekStart ? ' (not yet applied)' : ''}`,
+    details: { nGPerM2: round(app.nGPerM2, 3), product: `${product.n}-${product.p}-${product.k}`, productKg: round(need.productKg, 1), bags: need.bags },
+    latestDate: null,
+    flexible: true,
+    equipmentKind: 'spreader',
+  });
+}
+
+/** Water: the week's gross need as run times on the allowed days. */
+function irrigationOrders(ctx: FieldWeekContext, daily: FieldDailySeries): void {
+  const { field, params, planning, dates, start, idx } = ctx;
+  let etc = 0;
+  let eff = 0;
+  for (const d of dates) {
+    const i = idx(d);
+    if (i < 0 || i >= daily.etcMm.length) continue;
+    etc += daily.etcMm[i] as number;
+    eff += ctx.weather.effectiveRainMm[i] as number;
+  }
+  const week = weekIrrigation(etc, eff, daily.share, daily.du, planning.minIrrigationMm);
+  if (!week.scheduled) return;
+  const gross = week.grossMm;
+  const keptDays = new Set(ctx.keptOf('irrigate').map((k) => k.plannedDate));
+  const irr = { ...DEFAULT_PARAMETERS.irrigation, ...params.irrigation };
+  const schedule = weeklyIrrigationSchedule({ grossMmPerWeek: gross, precipRateMmPerH: irr.precipRateMmPerH, allowedDays: planning.wateringDays, maxRunMinPerCycle: irr.maxRunMinPerCycle, maxCyclesPerDay: irr.maxCyclesPerDay });
+  const runs = schedule.days.map((d) => ({ day: d.day, date: dates[WEEK_FROM_MONDAY.indexOf(d.day)] as string, cycles: d.cycles, minutesPerCycle: round(d.minutesPerCycle, 0), totalMinutes: round(d.totalMinutes, 0) }));
+  const base = { grossMm: round(gross, 1), volumeL: round(irrigationVolumeLitres(schedule.appliedMm, field.areaM2), 0), shortfallMm: round(schedule.shortfallMm, 1) };
+  if (field.irrigation === 'automatic') {
+    // A controller is set once for the week; a kept setting stands.
+    if (keptDays.size > 0) return;
+    const firstRun = runs.map((r) => r.date).filter((d) => d >= start).sort()[0] ?? start;
+    ctx.orders.push({
+      fieldId: field.id,
+      siteId: field.siteId,
+      task: 'irrigate',
+      askedDate: start < firstRun ? start : firstRun,
+      plannedHours: planning.controllerSetHours,
+      reason: `Water budget: ${round(gross, 1)} mm gross this week; set the controller to the run times`,
+      details: { ...base, system: 'automatic', runs },
+      latestDate: firstRun,
+      flexible: false,
+      equipmentKind: null,
+    });
+    return;
+  }
+  for (const run of runs) {
+    if (keptDays.has(run.date) || run.totalMinutes <= 0 || run.date < start) continue;
+    ctx.orders.push({
+      fieldId: field.id,
+      siteId: field.siteId,
+      task: 'irrigate',
+      askedDate: run.date,
+      plannedHours: planning.quickCouplerHoursPerDay,
+      reason: `Water budget: ${round(gross / runs.length, 1)} mm on ${dayName(run.date)} (${run.cycles} × ${run.minutesPerCycle} min, cycle and soak)`,
+      details: { ...base, system: 'quick_coupler', runTimeMin: run.totalMinutes, cycles: run.cycles, minutesPerCycle: run.minutesPerCycle },
+      latestDate: run.date,
+      flexible: false,
+      equipmentKind: null,
+    });
+  }
+}
+
+/** Field check by the level's frequency. */
+function fieldCheckOrders(ctx: FieldWeekContext): void {
+  const { field, std, weekStart, weekEnd, start } = ctx;
+  if (ctx.keptOf('field_check').length > 0) return;
+  const due = field.lastCheckedOn ? addDaysIso(field.lastCheckedOn, std.fieldCheckDays) : weekStart;
+  if (due > weekEnd) return;
+  const date = due < start ? start : due;
+  ctx.orders.push({
+    fieldId: field.id,
+    siteId: field.siteId,
+    task: 'field_check',
+    askedDate: date,
+    plannedHours: ctx.planning.fieldCheckHours,
+    reason: field.lastCheckedOn ? `Level ${ctx.level} checks every ${std.fieldCheckDays} days (last ${field.lastCheckedOn})` : 'No field check on record',
+    details: {},
+    latestDate: null,
+    flexible: true,
+    equipmentKind: null,
+  });
 }
 
 // ---------------------------------------------------------------------------------------
