@@ -562,6 +562,20 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
   const dates = open.length ? open : week.slice(6);
   const warnings: WeekWarning[] = [];
   const crews = [...input.crews].filter((c) => c.workDays.length > 0).sort((a, b) => a.id - b.id);
+  const crewOfSite = crewsForSites(input, crews, dates);
+  if (crews.length === 0 && input.orders.length > 0) warnings.push({ code: 'no_crew' });
+  const scheduled = input.orders.map((o) => scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings));
+  balanceFlexibleOrders(scheduled, crews, dates, input);
+  for (const s of scheduled) s.equipmentId = suggestEquipment(s, input.equipment ?? []);
+  scheduled.sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : a.siteId - b.siteId || a.fieldId - b.fieldId || (a.task < b.task ? -1 : a.task > b.task ? 1 : 0)));
+  return { orders: scheduled, warnings: [...new Map(warnings.map((w) => [JSON.stringify(w), w])).values()] };
+}
+
+/**
+ * One crew per site, largest sites first: the crew that knows the site when it has room,
+ * else the one whose week would be least full. Kept hours count as load from the start.
+ */
+function crewsForSites(input: AssignInput, crews: readonly PlanCrewInput[], dates: readonly string[]): Map<number, PlanCrewInput | null> {
   const bySite = new Map<number, AskedOrder[]>();
   for (const o of input.orders) {
     const list = bySite.get(o.siteId) ?? [];
@@ -584,51 +598,50 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
     let chosen: PlanCrewInput | null = null;
     if (hinted && (load.get(hinted.id) as number) + h <= weekHours(hinted) + 1e-9) chosen = hinted;
     if (!chosen) {
-      let best: PlanCrewInput | null = null;
       let bestShare = Infinity;
       for (const c of crews) {
         const share = ((load.get(c.id) as number) + h) / Math.max(1e-9, weekHours(c));
         if (share < bestShare - 1e-12) {
-          best = c;
+          chosen = c;
           bestShare = share;
         }
       }
-      chosen = best;
     }
     crewOfSite.set(siteId, chosen);
     if (chosen) load.set(chosen.id, (load.get(chosen.id) as number) + h);
   }
-  if (crews.length === 0 && input.orders.length > 0) warnings.push({ code: 'no_crew' });
+  return crewOfSite;
+}
 
-  // Days.
-  const scheduled: ScheduledOrder[] = [];
-  for (const o of input.orders) {
-    const crew = crewOfSite.get(o.siteId) ?? null;
-    let date = o.askedDate;
-    if (crew) {
-      const works = (d: string) => crew.workDays.includes(weekdayOf(d));
-      const latest = o.latestDate ?? o.askedDate;
-      const onOrBefore = dates.filter((d) => d <= latest && d >= o.askedDate && works(d)).pop() ?? dates.filter((d) => d <= latest && works(d)).pop();
-      const after = dates.find((d) => d > latest && works(d));
-      date = onOrBefore ?? after ?? o.askedDate;
-      if (!onOrBefore && after && o.latestDate) warnings.push({ code: 'due_date_missed', fieldId: o.fieldId, date: o.latestDate, task: o.task });
-    }
-    scheduled.push({ ...o, plannedDate: date, crewId: crew?.id ?? null, equipmentId: null });
+/** The crew's latest working day in [asked, latest], else on or before latest, else the first after (noted as a missed due date). */
+function scheduleOrder(o: AskedOrder, crew: PlanCrewInput | null, dates: readonly string[], warnings: WeekWarning[]): ScheduledOrder {
+  let date = o.askedDate;
+  if (crew) {
+    const works = (d: string) => crew.workDays.includes(weekdayOf(d));
+    const latest = o.latestDate ?? o.askedDate;
+    const onOrBefore = dates.filter((d) => d <= latest && d >= o.askedDate && works(d)).pop() ?? dates.filter((d) => d <= latest && works(d)).pop();
+    const after = dates.find((d) => d > latest && works(d));
+    date = onOrBefore ?? after ?? o.askedDate;
+    if (!onOrBefore && after && o.latestDate) warnings.push({ code: 'due_date_missed', fieldId: o.fieldId, date: o.latestDate, task: o.task });
   }
+  return { ...o, plannedDate: date, crewId: crew?.id ?? null, equipmentId: null };
+}
 
-  // Move flexible orders off overloaded days. Each crew-day's hours (work + a load/unload
-  // per site) are kept up to date in a map as orders move.
+/**
+ * Each crew-day's hours (work + a load/unload per site), kept up to date as orders move,
+ * so a move sees the days as they stand after the moves before it.
+ */
+function crewDayLedger(keptHours: ReadonlyMap<string, number> | undefined, unload: number) {
   const days = new Map<string, { hours: number; sites: Map<number, number> }>();
   const dayOf = (crewId: number, date: string) => {
     const key = `${crewId}|${date}`;
     let d = days.get(key);
     if (!d) {
-      d = { hours: input.keptHours?.get(key) ?? 0, sites: new Map() };
+      d = { hours: keptHours?.get(key) ?? 0, sites: new Map() };
       days.set(key, d);
     }
     return d;
   };
-  const unload = input.travel.loadUnloadMin / 60;
   const place = (s: ScheduledOrder, sign: 1 | -1) => {
     if (s.crewId === null) return;
     const d = dayOf(s.crewId, s.plannedDate);
@@ -641,6 +654,13 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
     const d = dayOf(crewId, date);
     return d.hours + d.sites.size * unload;
   };
+  return { place, dayHours };
+}
+
+/** Moves flexible orders, largest first, off days over the crew's hours onto its lightest day that can take them. */
+function balanceFlexibleOrders(scheduled: ScheduledOrder[], crews: readonly PlanCrewInput[], dates: readonly string[], input: AssignInput): void {
+  const unload = input.travel.loadUnloadMin / 60;
+  const { place, dayHours } = crewDayLedger(input.keptHours, unload);
   for (const s of scheduled) place(s, 1);
   const byCrewDay = new Map<string, ScheduledOrder[]>();
   for (const s of scheduled) {
@@ -672,21 +692,19 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
       }
     }
   }
+}
 
-  // Equipment: the crew's own unit of the kind first, then the district pool.
-  for (const s of scheduled) {
-    if (!s.equipmentKind) continue;
-    const hoc = typeof s.details.hocMm === 'number' ? s.details.hocMm : null;
-    const kind = s.details.mowerKind;
-    const candidates = (input.equipment ?? []).filter(
-      (e) => e.kind === s.equipmentKind && (e.kind !== 'mower' || ((kind === undefined || e.mowerKind === kind) && (hoc === null || ((e.hocMinMm ?? 0) <= hoc + 1e-9 && (e.hocMaxMm ?? Infinity) >= hoc - 1e-9)))),
-    );
-    const own = candidates.filter((e) => e.crewId === s.crewId && s.crewId !== null).sort((a, b) => a.id - b.id)[0];
-    const pool = candidates.filter((e) => e.crewId === null).sort((a, b) => a.id - b.id)[0];
-    s.equipmentId = (own ?? pool)?.id ?? null;
-  }
-  scheduled.sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : a.siteId - b.siteId || a.fieldId - b.fieldId || (a.task < b.task ? -1 : a.task > b.task ? 1 : 0)));
-  return { orders: scheduled, warnings: [...new Map(warnings.map((w) => [JSON.stringify(w), w])).values()] };
+/** Equipment: the crew's own unit of the kind first, then the district pool; a mower must fit the kind and HOC asked. */
+function suggestEquipment(s: ScheduledOrder, equipment: readonly PlanEquipment[]): number | null {
+  if (!s.equipmentKind) return s.equipmentId;
+  const hoc = typeof s.details.hocMm === 'number' ? s.details.hocMm : null;
+  const kind = s.details.mowerKind;
+  const candidates = equipment.filter(
+    (e) => e.kind === s.equipmentKind && (e.kind !== 'mower' || ((kind === undefined || e.mowerKind === kind) && (hoc === null || ((e.hocMinMm ?? 0) <= hoc + 1e-9 && (e.hocMaxMm ?? Infinity) >= hoc - 1e-9)))),
+  );
+  const own = candidates.filter((e) => e.crewId === s.crewId && s.crewId !== null).sort((a, b) => a.id - b.id)[0];
+  const pool = candidates.filter((e) => e.crewId === null).sort((a, b) => a.id - b.id)[0];
+  return (own ?? pool)?.id ?? null;
 }
 
 /** One crew-day as the board shows it. */
