@@ -76,8 +76,48 @@ interface StationSeries {
 }
 
 async function buildMap(ctx: Ctx, requested: string): Promise<MapAnswer> {
+  const rows = await loadMapRows(ctx);
+  const visibleSites = rows.sites.filter((s) => can(ctx, 'read', 'Site', s));
+  const visibleFields = rows.fields.filter((f) => can(ctx, 'read', 'Field', f));
+  const standardsTable = standardsFrom(rows.standards);
+  const withWeather = rows.stations.filter((s) => s.latest !== null);
+  const day = mapDay(withWeather, requested);
+  let weatherNote = day.weatherNote;
+
+  // Nearest station (great-circle distance) with weather, per site.
+  const stationOfSite = new Map<number, number>();
+  for (const s of rows.sites) {
+    const best = nearestStation(withWeather, s);
+    if (best) stationOfSite.set(s.id, best.id);
+  }
+  const growth = await growthForFields(ctx.db, visibleFields, stationOfSite, day.asOf);
+  let gapDays = 0;
+  const out: MapField[] = visibleFields.map((f) => {
+    const hocMm = hocFor({ sport: f.sport, grass: f.grass as Grass, maintenanceLevel: f.maintenanceLevel as Level, hocOverrideMm: f.hocOverrideMm }, standardsTable);
+    const days = f.lastMowedOn ? isoToDayNumber(day.asOf) - isoToDayNumber(f.lastMowedOn) : null;
+    const stationId = stationOfSite.get(f.siteId);
+    const height = days !== null && day.latestWeather !== null && stationId !== undefined ? heightSinceMowing(f, days, hocMm, growth?.get(stationId), day.asOf) : NO_HEIGHT;
+    gapDays = Math.max(gapDays, height.daysWithoutWeather);
+    return toMapField(f, hocMm, days, height);
+  });
+  if (gapDays > 0) {
+    const gap = `Some fields were last mowed before the first day with weather: up to ${gapDays} days without weather add no growth, so their heights are low estimates.`;
+    weatherNote = weatherNote ? `${weatherNote} ${gap}` : gap;
+  }
+
+  return {
+    asOf: day.asOf,
+    requested,
+    weatherNote,
+    districts: rows.districts.filter((d) => can(ctx, 'read', 'District', d)).map((d) => ({ ...d, boundary: compact(d.boundary) })),
+    sites: visibleSites,
+    fields: out,
+  };
+}
+
+/** The rows the map is built from, in scope for the caller; PGlite takes them one query at a time. */
+async function loadMapRows(ctx: Ctx) {
   const { db } = ctx;
-  const scope = siteScope(ctx.actor);
   const dScope = districtScope(ctx.actor);
   const districtCond: SQL | undefined = dScope === 'all' ? undefined : dScope.length ? inArray(districts.id, dScope) : sql`false`;
 
@@ -92,7 +132,7 @@ async function buildMap(ctx: Ctx, requested: string): Promise<MapAnswer> {
   const siteRows = await db
     .select({ id: sites.id, name: sites.name, kind: sites.kind, districtId: sites.districtId, lat: sites.lat, lng: sites.lng })
     .from(sites)
-    .where(scope)
+    .where(siteScope(ctx.actor))
     .orderBy(asc(sites.name));
   const fieldRows = await db
     .with(latest)
@@ -127,95 +167,70 @@ async function buildMap(ctx: Ctx, requested: string): Promise<MapAnswer> {
     .leftJoin(weatherDays, eq(weatherDays.stationId, weatherStations.id))
     .groupBy(weatherStations.id)
     .orderBy(asc(weatherStations.id));
+  return { districts: districtRows, sites: siteRows, fields: fieldRows, standards: standardRows, stations: stationRows };
+}
 
-  const visibleSites = siteRows.filter((s) => can(ctx, 'read', 'Site', s));
-  const visibleFields = fieldRows.filter((f) => can(ctx, 'read', 'Field', f));
-  const standardsTable = standardsFrom(standardRows);
+type MapFieldRow = Awaited<ReturnType<typeof loadMapRows>>['fields'][number];
 
-  // The day the map describes: the day asked for, or the latest day with weather before it.
-  const withWeather = stationRows.filter((s) => s.latest !== null);
+/** The day the map describes: the day asked for, or the latest day with weather before it (said in the note). */
+function mapDay(withWeather: readonly StationSeries[], requested: string): { asOf: string; latestWeather: string | null; weatherNote: string | null } {
   const latestWeather = withWeather.reduce<string | null>((m, s) => (m === null || s.latest! > m ? s.latest : m), null);
-  let asOf = requested;
-  let weatherNote: string | null = null;
-  if (latestWeather === null) {
-    weatherNote = 'No weather is recorded yet, so overdue mowing cannot be predicted.';
-  } else if (latestWeather < requested) {
-    asOf = latestWeather;
-    weatherNote = `No weather after ${latestWeather}: heights and overdue flags are as of ${latestWeather}, the latest day with weather, not ${requested}.`;
+  if (latestWeather === null) return { asOf: requested, latestWeather, weatherNote: 'No weather is recorded yet, so overdue mowing cannot be predicted.' };
+  if (latestWeather < requested) {
+    return { asOf: latestWeather, latestWeather, weatherNote: `No weather after ${latestWeather}: heights and overdue flags are as of ${latestWeather}, the latest day with weather, not ${requested}.` };
   }
+  return { asOf: requested, latestWeather, weatherNote: null };
+}
 
-  // Nearest station (great-circle distance) with weather, per site.
-  const stationOfSite = new Map<number, number>();
-  for (const s of siteRows) {
-    const best = nearestStation(withWeather, s);
-    if (best) stationOfSite.set(s.id, best.id);
-  }
-
+/** Daily growth of the stations the visible fields use, from the earliest last mowing; null when no field needs any. */
+async function growthForFields(db: Ctx['db'], visibleFields: readonly MapFieldRow[], stationOfSite: ReadonlyMap<number, number>, asOf: string): Promise<Map<number, GrowthTable> | null> {
   const mowed = visibleFields.map((f) => f.lastMowedOn).filter((d): d is string => d !== null && d < asOf);
   const from = mowed.length ? mowed.reduce((a, b) => (a < b ? a : b)) : null;
   const usedStations = [...new Set(visibleFields.map((f) => stationOfSite.get(f.siteId)).filter((id): id is number => id !== undefined))];
-  const growth = from && usedStations.length ? await growthTables(db, usedStations, from, asOf) : null;
-  let gapDays = 0;
+  return from && usedStations.length ? growthTables(db, usedStations, from, asOf) : null;
+}
 
-  const out: MapField[] = visibleFields.map((f) => {
-    const level = f.maintenanceLevel as Level;
-    const grass = f.grass as Grass;
-    const hocMm = hocFor({ sport: f.sport, grass, maintenanceLevel: level, hocOverrideMm: f.hocOverrideMm }, standardsTable);
-    const days = f.lastMowedOn ? isoToDayNumber(asOf) - isoToDayNumber(f.lastMowedOn) : null;
-    let predicted: number | null = null;
-    let overdue: boolean | null = null;
-    let overdueSince: string | null = null;
-    const stationId = stationOfSite.get(f.siteId);
-    if (days !== null && latestWeather !== null && stationId !== undefined) {
-      if (days <= 0 || !growth) {
-        predicted = hocMm;
-        overdue = false;
-      } else {
-        const table = growth.get(stationId)!;
-        const r = grownSince(table, grass, f.lastMowedOn!, asOf, hocMm);
-        gapDays = Math.max(gapDays, r.daysWithoutWeather);
-        predicted = round1(r.heightMm);
-        overdueSince = r.overdueSince;
-        overdue = overdueSince !== null;
-      }
-    }
-    return {
-      id: f.id,
-      siteId: f.siteId,
-      districtId: f.districtId,
-      name: f.name,
-      sport: f.sport,
-      grass: f.grass,
-      maintenanceLevel: f.maintenanceLevel,
-      status: f.status,
-      areaM2: Math.round(f.areaM2),
-      longAxisDeg: f.longAxisDeg === null ? null : round1(f.longAxisDeg),
-      eastWest: f.longAxisDeg !== null && Math.min(f.longAxisDeg, 180 - f.longAxisDeg) > 45,
-      score: f.score,
-      scoredOn: f.scoredOn,
-      lastMowedOn: f.lastMowedOn,
-      daysSinceMowing: days,
-      // Exact to 0.001 mm so an eighth of an inch (31.75 mm = 1¼ in) reads back as set.
-      hocMm: Math.round(hocMm * 1000) / 1000,
-      predictedHeightMm: predicted,
-      overdue,
-      overdueSince,
-      version: f.version,
-      geometry: compact(f.geometry),
-    };
-  });
-  if (gapDays > 0) {
-    const gap = `Some fields were last mowed before the first day with weather: up to ${gapDays} days without weather add no growth, so their heights are low estimates.`;
-    weatherNote = weatherNote ? `${weatherNote} ${gap}` : gap;
-  }
+interface FieldHeight {
+  predicted: number | null;
+  overdue: boolean | null;
+  overdueSince: string | null;
+  daysWithoutWeather: number;
+}
 
+/** Unknown height: no mowing on record, or no station with weather near the field. */
+const NO_HEIGHT: FieldHeight = { predicted: null, overdue: null, overdueSince: null, daysWithoutWeather: 0 };
+
+/** The grass height grown since the last mowing and whether the one-third rule is overdue; a cut today (or no growth to run) leaves HOC. */
+function heightSinceMowing(f: MapFieldRow, days: number, hocMm: number, table: GrowthTable | undefined, asOf: string): FieldHeight {
+  if (days <= 0 || !table) return { predicted: hocMm, overdue: false, overdueSince: null, daysWithoutWeather: 0 };
+  const r = grownSince(table, f.grass as Grass, f.lastMowedOn!, asOf, hocMm);
+  return { predicted: round1(r.heightMm), overdue: r.overdueSince !== null, overdueSince: r.overdueSince, daysWithoutWeather: r.daysWithoutWeather };
+}
+
+function toMapField(f: MapFieldRow, hocMm: number, days: number | null, height: FieldHeight): MapField {
   return {
-    asOf,
-    requested,
-    weatherNote,
-    districts: districtRows.filter((d) => can(ctx, 'read', 'District', d)).map((d) => ({ ...d, boundary: compact(d.boundary) })),
-    sites: visibleSites,
-    fields: out,
+    id: f.id,
+    siteId: f.siteId,
+    districtId: f.districtId,
+    name: f.name,
+    sport: f.sport,
+    grass: f.grass,
+    maintenanceLevel: f.maintenanceLevel,
+    status: f.status,
+    areaM2: Math.round(f.areaM2),
+    longAxisDeg: f.longAxisDeg === null ? null : round1(f.longAxisDeg),
+    eastWest: f.longAxisDeg !== null && Math.min(f.longAxisDeg, 180 - f.longAxisDeg) > 45,
+    score: f.score,
+    scoredOn: f.scoredOn,
+    lastMowedOn: f.lastMowedOn,
+    daysSinceMowing: days,
+    // Exact to 0.001 mm so an eighth of an inch (31.75 mm = 1¼ in) reads back as set.
+    hocMm: Math.round(hocMm * 1000) / 1000,
+    predictedHeightMm: height.predicted,
+    overdue: height.overdue,
+    overdueSince: height.overdueSince,
+    version: f.version,
+    geometry: compact(f.geometry),
   };
 }
 
