@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { dateRangeQuerySchema, generateWeekSchema, idSchema, weekQuerySchema } from '@swardwise/domain';
-import type { AppDeps } from '../app.ts';
+import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { getRecords } from '../services/records.ts';
