@@ -12,6 +12,5 @@ export * from './feed.ts';
 export * from './lines.ts';
 export * from './grading.ts';
 export * from './outlook.ts';
-export * from './weekplan.ts';
 export * from './cautions.ts';
 export * from './weekgen.ts';
