@@ -1,7 +1,8 @@
 /**
  * Engine benchmark: a season outlook for 3,000 synthetic fields over 365 days of synthetic
- * weather, then week plans (weekly labour + routing) for 40 crews. All data is invented and
- * generated from a fixed seed. Run: node --import tsx tests/bench/engine.ts
+ * weather, then a week's mowings assigned to 40 crews and days (`assignWeek`) and each
+ * crew-day routed (`crewDayLoads`). All data is invented and generated from a fixed seed.
+ * Run: node --import tsx tests/bench/engine.ts
  */
 import { performance } from 'node:perf_hooks';
 import { GRASSES, SPORTS } from '@swardwise/domain';
@@ -98,20 +99,32 @@ function seasonOutlook(): { outlooks: e.FieldOutlook[]; prepMs: number } {
   return { outlooks, prepMs };
 }
 
-function weekPlans(outlooks: readonly e.FieldOutlook[]): e.CrewWeekPlan[] {
-  const siteById = new Map(sites.map((s) => [s.id, s]));
-  const jobsByCrew: e.PlanJob[][] = Array.from({ length: CREWS }, () => []);
+const WEEK = '2025-06-16';
+const YARD = { lat: 37.05, lng: -88.95 };
+
+/** One district's week the way the week plan runs it: mowings to crews and days, then each crew-day routed. */
+function districtWeek(districtId: number, outlooks: readonly e.FieldOutlook[]): e.CrewDayLoad[] {
+  const crews = Array.from({ length: CREWS }, (_, c) => c + 1)
+    .filter((id) => (id % DISTRICTS) + 1 === districtId)
+    .map((id) => ({ id, hoursPerDay: 4 * e.DEFAULT_PARAMETERS.crewHoursPerWeek / 5, workDays: ['mon', 'tue', 'wed', 'thu', 'fri'] as const }));
+  const orders: e.AskedOrder[] = [];
   outlooks.forEach((o, i) => {
     const f = fields[i]!;
-    const site = siteById.get(f.siteId)!;
+    if (f.districtId !== districtId) return;
     const mower = e.DEFAULT_PARAMETERS.mowers[o.mowerKind];
     // A mid-season week: the field's average mowings per week, at least one.
     const cuts = Math.max(1, Math.round(o.mowingsPerWeek));
-    jobsByCrew[f.siteId % CREWS]!.push({ id: f.id, siteId: site.id, site, hours: cuts * e.hoursPerMowing(f.areaM2, mower) });
+    const plannedHours = cuts * e.hoursPerMowing(f.areaM2, mower);
+    orders.push({ fieldId: i + 1, siteId: f.siteId, task: 'mow', askedDate: WEEK, plannedHours, reason: '', details: {}, latestDate: null, flexible: true, equipmentKind: null });
   });
-  return jobsByCrew.map((jobs, c) =>
-    e.planCrewWeek({ id: c + 1, yard: { lat: 37.05, lng: -88.95 }, days: ['mon', 'tue', 'wed', 'thu', 'fri'], availableHours: 4 * e.DEFAULT_PARAMETERS.crewHoursPerWeek }, jobs, e.DEFAULT_PARAMETERS.travel),
-  );
+  const sitePoints = new Map(sites.map((s) => [s.id, { lat: s.lat, lng: s.lng }]));
+  const travel = e.DEFAULT_PARAMETERS.travel;
+  const assigned = e.assignWeek({ weekStart: WEEK, orders, crews, sites: sitePoints, yard: YARD, travel });
+  return e.crewDayLoads(assigned.orders.map((o, id) => ({ ...o, id })), crews, sitePoints, YARD, travel, WEEK);
+}
+
+function weekPlans(outlooks: readonly e.FieldOutlook[]): e.CrewDayLoad[] {
+  return Array.from({ length: DISTRICTS }, (_, d) => districtWeek(d + 1, outlooks)).flat();
 }
 
 const outlookMs: number[] = [];
@@ -120,7 +133,7 @@ const outlookCpuMs: number[] = [];
 const prepMs: number[] = [];
 const planMs: number[] = [];
 let lastOutlooks: e.FieldOutlook[] = [];
-let lastPlans: e.CrewWeekPlan[] = [];
+let lastPlans: e.CrewDayLoad[] = [];
 (globalThis as { gc?: () => void }).gc?.();
 const mem0 = process.memoryUsage();
 for (let r = 0; r < RUNS; r++) {
@@ -141,8 +154,8 @@ for (let r = 0; r < RUNS; r++) {
 const mem1 = process.memoryUsage();
 
 const agg = e.aggregateOutlooks(lastOutlooks);
-const overloaded = lastPlans.filter((p) => p.load.overloaded).length;
-const stops = lastPlans.reduce((s, p) => s + p.days.reduce((t, d) => t + d.siteOrder.length, 0), 0);
+const overloaded = new Set(lastPlans.filter((d) => d.overloaded).map((d) => d.crewId)).size;
+const stops = lastPlans.reduce((s, d) => s + d.route.length, 0);
 console.log(`engine bench: ${FIELDS} fields, ${sites.length} sites with their own 365-day weather, ${CREWS} crews; median of ${RUNS} runs`);
 console.log(`  season outlook (incl. weather prep): ${median(outlookMs).toFixed(0)} ms  (CPU ${median(outlookCpuMs).toFixed(0)} ms; weather prep ${median(prepMs).toFixed(0)} ms, ${sites.length * 365} FAO-56 PM days)`);
 console.log(`  week plans + routing, 40 crews:      ${median(planMs).toFixed(1)} ms  (${stops} site visits routed, ${overloaded} crews overloaded)`);

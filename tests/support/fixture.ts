@@ -59,7 +59,7 @@ export interface Fixture {
 }
 
 /** Weather of the test city: a few weeks of invented, steadily warming late-spring days. */
-export const FIXTURE_WEATHER = { start: '2026-05-04', days: 35 } as const;
+const FIXTURE_WEATHER = { start: '2026-05-04', days: 35 } as const;
 
 export async function buildFixture(db: Db): Promise<Fixture> {
   const [north] = await db

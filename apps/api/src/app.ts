@@ -9,12 +9,10 @@ import express, { type Express } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
-import type { Logger } from 'pino';
 import { appError } from '@swardwise/domain';
+import type { AppDeps } from './app-deps.ts';
 import type { Config } from './config.ts';
-import type { Db } from './db/client.ts';
 import { createMailer, type Mailer } from './mail/mailer.ts';
-import type { MailSink } from './mail/sink.ts';
 import { loadUser, requireUser } from './http/auth.ts';
 import { withClock } from './http/clock.ts';
 import { errorHandler, noRoute } from './http/errors.ts';
@@ -34,29 +32,16 @@ import { fieldEventsRouter } from './routes/field-events.ts';
 import { fieldsRouter } from './routes/fields.ts';
 import { importsRouter } from './routes/imports.ts';
 import { mapRouter } from './routes/map.ts';
+import { recordsRouter } from './routes/records.ts';
 import { settingsRouter } from './routes/settings.ts';
 import { sitesRouter } from './routes/sites.ts';
 import { standardsRouter } from './routes/standards.ts';
 import { usersRouter } from './routes/users.ts';
 import { weatherRouter } from './routes/weather.ts';
-import { recordsRouter, weekPlansRouter } from './routes/week-plans.ts';
+import { weekPlansRouter } from './routes/week-plans.ts';
 import { workOrdersRouter } from './routes/work-orders.ts';
 import { workReportsRouter } from './routes/work-reports.ts';
 import { DepartmentClock } from './services/clock.ts';
-
-export interface AppDeps {
-  db: Db;
-  config: Config & { cookieName: string };
-  logger: Logger;
-  sessionSecret: string;
-  mailer: Mailer;
-  /** The local SMTP sink, when this process runs one (development and tests only). */
-  mailSink?: MailSink | undefined;
-  /** The department clock (its time zone a setting); tests pass one standing at a chosen instant. */
-  clock: DepartmentClock;
-  /** Work finished after the answer (password-reset look-ups and e-mail). */
-  background: BackgroundTasks;
-}
 
 export const COOKIE_NAME = 'swardwise.sid';
 /** JSON bodies: a signed-in user's edits (field outlines) may be large; nobody else's need be. */

@@ -18,7 +18,7 @@ export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 /** A service runs on the database or inside a caller's transaction. */
 export type Queryable = Db | Tx;
 
-export const migrationsFolder = path.join(path.dirname(fileURLToPath(import.meta.url)), 'migrations');
+const migrationsFolder = path.join(path.dirname(fileURLToPath(import.meta.url)), 'migrations');
 
 export interface Database {
   db: Db;

@@ -48,7 +48,7 @@ const errorResponses = Object.fromEntries(
 ) as unknown as Record<ErrorStatus, ZodOpenApiResponseObject>;
 
 /** The failures a route can answer with: those of its kind, and its own. */
-export function errorsOf(route: RouteDoc): ErrorStatus[] {
+function errorsOf(route: RouteDoc): ErrorStatus[] {
   const statuses = new Set<ErrorStatus>(route.errors ?? []);
   if (route.params || route.query || route.body || route.upload) statuses.add(400);
   if (route.body || route.upload) statuses.add(413);

@@ -3,7 +3,7 @@ import { Router } from 'express';
 import { ipKeyGenerator, rateLimit, type Options } from 'express-rate-limit';
 import { AppError, acceptInviteSchema, forgotPasswordSchema, resetPasswordSchema, signInSchema, updateProfileSchema, appError } from '@swardwise/domain';
 import type { Request } from 'express';
-import type { AppDeps } from '../app.ts';
+import type { AppDeps } from '../app-deps.ts';
 import { users } from '../db/schema/index.ts';
 import { ctxOf, requireUser } from '../http/auth.ts';
 import { capSessionExpiry } from '../http/session-lifetime.ts';

@@ -2,7 +2,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { createCrewSchema, createEquipmentSchema, idParamSchema, idSchema, updateCrewSchema, updateEquipmentSchema, versionSchema } from '@swardwise/domain';
-import type { AppDeps } from '../app.ts';
+import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { createCrew, deleteCrew, listCrews, updateCrew } from '../services/crews.ts';

@@ -1,6 +1,6 @@
 /** Developer-only routes, mounted only when this process runs the local mail sink (never in production). */
 import { Router } from 'express';
-import type { AppDeps } from '../app.ts';
+import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { authorize } from '../services/context.ts';
 

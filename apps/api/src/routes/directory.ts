@@ -2,7 +2,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { idSchema } from '@swardwise/domain';
-import type { AppDeps } from '../app.ts';
+import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { listAudit } from '../services/audit.ts';

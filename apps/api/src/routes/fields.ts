@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { createFieldSchema, idParamSchema, listQuerySchema, needsQuerySchema, updateFieldSchema, versionSchema } from '@swardwise/domain';
-import type { AppDeps } from '../app.ts';
+import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { createField, deleteField, getField, listFieldsJson, updateField } from '../services/fields.ts';

@@ -1,7 +1,7 @@
 /** Department settings (the time zone); administrators only. */
 import { Router } from 'express';
 import { updateDepartmentSettingsSchema } from '@swardwise/domain';
-import type { AppDeps } from '../app.ts';
+import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { authorize } from '../services/context.ts';

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { createSiteSchema, idParamSchema, listQuerySchema, updateSiteSchema } from '@swardwise/domain';
-import type { AppDeps } from '../app.ts';
+import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { listFields } from '../services/fields.ts';

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { levelParamSchema, updateLevelStandardSchema, type Level } from '@swardwise/domain';
-import type { AppDeps } from '../app.ts';
+import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { listStandards, updateLevelStandard } from '../services/standards.ts';

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { idParamSchema, inviteUserSchema, updateUserSchema } from '@swardwise/domain';
-import type { AppDeps } from '../app.ts';
+import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { ROLE_LABELS } from '@swardwise/domain';

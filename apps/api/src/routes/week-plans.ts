@@ -1,9 +1,8 @@
 import { Router } from 'express';
-import { dateRangeQuerySchema, generateWeekSchema, idSchema, weekQuerySchema } from '@swardwise/domain';
-import type { AppDeps } from '../app.ts';
+import { generateWeekSchema, idSchema, weekQuerySchema } from '@swardwise/domain';
+import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { getRecords } from '../services/records.ts';
 import { confirmWeek, generateWeek, getWeekBoard } from '../services/week-plans.ts';
 import { writeDeps } from './work-orders.ts';
 
@@ -23,12 +22,3 @@ export function weekPlansRouter(deps: AppDeps): Router {
   });
   return router;
 }
-
-export function recordsRouter({ db }: AppDeps): Router {
-  const router = Router();
-  router.get('/', async (req, res) => {
-    res.json(await getRecords(ctxOf(db, req), parse(dateRangeQuerySchema, req.query, 'query')));
-  });
-  return router;
-}
-

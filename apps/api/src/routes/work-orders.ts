@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { addDaysIso, createWorkOrderSchema, idParamSchema, idSchema, isoDateSchema, updateWorkOrderSchema, versionSchema } from '@swardwise/domain';
-import type { AppDeps } from '../app.ts';
+import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { createWorkOrder, deleteWorkOrder, listWorkOrders, updateWorkOrder, type WriteDeps } from '../services/work-orders.ts';

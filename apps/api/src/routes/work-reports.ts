@@ -2,7 +2,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { idParamSchema, idSchema, workReportSchema, appError } from '@swardwise/domain';
-import type { AppDeps } from '../app.ts';
+import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';

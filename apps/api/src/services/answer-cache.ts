@@ -12,7 +12,7 @@ import type { Ctx } from './context.ts';
  * Changes whenever a field, check, weather day, station, Standards row, site, district or work
  * order is written, added or removed, and at midnight (a crew's window of work moves with the day).
  */
-export async function dataFingerprint(db: Ctx['db']): Promise<string> {
+async function dataFingerprint(db: Ctx['db']): Promise<string> {
   const res = await db.execute(sql`select concat_ws('|',
     (select count(*) || ':' || coalesce(max(${fields.updatedAt})::text, '') || ':' || coalesce(max(${fields.id}), 0)
        || ':' || coalesce(sum(${fields.version}), 0) || ':' || coalesce(sum(${fields.lastMowedOn} - date '2000-01-01'), 0) from ${fields}),
@@ -32,7 +32,7 @@ export async function dataFingerprint(db: Ctx['db']): Promise<string> {
  * What a caller may see depends only on this: the whole scope of the role (district, crew
  * and sites), never a part of it, so two crews of one district never share an answer.
  */
-export function scopeKey(ctx: Ctx): string {
+function scopeKey(ctx: Ctx): string {
   const a = ctx.actor;
   const sites = [...new Set(a.siteIds)].sort((x, y) => x - y).join(',');
   return `${a.role}:d=${a.districtId ?? '-'}:c=${a.crewId ?? '-'}:s=${sites}`;

@@ -38,7 +38,7 @@ type Row = Awaited<ReturnType<typeof getRow>> & object;
  * Blades are due when the hours run since the last sharpening reach the interval (a dull
  * reel or blade tears leaf tips, which brown and invite disease).
  */
-export function withBladeCare<T extends { hourMeterH: number; sharpenIntervalH: number | null; lastSharpenedAtH: number | null }>(row: T) {
+function withBladeCare<T extends { hourMeterH: number; sharpenIntervalH: number | null; lastSharpenedAtH: number | null }>(row: T) {
   const since = row.sharpenIntervalH == null ? null : row.hourMeterH - (row.lastSharpenedAtH ?? 0);
   return { ...row, hoursSinceSharpening: since, sharpeningDue: since != null && row.sharpenIntervalH != null && since >= row.sharpenIntervalH };
 }

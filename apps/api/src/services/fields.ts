@@ -135,7 +135,7 @@ export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput)
 }
 
 /** What a field has on record that deleting it would lose: work started or done, and field checks. */
-export async function workHistoryOf(db: Queryable, fieldId: number): Promise<{ workOrders: number; fieldChecks: number }> {
+async function workHistoryOf(db: Queryable, fieldId: number): Promise<{ workOrders: number; fieldChecks: number }> {
   const [orders] = await db
     .select({ n: count() })
     .from(workOrders)

@@ -7,7 +7,7 @@ import type { Actor } from '@swardwise/domain';
 import { fields, sites, workOrders } from '../db/schema/index.ts';
 
 /** A crew's work: what it was given in the last fortnight or is given from now on. */
-export const CREW_WORK_WINDOW_DAYS = 14;
+const CREW_WORK_WINDOW_DAYS = 14;
 
 /**
  * The crews with work on a field in the window, for the ability's `crewIds` condition.

@@ -19,7 +19,7 @@ import { writeAudit } from './audit.ts';
 import { authorize, type Ctx } from './context.ts';
 
 /** Settings key under which a department may keep its own engine parameters. */
-export const PARAMETERS_KEY = 'department_parameters';
+const PARAMETERS_KEY = 'department_parameters';
 
 export type StandardsRow = StandardsAnswerRow<Date>;
 

@@ -58,12 +58,12 @@ function selectUsers(db: Queryable) {
     .leftJoin(crews, eq(crews.id, users.crewId));
 }
 
-export function toSessionUser(row: UserRow): SessionUser {
+function toSessionUser(row: UserRow): SessionUser {
   const { id, email, name, role, districtId, crewId, siteIds, units, version } = row;
   return { id, email, name, role, districtId, crewId, siteIds, units, version };
 }
 
-export async function findUser(db: Queryable, id: number): Promise<UserRow | undefined> {
+async function findUser(db: Queryable, id: number): Promise<UserRow | undefined> {
   const [row] = await selectUsers(db).where(eq(users.id, id));
   return row;
 }

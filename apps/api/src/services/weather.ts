@@ -84,9 +84,9 @@ export async function listDays(ctx: Ctx, stationId: number, from: string, to: st
 }
 
 /** The columns of a station file, in our own names (SI units). */
-export const STATION_CSV_COLUMNS = ['date', 'tmax_c', 'tmin_c', 'rh_max_pct', 'rh_min_pct', 'wind_ms', 'sunshine_h', 'solar_mj', 'rain_mm'] as const;
+const STATION_CSV_COLUMNS = ['date', 'tmax_c', 'tmin_c', 'rh_max_pct', 'rh_min_pct', 'wind_ms', 'sunshine_h', 'solar_mj', 'rain_mm'] as const;
 
-export type CsvRow = StationCsvRow;
+type CsvRow = StationCsvRow;
 
 const COLUMN_OF: Record<string, string> = {
   tmaxC: 'tmax_c',
@@ -103,7 +103,7 @@ const COLUMN_OF: Record<string, string> = {
 const num = (v: string | undefined) => (v === undefined || v.trim() === '' ? null : Number(v.trim()));
 
 /** Parses and checks a station file row by row; nothing is written. */
-export function parseStationCsv(text: string): { rows: CsvRow[]; summary: { rows: number; valid: number; invalid: number } } {
+function parseStationCsv(text: string): { rows: CsvRow[]; summary: { rows: number; valid: number; invalid: number } } {
   const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: 'greedy', transformHeader: (h) => h.trim().toLowerCase() });
   const headers = parsed.meta.fields ?? [];
   const missing = ['date', 'tmax_c', 'tmin_c'].filter((c) => !headers.includes(c));

@@ -7,7 +7,6 @@ import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import {
   appError,
   errors,
-  WORK_TASK_LABELS,
   mondayOf,
   type CreateWorkOrderInput,
   type UpdateWorkOrderInput,
@@ -93,7 +92,7 @@ export async function workOrderRows(db: Queryable, ids: number[]): Promise<WorkO
   return ids.length ? selectRows(db, inArray(workOrders.id, ids)) : [];
 }
 
-export async function workOrderRow(db: Queryable, id: number): Promise<WorkOrderRow | undefined> {
+async function workOrderRow(db: Queryable, id: number): Promise<WorkOrderRow | undefined> {
   return (await selectRows(db, eq(workOrders.id, id)))[0];
 }
 
@@ -253,5 +252,3 @@ export async function deleteWorkOrder(ctx: Ctx, id: number, version: number, dep
     await notifyCrews(ctx.db, deps.mailer, [{ crewId: before.crewId, kind: 'removed', orders: [{ task: before.task, fieldName: f?.fieldName ?? '', siteName: f?.siteName ?? '', plannedDate: before.plannedDate, plannedHours: before.plannedHours }] }], ctx.actorName, deps.publicUrl);
   }
 }
-
-export const taskLabel = (t: keyof typeof WORK_TASK_LABELS) => WORK_TASK_LABELS[t];

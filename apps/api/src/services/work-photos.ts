@@ -18,7 +18,7 @@ import { orderFor } from './work-reports.ts';
 
 export const PHOTO_MAX_BYTES = 12 * 1024 * 1024;
 export const PHOTOS_PER_ORDER = 6;
-export const PHOTO_LONG_SIDE_PX = 1600;
+const PHOTO_LONG_SIDE_PX = 1600;
 const PHOTO_QUALITY = 80;
 /** A 12 MB file can still decode to a huge canvas; 50 megapixels is above any phone camera. */
 const MAX_INPUT_PIXELS = 50_000_000;

@@ -46,7 +46,7 @@ const orderColumns = {
 };
 
 /** One work order as the Today page and the board show it. */
-export async function orderRow(db: Queryable, id: number) {
+async function orderRow(db: Queryable, id: number) {
   const [row] = await db
     .select(orderColumns)
     .from(workOrders)

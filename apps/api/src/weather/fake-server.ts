@@ -30,7 +30,7 @@ function noise(...parts: number[]): number {
 }
 
 /** Invented mid-latitude weather with a seasonal cycle (no real place's data). */
-export function fakeDay(lat: number, lng: number, date: string, today: string): ProviderDay {
+function fakeDay(lat: number, lng: number, date: string, today: string): ProviderDay {
   const doy = dayOfYear(date);
   const season = Math.cos(((doy - 200) / 365) * 2 * Math.PI); // warmest mid-July
   const n = noise(lat, lng, isoToDayNumber(date));

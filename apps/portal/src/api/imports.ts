@@ -5,10 +5,6 @@ export function listImports(signal?: AbortSignal): Promise<ImportList> {
   return api.get<ImportList>('/imports', { limit: 20 }, signal);
 }
 
-export async function getImport(id: number, signal?: AbortSignal): Promise<ImportRecord> {
-  return (await api.get<ImportAnswer>(`/imports/${id}`, undefined, signal)).import;
-}
-
 export async function commitImport(id: number): Promise<ImportRecord> {
   return (await api.post<ImportAnswer>(`/imports/${id}/commit`)).import;
 }

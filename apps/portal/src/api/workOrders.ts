@@ -1,9 +1,7 @@
 import type {
-  CreateWorkOrderInput,
   PhotoAnswer,
   ReportAnswer,
   UpdateWorkOrderInput,
-  WorkOrderAnswer,
   WorkOrderList,
   WorkOrderRow,
   WorkOrderWriteAnswer,
@@ -16,22 +14,9 @@ export async function listWorkOrders(query: { from?: string; to?: string; crewId
   return (await api.get<WorkOrderList>('/work-orders', query, signal)).items;
 }
 
-/** The order with the crew's reports and photos. */
-export function getWorkOrder(orderId: number, signal?: AbortSignal): Promise<WorkOrderAnswer> {
-  return api.get<WorkOrderAnswer>(`/work-orders/${orderId}`, undefined, signal);
-}
-
-export function createWorkOrder(body: CreateWorkOrderInput): Promise<WorkOrderWriteAnswer> {
-  return api.post<WorkOrderWriteAnswer>('/work-orders', body);
-}
-
 /** Sends the version the order was read at; a stale one answers 409. */
 export function updateWorkOrder(id: number, body: UpdateWorkOrderInput): Promise<WorkOrderWriteAnswer> {
   return api.patch<WorkOrderWriteAnswer>(`/work-orders/${id}`, body);
-}
-
-export function removeWorkOrder(id: number, version: number): Promise<void> {
-  return api.delete<void>(`/work-orders/${id}?version=${version}`);
 }
 
 /**

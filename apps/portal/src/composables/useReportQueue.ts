@@ -4,7 +4,7 @@ import { useSessionStore } from '../stores/session.ts';
 import { createReportQueue, type NewReport, type QueuedReport, type ReportQueue, type ReportTransport } from '../utils/reportQueue.ts';
 
 /** How often a waiting report is tried again while the page is open. */
-export const RETRY_INTERVAL_MS = 30_000;
+const RETRY_INTERVAL_MS = 30_000;
 
 export const apiTransport: ReportTransport = {
   report: (orderId, body) => reportWork(orderId, body),
@@ -13,7 +13,7 @@ export const apiTransport: ReportTransport = {
 
 let shared: ReportQueue | null = null;
 /** One outbox per page, over the API. */
-export function sharedReportQueue(): ReportQueue {
+function sharedReportQueue(): ReportQueue {
   shared ??= createReportQueue(apiTransport);
   return shared;
 }

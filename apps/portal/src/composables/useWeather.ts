@@ -19,7 +19,7 @@ const doy = (iso: string) => Math.round((Date.parse(`${iso}T00:00:00Z`) - Date.U
 const orUndefined = (v: number | null) => (v === null ? undefined : v);
 
 /** ET0 of one day at a station (FAO-56 eq. 6 with the chapter 3 fall-backs for missing data). */
-export function dayEt0(day: Pick<WeatherDayInput, 'tmaxC' | 'tminC' | 'rhMaxPct' | 'rhMinPct' | 'windMs' | 'sunshineH' | 'solarMJ'> & { date: string }, station: Pick<WeatherStationRow, 'lat' | 'elevationM'>): number | null {
+function dayEt0(day: Pick<WeatherDayInput, 'tmaxC' | 'tminC' | 'rhMaxPct' | 'rhMinPct' | 'windMs' | 'sunshineH' | 'solarMJ'> & { date: string }, station: Pick<WeatherStationRow, 'lat' | 'elevationM'>): number | null {
   try {
     const r = et0PenmanMonteith({
       tmaxC: day.tmaxC,

@@ -1,7 +1,8 @@
 import type { SessionUser } from '@swardwise/domain';
 import { createPinia, setActivePinia } from 'pinia';
 import { beforeAll, beforeEach, describe, expect, test, vi } from 'vitest';
-import { router, safeNext } from './index.ts';
+import { router } from './index.ts';
+import { safeNext } from './safeNext.ts';
 
 function me(user: Partial<SessionUser> | null) {
   const body = user

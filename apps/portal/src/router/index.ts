@@ -2,17 +2,13 @@ import { createRouter, createWebHistory, type RouteLocationNormalized } from 'vu
 import { ability } from '../ability.ts';
 import { useSessionStore } from '../stores/session.ts';
 import { routes } from './routes.ts';
+import { safeNext } from './safeNext.ts';
 
 export const router = createRouter({
   history: createWebHistory(),
   routes,
   scrollBehavior: () => ({ top: 0 }),
 });
-
-/** A `next` query value is only followed when it stays inside the portal. */
-export function safeNext(next: unknown): string | null {
-  return typeof next === 'string' && next.startsWith('/') && !next.startsWith('//') ? next : null;
-}
 
 function allowed(to: RouteLocationNormalized, role: string): boolean {
   return to.matched.every(({ meta }) => {

@@ -7,7 +7,7 @@ import { ApiError } from '../api/client.ts';
 import { queryClient } from '../api/queryClient.ts';
 
 /** Where each role lands after sign-in and when a route is not theirs. */
-export const LANDING: Record<Role, string> = {
+const LANDING: Record<Role, string> = {
   admin: '/admin/users',
   head: '/overview',
   foreman: '/district',

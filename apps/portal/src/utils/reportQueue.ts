@@ -45,13 +45,13 @@ export type NewReport = Pick<QueuedReport, 'userId' | 'orderId' | 'label'> & {
 };
 
 /** A reference the server accepts (8–64 of A–Z, a–z, 0–9, - and _). */
-export function newRef(): string {
+function newRef(): string {
   if (typeof crypto !== 'undefined' && typeof crypto.randomUUID === 'function') return crypto.randomUUID();
   return `r${Date.now().toString(36)}${Math.random().toString(36).slice(2, 12)}`;
 }
 
 /** The phone's time with its UTC offset: the moment of the report (the API dates it in the department's zone). */
-export function localIso(date = new Date()): string {
+function localIso(date = new Date()): string {
   const pad = (n: number) => String(Math.trunc(Math.abs(n))).padStart(2, '0');
   const offset = -date.getTimezoneOffset();
   const sign = offset >= 0 ? '+' : '-';
@@ -66,7 +66,7 @@ export function localIso(date = new Date()): string {
  * (sent after signing in again), a timeout or too many requests. Any other 4xx is the
  * server refusing the report; sending it again unchanged would be refused again.
  */
-export function isTransient(error: unknown): boolean {
+function isTransient(error: unknown): boolean {
   if (!(error instanceof ApiError)) return !(error instanceof DOMException && error.name === 'AbortError');
   return error.status === 0 || error.status >= 500 || [401, 408, 429].includes(error.status);
 }

@@ -18,7 +18,7 @@ export interface CrewDayPlan {
   stops: RouteStopJobs[];
 }
 
-export function dayLabel(date: string, today: string): string {
+function dayLabel(date: string, today: string): string {
   const long = new Date(`${date}T12:00:00`).toLocaleDateString('en-US', { weekday: 'long', month: 'short', day: 'numeric' });
   if (date === today) return `Today, ${long}`;
   if (date === addDaysIso(today, 1)) return `Tomorrow, ${long}`;

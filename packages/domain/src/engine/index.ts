@@ -12,7 +12,6 @@ export * from './feed.ts';
 export * from './lines.ts';
 export * from './grading.ts';
 export * from './outlook.ts';
-export * from './weekplan.ts';
 export * from './cautions.ts';
 export * from './weekgen.ts';
 export * from './week-warnings.ts';

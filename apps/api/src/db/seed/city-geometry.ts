@@ -10,8 +10,8 @@ import type { Polygon } from '@swardwise/domain';
 import type { Rng } from './prng.ts';
 
 /** Mean earth radius, the one @turf/area and @turf/distance use, so areas come back as drawn. */
-export const EARTH_RADIUS_M = 6_371_008.8;
-export const METRES_PER_DEGREE_LAT = (EARTH_RADIUS_M * Math.PI) / 180;
+const EARTH_RADIUS_M = 6_371_008.8;
+const METRES_PER_DEGREE_LAT = (EARTH_RADIUS_M * Math.PI) / 180;
 
 export type Vec = [number, number];
 export interface LatLng {
@@ -23,7 +23,7 @@ export type Position = [number, number];
 const DEG = Math.PI / 180;
 
 /** Rounds a coordinate to 7 decimals (about 1 cm), which keeps the JSON small and stable. */
-export function roundCoord(value: number): number {
+function roundCoord(value: number): number {
   return Math.round(value * 1e7) / 1e7;
 }
 
@@ -50,7 +50,7 @@ export function ringToPolygon(origin: LatLng, ring: Vec[]): Polygon {
 }
 
 /** Turns local points clockwise by `bearingDeg` (the +y axis ends up pointing at that bearing). */
-export function rotate(points: Vec[], bearingDeg: number, about: Vec = [0, 0]): Vec[] {
+function rotate(points: Vec[], bearingDeg: number, about: Vec = [0, 0]): Vec[] {
   const t = bearingDeg * DEG;
   const c = Math.cos(t);
   const s = Math.sin(t);
@@ -61,18 +61,18 @@ export function rotate(points: Vec[], bearingDeg: number, about: Vec = [0, 0]): 
   });
 }
 
-export function translate(points: Vec[], dx: number, dy: number): Vec[] {
+function translate(points: Vec[], dx: number, dy: number): Vec[] {
   return points.map(([x, y]) => [x + dx, y + dy]);
 }
 
-export interface Box {
+interface Box {
   minX: number;
   minY: number;
   maxX: number;
   maxY: number;
 }
 
-export function boundsOf(points: Vec[]): Box {
+function boundsOf(points: Vec[]): Box {
   let minX = Infinity;
   let minY = Infinity;
   let maxX = -Infinity;
@@ -87,7 +87,7 @@ export function boundsOf(points: Vec[]): Box {
 }
 
 /** Shoelace area of an open ring of local points (positive when counter-clockwise). */
-export function planarArea(ring: Vec[]): number {
+function planarArea(ring: Vec[]): number {
   let sum = 0;
   for (let i = 0; i < ring.length; i++) {
     const a = ring[i]!;

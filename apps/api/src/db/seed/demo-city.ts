@@ -35,7 +35,6 @@ import { rngFor, uniform } from './prng.ts';
 import { stationSeason, type DemoWeatherDay, type DemoWeatherStation, type StationClimate } from './demo-weather.ts';
 
 export type { DemoWeatherDay, DemoWeatherStation } from './demo-weather.ts';
-export { DEMO_SEASON } from './demo-weather.ts';
 
 // ---------------------------------------------------------------------------------------------
 // Types
@@ -110,8 +109,8 @@ export interface DemoCity {
 // ---------------------------------------------------------------------------------------------
 
 export const DEMO_CITY_NAME = 'Sallowmere';
-export const DEMO_SCHOOL_DISTRICT_NAME = 'Sallowmere Unified School District';
-export const DEMO_EMAIL_DOMAIN = 'swardwise.example';
+const DEMO_SCHOOL_DISTRICT_NAME = 'Sallowmere Unified School District';
+const DEMO_EMAIL_DOMAIN = 'swardwise.example';
 const CENTER: LatLng = { lat: 37.55, lng: -66.4 };
 const CITY_NOTE =
   'Invented demo city. Sallowmere, its districts, streets, parks, the Sallowmere Unified School ' +

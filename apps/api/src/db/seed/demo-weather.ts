@@ -32,12 +32,12 @@ export const DEMO_SEASON = { start: '2026-03-01', end: '2026-11-30' } as const;
 const DAY_MS = 86_400_000;
 
 /** Day of the year (1 = 1 January) of a UTC date. */
-export function dayOfYear(date: Date): number {
+function dayOfYear(date: Date): number {
   return Math.round((date.getTime() - Date.UTC(date.getUTCFullYear(), 0, 1)) / DAY_MS) + 1;
 }
 
 /** Daylight hours N at a latitude on a day of the year (FAO-56 eqs 24, 25 and 34). */
-export function daylightHours(latDeg: number, doy: number): number {
+function daylightHours(latDeg: number, doy: number): number {
   const phi = (latDeg * Math.PI) / 180;
   const delta = 0.409 * Math.sin((2 * Math.PI * doy) / 365 - 1.39);
   const x = Math.min(1, Math.max(-1, -Math.tan(phi) * Math.tan(delta)));
@@ -45,7 +45,7 @@ export function daylightHours(latDeg: number, doy: number): number {
 }
 
 /** The season's dates, first to last, as UTC dates. */
-export function seasonDates(start: string = DEMO_SEASON.start, end: string = DEMO_SEASON.end): Date[] {
+function seasonDates(start: string = DEMO_SEASON.start, end: string = DEMO_SEASON.end): Date[] {
   const dates: Date[] = [];
   const last = Date.parse(`${end}T00:00:00Z`);
   for (let t = Date.parse(`${start}T00:00:00Z`); t <= last; t += DAY_MS) dates.push(new Date(t));

@@ -19,7 +19,7 @@ export function mulberry32(seed: number): Rng {
 }
 
 /** FNV-1a hash of a text, to give each site or station its own stable seed. */
-export function hashSeed(text: string): number {
+function hashSeed(text: string): number {
   let h = 0x811c9dc5;
   for (let i = 0; i < text.length; i++) {
     h ^= text.charCodeAt(i);

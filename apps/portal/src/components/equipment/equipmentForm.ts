@@ -108,7 +108,7 @@ export function inputOf(m: EquipmentModel, u: UnitSystem): Record<keyof CreateEq
 }
 
 /** Form field → the API field it becomes, for placing the schema's and the server's messages. */
-export const API_KEY_OF: Record<string, keyof CreateEquipmentInput> = {
+const API_KEY_OF: Record<string, keyof CreateEquipmentInput> = {
   width: 'cuttingWidthM',
   speed: 'speedKmh',
   efficiencyPct: 'fieldEfficiency',

@@ -13,7 +13,7 @@ export interface NavItem {
  * The side navigation. A link shows when the role's work includes the page and the
  * shared ability allows it, the same two checks the router guard makes.
  */
-export const NAV_ITEMS: NavItem[] = [
+const NAV_ITEMS: NavItem[] = [
   { key: 'overview', label: 'Overview', to: '/overview', roles: ['admin', 'head'], can: ['read', 'District'] },
   { key: 'district', label: 'My district', to: '/district', roles: ['foreman'], can: ['read', 'District'] },
   { key: 'today', label: 'Today', to: '/today', roles: ['crew'], can: ['read', 'Crew'] },

@@ -35,7 +35,7 @@ export interface LegendEntry {
 }
 
 /** Score bands (0–100) from the highest; bounds are inclusive lower limits. */
-export const SCORE_BANDS = [
+const SCORE_BANDS = [
   { key: 'high', min: 80, label: '80–100', token: '--sw-map-score-high' },
   { key: 'good', min: 65, label: '65–79', token: '--sw-map-score-good' },
   { key: 'fair', min: 50, label: '50–64', token: '--sw-map-score-fair' },
@@ -43,7 +43,7 @@ export const SCORE_BANDS = [
 ] as const;
 
 /** Days since the last mowing, from the freshest; bounds are inclusive upper limits. */
-export const MOWING_BANDS = [
+const MOWING_BANDS = [
   { key: 'fresh', max: 3, label: '0–3 days', token: '--sw-map-mow-fresh' },
   { key: 'week', max: 7, label: '4–7 days', token: '--sw-map-mow-week' },
   { key: 'fortnight', max: 14, label: '8–14 days', token: '--sw-map-mow-fortnight' },

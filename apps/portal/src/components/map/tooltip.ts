@@ -5,7 +5,7 @@ import type { MapTheme } from './themes.ts';
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 
 /** The theme's value of a field in plain words. */
-export function themeValue(field: MapField, theme: MapTheme): string {
+function themeValue(field: MapField, theme: MapTheme): string {
   switch (theme) {
     case 'level':
       return `Level ${field.maintenanceLevel} ${LEVEL_NAMES[field.maintenanceLevel as Level]}`;

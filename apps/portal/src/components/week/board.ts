@@ -5,7 +5,7 @@
 import { addDaysIso, CAUTIONS, weekdayOf, type CautionKey, type CrewDay, type WeekBoard, type WorkOrderRow, type WorkTask } from '@swardwise/domain';
 
 /** Row key of the orders no crew has yet. */
-export const UNASSIGNED = 'none';
+const UNASSIGNED = 'none';
 
 export type CellKey = string;
 
@@ -21,7 +21,7 @@ export interface BoardFilter {
   tasks: readonly WorkTask[];
 }
 
-export function matchesFilter(order: WorkOrderRow, filter: BoardFilter): boolean {
+function matchesFilter(order: WorkOrderRow, filter: BoardFilter): boolean {
   if (filter.siteIds.length && !filter.siteIds.includes(order.siteId)) return false;
   if (filter.tasks.length && !filter.tasks.includes(order.task)) return false;
   return true;
@@ -116,7 +116,7 @@ export function formatHours(h: number): string {
   return `${(Math.round(h * 10) / 10).toFixed(1)} h`;
 }
 
-export const SHORT_DAY: Record<string, string> = { mon: 'Mon', tue: 'Tue', wed: 'Wed', thu: 'Thu', fri: 'Fri', sat: 'Sat', sun: 'Sun' };
+const SHORT_DAY: Record<string, string> = { mon: 'Mon', tue: 'Tue', wed: 'Wed', thu: 'Thu', fri: 'Fri', sat: 'Sat', sun: 'Sun' };
 
 /** "Mon 30 Nov" in the English the portal uses. */
 export function dayLabel(iso: string): string {

@@ -38,7 +38,7 @@ export function order(over: Partial<WorkOrderRow> = {}): WorkOrderRow {
   };
 }
 
-export const CREWS: BoardCrew[] = [
+const CREWS: BoardCrew[] = [
   { id: 11, name: 'North A', hoursPerDay: 8, workDays: ['mon', 'tue', 'wed', 'thu', 'fri'], leadName: 'Ottilie Marsh' },
   { id: 12, name: 'North B', hoursPerDay: 7.5, workDays: ['mon', 'tue', 'wed', 'thu'], leadName: null },
 ];

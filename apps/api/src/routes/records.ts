@@ -1,0 +1,15 @@
+/** Records: planned against actual work over a range of dates. */
+import { Router } from 'express';
+import { dateRangeQuerySchema } from '@swardwise/domain';
+import type { AppDeps } from '../app-deps.ts';
+import { ctxOf } from '../http/auth.ts';
+import { parse } from '../http/validate.ts';
+import { getRecords } from '../services/records.ts';
+
+export function recordsRouter({ db }: AppDeps): Router {
+  const router = Router();
+  router.get('/', async (req, res) => {
+    res.json(await getRecords(ctxOf(db, req), parse(dateRangeQuerySchema, req.query, 'query')));
+  });
+  return router;
+}
