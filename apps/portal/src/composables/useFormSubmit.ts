@@ -69,3 +69,5 @@ export function useFormSubmit(options: FormSubmitOptions = {}) {
 
   return { form, serverErrors, failure, conflict, lastError, submitting, clear, submit };
 }
+
+export type FormSubmit = ReturnType<typeof useFormSubmit>;

@@ -1,58 +1,27 @@
-import { abilitiesPlugin } from '@casl/vue';
-import { defineAbilityFor, type Actor, type CrewRow, type DistrictRow, type Polygon } from '@swardwise/domain';
-import { flushPromises, mount } from '@vue/test-utils';
-import ElementPlus from 'element-plus';
-import { createPinia } from 'pinia';
-import { afterEach, describe, expect, test, vi } from 'vitest';
+import type { CrewRow } from '@swardwise/domain';
+import { flushPromises } from '@vue/test-utils';
+import { describe, expect, test, vi } from 'vitest';
+import { $, answering, cleanUpAfterEach, district, errorsShown, FOREMAN_NORTH, mountDialog, submitDialog, type } from '../../testing/dialogs.ts';
 import CrewFormDialog from './CrewFormDialog.vue';
 import { workDaysText } from './crewForm.ts';
 
-const boundary: Polygon = { type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 0]]] };
-const district = (id: number, name: string): DistrictRow => ({ id, code: name.toLowerCase(), name, boundary, yard: { name: 'Yard', lat: 0, lng: 0 }, version: 1, siteCount: 0, fieldCount: 0, fieldAreaM2: 0 });
 const DISTRICTS = [district(1, 'North'), district(2, 'South')];
-const foreman: Actor = { id: 3, role: 'foreman', districtId: 1, crewId: null, siteIds: [] };
 const CREW: CrewRow = { id: 5, districtId: 1, districtName: 'North', name: 'North Crew A', hoursPerDay: 8, members: ['R. Alder'], workDays: ['mon', 'tue', 'wed', 'thu', 'fri'], leadUserId: null, leadName: null, version: 3 };
 
-function mountForm(actor: Actor, crew: CrewRow | null = null) {
-  return mount(CrewFormDialog, {
-    props: { open: true, crew, districts: DISTRICTS },
-    global: { plugins: [ElementPlus, createPinia(), [abilitiesPlugin, defineAbilityFor(actor)]] },
-    attachTo: document.body,
-  });
-}
-
-const $ = (sel: string) => document.body.querySelector(sel);
-const errorsShown = () => [...document.body.querySelectorAll('.el-form-item__error')].map((e) => e.textContent?.trim());
-async function type(sel: string, value: string) {
-  const input = $(`${sel} input, input${sel}`) as HTMLInputElement;
-  input.value = value;
-  input.dispatchEvent(new Event('input'));
-  input.dispatchEvent(new Event('change'));
-  input.dispatchEvent(new FocusEvent('blur'));
-  await flushPromises();
-}
+const mountForm = (crew: CrewRow | null = null) => mountDialog(CrewFormDialog, { crew, districts: DISTRICTS }, { actor: FOREMAN_NORTH });
 async function toggleDay(day: string) {
   ($(`[data-test="crew-day-${day}"] input`) as HTMLInputElement).click();
   await flushPromises();
 }
-const submit = async () => {
-  ($('[data-test="crew-submit"]') as HTMLButtonElement).click();
-  await flushPromises();
-  await new Promise((r) => setTimeout(r, 0));
-  await flushPromises();
-};
+const submit = () => submitDialog('crew');
 const okResponse = (crew: object) => new Response(JSON.stringify({ crew }), { status: 201, headers: { 'Content-Type': 'application/json' } });
-
-afterEach(() => {
-  vi.unstubAllGlobals();
-  document.body.innerHTML = '';
-});
+cleanUpAfterEach();
 
 describe('CrewFormDialog', () => {
   test('should show the schema’s messages for a short name, no hours and no working day, and send nothing', async () => {
     const fetch = vi.fn();
     vi.stubGlobal('fetch', fetch);
-    const w = mountForm(foreman);
+    const w = mountForm();
     await flushPromises();
     await type('[data-test="crew-name"]', 'A');
     await type('[data-test="crew-hours"]', '');
@@ -71,7 +40,7 @@ describe('CrewFormDialog', () => {
 
   test('should refuse a shift longer than 16 hours', async () => {
     vi.stubGlobal('fetch', vi.fn());
-    const w = mountForm(foreman);
+    const w = mountForm();
     await flushPromises();
     await type('[data-test="crew-name"]', 'North Crew C');
     await type('[data-test="crew-hours"]', '18');
@@ -83,7 +52,7 @@ describe('CrewFormDialog', () => {
   test('should send a foreman’s new crew in his district with its days and members', async () => {
     const fetch = vi.fn(async (_url: string, init: RequestInit) => okResponse({ ...CREW, ...JSON.parse(String(init.body)), id: 9 }));
     vi.stubGlobal('fetch', fetch);
-    const w = mountForm(foreman);
+    const w = mountForm();
     await flushPromises();
     await type('[data-test="crew-name"]', 'North Crew C');
     await type('[data-test="crew-hours"]', '9.5');
@@ -106,12 +75,12 @@ describe('CrewFormDialog', () => {
   });
 
   test('should send the version it read and say so on a 409', async () => {
-    const fetch = vi.fn(async () => new Response(JSON.stringify({ error: { code: 'crew/version_conflict', message: 'conflict' } }), { status: 409 }));
+    const fetch = answering(409, { error: { code: 'crew/version_conflict', message: 'conflict' } });
     vi.stubGlobal('fetch', fetch);
-    const w = mountForm(foreman, CREW);
+    const w = mountForm(CREW);
     await flushPromises();
     await submit();
-    const init = (fetch.mock.calls[0] as unknown as [string, RequestInit])[1];
+    const init = fetch.mock.calls[0]![1]!;
     expect(JSON.parse(String(init.body))).toMatchObject({ version: 3, name: 'North Crew A' });
     expect($('[data-test="crew-form-error"]')?.textContent).toMatch(/Someone else changed this crew/);
     w.unmount();

@@ -1,16 +1,13 @@
-import { abilitiesPlugin } from '@casl/vue';
-import { defineAbilityFor, type Actor, type CrewRow, type DistrictRow, type EquipmentRow, type Polygon, type SessionUser } from '@swardwise/domain';
-import { flushPromises, mount } from '@vue/test-utils';
-import ElementPlus from 'element-plus';
-import { createPinia, setActivePinia, type Pinia } from 'pinia';
-import { afterEach, describe, expect, test, vi } from 'vitest';
+import type { CrewRow, EquipmentRow, SessionUser } from '@swardwise/domain';
+import { flushPromises } from '@vue/test-utils';
+import { createPinia, setActivePinia } from 'pinia';
+import { describe, expect, test, vi } from 'vitest';
 import { useSessionStore } from '../../stores/session.ts';
+import { $, cleanUpAfterEach, district, errorsShown, FOREMAN_NORTH, labelsShown as labels, mountDialog, submitDialog, type } from '../../testing/dialogs.ts';
 import EquipmentFormDialog from './EquipmentFormDialog.vue';
 
-const boundary: Polygon = { type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 0]]] };
-const DISTRICTS: DistrictRow[] = [{ id: 1, code: 'north', name: 'North', boundary, yard: { name: 'Yard', lat: 0, lng: 0 }, version: 1, siteCount: 0, fieldCount: 0, fieldAreaM2: 0 }];
+const DISTRICTS = [district(1, 'North')];
 const CREWS: CrewRow[] = [{ id: 4, districtId: 1, districtName: 'North', name: 'North Crew A', hoursPerDay: 8, members: [], workDays: ['mon'], leadUserId: null, leadName: null, version: 1 }];
-const foreman: Actor = { id: 3, role: 'foreman', districtId: 1, crewId: null, siteIds: [] };
 const MOWER: EquipmentRow = {
   id: 7, districtId: 1, districtName: 'North', crewId: 4, crewName: 'North Crew A', kind: 'reel_mower', name: 'Reel 5-gang', cuttingWidthM: 3.4, speedKmh: 8,
   fieldEfficiency: 0.8, hocMinMm: 12, hocMaxMm: 38, hourMeterH: 120, sharpenIntervalH: 50, lastSharpenedAtH: 100, hoursSinceSharpening: 20, sharpeningDue: false,
@@ -18,43 +15,19 @@ const MOWER: EquipmentRow = {
 };
 
 function mountForm(units: 'imperial' | 'metric', equipment: EquipmentRow | null = null) {
-  const pinia: Pinia = createPinia();
+  const pinia = createPinia();
   setActivePinia(pinia);
   useSessionStore().user = { id: 3, email: 'f@test.example', name: 'F', role: 'foreman', districtId: 1, crewId: null, siteIds: [], units, version: 1 } satisfies SessionUser;
-  return mount(EquipmentFormDialog, {
-    props: { open: true, equipment, districts: DISTRICTS, crews: CREWS },
-    global: { plugins: [ElementPlus, pinia, [abilitiesPlugin, defineAbilityFor(foreman)]] },
-    attachTo: document.body,
-  });
+  return mountDialog(EquipmentFormDialog, { equipment, districts: DISTRICTS, crews: CREWS }, { actor: FOREMAN_NORTH, pinia });
 }
 
-const $ = (sel: string) => document.body.querySelector(sel);
-const errorsShown = () => [...document.body.querySelectorAll('.el-form-item__error')].map((e) => e.textContent?.trim());
-const labels = () => [...document.body.querySelectorAll('.el-form-item__label')].map((e) => e.textContent?.trim());
-async function type(sel: string, value: string) {
-  const input = $(`${sel} input, input${sel}`) as HTMLInputElement;
-  input.value = value;
-  input.dispatchEvent(new Event('input'));
-  input.dispatchEvent(new Event('change'));
-  input.dispatchEvent(new FocusEvent('blur'));
-  await flushPromises();
-}
 async function chooseKind(w: ReturnType<typeof mountForm>, kind: string) {
   w.findAllComponents({ name: 'ElSelect' })[0]!.vm.$emit('update:modelValue', kind);
   await flushPromises();
 }
-const submit = async () => {
-  ($('[data-test="equipment-submit"]') as HTMLButtonElement).click();
-  await flushPromises();
-  await new Promise((r) => setTimeout(r, 0));
-  await flushPromises();
-};
+const submit = () => submitDialog('equipment');
 const created = () => vi.fn(async (_url: string, init: RequestInit) => new Response(JSON.stringify({ equipment: { ...MOWER, ...JSON.parse(String(init.body)) } }), { status: 201 }));
-
-afterEach(() => {
-  vi.unstubAllGlobals();
-  document.body.innerHTML = '';
-});
+cleanUpAfterEach();
 
 describe('EquipmentFormDialog', () => {
   test('should ask a mower for its cutting figures and send nothing without them', async () => {

@@ -1,8 +1,7 @@
 import type { FieldRow } from '@swardwise/domain';
-import { flushPromises, mount } from '@vue/test-utils';
-import ElementPlus from 'element-plus';
-import { createPinia } from 'pinia';
-import { afterEach, describe, expect, test, vi } from 'vitest';
+import { flushPromises } from '@vue/test-utils';
+import { describe, expect, test, vi } from 'vitest';
+import { answering, cleanUpAfterEach, mountDialog as mountDialogWith, submitDialog } from '../../testing/dialogs.ts';
 import EditFieldDialog from './EditFieldDialog.vue';
 
 const FIELD: FieldRow = {
@@ -30,26 +29,11 @@ const FIELD: FieldRow = {
   updatedAt: '2026-11-30T10:00:00Z',
 };
 
-function mountDialog() {
-  return mount(EditFieldDialog, {
-    props: { open: true, field: FIELD },
-    global: { plugins: [ElementPlus, createPinia()] },
-    attachTo: document.body,
-  });
-}
+const mountDialog = () => mountDialogWith(EditFieldDialog, { field: FIELD });
 type Model = { name: string; hoc: number | null; status: string };
 const modelOf = (w: ReturnType<typeof mountDialog>) => (w.vm.$ as unknown as { setupState: { model: Model } }).setupState.model;
-const submit = async () => {
-  (document.body.querySelector('[data-test="field-submit"]') as HTMLButtonElement).click();
-  await flushPromises();
-  await new Promise((r) => setTimeout(r, 0));
-  await flushPromises();
-};
-
-afterEach(() => {
-  vi.unstubAllGlobals();
-  document.body.innerHTML = '';
-});
+const submit = () => submitDialog('field');
+cleanUpAfterEach();
 
 describe('EditFieldDialog', () => {
   test('should refuse an empty name and a height of cut below 3 mm without sending anything', async () => {
@@ -81,17 +65,17 @@ describe('EditFieldDialog', () => {
   });
 
   test('should send the height of cut in millimetres with the version it was opened at', async () => {
-    const fetch = vi.fn(async () => new Response(JSON.stringify({ field: { ...FIELD, hocOverrideMm: 38.1, version: 6 } }), { status: 200, headers: { 'content-type': 'application/json' } }));
+    const fetch = answering(200, { field: { ...FIELD, hocOverrideMm: 38.1, version: 6 } });
     vi.stubGlobal('fetch', fetch);
     const w = mountDialog();
     await flushPromises();
     modelOf(w).hoc = 1.5; // inches
     await submit();
     expect(fetch).toHaveBeenCalledTimes(1);
-    const [url, init] = fetch.mock.calls[0] as unknown as [string, RequestInit];
+    const [url, init] = fetch.mock.calls[0]!;
     expect(url).toContain('/api/fields/7');
-    expect(init.method).toBe('PATCH');
-    const body = JSON.parse(String(init.body));
+    expect(init?.method).toBe('PATCH');
+    const body = JSON.parse(String(init?.body));
     expect(body.version).toBe(5);
     expect(body.hocOverrideMm).toBeCloseTo(38.1, 1);
     expect(body.name).toBe('Pitch 1');

@@ -1,55 +1,24 @@
-import { abilitiesPlugin } from '@casl/vue';
-import { defineAbilityFor, type Actor, type DistrictRow, type Polygon, type SiteRow } from '@swardwise/domain';
-import { flushPromises, mount } from '@vue/test-utils';
-import ElementPlus from 'element-plus';
-import { createPinia } from 'pinia';
-import { afterEach, describe, expect, test, vi } from 'vitest';
+import { type Actor, type SiteRow } from '@swardwise/domain';
+import { flushPromises } from '@vue/test-utils';
+import { describe, expect, test, vi } from 'vitest';
+import { $, answering, cleanUpAfterEach, district, errorsShown, FOREMAN_NORTH, mountDialog, submitDialog, type } from '../../testing/dialogs.ts';
 import SiteFormDialog from './SiteFormDialog.vue';
 
-const boundary: Polygon = { type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 0]]] };
-const district = (id: number, name: string): DistrictRow => ({ id, code: name.toLowerCase(), name, boundary, yard: { name: 'Yard', lat: 0, lng: 0 }, version: 1, siteCount: 0, fieldCount: 0, fieldAreaM2: 0 });
 const DISTRICTS = [district(1, 'North'), district(2, 'South')];
-const foreman: Actor = { id: 3, role: 'foreman', districtId: 1, crewId: null, siteIds: [] };
 const head: Actor = { id: 2, role: 'head', districtId: null, crewId: null, siteIds: [] };
 const SITE: SiteRow = { id: 9, districtId: 1, districtName: 'North', name: 'Alder Green', kind: 'park', owner: 'city', address: '', lat: 37.6, lng: -66.5, notes: '', fieldCount: 0, fieldAreaM2: 0, version: 4, updatedAt: '2026-11-30T10:00:00Z' };
 
-function mountForm(actor: Actor, site: SiteRow | null = null) {
-  return mount(SiteFormDialog, {
-    props: { open: true, site, districts: DISTRICTS },
-    global: { plugins: [ElementPlus, createPinia(), [abilitiesPlugin, defineAbilityFor(actor)]] },
-    attachTo: document.body,
-  });
-}
-
-const $ = (sel: string) => document.body.querySelector(sel);
-const errorsShown = () => [...document.body.querySelectorAll('.el-form-item__error')].map((e) => e.textContent?.trim());
-async function type(sel: string, value: string) {
-  const input = $(`${sel} input, input${sel}`) as HTMLInputElement;
-  input.value = value;
-  input.dispatchEvent(new Event('input'));
-  input.dispatchEvent(new Event('change'));
-  await flushPromises();
-}
-const submit = async () => {
-  ($('[data-test="site-submit"]') as HTMLButtonElement).click();
-  await flushPromises();
-  await new Promise((r) => setTimeout(r, 0));
-  await flushPromises();
-};
-
-afterEach(() => {
-  vi.unstubAllGlobals();
-  document.body.innerHTML = '';
-});
+const mountForm = (actor: Actor, site: SiteRow | null = null) => mountDialog(SiteFormDialog, { site, districts: DISTRICTS }, { actor });
+const submit = () => submitDialog('site');
+cleanUpAfterEach();
 
 describe('SiteFormDialog', () => {
   test('should offer a foreman only his own district, chosen for him', async () => {
-    const w = mountForm(foreman);
+    const w = mountForm(FOREMAN_NORTH);
     await flushPromises();
-    const select = w.findComponent({ name: 'ElSelect' });
-    expect((select.props('modelValue') as number)).toBe(1);
-    const options = (w.vm.$ as unknown as { setupState: { districtOptions: DistrictRow[] } }).setupState.districtOptions;
-    expect(options.map((d) => d.name)).toEqual(['North']);
+    const select = w.findAllComponents({ name: 'SelectItem' }).find((item) => item.props('test') === 'site-district')!;
+    expect(select.props('modelValue')).toBe(1);
+    expect((select.props('options') as { label: string }[]).map((o) => o.label)).toEqual(['North']);
     w.unmount();
   });
 
@@ -73,11 +42,8 @@ describe('SiteFormDialog', () => {
   });
 
   test('should show the server’s field issues from a 400 beside the field', async () => {
-    vi.stubGlobal(
-      'fetch',
-      vi.fn(async () => new Response(JSON.stringify({ error: { code: 'request/invalid', message: 'No such district', details: { issues: [{ path: 'body.districtId', message: 'no such district' }] } } }), { status: 400 })),
-    );
-    const w = mountForm(foreman, SITE);
+    vi.stubGlobal('fetch', answering(400, { error: { code: 'request/invalid', message: 'No such district', details: { issues: [{ path: 'body.districtId', message: 'no such district' }] } } }));
+    const w = mountForm(FOREMAN_NORTH, SITE);
     await flushPromises();
     await submit();
     await vi.waitFor(() => expect(errorsShown()).toContain('no such district'));
@@ -86,11 +52,8 @@ describe('SiteFormDialog', () => {
   });
 
   test('should say someone else changed the site on a 409 and offer a reload', async () => {
-    vi.stubGlobal(
-      'fetch',
-      vi.fn(async () => new Response(JSON.stringify({ error: { code: 'site/version_conflict', message: 'conflict' } }), { status: 409 })),
-    );
-    const w = mountForm(foreman, SITE);
+    vi.stubGlobal('fetch', answering(409, { error: { code: 'site/version_conflict', message: 'conflict' } }));
+    const w = mountForm(FOREMAN_NORTH, SITE);
     await flushPromises();
     await submit();
     expect($('[data-test="site-form-error"]')?.textContent).toMatch(/Someone else changed this site .*reload/);

@@ -1,0 +1,55 @@
+/**
+ * What the form dialogs' component tests share. Element Plus teleports a dialog to the page's
+ * body, so these read `document.body`, not the wrapper.
+ */
+import { abilitiesPlugin } from '@casl/vue';
+import { defineAbilityFor, type Actor, type DistrictRow, type Polygon } from '@swardwise/domain';
+import { flushPromises, mount } from '@vue/test-utils';
+import ElementPlus from 'element-plus';
+import { createPinia, type Pinia } from 'pinia';
+import { afterEach, vi } from 'vitest';
+import type { Component } from 'vue';
+
+export const $ = (sel: string) => document.body.querySelector(sel);
+export const errorsShown = () => [...document.body.querySelectorAll('.el-form-item__error')].map((e) => e.textContent?.trim());
+export const labelsShown = () => [...document.body.querySelectorAll('.el-form-item__label')].map((e) => e.textContent?.trim());
+
+const boundary: Polygon = { type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 0]]] };
+export const district = (id: number, name: string): DistrictRow => ({ id, code: name.toLowerCase(), name, boundary, yard: { name: 'Yard', lat: 0, lng: 0 }, version: 1, siteCount: 0, fieldCount: 0, fieldAreaM2: 0 });
+export const FOREMAN_NORTH: Actor = { id: 3, role: 'foreman', districtId: 1, crewId: null, siteIds: [] };
+
+/** Mounts a dialog open, with Element Plus, a store and, given an actor, the actor's abilities. */
+export function mountDialog(component: Component, props: Record<string, unknown>, options: { actor?: Actor; pinia?: Pinia } = {}) {
+  const plugins: unknown[] = [ElementPlus, options.pinia ?? createPinia()];
+  if (options.actor) plugins.push([abilitiesPlugin, defineAbilityFor(options.actor)]);
+  return mount(component, { props: { open: true, ...props }, global: { plugins: plugins as never }, attachTo: document.body });
+}
+
+/** Types into an Element Plus input (the data-test on the input or on its wrapper) and leaves it. */
+export async function type(sel: string, value: string) {
+  const input = $(`${sel} input, input${sel}`) as HTMLInputElement;
+  input.value = value;
+  input.dispatchEvent(new Event('input'));
+  input.dispatchEvent(new Event('change'));
+  input.dispatchEvent(new FocusEvent('blur'));
+  await flushPromises();
+}
+
+/** Clicks a dialog's submit button (`<test>-submit`) and waits out validation and the request. */
+export async function submitDialog(test: string) {
+  ($(`[data-test="${test}-submit"]`) as HTMLButtonElement).click();
+  await flushPromises();
+  await new Promise((r) => setTimeout(r, 0));
+  await flushPromises();
+}
+
+/** A fetch stand-in answering every call with `body` as JSON. */
+export const answering = (status: number, body: unknown) => vi.fn(async (_url: string, _init?: RequestInit) => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } }));
+
+/** After each test of the file: the page emptied, fetch restored. */
+export function cleanUpAfterEach() {
+  afterEach(() => {
+    vi.unstubAllGlobals();
+    document.body.innerHTML = '';
+  });
+}
