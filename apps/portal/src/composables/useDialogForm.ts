@@ -1,7 +1,8 @@
 import { useAbility } from '@casl/vue';
 import { asSubject, type AppAbility, type DistrictRow } from '@swardwise/domain';
-import { computed, watch, type Ref } from 'vue';
+import { computed, ref, shallowRef, watch, type Ref } from 'vue';
 import { rowOptions } from '../utils/options.ts';
+import type { QueryState } from './useApiQuery.ts';
 import type { FormSubmit } from './useFormSubmit.ts';
 
 /**
@@ -43,4 +44,22 @@ export function useDistrictChoice(subject: 'Site' | 'Crew' | 'Equipment', distri
     disabled: districtOptions.value.length <= 1 && !!model.districtId,
   }));
   return { districtOptions, districtItem, pickOnly };
+}
+
+/**
+ * A page's create-or-edit dialog over a list: which row it edits (null: a new one), and the
+ * Reload a version conflict offers, which reads the list again and edits the fresh row.
+ */
+export function useEditDialog<T extends { id: number }>(list: Pick<QueryState<readonly T[]>, 'data' | 'refetch'>) {
+  const open = ref(false);
+  const editing = shallowRef<T | null>(null);
+  function edit(row: T | null) {
+    editing.value = row;
+    open.value = true;
+  }
+  async function reloadEditing() {
+    await list.refetch();
+    editing.value = list.data.value?.find((r) => r.id === editing.value?.id) ?? null;
+  }
+  return { open, editing, edit, reloadEditing };
 }

@@ -1,9 +1,9 @@
 import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
-import { beforeEach, describe, expect, test } from 'vitest';
-import { nextTick } from 'vue';
+import { beforeEach, describe, expect, test, vi } from 'vitest';
+import { computed, nextTick } from 'vue';
 import DataTable from './DataTable.vue';
-import { columnHelper } from './features.ts';
+import { columnHelper, labelled } from './features.ts';
 
 interface Row {
   name: string;
@@ -137,5 +137,41 @@ describe('DataTable', () => {
     exposed.table.getColumn('district').setFilterValue('South');
     await nextTick();
     expect(exposed.csvText().split('\r\n')[1]).toBe('"Field ""A"", north",South,1');
+  });
+});
+
+describe('DataTable over a query', () => {
+  const query = (data: Row[] | null, error: string | null) => {
+    const refetch = vi.fn(async () => undefined);
+    return { data: computed(() => data), loading: computed(() => false), error: computed(() => error), refetch };
+  };
+
+  test('should show the rows of the query', () => {
+    const w = mount(DataTable<Row>, { props: { query: query(rows(3), null), columns, label: 'fields' }, global: { plugins: [ElementPlus] } });
+    expect(names(w)).toEqual(['Field 01', 'Field 02', 'Field 03']);
+    expect(w.find('[data-test="load-error"]').exists()).toBe(false);
+  });
+
+  test('should show the load error in place of the table and read again on Try again', async () => {
+    const q = query(null, 'The server did not answer.');
+    const w = mount(DataTable<Row>, { props: { query: q, columns, label: 'fields' }, global: { plugins: [ElementPlus] } });
+    expect(w.get('[data-test="load-error"]').text()).toContain('The server did not answer.');
+    expect(w.find('[data-test="table-fields"]').exists()).toBe(false);
+    await w.get('[data-test="load-error"] button').trigger('click');
+    expect(q.refetch).toHaveBeenCalledTimes(1);
+  });
+});
+
+describe('labelled', () => {
+  test('should show, search and filter a code by its label', () => {
+    const KINDS: Record<string, string> = { park: 'Park', school: 'School campus' };
+    const byKind = columnHelper<{ kind: string }>().accessor('kind', { header: 'Kind', ...labelled(KINDS) });
+    const w = mount(DataTable<{ kind: string }>, {
+      props: { data: [{ kind: 'school' }, { kind: 'park' }], columns: [byKind], label: 'sites', filters: [{ column: 'kind', label: 'Kind' }] },
+      global: { plugins: [ElementPlus] },
+    });
+    expect(w.findAll('[data-test="row"] td').map((td) => td.text())).toEqual(['School campus', 'Park']);
+    expect(byKind.filterFn).toBe('equals');
+    expect(byKind.meta?.text?.('school')).toBe('School campus');
   });
 });

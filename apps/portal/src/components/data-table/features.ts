@@ -58,6 +58,15 @@ export function columnHelper<TData extends RowData>() {
   return createColumnHelper<DataTableFeatures, TData>();
 }
 
+/**
+ * The options of a column whose values are codes shown by their labels (a kind, a sport): the
+ * cell, the search, the select filter and the export all use the label.
+ */
+export function labelled<V extends string | number>(labels: Record<V, string> | ((value: V) => string)) {
+  const text = typeof labels === 'function' ? labels : (value: V) => labels[value] ?? String(value);
+  return { filterFn: 'equals' as const, meta: { text }, cell: (c: { getValue: () => V }) => text(c.getValue()) };
+}
+
 /** A select filter above the table over one column's values. */
 export interface SelectFilter {
   column: string;

@@ -1,8 +1,8 @@
-import { FIELD_STATUS_LABELS, GRASS_LABELS, LEVEL_NAMES, SPORT_LABELS, type FieldRow, type FieldStatus, type Grass, type Level, type Sport, type UnitSystem } from '@swardwise/domain';
+import { FIELD_STATUS_LABELS, GRASS_LABELS, LEVEL_NAMES, SPORT_LABELS, type FieldRow, type FieldStatus, type Level, type UnitSystem } from '@swardwise/domain';
 import { h } from 'vue';
 import { RouterLink } from 'vue-router';
 import { formatHoc, formatLandArea, hocUnit, hocValue, landAreaUnit, landAreaValue } from '../../utils/units.ts';
-import { columnHelper, type DataColumn } from '../data-table/features.ts';
+import { columnHelper, labelled, type DataColumn } from '../data-table/features.ts';
 import LevelTag from './LevelTag.vue';
 import StatusTag from './StatusTag.vue';
 
@@ -24,18 +24,8 @@ export function fieldColumns(units: UnitSystem, keys: FieldColumnKey[]): DataCol
       cell: (c) => h(RouterLink, { to: `/sites/${c.row.original.siteId}`, class: 'sw-link' }, () => c.getValue()),
     }),
     district: col.accessor('districtName', { id: 'district', header: 'District', filterFn: 'equals' }),
-    sport: col.accessor('sport', {
-      header: 'Sport',
-      filterFn: 'equals',
-      meta: { text: (v: Sport) => SPORT_LABELS[v] ?? v },
-      cell: (c) => SPORT_LABELS[c.getValue() as Sport] ?? c.getValue(),
-    }),
-    grass: col.accessor('grass', {
-      header: 'Grass',
-      filterFn: 'equals',
-      meta: { text: (v: Grass) => GRASS_LABELS[v] ?? v },
-      cell: (c) => GRASS_LABELS[c.getValue() as Grass] ?? c.getValue(),
-    }),
+    sport: col.accessor('sport', { header: 'Sport', ...labelled(SPORT_LABELS) }),
+    grass: col.accessor('grass', { header: 'Grass', ...labelled(GRASS_LABELS) }),
     level: col.accessor('maintenanceLevel', {
       id: 'level',
       header: 'Level',

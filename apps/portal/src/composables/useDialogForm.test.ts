@@ -1,0 +1,42 @@
+import { describe, expect, test, vi } from 'vitest';
+import { computed, ref } from 'vue';
+import { resetOnOpen, useEditDialog } from './useDialogForm.ts';
+
+describe('useEditDialog', () => {
+  test('should open on the row to edit, or on none for a new one', () => {
+    const list = { data: computed(() => [{ id: 1, name: 'Alder Green' }]), refetch: vi.fn(async () => undefined) };
+    const dialog = useEditDialog(list);
+    expect(dialog.open.value).toBe(false);
+    dialog.edit(list.data.value[0]!);
+    expect([dialog.open.value, dialog.editing.value?.name]).toEqual([true, 'Alder Green']);
+    dialog.edit(null);
+    expect(dialog.editing.value).toBeNull();
+  });
+
+  test('should read the list again on Reload and edit the fresh row', async () => {
+    const rows = ref([{ id: 1, name: 'Alder Green', version: 1 }]);
+    const list = { data: computed(() => rows.value), refetch: vi.fn(async () => void (rows.value = [{ id: 1, name: 'Alder Green Park', version: 2 }])) };
+    const dialog = useEditDialog(list);
+    dialog.edit(rows.value[0]!);
+    await dialog.reloadEditing();
+    expect(list.refetch).toHaveBeenCalledTimes(1);
+    expect(dialog.editing.value).toEqual({ id: 1, name: 'Alder Green Park', version: 2 });
+  });
+});
+
+describe('resetOnOpen', () => {
+  test('should fill the form and clear the last errors each time the dialog opens', async () => {
+    const open = ref(false);
+    const fill = vi.fn();
+    const clearValidate = vi.fn();
+    const submission = { clear: vi.fn(), form: ref({ clearValidate }) as never };
+    resetOnOpen(open, () => null, fill, submission);
+    expect(fill).not.toHaveBeenCalled();
+    open.value = true;
+    await Promise.resolve();
+    expect([fill.mock.calls.length, submission.clear.mock.calls.length, clearValidate.mock.calls.length]).toEqual([1, 1, 1]);
+    open.value = false;
+    await Promise.resolve();
+    expect(fill).toHaveBeenCalledTimes(1);
+  });
+});
