@@ -1,5 +1,13 @@
-/** Debian's chromium driven by playwright-core; never a downloaded browser. */
-import { chromium, type Browser } from 'playwright-core';
+/**
+ * Debian's chromium driven by playwright-core (never a downloaded browser), and what every
+ * browser test file shares: one browser for the file, the screenshot folder, signing in.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { afterAll, beforeAll, inject } from 'vitest';
+import type { Role } from '@swardwise/domain';
+import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 
 export const CHROMIUM_ARGS = [
   '--headless',
@@ -13,4 +21,36 @@ export const CHROMIUM_ARGS = [
 
 export function launchBrowser(): Promise<Browser> {
   return chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', args: CHROMIUM_ARGS });
+}
+
+/** Where browser tests leave the screenshots a person looks at. */
+export const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
+
+/** The file's browser, set by `useBrowser()` before its tests (a live binding). */
+export let browser: Browser;
+
+/** Launches the file's browser before its tests and closes it after them. */
+export function useBrowser(): void {
+  beforeAll(async () => {
+    fs.mkdirSync(shots, { recursive: true });
+    browser = await launchBrowser();
+  });
+  afterAll(() => browser?.close());
+}
+
+/**
+ * Fills the e-mail and password of a demo account on the sign-in page the browser shows and
+ * waits to be let in: onto `landing` when given, else anywhere but the sign-in page.
+ */
+export async function enterSignIn(page: Page, role: Role, landing?: string) {
+  await page.getByLabel('E-mail').fill(DEMO_SIGN_INS[role].email);
+  await page.getByLabel('Password').fill(DEMO_SIGN_INS[role].password);
+  await page.getByRole('button', { name: /sign in/i }).click();
+  await page.waitForURL((url) => (landing ? url.pathname === landing : !url.pathname.startsWith('/sign-in')));
+}
+
+/** Signs in through the real sign-in page as the demo account of `role`. */
+export async function signIn(page: Page, role: Role, landing?: string) {
+  await page.goto(`${inject('baseUrl')}/sign-in`);
+  await enterSignIn(page, role, landing);
 }

@@ -2,31 +2,14 @@
  * The field page shows what the field needs, worked out from the Standards; the head edits
  * a level's HOC on the Standards page and the field page follows.
  */
-import fs from 'node:fs';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
-import { formatHocText, type Role, type UnitSystem } from '@swardwise/domain';
-import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
-import { launchBrowser } from './browser.ts';
+import { describe, expect, inject, test } from 'vitest';
+import { formatHocText, type UnitSystem } from '@swardwise/domain';
+import { browser, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
-const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
-let browser: Browser;
 
-beforeAll(async () => {
-  fs.mkdirSync(shots, { recursive: true });
-  browser = await launchBrowser();
-});
-afterAll(() => browser?.close());
-
-async function signIn(page: Page, role: Role) {
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(DEMO_SIGN_INS[role].email);
-  await page.getByLabel('Password').fill(DEMO_SIGN_INS[role].password);
-  await page.getByRole('button', { name: /sign in/i }).click();
-  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
-}
+useBrowser();
 
 interface FieldRow {
   id: number;

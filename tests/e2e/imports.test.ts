@@ -6,24 +6,15 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
-import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
-import { launchBrowser } from './browser.ts';
+import type { Page } from 'playwright-core';
+import { afterAll, describe, expect, inject, test } from 'vitest';
+import { browser, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
-const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
 const work = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-imports-'));
-let browser: Browser;
 
-beforeAll(async () => {
-  fs.mkdirSync(shots, { recursive: true });
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  fs.rmSync(work, { recursive: true, force: true });
-});
+useBrowser();
+afterAll(() => fs.rmSync(work, { recursive: true, force: true }));
 
 const HEADER = 'site,district,kind,owner,address,lat,lng,notes';
 const SITE = 'Quillwort Meadow';
@@ -32,14 +23,6 @@ function csvFile(name: string, ...lines: string[]): string {
   const file = path.join(work, name);
   fs.writeFileSync(file, [HEADER, ...lines].join('\n') + '\n');
   return file;
-}
-
-async function signIn(page: Page) {
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(DEMO_SIGN_INS.foreman.email);
-  await page.getByLabel('Password').fill(DEMO_SIGN_INS.foreman.password);
-  await page.getByRole('button', { name: /sign in/i }).click();
-  await page.waitForURL((url) => url.pathname === '/district');
 }
 
 async function sitesListed(page: Page, name: string): Promise<number> {
@@ -53,7 +36,7 @@ describe('importing sites', () => {
   test('should show a bad row’s error, import a clean file, list the new site and undo it', async () => {
     const page = await browser.newPage({ viewport: { width: 1360, height: 900 } });
     try {
-      await signIn(page);
+      await signIn(page, 'foreman', '/district');
       await page.locator('[data-test="nav-imports"]').click();
       await page.waitForURL((url) => url.pathname === '/imports');
 

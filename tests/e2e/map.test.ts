@@ -2,31 +2,19 @@
  * The map in chromium: themes and legend, drawing a new field outline with its live area,
  * and a partner who sees only his own sites' fields.
  */
-import fs from 'node:fs';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, test } from 'vitest';
 import type { Role } from '@swardwise/domain';
-import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
-import { launchBrowser } from './browser.ts';
+import { browser, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
-const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
-let browser: Browser;
 
-beforeAll(async () => {
-  fs.mkdirSync(shots, { recursive: true });
-  browser = await launchBrowser();
-});
-afterAll(() => browser?.close());
+useBrowser();
 
 async function openMap(role: Role): Promise<Page> {
   const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(DEMO_SIGN_INS[role].email);
-  await page.getByLabel('Password').fill(DEMO_SIGN_INS[role].password);
-  await page.getByRole('button', { name: /sign in/i }).click();
-  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+  await signIn(page, role);
   await page.locator('[data-test="nav-map"]').click();
   await page.waitForURL((url) => url.pathname === '/map');
   await page.locator('[data-test="field-map"][data-ready="true"]').waitFor();

@@ -6,34 +6,16 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
-import type { Role } from '@swardwise/domain';
-import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
-import { launchBrowser } from './browser.ts';
+import type { Page } from 'playwright-core';
+import { afterAll, describe, expect, inject, test } from 'vitest';
+import { browser, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
-const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
 const work = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-pages-'));
 const VIEWPORT = { width: 1366, height: 900 };
-let browser: Browser;
 
-beforeAll(async () => {
-  fs.mkdirSync(shots, { recursive: true });
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  fs.rmSync(work, { recursive: true, force: true });
-});
-
-async function signIn(page: Page, role: Role) {
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(DEMO_SIGN_INS[role].email);
-  await page.getByLabel('Password').fill(DEMO_SIGN_INS[role].password);
-  await page.getByRole('button', { name: /sign in/i }).click();
-  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
-}
+useBrowser();
+afterAll(() => fs.rmSync(work, { recursive: true, force: true }));
 
 /** Waits for running CSS animations (a dialog opening) to end, so a screenshot shows the settled page. */
 async function settled(page: Page) {

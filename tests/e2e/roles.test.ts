@@ -2,23 +2,15 @@
  * Each role signs in through the real sign-in page, lands on its own page and sees only
  * its own navigation.
  */
-import fs from 'node:fs';
 import path from 'node:path';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
+import { describe, expect, inject, test } from 'vitest';
 import type { Role } from '@swardwise/domain';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
-import { launchBrowser } from './browser.ts';
+import { browser, enterSignIn, shots, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
-const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
-let browser: Browser;
 
-beforeAll(async () => {
-  fs.mkdirSync(shots, { recursive: true });
-  browser = await launchBrowser();
-});
-afterAll(() => browser?.close());
+useBrowser();
 
 const expected: Record<Role, { landing: string; nav: string[] }> = {
   admin: { landing: '/admin/users', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'week', 'records', 'imports', 'users', 'audit'] },
@@ -34,10 +26,7 @@ describe('signing in by role', () => {
     try {
       await page.goto(`${baseUrl}/`);
       await page.waitForURL(/\/sign-in/);
-      await page.getByLabel('E-mail').fill(DEMO_SIGN_INS[role].email);
-      await page.getByLabel('Password').fill(DEMO_SIGN_INS[role].password);
-      await page.getByRole('button', { name: /sign in/i }).click();
-      await page.waitForURL((url) => url.pathname === expected[role].landing);
+      await enterSignIn(page, role, expected[role].landing);
       await page.locator('[data-test="page-title"]').first().waitFor();
       const nav = await page.locator('[data-test^="nav-"]').evaluateAll((els) => els.map((el) => el.getAttribute('data-test')!.slice(4)));
       expect(nav.sort()).toEqual([...expected[role].nav].sort());

@@ -3,32 +3,19 @@
  * while the reports request keeps failing; the report waits on the phone, survives a reload
  * and reaches the server exactly once.
  */
-import fs from 'node:fs';
 import path from 'node:path';
 import sharp from 'sharp';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
-import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
-import { launchBrowser } from './browser.ts';
+import type { BrowserContext, Page } from 'playwright-core';
+import { describe, expect, test } from 'vitest';
+import { browser, shots, signIn, useBrowser } from './browser.ts';
 
-const baseUrl = inject('baseUrl');
-const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
 const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
-let browser: Browser;
 
-beforeAll(async () => {
-  fs.mkdirSync(shots, { recursive: true });
-  browser = await launchBrowser();
-});
-afterAll(() => browser?.close());
+useBrowser();
 
 async function signInCrew(context: BrowserContext): Promise<Page> {
   const page = await context.newPage();
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(DEMO_SIGN_INS.crew.email);
-  await page.getByLabel('Password').fill(DEMO_SIGN_INS.crew.password);
-  await page.getByRole('button', { name: /sign in/i }).click();
-  await page.waitForURL((url) => url.pathname === '/today');
+  await signIn(page, 'crew', '/today');
   await page.locator('[data-test="job-card"]').first().waitFor();
   return page;
 }

@@ -3,19 +3,15 @@
  * work orders onto another crew's day and the API has them assigned; a stale card answers
  * with a reload; the crew sheet prints; the head sees the board read-only.
  */
-import fs from 'node:fs';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, test } from 'vitest';
 import type { Role } from '@swardwise/domain';
-import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
-import { launchBrowser } from './browser.ts';
+import { browser, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
-const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
 // A week inside the demo season, with weather for every day; no other browser test plans it.
 const WEEK = '2026-07-13';
-let browser: Browser;
 
 interface Board {
   districtId: number;
@@ -23,11 +19,7 @@ interface Board {
   orders: { id: number; crewId: number | null; plannedDate: string; status: string; pinned: boolean; version: number }[];
 }
 
-beforeAll(async () => {
-  fs.mkdirSync(shots, { recursive: true });
-  browser = await launchBrowser();
-});
-afterAll(() => browser?.close());
+useBrowser();
 
 /**
  * Tall enough for the whole board: Playwright's drag scrolls to the target after pressing on
@@ -35,13 +27,9 @@ afterAll(() => browser?.close());
  */
 const TALL = { width: 1366, height: 2400 };
 
-async function signIn(role: Role, viewport = { width: 1366, height: 900 }): Promise<Page> {
+async function openAs(role: Role, viewport = { width: 1366, height: 900 }): Promise<Page> {
   const page = await browser.newPage({ viewport });
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(DEMO_SIGN_INS[role].email);
-  await page.getByLabel('Password').fill(DEMO_SIGN_INS[role].password);
-  await page.getByRole('button', { name: /sign in/i }).click();
-  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+  await signIn(page, role);
   return page;
 }
 
@@ -63,7 +51,7 @@ const card = (page: Page, id: number) => page.locator(`[data-test="order-card"][
 
 describe('the week plan board', () => {
   test('should let a foreman generate the week and assign two jobs to a crew by dragging them', async () => {
-    const page = await signIn('foreman', TALL);
+    const page = await openAs('foreman', TALL);
     try {
       await openWeek(page);
       const districtId = await myDistrict(page);
@@ -105,7 +93,7 @@ describe('the week plan board', () => {
   });
 
   test('should reload and say so when someone else changed a card before it was dropped', async () => {
-    const page = await signIn('foreman', TALL);
+    const page = await openAs('foreman', TALL);
     try {
       await openWeek(page);
       await page.locator('[data-test="order-card"]').first().waitFor();
@@ -133,7 +121,7 @@ describe('the week plan board', () => {
   });
 
   test('should print a crew sheet with the route, each job with blanks for hours and notes, and the cautions', async () => {
-    const page = await signIn('foreman');
+    const page = await openAs('foreman');
     try {
       await openWeek(page);
       const link = page.locator('[data-test="print-sheet"]').first();
@@ -153,7 +141,7 @@ describe('the week plan board', () => {
   });
 
   test('should show the head the board of a district read-only', async () => {
-    const page = await signIn('head');
+    const page = await openAs('head');
     try {
       await openWeek(page);
       await page.locator('[data-test="week-readonly"]').waitFor();

@@ -3,38 +3,21 @@
  * first crew's day for today, and that crew's lead, on a phone, finds them on Today and logs
  * one done with a photo. The API then has it done, with the photo and the hours.
  */
-import fs from 'node:fs';
 import path from 'node:path';
 import sharp from 'sharp';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
+import { describe, expect, inject, test } from 'vitest';
 import { DEFAULT_TIME_ZONE, localToday, mondayOf } from '@swardwise/domain';
-import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
-import { launchBrowser } from './browser.ts';
+import { browser, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
-const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
 const TALL = { width: 1366, height: 2400 };
 const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
-let browser: Browser;
 
-beforeAll(async () => {
-  fs.mkdirSync(shots, { recursive: true });
-  browser = await launchBrowser();
-});
-afterAll(() => browser?.close());
+useBrowser();
 
 interface Board {
   crews: { id: number; name: string }[];
   orders: { id: number; crewId: number | null; plannedDate: string; status: string; task: string }[];
-}
-
-async function signIn(page: Page, who: 'foreman' | 'crew', landing: string) {
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(DEMO_SIGN_INS[who].email);
-  await page.getByLabel('Password').fill(DEMO_SIGN_INS[who].password);
-  await page.getByRole('button', { name: /sign in/i }).click();
-  await page.waitForURL((url) => url.pathname === landing || !url.pathname.startsWith('/sign-in'));
 }
 
 describe('from the week plan to the crew’s phone', () => {
@@ -45,7 +28,7 @@ describe('from the week plan to the crew’s phone', () => {
     const foreman = await browser.newPage({ viewport: TALL });
     let jobIds: number[] = [];
     try {
-      await signIn(foreman, 'foreman', '/');
+      await signIn(foreman, 'foreman');
       await foreman.goto(`${baseUrl}/week?week=${monday}`);
       await foreman.locator('[data-test="week-grid"]').waitFor();
       await foreman.locator('[data-test="generate-week"]').click();
