@@ -6,7 +6,7 @@ import type supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { addDaysIso } from '@swardwise/domain';
 import { fieldChecks, fieldEvents, fields, imports, workOrders, workPhotos, workUpdates } from '../../apps/api/src/db/schema/index.ts';
-import { giveWork, rectangle } from '../support/fixture.ts';
+import { fieldBody, giveWork, rectangle } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
 /**
@@ -35,17 +35,7 @@ let n = 0;
 
 async function newField(agent: Agent = foreman, siteId = api.fixture.sites.northPark) {
   n += 1;
-  const res = await agent.post('/api/fields').send({
-    siteId,
-    name: `Temporary pitch ${n}`,
-    sport: 'soccer',
-    grass: 'tall_fescue',
-    rootzone: 'native_soil',
-    irrigation: 'none',
-    maintenanceLevel: 2,
-    clippings: 'returned',
-    geometry: rectangle(37.624 + n * 0.0012, -66.474, 60, 90),
-  });
+  const res = await agent.post('/api/fields').send(fieldBody(siteId, `Temporary pitch ${n}`, rectangle(37.624 + n * 0.0012, -66.474, 60, 90), { maintenanceLevel: 2 }));
   expect(res.status).toBe(201);
   return res.body.field as { id: number; version: number; name: string };
 }

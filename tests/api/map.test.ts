@@ -7,7 +7,7 @@ import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { createMailer } from '../../apps/api/src/mail/mailer.ts';
 import { fieldChecks, fields, settings, standards, weatherDays, weatherStations } from '../../apps/api/src/db/schema/index.ts';
-import { giveWork, rectangle, PASSWORD } from '../support/fixture.ts';
+import { fieldBody, giveWork, rectangle, PASSWORD } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
 let api: TestApi;
@@ -132,17 +132,7 @@ describe('GET /api/map', () => {
   test('should show a new east–west field at once with its flag', async () => {
     const agent = await api.signIn('foreman');
     await agent.get('/api/map?asOf=2026-07-01');
-    const created = await agent.post('/api/fields').send({
-      siteId: api.fixture.sites.northPark,
-      name: 'Cross pitch',
-      sport: 'soccer',
-      grass: 'tall_fescue',
-      rootzone: 'native_soil',
-      irrigation: 'none',
-      maintenanceLevel: 3,
-      clippings: 'returned',
-      geometry: rectangle(37.625, -66.48, 105, 68),
-    });
+    const created = await agent.post('/api/fields').send(fieldBody(api.fixture.sites.northPark, 'Cross pitch', rectangle(37.625, -66.48, 105, 68)));
     expect(created.status).toBe(201);
     const res = await agent.get('/api/map?asOf=2026-07-01');
     expect(fieldOf(res, created.body.field.id)).toMatchObject({ eastWest: true, overdue: null, daysSinceMowing: null });

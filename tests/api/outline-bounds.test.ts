@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { Polygon } from '@swardwise/domain';
 import { fields } from '../../apps/api/src/db/schema/index.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
+import { fieldBody } from '../support/fixture.ts';
 
 /**
  * An outline's positions are bounded (5,000 over all rings) in the shared schema, so field
@@ -24,17 +25,7 @@ function circle(n: number, lng = -66.47, lat = 37.64): Polygon {
   return { type: 'Polygon', coordinates: [[...pts, pts[0]!]] };
 }
 
-const newField = (geometry: Polygon) => ({
-  siteId: api.fixture.sites.northPark,
-  name: 'Round lawn',
-  sport: 'lawn',
-  grass: 'tall_fescue',
-  rootzone: 'native_soil',
-  irrigation: 'none',
-  maintenanceLevel: 4,
-  clippings: 'returned',
-  geometry,
-});
+const newField = (geometry: Polygon) => fieldBody(api.fixture.sites.northPark, 'Round lawn', geometry, { sport: 'lawn', maintenanceLevel: 4 });
 
 describe('outline size', () => {
   test('should refuse 100,000 positions with a 400 naming the ring, and write nothing', async () => {

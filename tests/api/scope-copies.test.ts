@@ -3,7 +3,7 @@ import type supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { addDaysIso } from '@swardwise/domain';
 import { fieldEvents, fields, workOrders } from '../../apps/api/src/db/schema/index.ts';
-import { giveWork, rectangle } from '../support/fixture.ts';
+import { fieldBody, giveWork, rectangle } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
 /**
@@ -33,17 +33,7 @@ let n = 0;
 /** A new field at a site with one work order of the site's district crew and one booking. */
 async function fieldWithWork(siteId: number, crewId: number) {
   n += 1;
-  const created = await admin.post('/api/fields').send({
-    siteId,
-    name: `Moving field ${n}`,
-    sport: 'soccer',
-    grass: 'tall_fescue',
-    rootzone: 'native_soil',
-    irrigation: 'none',
-    maintenanceLevel: 3,
-    clippings: 'returned',
-    geometry: rectangle(37.62 + n * 0.001, -66.47, 60, 90),
-  });
+  const created = await admin.post('/api/fields').send(fieldBody(siteId, `Moving field ${n}`, rectangle(37.62 + n * 0.001, -66.47, 60, 90)));
   expect(created.status).toBe(201);
   const fieldId = created.body.field.id as number;
   const orderId = await giveWork(api.database.db, fieldId, crewId, 1);

@@ -1,7 +1,7 @@
 import { and, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { auditLog, fields, sites } from '../../apps/api/src/db/schema/index.ts';
-import { rectangle } from '../support/fixture.ts';
+import { fieldBody, rectangle } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
 let api: TestApi;
@@ -23,17 +23,7 @@ describe('writes across districts', () => {
     expect(await fieldRow(id)).toEqual(before);
     const site = await agent.patch(`/api/sites/${api.fixture.sites.southPark}`).send({ version: 1, name: 'Not mine' });
     expect(site.status).toBe(403);
-    const created = await agent.post('/api/fields').send({
-      siteId: api.fixture.sites.southPark,
-      name: 'Sneaky',
-      sport: 'soccer',
-      grass: 'tall_fescue',
-      rootzone: 'native_soil',
-      irrigation: 'none',
-      maintenanceLevel: 3,
-      clippings: 'returned',
-      geometry: rectangle(37.52, -66.47, 60, 90),
-    });
+    const created = await agent.post('/api/fields').send(fieldBody(api.fixture.sites.southPark, 'Sneaky', rectangle(37.52, -66.47, 60, 90)));
     expect(created.status).toBe(403);
     const count = await api.database.db.select().from(fields).where(eq(fields.name, 'Sneaky'));
     expect(count).toHaveLength(0);
@@ -77,17 +67,7 @@ describe('validation', () => {
 
   test('should refuse an open polygon ring', async () => {
     const agent = await api.signIn('foreman');
-    const res = await agent.post('/api/fields').send({
-      siteId: api.fixture.sites.northPark,
-      name: 'Open ring',
-      sport: 'soccer',
-      grass: 'tall_fescue',
-      rootzone: 'native_soil',
-      irrigation: 'none',
-      maintenanceLevel: 3,
-      clippings: 'returned',
-      geometry: { type: 'Polygon', coordinates: [[[-66.48, 37.62], [-66.47, 37.62], [-66.47, 37.63], [-66.48, 37.631]]] },
-    });
+    const res = await agent.post('/api/fields').send(fieldBody(api.fixture.sites.northPark, 'Open ring', { type: 'Polygon', coordinates: [[[-66.48, 37.62], [-66.47, 37.62], [-66.47, 37.63], [-66.48, 37.631]]] }));
     expect(res.status).toBe(400);
     expect(res.body.error.details.issues[0].message).toMatch(/end where it starts/);
   });
@@ -164,17 +144,7 @@ describe('audit log', () => {
 describe('deleting a field', () => {
   test('should let a foreman delete his own field with its version, audited, and refuse a stale version or another district', async () => {
     const agent = await api.signIn('foreman');
-    const created = await agent.post('/api/fields').send({
-      siteId: api.fixture.sites.northPark,
-      name: 'Temporary pitch',
-      sport: 'soccer',
-      grass: 'tall_fescue',
-      rootzone: 'native_soil',
-      irrigation: 'none',
-      maintenanceLevel: 3,
-      clippings: 'returned',
-      geometry: rectangle(37.623, -66.476, 45, 64),
-    });
+    const created = await agent.post('/api/fields').send(fieldBody(api.fixture.sites.northPark, 'Temporary pitch', rectangle(37.623, -66.476, 45, 64)));
     expect(created.status).toBe(201);
     const id = created.body.field.id;
     expect((await agent.delete(`/api/fields/${id}?version=2`)).status).toBe(409);

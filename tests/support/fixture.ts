@@ -2,7 +2,7 @@
  * A small city built row by row for API tests: two districts, three sites, four fields,
  * two crews and one user per role (plus a second foreman and a deactivated account).
  */
-import { addDaysIso, DEFAULT_STANDARDS, DEFAULT_TIME_ZONE, LEVELS, localToday, type Polygon, type Role } from '@swardwise/domain';
+import { addDaysIso, DEFAULT_STANDARDS, DEFAULT_TIME_ZONE, LEVELS, localToday, type CreateFieldInput, type Polygon, type Role } from '@swardwise/domain';
 import type { Db } from '../../apps/api/src/db/client.ts';
 import { eq } from 'drizzle-orm';
 import { crews, districts, fields, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../../apps/api/src/db/schema/index.ts';
@@ -11,41 +11,25 @@ import { polygonAreaM2 } from '@swardwise/domain';
 
 export const PASSWORD = 'correct-horse-42';
 
+/** A closed ring around the box of `dLat` × `dLng` degrees with its south-west corner at (lat, lng). */
+function box(lat: number, lng: number, dLat: number, dLng: number): Polygon {
+  return { type: 'Polygon', coordinates: [[[lng, lat], [lng + dLng, lat], [lng + dLng, lat + dLat], [lng, lat + dLat], [lng, lat]]] };
+}
+
 /** A rectangle of `widthM` × `lengthM` metres with its south-west corner at (lat, lng), long axis north–south. */
 export function rectangle(lat: number, lng: number, widthM: number, lengthM: number): Polygon {
   // Metres per degree on the WGS84 ellipsoid at this latitude (the usual series expansion).
   const phi = (lat * Math.PI) / 180;
   const mPerDegLat = 111_132.92 - 559.82 * Math.cos(2 * phi) + 1.175 * Math.cos(4 * phi);
   const mPerDegLng = 111_412.84 * Math.cos(phi) - 93.5 * Math.cos(3 * phi);
-  const dLat = lengthM / mPerDegLat;
-  const dLng = widthM / mPerDegLng;
-  return {
-    type: 'Polygon',
-    coordinates: [
-      [
-        [lng, lat],
-        [lng + dLng, lat],
-        [lng + dLng, lat + dLat],
-        [lng, lat + dLat],
-        [lng, lat],
-      ],
-    ],
-  };
+  return box(lat, lng, lengthM / mPerDegLat, widthM / mPerDegLng);
 }
 
-function square(lat: number, lng: number, sizeDeg: number): Polygon {
-  return {
-    type: 'Polygon',
-    coordinates: [
-      [
-        [lng, lat],
-        [lng + sizeDeg, lat],
-        [lng + sizeDeg, lat + sizeDeg],
-        [lng, lat + sizeDeg],
-        [lng, lat],
-      ],
-    ],
-  };
+const square = (lat: number, lng: number, sizeDeg: number) => box(lat, lng, sizeDeg, sizeDeg);
+
+/** The body of `POST /api/fields` for an invented field: a soccer pitch of tall fescue on native soil unless `overrides` say otherwise. */
+export function fieldBody(siteId: number, name: string, geometry: Polygon, overrides: Partial<CreateFieldInput> = {}) {
+  return { siteId, name, sport: 'soccer', grass: 'tall_fescue', rootzone: 'native_soil', irrigation: 'none', maintenanceLevel: 3, clippings: 'returned', geometry, ...overrides };
 }
 
 export interface Fixture {
