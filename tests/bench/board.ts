@@ -8,21 +8,16 @@
  * Run: node --import tsx tests/bench/board.ts
  */
 import fs from 'node:fs';
-import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { eq } from 'drizzle-orm';
-import { pino } from 'pino';
-import { chromium } from 'playwright-core';
 import { addDaysIso, WORK_TASKS } from '@swardwise/domain';
-import { createApp } from '../../apps/api/src/app.ts';
-import { loadConfig } from '../../apps/api/src/config.ts';
 import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { crews, districts, fields, sites, users, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
-import { createMailer } from '../../apps/api/src/mail/mailer.ts';
-import { CHROMIUM_ARGS } from '../e2e/browser.ts';
+import { launchBrowser } from '../e2e/browser.ts';
+import { fmt, listenSignedIn, seeded, signedInPage } from './support.ts';
 
 const ORDERS = 500;
 const WEEK = '2026-06-15';
@@ -30,21 +25,8 @@ const API_RUNS = 30;
 const LOADS = 5;
 const DRAGS = 20;
 
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-const rand = rng(20260615);
-const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)] as T;
+const { rand, pick } = seeded(20260615);
 
-const pct = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor((p / 100) * xs.length))]!;
-const fmt = (xs: number[]) => `p50 ${pct(xs, 50).toFixed(1)} ms, p95 ${pct(xs, 95).toFixed(1)} ms, max ${Math.max(...xs).toFixed(1)} ms`;
 
 const database = await openDatabase({ pgliteDir: 'memory://' });
 const { db } = database;
@@ -75,15 +57,7 @@ const rows = Array.from({ length: ORDERS }, () => {
 });
 for (let i = 0; i < rows.length; i += 250) await db.insert(workOrders).values(rows.slice(i, i + 250));
 
-const logger = pino({ level: 'silent' });
-const config = loadConfig({ NODE_ENV: 'production', LOG_LEVEL: 'silent', LOGIN_ATTEMPTS: '1000' });
-const { app } = createApp({ db, config, logger, sessionSecret: 'bench-secret', mailer: createMailer(null, logger) });
-const server = app.listen(0, '127.0.0.1');
-await new Promise((r) => server.once('listening', r));
-const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-
-const signIn = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(DEMO_SIGN_INS.foreman) });
-const cookie = signIn.headers.get('set-cookie')!.split(';')[0]!;
+const { config, server, base, cookie } = await listenSignedIn(db, 'foreman');
 const boardUrl = `/api/week-plans?districtId=${districtId}&weekStart=${WEEK}`;
 
 const apiTimes: number[] = [];
@@ -103,10 +77,8 @@ const index = path.join(config.portalDist, 'index.html');
 if (!fs.existsSync(index)) {
   console.log('browser part skipped: build the portal first (npm run build)');
 } else {
-  const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', args: CHROMIUM_ARGS });
-  const context = await browser.newContext({ viewport: { width: 1366, height: 900 } });
-  await context.addCookies([{ name: cookie.split('=')[0]!, value: cookie.slice(cookie.indexOf('=') + 1), url: base }]);
-  const page = await context.newPage();
+  const browser = await launchBrowser();
+  const page = await signedInPage(browser, base, cookie, { width: 1366, height: 900 });
   const loadTimes: number[] = [];
   for (let i = 0; i < LOADS; i++) {
     await page.goto(`${base}/week?week=${WEEK}`);

@@ -8,6 +8,7 @@ import { performance } from 'node:perf_hooks';
 import { GRASSES, SPORTS } from '@swardwise/domain';
 import type { Grass, IrrigationKind, Level, Sport } from '@swardwise/domain';
 import * as e from '@swardwise/domain/engine';
+import { seeded } from './support.ts';
 
 const FIELDS = 3000;
 const FIELDS_PER_SITE = 10;
@@ -15,20 +16,7 @@ const CREWS = 40;
 const DISTRICTS = 3;
 const RUNS = 5;
 
-/** Small deterministic PRNG (mulberry32). */
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-const rand = rng(20260101);
-const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)] as T;
+const { rand, pick } = seeded(20260101);
 
 interface Site {
   id: number;

@@ -7,45 +7,21 @@
  * Run: node --import tsx tests/bench/map.ts
  */
 import fs from 'node:fs';
-import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
-import { pino } from 'pino';
-import { chromium } from 'playwright-core';
-import { GRASSES, SPORTS, addDaysIso, polygonAreaM2, longAxis, type Level, type Polygon } from '@swardwise/domain';
-import { createApp } from '../../apps/api/src/app.ts';
-import { loadConfig } from '../../apps/api/src/config.ts';
+import { addDaysIso } from '@swardwise/domain';
 import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { fieldChecks, fields, sites } from '../../apps/api/src/db/schema/index.ts';
-import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
-import { createMailer } from '../../apps/api/src/mail/mailer.ts';
-import { CHROMIUM_ARGS } from '../e2e/browser.ts';
+import { launchBrowser } from '../e2e/browser.ts';
+import { benchField, fmt, listenSignedIn, seeded, signedInPage } from './support.ts';
 
 const EXTRA_FIELDS = 3000;
 const RUNS = 40;
 
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-const rand = rng(20261201);
-const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)] as T;
+const gen = seeded(20261201);
+const { rand, pick } = gen;
 
-function rect(lat: number, lng: number, w: number, l: number): Polygon {
-  const dLat = l / 111_000;
-  const dLng = w / 88_000;
-  return { type: 'Polygon', coordinates: [[[lng, lat], [lng + dLng, lat], [lng + dLng, lat + dLat], [lng, lat + dLat], [lng, lat]]] };
-}
-
-const pct = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor((p / 100) * xs.length))]!;
-const fmt = (xs: number[]) => `p50 ${pct(xs, 50).toFixed(1)} ms, p95 ${pct(xs, 95).toFixed(1)} ms, max ${Math.max(...xs).toFixed(1)} ms`;
 
 const database = await openDatabase({ pgliteDir: 'memory://' });
 const { db } = database;
@@ -53,21 +29,10 @@ await seedDemoCity(db);
 const siteRows = await db.select({ id: sites.id, lat: sites.lat, lng: sites.lng }).from(sites);
 const rows = [];
 for (let i = 0; i < EXTRA_FIELDS; i++) {
-  const s = pick(siteRows);
-  const geometry = rect(s.lat + (rand() - 0.5) * 0.03, s.lng + (rand() - 0.5) * 0.04, 40 + rand() * 40, 70 + rand() * 50);
   rows.push({
-    siteId: s.id,
-    name: `Bench field ${i + 1}`,
-    sport: pick(SPORTS),
-    grass: pick(GRASSES),
-    rootzone: 'native_soil' as const,
+    ...benchField(pick(siteRows), i, gen, { lat: 0.03, lng: 0.04 }),
     irrigation: 'none' as const,
-    maintenanceLevel: (1 + Math.floor(rand() * 4)) as Level,
-    clippings: 'returned' as const,
     status: pick(['open', 'open', 'open', 'restricted', 'closed'] as const),
-    geometry,
-    areaM2: polygonAreaM2(geometry),
-    longAxisDeg: longAxis(geometry).bearingDeg,
     lastMowedOn: addDaysIso('2026-11-30', -Math.floor(rand() * 30)),
   });
 }
@@ -78,19 +43,7 @@ const checks = inserted.flatMap((f) =>
 );
 for (let i = 0; i < checks.length; i += 1000) await db.insert(fieldChecks).values(checks.slice(i, i + 1000));
 
-const logger = pino({ level: 'silent' });
-const config = loadConfig({ NODE_ENV: 'production', LOG_LEVEL: 'silent', LOGIN_ATTEMPTS: '1000' });
-const { app } = createApp({ db, config, logger, sessionSecret: 'bench-secret', mailer: createMailer(null, logger) });
-const server = app.listen(0, '127.0.0.1');
-await new Promise((r) => server.once('listening', r));
-const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-
-const signIn = await fetch(`${base}/api/auth/sign-in`, {
-  method: 'POST',
-  headers: { 'Content-Type': 'application/json' },
-  body: JSON.stringify(DEMO_SIGN_INS.head),
-});
-const cookie = signIn.headers.get('set-cookie')!.split(';')[0]!;
+const { config, server, base, cookie } = await listenSignedIn(db, 'head');
 
 async function timeGet(url: string): Promise<{ ms: number; bytes: number; body: unknown }> {
   const t0 = performance.now();
@@ -122,10 +75,8 @@ const index = path.join(config.portalDist, 'index.html');
 if (!fs.existsSync(index)) {
   console.log('browser part skipped: build the portal first (npm run build)');
 } else {
-  const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', args: CHROMIUM_ARGS });
-  const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
-  await context.addCookies([{ name: cookie.split('=')[0]!, value: cookie.slice(cookie.indexOf('=') + 1), url: base }]);
-  const page = await context.newPage();
+  const browser = await launchBrowser();
+  const page = await signedInPage(browser, base, cookie, { width: 1440, height: 900 });
   const pageTimes: number[] = [];
   for (let i = 0; i < 5; i++) {
     await page.goto(`${base}/map`);

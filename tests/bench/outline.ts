@@ -8,6 +8,7 @@
 import { performance } from 'node:perf_hooks';
 import { longAxis, MAX_OUTLINE_POSITIONS, type Polygon } from '@swardwise/domain';
 import { startTestApi } from '../support/app.ts';
+import { fieldBody } from '../support/fixture.ts';
 
 type XY = [number, number];
 
@@ -66,17 +67,7 @@ for (const n of [MAX_OUTLINE_POSITIONS, 32_000]) {
 
 const api = await startTestApi();
 const agent = await api.signIn('foreman');
-const body = (geometry: Polygon, i: number) => ({
-  siteId: api.fixture.sites.northPark,
-  name: `Bench lawn ${i}`,
-  sport: 'lawn',
-  grass: 'tall_fescue',
-  rootzone: 'native_soil',
-  irrigation: 'none',
-  maintenanceLevel: 4,
-  clippings: 'returned',
-  geometry,
-});
+const body = (geometry: Polygon, i: number) => fieldBody(api.fixture.sites.northPark, `Bench lawn ${i}`, geometry, { sport: 'lawn', maintenanceLevel: 4 });
 const atBound = circle(MAX_OUTLINE_POSITIONS);
 const created: number[] = [];
 const createTimes: number[] = [];

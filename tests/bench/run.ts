@@ -1,6 +1,7 @@
 /**
- * `npm run bench`: every benchmark script in this folder, one after another, each in its
- * own process so one does not warm or load the next. `npm run bench -- map` runs one.
+ * `npm run bench`: every benchmark script in this folder (not `support.ts`, their shared
+ * helpers), one after another, each in its own process so one does not warm or load the
+ * next. `npm run bench -- map` runs one.
  */
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
@@ -10,7 +11,7 @@ const dir = import.meta.dirname;
 const only = process.argv.slice(2);
 const scripts = fs
   .readdirSync(dir)
-  .filter((f) => f.endsWith('.ts') && f !== 'run.ts' && !f.endsWith('.d.ts'))
+  .filter((f) => f.endsWith('.ts') && f !== 'run.ts' && f !== 'support.ts' && !f.endsWith('.d.ts'))
   .filter((f) => only.length === 0 || only.some((o) => f.startsWith(o)))
   .sort();
 

@@ -7,31 +7,19 @@
  */
 import { performance } from 'node:perf_hooks';
 import { eq } from 'drizzle-orm';
-import { DEFAULT_TIME_ZONE, GRASSES, SPORTS, addDaysIso, defineAbilityFor, longAxis, polygonAreaM2, type Actor, type Level, type Polygon } from '@swardwise/domain';
+import { DEFAULT_TIME_ZONE, addDaysIso, defineAbilityFor, type Actor } from '@swardwise/domain';
 import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { crews, districts, fields, sites, users, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
 import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
 import { generateWeek, getWeekBoard } from '../../apps/api/src/services/week-plans.ts';
+import { benchField, pct, seeded } from './support.ts';
 
 const TARGET_FIELDS = Number(process.env.BENCH_FIELDS ?? 1000);
 const WEEK = '2026-06-15';
 
-let a = 20261202;
-const rand = () => {
-  a = (a + 0x6d2b79f5) >>> 0;
-  let t = a;
-  t = Math.imul(t ^ (t >>> 15), t | 1);
-  t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-  return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-};
-const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)] as T;
-const rect = (lat: number, lng: number, w: number, l: number): Polygon => {
-  const dLat = l / 111_000;
-  const dLng = w / 88_000;
-  return { type: 'Polygon', coordinates: [[[lng, lat], [lng + dLng, lat], [lng + dLng, lat + dLat], [lng, lat + dLat], [lng, lat]]] };
-};
-const pct = (xs: number[], p: number) => [...xs].sort((x, y) => x - y)[Math.min(xs.length - 1, Math.floor((p / 100) * xs.length))]!;
+const gen = seeded(20261202);
+const { rand, pick } = gen;
 
 const database = await openDatabase({ pgliteDir: 'memory://' });
 const { db } = database;
@@ -41,20 +29,9 @@ const districtSites = await db.select({ id: sites.id, lat: sites.lat, lng: sites
 const have = (await db.select({ id: fields.id }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(sites.districtId, district!.id))).length;
 const rows = [];
 for (let i = 0; i < TARGET_FIELDS - have; i++) {
-  const s = pick(districtSites);
-  const geometry = rect(s.lat + (rand() - 0.5) * 0.01, s.lng + (rand() - 0.5) * 0.012, 40 + rand() * 40, 70 + rand() * 50);
   rows.push({
-    siteId: s.id,
-    name: `Bench field ${i + 1}`,
-    sport: pick(SPORTS),
-    grass: pick(GRASSES),
-    rootzone: 'native_soil' as const,
+    ...benchField(pick(districtSites), i, gen, { lat: 0.01, lng: 0.012 }),
     irrigation: pick(['none', 'quick_coupler', 'automatic'] as const),
-    maintenanceLevel: (1 + Math.floor(rand() * 4)) as Level,
-    clippings: 'returned' as const,
-    geometry,
-    areaM2: polygonAreaM2(geometry),
-    longAxisDeg: longAxis(geometry).bearingDeg,
     lastMowedOn: addDaysIso(WEEK, -1 - Math.floor(rand() * 6)),
   });
 }
