@@ -1,6 +1,6 @@
 /** Districts, sites and fields: the places the department keeps, which change together. */
 import { sql } from 'drizzle-orm';
-import { check, date, doublePrecision, index, integer, jsonb, pgTable, real, smallint, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { check, date, doublePrecision, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
 import type {
   Clippings,
   FieldStatus,
@@ -13,24 +13,19 @@ import type {
   SiteOwner,
   Sport,
 } from '@swardwise/domain';
-
-const timestamps = {
-  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-  updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
-};
+import { id, versioned } from './columns.ts';
 
 export const districts = pgTable(
   'districts',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    ...id,
     code: text('code').notNull(),
     name: text('name').notNull(),
     boundary: jsonb('boundary').$type<Polygon>().notNull(),
     yardName: text('yard_name').notNull(),
     yardLat: doublePrecision('yard_lat').notNull(),
     yardLng: doublePrecision('yard_lng').notNull(),
-    version: integer('version').notNull().default(1),
-    ...timestamps,
+    ...versioned,
   },
   (t) => [uniqueIndex('districts_code_key').on(t.code)],
 );
@@ -38,7 +33,7 @@ export const districts = pgTable(
 export const sites = pgTable(
   'sites',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    ...id,
     districtId: integer('district_id')
       .notNull()
       .references(() => districts.id),
@@ -49,8 +44,7 @@ export const sites = pgTable(
     lat: doublePrecision('lat').notNull(),
     lng: doublePrecision('lng').notNull(),
     notes: text('notes').notNull().default(''),
-    version: integer('version').notNull().default(1),
-    ...timestamps,
+    ...versioned,
   },
   (t) => [index('sites_district_idx').on(t.districtId)],
 );
@@ -58,7 +52,7 @@ export const sites = pgTable(
 export const fields = pgTable(
   'fields',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    ...id,
     siteId: integer('site_id')
       .notNull()
       .references(() => sites.id),
@@ -80,8 +74,7 @@ export const fields = pgTable(
     longAxisDeg: real('long_axis_deg'),
     /** Date of the last mowing done (from work records). */
     lastMowedOn: date('last_mowed_on', { mode: 'string' }),
-    version: integer('version').notNull().default(1),
-    ...timestamps,
+    ...versioned,
   },
   (t) => [
     index('fields_site_idx').on(t.siteId),

@@ -1,12 +1,13 @@
 /** Crews, users, their scopes and sessions. */
-import { boolean, index, integer, jsonb, pgTable, primaryKey, real, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { boolean, index, integer, jsonb, pgTable, primaryKey, real, text, uniqueIndex } from 'drizzle-orm/pg-core';
 import type { Role, UnitSystem, Weekday } from '@swardwise/domain';
 import { districts, sites } from './city.ts';
+import { createdAt, id, instant, versioned } from './columns.ts';
 
 export const crews = pgTable(
   'crews',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    ...id,
     districtId: integer('district_id')
       .notNull()
       .references(() => districts.id),
@@ -15,9 +16,7 @@ export const crews = pgTable(
     members: jsonb('members').$type<string[]>().notNull().default([]),
     /** Working days of the week; the week plan puts the crew's work on these days only. */
     workDays: jsonb('work_days').$type<Weekday[]>().notNull().default(['mon', 'tue', 'wed', 'thu', 'fri']),
-    version: integer('version').notNull().default(1),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    ...versioned,
   },
   (t) => [index('crews_district_idx').on(t.districtId)],
 );
@@ -25,7 +24,7 @@ export const crews = pgTable(
 export const users = pgTable(
   'users',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    ...id,
     email: text('email').notNull(),
     name: text('name').notNull(),
     /** Null until an invited user sets a password. */
@@ -35,10 +34,8 @@ export const users = pgTable(
     crewId: integer('crew_id').references(() => crews.id),
     active: boolean('active').notNull().default(true),
     units: text('units').$type<UnitSystem>().notNull().default('imperial'),
-    lastSignInAt: timestamp('last_sign_in_at', { withTimezone: true }),
-    version: integer('version').notNull().default(1),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    lastSignInAt: instant('last_sign_in_at'),
+    ...versioned,
   },
   (t) => [uniqueIndex('users_email_key').on(t.email)],
 );
@@ -64,7 +61,7 @@ export const sessions = pgTable(
     sid: text('sid').primaryKey(),
     userId: integer('user_id').references(() => users.id, { onDelete: 'cascade' }),
     data: jsonb('data').$type<Record<string, unknown>>().notNull(),
-    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+    expiresAt: instant('expires_at').notNull(),
   },
   (t) => [index('sessions_user_idx').on(t.userId), index('sessions_expires_idx').on(t.expiresAt)],
 );
@@ -73,15 +70,15 @@ export const sessions = pgTable(
 export const userTokens = pgTable(
   'user_tokens',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    ...id,
     userId: integer('user_id')
       .notNull()
       .references(() => users.id, { onDelete: 'cascade' }),
     purpose: text('purpose').$type<'invite' | 'reset'>().notNull(),
     tokenHash: text('token_hash').notNull(),
-    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
-    usedAt: timestamp('used_at', { withTimezone: true }),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    expiresAt: instant('expires_at').notNull(),
+    usedAt: instant('used_at'),
+    ...createdAt,
   },
   (t) => [uniqueIndex('user_tokens_hash_key').on(t.tokenHash)],
 );

@@ -1,13 +1,14 @@
 /** The audit log and department-wide settings. */
-import { bigint, index, integer, jsonb, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { bigint, index, integer, jsonb, pgTable, text } from 'drizzle-orm/pg-core';
 import { users } from './people.ts';
+import { instant, updatedAt } from './columns.ts';
 
 /** Every write: who, when, what, and the row before and after. Never updated or deleted. */
 export const auditLog = pgTable(
   'audit_log',
   {
     id: bigint('id', { mode: 'number' }).primaryKey().generatedAlwaysAsIdentity(),
-    at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+    at: instant('at').notNull().defaultNow(),
     actorId: integer('actor_id').references(() => users.id),
     /** create, update, delete; for accounts also sign_in, sign_in_failed, sign_out, reset_requested. */
     action: text('action').$type<'create' | 'update' | 'delete' | 'sign_in' | 'sign_in_failed' | 'sign_out' | 'reset_requested'>().notNull(),
@@ -25,5 +26,5 @@ export const auditLog = pgTable(
 export const settings = pgTable('settings', {
   key: text('key').primaryKey(),
   value: jsonb('value').notNull(),
-  updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  ...updatedAt,
 });

@@ -1,15 +1,16 @@
 /** The department's Standards (one row per maintenance level), field checks and imports. */
 import { sql } from 'drizzle-orm';
-import { check, date, index, integer, jsonb, pgTable, real, smallint, text, timestamp } from 'drizzle-orm/pg-core';
+import { check, date, index, integer, jsonb, pgTable, real, smallint, text } from 'drizzle-orm/pg-core';
 import { HARDNESS_DEVICES, type HardnessDevice, type ImportSummary, type LevelStandard } from '@swardwise/domain';
 import { fields } from './city.ts';
 import { users } from './people.ts';
+import { createdAt, id, instant, updatedAt } from './columns.ts';
 
 export const standards = pgTable('standards', {
   level: smallint('level').primaryKey(),
   data: jsonb('data').$type<LevelStandard>().notNull(),
   version: integer('version').notNull().default(1),
-  updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  ...updatedAt,
   updatedBy: integer('updated_by').references(() => users.id),
 });
 
@@ -17,7 +18,7 @@ export const standards = pgTable('standards', {
 export const fieldChecks = pgTable(
   'field_checks',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    ...id,
     fieldId: integer('field_id')
       .notNull()
       .references(() => fields.id, { onDelete: 'cascade' }),
@@ -35,7 +36,7 @@ export const fieldChecks = pgTable(
     notes: text('notes').notNull().default(''),
     score: real('score').notNull(),
     flags: jsonb('flags').$type<string[]>().notNull().default([]),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    ...createdAt,
   },
   (t) => [
     index('field_checks_field_idx').on(t.fieldId, t.checkedOn),
@@ -51,7 +52,7 @@ export const fieldChecks = pgTable(
 export const imports = pgTable(
   'imports',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    ...id,
     kind: text('kind').$type<'sites_csv' | 'fields_csv' | 'outlines_geojson'>().notNull(),
     status: text('status').$type<'preview' | 'committed' | 'undone' | 'discarded'>().notNull().default('preview'),
     userId: integer('user_id')
@@ -65,9 +66,9 @@ export const imports = pgTable(
     summary: jsonb('summary').$type<ImportSummary>().notNull(),
     /** What the commit did, so it can be undone: ids created and rows as they were before an update. */
     changes: jsonb('changes').$type<{ created: { entity: string; id: number }[]; updated: { entity: string; id: number; before: Record<string, unknown> }[] }>(),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-    committedAt: timestamp('committed_at', { withTimezone: true }),
-    undoneAt: timestamp('undone_at', { withTimezone: true }),
+    ...createdAt,
+    committedAt: instant('committed_at'),
+    undoneAt: instant('undone_at'),
   },
   (t) => [index('imports_user_idx').on(t.userId, t.createdAt)],
 );

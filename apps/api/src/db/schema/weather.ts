@@ -1,10 +1,11 @@
 /** Weather stations and their daily observations and forecasts. */
-import { date, doublePrecision, index, integer, pgTable, primaryKey, real, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { date, doublePrecision, index, integer, pgTable, primaryKey, real, text, uniqueIndex } from 'drizzle-orm/pg-core';
+import { id, updatedAt, versioned } from './columns.ts';
 
 export const weatherStations = pgTable(
   'weather_stations',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    ...id,
     code: text('code').notNull(),
     name: text('name').notNull(),
     lat: doublePrecision('lat').notNull(),
@@ -12,9 +13,7 @@ export const weatherStations = pgTable(
     elevationM: real('elevation_m').notNull(),
     /** Coastal stations use kRs 0.19 when radiation comes from the temperature range (FAO-56 eq. 50). */
     coastal: integer('coastal').notNull().default(0),
-    version: integer('version').notNull().default(1),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    ...versioned,
   },
   (t) => [uniqueIndex('weather_stations_code_key').on(t.code)],
 );
@@ -38,7 +37,7 @@ export const weatherDays = pgTable(
     solarMJ: real('solar_mj'),
     rainMm: real('rain_mm').notNull().default(0),
     source: text('source').notNull(),
-    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    ...updatedAt,
   },
   (t) => [primaryKey({ columns: [t.stationId, t.date] }), index('weather_days_date_idx').on(t.date)],
 );

@@ -1,13 +1,27 @@
 /** Equipment, work orders and their photos: the crews' side of the week plan. */
-import { boolean, date, index, integer, jsonb, pgTable, real, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { boolean, date, index, integer, jsonb, pgTable, real, text, uniqueIndex } from 'drizzle-orm/pg-core';
 import type { EquipmentKind, FieldEventKind, WorkStatus, WorkTask } from '@swardwise/domain';
 import { districts, fields, sites } from './city.ts';
 import { crews, users } from './people.ts';
+import { createdAt, id, instant, versioned } from './columns.ts';
+
+/** The field a row is about, with copies of its site and district so scope checks need no join. */
+const ofField = {
+  fieldId: integer('field_id')
+    .notNull()
+    .references(() => fields.id, { onDelete: 'cascade' }),
+  siteId: integer('site_id')
+    .notNull()
+    .references(() => sites.id),
+  districtId: integer('district_id')
+    .notNull()
+    .references(() => districts.id),
+};
 
 export const equipment = pgTable(
   'equipment',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    ...id,
     districtId: integer('district_id')
       .notNull()
       .references(() => districts.id),
@@ -26,9 +40,7 @@ export const equipment = pgTable(
     lastSharpenedAtH: real('last_sharpened_at_h'),
     notes: text('notes').notNull().default(''),
     active: boolean('active').notNull().default(true),
-    version: integer('version').notNull().default(1),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    ...versioned,
   },
   (t) => [index('equipment_district_idx').on(t.districtId)],
 );
@@ -36,17 +48,8 @@ export const equipment = pgTable(
 export const workOrders = pgTable(
   'work_orders',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
-    fieldId: integer('field_id')
-      .notNull()
-      .references(() => fields.id, { onDelete: 'cascade' }),
-    /** Copies of the field's site and district, so scope checks need no join. */
-    siteId: integer('site_id')
-      .notNull()
-      .references(() => sites.id),
-    districtId: integer('district_id')
-      .notNull()
-      .references(() => districts.id),
+    ...id,
+    ...ofField,
     task: text('task').$type<WorkTask>().notNull(),
     weekStart: date('week_start', { mode: 'string' }).notNull(),
     plannedDate: date('planned_date', { mode: 'string' }).notNull(),
@@ -62,13 +65,11 @@ export const workOrders = pgTable(
     reason: text('reason').notNull().default(''),
     details: jsonb('details').$type<Record<string, unknown>>().notNull().default({}),
     notes: text('notes').notNull().default(''),
-    startedAt: timestamp('started_at', { withTimezone: true }),
-    doneAt: timestamp('done_at', { withTimezone: true }),
+    startedAt: instant('started_at'),
+    doneAt: instant('done_at'),
     doneBy: integer('done_by').references(() => users.id),
     createdBy: integer('created_by').references(() => users.id),
-    version: integer('version').notNull().default(1),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    ...versioned,
   },
   (t) => [
     index('work_orders_week_idx').on(t.districtId, t.weekStart),
@@ -80,7 +81,7 @@ export const workOrders = pgTable(
 export const workPhotos = pgTable(
   'work_photos',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    ...id,
     workOrderId: integer('work_order_id')
       .notNull()
       .references(() => workOrders.id, { onDelete: 'cascade' }),
@@ -91,7 +92,7 @@ export const workPhotos = pgTable(
     height: integer('height').notNull(),
     bytes: integer('bytes').notNull(),
     createdBy: integer('created_by').references(() => users.id),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    ...createdAt,
   },
   // One row per file: a retried upload (same order, same phone reference, same name) is stored once.
   (t) => [index('work_photos_order_idx').on(t.workOrderId), uniqueIndex('work_photos_file_key').on(t.workOrderId, t.fileName)],
@@ -104,7 +105,7 @@ export const workPhotos = pgTable(
 export const workUpdates = pgTable(
   'work_updates',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    ...id,
     workOrderId: integer('work_order_id')
       .notNull()
       .references(() => workOrders.id, { onDelete: 'cascade' }),
@@ -113,9 +114,9 @@ export const workUpdates = pgTable(
     note: text('note').notNull().default(''),
     clientRef: text('client_ref'),
     /** When the crew did it (the phone's clock), which may be before it reached the server. */
-    reportedAt: timestamp('reported_at', { withTimezone: true }).notNull(),
+    reportedAt: instant('reported_at').notNull(),
     createdBy: integer('created_by').references(() => users.id),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    ...createdAt,
   },
   (t) => [index('work_updates_order_idx').on(t.workOrderId), uniqueIndex('work_updates_client_ref_key').on(t.clientRef)],
 );
@@ -124,26 +125,15 @@ export const workUpdates = pgTable(
 export const fieldEvents = pgTable(
   'field_events',
   {
-    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
-    fieldId: integer('field_id')
-      .notNull()
-      .references(() => fields.id, { onDelete: 'cascade' }),
-    /** Copies of the field's site and district, so scope checks need no join. */
-    siteId: integer('site_id')
-      .notNull()
-      .references(() => sites.id),
-    districtId: integer('district_id')
-      .notNull()
-      .references(() => districts.id),
+    ...id,
+    ...ofField,
     kind: text('kind').$type<FieldEventKind>().notNull(),
     title: text('title').notNull(),
     startsOn: date('starts_on', { mode: 'string' }).notNull(),
     startTime: text('start_time'),
     notes: text('notes').notNull().default(''),
     createdBy: integer('created_by').references(() => users.id),
-    version: integer('version').notNull().default(1),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    ...versioned,
   },
   (t) => [index('field_events_field_idx').on(t.fieldId, t.startsOn), index('field_events_district_idx').on(t.districtId, t.startsOn)],
 );
