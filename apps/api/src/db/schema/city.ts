@@ -30,13 +30,18 @@ export const districts = pgTable(
   (t) => [uniqueIndex('districts_code_key').on(t.code)],
 );
 
+/** A row of one district (its scope). */
+export const districtRef = {
+  districtId: integer('district_id')
+    .notNull()
+    .references(() => districts.id),
+};
+
 export const sites = pgTable(
   'sites',
   {
     ...id,
-    districtId: integer('district_id')
-      .notNull()
-      .references(() => districts.id),
+    ...districtRef,
     name: text('name').notNull(),
     kind: text('kind').$type<SiteKind>().notNull(),
     owner: text('owner').$type<SiteOwner>().notNull(),
@@ -81,3 +86,10 @@ export const fields = pgTable(
     check('fields_level_check', sql`${t.maintenanceLevel} BETWEEN 1 AND 4`),
   ],
 );
+
+/** A row about one field, gone with the field. */
+export const fieldRef = {
+  fieldId: integer('field_id')
+    .notNull()
+    .references(() => fields.id, { onDelete: 'cascade' }),
+};

@@ -1,16 +1,14 @@
 /** Crews, users, their scopes and sessions. */
 import { boolean, index, integer, jsonb, pgTable, primaryKey, real, text, uniqueIndex } from 'drizzle-orm/pg-core';
 import type { Role, UnitSystem, Weekday } from '@swardwise/domain';
-import { districts, sites } from './city.ts';
+import { districtRef, districts, sites } from './city.ts';
 import { createdAt, id, instant, versioned } from './columns.ts';
 
 export const crews = pgTable(
   'crews',
   {
     ...id,
-    districtId: integer('district_id')
-      .notNull()
-      .references(() => districts.id),
+    ...districtRef,
     name: text('name').notNull(),
     hoursPerDay: real('hours_per_day').notNull().default(8),
     members: jsonb('members').$type<string[]>().notNull().default([]),

@@ -2,7 +2,7 @@
 import { sql } from 'drizzle-orm';
 import { check, date, index, integer, jsonb, pgTable, real, smallint, text } from 'drizzle-orm/pg-core';
 import { HARDNESS_DEVICES, type HardnessDevice, type ImportSummary, type LevelStandard } from '@swardwise/domain';
-import { fields } from './city.ts';
+import { fieldRef } from './city.ts';
 import { users } from './people.ts';
 import { createdAt, id, instant, updatedAt } from './columns.ts';
 
@@ -19,9 +19,7 @@ export const fieldChecks = pgTable(
   'field_checks',
   {
     ...id,
-    fieldId: integer('field_id')
-      .notNull()
-      .references(() => fields.id, { onDelete: 'cascade' }),
+    ...fieldRef,
     checkedOn: date('checked_on', { mode: 'string' }).notNull(),
     checkedBy: integer('checked_by').references(() => users.id),
     turfCoverPct: real('turf_cover_pct').notNull(),

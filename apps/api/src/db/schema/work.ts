@@ -1,30 +1,24 @@
 /** Equipment, work orders and their photos: the crews' side of the week plan. */
 import { boolean, date, index, integer, jsonb, pgTable, real, text, uniqueIndex } from 'drizzle-orm/pg-core';
 import type { EquipmentKind, FieldEventKind, WorkStatus, WorkTask } from '@swardwise/domain';
-import { districts, fields, sites } from './city.ts';
+import { districtRef, fieldRef, sites } from './city.ts';
 import { crews, users } from './people.ts';
 import { createdAt, id, instant, versioned } from './columns.ts';
 
 /** The field a row is about, with copies of its site and district so scope checks need no join. */
 const ofField = {
-  fieldId: integer('field_id')
-    .notNull()
-    .references(() => fields.id, { onDelete: 'cascade' }),
+  ...fieldRef,
   siteId: integer('site_id')
     .notNull()
     .references(() => sites.id),
-  districtId: integer('district_id')
-    .notNull()
-    .references(() => districts.id),
+  ...districtRef,
 };
 
 export const equipment = pgTable(
   'equipment',
   {
     ...id,
-    districtId: integer('district_id')
-      .notNull()
-      .references(() => districts.id),
+    ...districtRef,
     crewId: integer('crew_id').references(() => crews.id, { onDelete: 'set null' }),
     kind: text('kind').$type<EquipmentKind>().notNull(),
     name: text('name').notNull(),
@@ -78,13 +72,18 @@ export const workOrders = pgTable(
   ],
 );
 
+/** A row about one work order, gone with the order. */
+const workOrderRef = {
+  workOrderId: integer('work_order_id')
+    .notNull()
+    .references(() => workOrders.id, { onDelete: 'cascade' }),
+};
+
 export const workPhotos = pgTable(
   'work_photos',
   {
     ...id,
-    workOrderId: integer('work_order_id')
-      .notNull()
-      .references(() => workOrders.id, { onDelete: 'cascade' }),
+    ...workOrderRef,
     /** File name inside the uploads folder (never a client-supplied path). */
     fileName: text('file_name').notNull(),
     mime: text('mime').notNull(),
@@ -106,9 +105,7 @@ export const workUpdates = pgTable(
   'work_updates',
   {
     ...id,
-    workOrderId: integer('work_order_id')
-      .notNull()
-      .references(() => workOrders.id, { onDelete: 'cascade' }),
+    ...workOrderRef,
     status: text('status').$type<WorkStatus>().notNull(),
     actualHours: real('actual_hours'),
     note: text('note').notNull().default(''),
