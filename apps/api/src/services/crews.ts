@@ -3,8 +3,8 @@ import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
 import { appError, errors, type CreateCrewInput, type CrewRow, type StoredCrew, type UpdateCrewInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { crews, districts, users } from '../db/schema/index.ts';
-import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
+import { auditRow, deleteAtVersion, updateAtVersion } from './versioned.ts';
 
 export async function listCrews(ctx: Ctx, filter: { districtId?: number | undefined }): Promise<CrewRow[]> {
   authorize(ctx, 'read', 'Crew', ctx.actor.role === 'crew' ? { id: ctx.actor.crewId ?? -1, districtId: ctx.actor.districtId } : undefined);
@@ -43,7 +43,7 @@ export async function createCrew(ctx: Ctx, input: CreateCrewInput): Promise<Stor
     const [d] = await tx.select({ id: districts.id }).from(districts).where(eq(districts.id, input.districtId));
     if (!d) throw errors.noSuch('district', 'body.districtId');
     const [row] = await tx.insert(crews).values(input).returning();
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'crew', entityId: row!.id, districtId: row!.districtId, before: null, after: row! });
+    await auditRow(ctx, tx, 'crew', null, row!);
     return row!;
   });
 }
@@ -60,14 +60,10 @@ export async function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput): 
       const [lead] = await tx.select({ id: users.id }).from(users).where(eq(users.crewId, id)).limit(1);
       if (lead) throw appError('crew/has_lead', 'Move the crew lead to another crew before moving this crew to another district');
     }
-    const [updated] = await tx
-      .update(crews)
-      .set({ ...changes, version: sql`${crews.version} + 1`, updatedAt: new Date() })
-      .where(and(eq(crews.id, id), eq(crews.version, version)))
-      .returning();
-    if (!updated) throw errors.versionConflict('crew');
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'crew', entityId: id, districtId: updated.districtId, before, after: updated });
-    return updated;
+    await updateAtVersion(tx, crews, 'crew', id, version, changes);
+    const after = (await crewRow(tx, id))!;
+    await auditRow(ctx, tx, 'crew', before, after);
+    return after;
   });
 }
 
@@ -78,8 +74,6 @@ export async function deleteCrew(ctx: Ctx, id: number, version: number): Promise
     authorize(ctx, 'delete', 'Crew', before);
     const [lead] = await tx.select({ id: users.id }).from(users).where(eq(users.crewId, id)).limit(1);
     if (lead) throw appError('crew/has_lead', 'This crew still has a crew lead account; move or deactivate it first');
-    const [deleted] = await tx.delete(crews).where(and(eq(crews.id, id), eq(crews.version, version))).returning({ id: crews.id });
-    if (!deleted) throw errors.versionConflict('crew');
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'crew', entityId: id, districtId: before.districtId, before, after: null });
+    await deleteAtVersion(ctx, tx, crews, 'crew', before, version);
   });
 }

@@ -3,8 +3,8 @@ import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
 import { errors, type CreateEquipmentInput, type EquipmentRow, type UpdateEquipmentInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { crews, districts, equipment } from '../db/schema/index.ts';
-import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
+import { auditRow, deleteAtVersion, updateAtVersion } from './versioned.ts';
 
 const columns = {
   id: equipment.id,
@@ -76,7 +76,7 @@ export async function createEquipment(ctx: Ctx, input: CreateEquipmentInput): Pr
     await checkCrew(tx, input.crewId, input.districtId);
     const [created] = await tx.insert(equipment).values(input).returning({ id: equipment.id });
     const row = (await getRow(tx, created!.id))!;
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'equipment', entityId: row.id, districtId: row.districtId, before: null, after: row });
+    await auditRow(ctx, tx, 'equipment', null, row);
     return withBladeCare(row);
   });
 }
@@ -94,14 +94,9 @@ export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipme
     if (merged.hocMinMm != null && merged.hocMaxMm != null && merged.hocMinMm > merged.hocMaxMm) {
       throw errors.invalid('The highest HOC is below the lowest', [{ path: 'body.hocMaxMm', message: 'the highest HOC is below the lowest' }]);
     }
-    const [updated] = await tx
-      .update(equipment)
-      .set({ ...changes, version: sql`${equipment.version} + 1`, updatedAt: new Date() })
-      .where(and(eq(equipment.id, id), eq(equipment.version, version)))
-      .returning({ id: equipment.id });
-    if (!updated) throw errors.versionConflict('equipment');
+    await updateAtVersion(tx, equipment, 'equipment', id, version, changes);
     const after = (await getRow(tx, id))!;
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'equipment', entityId: id, districtId: after.districtId, before, after });
+    await auditRow(ctx, tx, 'equipment', before, after);
     return withBladeCare(after);
   });
 }
@@ -111,11 +106,6 @@ export async function deleteEquipment(ctx: Ctx, id: number, version: number): Pr
     const before = await getRow(tx, id);
     if (!before) throw errors.notFound('equipment', id);
     authorize(ctx, 'delete', 'Equipment', before);
-    const [deleted] = await tx
-      .delete(equipment)
-      .where(and(eq(equipment.id, id), eq(equipment.version, version)))
-      .returning({ id: equipment.id });
-    if (!deleted) throw errors.versionConflict('equipment');
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'equipment', entityId: id, districtId: before.districtId, before, after: null });
+    await deleteAtVersion(ctx, tx, equipment, 'equipment', before, version);
   });
 }

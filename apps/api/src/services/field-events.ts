@@ -6,8 +6,8 @@ import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import { errors, type Actor, type CreateFieldEventInput, type FieldEventRow, type UpdateFieldEventInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { fieldEvents, fields, sites } from '../db/schema/index.ts';
-import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
+import { auditRow, deleteAtVersion, updateAtVersion } from './versioned.ts';
 
 export interface FieldEventFilter {
   from: string;
@@ -89,7 +89,7 @@ export async function createFieldEvent(ctx: Ctx, input: CreateFieldEventInput): 
       .values({ ...input, siteId: field.siteId, districtId: field.districtId, createdBy: ctx.actor.id })
       .returning({ id: fieldEvents.id });
     const row = (await getRow(tx, created!.id))!;
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_event', entityId: row.id, districtId: row.districtId, before: null, after: row });
+    await auditRow(ctx, tx, 'field_event', null, row);
     return row;
   });
 }
@@ -107,14 +107,9 @@ export async function updateFieldEvent(ctx: Ctx, id: number, input: UpdateFieldE
       authorize(ctx, 'create', 'FieldEvent', { siteId: field.siteId, districtId: field.districtId });
       moved = { siteId: field.siteId, districtId: field.districtId };
     }
-    const [updated] = await tx
-      .update(fieldEvents)
-      .set({ ...changes, ...moved, version: sql`${fieldEvents.version} + 1`, updatedAt: new Date() })
-      .where(and(eq(fieldEvents.id, id), eq(fieldEvents.version, version)))
-      .returning({ id: fieldEvents.id });
-    if (!updated) throw errors.versionConflict('field_event');
+    await updateAtVersion(tx, fieldEvents, 'field_event', id, version, { ...changes, ...moved });
     const after = (await getRow(tx, id))!;
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'field_event', entityId: id, districtId: after.districtId, before, after });
+    await auditRow(ctx, tx, 'field_event', before, after);
     return after;
   });
 }
@@ -124,11 +119,6 @@ export async function deleteFieldEvent(ctx: Ctx, id: number, version: number): P
     const before = await getRow(tx, id);
     if (!before) throw errors.notFound('field_event', id);
     authorize(ctx, 'delete', 'FieldEvent', before);
-    const [deleted] = await tx
-      .delete(fieldEvents)
-      .where(and(eq(fieldEvents.id, id), eq(fieldEvents.version, version)))
-      .returning({ id: fieldEvents.id });
-    if (!deleted) throw errors.versionConflict('field_event');
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'field_event', entityId: id, districtId: before.districtId, before, after: null });
+    await deleteAtVersion(ctx, tx, fieldEvents, 'field_event', before, version);
   });
 }

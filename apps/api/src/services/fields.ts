@@ -5,11 +5,11 @@ import { and, asc, count, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import { longAxis, polygonAreaM2, appError, errors, type CreateFieldInput, type FieldDetail, type FieldRow, type Polygon, type UpdateFieldInput } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { districts, fieldChecks, fields, sites, workOrders, workPhotos } from '../db/schema/index.ts';
-import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { cachedAnswer } from './answer-cache.ts';
 import { followMove } from './scope-copies.ts';
 import { fieldCrewIds, fieldScope } from './scope.ts';
+import { auditRow, updateAtVersion } from './versioned.ts';
 
 const listColumns = {
   id: fields.id,
@@ -100,7 +100,7 @@ export async function createField(ctx: Ctx, input: CreateFieldInput): Promise<Fi
       .values({ ...input, ...outlineFacts(input.geometry) })
       .returning({ id: fields.id });
     const row = (await getFieldRow(tx, created!.id))!;
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field', entityId: row.id, districtId: row.districtId, before: null, after: row });
+    await auditRow(ctx, tx, 'field', null, row);
     return row;
   });
 }
@@ -115,21 +115,11 @@ export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput)
       const site = await siteOf(tx, changes.siteId);
       authorize(ctx, 'create', 'Field', { siteId: site.id, districtId: site.districtId });
     }
-    const [updated] = await tx
-      .update(fields)
-      .set({
-        ...changes,
-        ...(changes.geometry ? outlineFacts(changes.geometry) : {}),
-        version: sql`${fields.version} + 1`,
-        updatedAt: new Date(),
-      })
-      .where(and(eq(fields.id, id), eq(fields.version, version)))
-      .returning({ id: fields.id });
-    if (!updated) throw errors.versionConflict('field');
+    await updateAtVersion(tx, fields, 'field', id, version, { ...changes, ...(changes.geometry ? outlineFacts(changes.geometry) : {}) });
     // The field's work and bookings go with it to its new site (and district).
     if (changes.siteId !== undefined && changes.siteId !== before.siteId) await followMove(tx, ctx.actor.id, { fieldId: id });
     const after = (await getFieldRow(tx, id))!;
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'field', entityId: id, districtId: after.districtId, before, after });
+    await auditRow(ctx, tx, 'field', before, after);
     return after;
   });
 }
@@ -194,7 +184,7 @@ export async function deleteField(ctx: Ctx, id: number, version: number, uploads
     await refuseDeleteWithHistory(tx, before);
     const removed = await removeField(tx, id, version);
     if (!removed.deleted) throw errors.versionConflict('field');
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'delete', entity: 'field', entityId: id, districtId: before.districtId, before, after: null });
+    await auditRow(ctx, tx, 'field', before, null);
     return removed.photoFiles;
   });
   await removePhotoFiles(uploadsDir, photoFiles);

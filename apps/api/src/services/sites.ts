@@ -3,10 +3,10 @@ import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
 import { errors, type CreateSiteInput, type SiteRow, type UpdateSiteInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { districts, fields, sites } from '../db/schema/index.ts';
-import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { followMove } from './scope-copies.ts';
 import { siteScope } from './scope.ts';
+import { auditRow, updateAtVersion } from './versioned.ts';
 
 const fieldCounts = (db: Ctx['db']) =>
   db
@@ -77,7 +77,7 @@ export async function createSite(ctx: Ctx, input: CreateSiteInput): Promise<Site
     await checkDistrict(tx, input.districtId);
     const [created] = await tx.insert(sites).values(input).returning({ id: sites.id });
     const row = (await getSiteRow(tx, created!.id))!;
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'site', entityId: row.id, districtId: row.districtId, before: null, after: row });
+    await auditRow(ctx, tx, 'site', null, row);
     return row;
   });
 }
@@ -93,16 +93,11 @@ export async function updateSite(ctx: Ctx, id: number, input: UpdateSiteInput): 
       authorize(ctx, 'create', 'Site', { districtId: changes.districtId });
       await checkDistrict(tx, changes.districtId);
     }
-    const [updated] = await tx
-      .update(sites)
-      .set({ ...changes, version: sql`${sites.version} + 1`, updatedAt: new Date() })
-      .where(and(eq(sites.id, id), eq(sites.version, version)))
-      .returning({ id: sites.id });
-    if (!updated) throw errors.versionConflict('site');
+    await updateAtVersion(tx, sites, 'site', id, version, changes);
     // The work and bookings of the site's fields go with it to its new district.
     if (changes.districtId !== undefined && changes.districtId !== before.districtId) await followMove(tx, ctx.actor.id, { siteId: id });
     const after = (await getSiteRow(tx, id))!;
-    await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'site', entityId: id, districtId: after.districtId, before, after });
+    await auditRow(ctx, tx, 'site', before, after);
     return after;
   });
 }
