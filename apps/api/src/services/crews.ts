@@ -4,7 +4,7 @@ import { appError, errors, type CreateCrewInput, type CrewRow, type StoredCrew, 
 import type { Db } from '../db/client.ts';
 import { crews, districts, users } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { auditRow, deleteAtVersion, updateAtVersion } from './versioned.ts';
+import { auditRow, deleteAtVersion, updateAtVersion, writable } from './versioned.ts';
 
 export async function listCrews(ctx: Ctx, filter: { districtId?: number | undefined }): Promise<CrewRow[]> {
   authorize(ctx, 'read', 'Crew', ctx.actor.role === 'crew' ? { id: ctx.actor.crewId ?? -1, districtId: ctx.actor.districtId } : undefined);
@@ -50,9 +50,7 @@ export async function createCrew(ctx: Ctx, input: CreateCrewInput): Promise<Stor
 
 export async function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput): Promise<StoredCrew<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const before = await crewRow(tx, id);
-    if (!before) throw errors.notFound('crew', id);
-    authorize(ctx, 'update', 'Crew', before);
+    const before = writable(ctx, 'update', 'Crew', 'crew', id, await crewRow(tx, id));
     const { version, ...changes } = input;
     if (changes.districtId !== undefined && changes.districtId !== before.districtId) {
       // A crew lead's district follows his crew, so a crew with a lead stays where it is.
@@ -69,9 +67,7 @@ export async function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput): 
 
 export async function deleteCrew(ctx: Ctx, id: number, version: number): Promise<void> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const before = await crewRow(tx, id);
-    if (!before) throw errors.notFound('crew', id);
-    authorize(ctx, 'delete', 'Crew', before);
+    const before = writable(ctx, 'delete', 'Crew', 'crew', id, await crewRow(tx, id));
     const [lead] = await tx.select({ id: users.id }).from(users).where(eq(users.crewId, id)).limit(1);
     if (lead) throw appError('crew/has_lead', 'This crew still has a crew lead account; move or deactivate it first');
     await deleteAtVersion(ctx, tx, crews, 'crew', before, version);

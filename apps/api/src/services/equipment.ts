@@ -4,7 +4,7 @@ import { errors, type CreateEquipmentInput, type EquipmentRow, type UpdateEquipm
 import type { Db } from '../db/client.ts';
 import { crews, districts, equipment } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { auditRow, deleteAtVersion, updateAtVersion } from './versioned.ts';
+import { auditRow, deleteAtVersion, updateAtVersion, writable } from './versioned.ts';
 
 const columns = {
   id: equipment.id,
@@ -83,9 +83,7 @@ export async function createEquipment(ctx: Ctx, input: CreateEquipmentInput): Pr
 
 export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipmentInput): Promise<EquipmentRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const before: Row | undefined = await getRow(tx, id);
-    if (!before) throw errors.notFound('equipment', id);
-    authorize(ctx, 'update', 'Equipment', before);
+    const before: Row = writable(ctx, 'update', 'Equipment', 'equipment', id, await getRow(tx, id));
     const { version, ...changes } = input;
     const districtId = changes.districtId ?? before.districtId;
     if (districtId !== before.districtId) authorize(ctx, 'create', 'Equipment', { districtId });
@@ -103,9 +101,7 @@ export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipme
 
 export async function deleteEquipment(ctx: Ctx, id: number, version: number): Promise<void> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const before = await getRow(tx, id);
-    if (!before) throw errors.notFound('equipment', id);
-    authorize(ctx, 'delete', 'Equipment', before);
+    const before = writable(ctx, 'delete', 'Equipment', 'equipment', id, await getRow(tx, id));
     await deleteAtVersion(ctx, tx, equipment, 'equipment', before, version);
   });
 }

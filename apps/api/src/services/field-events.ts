@@ -7,7 +7,7 @@ import { errors, type Actor, type CreateFieldEventInput, type FieldEventRow, typ
 import type { Db } from '../db/client.ts';
 import { fieldEvents, fields, sites } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { auditRow, deleteAtVersion, updateAtVersion } from './versioned.ts';
+import { auditRow, deleteAtVersion, updateAtVersion, writable } from './versioned.ts';
 
 export interface FieldEventFilter {
   from: string;
@@ -96,9 +96,7 @@ export async function createFieldEvent(ctx: Ctx, input: CreateFieldEventInput): 
 
 export async function updateFieldEvent(ctx: Ctx, id: number, input: UpdateFieldEventInput): Promise<FieldEventRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const before = await getRow(tx, id);
-    if (!before) throw errors.notFound('field_event', id);
-    authorize(ctx, 'update', 'FieldEvent', before);
+    const before = writable(ctx, 'update', 'FieldEvent', 'field_event', id, await getRow(tx, id));
     const { version, ...changes } = input;
     let moved: { siteId: number; districtId: number } | undefined;
     if (changes.fieldId !== undefined && changes.fieldId !== before.fieldId) {
@@ -116,9 +114,7 @@ export async function updateFieldEvent(ctx: Ctx, id: number, input: UpdateFieldE
 
 export async function deleteFieldEvent(ctx: Ctx, id: number, version: number): Promise<void> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const before = await getRow(tx, id);
-    if (!before) throw errors.notFound('field_event', id);
-    authorize(ctx, 'delete', 'FieldEvent', before);
+    const before = writable(ctx, 'delete', 'FieldEvent', 'field_event', id, await getRow(tx, id));
     await deleteAtVersion(ctx, tx, fieldEvents, 'field_event', before, version);
   });
 }

@@ -9,7 +9,7 @@ import { authorize, can, type Ctx } from './context.ts';
 import { cachedAnswer } from './answer-cache.ts';
 import { followMove } from './scope-copies.ts';
 import { fieldCrewIds, fieldScope } from './scope.ts';
-import { auditRow, updateAtVersion } from './versioned.ts';
+import { auditRow, updateAtVersion, writable } from './versioned.ts';
 
 const listColumns = {
   id: fields.id,
@@ -107,9 +107,7 @@ export async function createField(ctx: Ctx, input: CreateFieldInput): Promise<Fi
 
 export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput): Promise<FieldDetail<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const before = await getFieldRow(tx, id);
-    if (!before) throw errors.notFound('field', id);
-    authorize(ctx, 'update', 'Field', before);
+    const before = writable(ctx, 'update', 'Field', 'field', id, await getFieldRow(tx, id));
     const { version, ...changes } = input;
     if (changes.siteId !== undefined && changes.siteId !== before.siteId) {
       const site = await siteOf(tx, changes.siteId);
@@ -177,9 +175,7 @@ export async function removePhotoFiles(uploadsDir: string, fileNames: readonly s
 
 export async function deleteField(ctx: Ctx, id: number, version: number, uploadsDir: string): Promise<void> {
   const photoFiles = await (ctx.db as Db).transaction(async (tx) => {
-    const before = await getFieldRow(tx, id);
-    if (!before) throw errors.notFound('field', id);
-    authorize(ctx, 'delete', 'Field', before);
+    const before = writable(ctx, 'delete', 'Field', 'field', id, await getFieldRow(tx, id));
     if (before.version !== version) throw errors.versionConflict('field');
     await refuseDeleteWithHistory(tx, before);
     const removed = await removeField(tx, id, version);

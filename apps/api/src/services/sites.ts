@@ -6,7 +6,7 @@ import { districts, fields, sites } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { followMove } from './scope-copies.ts';
 import { siteScope } from './scope.ts';
-import { auditRow, updateAtVersion } from './versioned.ts';
+import { auditRow, updateAtVersion, writable } from './versioned.ts';
 
 const fieldCounts = (db: Ctx['db']) =>
   db
@@ -84,9 +84,7 @@ export async function createSite(ctx: Ctx, input: CreateSiteInput): Promise<Site
 
 export async function updateSite(ctx: Ctx, id: number, input: UpdateSiteInput): Promise<SiteRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const before = await getSiteRow(tx, id);
-    if (!before) throw errors.notFound('site', id);
-    authorize(ctx, 'update', 'Site', before);
+    const before = writable(ctx, 'update', 'Site', 'site', id, await getSiteRow(tx, id));
     const { version, ...changes } = input;
     if (changes.districtId !== undefined && changes.districtId !== before.districtId) {
       // Moving a site to another district needs the right to create it there too.

@@ -4,13 +4,20 @@
  */
 import { and, eq, sql } from 'drizzle-orm';
 import type { PgColumn, PgTable, PgUpdateSetSource } from 'drizzle-orm/pg-core';
-import { errors, type VersionedResource } from '@swardwise/domain';
+import { errors, type Action, type NotFoundResource, type ScopedRow, type SubjectName, type VersionedResource } from '@swardwise/domain';
 import type { Tx } from '../db/client.ts';
 import { writeAudit } from './audit.ts';
-import type { Ctx } from './context.ts';
+import { authorize, type Ctx } from './context.ts';
 
 type VersionedTable = PgTable & { id: PgColumn; version: PgColumn; updatedAt: PgColumn };
 type DistrictRow = { id: number; districtId: number | null };
+
+/** The row a write is about, read in its transaction: 404 when there is none, 403 when the caller may not `action` it. */
+export function writable<R extends ScopedRow>(ctx: Ctx, action: Action, subject: SubjectName, resource: NotFoundResource, id: number, row: R | undefined): R {
+  if (!row) throw errors.notFound(resource, id);
+  authorize(ctx, action, subject, row);
+  return row;
+}
 
 /** Changes row `id` if it is still at `version`, bumping the version; else throws `<resource>/version_conflict`. */
 export async function updateAtVersion<T extends VersionedTable>(tx: Tx, table: T, resource: VersionedResource, id: number, version: number, changes: PgUpdateSetSource<T>): Promise<void> {
