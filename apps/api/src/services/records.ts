@@ -3,25 +3,15 @@
  * against those the one-third rule asked for. A mowing done after the date it was due by is
  * counted late; one not done by its day is counted missed.
  */
-import { and, asc, eq, gte, lte, sql } from 'drizzle-orm';
-import type { DateRangeQuery, Records } from '@swardwise/domain';
+import { and, asc, eq, gte, lte } from 'drizzle-orm';
+import type { DateRangeQuery, RecordTally, Records } from '@swardwise/domain';
 import { crews, fields, sites, workOrders } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { readScope } from './work-orders.ts';
+import { readScope, workOrderColumns } from './work-orders.ts';
 
-interface Tally {
-  plannedHours: number;
-  actualHours: number;
-  /** Planned hours of the orders that are done, to compare like with like. */
-  plannedHoursDone: number;
-  ordersDone: number;
-  ordersSkipped: number;
-  ordersOpen: number;
-  mowingsAsked: number;
-  mowingsDone: number;
-  mowingsLate: number;
-  mowingsMissed: number;
-}
+type Tally = RecordTally;
+/** The columns records read of each work order. */
+const { id, fieldId, fieldName, siteId, siteName, districtId, crewId, crewName, task, weekStart, plannedDate, plannedHours, actualHours, status, doneAt, details } = workOrderColumns;
 
 const empty = (): Tally => ({ plannedHours: 0, actualHours: 0, plannedHoursDone: 0, ordersDone: 0, ordersSkipped: 0, ordersOpen: 0, mowingsAsked: 0, mowingsDone: 0, mowingsLate: 0, mowingsMissed: 0 });
 const r2 = (v: number) => Math.round(v * 100) / 100;
@@ -33,24 +23,7 @@ export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.
   if (q.districtId) conditions.push(eq(workOrders.districtId, q.districtId));
   const rows = (
     await ctx.db
-      .select({
-        id: workOrders.id,
-        fieldId: workOrders.fieldId,
-        fieldName: fields.name,
-        siteId: workOrders.siteId,
-        siteName: sites.name,
-        districtId: workOrders.districtId,
-        crewId: workOrders.crewId,
-        crewName: sql<string | null>`${crews.name}`,
-        task: workOrders.task,
-        weekStart: workOrders.weekStart,
-        plannedDate: workOrders.plannedDate,
-        plannedHours: workOrders.plannedHours,
-        actualHours: workOrders.actualHours,
-        status: workOrders.status,
-        doneAt: workOrders.doneAt,
-        details: workOrders.details,
-      })
+      .select({ id, fieldId, fieldName, siteId, siteName, districtId, crewId, crewName, task, weekStart, plannedDate, plannedHours, actualHours, status, doneAt, details })
       .from(workOrders)
       .innerJoin(fields, eq(fields.id, workOrders.fieldId))
       .innerJoin(sites, eq(sites.id, workOrders.siteId))

@@ -27,7 +27,8 @@ export interface WorkOrderFilter {
   districtId?: number | undefined;
 }
 
-const rowSelect = {
+/** The columns of a work order as lists and the board show it (joined with its field, site, crew and equipment). */
+export const workOrderColumns = {
   id: workOrders.id,
   fieldId: workOrders.fieldId,
   fieldName: fields.name,
@@ -60,7 +61,7 @@ export type WorkOrderRow = Awaited<ReturnType<typeof selectRows>>[number];
 
 async function selectRows(db: Queryable, where: SQL | undefined) {
   return db
-    .select(rowSelect)
+    .select(workOrderColumns)
     .from(workOrders)
     .innerJoin(fields, eq(fields.id, workOrders.fieldId))
     .innerJoin(sites, eq(sites.id, workOrders.siteId))

@@ -10,40 +10,12 @@ import type { Db, Queryable } from '../db/client.ts';
 import { crews, equipment, fields, sites, workOrders, workPhotos, workUpdates } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, type Ctx } from './context.ts';
+import { workOrderColumns } from './work-orders.ts';
 
 /** A report may carry the phone's clock a little ahead of the server's; more is a wrong clock. */
 const CLOCK_SKEW_MS = 15 * 60_000;
 
-const orderColumns = {
-  id: workOrders.id,
-  fieldId: workOrders.fieldId,
-  fieldName: fields.name,
-  siteId: workOrders.siteId,
-  siteName: sites.name,
-  districtId: workOrders.districtId,
-  task: workOrders.task,
-  weekStart: workOrders.weekStart,
-  plannedDate: workOrders.plannedDate,
-  crewId: workOrders.crewId,
-  crewName: sql<string | null>`${crews.name}`,
-  equipmentId: workOrders.equipmentId,
-  equipmentName: sql<string | null>`${equipment.name}`,
-  plannedHours: workOrders.plannedHours,
-  actualHours: workOrders.actualHours,
-  status: workOrders.status,
-  origin: workOrders.origin,
-  pinned: workOrders.pinned,
-  reason: workOrders.reason,
-  notes: workOrders.notes,
-  details: workOrders.details,
-  startedAt: workOrders.startedAt,
-  doneAt: workOrders.doneAt,
-  doneBy: workOrders.doneBy,
-  version: workOrders.version,
-  siteLat: sites.lat,
-  siteLng: sites.lng,
-  photoCount: sql<number>`(select count(*)::int from ${workPhotos} wp where wp.work_order_id = ${workOrders.id})`,
-};
+const orderColumns = { ...workOrderColumns, startedAt: workOrders.startedAt, doneBy: workOrders.doneBy };
 
 /** One work order as the Today page and the board show it. */
 async function orderRow(db: Queryable, id: number) {
