@@ -3,12 +3,10 @@
  * ids and versions past PostgreSQL's integer, dates outside 1900–2200, JSON nested deeper
  * than any real document.
  */
-import fs from 'node:fs';
-import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { repoRoot } from '../../apps/api/src/config.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 import { giveWork } from '../support/fixture.ts';
+import { servedRoutes } from '../support/routes.ts';
 
 let api: TestApi;
 beforeAll(async () => {
@@ -19,27 +17,12 @@ afterAll(() => api.close());
 const TOO_BIG = '2147483648';
 const issuePaths = (body: { error: { details?: { issues?: { path: string }[] } } }) => (body.error.details?.issues ?? []).map((i) => i.path);
 
-/**
- * Every route with a parameter, read from the routers' source and app.ts's mount points, so
- * a route added later is swept too.
- */
+/** Every API route with a parameter the app serves (a route added later is swept too). */
 function paramRoutes(): { method: 'get' | 'post' | 'patch' | 'delete'; path: string }[] {
-  const appSource = fs.readFileSync(path.join(repoRoot, 'apps/api/src/app.ts'), 'utf8');
-  const mounts = new Map<string, string[]>();
-  for (const m of appSource.matchAll(/app\.use\('([^']+)',\s*(\w+Router)\(full\)\)/g)) mounts.set(m[2]!, [...(mounts.get(m[2]!) ?? []), m[1]!]);
-  const routes: { method: 'get' | 'post' | 'patch' | 'delete'; path: string }[] = [];
-  const dir = path.join(repoRoot, 'apps/api/src/routes');
-  for (const file of fs.readdirSync(dir).filter((f) => f.endsWith('.ts'))) {
-    const source = fs.readFileSync(path.join(dir, file), 'utf8');
-    const parts = source.split(/export function (\w+Router)\(/);
-    for (let i = 1; i < parts.length; i += 2) {
-      const prefixes = mounts.get(parts[i]!) ?? [];
-      for (const r of parts[i + 1]!.matchAll(/router\.(get|post|patch|delete)\(\s*'([^']*:[^']*)'/g)) {
-        for (const prefix of prefixes) routes.push({ method: r[1] as 'get', path: `${prefix}${r[2]}` });
-      }
-    }
-  }
-  return routes;
+  return servedRoutes(api.app)
+    .map((r) => r.split(' ') as [string, string])
+    .filter(([method, path]) => path.startsWith('/api/') && path.includes(':') && ['GET', 'POST', 'PATCH', 'DELETE'].includes(method))
+    .map(([method, path]) => ({ method: method.toLowerCase() as 'get', path }));
 }
 
 describe('ids and versions past PostgreSQL’s integer', () => {

@@ -7,6 +7,7 @@ import { ERROR_CODES } from '@swardwise/domain';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { COOKIE_NAME } from '../../apps/api/src/app.ts';
 import { buildOpenApiDocument, openApiPath } from '../../apps/api/src/openapi/document.ts';
+import { servedRoutes } from '../support/routes.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
 let api: TestApi;
@@ -17,31 +18,6 @@ beforeAll(async () => {
   served = (await supertest(api.app).get('/api/openapi.json')).body as OpenAPIV3_1.Document;
 });
 afterAll(() => api.close());
-
-interface Layer {
-  rawPath?: unknown;
-  route?: { path: unknown; methods: Record<string, boolean> };
-  handle?: { stack?: Layer[] };
-}
-
-/** Every `METHOD /path` the app serves, walking mounted routers and joining their mount paths (Express 5). */
-function servedRoutes(app: Express): string[] {
-  const found: string[] = [];
-  const walk = (stack: Layer[], prefix: string) => {
-    for (const layer of stack) {
-      if (layer.route) {
-        if (typeof layer.route.path !== 'string') throw new Error(`route path ${String(layer.route.path)} under ${prefix} is not a string; the walker reads only strings`);
-        for (const method of Object.keys(layer.route.methods).filter((m) => m !== '_all')) found.push(`${method.toUpperCase()} ${join(prefix, layer.route.path)}`);
-      } else if (layer.handle?.stack) {
-        if (typeof layer.rawPath !== 'string') throw new Error(`a router mounted under ${prefix} has no string mount path (Express's router changed?)`);
-        walk(layer.handle.stack, join(prefix, layer.rawPath));
-      }
-    }
-  };
-  walk((app as unknown as { router: { stack: Layer[] } }).router.stack, '');
-  return [...new Set(found)].sort();
-}
-const join = (a: string, b: string) => (a + (b === '/' ? '' : b)).replace(/\/+/g, '/') || '/';
 
 /** `METHOD /api/x/:id` for every operation of the document. */
 function documentedRoutes(doc: OpenAPIV3_1.Document): string[] {
