@@ -41,14 +41,14 @@ import {
   weekQuerySchema,
   workReportSchema,
 } from '@swardwise/domain';
-import { districtQuery, versionQuery as crewVersionQuery } from '../routes/crews.ts';
+import { districtQuery } from '../routes/crews.ts';
 import { auditQuerySchema } from '../routes/directory.ts';
-import { listQuery as fieldEventsQuery, versionQuery as fieldEventVersionQuery } from '../routes/field-events.ts';
-import { deleteQuerySchema as fieldDeleteQuery } from '../routes/fields.ts';
+import { listQuery as fieldEventsQuery } from '../routes/field-events.ts';
 import { listQuerySchema as importsQuery } from '../routes/imports.ts';
 import { csvQuerySchema, MAX_CSV_BYTES } from '../routes/weather.ts';
 import { confirmSchema } from '../routes/week-plans.ts';
-import { querySchema as workOrdersQuery, deleteQuerySchema as workOrderDeleteQuery } from '../routes/work-orders.ts';
+import { querySchema as workOrdersQuery } from '../routes/work-orders.ts';
+import { versionQuerySchema } from '../routes/write-routes.ts';
 import { photoBodySchema, photoParamsSchema } from '../routes/work-reports.ts';
 import { PHOTO_MAX_BYTES, PHOTOS_PER_ORDER } from '../services/work-photos.ts';
 import { allowed, publicAccess, signedIn, type Access } from './access.ts';
@@ -336,7 +336,7 @@ const workOrders: RouteDoc[] = [
     description: VERSION_NOTE,
     access: allowed('delete', 'WorkOrder'),
     params: idParamSchema,
-    query: workOrderDeleteQuery,
+    query: versionQuerySchema,
     answers: [noContent('The work order is deleted.')],
     errors: [409],
   },
@@ -555,7 +555,7 @@ const fields: RouteDoc[] = [
     description: VERSION_NOTE,
     access: allowed('delete', 'Field'),
     params: idParamSchema,
-    query: fieldDeleteQuery,
+    query: versionQuerySchema,
     answers: [noContent('The field is deleted.')],
     errors: [409],
   },
@@ -600,7 +600,7 @@ const fieldEvents: RouteDoc[] = [
     description: VERSION_NOTE,
     access: allowed('delete', 'FieldEvent'),
     params: idParamSchema,
-    query: fieldEventVersionQuery,
+    query: versionQuerySchema,
     answers: [noContent('The booking is deleted.')],
     errors: [409],
   },
@@ -796,7 +796,7 @@ const crews: RouteDoc[] = [
     description: VERSION_NOTE,
     access: allowed('delete', 'Crew'),
     params: idParamSchema,
-    query: crewVersionQuery,
+    query: versionQuerySchema,
     answers: [noContent('The crew is deleted.')],
     errors: [409],
   },
@@ -838,7 +838,7 @@ const crews: RouteDoc[] = [
     description: VERSION_NOTE,
     access: allowed('delete', 'Equipment'),
     params: idParamSchema,
-    query: crewVersionQuery,
+    query: versionQuerySchema,
     answers: [noContent('The equipment is deleted.')],
     errors: [409],
   },

@@ -1,11 +1,12 @@
 /** Games, tournaments and other bookings of the fields. */
 import { Router } from 'express';
 import { z } from 'zod';
-import { addDaysIso, createFieldEventSchema, idParamSchema, idSchema, isoDateSchema as isoDate, updateFieldEventSchema, versionSchema } from '@swardwise/domain';
+import { addDaysIso, createFieldEventSchema, idSchema, isoDateSchema as isoDate, updateFieldEventSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { createFieldEvent, deleteFieldEvent, listFieldEvents, updateFieldEvent } from '../services/field-events.ts';
+import { writeRoutes } from './write-routes.ts';
 
 /** Without dates: the coming three months, what a season's bookings list needs at a glance. */
 const DEFAULT_DAYS = 92;
@@ -26,7 +27,6 @@ export const listQuery = (today: string) => z
   })
   .refine((q) => q.from <= q.to, { path: ['to'], message: 'the end date is before the start date' })
   .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / 86_400_000 <= MAX_DAYS, { path: ['to'], message: `ask for at most ${MAX_DAYS} days at a time` });
-export const versionQuery = z.object({ version: z.coerce.number().pipe(versionSchema) });
 
 export function fieldEventsRouter({ db }: AppDeps): Router {
   const router = Router();
@@ -35,20 +35,10 @@ export function fieldEventsRouter({ db }: AppDeps): Router {
     const ctx = ctxOf(db, req);
     res.json({ items: await listFieldEvents(ctx, parse(listQuery(ctx.clock.today()), req.query, 'query')) });
   });
-  router.post('/', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    res.status(201).json({ event: await createFieldEvent(ctx, parse(createFieldEventSchema, req.body, 'body')) });
-  });
-  router.patch('/:id', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    const { id } = parse(idParamSchema, req.params, 'params');
-    res.json({ event: await updateFieldEvent(ctx, id, parse(updateFieldEventSchema, req.body, 'body')) });
-  });
-  router.delete('/:id', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    const { id } = parse(idParamSchema, req.params, 'params');
-    await deleteFieldEvent(ctx, id, parse(versionQuery, req.query, 'query').version);
-    res.status(204).end();
+  writeRoutes(router, db, '/', 'event', {
+    create: { body: createFieldEventSchema, run: createFieldEvent },
+    update: { body: updateFieldEventSchema, run: updateFieldEvent },
+    remove: deleteFieldEvent,
   });
 
   return router;

@@ -1,13 +1,11 @@
 import { Router } from 'express';
-import { z } from 'zod';
-import { createFieldSchema, idParamSchema, listQuerySchema, needsQuerySchema, updateFieldSchema, versionSchema } from '@swardwise/domain';
+import { createFieldSchema, idParamSchema, listQuerySchema, needsQuerySchema, updateFieldSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { createField, deleteField, getField, listFieldsJson, updateField } from '../services/fields.ts';
 import { fieldNeeds } from '../services/needs.ts';
-
-export const deleteQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
+import { writeRoutes } from './write-routes.ts';
 
 export function fieldsRouter({ db, config }: AppDeps): Router {
   const router = Router();
@@ -15,12 +13,6 @@ export function fieldsRouter({ db, config }: AppDeps): Router {
   router.get('/', async (req, res) => {
     const query = parse(listQuerySchema, req.query, 'query');
     res.type('application/json').send(await listFieldsJson(ctxOf(db, req), query));
-  });
-
-  router.post('/', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    const input = parse(createFieldSchema, req.body, 'body');
-    res.status(201).json({ field: await createField(ctx, input) });
   });
 
   router.get('/:id', async (req, res) => {
@@ -34,19 +26,10 @@ export function fieldsRouter({ db, config }: AppDeps): Router {
     res.json({ needs: await fieldNeeds(ctxOf(db, req), id, date) });
   });
 
-  router.patch('/:id', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    const { id } = parse(idParamSchema, req.params, 'params');
-    const input = parse(updateFieldSchema, req.body, 'body');
-    res.json({ field: await updateField(ctx, id, input) });
-  });
-
-  router.delete('/:id', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    const { id } = parse(idParamSchema, req.params, 'params');
-    const { version } = parse(deleteQuerySchema, req.query, 'query');
-    await deleteField(ctx, id, version, config.uploadsDir);
-    res.status(204).end();
+  writeRoutes(router, db, '/', 'field', {
+    create: { body: createFieldSchema, run: createField },
+    update: { body: updateFieldSchema, run: updateField },
+    remove: (ctx, id, version) => deleteField(ctx, id, version, config.uploadsDir),
   });
 
   return router;

@@ -5,6 +5,7 @@ import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { listFields } from '../services/fields.ts';
 import { createSite, getSite, listSites, updateSite } from '../services/sites.ts';
+import { writeRoutes } from './write-routes.ts';
 
 export function sitesRouter({ db }: AppDeps): Router {
   const router = Router();
@@ -14,12 +15,6 @@ export function sitesRouter({ db }: AppDeps): Router {
     res.json({ items: await listSites(ctxOf(db, req), query) });
   });
 
-  router.post('/', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    const input = parse(createSiteSchema, req.body, 'body');
-    res.status(201).json({ site: await createSite(ctx, input) });
-  });
-
   router.get('/:id', async (req, res) => {
     const ctx = ctxOf(db, req);
     const { id } = parse(idParamSchema, req.params, 'params');
@@ -27,11 +22,9 @@ export function sitesRouter({ db }: AppDeps): Router {
     res.json({ site, fields: await listFields(ctx, { siteId: id }) });
   });
 
-  router.patch('/:id', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    const { id } = parse(idParamSchema, req.params, 'params');
-    const input = parse(updateSiteSchema, req.body, 'body');
-    res.json({ site: await updateSite(ctx, id, input) });
+  writeRoutes(router, db, '/', 'site', {
+    create: { body: createSiteSchema, run: createSite },
+    update: { body: updateSiteSchema, run: updateSite },
   });
 
   return router;

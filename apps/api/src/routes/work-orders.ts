@@ -1,10 +1,11 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { addDaysIso, createWorkOrderSchema, idParamSchema, idSchema, isoDateSchema, updateWorkOrderSchema, versionSchema } from '@swardwise/domain';
+import { addDaysIso, createWorkOrderSchema, idSchema, isoDateSchema, updateWorkOrderSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { createWorkOrder, deleteWorkOrder, listWorkOrders, updateWorkOrder, type WriteDeps } from '../services/work-orders.ts';
+import { writeRoutes } from './write-routes.ts';
 
 /** Without dates: the department's today and the six days after it. */
 export const querySchema = (today: string) => z
@@ -17,7 +18,6 @@ export const querySchema = (today: string) => z
   .transform((q) => ({ ...q, from: q.from ?? today, to: q.to ?? addDaysIso(q.from ?? today, 6) }))
   .refine((q) => q.from <= q.to, { path: ['to'], message: 'the end date is before the start date' })
   .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / 86_400_000 <= 92, { path: ['to'], message: 'ask for at most 92 days at a time' });
-export const deleteQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
 
 /** How the crew lead's e-mail goes out and where the portal lives. */
 export function writeDeps({ mailer, config }: AppDeps): WriteDeps {
@@ -31,21 +31,10 @@ export function workOrdersRouter(deps: AppDeps): Router {
     const ctx = ctxOf(db, req);
     res.json({ items: await listWorkOrders(ctx, parse(querySchema(ctx.clock.today()), req.query, 'query')) });
   });
-  router.post('/', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    res.status(201).json(await createWorkOrder(ctx, parse(createWorkOrderSchema, req.body, 'body'), writeDeps(deps)));
-  });
-  router.patch('/:id', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    const { id } = parse(idParamSchema, req.params, 'params');
-    res.json(await updateWorkOrder(ctx, id, parse(updateWorkOrderSchema, req.body, 'body'), writeDeps(deps)));
-  });
-  router.delete('/:id', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    const { id } = parse(idParamSchema, req.params, 'params');
-    const { version } = parse(deleteQuerySchema, req.query, 'query');
-    await deleteWorkOrder(ctx, id, version, writeDeps(deps));
-    res.status(204).end();
+  writeRoutes(router, db, '/', null, {
+    create: { body: createWorkOrderSchema, run: (ctx, input) => createWorkOrder(ctx, input, writeDeps(deps)) },
+    update: { body: updateWorkOrderSchema, run: (ctx, id, input) => updateWorkOrder(ctx, id, input, writeDeps(deps)) },
+    remove: (ctx, id, version) => deleteWorkOrder(ctx, id, version, writeDeps(deps)),
   });
   return router;
 }
