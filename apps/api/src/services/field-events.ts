@@ -2,11 +2,12 @@
  * Bookings of a field (games, tournaments, practices…): who plays when, so lines are painted
  * and mowing is timed before them. Each row carries its field's site and district for scope.
  */
-import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
+import { and, asc, eq, gte, lte, sql, type SQL } from 'drizzle-orm';
 import { errors, type Actor, type CreateFieldEventInput, type FieldEventRow, type UpdateFieldEventInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { fieldEvents, fields, sites } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
+import { placeScope } from './scope.ts';
 import { auditRow, deleteAtVersion, updateAtVersion, writable } from './versioned.ts';
 
 export interface FieldEventFilter {
@@ -44,18 +45,7 @@ async function getRow(db: Ctx['db'], id: number) {
 }
 
 /** The same rule as the FieldEvent ability, in SQL: undefined means every booking. */
-function eventScope(actor: Actor): SQL | undefined {
-  switch (actor.role) {
-    case 'admin':
-    case 'head':
-      return undefined;
-    case 'foreman':
-    case 'crew':
-      return eq(fieldEvents.districtId, actor.districtId ?? -1);
-    case 'partner':
-      return actor.siteIds.length ? inArray(fieldEvents.siteId, actor.siteIds) : sql`false`;
-  }
-}
+const eventScope = (actor: Actor): SQL | undefined => placeScope(actor, fieldEvents.districtId, fieldEvents.siteId);
 
 export async function listFieldEvents(ctx: Ctx, filter: FieldEventFilter): Promise<FieldEventRow<Date>[]> {
   authorize(ctx, 'read', 'FieldEvent');

@@ -3,6 +3,7 @@
  * the shared abilities; services also check each row against the ability.
  */
 import { and, eq, inArray, sql, type SQL } from 'drizzle-orm';
+import type { AnyPgColumn } from 'drizzle-orm/pg-core';
 import type { Actor } from '@swardwise/domain';
 import { fields, sites, workOrders } from '../db/schema/index.ts';
 
@@ -17,18 +18,26 @@ export const fieldCrewIds = sql<number[]>`coalesce((select array_agg(distinct wo
   where wo.field_id = ${fields.id} and wo.crew_id is not null
     and wo.planned_date >= current_date - ${CREW_WORK_WINDOW_DAYS}::int), '{}')`;
 
-/** Condition on the `sites` table for what the actor may read; undefined means everything. */
-export function siteScope(actor: Actor): SQL | undefined {
+/**
+ * Condition on a row's district and site columns for what the actor may read (a foreman and
+ * a crew lead: their district; a partner: his sites); undefined means everything.
+ */
+export function placeScope(actor: Actor, districtId: AnyPgColumn, siteId: AnyPgColumn): SQL | undefined {
   switch (actor.role) {
     case 'admin':
     case 'head':
       return undefined;
     case 'foreman':
     case 'crew':
-      return eq(sites.districtId, actor.districtId ?? -1);
+      return eq(districtId, actor.districtId ?? -1);
     case 'partner':
-      return actor.siteIds.length ? inArray(sites.id, actor.siteIds) : sql`false`;
+      return actor.siteIds.length ? inArray(siteId, actor.siteIds) : sql`false`;
   }
+}
+
+/** Condition on the `sites` table for what the actor may read; undefined means everything. */
+export function siteScope(actor: Actor): SQL | undefined {
+  return placeScope(actor, sites.districtId, sites.id);
 }
 
 /**
