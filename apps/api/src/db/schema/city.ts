@@ -1,18 +1,7 @@
 /** Districts, sites and fields: the places the department keeps, which change together. */
 import { sql } from 'drizzle-orm';
 import { check, date, doublePrecision, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
-import type {
-  Clippings,
-  FieldStatus,
-  Grass,
-  IrrigationKind,
-  Level,
-  Polygon,
-  Rootzone,
-  SiteKind,
-  SiteOwner,
-  Sport,
-} from '@swardwise/domain';
+import type { Clippings, FieldStatus, Grass, IrrigationKind, Level, Polygon, Rootzone, SiteKind, SiteOwner, Sport } from '@swardwise/domain';
 import { id, versioned } from './columns.ts';
 
 export const districts = pgTable(

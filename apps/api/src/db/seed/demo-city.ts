@@ -7,19 +7,7 @@
  * Pure and deterministic: no I/O, no clock, no Math.random; two calls give equal results.
  */
 import type { Feature, FeatureCollection, LineString, Polygon as GeoPolygon } from 'geojson';
-import type {
-  Clippings,
-  FieldStatus,
-  Grass,
-  IrrigationKind,
-  Level,
-  Polygon,
-  Role,
-  Rootzone,
-  SiteKind,
-  SiteOwner,
-  Sport,
-} from '@swardwise/domain';
+import type { Clippings, FieldRow, FieldStatus, Grass, IrrigationKind, Level, Polygon, Role, Rootzone, SiteKind, SiteRow, Sport } from '@swardwise/domain';
 import {
   fanShape,
   lawnShape,
@@ -47,33 +35,11 @@ export interface DemoDistrict {
   yard: { name: string; lat: number; lng: number };
 }
 
-export interface DemoSite {
-  key: string;
-  districtCode: string;
-  name: string;
-  kind: SiteKind;
-  owner: SiteOwner;
-  address: string;
-  lat: number;
-  lng: number;
-  notes: string;
-}
+/** A site of the demo city, its district named by code and its fields by the site's key. */
+export type DemoSite = Pick<SiteRow, 'name' | 'kind' | 'owner' | 'address' | 'lat' | 'lng' | 'notes'> & { key: string; districtCode: string };
 
-export interface DemoField {
-  siteKey: string;
-  name: string;
-  sport: Sport;
-  grass: Grass;
-  rootzone: Rootzone;
-  irrigation: IrrigationKind;
-  maintenanceLevel: Level;
-  hocOverrideMm: number | null;
-  clippings: Clippings;
-  status: FieldStatus;
-  statusNote: string;
-  weeklyUseHours: number;
-  geometry: Polygon;
-}
+/** A field of the demo city: a field's own attributes, its site named by key. */
+export type DemoField = Pick<FieldRow, 'name' | 'sport' | 'grass' | 'rootzone' | 'irrigation' | 'maintenanceLevel' | 'hocOverrideMm' | 'clippings' | 'status' | 'statusNote' | 'weeklyUseHours'> & { siteKey: string; geometry: Polygon };
 
 export interface DemoCrew {
   districtCode: string;
