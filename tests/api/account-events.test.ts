@@ -4,16 +4,12 @@
  */
 import { and, eq, gt } from 'drizzle-orm';
 import supertest from 'supertest';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { auditLog, sessions, users } from '../../apps/api/src/db/schema/index.ts';
 import { PASSWORD } from '../support/fixture.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { useTestApi } from '../support/app.ts';
 
-let api: TestApi;
-beforeAll(async () => {
-  api = await startTestApi();
-});
-afterAll(() => api.close());
+const api = useTestApi();
 
 const DAY = 24 * 3600 * 1000;
 const lastId = async () => (await api.database.db.select({ id: auditLog.id }).from(auditLog)).reduce((m, r) => Math.max(m, r.id), 0);

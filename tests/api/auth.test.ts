@@ -1,14 +1,10 @@
 import supertest from 'supertest';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { sessions } from '../../apps/api/src/db/schema/index.ts';
 import { PASSWORD } from '../support/fixture.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { useTestApi } from '../support/app.ts';
 
-let api: TestApi;
-beforeAll(async () => {
-  api = await startTestApi({ LOGIN_ATTEMPTS: '5' });
-});
-afterAll(() => api.close());
+const api = useTestApi({ LOGIN_ATTEMPTS: '5' });
 
 describe('sign-in', () => {
   test('should sign in with the right password and set an httpOnly SameSite cookie', async () => {

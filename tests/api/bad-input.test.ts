@@ -3,16 +3,12 @@
  * ids and versions past PostgreSQL's integer, dates outside 1900–2200, JSON nested deeper
  * than any real document.
  */
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { describe, expect, test } from 'vitest';
+import { useTestApi } from '../support/app.ts';
 import { giveWork } from '../support/fixture.ts';
 import { servedRoutes } from '../support/routes.ts';
 
-let api: TestApi;
-beforeAll(async () => {
-  api = await startTestApi();
-});
-afterAll(() => api.close());
+const api = useTestApi();
 
 const TOO_BIG = '2147483648';
 const issuePaths = (body: { error: { details?: { issues?: { path: string }[] } } }) => (body.error.details?.issues ?? []).map((i) => i.path);

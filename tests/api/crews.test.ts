@@ -1,13 +1,9 @@
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { auditLog, crews, equipment } from '../../apps/api/src/db/schema/index.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { useTestApi } from '../support/app.ts';
 
-let api: TestApi;
-beforeAll(async () => {
-  api = await startTestApi();
-});
-afterAll(() => api.close());
+const api = useTestApi();
 
 const rotary = (districtId: number, crewId: number | null = null) => ({
   districtId,

@@ -1,15 +1,11 @@
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { addDaysIso, DEFAULT_TIME_ZONE, localToday } from '@swardwise/domain';
 import { auditLog, fieldEvents } from '../../apps/api/src/db/schema/index.ts';
 import { addUser } from '../support/fixture.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { useTestApi } from '../support/app.ts';
 
-let api: TestApi;
-beforeAll(async () => {
-  api = await startTestApi();
-});
-afterAll(() => api.close());
+const api = useTestApi();
 
 const SOON = addDaysIso(localToday(DEFAULT_TIME_ZONE), 5);
 const game = (fieldId: number, over: Record<string, unknown> = {}) => ({ fieldId, kind: 'game', title: 'Invented league game', startsOn: SOON, startTime: '18:30', ...over });

@@ -1,15 +1,11 @@
 import { eq, sql } from 'drizzle-orm';
 import supertest from 'supertest';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { auditLog, fields, imports, sites } from '../../apps/api/src/db/schema/index.ts';
 import { rectangle } from '../support/fixture.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { type TestApi, useTestApi } from '../support/app.ts';
 
-let api: TestApi;
-beforeAll(async () => {
-  api = await startTestApi();
-});
-afterAll(() => api.close());
+const api = useTestApi();
 
 const count = async (table: typeof sites | typeof fields | typeof auditLog) =>
   (await api.database.db.select({ n: sql<number>`count(*)::int` }).from(table))[0]!.n;

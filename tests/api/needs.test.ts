@@ -1,15 +1,11 @@
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { CAUTIONS, DEFAULT_STANDARDS, hocFor, mowerTypeFor, type Level } from '@swardwise/domain';
 import { fields } from '../../apps/api/src/db/schema/index.ts';
 import { giveWork } from '../support/fixture.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { type TestApi, useTestApi } from '../support/app.ts';
 
-let api: TestApi;
-beforeAll(async () => {
-  api = await startTestApi();
-});
-afterAll(() => api.close());
+const api = useTestApi();
 
 const inSeason = '2026-05-20'; // a Wednesday inside the fixture's weather
 const fieldRow = async (id: number) => (await api.database.db.select().from(fields).where(eq(fields.id, id)))[0]!;

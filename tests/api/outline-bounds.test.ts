@@ -1,8 +1,8 @@
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import type { Polygon } from '@swardwise/domain';
 import { fields } from '../../apps/api/src/db/schema/index.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { useTestApi } from '../support/app.ts';
 import { fieldBody } from '../support/fixture.ts';
 
 /**
@@ -10,11 +10,7 @@ import { fieldBody } from '../support/fixture.ts';
  * create and update, map editing and outline imports all refuse a huge one with a 400 that
  * names the ring, before any geometry is computed.
  */
-let api: TestApi;
-beforeAll(async () => {
-  api = await startTestApi();
-});
-afterAll(() => api.close());
+const api = useTestApi();
 
 /** A closed ring of `n` positions on a circle of about 90 m, short numbers so 100,000 fit the 2 MB body limit. */
 function circle(n: number, lng = -66.47, lat = 37.64): Polygon {

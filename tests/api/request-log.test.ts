@@ -2,15 +2,11 @@
 import { Writable } from 'node:stream';
 import { pino } from 'pino';
 import supertest from 'supertest';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { loggableUrl } from '../../apps/api/src/http/request-log.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { useTestApi } from '../support/app.ts';
 
-let api: TestApi;
-beforeAll(async () => {
-  api = await startTestApi();
-});
-afterAll(() => api.close());
+const api = useTestApi();
 
 describe('request log', () => {
   test('should log the paths of invitation and reset links without their tokens', async () => {

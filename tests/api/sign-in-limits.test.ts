@@ -5,18 +5,14 @@
  */
 import { eq } from 'drizzle-orm';
 import supertest from 'supertest';
-import { afterAll, beforeAll, beforeEach, describe, expect, test } from 'vitest';
+import { beforeEach, describe, expect, test } from 'vitest';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { auditLog, userTokens } from '../../apps/api/src/db/schema/index.ts';
 import type { Mailer, OutgoingMail } from '../../apps/api/src/mail/mailer.ts';
 import { PASSWORD } from '../support/fixture.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { type TestApi, useTestApi } from '../support/app.ts';
 
-let api: TestApi;
-beforeAll(async () => {
-  api = await startTestApi();
-});
-afterAll(() => api.close());
+const api = useTestApi();
 beforeEach(() => api.mail.clear());
 
 const signIn = (app: TestApi['app'], email: string, password: string, forwardedFor?: string) => {

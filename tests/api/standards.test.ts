@@ -1,14 +1,10 @@
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS } from '@swardwise/domain';
 import { auditLog, settings, standards } from '../../apps/api/src/db/schema/index.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { useTestApi } from '../support/app.ts';
 
-let api: TestApi;
-beforeAll(async () => {
-  api = await startTestApi();
-});
-afterAll(() => api.close());
+const api = useTestApi();
 
 const row = async (level: number) => (await api.database.db.select().from(standards).where(eq(standards.level, level)))[0]!;
 const audits = async () => api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'standards'));

@@ -1,15 +1,11 @@
 import supertest from 'supertest';
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { users } from '../../apps/api/src/db/schema/index.ts';
 import { PASSWORD } from '../support/fixture.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { useTestApi } from '../support/app.ts';
 
-let api: TestApi;
-beforeAll(async () => {
-  api = await startTestApi();
-});
-afterAll(() => api.close());
+const api = useTestApi();
 
 describe('user administration', () => {
   test('should let only the admin list users', async () => {

@@ -1,6 +1,7 @@
 /** A fresh API on its own in-memory PGlite, for one test file. */
 import { pino, type Logger } from 'pino';
 import supertest from 'supertest';
+import { afterAll, beforeAll } from 'vitest';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
@@ -74,4 +75,17 @@ export async function startTestApi(env: Record<string, string> = {}, options: { 
       await database.close();
     },
   };
+}
+
+/**
+ * The file's API: started before its tests, closed after them. The object is filled in when
+ * the tests start, so read its members inside tests and hooks, not at the top of the file.
+ */
+export function useTestApi(env: Record<string, string> = {}, options: { now?: () => Date } = {}): TestApi {
+  const api = {} as TestApi;
+  beforeAll(async () => {
+    Object.assign(api, await startTestApi(env, options));
+  });
+  afterAll(() => api.close());
+  return api;
 }
