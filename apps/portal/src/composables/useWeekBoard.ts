@@ -116,19 +116,11 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
   const planWarnings = shallowRef<string[]>([]);
   const generating = ref<'preview' | 'apply' | 'confirm' | null>(null);
 
-  async function generate(dryRun: boolean): Promise<PlanDiff | null> {
-    const board = data.value;
-    if (!board) return null;
-    generating.value = dryRun ? 'preview' : 'apply';
+  /** Runs one week-wide action with `generating` set to it; a failure is said once (a 401 ends the session). */
+  async function running<T>(what: NonNullable<typeof generating.value>, run: () => Promise<T>): Promise<T | null> {
+    generating.value = what;
     try {
-      const answer = await generateWeek({ districtId: board.districtId, weekStart: board.weekStart, dryRun });
-      planWarnings.value = answer.warnings ?? [];
-      if (dryRun) diff.value = answer.diff;
-      else {
-        await showBoard(answer.board);
-        diff.value = null;
-      }
-      return answer.diff;
+      return await run();
     } catch (cause) {
       if (cause instanceof ApiError && cause.status === 401) session.expire();
       ElMessage.error(errorMessage(cause));
@@ -138,22 +130,30 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
     }
   }
 
-  /** Confirms the suggested crews of the week; answers how many orders and e-mails that made. */
-  async function confirm(): Promise<{ assigned: number; emailed: number } | null> {
+  function generate(dryRun: boolean): Promise<PlanDiff | null> {
     const board = data.value;
-    if (!board) return null;
-    generating.value = 'confirm';
-    try {
+    if (!board) return Promise.resolve(null);
+    return running(dryRun ? 'preview' : 'apply', async () => {
+      const answer = await generateWeek({ districtId: board.districtId, weekStart: board.weekStart, dryRun });
+      planWarnings.value = answer.warnings ?? [];
+      if (dryRun) diff.value = answer.diff;
+      else {
+        await showBoard(answer.board);
+        diff.value = null;
+      }
+      return answer.diff;
+    });
+  }
+
+  /** Confirms the suggested crews of the week; answers how many orders and e-mails that made. */
+  function confirm(): Promise<{ assigned: number; emailed: number } | null> {
+    const board = data.value;
+    if (!board) return Promise.resolve(null);
+    return running('confirm', async () => {
       const answer = await confirmWeek({ districtId: board.districtId, weekStart: board.weekStart });
       await showBoard(answer.board);
       return { assigned: answer.assigned, emailed: answer.emailed };
-    } catch (cause) {
-      if (cause instanceof ApiError && cause.status === 401) session.expire();
-      ElMessage.error(errorMessage(cause));
-      return null;
-    } finally {
-      generating.value = null;
-    }
+    });
   }
 
   /** Orders with a suggested crew that nobody confirmed yet. */
