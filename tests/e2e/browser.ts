@@ -5,6 +5,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import sharp from 'sharp';
 import { afterAll, beforeAll, inject } from 'vitest';
 import type { Role } from '@swardwise/domain';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
@@ -53,4 +54,17 @@ export async function enterSignIn(page: Page, role: Role, landing?: string) {
 export async function signIn(page: Page, role: Role, landing?: string) {
   await page.goto(`${inject('baseUrl')}/sign-in`);
   await enterSignIn(page, role, landing);
+}
+
+/** A phone as crew leads hold one: 390 × 844 CSS pixels, touch. */
+export const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
+
+/** The Today page's report dialog (job done or skipped). */
+export const reportDialog = (page: Page) => page.locator('.el-dialog').filter({ has: page.locator('[data-test="report-submit"]') });
+
+/** An invented photo (one shade of turf green) as a file input takes it: PNG or JPEG by the name's ending. */
+export async function turfPhoto(name: string, width: number, height: number) {
+  const image = sharp({ create: { width, height, channels: 3, background: { r: 60, g: 125, b: 66 } } });
+  const png = name.endsWith('.png');
+  return { name, mimeType: png ? 'image/png' : 'image/jpeg', buffer: await (png ? image.png() : image.jpeg()).toBuffer() };
 }

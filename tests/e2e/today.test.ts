@@ -4,12 +4,10 @@
  * and reaches the server exactly once.
  */
 import path from 'node:path';
-import sharp from 'sharp';
 import type { BrowserContext, Page } from 'playwright-core';
 import { describe, expect, test } from 'vitest';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { browser, PHONE, reportDialog, shots, signIn, turfPhoto, useBrowser } from './browser.ts';
 
-const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
 
 useBrowser();
 
@@ -51,16 +49,13 @@ describe('Today on a phone', () => {
 
       const id = await openJob(page);
       await card(page, id).locator('[data-test="job-done"]').click();
-      const dialog = page.locator('.el-dialog').filter({ has: page.locator('[data-test="report-submit"]') });
+      const dialog = reportDialog(page);
       await dialog.waitFor();
       const planned = await dialog.locator('[data-test="report-hours"] input').inputValue();
       expect(Number(planned)).toBeGreaterThan(0);
       await dialog.locator('[data-test="report-hours"] input').fill('1.75');
       await dialog.locator('textarea').fill('Striped north–south; clippings light');
-      const png = await sharp({ create: { width: 640, height: 480, channels: 3, background: { r: 58, g: 122, b: 71 } } })
-        .png()
-        .toBuffer();
-      await dialog.locator('[data-test="report-photos"]').setInputFiles({ name: 'stripes.png', mimeType: 'image/png', buffer: png });
+      await dialog.locator('[data-test="report-photos"]').setInputFiles(await turfPhoto('stripes.png', 640, 480));
       await dialog.locator('img[alt="stripes.png"]').waitFor();
       // The preview is a blob: URL, which the page's content security policy must allow.
       await page.waitForFunction(() => (document.querySelector('img[alt="stripes.png"]') as HTMLImageElement | null)?.naturalWidth === 640);
@@ -100,7 +95,7 @@ describe('Today on a phone', () => {
         return route.abort('connectionreset');
       });
       await card(page, id).locator('[data-test="job-skip"]').click();
-      const dialog = page.locator('.el-dialog').filter({ has: page.locator('[data-test="report-submit"]') });
+      const dialog = reportDialog(page);
       await dialog.locator('[data-test="report-submit"]').click();
       // A skip needs its reason: nothing is queued without one.
       await dialog.getByText('say why the job was skipped').waitFor();

@@ -4,14 +4,12 @@
  * one done with a photo. The API then has it done, with the photo and the hours.
  */
 import path from 'node:path';
-import sharp from 'sharp';
 import { describe, expect, inject, test } from 'vitest';
 import { DEFAULT_TIME_ZONE, localToday, mondayOf } from '@swardwise/domain';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { browser, PHONE, reportDialog, shots, signIn, turfPhoto, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 const TALL = { width: 1366, height: 2400 };
-const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
 
 useBrowser();
 
@@ -65,14 +63,11 @@ describe('from the week plan to the crew’s phone', () => {
       for (const id of jobIds) await phone.locator(`[data-test="job-card"][data-order-id="${id}"]`).waitFor();
       const job = phone.locator(`[data-test="job-card"][data-order-id="${jobIds[0]}"]`);
       await job.locator('[data-test="job-done"]').click();
-      const dialog = phone.locator('.el-dialog').filter({ has: phone.locator('[data-test="report-submit"]') });
+      const dialog = reportDialog(phone);
       await dialog.waitFor();
       await dialog.locator('[data-test="report-hours"] input').fill('0.8');
       await dialog.locator('textarea').fill('Done before the rain');
-      const jpeg = await sharp({ create: { width: 2400, height: 1800, channels: 3, background: { r: 64, g: 128, b: 60 } } })
-        .jpeg()
-        .toBuffer();
-      await dialog.locator('[data-test="report-photos"]').setInputFiles({ name: 'field.jpg', mimeType: 'image/jpeg', buffer: jpeg });
+      await dialog.locator('[data-test="report-photos"]').setInputFiles(await turfPhoto('field.jpg', 2400, 1800));
       await dialog.locator('img[alt="field.jpg"]').waitFor();
       await dialog.locator('[data-test="report-submit"]').click();
       await job.and(phone.locator('[data-status="done"]')).waitFor();
