@@ -1,15 +1,11 @@
 /** The one audit writer: one entry or many, each stored without passwords, tokens or secrets. */
 import { desc } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
+import { describe, expect, test } from 'vitest';
 import { auditLog } from '../../apps/api/src/db/schema/index.ts';
 import { writeAudit, type AuditInput } from '../../apps/api/src/services/audit.ts';
+import { useEmptyDatabase } from '../support/app.ts';
 
-let database: Database;
-beforeAll(async () => {
-  database = await openDatabase({ pgliteDir: 'memory://' });
-});
-afterAll(() => database.close());
+const database = useEmptyDatabase();
 
 const entry = (entityId: number): AuditInput => ({
   actorId: null,

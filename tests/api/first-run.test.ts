@@ -10,13 +10,14 @@ import path from 'node:path';
 import { Writable } from 'node:stream';
 import { pino } from 'pino';
 import supertest from 'supertest';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig, repoRoot } from '../../apps/api/src/config.ts';
-import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
+import type { Database } from '../../apps/api/src/db/client.ts';
 import { districts, settings, users } from '../../apps/api/src/db/schema/index.ts';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { prepareInstallation, StartupError } from '../../apps/api/src/services/first-run.ts';
+import { useEmptyDatabase } from '../support/app.ts';
 
 /** A logger whose lines are kept, and a printer for the one-time link. */
 function capture() {
@@ -53,11 +54,7 @@ describe('demo mode setting', () => {
 });
 
 describe('a new production database', () => {
-  let database: Database;
-  beforeAll(async () => {
-    database = await openDatabase({ pgliteDir: 'memory://' });
-  });
-  afterAll(() => database.close());
+  const database = useEmptyDatabase();
 
   test('should refuse to start with neither the demo nor ADMIN_EMAIL, and write nothing', async () => {
     const { logger } = capture();
@@ -101,11 +98,7 @@ describe('a new production database', () => {
 });
 
 describe('a new production database with ADMIN_EMAIL alone', () => {
-  let database: Database;
-  beforeAll(async () => {
-    database = await openDatabase({ pgliteDir: 'memory://' });
-  });
-  afterAll(() => database.close());
+  const database = useEmptyDatabase();
 
   test('should print a one-time setup link (not into the log) that sets the administrator’s password', async () => {
     const { logger, lines, printed } = capture();
@@ -135,11 +128,7 @@ describe('a new production database with ADMIN_EMAIL alone', () => {
 });
 
 describe('demo mode', () => {
-  let database: Database;
-  beforeAll(async () => {
-    database = await openDatabase({ pgliteDir: 'memory://' });
-  });
-  afterAll(() => database.close());
+  const database = useEmptyDatabase();
 
   test('should seed the demo city, say so in the log and on the public config answer', async () => {
     const { logger, lines } = capture();

@@ -89,3 +89,13 @@ export function useTestApi(env: Record<string, string> = {}, options: { now?: ()
   afterAll(() => api.close());
   return api;
 }
+
+/** An empty in-memory database for the tests around the call (a file or a describe block): opened before them, closed after. */
+export function useEmptyDatabase(): Database {
+  const database = {} as Database;
+  beforeAll(async () => {
+    Object.assign(database, await openDatabase({ pgliteDir: 'memory://' }));
+  });
+  afterAll(() => database.close());
+  return database;
+}
