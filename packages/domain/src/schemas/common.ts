@@ -19,6 +19,9 @@ export const versionSchema = z
   .min(1, 'version must be at least 1')
   .max(PG_INTEGER_MAX, `version must be at most ${PG_INTEGER_MAX}`);
 
+/** The body of a change to an editable row: any of its `fields`, and the version the client read. */
+export const changeOf = <S extends z.ZodRawShape>(fields: S) => z.object(fields).partial().extend({ version: versionSchema });
+
 const position = z
   .tuple([z.number().min(-180).max(180), z.number().min(-90).max(90)], {
     error: 'each position must be [longitude, latitude] in degrees',

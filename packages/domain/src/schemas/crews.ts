@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { EQUIPMENT_KINDS, MOWER_KINDS } from '../vocabulary.ts';
 import { WEEKDAYS } from '../engine/dates.ts';
-import { idSchema, versionSchema } from './common.ts';
+import { changeOf, idSchema } from './common.ts';
 
 const crewFields = {
   districtId: idSchema,
@@ -18,7 +18,7 @@ const crewFields = {
 // Defaults belong to creation only: an update that leaves a key out leaves it as it is.
 export const createCrewSchema = z.object({ ...crewFields, members: crewFields.members.default([]), workDays: crewFields.workDays.default(['mon', 'tue', 'wed', 'thu', 'fri']) });
 export type CreateCrewInput = z.infer<typeof createCrewSchema>;
-export const updateCrewSchema = z.object(crewFields).partial().extend({ version: versionSchema });
+export const updateCrewSchema = changeOf(crewFields);
 export type UpdateCrewInput = z.infer<typeof updateCrewSchema>;
 
 const equipmentFields = {
@@ -80,9 +80,5 @@ function checkEquipment(v: EquipmentShape, ctx: z.RefinementCtx, partial: boolea
 
 export const createEquipmentSchema = z.object({ ...equipmentFields, ...equipmentDefaults }).superRefine((v, ctx) => checkEquipment(v, ctx, false));
 export type CreateEquipmentInput = z.infer<typeof createEquipmentSchema>;
-export const updateEquipmentSchema = z
-  .object(equipmentFields)
-  .partial()
-  .extend({ version: versionSchema })
-  .superRefine((v, ctx) => checkEquipment(v, ctx, true));
+export const updateEquipmentSchema = changeOf(equipmentFields).superRefine((v, ctx) => checkEquipment(v, ctx, true));
 export type UpdateEquipmentInput = z.infer<typeof updateEquipmentSchema>;

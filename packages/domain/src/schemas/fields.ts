@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { CLIPPINGS, FIELD_STATUSES, GRASSES, IRRIGATION_KINDS, LEVELS, ROOTZONES, SPORTS } from '../vocabulary.ts';
-import { idSchema, polygonSchema, versionSchema } from './common.ts';
+import { changeOf, idSchema, polygonSchema } from './common.ts';
 
 const oneOf = <T extends readonly [string, ...string[]]>(values: T, what: string) =>
   z.enum(values, { error: `${what} must be one of ${values.join(', ')}` });
@@ -34,8 +34,5 @@ export const createFieldSchema = z.object({
 });
 export type CreateFieldInput = z.infer<typeof createFieldSchema>;
 
-export const updateFieldSchema = z
-  .object(fieldFields)
-  .partial()
-  .extend({ version: versionSchema });
+export const updateFieldSchema = changeOf(fieldFields);
 export type UpdateFieldInput = z.infer<typeof updateFieldSchema>;

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { SITE_KINDS, SITE_OWNERS } from '../vocabulary.ts';
-import { idSchema, versionSchema } from './common.ts';
+import { changeOf, idSchema } from './common.ts';
 
 const siteFields = {
   districtId: idSchema,
@@ -17,8 +17,5 @@ const siteFields = {
 export const createSiteSchema = z.object({ ...siteFields, address: siteFields.address.default(''), notes: siteFields.notes.default('') });
 export type CreateSiteInput = z.infer<typeof createSiteSchema>;
 
-export const updateSiteSchema = z
-  .object(siteFields)
-  .partial()
-  .extend({ version: versionSchema });
+export const updateSiteSchema = changeOf(siteFields);
 export type UpdateSiteInput = z.infer<typeof updateSiteSchema>;

@@ -1,7 +1,7 @@
 /** Bodies and queries of the week plan, work orders, crew reports and field events. */
 import { z } from 'zod';
 import { FIELD_EVENT_KINDS, WORK_REPORTS, WORK_TASKS } from '../vocabulary.ts';
-import { idSchema, isoDateSchema as isoDate, isoDateTimeSchema, versionSchema } from './common.ts';
+import { changeOf, idSchema, isoDateSchema as isoDate, isoDateTimeSchema, versionSchema } from './common.ts';
 const hours = z.number({ error: 'hours must be a number' }).min(0, 'hours cannot be negative').max(24, 'more than 24 hours in a day is not possible');
 const plannedHours = z.number({ error: 'planned hours must be a number' }).positive('planned hours must be more than 0').max(24, 'more than 24 hours in a day is not possible');
 
@@ -30,17 +30,14 @@ export const createWorkOrderSchema = z.object({
 export type CreateWorkOrderInput = z.infer<typeof createWorkOrderSchema>;
 
 /** A foreman's change: assign, move, re-time. Any change pins the order against re-generation. */
-export const updateWorkOrderSchema = z
-  .object({
-    plannedDate: isoDate,
-    crewId: idSchema.nullable(),
-    equipmentId: idSchema.nullable(),
-    plannedHours,
-    notes: z.string().max(2000),
-    pinned: z.boolean(),
-  })
-  .partial()
-  .extend({ version: versionSchema });
+export const updateWorkOrderSchema = changeOf({
+  plannedDate: isoDate,
+  crewId: idSchema.nullable(),
+  equipmentId: idSchema.nullable(),
+  plannedHours,
+  notes: z.string().max(2000),
+  pinned: z.boolean(),
+});
 export type UpdateWorkOrderInput = z.infer<typeof updateWorkOrderSchema>;
 
 /** A crew's report from the field; `clientRef` makes a retried submission count once. */
@@ -72,7 +69,7 @@ const eventFields = {
 };
 export const createFieldEventSchema = z.object({ ...eventFields, startTime: eventFields.startTime.default(null), notes: eventFields.notes.default('') });
 export type CreateFieldEventInput = z.infer<typeof createFieldEventSchema>;
-export const updateFieldEventSchema = z.object(eventFields).partial().extend({ version: versionSchema });
+export const updateFieldEventSchema = changeOf(eventFields);
 export type UpdateFieldEventInput = z.infer<typeof updateFieldEventSchema>;
 
 export const dateRangeQuerySchema = z
