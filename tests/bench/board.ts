@@ -7,8 +7,6 @@
  * Needs a built portal (`npm run build`) for the browser part.
  * Run: node --import tsx tests/bench/board.ts
  */
-import fs from 'node:fs';
-import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { eq } from 'drizzle-orm';
 import { addDaysIso, WORK_TASKS } from '@swardwise/domain';
@@ -16,8 +14,7 @@ import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { crews, districts, fields, sites, users, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
-import { launchBrowser } from '../e2e/browser.ts';
-import { fmt, listenSignedIn, seeded, signedInPage } from './support.ts';
+import { fmt, listenSignedIn, portalPage, seeded } from './support.ts';
 
 const ORDERS = 500;
 const WEEK = '2026-06-15';
@@ -73,12 +70,9 @@ for (let i = 0; i < API_RUNS; i++) {
 console.log(`work orders on the board: ${ORDERS} (${district!.name}, week of ${WEEK}); answer ${(bytes / 1024).toFixed(0)} kB`);
 console.log(`GET /api/week-plans, ${API_RUNS} sequential: ${fmt(apiTimes)}`);
 
-const index = path.join(config.portalDist, 'index.html');
-if (!fs.existsSync(index)) {
-  console.log('browser part skipped: build the portal first (npm run build)');
-} else {
-  const browser = await launchBrowser();
-  const page = await signedInPage(browser, base, cookie, { width: 1366, height: 900 });
+const portal = await portalPage(config.portalDist, base, cookie, { width: 1366, height: 900 });
+if (portal) {
+  const { browser, page } = portal;
   const loadTimes: number[] = [];
   for (let i = 0; i < LOADS; i++) {
     await page.goto(`${base}/week?week=${WEEK}`);

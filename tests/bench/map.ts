@@ -6,15 +6,12 @@
  * Needs a built portal (`npm run build`) for the browser part.
  * Run: node --import tsx tests/bench/map.ts
  */
-import fs from 'node:fs';
-import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { addDaysIso } from '@swardwise/domain';
 import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { fieldChecks, fields, sites } from '../../apps/api/src/db/schema/index.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
-import { launchBrowser } from '../e2e/browser.ts';
-import { benchField, fmt, listenSignedIn, seeded, signedInPage } from './support.ts';
+import { benchField, fmt, listenSignedIn, portalPage, seeded } from './support.ts';
 
 const EXTRA_FIELDS = 3000;
 const RUNS = 40;
@@ -71,12 +68,9 @@ for (let i = 0; i < 5; i++) {
 }
 console.log(`GET /api/map after a write (rebuild), 5 runs: ${fmt(rebuild)}`);
 
-const index = path.join(config.portalDist, 'index.html');
-if (!fs.existsSync(index)) {
-  console.log('browser part skipped: build the portal first (npm run build)');
-} else {
-  const browser = await launchBrowser();
-  const page = await signedInPage(browser, base, cookie, { width: 1440, height: 900 });
+const portal = await portalPage(config.portalDist, base, cookie, { width: 1440, height: 900 });
+if (portal) {
+  const { browser, page } = portal;
   const pageTimes: number[] = [];
   for (let i = 0; i < 5; i++) {
     await page.goto(`${base}/map`);

@@ -1,11 +1,13 @@
 /**
  * What the benchmarks share: seeded invented data, percentiles, invented field rows placed
  * around real sites of the demo city, and the app listening on loopback with a signed-in
- * cookie. Not a benchmark itself (`run.ts` skips it).
+ * cookie, the built portal in chromium. Not a benchmark itself (`run.ts` skips it).
  */
+import fs from 'node:fs';
 import type { AddressInfo } from 'node:net';
+import path from 'node:path';
 import { pino } from 'pino';
-import type { Browser } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { GRASSES, SPORTS, longAxis, polygonAreaM2, type Level, type Polygon, type Role } from '@swardwise/domain';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
@@ -13,6 +15,7 @@ import type { Db } from '../../apps/api/src/db/client.ts';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { mulberry32, type Rng } from '../../apps/api/src/db/seed/prng.ts';
 import { createMailer } from '../../apps/api/src/mail/mailer.ts';
+import { launchBrowser } from '../e2e/browser.ts';
 
 /** A seeded generator and a pick from a list with it: the same invented data on every run. */
 export function seeded(seed: number): { rand: Rng; pick: <T>(xs: readonly T[]) => T } {
@@ -61,9 +64,14 @@ export async function listenSignedIn(db: Db, role: Role) {
   return { config, server, base, cookie };
 }
 
-/** A page of `browser` carrying the session cookie. */
-export async function signedInPage(browser: Browser, base: string, cookie: string, viewport: { width: number; height: number }) {
+/** The built portal in chromium, signed in with the cookie; null, and a note, when the portal is not built. */
+export async function portalPage(portalDist: string, base: string, cookie: string, viewport: { width: number; height: number }): Promise<{ browser: Browser; page: Page } | null> {
+  if (!fs.existsSync(path.join(portalDist, 'index.html'))) {
+    console.log('browser part skipped: build the portal first (npm run build)');
+    return null;
+  }
+  const browser = await launchBrowser();
   const context = await browser.newContext({ viewport });
   await context.addCookies([{ name: cookie.split('=')[0]!, value: cookie.slice(cookie.indexOf('=') + 1), url: base }]);
-  return context.newPage();
+  return { browser, page: await context.newPage() };
 }
