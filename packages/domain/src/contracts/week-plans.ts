@@ -1,5 +1,6 @@
 /** The week plan of a district: the board, what re-generating would change, confirming it. */
 import type { Weekday } from '../engine/dates.ts';
+import type { CrewDayLoad } from '../engine/weekgen.ts';
 import type { WorkTask } from '../vocabulary.ts';
 import type { Instant } from './common.ts';
 import type { WorkOrderRow } from './work-orders.ts';
@@ -11,20 +12,8 @@ export interface SiteStop {
   lng: number;
 }
 
-/** One crew's day: its hours against what the crew has, and the sites in driving order from the yard. */
-export interface CrewDay {
-  crewId: number;
-  date: string;
-  availableHours: number;
-  workHours: number;
-  driveKm: number;
-  driveHours: number;
-  loadUnloadHours: number;
-  totalHours: number;
-  overloaded: boolean;
-  route: SiteStop[];
-  orderIds: number[];
-}
+/** One crew's day: the engine's load of it (hours against what the crew has), with its sites in driving order from the yard. */
+export type CrewDay = Omit<CrewDayLoad, 'route'> & { route: SiteStop[] };
 
 export interface BoardCrew {
   id: number;
