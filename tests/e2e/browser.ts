@@ -10,7 +10,7 @@ import { afterAll, beforeAll, inject } from 'vitest';
 import type { Role } from '@swardwise/domain';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 
-export const CHROMIUM_ARGS = [
+const CHROMIUM_ARGS = [
   '--headless',
   '--no-sandbox',
   '--disable-gpu',

@@ -19,12 +19,12 @@ import {
   type UnitSystem,
 } from '@swardwise/domain';
 
-export const shown = (d: DisplayValue): string => `${d.value.toLocaleString('en-US')} ${d.unit}`;
+const shown = (d: DisplayValue): string => `${d.value.toLocaleString('en-US')} ${d.unit}`;
 const num = (v: number, digits: number) => v.toLocaleString('en-US', { maximumFractionDigits: digits });
 
 export const hocText = (mm: number, u: UnitSystem) => formatHocText(mm, u);
 export const depthText = (mm: number, u: UnitSystem) => shown(formatDepth(mm, u));
-export const areaText = (m2: number, u: UnitSystem) => shown(formatArea(m2, u));
+const areaText = (m2: number, u: UnitSystem) => shown(formatArea(m2, u));
 export const lengthText = (m: number, u: UnitSystem) => shown(formatLength(m, u));
 export const volumeText = (l: number, u: UnitSystem) => shown(formatVolume(l, u));
 export const massText = (kg: number, u: UnitSystem) => shown(formatMass(kg, u));

@@ -35,12 +35,12 @@ const round = (v: number, digits: number) => Math.round(v * 10 ** digits) / 10 *
 const map = (v: number | null, f: (x: number) => number) => (v === null || v === undefined ? null : f(v));
 
 export const widthToShown = (m: number, u: UnitSystem) => (u === 'imperial' ? round((m * 1000) / MM_PER_INCH, 0) : round(m, 2));
-export const widthToM = (v: number, u: UnitSystem) => (u === 'imperial' ? round((v * MM_PER_INCH) / 1000, 4) : v);
+const widthToM = (v: number, u: UnitSystem) => (u === 'imperial' ? round((v * MM_PER_INCH) / 1000, 4) : v);
 export const speedToShown = (kmh: number, u: UnitSystem) => (u === 'imperial' ? round(kmh / KM_PER_MILE, 1) : round(kmh, 1));
-export const speedToKmh = (v: number, u: UnitSystem) => (u === 'imperial' ? round(v * KM_PER_MILE, 3) : v);
+const speedToKmh = (v: number, u: UnitSystem) => (u === 'imperial' ? round(v * KM_PER_MILE, 3) : v);
 // Inches to 0.001 so eighths stay exact (1⅜ in = 34.925 mm).
-export const hocToShown = (mm: number, u: UnitSystem) => (u === 'imperial' ? round(mm / MM_PER_INCH, 3) : round(mm, 0));
-export const hocToMmOf = (v: number, u: UnitSystem) => (u === 'imperial' ? round(v * MM_PER_INCH, 3) : v);
+const hocToShown = (mm: number, u: UnitSystem) => (u === 'imperial' ? round(mm / MM_PER_INCH, 3) : round(mm, 0));
+const hocToMmOf = (v: number, u: UnitSystem) => (u === 'imperial' ? round(v * MM_PER_INCH, 3) : v);
 /** A mower setting as text: inches to the eighth ("1⅜") or whole millimetres. */
 export const hocToText = (mm: number, u: UnitSystem) => (u === 'imperial' ? inchesToEighthsText(mm / MM_PER_INCH) : String(Math.round(mm)));
 
