@@ -173,6 +173,9 @@ describe('crews, equipment, weather and bookings pages', () => {
       await page.locator('[data-test="new-booking"]').click();
       const dialog = page.locator('[data-test="booking-dialog"]');
       await dialog.waitFor();
+      // The dialog fits the phone's screen: nothing to scroll sideways to reach its fields or buttons.
+      expect((await dialog.boundingBox())!.width).toBeLessThanOrEqual(390);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
       await dialog.locator('[data-test="booking-title"] input, input[data-test="booking-title"]').first().fill('Kestrel Hill JV v Copperbeech');
       await dialog.locator('[data-test="booking-submit"]').click();
       await dialog.waitFor({ state: 'hidden' });
