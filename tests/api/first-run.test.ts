@@ -165,7 +165,7 @@ describe('the server process', () => {
       child.stdout.on('data', (d) => (output += d));
       child.stderr.on('data', (d) => (output += d));
       // A server that starts instead of refusing is stopped, so the check fails rather than hangs.
-      const guard = setTimeout(() => child.kill('SIGKILL'), 45_000);
+      const guard = setTimeout(() => child.kill('SIGKILL'), 150_000);
       const code = await new Promise<number | null>((resolve) => child.on('exit', resolve));
       clearTimeout(guard);
       expect(code).toBe(1);
@@ -174,5 +174,5 @@ describe('the server process', () => {
     } finally {
       fs.rmSync(dir, { recursive: true, force: true });
     }
-  }, 60_000);
+  }, 180_000);
 });
