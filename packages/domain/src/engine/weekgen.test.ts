@@ -386,7 +386,7 @@ describe('lines for a booking', () => {
   const crew = [{ id: 1, hoursPerDay: 8, workDays: allDays }];
   const place = (orders: AskedOrder[], notBefore?: string, weekStart = WEEK) =>
     assignWeek({ weekStart, orders, crews: crew, sites: new Map([[10, { lat: 38, lng: -77 }]]), yard: { lat: 38, lng: -77 }, travel: DEFAULT_PARAMETERS.travel, ...(notBefore ? { notBefore } : {}) }).orders;
-  const paintsOf = (orders: readonly { task: string }[]) => orders.filter((o) => o.task === 'paint_lines');
+  const paintsOf = <T extends { task: string }>(orders: readonly T[]): T[] => orders.filter((o) => o.task === 'paint_lines');
   const monday = { id: 7, startsOn: '2026-06-08', title: 'Cup final' };
 
   test('should paint a booking once however often the week is generated, and not again the week after', () => {

@@ -584,6 +584,8 @@ export interface AssignInput {
   crews: readonly PlanCrewInput[];
   /** Hours already on each crew-day from kept orders: key `${crewId}|${date}`. */
   keptHours?: ReadonlyMap<string, number>;
+  /** Crew-days cancelled (a rain-out), key `${crewId}|${date}`: no work goes on them. */
+  closed?: ReadonlySet<string>;
   /** Sites of the kept orders on each crew-day (one entry per order), for the day's load/unload and drive. */
   keptSites?: ReadonlyMap<string, readonly number[]>;
   /** The crew that last worked each site (keeps sites with the crew that knows them). */
@@ -612,10 +614,12 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
   const dates = open.length ? open : week.slice(6);
   const warnings: WeekWarning[] = [];
   const crews = [...input.crews].filter((c) => c.workDays.length > 0).sort((a, b) => a.id - b.id);
-  const crewOfSite = crewsForSites(input, crews, dates);
+  const closed = input.closed ?? new Set<string>();
+  const crewOfSite = crewsForSites(input, crews, dates.filter((d) => crews.some((c) => !closed.has(`${c.id}|${d}`))));
   if (crews.length === 0 && input.orders.length > 0) warnings.push({ code: 'no_crew' });
+  const openDay = (c: PlanCrewInput, d: string) => !closed.has(`${c.id}|${d}`);
   const spread = (o: AskedOrder) => o.flexible && crews.length > 0;
-  const scheduled = input.orders.filter((o) => !spread(o)).map((o) => scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings));
+  const scheduled = input.orders.filter((o) => !spread(o)).map((o) => scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings, openDay));
   const ledger = crewDayLedger(input);
   for (const s of scheduled) ledger.place(s);
   const lastOf = (o: AskedOrder) => o.latestDate ?? (dates[dates.length - 1] as string);
@@ -624,7 +628,7 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
     .sort((a, b) => (lastOf(a) < lastOf(b) ? -1 : lastOf(a) > lastOf(b) ? 1 : 0) || b.plannedHours - a.plannedHours || a.siteId - b.siteId || a.fieldId - b.fieldId || (a.task < b.task ? -1 : a.task > b.task ? 1 : 0));
   const today = input.notBefore && dates[0] === input.notBefore ? input.notBefore : null;
   for (const o of flexible) {
-    const s = spreadOrder(o, { crews, dates, today, siteCrew: crewOfSite.get(o.siteId) ?? null, ledger }) ?? scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings);
+    const s = spreadOrder(o, { crews, dates, today, siteCrew: crewOfSite.get(o.siteId) ?? null, ledger, open: openDay }) ?? scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings, openDay);
     ledger.place(s);
     scheduled.push(s);
   }
@@ -641,7 +645,7 @@ const PAINT_EARLY_PENALTY = 0.3;
 /** The crew-day in the order's window with the most room after it; null when no crew works a day of the window. */
 function spreadOrder(
   o: AskedOrder,
-  env: { crews: readonly PlanCrewInput[]; dates: readonly string[]; today: string | null; siteCrew: PlanCrewInput | null; ledger: ReturnType<typeof crewDayLedger> },
+  env: { crews: readonly PlanCrewInput[]; dates: readonly string[]; today: string | null; siteCrew: PlanCrewInput | null; ledger: ReturnType<typeof crewDayLedger>; open: (c: PlanCrewInput, d: string) => boolean },
 ): ScheduledOrder | null {
   const latest = o.latestDate ?? (env.dates[env.dates.length - 1] as string);
   const earliest = o.earliestDate && o.earliestDate > (env.dates[0] as string) ? o.earliestDate : (env.dates[0] as string);
@@ -650,7 +654,7 @@ function spreadOrder(
   for (const date of env.dates) {
     if (date < earliest || date > latest) continue;
     for (const c of env.crews) {
-      if (!c.workDays.includes(weekdayOf(date))) continue;
+      if (!c.workDays.includes(weekdayOf(date)) || !env.open(c, date)) continue;
       const after = env.ledger.hoursWith(c.id, date, o.siteId, o.plannedHours);
       const share = after / Math.max(1e-9, c.hoursPerDay);
       const fits = after <= c.hoursPerDay + 1e-9;
@@ -709,10 +713,10 @@ function crewsForSites(input: AssignInput, crews: readonly PlanCrewInput[], date
 }
 
 /** The crew's latest working day in [asked, latest], else on or before latest, else the first after (noted as a missed due date). */
-function scheduleOrder(o: AskedOrder, crew: PlanCrewInput | null, dates: readonly string[], warnings: WeekWarning[]): ScheduledOrder {
+function scheduleOrder(o: AskedOrder, crew: PlanCrewInput | null, dates: readonly string[], warnings: WeekWarning[], open: (c: PlanCrewInput, d: string) => boolean = () => true): ScheduledOrder {
   let date = o.askedDate;
   if (crew) {
-    const works = (d: string) => crew.workDays.includes(weekdayOf(d));
+    const works = (d: string) => crew.workDays.includes(weekdayOf(d)) && open(crew, d);
     const latest = o.latestDate ?? o.askedDate;
     const onOrBefore = dates.filter((d) => d <= latest && d >= o.askedDate && works(d)).pop() ?? dates.filter((d) => d <= latest && works(d)).pop();
     const after = dates.find((d) => d > latest && works(d));

@@ -2,7 +2,7 @@
 import { and, asc, eq, gte, inArray, lt, lte, max, ne, sql } from 'drizzle-orm';
 import { errors, addDaysIso, MOWER_KINDS, type Level, type PlanEquipment, type PlanField, type PlanMower } from '@swardwise/domain';
 import type { Queryable } from '../../db/client.ts';
-import { crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, workOrders } from '../../db/schema/index.ts';
+import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, workOrders } from '../../db/schema/index.ts';
 import { workOrderRows, type WorkOrderRow } from '../work-orders.ts';
 
 export interface GenerationInput {
@@ -172,4 +172,19 @@ export async function siteCrewHints(db: Queryable, q: GenerationInput, weekEnd: 
     }
   }
   return siteCrewHint;
+}
+
+/** The crew-days of the week a rain-out cancelled (`${crewId}|${date}`; a district's rain-out closes every crew's day). */
+export async function rainedOutDays(db: Queryable, q: GenerationInput, crewIds: readonly number[]): Promise<Set<string>> {
+  const rows = await db
+    .select({ after: auditLog.after })
+    .from(auditLog)
+    .where(and(eq(auditLog.entity, 'rain_out'), eq(auditLog.districtId, q.districtId), sql`${auditLog.after}->>'date' between ${q.weekStart} and ${addDaysIso(q.weekStart, 6)}`));
+  const out = new Set<string>();
+  for (const r of rows) {
+    const a = r.after as { date?: unknown; crewId?: unknown } | null;
+    if (typeof a?.date !== 'string') continue;
+    for (const id of typeof a.crewId === 'number' ? [a.crewId] : crewIds) out.add(`${id}|${a.date}`);
+  }
+  return out;
 }

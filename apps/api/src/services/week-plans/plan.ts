@@ -17,7 +17,7 @@ import {
 import type { Queryable } from '../../db/client.ts';
 import { loadParameters, loadStandards } from '../standards.ts';
 import { planningWeather } from '../stations.ts';
-import { districtCrews, districtRow, planEquipment, planFields, siteCrewHints, type ExistingRow, type GenerationInput } from './load.ts';
+import { districtCrews, districtRow, planEquipment, planFields, rainedOutDays, siteCrewHints, type ExistingRow, type GenerationInput } from './load.ts';
 
 interface AskInput {
   q: GenerationInput;
@@ -82,6 +82,7 @@ export async function planDistrictWeek(db: Queryable, q: GenerationInput, existi
     crews: crewRows.map((c) => ({ id: c.id, hoursPerDay: c.hoursPerDay, workDays: c.workDays })),
     keptHours,
     keptSites,
+    closed: await rainedOutDays(db, q, crewRows.map((c) => c.id)),
     siteCrewHint: await siteCrewHints(db, q, weekEnd),
     equipment: units.equipment,
     sites: new Map(fieldRows.map((f) => [f.siteId, { lat: f.siteLat, lng: f.siteLng }])),
