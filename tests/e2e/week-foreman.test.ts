@@ -165,6 +165,8 @@ describe('work by hand on the board', () => {
         await phone.screenshot({ path: path.join(shots, 'week-manual-rain-out-phone.png') });
         await phone.locator('[data-test="rain-out"]').click();
         await phone.locator('[data-test="rain-out-dialog"]').waitFor();
+        // The dialog fades in.
+        await phone.waitForTimeout(500);
         await phone.screenshot({ path: path.join(shots, 'week-rain-out-dialog-phone.png') });
       } finally {
         await phone.close();
