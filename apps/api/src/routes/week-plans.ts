@@ -1,9 +1,9 @@
 import { Router } from 'express';
-import { generateWeekSchema, idSchema, weekQuerySchema } from '@swardwise/domain';
+import { generateWeekSchema, idSchema, rainOutSchema, weekQuerySchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { confirmWeek, generateWeek, getWeekBoard } from '../services/week-plans.ts';
+import { confirmWeek, generateWeek, getWeekBoard, rainOut } from '../services/week-plans.ts';
 import { writeDeps } from './work-orders.ts';
 
 export const confirmSchema = weekQuerySchema.extend({ crewId: idSchema.optional() });
@@ -19,6 +19,9 @@ export function weekPlansRouter(deps: AppDeps): Router {
   });
   router.post('/confirm', async (req, res) => {
     res.json(await confirmWeek(ctxOf(db, req), parse(confirmSchema, req.body, 'body'), writeDeps(deps)));
+  });
+  router.post('/rain-out', async (req, res) => {
+    res.json(await rainOut(ctxOf(db, req), parse(rainOutSchema, req.body, 'body')));
   });
   return router;
 }

@@ -4,9 +4,9 @@
  * run, the bulk write and the crews' mail live in `week-plans/`.
  */
 import { and, desc, eq, gte, inArray, lte, sql } from 'drizzle-orm';
-import { errors, crewDayLoads, reconcileWeek, weekDates, type ConfirmAnswer, type DiffItem, type GenerateAnswer, type GenerateWeekInput, type WeekBoard, type WeekQuery, type WorkTask } from '@swardwise/domain';
+import { errors, crewDayLoads, mondayOf, reconcileWeek, weekDates, type ConfirmAnswer, type DiffItem, type GenerateAnswer, type GenerateWeekInput, type RainOutAnswer, type RainOutInput, type WeekBoard, type WeekQuery, type WorkTask } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
-import { auditLog, fields, sites, workOrders } from '../db/schema/index.ts';
+import { auditLog, crews, fields, sites, workOrders } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, type Ctx } from './context.ts';
 import { loadParameters } from './standards.ts';
@@ -138,4 +138,41 @@ export async function confirmWeek(ctx: Ctx, q: WeekQuery & { crewId?: number | u
   });
   const emailed = await mailNewWork(ctx.db, changed.map((a) => a.id), deps, ctx.actorName);
   return { assigned: changed.length, emailed, board: await getWeekBoard(ctx, q) };
+}
+
+/**
+ * A rain-out: the day's open work (planned, assigned or started) of one crew, or of every crew
+ * of the district, is cancelled with a reason. Each order becomes skipped and pinned with the
+ * reason in its details (the crew's Today shows it), every change is audited, and one
+ * `rain_out` entry records the day, so generating the week again puts no work on it and asks
+ * the cancelled work again on the next working days.
+ */
+export async function rainOut(ctx: Ctx, input: RainOutInput): Promise<RainOutAnswer<Date>> {
+  authorize(ctx, 'update', 'WorkOrder', { districtId: input.districtId });
+  await districtRow(ctx.db, input.districtId);
+  if (input.crewId !== null) {
+    const [c] = await ctx.db.select({ districtId: crews.districtId }).from(crews).where(eq(crews.id, input.crewId));
+    if (!c) throw errors.noSuch('crew', 'body.crewId');
+    if (c.districtId !== input.districtId) throw errors.invalid('This crew works in another district', [{ path: 'body.crewId', message: 'this crew works in another district' }]);
+  }
+  const cancelled = { reason: input.reason, by: ctx.actorName, on: ctx.clock.today() };
+  const changed = await (ctx.db as Db).transaction(async (tx) => {
+    const conditions = [eq(workOrders.districtId, input.districtId), eq(workOrders.plannedDate, input.date), inArray(workOrders.status, ['planned', 'assigned', 'started'])];
+    if (input.crewId !== null) conditions.push(eq(workOrders.crewId, input.crewId));
+    const before = await tx.select().from(workOrders).where(and(...conditions));
+    const after = before.length
+      ? await tx
+          .update(workOrders)
+          .set({ status: 'skipped', pinned: true, details: sql`${workOrders.details} || ${JSON.stringify({ cancelled })}::jsonb`, version: sql`${workOrders.version} + 1`, updatedAt: new Date() })
+          .where(inArray(workOrders.id, before.map((b) => b.id)))
+          .returning()
+      : [];
+    const byId = new Map(before.map((b) => [b.id, b]));
+    await writeAudit(tx, [
+      ...after.map((a) => ({ actorId: ctx.actor.id, action: 'update' as const, entity: 'work_order', entityId: a.id, districtId: a.districtId, before: byId.get(a.id) ?? null, after: a })),
+      { actorId: ctx.actor.id, action: 'create' as const, entity: 'rain_out', entityId: null, districtId: input.districtId, before: null, after: { date: input.date, crewId: input.crewId, reason: input.reason, orderIds: after.map((a) => a.id) } },
+    ]);
+    return after;
+  });
+  return { cancelled: changed.length, board: await getWeekBoard(ctx, { districtId: input.districtId, weekStart: mondayOf(input.date) }) };
 }

@@ -1,4 +1,4 @@
-import type { ConfirmAnswer, GenerateAnswer, WeekBoard } from '@swardwise/domain';
+import type { ConfirmAnswer, GenerateAnswer, RainOutAnswer, RainOutInput, WeekBoard } from '@swardwise/domain';
 import { api } from './client.ts';
 
 export function getWeekBoard(query: { districtId: number; weekStart: string }, signal?: AbortSignal): Promise<WeekBoard> {
@@ -16,4 +16,9 @@ export function generateWeek(body: { districtId: number; weekStart: string; dryR
  */
 export function confirmWeek(body: { districtId: number; weekStart: string; crewId?: number }): Promise<ConfirmAnswer> {
   return api.post<ConfirmAnswer>('/week-plans/confirm', body);
+}
+
+/** Cancels a day's open work of one crew (or every crew of the district) with the reason the crews see. */
+export function rainOut(body: RainOutInput): Promise<RainOutAnswer> {
+  return api.post<RainOutAnswer>('/week-plans/rain-out', body);
 }

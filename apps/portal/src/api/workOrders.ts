@@ -1,4 +1,5 @@
 import type {
+  CreateWorkOrderInput,
   PhotoAnswer,
   ReportAnswer,
   UpdateWorkOrderInput,
@@ -34,4 +35,9 @@ export function uploadWorkPhoto(orderId: number, photo: Blob, name: string, clie
   form.append('clientRef', clientRef);
   form.append('photo', photo, name);
   return api.upload<PhotoAnswer>(`/work-orders/${orderId}/photos`, form);
+}
+
+/** A one-off job added by hand: it stays as entered when the week is generated again. */
+export function createWorkOrder(body: CreateWorkOrderInput): Promise<WorkOrderWriteAnswer> {
+  return api.post<WorkOrderWriteAnswer>('/work-orders', body);
 }

@@ -72,6 +72,12 @@ export interface GenerateAnswer<At extends Instant = string> {
 }
 
 /** `POST /api/week-plans/confirm`: orders assigned, crew leads e-mailed, and the board after. */
+/** `POST /api/week-plans/rain-out`: how many orders were cancelled, and the board after it. */
+export interface RainOutAnswer<At extends Instant = string> {
+  cancelled: number;
+  board: WeekBoard<At>;
+}
+
 export interface ConfirmAnswer<At extends Instant = string> {
   assigned: number;
   emailed: number;

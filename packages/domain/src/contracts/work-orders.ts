@@ -16,6 +16,8 @@ export type WorkOrderDetails = {
   paintL?: number;
   eventTitle?: string;
   eventOn?: string;
+  /** Set when a rain-out cancelled the order: the reason the crew sees, and who cancelled it on which day. */
+  cancelled?: { reason: string; by: string; on: string };
 } & Record<string, unknown>;
 
 /** A work order: a row of `GET /api/work-orders`, of the week board, and the order of every write. */

@@ -17,7 +17,7 @@ describe('weekWarningText', () => {
     expect(weekWarningText({ code: 'mowing_assumed', fieldId: 1, date: '2026-05-19' })).toMatch(/\(2026-05-19\) is after this week began/);
   });
 
-  test('should pass only weather warnings from a field up to the district week', () => {
-    expect([...DISTRICT_WEEK_WARNINGS].sort()).toEqual(['no_weather_before_week', 'weather_projected']);
+  test('should pass the weather warnings and lines painted on a booking\'s day from a field up to the district week', () => {
+    expect([...DISTRICT_WEEK_WARNINGS].sort()).toEqual(['no_weather_before_week', 'paint_on_event_day', 'weather_projected']);
   });
 });

@@ -20,10 +20,12 @@ export type WeekWarning =
   /** No crew of the district has working days. */
   | { code: 'no_crew' }
   /** A task on a field lands after its latest date (`date`): the crew works no day before it. */
-  | { code: 'due_date_missed'; fieldId: number; date: string; task: WorkTask };
+  | { code: 'due_date_missed'; fieldId: number; date: string; task: WorkTask }
+  /** No working day is left before the booking on `date`: its lines are painted on the day itself. */
+  | { code: 'paint_on_event_day'; fieldId: number; date: string; eventTitle: string };
 
 /** The warnings a district's week shows from its fields' plans (the others explain one field only). */
-export const DISTRICT_WEEK_WARNINGS: ReadonlySet<WeekWarning['code']> = new Set(['no_weather_before_week', 'weather_projected']);
+export const DISTRICT_WEEK_WARNINGS: ReadonlySet<WeekWarning['code']> = new Set(['no_weather_before_week', 'weather_projected', 'paint_on_event_day']);
 
 /**
  * The plain-language sentence of a warning, as the district week shows it. `fieldName` names
@@ -50,5 +52,7 @@ export function weekWarningText(w: WeekWarning, fieldName: (id: number) => strin
       return 'No crew with working days in this district: every order is left unassigned.';
     case 'due_date_missed':
       return `${w.task === 'mow' ? 'Mowing' : 'Work'} on ${name(w.fieldId)} falls after ${w.date}: no working day of the crew before it.`;
+    case 'paint_on_event_day':
+      return `Lines on ${name(w.fieldId)} for ${w.eventTitle} are painted on the day itself (${w.date}): no working day is left before it. Paint early and keep players off until the paint is dry.`;
   }
 }

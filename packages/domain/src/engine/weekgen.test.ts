@@ -5,6 +5,7 @@ import type { DailyWeather } from './outlook.ts';
 import { simulateMowing } from './mowing.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor } from './standards.ts';
 import { assignWeek, crewDayLoads, isKept, planFieldWeek, reconcileWeek, weekDates } from './weekgen.ts';
+import type { AskedOrder, KeptOrder } from './weekgen.ts';
 import type { ExistingOrder, PlanField } from './weekgen.ts';
 import { weekWarningText } from './week-warnings.ts';
 import type { Polygon } from '../schemas/common.ts';
@@ -165,7 +166,7 @@ describe('planFieldWeek', () => {
     const plan = planFieldWeek({ field: field({ events, lastPaintedOn: '2026-05-30' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
     const paints = plan.orders.filter((o) => o.task === 'paint_lines');
     expect(paints.map((p) => p.askedDate)).toEqual(['2026-06-03']);
-    expect(paints[0]?.latestDate).toBe('2026-06-04');
+    expect(paints[0]?.latestDate).toBe('2026-06-03');
     expect(paints[0]?.details.paintL).toBeGreaterThan(0);
   });
 
@@ -378,5 +379,80 @@ describe('a week already under way', () => {
       notBefore: '2026-06-03',
     });
     expect(orders.every((o) => o.plannedDate >= '2026-06-03')).toBe(true);
+  });
+});
+
+describe('lines for a booking', () => {
+  const crew = [{ id: 1, hoursPerDay: 8, workDays: allDays }];
+  const place = (orders: AskedOrder[], notBefore?: string, weekStart = WEEK) =>
+    assignWeek({ weekStart, orders, crews: crew, sites: new Map([[10, { lat: 38, lng: -77 }]]), yard: { lat: 38, lng: -77 }, travel: DEFAULT_PARAMETERS.travel, ...(notBefore ? { notBefore } : {}) }).orders;
+  const paintsOf = <T extends { task: string }>(orders: readonly T[]): T[] => orders.filter((o) => o.task === 'paint_lines');
+  const monday = { id: 7, startsOn: '2026-06-08', title: 'Cup final' };
+
+  test('should paint a booking once however often the week is generated, and not again the week after', () => {
+    const f = field({ events: [monday], lastPaintedOn: '2026-05-30' });
+    // First generation: Monday's booking is painted on the Friday before it.
+    const first = place(planFieldWeek({ field: f, weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders);
+    const painted = paintsOf(first);
+    expect(painted.map((p) => p.plannedDate)).toEqual(['2026-06-05']);
+    // Applied and confirmed: the painting is kept (assigned, pinned); generating again asks none.
+    const kept: KeptOrder[] = [{ id: 40, fieldId: 1, task: 'paint_lines', plannedDate: '2026-06-05', status: 'assigned', details: painted[0]!.details }];
+    expect(paintsOf(planFieldWeek({ field: f, weather: WARM, weekStart: WEEK, kept, workDays: allDays }).orders)).toEqual([]);
+    // The next week holds the booking's day: last week's painting serves it, and the repaint interval (10 days) is not up.
+    const next = planFieldWeek({ field: { ...f, paints: [{ date: '2026-06-05', eventId: 7 }] }, weather: WARM, weekStart: '2026-06-08', kept: [], workDays: allDays });
+    expect(paintsOf(next.orders)).toEqual([]);
+    // Two weeks on, the repaint interval asks for lines again (5 June + 10 days = 15 June).
+    const later = planFieldWeek({ field: { ...f, events: [], paints: [{ date: '2026-06-05', eventId: 7 }] }, weather: WARM, weekStart: '2026-06-15', kept: [], workDays: allDays });
+    expect(paintsOf(later.orders).map((o) => o.askedDate)).toEqual(['2026-06-15']);
+  });
+
+  test('should paint on the last working day before the booking, not on its day', () => {
+    const friday = planFieldWeek({ field: field({ events: [{ id: 1, startsOn: '2026-06-05', title: 'Friday game' }], lastPaintedOn: '2026-05-30' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    expect(paintsOf(place(friday.orders)).map((o) => o.plannedDate)).toEqual(['2026-06-04']);
+    const tuesday = planFieldWeek({ field: field({ events: [{ id: 2, startsOn: '2026-06-02', title: 'Tuesday game' }], lastPaintedOn: '2026-05-30' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays });
+    expect(paintsOf(place(tuesday.orders)).map((o) => o.plannedDate)).toEqual(['2026-06-01']);
+    expect(tuesday.warnings.map((w) => w.code)).not.toContain('paint_on_event_day');
+  });
+
+  test('should paint on the day itself only when no working day is left before it, and say so', () => {
+    // Generated on the Tuesday of the game: Monday is past.
+    const late = planFieldWeek({ field: field({ events: [{ id: 2, startsOn: '2026-06-02', title: 'Tuesday game' }], lastPaintedOn: '2026-05-30' }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays, notBefore: '2026-06-02' });
+    expect(paintsOf(place(late.orders, '2026-06-02')).map((o) => o.plannedDate)).toEqual(['2026-06-02']);
+    const warning = late.warnings.find((w) => w.code === 'paint_on_event_day');
+    expect(warning).toEqual({ code: 'paint_on_event_day', fieldId: 1, date: '2026-06-02', eventTitle: 'Tuesday game' });
+    expect(weekWarningText(warning!, () => 'Field A')).toMatch(/Field A.*Tuesday game.*on the day itself/);
+  });
+});
+
+describe('spreading work with slack', () => {
+  test('should spread a district\'s overdue field checks over crews and days within their hours, none on today', () => {
+    // Generated on Wednesday afternoon: two crews that know the sites, and a new crew with free hours.
+    const today = '2026-06-03';
+    const sites = new Map<number, { lat: number; lng: number }>([
+      [10, { lat: 38.01, lng: -77 }],
+      [11, { lat: 38.02, lng: -77.01 }],
+      [12, { lat: 38.0, lng: -77.03 }],
+    ]);
+    const crews = [
+      { id: 1, hoursPerDay: 8, workDays: allDays },
+      { id: 2, hoursPerDay: 8, workDays: allDays },
+      { id: 3, hoursPerDay: 8, workDays: allDays },
+    ];
+    const orders: AskedOrder[] = [];
+    for (let i = 0; i < 17; i++) {
+      const f = field({ id: 100 + i, siteId: 10 + (i % 3), lastCheckedOn: null, events: [] });
+      orders.push(...planFieldWeek({ field: f, weather: WARM, weekStart: WEEK, kept: [], workDays: allDays, notBefore: today }).orders.filter((o) => o.task === 'field_check'));
+    }
+    // Today's mowing already fills most of crew 1's day.
+    orders.push({ fieldId: 1, siteId: 10, task: 'mow', askedDate: today, plannedHours: 6, reason: '', details: {}, latestDate: today, flexible: false, equipmentKind: 'mower' });
+    expect(orders.filter((o) => o.task === 'field_check')).toHaveLength(17);
+    const hint = new Map([[10, 1], [11, 1], [12, 2]]);
+    const { orders: placed } = assignWeek({ weekStart: WEEK, orders, crews, siteCrewHint: hint, sites, yard: { lat: 38, lng: -77 }, travel: DEFAULT_PARAMETERS.travel, notBefore: today });
+    const checks = placed.filter((o) => o.task === 'field_check');
+    expect(checks.filter((o) => o.plannedDate === today)).toEqual([]);
+    expect(new Set(checks.map((o) => o.plannedDate)).size).toBeGreaterThanOrEqual(2);
+    expect(checks.some((o) => o.crewId === 3)).toBe(true);
+    const loads = crewDayLoads(placed.map((o, i) => ({ ...o, id: i + 1 })), crews, sites, { lat: 38, lng: -77 }, DEFAULT_PARAMETERS.travel, WEEK);
+    expect(loads.filter((l) => l.overloaded)).toEqual([]);
   });
 });

@@ -23,7 +23,7 @@ import { fail } from './check.ts';
 import { WEEKDAYS, addDaysIso, isoToDayNumber, monthOf, weekdayOf } from './dates.ts';
 import type { Weekday } from './dates.ts';
 import { annualNitrogen, monthlyNSplitByGp, planNApplications, productForArea } from './feed.ts';
-import { hoursPerMowing, hoursPerMowingPolygon, stripePassPlan } from './labour.ts';
+import { greatCircleKm, hoursPerMowing, hoursPerMowingPolygon, stripePassPlan } from './labour.ts';
 import type { LatLng, TravelSettings } from './labour.ts';
 import { defaultTemplateFor, linePlan } from './lines.ts';
 import { longAxis } from '../geometry.ts';
@@ -55,6 +55,12 @@ export interface PlanField {
   lastCheckedOn: string | null;
   /** Bookings from the week's Monday to the next Monday. */
   events: ReadonlyArray<{ id: number; startsOn: string; title: string }>;
+  /**
+   * Paintings planned or done in the weeks before this one (not skipped), with the booking
+   * each was for: a booking painted last week is not painted again, and the repaint interval
+   * counts from them.
+   */
+  paints?: ReadonlyArray<{ date: string; eventId: number | null }>;
 }
 
 /** An order that stays as people left it; it counts as work already planned or done. */
@@ -64,6 +70,8 @@ export interface KeptOrder {
   task: WorkTask;
   plannedDate: string;
   status: WorkStatus;
+  /** The engine's details it was planned with (a painting's `eventId`). */
+  details?: Record<string, unknown> | null;
 }
 
 /** A mower the district has (for hours and HOC fit); the department default stands in when none fits. */
@@ -88,9 +96,11 @@ export interface AskedOrder {
   plannedHours: number;
   reason: string;
   details: Record<string, unknown>;
-  /** Date by which it must be done (mowing: the one-third rule; lines: the booking). */
+  /** Date by which it must be done (mowing: the one-third rule; lines: the last working day before the booking); null: by the week's end. */
   latestDate: string | null;
-  /** An order the crews may move within the week to balance days. */
+  /** First day a flexible order may go on (default: the first open day of the week). */
+  earliestDate?: string;
+  /** An order that may go on any working day from `earliestDate` to `latestDate`, to spread the work over crews and days. */
   flexible: boolean;
   /** Equipment kind the order needs, to suggest a unit. */
   equipmentKind: 'mower' | 'line_marker' | 'spreader' | null;
@@ -341,16 +351,41 @@ function askedCuts(ctx: FieldWeekContext, growth: number[], hocMm: number): Aske
   return asked;
 }
 
-/** Lines: before bookings, and every repaint interval while the turf grows. */
+/** The paint orders a kept or recorded order names a booking with (`details.eventId`). */
+function eventIdOf(o: { details?: Record<string, unknown> | null }): number | null {
+  const id = o.details?.eventId;
+  return typeof id === 'number' ? id : null;
+}
+
+/**
+ * The day lines go on for a booking: the last working day of the district before it, on or
+ * after `start`; the booking's own day only when no earlier day is left (`onEventDay`).
+ * Looks back at most a week: a booking after a longer break is painted on its last working day.
+ */
+export function paintDayFor(eventOn: string, start: string, workDays: readonly Weekday[]): { date: string; onEventDay: boolean } {
+  const days = workDays.length ? workDays : WEEKDAYS;
+  for (let k = 1; k <= 7; k++) {
+    const d = addDaysIso(eventOn, -k);
+    if (d < start) break;
+    if (days.includes(weekdayOf(d))) return { date: d, onEventDay: false };
+  }
+  return { date: eventOn < start ? start : eventOn, onEventDay: true };
+}
+
+/** Lines: before bookings (once each), and every repaint interval while the turf grows. */
 function lineOrders(ctx: FieldWeekContext, weekGp: number): void {
   const { field, std, level, planning, weekStart, weekEnd, start } = ctx;
   const template = std.lineRepaintDays === null ? null : defaultTemplateFor(field.sport);
   if (!template || std.lineRepaintDays === null) return;
   const lp = linePlan(template, ctx.params.lines, { days: 1, repaintDays: std.lineRepaintDays });
-  const painted = [field.lastPaintedOn, ...ctx.keptOf('paint_lines').map((k) => k.plannedDate)].filter((d): d is string => d !== null).sort();
+  // Every painting on record or planned: done, kept in this week, and planned in the weeks before.
+  const earlier = (field.paints ?? []).filter((p) => p.date < weekStart);
+  const keptPaints = ctx.keptOf('paint_lines');
+  const painted = [field.lastPaintedOn, ...keptPaints.map((k) => k.plannedDate), ...earlier.map((p) => p.date)].filter((d): d is string => d !== null).sort();
+  const servedEvents = new Set<number>([...keptPaints.map(eventIdOf), ...earlier.map((p) => p.eventId)].filter((id): id is number => id !== null));
   const lastPaintBefore = (d: string) => [...painted].reverse().find((p) => p <= d) ?? null;
   const firstCoatAfter = planning.firstCoatAfterDays ?? DEFAULT_PARAMETERS.planning.firstCoatAfterDays;
-  const paintOn = (date: string, reason: string, latest: string | null, extra: Record<string, unknown>) => {
+  const paintOn = (date: string, reason: string, window: { earliest: string; latest: string | null }, extra: Record<string, unknown>) => {
     // A first coat where no lines show any more (none on record, or grown out); else a touch-up.
     const before = [...painted].reverse().find((p) => p < date) ?? null;
     const first = before === null || isoToDayNumber(date) - isoToDayNumber(before) > firstCoatAfter;
@@ -362,30 +397,37 @@ function lineOrders(ctx: FieldWeekContext, weekGp: number): void {
       siteId: field.siteId,
       task: 'paint_lines',
       askedDate: date,
+      earliestDate: window.earliest,
       plannedHours: round(coat.hours),
       reason,
       details: { template: template.name, coat: first ? 'first' : 'touch_up', lineLengthM: round(lp.lineLengthM, 0), mixedL: round(coat.mixedLitres, 1), paintL: round(coat.concentrateLitres, 1), ...extra },
-      latestDate: latest,
-      flexible: latest === null,
+      latestDate: window.latest,
+      flexible: true,
       equipmentKind: 'line_marker',
     });
   };
   const nextMonday = addDaysIso(weekStart, 7);
   const events = [...field.events].filter((e) => e.startsOn >= start && e.startsOn <= nextMonday).sort((a, b) => (a.startsOn < b.startsOn ? -1 : a.startsOn > b.startsOn ? 1 : a.id - b.id));
   for (const e of events) {
+    if (servedEvents.has(e.id)) continue;
+    const target = paintDayFor(e.startsOn, start, ctx.input.workDays);
+    // Lines painted from the freshness window (or the target day, when the last working day is further back) up to the booking serve it.
+    const freshFrom = addDaysIso(e.startsOn, -planning.paintFreshDays);
+    const servedFrom = target.date < freshFrom ? target.date : freshFrom;
     const last = lastPaintBefore(e.startsOn);
-    if (last && isoToDayNumber(e.startsOn) - isoToDayNumber(last) <= planning.paintFreshDays) continue;
-    let date = addDaysIso(e.startsOn, -planning.paintDaysBeforeEvent);
-    if (date < start) date = start;
-    if (date > weekEnd) continue; // next Monday's booking is painted on this week's days only if in reach
-    paintOn(date, `Lines for ${e.title} on ${dayName(e.startsOn)} ${e.startsOn}`, e.startsOn, { eventId: e.id, eventTitle: e.title, eventOn: e.startsOn });
+    if (last && last >= servedFrom) continue;
+    if (target.date > weekEnd) continue; // next Monday's booking is painted on this week's days only if in reach
+    if (target.onEventDay) ctx.warnings.push({ code: 'paint_on_event_day', fieldId: field.id, date: e.startsOn, eventTitle: e.title });
+    const earliest = target.onEventDay ? target.date : servedFrom < start ? start : servedFrom;
+    paintOn(target.date, `Lines for ${e.title} on ${dayName(e.startsOn)} ${e.startsOn}${target.onEventDay ? ' (no working day left before it: painted on the day)' : ''}`, { earliest, latest: target.date }, { eventId: e.id, eventTitle: e.title, eventOn: e.startsOn });
+    servedEvents.add(e.id);
   }
   if (weekGp >= planning.dormantGp) {
     const last = lastPaintBefore(weekEnd);
     const due = last ? addDaysIso(last, std.lineRepaintDays) : weekStart;
     if (due <= weekEnd) {
       const date = due < start ? start : due;
-      paintOn(date, last ? `Repaint: level ${level} repaints every ${std.lineRepaintDays} days (last painted ${last})` : `No painting on record: level ${level} keeps lines`, null, {});
+      paintOn(date, last ? `Repaint: level ${level} repaints every ${std.lineRepaintDays} days (last painted ${last})` : `No painting on record: level ${level} keeps lines`, { earliest: date, latest: null }, {});
     }
   }
 }
@@ -427,6 +469,7 @@ function feedOrders(ctx: FieldWeekContext, daily: FieldDailySeries): void {
     plannedHours: round(hours),
     reason: `Feed plan: ${round(app.nGPerM2, 2)} g N/m² planned for ${app.date}${app.date < weekStart ? ' (not yet applied)' : ''}`,
     details: { nGPerM2: round(app.nGPerM2, 3), product: `${product.n}-${product.p}-${product.k}`, productKg: round(need.productKg, 1), bags: need.bags },
+    earliestDate: start,
     latestDate: null,
     flexible: true,
     equipmentKind: 'spreader',
@@ -499,10 +542,12 @@ function fieldCheckOrders(ctx: FieldWeekContext): void {
     siteId: field.siteId,
     task: 'field_check',
     askedDate: date,
+    earliestDate: start,
     plannedHours: ctx.planning.fieldCheckHours,
     reason: field.lastCheckedOn ? `Level ${ctx.level} checks every ${std.fieldCheckDays} days (last ${field.lastCheckedOn})` : 'No field check on record',
     details: {},
-    latestDate: null,
+    // A check falling due in the week is done by then; one already late goes on a day with room before the week ends.
+    latestDate: due > start ? due : null,
     flexible: true,
     equipmentKind: null,
   });
@@ -539,6 +584,10 @@ export interface AssignInput {
   crews: readonly PlanCrewInput[];
   /** Hours already on each crew-day from kept orders: key `${crewId}|${date}`. */
   keptHours?: ReadonlyMap<string, number>;
+  /** Crew-days cancelled (a rain-out), key `${crewId}|${date}`: no work goes on them. */
+  closed?: ReadonlySet<string>;
+  /** Sites of the kept orders on each crew-day (one entry per order), for the day's load/unload and drive. */
+  keptSites?: ReadonlyMap<string, readonly number[]>;
   /** The crew that last worked each site (keeps sites with the crew that knows them). */
   siteCrewHint?: ReadonlyMap<number, number>;
   equipment?: readonly PlanEquipment[];
@@ -550,11 +599,14 @@ export interface AssignInput {
 }
 
 /**
- * Suggests a crew, a day and equipment for each asked order. Sites go whole to one crew
- * (the one that knows the site when it has room, else the least loaded by share of its
- * week), largest sites first. An order falls on the crew's latest working day on or before
- * its latest date, else the first after (noted); flexible orders then move off days over
- * the crew's hours onto the lightest day. Deterministic: ties break by id and date.
+ * Suggests a crew, a day and equipment for each asked order. Work tied to a day (mowing,
+ * watering) keeps its site with one crew (the one that knows the site when it has room, else
+ * the least loaded by share of its week), largest sites first, on the crew's latest working
+ * day on or before its latest date, else the first after (noted). Work with slack (field
+ * checks, feed, painting ahead of a booking) then goes, most urgent first, to the crew-day
+ * in its window with the most room after it (work + load/unload + drive), within the crew's
+ * hours where any day has room; the site's crew is preferred, a painting stays close to its
+ * booking, and today takes only what is due today. Deterministic: ties break by date and id.
  */
 export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warnings: WeekWarning[] } {
   const week = weekDates(input.weekStart);
@@ -562,13 +614,60 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
   const dates = open.length ? open : week.slice(6);
   const warnings: WeekWarning[] = [];
   const crews = [...input.crews].filter((c) => c.workDays.length > 0).sort((a, b) => a.id - b.id);
-  const crewOfSite = crewsForSites(input, crews, dates);
+  const closed = input.closed ?? new Set<string>();
+  const crewOfSite = crewsForSites(input, crews, dates.filter((d) => crews.some((c) => !closed.has(`${c.id}|${d}`))));
   if (crews.length === 0 && input.orders.length > 0) warnings.push({ code: 'no_crew' });
-  const scheduled = input.orders.map((o) => scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings));
-  balanceFlexibleOrders(scheduled, crews, dates, input);
+  const openDay = (c: PlanCrewInput, d: string) => !closed.has(`${c.id}|${d}`);
+  const spread = (o: AskedOrder) => o.flexible && crews.length > 0;
+  const scheduled = input.orders.filter((o) => !spread(o)).map((o) => scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings, openDay));
+  const ledger = crewDayLedger(input);
+  for (const s of scheduled) ledger.place(s);
+  const lastOf = (o: AskedOrder) => o.latestDate ?? (dates[dates.length - 1] as string);
+  const flexible = input.orders
+    .filter(spread)
+    .sort((a, b) => (lastOf(a) < lastOf(b) ? -1 : lastOf(a) > lastOf(b) ? 1 : 0) || b.plannedHours - a.plannedHours || a.siteId - b.siteId || a.fieldId - b.fieldId || (a.task < b.task ? -1 : a.task > b.task ? 1 : 0));
+  const today = input.notBefore && dates[0] === input.notBefore ? input.notBefore : null;
+  for (const o of flexible) {
+    const s = spreadOrder(o, { crews, dates, today, siteCrew: crewOfSite.get(o.siteId) ?? null, ledger, open: openDay }) ?? scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings, openDay);
+    ledger.place(s);
+    scheduled.push(s);
+  }
   for (const s of scheduled) s.equipmentId = suggestEquipment(s, input.equipment ?? []);
   scheduled.sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : a.siteId - b.siteId || a.fieldId - b.fieldId || (a.task < b.task ? -1 : a.task > b.task ? 1 : 0)));
   return { orders: scheduled, warnings: [...new Map(warnings.map((w) => [JSON.stringify(w), w])).values()] };
+}
+
+/** A crew that is not the site's own takes work only when it has clearly more room (share of a day). */
+const OTHER_CREW_PENALTY = 0.15;
+/** A painting moves earlier than the last working day before its booking only when that day is much fuller (share of a day per day earlier). */
+const PAINT_EARLY_PENALTY = 0.3;
+
+/** The crew-day in the order's window with the most room after it; null when no crew works a day of the window. */
+function spreadOrder(
+  o: AskedOrder,
+  env: { crews: readonly PlanCrewInput[]; dates: readonly string[]; today: string | null; siteCrew: PlanCrewInput | null; ledger: ReturnType<typeof crewDayLedger>; open: (c: PlanCrewInput, d: string) => boolean },
+): ScheduledOrder | null {
+  const latest = o.latestDate ?? (env.dates[env.dates.length - 1] as string);
+  const earliest = o.earliestDate && o.earliestDate > (env.dates[0] as string) ? o.earliestDate : (env.dates[0] as string);
+  const forEvent = o.task === 'paint_lines' && o.latestDate !== null;
+  let best: { date: string; crewId: number; fits: boolean; notToday: boolean; score: number } | null = null;
+  for (const date of env.dates) {
+    if (date < earliest || date > latest) continue;
+    for (const c of env.crews) {
+      if (!c.workDays.includes(weekdayOf(date)) || !env.open(c, date)) continue;
+      const after = env.ledger.hoursWith(c.id, date, o.siteId, o.plannedHours);
+      const share = after / Math.max(1e-9, c.hoursPerDay);
+      const fits = after <= c.hoursPerDay + 1e-9;
+      const notToday = date !== env.today || latest <= date;
+      const score = share + (env.siteCrew && env.siteCrew.id !== c.id ? OTHER_CREW_PENALTY : 0) + (forEvent ? PAINT_EARLY_PENALTY * (isoToDayNumber(latest) - isoToDayNumber(date)) : 0);
+      // Within hours first, then not today unless due today, then the most room.
+      const better = !best || (fits !== best.fits ? fits : notToday !== best.notToday ? notToday : score < best.score - 1e-9);
+      if (better) {
+        best = { date, crewId: c.id, fits, notToday, score };
+      }
+    }
+  }
+  return best ? { ...o, plannedDate: best.date, crewId: best.crewId, equipmentId: null } : null;
 }
 
 /**
@@ -614,10 +713,10 @@ function crewsForSites(input: AssignInput, crews: readonly PlanCrewInput[], date
 }
 
 /** The crew's latest working day in [asked, latest], else on or before latest, else the first after (noted as a missed due date). */
-function scheduleOrder(o: AskedOrder, crew: PlanCrewInput | null, dates: readonly string[], warnings: WeekWarning[]): ScheduledOrder {
+function scheduleOrder(o: AskedOrder, crew: PlanCrewInput | null, dates: readonly string[], warnings: WeekWarning[], open: (c: PlanCrewInput, d: string) => boolean = () => true): ScheduledOrder {
   let date = o.askedDate;
   if (crew) {
-    const works = (d: string) => crew.workDays.includes(weekdayOf(d));
+    const works = (d: string) => crew.workDays.includes(weekdayOf(d)) && open(crew, d);
     const latest = o.latestDate ?? o.askedDate;
     const onOrBefore = dates.filter((d) => d <= latest && d >= o.askedDate && works(d)).pop() ?? dates.filter((d) => d <= latest && works(d)).pop();
     const after = dates.find((d) => d > latest && works(d));
@@ -628,70 +727,56 @@ function scheduleOrder(o: AskedOrder, crew: PlanCrewInput | null, dates: readonl
 }
 
 /**
- * Each crew-day's hours (work + a load/unload per site), kept up to date as orders move,
- * so a move sees the days as they stand after the moves before it.
+ * Each crew-day's hours as the board counts them (work + a load/unload per site + the drive
+ * of its route), kept up to date as orders are placed, so each placement sees the days as
+ * they stand after the ones before it. Kept orders count from the start.
  */
-function crewDayLedger(keptHours: ReadonlyMap<string, number> | undefined, unload: number) {
-  const days = new Map<string, { hours: number; sites: Map<number, number> }>();
+function crewDayLedger(input: AssignInput) {
+  const unload = input.travel.loadUnloadMin / 60;
+  const days = new Map<string, { hours: number; sites: Map<number, number>; drive: number }>();
   const dayOf = (crewId: number, date: string) => {
     const key = `${crewId}|${date}`;
     let d = days.get(key);
     if (!d) {
-      d = { hours: keptHours?.get(key) ?? 0, sites: new Map() };
+      d = { hours: input.keptHours?.get(key) ?? 0, sites: new Map(), drive: 0 };
+      for (const siteId of input.keptSites?.get(key) ?? []) d.sites.set(siteId, (d.sites.get(siteId) ?? 0) + 1);
+      d.drive = driveHours(d.sites);
       days.set(key, d);
     }
     return d;
   };
-  const place = (s: ScheduledOrder, sign: 1 | -1) => {
+  const km = (a: LatLng, b: LatLng) => greatCircleKm(a, b) * input.travel.roadFactor;
+  const driveHours = (sites: Map<number, number>) => {
+    const stops = [...sites.keys()].sort((a, b) => a - b).flatMap((id) => {
+      const p = input.sites.get(id);
+      return p ? [{ id, lat: p.lat, lng: p.lng }] : [];
+    });
+    return stops.length ? planRoute(input.yard, stops, { roadFactor: input.travel.roadFactor, speedKmh: input.travel.speedKmh }).driveHours : 0;
+  };
+  const place = (s: ScheduledOrder) => {
     if (s.crewId === null) return;
     const d = dayOf(s.crewId, s.plannedDate);
-    d.hours += sign * s.plannedHours;
-    const n = (d.sites.get(s.siteId) ?? 0) + sign;
-    if (n <= 0) d.sites.delete(s.siteId);
-    else d.sites.set(s.siteId, n);
+    d.hours += s.plannedHours;
+    const isNew = !d.sites.has(s.siteId);
+    d.sites.set(s.siteId, (d.sites.get(s.siteId) ?? 0) + 1);
+    if (isNew) d.drive = driveHours(d.sites);
   };
-  const dayHours = (crewId: number, date: string) => {
+  /** The day's hours with one more order: a new site adds a load/unload and, at most, a detour from the nearest stop already on the route (or the yard) and back. */
+  const hoursWith = (crewId: number, date: string, siteId: number, hours: number) => {
     const d = dayOf(crewId, date);
-    return d.hours + d.sites.size * unload;
-  };
-  return { place, dayHours };
-}
-
-/** Moves flexible orders, largest first, off days over the crew's hours onto its lightest day that can take them. */
-function balanceFlexibleOrders(scheduled: ScheduledOrder[], crews: readonly PlanCrewInput[], dates: readonly string[], input: AssignInput): void {
-  const unload = input.travel.loadUnloadMin / 60;
-  const { place, dayHours } = crewDayLedger(input.keptHours, unload);
-  for (const s of scheduled) place(s, 1);
-  const byCrewDay = new Map<string, ScheduledOrder[]>();
-  for (const s of scheduled) {
-    if (!s.flexible || s.crewId === null) continue;
-    const key = `${s.crewId}|${s.plannedDate}`;
-    byCrewDay.set(key, [...(byCrewDay.get(key) ?? []), s]);
-  }
-  for (const crew of crews) {
-    const workDates = dates.filter((d) => crew.workDays.includes(weekdayOf(d)));
-    for (const date of workDates) {
-      const movable = (byCrewDay.get(`${crew.id}|${date}`) ?? []).sort((a, b) => b.plannedHours - a.plannedHours || a.fieldId - b.fieldId);
-      for (const s of movable) {
-        if (dayHours(crew.id, date) <= crew.hoursPerDay + 1e-9) break;
-        let target: string | undefined;
-        let best = Infinity;
-        for (const d of workDates) {
-          if (d === date) continue;
-          const h = dayHours(crew.id, d);
-          if (h < best - 1e-12) {
-            best = h;
-            target = d;
-          }
-        }
-        if (target && best + s.plannedHours + unload <= crew.hoursPerDay + 1e-9) {
-          place(s, -1);
-          s.plannedDate = target;
-          place(s, 1);
-        }
+    if (d.sites.has(siteId)) return d.hours + hours + d.sites.size * unload + d.drive;
+    const p = input.sites.get(siteId);
+    let detourKm = 0;
+    if (p) {
+      detourKm = km(input.yard, p);
+      for (const id of d.sites.keys()) {
+        const q = input.sites.get(id);
+        if (q) detourKm = Math.min(detourKm, km(q, p));
       }
     }
-  }
+    return d.hours + hours + (d.sites.size + 1) * unload + d.drive + (2 * detourKm) / input.travel.speedKmh;
+  };
+  return { place, hoursWith };
 }
 
 /** Equipment: the crew's own unit of the kind first, then the district pool; a mower must fit the kind and HOC asked. */

@@ -18,6 +18,16 @@ export const generateWeekSchema = weekQuerySchema.extend({
 });
 export type GenerateWeekInput = z.infer<typeof generateWeekSchema>;
 
+/** A rain-out: a day's open work of one crew (or of the whole district) cancelled, with the reason the crews see. */
+export const rainOutSchema = z.object({
+  districtId: idSchema,
+  date: isoDate,
+  /** null: every crew of the district. */
+  crewId: idSchema.nullable().default(null),
+  reason: z.string().trim().min(3, 'say why the work is cancelled (e.g. thunderstorms, fields waterlogged)').max(300, 'keep the reason under 300 characters'),
+});
+export type RainOutInput = z.infer<typeof rainOutSchema>;
+
 export const createWorkOrderSchema = z.object({
   fieldId: idSchema,
   task: z.enum(WORK_TASKS, { error: `task must be one of ${WORK_TASKS.join(', ')}` }),

@@ -1,8 +1,8 @@
 /** What a district's week is planned from, read in a few queries. */
-import { and, asc, eq, gte, inArray, lte, max, ne, sql } from 'drizzle-orm';
+import { and, asc, eq, gte, inArray, lt, lte, max, ne, sql } from 'drizzle-orm';
 import { errors, addDaysIso, MOWER_KINDS, type Level, type PlanEquipment, type PlanField, type PlanMower } from '@swardwise/domain';
 import type { Queryable } from '../../db/client.ts';
-import { crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, workOrders } from '../../db/schema/index.ts';
+import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, workOrders } from '../../db/schema/index.ts';
 import { workOrderRows, type WorkOrderRow } from '../work-orders.ts';
 
 export interface GenerationInput {
@@ -101,6 +101,13 @@ export async function planFields(db: Queryable, q: GenerationInput) {
     .select({ id: fieldEvents.id, fieldId: fieldEvents.fieldId, startsOn: fieldEvents.startsOn, title: fieldEvents.title })
     .from(fieldEvents)
     .where(and(eq(fieldEvents.districtId, q.districtId), gte(fieldEvents.startsOn, q.weekStart), lte(fieldEvents.startsOn, addDaysIso(q.weekStart, 7))));
+  // Paintings of the fortnight before the week, planned or done (not skipped): a booking they were for is served.
+  const paintRows = await db
+    .select({ fieldId: workOrders.fieldId, date: workOrders.plannedDate, details: workOrders.details })
+    .from(workOrders)
+    .where(and(eq(workOrders.districtId, q.districtId), eq(workOrders.task, 'paint_lines'), ne(workOrders.status, 'skipped'), gte(workOrders.plannedDate, addDaysIso(q.weekStart, -14)), lt(workOrders.plannedDate, q.weekStart)));
+  const paintsOf = new Map<number, { date: string; eventId: number | null }[]>();
+  for (const p of paintRows) paintsOf.set(p.fieldId, [...(paintsOf.get(p.fieldId) ?? []), { date: p.date, eventId: typeof p.details.eventId === 'number' ? p.details.eventId : null }]);
   const eventsOf = new Map<number, { id: number; startsOn: string; title: string }[]>();
   for (const e of events) eventsOf.set(e.fieldId, [...(eventsOf.get(e.fieldId) ?? []), e]);
   const toPlanField = (f: DistrictFieldRow): PlanField => ({
@@ -122,6 +129,7 @@ export async function planFields(db: Queryable, q: GenerationInput) {
     lastFedOn: done.get(`${f.id}|feed`) ?? null,
     lastCheckedOn: done.get(`${f.id}|field_check`) ?? null,
     events: eventsOf.get(f.id) ?? [],
+    paints: paintsOf.get(f.id) ?? [],
   });
   return { fieldRows, toPlanField };
 }
@@ -164,4 +172,19 @@ export async function siteCrewHints(db: Queryable, q: GenerationInput, weekEnd: 
     }
   }
   return siteCrewHint;
+}
+
+/** The crew-days of the week a rain-out cancelled (`${crewId}|${date}`; a district's rain-out closes every crew's day). */
+export async function rainedOutDays(db: Queryable, q: GenerationInput, crewIds: readonly number[]): Promise<Set<string>> {
+  const rows = await db
+    .select({ after: auditLog.after })
+    .from(auditLog)
+    .where(and(eq(auditLog.entity, 'rain_out'), eq(auditLog.districtId, q.districtId), sql`${auditLog.after}->>'date' between ${q.weekStart} and ${addDaysIso(q.weekStart, 6)}`));
+  const out = new Set<string>();
+  for (const r of rows) {
+    const a = r.after as { date?: unknown; crewId?: unknown } | null;
+    if (typeof a?.date !== 'string') continue;
+    for (const id of typeof a.crewId === 'number' ? [a.crewId] : crewIds) out.add(`${id}|${a.date}`);
+  }
+  return out;
 }

@@ -17,7 +17,7 @@ import {
 import type { Queryable } from '../../db/client.ts';
 import { loadParameters, loadStandards } from '../standards.ts';
 import { planningWeather } from '../stations.ts';
-import { districtCrews, districtRow, planEquipment, planFields, siteCrewHints, type ExistingRow, type GenerationInput } from './load.ts';
+import { districtCrews, districtRow, planEquipment, planFields, rainedOutDays, siteCrewHints, type ExistingRow, type GenerationInput } from './load.ts';
 
 interface AskInput {
   q: GenerationInput;
@@ -58,7 +58,7 @@ async function askFields(db: Queryable, input: AskInput) {
 export async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: ExistingRow[], today: string) {
   const weekEnd = weekDates(q.weekStart)[6]!;
   // In the week under way, work goes on today (the department's) or later.
-  const notBefore = today > q.weekStart && today <= weekEnd ? today : undefined;
+  const notBefore = today >= q.weekStart && today <= weekEnd ? today : undefined;
   const district = await districtRow(db, q.districtId);
   const { standards } = await loadStandards(db);
   const params = await loadParameters(db);
@@ -69,12 +69,20 @@ export async function planDistrictWeek(db: Queryable, q: GenerationInput, existi
   const { asked, warnings, fieldRows } = await askFields(db, { q, kept, workDays, mowers: units.mowers, standards, params, notBefore });
 
   const keptHours = new Map<string, number>();
-  for (const k of kept) if (k.crewId !== null && k.status !== 'skipped') keptHours.set(`${k.crewId}|${k.plannedDate}`, (keptHours.get(`${k.crewId}|${k.plannedDate}`) ?? 0) + k.plannedHours);
+  const keptSites = new Map<string, number[]>();
+  for (const k of kept) {
+    if (k.crewId === null || k.status === 'skipped') continue;
+    const key = `${k.crewId}|${k.plannedDate}`;
+    keptHours.set(key, (keptHours.get(key) ?? 0) + k.plannedHours);
+    keptSites.set(key, [...(keptSites.get(key) ?? []), k.siteId]);
+  }
   const assigned = assignWeek({
     weekStart: q.weekStart,
     orders: asked,
     crews: crewRows.map((c) => ({ id: c.id, hoursPerDay: c.hoursPerDay, workDays: c.workDays })),
     keptHours,
+    keptSites,
+    closed: await rainedOutDays(db, q, crewRows.map((c) => c.id)),
     siteCrewHint: await siteCrewHints(db, q, weekEnd),
     equipment: units.equipment,
     sites: new Map(fieldRows.map((f) => [f.siteId, { lat: f.siteLat, lng: f.siteLng }])),

@@ -67,4 +67,11 @@ describe('JobCard', () => {
     await card.get('[data-test="job-skip"]').trigger('click');
     expect(Object.keys(card.emitted())).toEqual(expect.arrayContaining(['start', 'done', 'skip']));
   });
+
+  test('should show a job a rain-out cancelled as cancelled, with who cancelled it and why, and no buttons', () => {
+    const card = mountCard({ order: order({ status: 'skipped', details: { cancelled: { reason: 'Thunderstorms, fields waterlogged', by: 'Dana Foreman', on: '2026-06-01' } } }) });
+    expect(card.get('[data-test="job-status"]').text()).toBe('Cancelled');
+    expect(card.get('[data-test="job-cancelled"]').text()).toBe('Cancelled by Dana Foreman: Thunderstorms, fields waterlogged');
+    expect(card.findAll('.job__actions button')).toHaveLength(0);
+  });
 });

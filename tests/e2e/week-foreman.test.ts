@@ -1,0 +1,178 @@
+/**
+ * The foreman's week in chromium: generating a week again after applying and confirming it
+ * proposes nothing new (desktop and phone); a job added by hand and a rain-out on the board,
+ * both done with the keyboard through labelled inputs.
+ */
+import path from 'node:path';
+import type { Locator, Page } from 'playwright-core';
+import { describe, expect, inject, test } from 'vitest';
+import { browser, PHONE, shots, signIn, useBrowser } from './browser.ts';
+
+const baseUrl = inject('baseUrl');
+// Weeks of the demo season no other browser test plans.
+const DESKTOP_WEEK = '2026-09-14';
+const PHONE_WEEK = '2026-09-21';
+const HAND_WEEK = '2026-09-28';
+const DESKTOP = { viewport: { width: 1366, height: 900 } };
+
+interface Order {
+  id: number;
+  task: string;
+  fieldId: number;
+  crewId: number | null;
+  plannedDate: string;
+  status: string;
+  origin: string;
+  notes: string;
+  details: { eventId?: number; cancelled?: { reason: string } };
+}
+
+useBrowser();
+
+async function openWeek(options: typeof DESKTOP | typeof PHONE, week: string): Promise<Page> {
+  const page = await browser.newPage(options);
+  await signIn(page, 'foreman');
+  await page.goto(`${baseUrl}/week?week=${week}`);
+  await page.locator('[data-test="week-grid"]').waitFor();
+  return page;
+}
+
+const myDistrict = (page: Page): Promise<number> => page.evaluate(async () => (await (await fetch('/api/auth/me')).json()).user.districtId as number);
+const apiOrders = (page: Page, districtId: number, week: string): Promise<Order[]> =>
+  page.evaluate(async ([d, w]) => (await (await fetch(`/api/week-plans?districtId=${d}&weekStart=${w}`)).json()).orders, [districtId, week] as const);
+
+/** Generate → the diff → Apply; answers the diff's summary line. */
+async function generateAndApply(page: Page): Promise<string> {
+  await page.locator('[data-test="generate-week"]').click();
+  const summary = page.locator('[data-test="diff-summary"]');
+  await summary.waitFor();
+  const text = (await summary.textContent()) ?? '';
+  await page.locator('[data-test="diff-apply"]').click();
+  await page.locator('[data-test="diff-dialog"]').waitFor({ state: 'hidden' });
+  return text;
+}
+
+/** Picks an option of an Element Plus select with the keyboard: focus, open with Enter, arrow down to the label, Enter. */
+async function chooseByKeyboard(page: Page, dialog: Locator, label: string, option: string | RegExp) {
+  const input = dialog.getByLabel(label, { exact: true });
+  await input.focus();
+  await page.keyboard.press('Enter');
+  const items = page.locator('.el-select-dropdown:visible .el-select-dropdown__item');
+  await items.first().waitFor();
+  const texts = await items.allTextContents();
+  const index = texts.findIndex((t) => (typeof option === 'string' ? t.trim() === option : option.test(t)));
+  expect(index, `${label}: ${String(option)} among ${texts.join(' | ')}`).toBeGreaterThanOrEqual(0);
+  // The dropdown opens on the selected option (or none): walk from the top.
+  await page.keyboard.press('Home');
+  const hovered = async () => items.evaluateAll((els) => els.findIndex((e) => e.classList.contains('is-hovering')));
+  for (let guard = 0; guard < 60 && (await hovered()) !== index; guard++) await page.keyboard.press('ArrowDown');
+  expect(await hovered()).toBe(index);
+  await page.keyboard.press('Enter');
+  await expect.poll(() => page.locator('.el-select-dropdown:visible').count()).toBe(0);
+}
+
+describe('generating a week again', () => {
+  for (const [name, options, week] of [
+    ['desktop', DESKTOP, DESKTOP_WEEK],
+    ['phone', PHONE, PHONE_WEEK],
+  ] as const) {
+    test(`should propose nothing new after apply and confirm (${name})`, async () => {
+      const page = await openWeek(options, week);
+      try {
+        const districtId = await myDistrict(page);
+        const first = await generateAndApply(page);
+        expect(Number(/(\d+) added/.exec(first)?.[1])).toBeGreaterThan(0);
+        const applied = await apiOrders(page, districtId, week);
+        await page.locator('[data-test="confirm-week"]').click();
+        await page.locator('.el-message-box__btns .el-button--primary').click();
+        await page.locator('[data-test="confirm-week"]').waitFor({ state: 'hidden' });
+
+        await page.locator('[data-test="generate-week"]').click();
+        const again = page.locator('[data-test="diff-summary"]');
+        await again.waitFor();
+        expect(await again.textContent()).toMatch(/^\s*0 added · 0 changed · 0 removed/);
+        await page.screenshot({ path: path.join(shots, `week-again-${name}.png`) });
+        await page.locator('[data-test="diff-apply"]').click();
+        await page.locator('[data-test="diff-dialog"]').waitFor({ state: 'hidden' });
+        const after = await apiOrders(page, districtId, week);
+        expect(after.filter((o) => o.task === 'paint_lines').length).toBe(applied.filter((o) => o.task === 'paint_lines').length);
+        expect(after.length).toBe(applied.length);
+      } catch (e) {
+        await page.screenshot({ path: path.join(shots, `week-again-${name}-failed.png`) });
+        throw e;
+      } finally {
+        await page.close();
+      }
+    });
+  }
+});
+
+describe('work by hand on the board', () => {
+  test('should add a one-off job and rain out a day with the keyboard, the crew seeing the reason', async () => {
+    const page = await openWeek(DESKTOP, HAND_WEEK);
+    try {
+      const districtId = await myDistrict(page);
+      await generateAndApply(page);
+
+      // A one-off job: every input has a label, the whole form works from the keyboard.
+      await page.locator('[data-test="add-job"]').focus();
+      await page.keyboard.press('Enter');
+      const dialog = page.locator('[data-test="manual-job-dialog"]');
+      await dialog.waitFor();
+      await chooseByKeyboard(page, dialog, 'Task', 'Topdress');
+      await chooseByKeyboard(page, dialog, 'Field', /·/);
+      await chooseByKeyboard(page, dialog, 'Day', /Tue 29 Sep/);
+      await chooseByKeyboard(page, dialog, 'Crew', /./);
+      await dialog.getByLabel('Hours', { exact: true }).fill('2.5');
+      await dialog.getByLabel('Note for the crew', { exact: true }).fill('Sand the goalmouths after the aeration');
+      await page.locator('[data-test="manual-job-submit"]').focus();
+      const created = page.waitForResponse((r) => r.url().endsWith('/api/work-orders') && r.request().method() === 'POST');
+      await page.keyboard.press('Enter');
+      expect((await created).status()).toBe(201);
+      await dialog.waitFor({ state: 'hidden' });
+      const manual = (await apiOrders(page, districtId, HAND_WEEK)).find((o) => o.origin === 'manual');
+      expect(manual).toMatchObject({ task: 'topdress', plannedDate: '2026-09-29', notes: 'Sand the goalmouths after the aeration' });
+      await expect.poll(() => page.locator(`[data-test="order-card"][data-order-id="${manual!.id}"] [data-test="card-note"]`).count()).toBe(1);
+
+      // A rain-out of Thursday for the whole district, planned again at once.
+      const thursday = '2026-10-01';
+      const before = (await apiOrders(page, districtId, HAND_WEEK)).filter((o) => o.plannedDate === thursday && o.status !== 'skipped');
+      expect(before.length).toBeGreaterThan(0);
+      await page.locator('[data-test="rain-out"]').focus();
+      await page.keyboard.press('Enter');
+      const rain = page.locator('[data-test="rain-out-dialog"]');
+      await rain.waitFor();
+      await chooseByKeyboard(page, rain, 'Day', /Thu 1 Oct/);
+      await expect.poll(async () => page.locator('[data-test="rain-out-count"]').textContent()).toMatch(new RegExp(`^${before.length} open job`));
+      await rain.getByLabel('Reason the crews see', { exact: true }).fill('Thunderstorms all day, fields waterlogged');
+      await page.locator('[data-test="rain-out-submit"]').focus();
+      const replanned = page.waitForResponse((r) => r.url().endsWith('/api/week-plans/generate') && r.request().method() === 'POST');
+      await page.keyboard.press('Enter');
+      expect((await replanned).status()).toBe(200);
+      await rain.waitFor({ state: 'hidden' });
+      const after = await apiOrders(page, districtId, HAND_WEEK);
+      for (const o of before) expect(after.find((a) => a.id === o.id)).toMatchObject({ status: 'skipped', details: { cancelled: { reason: 'Thunderstorms all day, fields waterlogged' } } });
+      expect(after.filter((o) => o.plannedDate === thursday && o.status !== 'skipped')).toEqual([]);
+      await expect.poll(() => page.locator('[data-test="card-cancelled"]').count()).toBe(before.length);
+      await page.screenshot({ path: path.join(shots, 'week-manual-rain-out.png'), fullPage: true });
+
+      const phone = await browser.newPage(PHONE);
+      try {
+        await signIn(phone, 'foreman');
+        await phone.goto(`${baseUrl}/week?week=${HAND_WEEK}`);
+        await phone.locator('[data-test="week-grid"]').waitFor();
+        await phone.locator('[data-test="card-cancelled"]').first().waitFor();
+        await phone.screenshot({ path: path.join(shots, 'week-manual-rain-out-phone.png') });
+        await phone.locator('[data-test="rain-out"]').click();
+        await phone.locator('[data-test="rain-out-dialog"]').waitFor();
+        // The dialog fades in.
+        await phone.waitForTimeout(500);
+        await phone.screenshot({ path: path.join(shots, 'week-rain-out-dialog-phone.png') });
+      } finally {
+        await phone.close();
+      }
+    } finally {
+      await page.close();
+    }
+  });
+});
