@@ -15,7 +15,7 @@ async function mountSheet() {
   const orders = [
     order({ id: 1, crewId: 11, plannedDate: day, siteId: 1, siteName: 'Alder Green', siteAddress: '14 Larch Row', details: { hocMm: 38, mower: 'rotary' } }),
     order({ id: 2, crewId: 11, plannedDate: day, siteId: 2, siteName: 'Fen Park', siteAddress: '2 Reed Lane', fieldName: 'Fen 1', fieldStatus: 'closed', fieldStatusNote: 'Waterlogged goalmouths', details: { hocMm: 25, mowerKind: 'reel' } }),
-    order({ id: 3, crewId: 11, plannedDate: day, siteId: 2, siteName: 'Fen Park', siteAddress: '2 Reed Lane', task: 'paint', equipmentName: 'N-P1 line painter', details: {} }),
+    order({ id: 3, crewId: 11, plannedDate: day, siteId: 2, siteName: 'Fen Park', siteAddress: '2 Reed Lane', task: 'paint_lines', equipmentName: 'N-P1 line painter', details: {} }),
   ];
   const answer = board(orders, [crewDay({ crewId: 11, date: day, route: [{ siteId: 1, siteName: 'Alder Green' }, { siteId: 2, siteName: 'Fen Park' }] as never, orderIds: [1, 2, 3] })]);
   vi.stubGlobal('fetch', vi.fn(async () => new Response(JSON.stringify(answer), { status: 200, headers: { 'Content-Type': 'application/json' } })));
