@@ -45,6 +45,6 @@ describe('CrewSheetView', () => {
     expect(rows[1]!.classes()).toContain('is-not-open');
     expect(rows[1]!.get('[data-test="sheet-field-status"]').text()).toBe('Closed');
     expect(rows[0]!.find('[data-test="sheet-field-status"]').exists()).toBe(false);
-    expect(w.get('[data-test="sheet-closures"]').text()).toContain('Fen 1 at Fen Park is closed (Waterlogged goalmouths)');
+    expect(w.get('[data-test="sheet-closures"]').text()).toContain('Fen 1 at Fen Park is closed: Waterlogged goalmouths.');
   });
 });

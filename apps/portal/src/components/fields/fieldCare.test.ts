@@ -49,7 +49,7 @@ describe('fieldCare', () => {
     await w.get('[data-test="sort-mowDue"]').trigger('click');
     // Only Birch has a due day; the rest go last.
     expect(names(w)[0]).toBe('Birch');
-    expect(w.text()).toContain('when growth resumes');
+    expect(w.text()).toContain('not growing');
   });
 
   test('should filter the list to the overdue ones', async () => {

@@ -12,7 +12,7 @@ export type OverdueKey = 'mowing_check' | 'mowing' | 'check' | 'none';
 export const OVERDUE_LABELS: Record<OverdueKey, string> = {
   mowing_check: 'Mowing and check',
   mowing: 'Mowing',
-  check: 'Field check',
+  check: 'Check',
   none: 'Nothing',
 };
 
@@ -81,25 +81,25 @@ export function careColumns(keys: CareColumnKey[]): DataColumn<FieldCareRow>[] {
     }),
     mowDue: col.accessor((r) => r.mowDueOn ?? undefined, {
       id: 'mowDue',
-      header: 'Next mowing due',
+      header: 'Mow due',
       sortUndefined: 'last',
       enableGlobalFilter: false,
       meta: { exportValue: (v: string | undefined) => v ?? null },
       cell: (c) => {
         const r = c.row.original;
         if (r.mowDueOn) return h('span', { class: r.mowOverdue ? 'sw-late' : undefined }, shortDate(r.mowDueOn));
-        if (r.mowWaitingForGrowth) return h('span', { class: 'sw-muted' }, 'when growth resumes');
-        return r.lastMowedOn ? h('span', { class: 'sw-muted' }, 'not yet due') : dash();
+        if (r.mowWaitingForGrowth) return h('span', { class: 'sw-muted' }, 'not growing');
+        return r.lastMowedOn ? h('span', { class: 'sw-muted' }, 'not due') : dash();
       },
     }),
     checkDue: col.accessor((r) => r.checkDueOn ?? undefined, {
       id: 'checkDue',
-      header: 'Next check due',
+      header: 'Check due',
       sortUndefined: 'last',
       enableGlobalFilter: false,
       cell: (c) => {
         const r = c.row.original;
-        if (!r.checkDueOn) return h('span', { class: 'sw-late' }, 'none on record');
+        if (!r.checkDueOn) return h('span', { class: 'sw-late' }, 'none yet');
         return h('span', { class: r.checkOverdue ? 'sw-late' : undefined }, shortDate(r.checkDueOn));
       },
     }),
@@ -113,7 +113,7 @@ export function careColumns(keys: CareColumnKey[]): DataColumn<FieldCareRow>[] {
     }),
     score: col.accessor((r) => r.score ?? undefined, {
       id: 'score',
-      header: 'Surface score',
+      header: 'Score',
       sortUndefined: 'last',
       enableGlobalFilter: false,
       meta: { align: 'right' },
