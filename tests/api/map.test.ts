@@ -2,7 +2,7 @@ import { eq } from 'drizzle-orm';
 import { pino } from 'pino';
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, addDaysIso, dailyGrowthMm, hocFor } from '@swardwise/domain';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, LEVELS, addDaysIso, dailyGrowthMm, hocFor, levelIntervalDays } from '@swardwise/domain';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { createMailer } from '../../apps/api/src/mail/mailer.ts';
@@ -34,7 +34,7 @@ beforeAll(async () => {
 afterAll(() => api.close());
 
 const ids = (res: { body: { fields: { id: number }[] } }) => res.body.fields.map((f) => f.id).sort((a, b) => a - b);
-type MapFieldBody = { id: number; overdue: boolean | null; overdueSince: string | null; daysSinceMowing: number | null; predictedHeightMm: number | null; hocMm: number; score: number | null; eastWest: boolean };
+type MapFieldBody = { id: number; checkDueOn: string | null; checkState: string; mowDueOn: string | null; mowDueState: string; mowWaitingForGrowth: boolean; overdue: boolean | null; overdueSince: string | null; daysSinceMowing: number | null; predictedHeightMm: number | null; hocMm: number; score: number | null; eastWest: boolean };
 const fieldOf = (res: { body: { fields: MapFieldBody[] } }, id: number) => res.body.fields.find((f) => f.id === id)!;
 
 describe('GET /api/map', () => {
@@ -127,6 +127,24 @@ describe('GET /api/map', () => {
     const res = await (await api.signIn('head')).get('/api/map?asOf=2026-07-01');
     expect(fieldOf(res, id).score).toBe(84.5);
     expect(fieldOf(res, api.fixture.fields.northLawn).score).toBeNull();
+  });
+
+  test('should flag a field check overdue once the level\u2019s interval has passed, and give the next mowing by the one mowing policy', async () => {
+    const { db } = api.database;
+    const id = api.fixture.fields.northSchoolFootball;
+    const level = (await db.select({ l: fields.maintenanceLevel }).from(fields).where(eq(fields.id, id)))[0]!.l as 1 | 2 | 3 | 4;
+    const every = DEFAULT_STANDARDS[level].fieldCheckDays;
+    await db.insert(fieldChecks).values({ fieldId: id, turfCoverPct: 90, weedsPct: 2, barePct: 3, checkedOn: '2026-06-01', score: 80 });
+    await db.update(fields).set({ lastMowedOn: '2026-07-10' }).where(eq(fields.id, id));
+    const long = fieldOf(await (await api.signIn('head')).get(`/api/map?asOf=${addDaysIso('2026-06-01', every + 10)}`), id);
+    expect(long).toMatchObject({ checkDueOn: addDaysIso('2026-06-01', every), checkState: 'overdue' });
+    const onTime = fieldOf(await (await api.signIn('head')).get(`/api/map?asOf=${addDaysIso('2026-06-01', every - 1)}`), id);
+    expect(onTime).toMatchObject({ checkDueOn: addDaysIso('2026-06-01', every), checkState: 'ok' });
+    expect(fieldOf(await (await api.signIn('head')).get('/api/map?asOf=2026-07-01'), api.fixture.fields.northLawn)).toMatchObject({ checkDueOn: null, checkState: 'never' });
+    // Growing at GP 1: the next mowing falls due within the level's interval of the last one.
+    const july = fieldOf(await (await api.signIn('head')).get('/api/map?asOf=2026-07-30'), id);
+    expect(july).toMatchObject({ mowDueState: 'overdue', mowWaitingForGrowth: false });
+    expect(july.mowDueOn! > '2026-07-10' && july.mowDueOn! <= addDaysIso('2026-07-10', levelIntervalDays(DEFAULT_STANDARDS[level]))).toBe(true);
   });
 
   test('should show a new east–west field at once with its flag', async () => {

@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { describe, expect, test } from 'vitest';
-import { CAUTIONS, DEFAULT_STANDARDS, hocFor, mowerTypeFor, type Level } from '@swardwise/domain';
-import { fields } from '../../apps/api/src/db/schema/index.ts';
+import { CAUTIONS, DEFAULT_STANDARDS, addDaysIso, hocFor, levelIntervalDays, mowerTypeFor, type Level } from '@swardwise/domain';
+import { fields, sites, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { giveWork } from '../support/fixture.ts';
 import { type TestApi, useTestApi } from '../support/app.ts';
 
@@ -75,7 +75,7 @@ describe('GET /api/fields/:id/needs', () => {
     expect(n.feed.applications.length).toBeGreaterThan(0);
     expect(n.lines.kept).toBe(true);
     expect(n.lines.cautions).toContain(CAUTIONS.lines);
-    expect(n.level.workCompliance.tracked).toBe(false);
+    expect(n.level.workCompliance.tracked).toBe(true);
     expect(n.season.dates).toHaveLength(35);
     expect(n.season.gp).toHaveLength(35);
     expect(n.season.waterNeedMm).toHaveLength(35);
@@ -129,5 +129,54 @@ describe('GET /api/fields/:id/needs', () => {
     }
     expect((await agent.get('/api/fields/abc/needs')).status).toBe(400);
     expect((await agent.get('/api/fields/99999/needs')).status).toBe(404);
+  });
+});
+
+describe('one figure per field: the field page, Records and the Standards', () => {
+  test('should give the same mowing interval, mowings asked and done, and work done as the Standards and Records', async () => {
+    const { db } = api.database;
+    const id = api.fixture.fields.northSchoolFootball;
+    const row = await fieldRow(id);
+    const [site] = await db.select({ districtId: sites.districtId }).from(sites).where(eq(sites.id, row.siteId));
+    const base = { fieldId: id, siteId: row.siteId, districtId: site!.districtId, weekStart: '2026-05-18', crewId: api.fixture.crews.north, plannedHours: 1, origin: 'manual' as const };
+    await db.insert(workOrders).values([
+      { ...base, task: 'mow', plannedDate: '2026-05-18', status: 'done', actualHours: 1.2, doneAt: new Date('2026-05-18T15:00:00Z') },
+      { ...base, task: 'mow', plannedDate: '2026-05-21', status: 'assigned' },
+      { ...base, task: 'field_check', plannedDate: '2026-05-19', status: 'done', actualHours: 0.5, doneAt: new Date('2026-05-19T15:00:00Z') },
+      // An earlier week inside the four weeks the field page tallies.
+      { ...base, weekStart: '2026-05-04', task: 'mow', plannedDate: '2026-05-05', status: 'skipped' },
+    ]);
+    const agent = await api.signIn('foreman');
+    const n = (await agent.get(`/api/fields/${id}/needs`).query({ date: inSeason })).body.needs;
+    const { from, to, tally } = n.level.workCompliance;
+    expect([from, to]).toEqual([addDaysIso('2026-05-18', -21), '2026-05-24']);
+    const records = (await agent.get('/api/records').query({ from, to })).body;
+    const mine = records.byField.find((f: { fieldId: number }) => f.fieldId === id);
+    const { fieldId: _f, fieldName: _n, siteName: _s, ...fromRecords } = mine;
+    expect(tally).toEqual(fromRecords);
+    expect(tally).toMatchObject({ mowingsAsked: 3, mowingsDone: 1, ordersDone: 2, ordersSkipped: 1 });
+    // The week plan's mowings of the week asked for, as Records counts that week.
+    const week = records.byWeek.find((w: { weekStart: string }) => w.weekStart === '2026-05-18');
+    expect(n.mowing.plannedThisWeek).toEqual({ weekStart: '2026-05-18', asked: 2, done: 1 });
+    expect(week.mowingsAsked).toBeGreaterThanOrEqual(2);
+
+    // The interval the explanation gives is the Standards page's: the shorter of the longest interval and 7 ÷ least per week.
+    const standards = (await agent.get('/api/standards')).body;
+    const level = standards.levels.find((l: { level: number }) => l.level === row.maintenanceLevel).data;
+    expect(n.mowing.intervalDays).toBe(levelIntervalDays(level));
+    expect(n.mowing.inputs.find((i: { key: string }) => i.key === 'interval').value).toBe(levelIntervalDays(level));
+    expect(n.mowing.how).toContain(`falls due ${levelIntervalDays(level)} days after the last`);
+  });
+
+  test('should never give a next mowing on or before the last mowing, whatever week the weather falls back to', async () => {
+    const { db } = api.database;
+    const id = api.fixture.fields.northLawn;
+    for (const last of [api.fixture.weather.end, addDaysIso(api.fixture.weather.end, -1), addDaysIso(api.fixture.weather.end, 5)]) {
+      await db.update(fields).set({ lastMowedOn: last }).where(eq(fields.id, id));
+      const n = (await (await api.signIn('head')).get(`/api/fields/${id}/needs`).query({ date: '2026-12-02' })).body.needs;
+      expect(n.mowing.lastMowedOn).toBe(last);
+      if (n.mowing.nextMowingOn !== null) expect(n.mowing.nextMowingOn > last, `last mowed ${last}, next ${n.mowing.nextMowingOn}`).toBe(true);
+      else expect(n.mowing.nextMowingNote).toBeTruthy();
+    }
   });
 });

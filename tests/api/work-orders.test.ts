@@ -1,6 +1,8 @@
+import { eq } from 'drizzle-orm';
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { addDaysIso, DEFAULT_TIME_ZONE, localToday } from '@swardwise/domain';
+import { fields, sites } from '../../apps/api/src/db/schema/index.ts';
 import { giveWork } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
@@ -25,6 +27,16 @@ describe('work orders by role', () => {
     expect(res.status).toBe(200);
     expect(got(res)).toEqual(sorted(ids.northToday!, ids.schoolSoon!));
     expect(res.body.items[0]).toMatchObject({ task: 'mow', crewName: 'North Crew', fieldName: 'Soccer 1', siteName: 'Test Park North' });
+  });
+
+  test('should give each order its site\u2019s address and its field\u2019s status, so a crew sheet can mark a closure', async () => {
+    const { db } = api.database;
+    await db.update(sites).set({ address: '1 Test Way' }).where(eq(sites.id, api.fixture.sites.northPark));
+    await db.update(fields).set({ status: 'closed', statusNote: 'Reseeded' }).where(eq(fields.id, api.fixture.fields.northSoccer));
+    const res = await (await api.signIn('crew')).get('/api/work-orders');
+    const row = res.body.items.find((w: { id: number }) => w.id === ids.northToday);
+    expect(row).toMatchObject({ siteAddress: '1 Test Way', fieldStatus: 'closed', fieldStatusNote: 'Reseeded' });
+    await db.update(fields).set({ status: 'open', statusNote: '' }).where(eq(fields.id, api.fixture.fields.northSoccer));
   });
 
   test('should show a foreman his district, the head everything and a partner his site', async () => {

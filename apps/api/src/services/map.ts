@@ -20,7 +20,11 @@ import {
   hocFor,
   isoToDayNumber,
   dayNumberToIso,
+  fieldCheckDue,
   mowTriggerHeightMm,
+  mowingDue,
+  type Due,
+  type MowingDue,
   type Grass,
   type BasemapAnswer,
   type Level,
@@ -98,7 +102,10 @@ async function buildMap(ctx: Ctx, requested: string): Promise<MapAnswer> {
     const stationId = stationOfSite.get(f.siteId);
     const height = days !== null && day.latestWeather !== null && stationId !== undefined ? heightSinceMowing(f, days, hocMm, growth?.get(stationId), day.asOf) : NO_HEIGHT;
     gapDays = Math.max(gapDays, height.daysWithoutWeather);
-    return toMapField(f, hocMm, days, height);
+    const std = standardsTable[f.maintenanceLevel as Level];
+    const mowGrowth = f.lastMowedOn && stationId !== undefined ? growthAfter(growth?.get(stationId), f.grass as Grass, f.lastMowedOn, day.asOf) : [];
+    const due = { check: fieldCheckDue(f.scoredOn, std.fieldCheckDays, requested), mow: mowingDue(f.lastMowedOn, hocMm, std, mowGrowth, requested) };
+    return toMapField(f, hocMm, days, height, due);
   });
   if (gapDays > 0) {
     const gap = `Some fields were last mowed before the first day with weather: up to ${gapDays} days without weather add no growth, so their heights are low estimates.`;
@@ -207,7 +214,7 @@ function heightSinceMowing(f: MapFieldRow, days: number, hocMm: number, table: G
   return { predicted: round1(r.heightMm), overdue: r.overdueSince !== null, overdueSince: r.overdueSince, daysWithoutWeather: r.daysWithoutWeather };
 }
 
-function toMapField(f: MapFieldRow, hocMm: number, days: number | null, height: FieldHeight): MapField {
+function toMapField(f: MapFieldRow, hocMm: number, days: number | null, height: FieldHeight, due: { check: Due; mow: MowingDue }): MapField {
   return {
     id: f.id,
     siteId: f.siteId,
@@ -229,6 +236,11 @@ function toMapField(f: MapFieldRow, hocMm: number, days: number | null, height: 
     predictedHeightMm: height.predicted,
     overdue: height.overdue,
     overdueSince: height.overdueSince,
+    checkDueOn: due.check.dueOn,
+    checkState: due.check.state,
+    mowDueOn: due.mow.dueOn,
+    mowDueState: due.mow.state,
+    mowWaitingForGrowth: due.mow.waitingForGrowth,
     version: f.version,
     geometry: compact(f.geometry),
   };
@@ -284,6 +296,18 @@ async function growthTables(db: Ctx['db'], stationIds: number[], from: string, a
     tables.set(id, { startDay, cum, missing });
   }
   return tables;
+}
+
+/** Growth of each day after a cut on `mowedOn` up to `asOf` (mm), from the station's table; none when the cut is outside it. */
+function growthAfter(table: GrowthTable | undefined, grass: Grass, mowedOn: string, asOf: string): number[] {
+  if (!table) return [];
+  const c = table.cum[grass];
+  const a = isoToDayNumber(mowedOn) - table.startDay;
+  const b = isoToDayNumber(asOf) - table.startDay;
+  if (a < 0 || b <= a) return [];
+  const out = new Array<number>(b - a);
+  for (let i = a + 1; i <= b; i++) out[i - a - 1] = c[i]! - c[i - 1]!;
+  return out;
 }
 
 /** Height at the end of `asOf` after a cut to HOC on `mowedOn`, and the first day above 1.5 × HOC. */

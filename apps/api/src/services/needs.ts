@@ -10,6 +10,7 @@ import type { Ctx } from './context.ts';
 import { loadNeedsBasis, r, type NeedsBasis } from './needs/basis.ts';
 import { feedCard } from './needs/feed.ts';
 import { levelCard } from './needs/level.ts';
+import { fieldWork } from './needs/work.ts';
 import { linesCard } from './needs/lines.ts';
 import { growthCard, hocCard, labourCard, mowingCard } from './needs/mowing.ts';
 import { waterCard } from './needs/water.ts';
@@ -36,7 +37,8 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
   const b = await loadNeedsBasis(ctx, fieldId, date);
   const { field, level, std, station, prepared, versions, missing } = b;
   const { hoc, hocMm, mower } = hocCard(b);
-  const { mowing, seasonMowings } = mowingCard(b, hocMm);
+  const work = await fieldWork(ctx, b);
+  const { mowing, seasonMowings } = mowingCard(b, hocMm, work.plannedThisWeek);
   const water = waterCard(b);
   const feed = feedCard(b, water.irrigated);
   return {
@@ -53,7 +55,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
     water,
     feed,
     lines: linesCard(b),
-    level: await levelCard(ctx, b),
+    level: await levelCard(ctx, b, work.compliance),
     season: seasonBlock(b, seasonMowings, feed.applications),
   };
 }

@@ -17,10 +17,15 @@ const empty = (): Tally => ({ plannedHours: 0, actualHours: 0, plannedHoursDone:
 const r2 = (v: number) => Math.round(v * 100) / 100;
 const finish = <T extends Tally>(t: T): T => ({ ...t, plannedHours: r2(t.plannedHours), actualHours: r2(t.actualHours), plannedHoursDone: r2(t.plannedHoursDone) });
 
-export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.today()): Promise<Records> {
+/**
+ * Records over a range. `onlyFieldId` narrows them to one field: the field page's planned
+ * against done is this same tally, so it and Records never disagree.
+ */
+export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.today(), onlyFieldId?: number): Promise<Records> {
   authorize(ctx, 'read', 'WorkOrder', q.districtId ? { districtId: q.districtId } : undefined);
   const conditions = [gte(workOrders.plannedDate, q.from), lte(workOrders.plannedDate, q.to), readScope(ctx)];
   if (q.districtId) conditions.push(eq(workOrders.districtId, q.districtId));
+  if (onlyFieldId !== undefined) conditions.push(eq(workOrders.fieldId, onlyFieldId));
   const rows = (
     await ctx.db
       .select({ id, fieldId, fieldName, siteId, siteName, districtId, crewId, crewName, task, weekStart, plannedDate, plannedHours, actualHours, status, doneAt, details })

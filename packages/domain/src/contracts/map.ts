@@ -1,5 +1,6 @@
 /** `GET /api/map` and `GET /api/map/basemap`. */
 import type { FeatureCollection } from 'geojson';
+import type { DueState } from '../engine/due.ts';
 import type { Polygon } from '../schemas/common.ts';
 import type { FieldStatus, Grass, Level, SiteKind, Sport } from '../vocabulary.ts';
 
@@ -46,6 +47,14 @@ export interface MapField {
   overdue: boolean | null;
   /** Day the predicted height first passed 1.5 × HOC. */
   overdueSince: string | null;
+  /** Next field check by the level's Standards (`fieldCheckDue`) as of the day asked for; null without a check on record. */
+  checkDueOn: string | null;
+  checkState: DueState;
+  /** Day the next mowing falls due by the engine's mowing policy (`mowingDue`) over the growth since the last mowing; null when never mowed or not due by `asOf`. */
+  mowDueOn: string | null;
+  mowDueState: DueState;
+  /** The level's interval has passed but the grass has not grown enough to ask a cut. */
+  mowWaitingForGrowth: boolean;
   version: number;
   geometry: Polygon;
 }

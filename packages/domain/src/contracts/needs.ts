@@ -1,5 +1,6 @@
 /** `GET /api/fields/:id/needs`: what the turf engine says a field needs for a week (SI units throughout). */
 import type { StripeDirection } from '../engine/labour.ts';
+import type { RecordTally } from './records.ts';
 import type { MowerWarning } from '../engine/mowing.ts';
 import type { Level } from '../vocabulary.ts';
 
@@ -36,6 +37,10 @@ export interface GrowthNeed extends Explained {
 }
 
 export interface MowingNeed extends Explained {
+  /** Longest days between cuts by the level's Standards (`levelIntervalDays`), the figure the week plan and the Standards page show. */
+  intervalDays: number;
+  /** The week plan's mowings of this field in the week asked for (Records' tally); null when the caller may not read work orders. */
+  plannedThisWeek: { weekStart: string; asked: number; done: number } | null;
   mowingsThisWeek: number;
   mowingsPerWeek: number;
   weekMowingDates: string[];
@@ -121,7 +126,12 @@ export interface LevelNeed extends Explained {
   targetScore: number;
   latestCheck: { checkedOn: string; score: number } | null;
   scoreMet: boolean | null;
-  workCompliance: { tracked: boolean; note: string };
+  /**
+   * Work planned against work done on this field over `from`–`to` (the four weeks to the end of
+   * the week asked for, by the department's calendar, not the weather's): Records' own tally for
+   * the field. `tally` is null when the caller may not read work orders.
+   */
+  workCompliance: { tracked: boolean; note: string; from: string; to: string; tally: RecordTally | null };
 }
 
 /** The daily series of the unbroken run of weather around the week (the season chart). */

@@ -1,5 +1,5 @@
 /** Work orders as the crews and the board read them, and what a crew reports on them. */
-import type { WorkStatus, WorkTask } from '../vocabulary.ts';
+import type { FieldStatus, WorkStatus, WorkTask } from '../vocabulary.ts';
 import type { Instant, Items } from './common.ts';
 
 /**
@@ -27,6 +27,11 @@ export interface WorkOrderRow<At extends Instant = string> {
   fieldName: string;
   siteId: number;
   siteName: string;
+  /** The site's street address, for the crew's way there. */
+  siteAddress: string;
+  /** The field's status now (open, restricted, closed) and its note: a crew must see a closure before it drives there. */
+  fieldStatus: FieldStatus;
+  fieldStatusNote: string;
   siteLat: number;
   siteLng: number;
   districtId: number;

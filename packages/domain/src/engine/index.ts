@@ -4,6 +4,7 @@ export * from './dates.ts';
 export * from './standards.ts';
 export * from './growth.ts';
 export * from './mowing.ts';
+export * from './due.ts';
 export * from './labour.ts';
 export * from './routing.ts';
 export * from './fao56.ts';

@@ -4,6 +4,7 @@ import {
   checkMowerForHoc,
   hocFor,
   hoursPerMowingPolygon,
+  levelIntervalDays,
   longAxis,
   mowTriggerHeightMm,
   mowerTypeFor,
@@ -13,6 +14,7 @@ import {
   stripePassPlan,
   type HocNeed,
   type LabourNeed,
+  type MowingNeed,
 } from '@swardwise/domain';
 import { input, sum, type NeedsBasis } from './basis.ts';
 
@@ -76,12 +78,14 @@ function nextMowing(b: NeedsBasis, hocMm: number, mowOptions: ReturnType<typeof 
     nextMowingOn = seasonSim.mowings.find((m) => m.date >= weekStart)?.date ?? null;
     lastCutNote = 'No mowing is on record: the simulation starts cut to HOC on the first day of weather.';
   } else if (lastIdx < 0 || lastIdx >= prepared.dates.length - 1) {
-    const after = field.lastMowedOn > prepared.dates[prepared.dates.length - 1]!;
+    // On or after the last day of weather nothing after the cut is known: a date from the
+    // season run would fall before the last mowing.
+    const after = field.lastMowedOn >= prepared.dates[prepared.dates.length - 1]!;
     lastCutNote = after
-      ? `Last mowed ${field.lastMowedOn}, after the last day of weather on file.`
+      ? `Last mowed ${field.lastMowedOn}, on or after the last day of weather on file.`
       : `Last mowed ${field.lastMowedOn}, outside the weather on file: the next mowing follows the season simulation.`;
-    if (!after) nextMowingOn = seasonSim.mowings.find((m) => m.date >= weekStart)?.date ?? null;
-    else nextMowingNote = 'The next mowing cannot be projected until weather after the last mowing arrives.';
+    if (!after) nextMowingOn = seasonSim.mowings.find((m) => m.date >= weekStart && m.date > field.lastMowedOn!)?.date ?? null;
+    else nextMowingNote = `The next mowing cannot be projected until weather after ${field.lastMowedOn} arrives; by the Standards it falls due within ${levelIntervalDays(b.std)} days once the grass grows.`;
   } else {
     const growthAfter = daily.growthMm.slice(lastIdx + 1);
     const from = prepared.dates[lastIdx + 1]!;
@@ -97,14 +101,17 @@ function nextMowing(b: NeedsBasis, hocMm: number, mowOptions: ReturnType<typeof 
 }
 
 /** Mowing by the one-third rule over the season, with the week's share. */
-export function mowingCard(b: NeedsBasis, hocMm: number) {
+export function mowingCard(b: NeedsBasis, hocMm: number, plannedThisWeek: MowingNeed['plannedThisWeek']) {
   const { field, std, prepared, daily, w0, w1, weekDays, requested, weekStart, weekEnd } = b;
   const mowOptions = mowingPolicy(hocMm, std);
   const seasonSim = simulateMowing(hocMm, daily.growthMm, hocMm, { startDate: prepared.startDate, ...mowOptions });
   const weekMowings = seasonSim.mowings.filter((m) => m.dayIndex >= w0 && m.dayIndex <= w1);
   const asOf = requested >= weekStart && requested <= weekEnd ? requested : weekEnd;
   const { nextMowingOn, overdueOn, lastCutNote, nextMowingNote } = nextMowing(b, hocMm, mowOptions, seasonSim);
+  const intervalDays = levelIntervalDays(std);
   const mowing = {
+    intervalDays,
+    plannedThisWeek,
     mowingsThisWeek: weekMowings.length,
     mowingsPerWeek: (weekMowings.length / weekDays) * 7,
     weekMowingDates: weekMowings.map((m) => m.date),
@@ -118,9 +125,10 @@ export function mowingCard(b: NeedsBasis, hocMm: number) {
       input('trigger', 'Mow before the grass reaches (1.5 × HOC)', mowTriggerHeightMm(hocMm), 'mm'),
       input('minPerWeek', 'Standards: least mowings per week', std.minMowingsPerWeek),
       input('maxInterval', 'Standards: longest interval', std.maxMowingIntervalDays, 'd'),
+      input('interval', 'Mow at least every (the shorter of the longest interval and 7 ÷ least mowings per week)', intervalDays, 'd'),
       input('lastMowed', 'Last mowed', field.lastMowedOn),
     ],
-    how: `One-third rule: never remove more than a third of the leaf, so mow before the grass passes 1.5 × HOC. The predicted growth is run day by day; a cut also falls due when the level\u2019s longest interval or least frequency is reached (once the grass has grown a tenth of HOC). Mowings per week come from that run over the season; the next mowing and the overdue date from the last mowing on record. ${lastCutNote}`,
+    how: `One-third rule: never remove more than a third of the leaf, so mow before the grass passes 1.5 × HOC. The predicted growth is run day by day; a cut also falls due ${intervalDays} days after the last (level ${b.level}: the shorter of its longest interval, ${std.maxMowingIntervalDays} days, and 7 ÷ its ${std.minMowingsPerWeek} least mowings per week), once the grass has grown a tenth of HOC. Mowings per week come from that run over the week of weather shown; the week plan\u2019s mowings are counted from its work orders for the week asked for, as Records counts them; the next mowing and the overdue date from the last mowing on record. ${lastCutNote}`,
     cautions: [CAUTIONS.mowing],
   };
   return { mowing, seasonMowings: seasonSim.mowings };

@@ -16,12 +16,12 @@ function needs(): FieldNeeds {
     standards: { level: 2, name: 'Competition', version: 1, missingLevels: [] },
     hoc: { ...explained([{ key: 'override', label: 'Field override', value: null, unit: 'mm' }, { key: 'standardsHoc', label: 'Standards HOC', value: 50.8, unit: 'mm' }]), hocMm: 50.8, source: 'standards_sport', triggerHeightMm: 76.2, mowerKind: 'rotary', mowerWarnings: [] },
     growth: { ...explained(), gpDaily: [], gpMean: 0.8, growthMmPerDay: 3, growthMmWeek: 21 },
-    mowing: { ...explained(), mowingsThisWeek: 2, mowingsPerWeek: 2, weekMowingDates: [], nextMowingOn: '2026-06-04', nextMowingNote: null, overdueOn: '2026-06-09', overdueNow: false, lastMowedOn: '2026-06-01' },
+    mowing: { intervalDays: 3, plannedThisWeek: null, ...explained(), mowingsThisWeek: 2, mowingsPerWeek: 2, weekMowingDates: [], nextMowingOn: '2026-06-04', nextMowingNote: null, overdueOn: '2026-06-09', overdueNow: false, lastMowedOn: '2026-06-01' },
     labour: { ...explained([{ key: 'area', label: 'Field area', value: 4046.8564224, unit: 'm2' }]), method: 'field_capacity', hoursPerMowing: 0.5, hoursPerWeek: 1, seasonHours: 30, passPlan: null, capacityHours: 0.5 },
     water: { ...explained(), cautions: ['Watering restrictions are local law.'], irrigated: true, notIrrigatedReason: null, et0Method: 'penman_monteith', et0Mm: 25.4, kc: 0.95, etcMm: 24.13, rainMm: 0, effectiveRainMm: 0, shareOfEtc: 0.8, netMm: 19.3, grossMm: 27.6, runTimeMin: 138, volumeL: 3785.411784 },
     feed: { ...explained(), annualNGPerM2: 4.8824, reasons: [], monthlyNGPerM2: [], product: { analysis: '28-0-6', slowReleaseShare: 0.5, bagKg: 22.7 }, applications: [], nextApplication: null, productKgSeason: 10 },
     lines: { ...explained(), kept: false, reason: 'No lines are kept on this kind of field.', template: null, lineLengthM: 0, elements: [], paintedAreaM2: 0, mixedLitres: 0, concentrateLitres: 0, waterLitres: 0, hoursPerRepaint: 0, firstCoat: { mixedLitres: 0, concentrateLitres: 0, waterLitres: 0, hours: 0 }, repaintDays: null, repaints: 0, firstCoats: 0, touchUps: 0, seasonMixedLitres: 0, seasonConcentrateLitres: 0, seasonHours: 0 },
-    level: { ...explained(), assigned: 2, recommended: 3, points: 4, reasons: ['x'], targetScore: 75, latestCheck: null, scoreMet: null, workCompliance: { tracked: false, note: 'Not tracked yet.' } },
+    level: { ...explained(), assigned: 2, recommended: 3, points: 4, reasons: ['x'], targetScore: 75, latestCheck: null, scoreMet: null, workCompliance: { tracked: false, note: 'Not tracked yet.', from: '2026-11-09', to: '2026-12-06', tally: null } },
     season: { stationId: 1, start: '2026-06-01', end: '2026-06-07', dates: [], gp: [], growthMm: [], waterNeedMm: [], mowings: [], feedApplications: [] },
   };
 }

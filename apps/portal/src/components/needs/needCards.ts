@@ -48,7 +48,11 @@ export function buildNeedCards(x: FieldNeeds, u: UnitSystem): NeedCardModel[] {
       figures: [
         { label: 'Growth potential (mean)', value: n(growth.gpMean, 2) },
         { label: 'Predicted growth', value: `${depthText(growth.growthMmPerDay, u)}/day` },
-        { label: 'Mowings per week', value: n(mowing.mowingsPerWeek, 1), test: 'needs-mowings-per-week' },
+        { label: 'Mow at least every', value: `${mowing.intervalDays} days (Standards)`, test: 'needs-mowing-interval' },
+        ...(mowing.plannedThisWeek
+          ? [{ label: `Week plan, week of ${dateText(mowing.plannedThisWeek.weekStart)}`, value: `${mowing.plannedThisWeek.done} of ${mowing.plannedThisWeek.asked} mowings done`, test: 'needs-mowings-planned' }]
+          : []),
+        { label: 'Predicted mowings per week', value: n(mowing.mowingsPerWeek, 1), test: 'needs-mowings-per-week' },
         { label: 'Next mowing', value: dateText(mowing.nextMowingOn), test: 'needs-next-mowing' },
         { label: 'Overdue from', value: dateText(mowing.overdueOn) },
         { label: 'Last mowed', value: dateText(mowing.lastMowedOn) },
@@ -148,6 +152,13 @@ export function buildNeedCards(x: FieldNeeds, u: UnitSystem): NeedCardModel[] {
         { label: 'Recommended', value: levelName(level.recommended), test: 'needs-recommended-level' },
         { label: 'Target score', value: String(level.targetScore) },
         { label: 'Latest surface score', value: level.latestCheck ? `${n(level.latestCheck.score, 0)} (${dateText(level.latestCheck.checkedOn)})` : 'No field check on file' },
+        ...(level.workCompliance.tally
+          ? [
+              { label: 'Work orders done', value: `${level.workCompliance.tally.ordersDone} of ${level.workCompliance.tally.ordersDone + level.workCompliance.tally.ordersOpen + level.workCompliance.tally.ordersSkipped}`, test: 'needs-orders-done' },
+              { label: 'Mowings done', value: `${level.workCompliance.tally.mowingsDone} of ${level.workCompliance.tally.mowingsAsked} asked`, test: 'needs-mowings-done' },
+              { label: 'Hours, planned / actual', value: `${hoursText(level.workCompliance.tally.plannedHoursDone)} / ${hoursText(level.workCompliance.tally.actualHours)}` },
+            ]
+          : []),
       ],
       notes: [
         ...(level.scoreMet === null ? [] : [{ text: level.scoreMet ? 'The latest surface score meets the level\u2019s target.' : 'The latest surface score is below the level\u2019s target.', type: level.scoreMet ? ('info' as const) : ('warning' as const) }]),

@@ -40,7 +40,7 @@ describe('WeekGrid', () => {
     expect(w.findAll('[data-test="day-header"]').map((h) => h.text())).toEqual(['Mon 30 Nov', 'Tue 1 Dec', 'Wed 2 Dec', 'Thu 3 Dec', 'Fri 4 Dec', 'Sat 5 Dec', 'Sun 6 Dec']);
   });
 
-  test('should show each card with its task, field, site, hours, status and marks in its cell', () => {
+  test('should show each card with its task, field, site and hours, and one mark for what the card does not say already', () => {
     const a = order({ crewId: 11, plannedDate: DATES[1], task: 'paint_lines', fieldName: 'Diamond 2', siteName: 'Birch Park', plannedHours: 2.25, pinned: true, origin: 'manual', status: 'assigned' });
     const w = mountGrid(board([a, order({ crewId: null, plannedDate: DATES[1] })]));
     const card = cell(w, 11, DATES[1]!).get('[data-test="order-card"]');
@@ -48,11 +48,33 @@ describe('WeekGrid', () => {
     expect(card.text()).toContain('Diamond 2');
     expect(card.text()).toContain('Birch Park');
     expect(card.text()).toContain('2.3 h');
-    expect(card.text()).toContain('Assigned');
-    expect(card.find('[data-test="mark-pinned"]').exists()).toBe(true);
-    expect(card.find('[data-test="mark-manual"]').exists()).toBe(true);
+    // Assigned (it sits in a crew's row), pinned and added by hand all say one thing: one mark.
+    expect(card.findAll('.card__mark').map((m) => m.text())).toEqual(['By hand']);
+    expect(card.attributes('aria-label')).toContain('Assigned, added by hand');
     expect(cell(w, 'none', DATES[1]!).findAll('[data-test="order-card"]')).toHaveLength(1);
     expect(cell(w, 12, DATES[1]!).findAll('[data-test="order-card"]')).toHaveLength(0);
+  });
+
+  test('should mark a pinned card once and a started or done one by its status', () => {
+    const pinned = order({ crewId: 11, plannedDate: DATES[2], pinned: true, status: 'assigned' });
+    const done = order({ crewId: 11, plannedDate: DATES[2], status: 'done' });
+    const w = mountGrid(board([pinned, done]));
+    const cards = cell(w, 11, DATES[2]!).findAll('[data-test="order-card"]');
+    expect(cards.map((c) => c.findAll('.card__mark').map((m) => m.text()))).toEqual([['Pinned'], ['Done']]);
+  });
+
+  test('should show every card of a busy crew-day, and open a very busy one as counts with a way to every card', async () => {
+    const busy = Array.from({ length: 12 }, (_, i) => order({ crewId: 11, plannedDate: DATES[3], siteName: `Long Named Memorial Recreation Ground ${i}` }));
+    const w = mountGrid(board(busy));
+    expect(cell(w, 11, DATES[3]!).findAll('[data-test="order-card"]')).toHaveLength(12);
+    const tooMany = Array.from({ length: 30 }, (_, i) => order({ crewId: null, plannedDate: DATES[4], task: i % 3 ? 'mow' : 'field_check' }));
+    const w2 = mountGrid(board(tooMany));
+    const c = cell(w2, 'none', DATES[4]!);
+    expect(c.findAll('[data-test="order-card"]')).toHaveLength(0);
+    expect(c.get('[data-test="cell-counts"]').text()).toContain('20 × Mow');
+    expect(c.get('[data-test="cell-counts"]').text()).toContain('10 × Field check');
+    await c.get('[data-test="cell-expand"]').trigger('click');
+    expect(cell(w2, 'none', DATES[4]!).findAll('[data-test="order-card"]')).toHaveLength(30);
   });
 
   test('should show the load bar of a crew-day and warn when it runs over the available hours', () => {

@@ -166,3 +166,16 @@ export function cautionsFor(tasks: Iterable<WorkTask>): { key: CautionKey; text:
   for (const t of tasks) for (const k of TASK_CAUTIONS[t] ?? []) keys.add(k);
   return CAUTION_ORDER.filter((k) => keys.has(k)).map((key) => ({ key, text: CAUTIONS[key] }));
 }
+
+/**
+ * What a crew takes for an order: the unit the plan assigned, else for a mowing the kind of
+ * mower its HOC needs (older rows name the kind under `mower`); empty when nothing is named.
+ */
+export function equipmentText(o: Pick<WorkOrderRow, 'task' | 'equipmentName' | 'details'>): string {
+  if (o.equipmentName) return o.equipmentName;
+  if (o.task !== 'mow') return '';
+  const kind = o.details.mowerKind ?? o.details.mower;
+  if (kind === 'reel') return 'Reel mower';
+  if (kind === 'rotary') return 'Rotary mower';
+  return typeof kind === 'string' && kind ? kind : '';
+}

@@ -1,0 +1,126 @@
+/**
+ * The care of each field beside its row: last mowed, next mowing due, what is overdue and the
+ * latest surface score. Every figure is the map answer's (`GET /api/map`), which the API works
+ * out once per field with the engine's `mowingDue` and `fieldCheckDue`; the pages only show it.
+ */
+import type { FieldRow, MapField } from '@swardwise/domain';
+import { h } from 'vue';
+import { columnHelper, labelled, type DataColumn } from '../data-table/features.ts';
+
+export type OverdueKey = 'mowing_check' | 'mowing' | 'check' | 'none';
+
+export const OVERDUE_LABELS: Record<OverdueKey, string> = {
+  mowing_check: 'Mowing and check',
+  mowing: 'Mowing',
+  check: 'Check',
+  none: 'Nothing',
+};
+
+export interface FieldCareRow extends FieldRow {
+  lastMowedOn: string | null;
+  /** Next mowing due by the one mowing policy; null when not due by the day the map describes. */
+  mowDueOn: string | null;
+  mowWaitingForGrowth: boolean;
+  mowOverdue: boolean;
+  checkDueOn: string | null;
+  checkOverdue: boolean;
+  overdue: OverdueKey;
+  score: number | null;
+  scoredOn: string | null;
+}
+
+/** A mowing is overdue when the grass has passed 1.5 × HOC or the policy's due day has gone by. */
+export function mowingOverdue(m: Pick<MapField, 'overdue' | 'mowDueState'>): boolean {
+  return m.overdue === true || m.mowDueState === 'overdue';
+}
+
+/** A field check is overdue past its level's interval, or when none is on record. */
+export function checkOverdue(m: Pick<MapField, 'checkState'>): boolean {
+  return m.checkState === 'overdue' || m.checkState === 'never';
+}
+
+/** The field rows with their care from the map answer (a field the map lacks gets blanks). */
+export function withCare(rows: readonly FieldRow[], map: readonly MapField[]): FieldCareRow[] {
+  const byId = new Map(map.map((m) => [m.id, m]));
+  return rows.map((f) => {
+    const m = byId.get(f.id);
+    const mow = m ? mowingOverdue(m) : false;
+    const check = m ? checkOverdue(m) : false;
+    return {
+      ...f,
+      lastMowedOn: m?.lastMowedOn ?? null,
+      mowDueOn: m?.mowDueOn ?? null,
+      mowWaitingForGrowth: m?.mowWaitingForGrowth ?? false,
+      mowOverdue: mow,
+      checkDueOn: m?.checkDueOn ?? null,
+      checkOverdue: check,
+      overdue: mow && check ? 'mowing_check' : mow ? 'mowing' : check ? 'check' : 'none',
+      score: m?.score ?? null,
+      scoredOn: m?.scoredOn ?? null,
+    };
+  });
+}
+
+/** "Dec 2" in the department's calendar (ISO dates carry no time, so UTC formats them as written). */
+export const shortDate = (iso: string) => new Date(`${iso}T00:00:00Z`).toLocaleDateString('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' });
+
+const col = columnHelper<FieldCareRow>();
+const dash = () => h('span', { class: 'sw-muted' }, '—');
+
+export type CareColumnKey = 'lastMowed' | 'mowDue' | 'overdue' | 'score' | 'checkDue';
+
+/** The care columns; ISO dates sort as text, blanks last. */
+export function careColumns(keys: CareColumnKey[]): DataColumn<FieldCareRow>[] {
+  const all: Record<CareColumnKey, DataColumn<FieldCareRow>> = {
+    lastMowed: col.accessor((r) => r.lastMowedOn ?? undefined, {
+      id: 'lastMowed',
+      header: 'Last mowed',
+      sortUndefined: 'last',
+      enableGlobalFilter: false,
+      cell: (c) => (c.getValue() ? shortDate(c.getValue()!) : dash()),
+    }),
+    mowDue: col.accessor((r) => r.mowDueOn ?? undefined, {
+      id: 'mowDue',
+      header: 'Mow due',
+      sortUndefined: 'last',
+      enableGlobalFilter: false,
+      meta: { exportValue: (v: string | undefined) => v ?? null },
+      cell: (c) => {
+        const r = c.row.original;
+        if (r.mowDueOn) return h('span', { class: r.mowOverdue ? 'sw-late' : undefined }, shortDate(r.mowDueOn));
+        if (r.mowWaitingForGrowth) return h('span', { class: 'sw-muted' }, 'not growing');
+        return r.lastMowedOn ? h('span', { class: 'sw-muted' }, 'not due') : dash();
+      },
+    }),
+    checkDue: col.accessor((r) => r.checkDueOn ?? undefined, {
+      id: 'checkDue',
+      header: 'Check due',
+      sortUndefined: 'last',
+      enableGlobalFilter: false,
+      cell: (c) => {
+        const r = c.row.original;
+        if (!r.checkDueOn) return h('span', { class: 'sw-late' }, 'none yet');
+        return h('span', { class: r.checkOverdue ? 'sw-late' : undefined }, shortDate(r.checkDueOn));
+      },
+    }),
+    overdue: col.accessor('overdue', {
+      id: 'overdue',
+      header: 'Overdue',
+      ...labelled(OVERDUE_LABELS),
+      sortDescFirst: true,
+      sortFn: (a: { original: FieldCareRow }, b: { original: FieldCareRow }) => overdueRank(a.original.overdue) - overdueRank(b.original.overdue),
+      cell: (c) => (c.getValue() === 'none' ? dash() : h('strong', { class: 'sw-late', 'data-test': 'overdue' }, OVERDUE_LABELS[c.getValue() as OverdueKey])),
+    }),
+    score: col.accessor((r) => r.score ?? undefined, {
+      id: 'score',
+      header: 'Score',
+      sortUndefined: 'last',
+      enableGlobalFilter: false,
+      meta: { align: 'right' },
+      cell: (c) => (c.getValue() === undefined ? dash() : String(Math.round(c.getValue()!))),
+    }),
+  };
+  return keys.map((k) => all[k]);
+}
+
+const overdueRank = (k: OverdueKey) => ({ mowing_check: 3, mowing: 2, check: 1, none: 0 })[k];
