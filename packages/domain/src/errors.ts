@@ -78,6 +78,8 @@ export const ERROR_CODES = {
   'week_plan/changed': 'conflict',
   'work_report/client_ref_taken': 'conflict',
   'work_report/already_done': 'conflict',
+  'work_report/not_finished': 'conflict',
+  'work_report/field_closed': 'conflict',
   'work_photo/no_file': 'invalid',
   'work_photo/not_an_image': 'unsupported',
   'work_photo/unsupported_format': 'unsupported',

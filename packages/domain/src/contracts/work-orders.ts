@@ -1,5 +1,5 @@
 /** Work orders as the crews and the board read them, and what a crew reports on them. */
-import type { WorkStatus, WorkTask } from '../vocabulary.ts';
+import type { FieldStatus, WorkStatus, WorkTask } from '../vocabulary.ts';
 import type { Instant, Items } from './common.ts';
 
 /**
@@ -16,6 +16,8 @@ export type WorkOrderDetails = {
   paintL?: number;
   eventTitle?: string;
   eventOn?: string;
+  /** The mowing pattern asked for (stripes, checkerboard…), when the order carries one. */
+  pattern?: string;
 } & Record<string, unknown>;
 
 /** A work order: a row of `GET /api/work-orders`, of the week board, and the order of every write. */
@@ -49,6 +51,13 @@ export interface WorkOrderRow<At extends Instant = string> {
   doneAt: At | null;
   version: number;
   photoCount: number;
+  /** The field's status now: a closed field stops the job (a done report is refused), a restricted one shows its reason. */
+  fieldStatus: FieldStatus;
+  /** Why the field is restricted or closed, as the foreman wrote it. */
+  fieldStatusNote: string;
+  /** Centre of the field's outline (WGS 84), for a `geo:` directions link. */
+  fieldLat: number;
+  fieldLng: number;
 }
 
 /** `POST /api/work-orders`, `PATCH /api/work-orders/:id`: the order and how many crew leads were e-mailed. */
@@ -72,6 +81,8 @@ export interface WorkUpdate<At extends Instant = string> {
 
 export interface WorkUpdateRow<At extends Instant = string> extends WorkUpdate<At> {
   createdBy: number | null;
+  /** Who sent the report, for the foreman reading it. */
+  createdByName: string | null;
   createdAt: At;
 }
 
@@ -106,3 +117,24 @@ export interface PhotoAnswer<At extends Instant = string> {
 }
 
 export type WorkOrderList<At extends Instant = string> = Items<WorkOrderRow<At>>;
+
+/** One logged job of a field's work history: the order, what the crew reported and its photos. */
+export interface WorkHistoryEntry<At extends Instant = string> {
+  order: WorkOrderRow<At>;
+  updates: WorkUpdateRow<At>[];
+  photos: WorkPhoto<At>[];
+}
+
+/** `GET /api/fields/:id/work`: the field's logged work, newest first, one page at a time. */
+export interface WorkHistoryPage<At extends Instant = string> {
+  items: WorkHistoryEntry<At>[];
+  page: number;
+  pageSize: number;
+  total: number;
+}
+
+/** `POST /api/work-orders/:id/reopen`: the order back in its open state and the entry that records why. */
+export interface ReopenAnswer<At extends Instant = string> {
+  order: WorkOrderDetail<At>;
+  update: WorkUpdate<At>;
+}

@@ -56,6 +56,20 @@ export const workReportSchema = z
   });
 export type WorkReportInput = z.infer<typeof workReportSchema>;
 
+/** `POST /api/work-orders/:id/reopen`: why a finished job is opened again. */
+export const reopenSchema = z.object({
+  reason: z.string().trim().max(500, 'keep the reason under 500 characters').default(''),
+  version: versionSchema.optional(),
+});
+export type ReopenInput = z.infer<typeof reopenSchema>;
+
+/** `GET /api/fields/:id/work`: which page of the field's work history. */
+export const pageQuerySchema = z.object({
+  page: z.coerce.number({ error: 'page must be a number' }).int('page must be a whole number').min(1, 'pages start at 1').max(10_000).default(1),
+  pageSize: z.coerce.number({ error: 'pageSize must be a number' }).int('pageSize must be a whole number').min(1).max(50, 'ask for at most 50 per page').default(10),
+});
+export type PageQuery = z.infer<typeof pageQuerySchema>;
+
 const eventFields = {
   fieldId: idSchema,
   kind: z.enum(FIELD_EVENT_KINDS, { error: `kind must be one of ${FIELD_EVENT_KINDS.join(', ')}` }),
