@@ -4,7 +4,7 @@ import path from 'node:path';
 import { and, eq } from 'drizzle-orm';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { auditLog, equipment, fields, workOrders } from '../../apps/api/src/db/schema/index.ts';
+import { auditLog, equipment, fieldChecks, fields, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { giveWork } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
@@ -166,5 +166,70 @@ describe('Today: the field’s status and where it is', () => {
     } finally {
       await db().update(fields).set({ status: 'open', statusNote: '' }).where(eq(fields.id, field));
     }
+  });
+});
+
+describe('a crew logs a field check from Today', () => {
+  const checkWork = async () => {
+    const id = await northWork();
+    await db().update(workOrders).set({ task: 'field_check' }).where(eq(workOrders.id, id));
+    return id;
+  };
+  const body = {
+    turfCoverPct: 82,
+    weedsPct: 6,
+    bareWornPct: 12,
+    bareAreas: ['goalmouths', 'centre'],
+    heightMm: 70,
+    hardnessReadingsG: [60, 75, 112],
+    hardnessDevice: 'portable_2_25kg',
+    evenness: 4,
+    divots: 3,
+    tornLeafTips: true,
+    notes: 'South goalmouth bare',
+    actualHours: 0.5,
+  };
+
+  test('should store the check in field_checks with its score and flags, mark the job done and list it on the field', async () => {
+    const id = await checkWork();
+    const crew = await api.signIn('crew');
+    const res = await crew.post(`/api/work-orders/${id}/field-check`).send(body);
+    expect(res.status).toBe(201);
+    const rows = await db().select().from(fieldChecks).where(eq(fieldChecks.workOrderId, id));
+    expect(rows).toHaveLength(1);
+    const row = rows[0]!;
+    expect(row).toMatchObject({ fieldId: api.fixture.fields.northSoccer, turfCoverPct: 82, barePct: 12, bareAreas: ['goalmouths', 'centre'], hardnessReadings: [60, 75, 112], gmaxDevice: 'portable_2_25kg', divots: 3, tornLeafTips: true, checkedBy: api.fixture.users.crew.id });
+    // real column: single precision.
+    expect(row.gmax).toBeCloseTo((60 + 75 + 112) / 3, 4);
+    expect(row.score).toBeGreaterThan(0);
+    expect(row.score).toBeLessThan(100);
+    // 112 G on the 2.25 kg tester is above the department's 100 G limit; the level's HOC of Soccer 1 is well under 70 ÷ 1.5 mm.
+    expect(row.flags).toEqual(expect.arrayContaining(['close_field_caution', 'overdue_mowing', 'check_blade_sharpness', 'cover_below_target']));
+    expect(res.body.cautions.join(' ')).toMatch(/head injury/);
+    expect(res.body.advice.join(' ')).toMatch(/blades’ sharpness before suspecting disease/);
+    expect((await order(id)).status).toBe('done');
+    expect((await order(id)).actualHours).toBe(0.5);
+    const listed = await (await api.signIn('foreman')).get(`/api/fields/${api.fixture.fields.northSoccer}/checks`);
+    expect(listed.status).toBe(200);
+    expect(listed.body.items[0]).toMatchObject({ id: row.id, workOrderId: id, checkedByName: expect.any(String) });
+    const audit = await db().select().from(auditLog).where(and(eq(auditLog.entity, 'field_check'), eq(auditLog.entityId, row.id)));
+    expect(audit).toHaveLength(1);
+  });
+
+  test('should refuse a bad check, a job that is not a check and another crew’s job, writing nothing', async () => {
+    const id = await checkWork();
+    const crew = await api.signIn('crew');
+    const before = (await db().select().from(fieldChecks)).length;
+    const bad = await crew.post(`/api/work-orders/${id}/field-check`).send({ ...body, turfCoverPct: 90, bareWornPct: 20 });
+    expect(bad.status).toBe(400);
+    const noTester = await crew.post(`/api/work-orders/${id}/field-check`).send({ ...body, hardnessDevice: null });
+    expect(noTester.status).toBe(400);
+    expect(noTester.body.error.details.issues[0].path).toMatch(/hardnessDevice/);
+    const mow = await northWork();
+    expect((await crew.post(`/api/work-orders/${mow}/field-check`).send(body)).status).toBe(409);
+    const south = await giveWork(db(), api.fixture.fields.southBaseball, api.fixture.crews.south);
+    expect((await crew.post(`/api/work-orders/${south}/field-check`).send(body)).status).toBe(403);
+    expect((await db().select().from(fieldChecks)).length).toBe(before);
+    expect((await order(id)).status).toBe('assigned');
   });
 });

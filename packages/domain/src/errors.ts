@@ -80,6 +80,7 @@ export const ERROR_CODES = {
   'work_report/already_done': 'conflict',
   'work_report/not_finished': 'conflict',
   'work_report/field_closed': 'conflict',
+  'field_check/not_a_check': 'conflict',
   'work_photo/no_file': 'invalid',
   'work_photo/not_an_image': 'unsupported',
   'work_photo/unsupported_format': 'unsupported',

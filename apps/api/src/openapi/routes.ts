@@ -26,6 +26,7 @@ import {
   mapQuerySchema,
   needsQuerySchema,
   pageQuerySchema,
+  fieldCheckSchema,
   reopenSchema,
   resetPasswordSchema,
   signInSchema,
@@ -57,7 +58,7 @@ import { allowed, publicAccess, signedIn, type Access } from './access.ts';
 
 /** The list queries default their dates to the department's today; the documented input is the same whatever the day. */
 const DOC_TODAY = '2000-01-01';
-import { bool, date, int, nullable, ref, row, rows, shape, str, strings, type ErrorStatus } from './answers.ts';
+import { bool, date, int, nullable, num, ref, row, rows, shape, str, strings, type ErrorStatus } from './answers.ts';
 
 export type Method = 'get' | 'post' | 'patch' | 'delete';
 
@@ -368,6 +369,18 @@ const workOrders: RouteDoc[] = [
   },
   {
     method: 'post',
+    path: '/api/work-orders/:id/field-check',
+    tag: 'Work orders',
+    summary: 'Log a field check on a field-check work order: scored, flagged, stored, and the order done',
+    description: 'Hardness outside the tester’s range and wet fields carry the usual cautions; local policy decides on closing a field.',
+    access: allowed('log', 'WorkOrder'),
+    params: idParamSchema,
+    body: fieldCheckSchema,
+    answers: [json(201, 'The stored check with its score and flags, the advice for each flag and the cautions.', shape({ check: row('The field check'), advice: strings('What each flag means'), cautions: strings('Safety cautions'), coverTargetPct: int('The level’s cover target (%)'), hocMm: num('The field’s HOC (mm)') }))],
+    errors: [409],
+  },
+  {
+    method: 'post',
     path: '/api/work-orders/:id/reopen',
     tag: 'Work orders',
     summary: 'Reopen a done or skipped work order',
@@ -537,6 +550,15 @@ const fields: RouteDoc[] = [
     access: allowed('read', 'Field'),
     params: idParamSchema,
     answers: [json(200, 'The field.', shape({ field: row('The field') }))],
+  },
+  {
+    method: 'get',
+    path: '/api/fields/:id/checks',
+    tag: 'Fields',
+    summary: 'A field’s latest field checks with their scores and flags, newest first',
+    access: allowed('read', 'FieldCheck'),
+    params: idParamSchema,
+    answers: [json(200, 'Up to 20 checks.', shape({ items: rows('Field checks') }))],
   },
   {
     method: 'get',

@@ -6,6 +6,7 @@ import { parse } from '../http/validate.ts';
 import { createField, deleteField, getField, listFieldsJson, updateField } from '../services/fields.ts';
 import { fieldNeeds } from '../services/needs.ts';
 import { fieldWorkHistory } from '../services/field-history.ts';
+import { listFieldChecks } from '../services/field-checks.ts';
 import { writeRoutes } from './write-routes.ts';
 
 export function fieldsRouter({ db, config }: AppDeps): Router {
@@ -30,6 +31,11 @@ export function fieldsRouter({ db, config }: AppDeps): Router {
   router.get('/:id/work', async (req, res) => {
     const { id } = parse(idParamSchema, req.params, 'params');
     res.json(await fieldWorkHistory(ctxOf(db, req), id, parse(pageQuerySchema, req.query, 'query')));
+  });
+
+  router.get('/:id/checks', async (req, res) => {
+    const { id } = parse(idParamSchema, req.params, 'params');
+    res.json(await listFieldChecks(ctxOf(db, req), id));
   });
 
   writeRoutes(router, db, '/', 'field', {

@@ -113,7 +113,8 @@ function checkTransition(current: OrderRow['status'], next: WorkReportInput['sta
  * foreman opens it again (a skip with the reason is how the crew reports it).
  */
 function checkFieldOpen(order: OrderRow, next: WorkReportInput['status']) {
-  if (order.fieldStatus !== 'closed' || next === 'skipped') return;
+  // A check of a closed field is how the foreman learns whether it may open again.
+  if (order.fieldStatus !== 'closed' || next === 'skipped' || order.task === 'field_check') return;
   const why = order.fieldStatusNote ? `: ${order.fieldStatusNote}` : '';
   throw appError('work_report/field_closed', `${order.fieldName} is ${FIELD_STATUS_LABELS.closed.toLowerCase()}${why}. The work cannot be ${next === 'done' ? 'logged done' : 'started'} while the field is closed; skip it with the reason or ask your foreman.`, {
     fieldStatus: order.fieldStatus,
