@@ -34,6 +34,10 @@ export function order(over: Partial<WorkOrderRow> = {}): WorkOrderRow {
     siteLat: 40.01,
     siteLng: -75.02,
     photoCount: 0,
+    fieldStatus: 'open',
+    fieldStatusNote: '',
+    fieldLat: 41.5,
+    fieldLng: -66.5,
     ...over,
   };
 }
