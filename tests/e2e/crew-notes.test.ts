@@ -77,8 +77,9 @@ describe('a crew’s note and photo reach the foreman', () => {
       await form.locator('[data-test="check-evenness"]').getByText('4', { exact: true }).click();
       await form.locator('[data-test="check-divots"]').getByText('3', { exact: true }).click();
       await form.locator('[data-test="check-tips"]').click();
+      await form.locator('[data-test="check-photos"]').setInputFiles(await turfPhoto('centre.jpg', 800, 600));
       expect(await phone.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
-      await phone.screenshot({ path: path.join(shots, 'today-phone-field-check.png'), fullPage: true });
+      await form.screenshot({ path: path.join(shots, 'today-phone-field-check.png') });
       await form.locator('[data-test="check-save"]').click();
       await form.locator('[data-test="check-result"]').waitFor();
       expect(await form.locator('[data-test="check-result"]').innerText()).toMatch(/Surface score \d+[\s\S]*check blade sharpness before suspecting disease[\s\S]*head injury/i);
@@ -86,6 +87,8 @@ describe('a crew’s note and photo reach the foreman', () => {
 
       const checks = await foreman.evaluate(async (f) => (await (await fetch(`/api/fields/${f}/checks`)).json()).items as { workOrderId: number; hardnessReadings: number[] }[], field.id);
       expect(checks[0]).toMatchObject({ workOrderId: check.body.id, hardnessReadings: [62, 70, 104] });
+      const checkOrder = await foreman.evaluate(async (id) => (await (await fetch(`/api/work-orders/${id}`)).json()) as { photos: unknown[] }, check.body.id as number);
+      expect(checkOrder.photos).toHaveLength(1);
 
       // On the desktop: the order on the week board carries the note and the photo.
       await foreman.goto(`${baseUrl}/week?week=${mondayOf(today)}`);
