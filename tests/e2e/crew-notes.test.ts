@@ -105,7 +105,7 @@ describe('a crew’s note and photo reach the foreman', () => {
       await foreman.goto(`${baseUrl}/fields/${field.id}`);
       const history = foreman.locator('[data-test="field-work-history"]');
       await history.locator('[data-test="crew-note"]').filter({ hasText: NOTE }).waitFor();
-      await foreman.waitForFunction(() => [...document.querySelectorAll<HTMLImageElement>('[data-test="field-work-history"] [data-test="crew-photo"] img')].some((i) => i.naturalWidth > 0));
+      await foreman.waitForFunction(() => Array.from(document.querySelectorAll<HTMLImageElement>('[data-test="field-work-history"] [data-test="crew-photo"] img')).some((i) => i.naturalWidth > 0));
       await foreman.locator('[data-test="field-checks"] [data-test="field-check-row"]').first().waitFor();
       await history.scrollIntoViewIfNeeded();
       await foreman.screenshot({ path: path.join(shots, 'field-page-work-history.png'), fullPage: true });
