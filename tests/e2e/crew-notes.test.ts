@@ -79,7 +79,11 @@ describe('a crew’s note and photo reach the foreman', () => {
       await form.locator('[data-test="check-tips"]').click();
       await form.locator('[data-test="check-photos"]').setInputFiles(await turfPhoto('centre.jpg', 800, 600));
       expect(await phone.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
-      await form.screenshot({ path: path.join(shots, 'today-phone-field-check.png') });
+      // The phone's screen as the crew sees it: the top of the form, then the readings and ratings.
+      await form.locator('[data-test="check-turf"]').scrollIntoViewIfNeeded();
+      await phone.screenshot({ path: path.join(shots, 'today-phone-field-check.png') });
+      await form.locator('[data-test="check-evenness"]').scrollIntoViewIfNeeded();
+      await phone.screenshot({ path: path.join(shots, 'today-phone-field-check-readings.png') });
       await form.locator('[data-test="check-save"]').click();
       await form.locator('[data-test="check-result"]').waitFor();
       expect(await form.locator('[data-test="check-result"]').innerText()).toMatch(/Surface score \d+[\s\S]*check blade sharpness before suspecting disease[\s\S]*head injury/i);
