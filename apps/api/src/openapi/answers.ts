@@ -63,7 +63,7 @@ export type ErrorStatus = keyof typeof ERROR_ANSWERS;
 
 // Small builders for described answers.
 export const str = (description?: string): Schema => ({ type: 'string', ...(description ? { description } : {}) });
-const num = (description?: string): Schema => ({ type: 'number', ...(description ? { description } : {}) });
+export const num = (description?: string): Schema => ({ type: 'number', ...(description ? { description } : {}) });
 export const int = (description?: string): Schema => ({ type: 'integer', ...(description ? { description } : {}) });
 export const bool = (description?: string): Schema => ({ type: 'boolean', ...(description ? { description } : {}) });
 export const date = (description?: string): Schema => ({ type: 'string', format: 'date', ...(description ? { description } : {}) });

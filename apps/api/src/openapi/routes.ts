@@ -26,6 +26,9 @@ import {
   listQuerySchema,
   mapQuerySchema,
   needsQuerySchema,
+  pageQuerySchema,
+  fieldCheckSchema,
+  reopenSchema,
   resetPasswordSchema,
   signInSchema,
   updateCrewSchema,
@@ -56,7 +59,7 @@ import { allowed, publicAccess, signedIn, type Access } from './access.ts';
 
 /** The list queries default their dates to the department's today; the documented input is the same whatever the day. */
 const DOC_TODAY = '2000-01-01';
-import { bool, date, int, nullable, ref, row, rows, shape, str, strings, type ErrorStatus } from './answers.ts';
+import { bool, date, int, nullable, num, ref, row, rows, shape, str, strings, type ErrorStatus } from './answers.ts';
 
 export type Method = 'get' | 'post' | 'patch' | 'delete';
 
@@ -367,6 +370,30 @@ const workOrders: RouteDoc[] = [
   },
   {
     method: 'post',
+    path: '/api/work-orders/:id/field-check',
+    tag: 'Work orders',
+    summary: 'Log a field check on a field-check work order: scored, flagged, stored, and the order done',
+    description: 'Hardness outside the tester’s range and wet fields carry the usual cautions; local policy decides on closing a field.',
+    access: allowed('log', 'WorkOrder'),
+    params: idParamSchema,
+    body: fieldCheckSchema,
+    answers: [json(201, 'The stored check with its score and flags, the advice for each flag and the cautions.', shape({ check: row('The field check'), advice: strings('What each flag means'), cautions: strings('Safety cautions'), coverTargetPct: int('The level’s cover target (%)'), hocMm: num('The field’s HOC (mm)') }))],
+    errors: [409],
+  },
+  {
+    method: 'post',
+    path: '/api/work-orders/:id/reopen',
+    tag: 'Work orders',
+    summary: 'Reopen a done or skipped work order',
+    description: 'The crew lead may reopen his crew’s job on the department’s day it was reported (a mistaken tap); a foreman or an administrator at any time. The order returns to its open state; the earlier report stays in its reports and the audit log.',
+    access: allowed('log', 'WorkOrder'),
+    params: idParamSchema,
+    body: reopenSchema,
+    answers: [json(200, 'The order in its open state and the report that records the reopening.', shape({ order: row('The work order after reopening'), update: row('The reopening report') }))],
+    errors: [409],
+  },
+  {
+    method: 'post',
     path: '/api/work-orders/:id/photos',
     tag: 'Work orders',
     summary: 'Add a photo to a work order',
@@ -534,6 +561,25 @@ const fields: RouteDoc[] = [
     access: allowed('read', 'Field'),
     params: idParamSchema,
     answers: [json(200, 'The field.', shape({ field: row('The field') }))],
+  },
+  {
+    method: 'get',
+    path: '/api/fields/:id/checks',
+    tag: 'Fields',
+    summary: 'A field’s latest field checks with their scores and flags, newest first',
+    access: allowed('read', 'FieldCheck'),
+    params: idParamSchema,
+    answers: [json(200, 'Up to 20 checks.', shape({ items: rows('Field checks') }))],
+  },
+  {
+    method: 'get',
+    path: '/api/fields/:id/work',
+    tag: 'Fields',
+    summary: 'A field’s work history: logged jobs with the crews’ notes and photos, newest first',
+    access: allowed('read', 'Field'),
+    params: idParamSchema,
+    query: pageQuerySchema,
+    answers: [json(200, 'One page of the field’s logged work orders, each with its reports and photos.', shape({ items: rows('Jobs: order, updates, photos'), page: int('Page number'), pageSize: int('Jobs per page'), total: int('Logged jobs in all') }))],
   },
   {
     method: 'get',

@@ -1,10 +1,12 @@
 import { Router } from 'express';
-import { createFieldSchema, idParamSchema, listQuerySchema, needsQuerySchema, updateFieldSchema } from '@swardwise/domain';
+import { createFieldSchema, idParamSchema, listQuerySchema, needsQuerySchema, pageQuerySchema, updateFieldSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { createField, deleteField, getField, listFieldsJson, updateField } from '../services/fields.ts';
 import { fieldNeeds } from '../services/needs.ts';
+import { fieldWorkHistory } from '../services/field-history.ts';
+import { listFieldChecks } from '../services/field-checks.ts';
 import { writeRoutes } from './write-routes.ts';
 
 export function fieldsRouter({ db, config }: AppDeps): Router {
@@ -24,6 +26,16 @@ export function fieldsRouter({ db, config }: AppDeps): Router {
     const { id } = parse(idParamSchema, req.params, 'params');
     const { date } = parse(needsQuerySchema, req.query, 'query');
     res.json({ needs: await fieldNeeds(ctxOf(db, req), id, date) });
+  });
+
+  router.get('/:id/work', async (req, res) => {
+    const { id } = parse(idParamSchema, req.params, 'params');
+    res.json(await fieldWorkHistory(ctxOf(db, req), id, parse(pageQuerySchema, req.query, 'query')));
+  });
+
+  router.get('/:id/checks', async (req, res) => {
+    const { id } = parse(idParamSchema, req.params, 'params');
+    res.json(await listFieldChecks(ctxOf(db, req), id));
   });
 
   writeRoutes(router, db, '/', 'field', {

@@ -1,13 +1,14 @@
 /** One work order as a crew works it: read it, report on it, add and show its photos. */
 import { Router } from 'express';
 import { z } from 'zod';
-import { idParamSchema, idSchema, workReportSchema, appError } from '@swardwise/domain';
+import { fieldCheckSchema, idParamSchema, idSchema, reopenSchema, workReportSchema, appError } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
 import { addWorkPhoto, PHOTO_MAX_BYTES, photoFile } from '../services/work-photos.ts';
-import { getWorkOrder, orderFor, reportWork } from '../services/work-reports.ts';
+import { logFieldCheck } from '../services/field-checks.ts';
+import { getWorkOrder, orderFor, reopenWork, reportWork } from '../services/work-reports.ts';
 
 // The photo and the phone's reference for it.
 const receivePhoto = receiveUpload({ field: 'photo', maxFileBytes: PHOTO_MAX_BYTES, maxFields: 1, code: 'work_photo', what: 'The photo' });
@@ -31,6 +32,19 @@ export function workReportsRouter({ db, config }: AppDeps): Router {
     const input = parse(workReportSchema, req.body, 'body');
     const answer = await reportWork(ctx, id, input);
     res.status(answer.duplicate ? 200 : 201).json(answer);
+  });
+
+  router.post('/:id/field-check', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    const { id } = parse(idParamSchema, req.params, 'params');
+    await orderFor(ctx, id, 'log');
+    res.status(201).json(await logFieldCheck(ctx, id, parse(fieldCheckSchema, req.body, 'body')));
+  });
+
+  router.post('/:id/reopen', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    const { id } = parse(idParamSchema, req.params, 'params');
+    res.json(await reopenWork(ctx, id, parse(reopenSchema, req.body ?? {}, 'body')));
   });
 
   router.post(

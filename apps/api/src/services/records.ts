@@ -4,10 +4,11 @@
  * counted late; one not done by its day is counted missed.
  */
 import { and, asc, eq, gte, lte } from 'drizzle-orm';
-import type { DateRangeQuery, RecordTally, Records } from '@swardwise/domain';
+import type { CrewNote, DateRangeQuery, RecordTally, Records } from '@swardwise/domain';
 import { crews, fields, sites, workOrders } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { readScope, workOrderColumns } from './work-orders.ts';
+import { photosOf, updatesOf } from './work-reports.ts';
 
 type Tally = RecordTally;
 /** The columns records read of each work order. */
@@ -72,6 +73,7 @@ export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.
     byWeek.set(r.weekStart, w);
   }
   return {
+    crewNotes: await crewNotes(ctx, rows),
     from: q.from,
     to: q.to,
     districtId: q.districtId ?? null,
@@ -82,4 +84,38 @@ export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.
     lateMowings: late.sort((a, b) => b.daysLate - a.daysLate || a.id - b.id),
     totals: finish(totals),
   };
+}
+
+/** The most jobs with crew notes one records answer lists. */
+const CREW_NOTES_MAX = 200;
+
+/** The jobs of the range a crew wrote a note on or took photos of, newest report first. */
+async function crewNotes(ctx: Ctx, rows: ReadonlyArray<{ id: number; fieldId: number; fieldName: string; siteName: string; task: CrewNote['task']; crewName: string | null; status: CrewNote['status'] }>): Promise<CrewNote[]> {
+  const ids = rows.map((r) => r.id);
+  const [updates, photos] = [await updatesOf(ctx.db, ids), await photosOf(ctx.db, ids)];
+  const out = new Map<number, CrewNote & { last: number }>();
+  const entry = (orderId: number) => {
+    let e = out.get(orderId);
+    if (!e) {
+      const r = rows.find((x) => x.id === orderId)!;
+      e = { orderId, fieldId: r.fieldId, fieldName: r.fieldName, siteName: r.siteName, task: r.task, crewName: r.crewName, status: r.status, reportedOn: '', notes: [], photos: [], last: 0 };
+      out.set(orderId, e);
+    }
+    return e;
+  };
+  for (const u of updates) {
+    if (!u.note) continue;
+    const e = entry(u.workOrderId);
+    e.notes.push(u.note);
+    if (u.reportedAt.getTime() >= e.last) Object.assign(e, { last: u.reportedAt.getTime(), reportedOn: ctx.clock.dateOf(u.reportedAt) });
+  }
+  for (const p of photos) {
+    const e = entry(p.workOrderId);
+    e.photos.push({ id: p.id, url: p.url });
+    if (p.createdAt.getTime() >= e.last) Object.assign(e, { last: p.createdAt.getTime(), reportedOn: ctx.clock.dateOf(p.createdAt) });
+  }
+  return [...out.values()]
+    .sort((a, b) => b.last - a.last || b.orderId - a.orderId)
+    .slice(0, CREW_NOTES_MAX)
+    .map(({ last: _last, ...note }) => (void _last, note));
 }

@@ -58,6 +58,9 @@ export const workOrderColumns = {
   doneAt: workOrders.doneAt,
   version: workOrders.version,
   photoCount: sql<number>`(select count(*)::int from ${workPhotos} where ${workPhotos.workOrderId} = ${workOrders.id})`,
+  // The centre of the outline's bounding box: inside any field shape a crew drives to.
+  fieldLat: sql<number>`(select (min((p->>1)::float8) + max((p->>1)::float8)) / 2 from jsonb_array_elements(${fields.geometry}->'coordinates'->0) p)`,
+  fieldLng: sql<number>`(select (min((p->>0)::float8) + max((p->>0)::float8)) / 2 from jsonb_array_elements(${fields.geometry}->'coordinates'->0) p)`,
 };
 
 export type WorkOrderRow = Awaited<ReturnType<typeof selectRows>>[number];

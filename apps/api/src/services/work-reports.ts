@@ -4,12 +4,12 @@
  * answer is answered again, not counted twice. A done mowing moves the field's last mowing
  * forward and adds the hours to the mower's hour meter.
  */
-import { and, asc, eq, sql } from 'drizzle-orm';
-import { appError, errors, type ReportAnswer as ReportAnswerOf, type WorkOrderAnswer, type WorkReportInput } from '@swardwise/domain';
+import { and, asc, desc, eq, sql } from 'drizzle-orm';
+import { appError, errors, FIELD_STATUS_LABELS, type ReopenAnswer, type ReopenInput, type ReportAnswer as ReportAnswerOf, type WorkOrderAnswer, type WorkPhoto, type WorkReportInput, type WorkUpdateRow } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
-import { crews, equipment, fields, sites, workOrders, workPhotos, workUpdates } from '../db/schema/index.ts';
+import { crews, equipment, fields, sites, users, workOrders, workPhotos, workUpdates } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
-import { authorize, type Ctx } from './context.ts';
+import { authorize, can, type Ctx } from './context.ts';
 import { workOrderColumns } from './work-orders.ts';
 
 /** A report may carry the phone's clock a little ahead of the server's; more is a wrong clock. */
@@ -47,22 +47,37 @@ const updateColumns = {
   reportedAt: workUpdates.reportedAt,
 };
 
-const photoUrl = (orderId: number, photoId: number) => `/api/work-orders/${orderId}/photos/${photoId}`;
+export const photoUrl = (orderId: number, photoId: number) => `/api/work-orders/${orderId}/photos/${photoId}`;
+
+/** The reports on some orders, oldest first, with who sent each. */
+export async function updatesOf(db: Queryable, orderIds: readonly number[]): Promise<Array<WorkUpdateRow<Date> & { workOrderId: number }>> {
+  if (orderIds.length === 0) return [];
+  return db
+    .select({ ...updateColumns, workOrderId: workUpdates.workOrderId, createdBy: workUpdates.createdBy, createdByName: sql<string | null>`${users.name}`, createdAt: workUpdates.createdAt })
+    .from(workUpdates)
+    .leftJoin(users, eq(users.id, workUpdates.createdBy))
+    .where(sql`${workUpdates.workOrderId} in ${orderIds}`)
+    .orderBy(asc(workUpdates.reportedAt), asc(workUpdates.id));
+}
+
+/** The photos of some orders, in the order they were taken. */
+export async function photosOf(db: Queryable, orderIds: readonly number[]): Promise<Array<WorkPhoto<Date> & { workOrderId: number }>> {
+  if (orderIds.length === 0) return [];
+  const rows = await db
+    .select({ id: workPhotos.id, workOrderId: workPhotos.workOrderId, width: workPhotos.width, height: workPhotos.height, bytes: workPhotos.bytes, createdAt: workPhotos.createdAt })
+    .from(workPhotos)
+    .where(sql`${workPhotos.workOrderId} in ${orderIds}`)
+    .orderBy(asc(workPhotos.id));
+  return rows.map((p) => ({ ...p, url: photoUrl(p.workOrderId, p.id) }));
+}
+
+const strip = <T extends { workOrderId: number }>({ workOrderId: _w, ...rest }: T): Omit<T, 'workOrderId'> => (void _w, rest);
 
 /** The order with what the crew reported on it and its photos. */
 export async function getWorkOrder(ctx: Ctx, id: number): Promise<WorkOrderAnswer<Date>> {
   const order = await orderFor(ctx, id, 'read');
-  const updates = await ctx.db
-    .select({ ...updateColumns, createdBy: workUpdates.createdBy, createdAt: workUpdates.createdAt })
-    .from(workUpdates)
-    .where(eq(workUpdates.workOrderId, id))
-    .orderBy(asc(workUpdates.reportedAt), asc(workUpdates.id));
-  const photos = await ctx.db
-    .select({ id: workPhotos.id, width: workPhotos.width, height: workPhotos.height, bytes: workPhotos.bytes, createdAt: workPhotos.createdAt })
-    .from(workPhotos)
-    .where(eq(workPhotos.workOrderId, id))
-    .orderBy(asc(workPhotos.id));
-  return { order, updates, photos: photos.map((p) => ({ ...p, url: photoUrl(id, p.id) })) };
+  const [updates, photos] = [await updatesOf(ctx.db, [id]), await photosOf(ctx.db, [id])];
+  return { order, updates: updates.map(strip), photos: photos.map(strip) };
 }
 
 export type ReportAnswer = ReportAnswerOf<Date>;
@@ -93,6 +108,20 @@ function checkTransition(current: OrderRow['status'], next: WorkReportInput['sta
   throw appError('work_report/already_done', message, { status: current });
 }
 
+/**
+ * A closed field stops the job: work on it cannot be started or logged done until the
+ * foreman opens it again (a skip with the reason is how the crew reports it).
+ */
+function checkFieldOpen(order: OrderRow, next: WorkReportInput['status']) {
+  // A check of a closed field is how the foreman learns whether it may open again.
+  if (order.fieldStatus !== 'closed' || next === 'skipped' || order.task === 'field_check') return;
+  const why = order.fieldStatusNote ? `: ${order.fieldStatusNote}` : '';
+  throw appError('work_report/field_closed', `${order.fieldName} is ${FIELD_STATUS_LABELS.closed.toLowerCase()}${why}. The work cannot be ${next === 'done' ? 'logged done' : 'started'} while the field is closed; skip it with the reason or ask your foreman.`, {
+    fieldStatus: order.fieldStatus,
+    fieldStatusNote: order.fieldStatusNote,
+  });
+}
+
 function isUniqueViolation(err: unknown): boolean {
   for (let e: unknown = err; e; e = (e as { cause?: unknown }).cause) {
     if ((e as { code?: string }).code === '23505') return true;
@@ -119,6 +148,7 @@ export async function reportWork(ctx: Ctx, id: number, input: WorkReportInput): 
       const before = await orderFor(ctx, id, 'log', tx);
       if (input.version !== undefined && input.version !== before.version) throw errors.versionConflict('work_order');
       checkTransition(before.status, input.status);
+      checkFieldOpen(before, input.status);
 
       const [update] = await tx
         .insert(workUpdates)
@@ -182,4 +212,57 @@ async function addMeterHours(ctx: Ctx, tx: Queryable, equipmentId: number, hours
     .where(eq(equipment.id, equipmentId))
     .returning({ id: equipment.id, name: equipment.name, hourMeterH: equipment.hourMeterH, version: equipment.version });
   await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'equipment', entityId: equipmentId, districtId, before, after: after ?? null });
+}
+
+/** The open state a reopened order returns to: started if the crew had started it, else assigned or planned. */
+function openStatus(order: OrderRow): 'started' | 'assigned' | 'planned' {
+  return order.startedAt ? 'started' : order.crewId ? 'assigned' : 'planned';
+}
+
+/**
+ * Reopens a finished (done or skipped) order. The crew lead may undo a mistaken tap on the
+ * department's day it was reported; the foreman (or an administrator) may reopen at any time.
+ * The earlier report stays in the order's reports and the audit log; the reopening is one more
+ * report with its reason. Undoing a done report takes its hours back off the mower's meter.
+ */
+export async function reopenWork(ctx: Ctx, id: number, input: ReopenInput): Promise<ReopenAnswer<Date>> {
+  const first = await orderFor(ctx, id, 'read');
+  const foreman = can(ctx, 'update', 'WorkOrder', first);
+  if (!foreman) authorize(ctx, 'log', 'WorkOrder', first);
+  return (ctx.db as Db).transaction(async (tx) => {
+    const before = (await orderRow(tx, id))!;
+    if (input.version !== undefined && input.version !== before.version) throw errors.versionConflict('work_order');
+    if (before.status !== 'done' && before.status !== 'skipped') {
+      throw appError('work_report/not_finished', `This work order is ${before.status}, not done or skipped; there is nothing to reopen`, { status: before.status });
+    }
+    if (!foreman) {
+      const [last] = await tx.select({ reportedAt: workUpdates.reportedAt }).from(workUpdates).where(eq(workUpdates.workOrderId, id)).orderBy(desc(workUpdates.reportedAt), desc(workUpdates.id)).limit(1);
+      const finishedAt = before.doneAt ?? last?.reportedAt ?? null;
+      if (!finishedAt || ctx.clock.dateOf(finishedAt) !== ctx.clock.today()) {
+        throw errors.forbidden('A crew lead can reopen a job only on the day it was reported; ask your foreman to reopen it');
+      }
+    }
+    const status = openStatus(before);
+    const now = ctx.clock.now();
+    const note = `Reopened (was ${before.status})${input.reason ? `: ${input.reason}` : ''}`;
+    const [update] = await tx
+      .insert(workUpdates)
+      .values({ workOrderId: id, status, actualHours: null, note, clientRef: null, reportedAt: now, createdBy: ctx.actor.id })
+      .returning(updateColumns);
+    const [bumped] = await tx
+      .update(workOrders)
+      .set({ status, actualHours: null, doneAt: null, doneBy: null, pinned: true, updatedAt: new Date(), version: sql`${workOrders.version} + 1` })
+      .where(and(eq(workOrders.id, id), eq(workOrders.version, before.version)))
+      .returning({ id: workOrders.id });
+    if (!bumped) throw errors.versionConflict('work_order');
+    const after = (await orderRow(tx, id))!;
+    await writeAudit(tx, [
+      { actorId: ctx.actor.id, action: 'create', entity: 'work_update', entityId: update!.id, districtId: after.districtId, before: null, after: { workOrderId: id, ...update!, reopened: true } },
+      { actorId: ctx.actor.id, action: 'update', entity: 'work_order', entityId: id, districtId: after.districtId, before, after },
+    ]);
+    if (before.status === 'done' && before.equipmentId != null && before.actualHours) {
+      await addMeterHours(ctx, tx, before.equipmentId, -before.actualHours, after.districtId);
+    }
+    return { order: after, update: update! };
+  });
 }

@@ -12,6 +12,8 @@ export const queryKeys = {
   fields: (query: object) => ['fields', 'list', query] as const,
   field: (id: number) => ['fields', 'detail', id] as const,
   fieldNeeds: (id: number, date: string | null) => ['fields', 'needs', id, date] as const,
+  fieldWork: (id: number, page: number) => ['fields', 'work', id, page] as const,
+  fieldChecks: (id: number) => ['fields', 'checks', id] as const,
   imports: () => ['imports'] as const,
   map: () => ['map'] as const,
   /** Not under `map`: the bundled basemap does not change with the data. */

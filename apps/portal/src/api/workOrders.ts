@@ -1,6 +1,12 @@
 import type {
   CreateWorkOrderInput,
+  FieldCheckAnswer,
+  FieldCheckBody,
+  FieldCheckList,
   PhotoAnswer,
+  ReopenAnswer,
+  WorkHistoryPage,
+  WorkOrderAnswer,
   ReportAnswer,
   UpdateWorkOrderInput,
   WorkOrderList,
@@ -40,4 +46,29 @@ export function uploadWorkPhoto(orderId: number, photo: Blob, name: string, clie
 /** A one-off job added by hand: it stays as entered when the week is generated again. */
 export function createWorkOrder(body: CreateWorkOrderInput): Promise<WorkOrderWriteAnswer> {
   return api.post<WorkOrderWriteAnswer>('/work-orders', body);
+}
+
+/** One order with its reports (notes, who and when) and photos. */
+export function getWorkOrder(id: number, signal?: AbortSignal): Promise<WorkOrderAnswer> {
+  return api.get<WorkOrderAnswer>(`/work-orders/${id}`, undefined, signal);
+}
+
+/** Opens a done or skipped job again (crew lead: the same day; foreman: any time). */
+export function reopenWork(id: number, body: { reason: string; version?: number }): Promise<ReopenAnswer> {
+  return api.post<ReopenAnswer>(`/work-orders/${id}/reopen`, body);
+}
+
+/** Logs a field check on a field-check job: stored, scored and the job done. */
+export function logFieldCheck(id: number, body: FieldCheckBody): Promise<FieldCheckAnswer> {
+  return api.post<FieldCheckAnswer>(`/work-orders/${id}/field-check`, body);
+}
+
+/** One page of a field's logged work, newest first. */
+export function listFieldWork(fieldId: number, page: number, pageSize: number, signal?: AbortSignal): Promise<WorkHistoryPage> {
+  return api.get<WorkHistoryPage>(`/fields/${fieldId}/work`, { page, pageSize }, signal);
+}
+
+/** A field's latest field checks. */
+export async function listFieldChecks(fieldId: number, signal?: AbortSignal): Promise<FieldCheckList> {
+  return api.get<FieldCheckList>(`/fields/${fieldId}/checks`, undefined, signal);
 }

@@ -12,5 +12,6 @@ export * from './weather.ts';
 export * from './work-orders.ts';
 export * from './week-plans.ts';
 export * from './records.ts';
+export * from './field-checks.ts';
 export * from './dev.ts';
 export * from './config.ts';

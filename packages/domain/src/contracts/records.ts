@@ -1,4 +1,5 @@
 /** `GET /api/records`: planned against actual work, and mowings asked against done. */
+import type { WorkStatus, WorkTask } from '../vocabulary.ts';
 
 /** The counts every records row carries (per field, crew, week and in total). */
 export interface RecordTally {
@@ -42,6 +43,22 @@ export interface LateMowing {
   daysLate: number;
 }
 
+/** A crew's note or photos on one job in the range, for the office to read. */
+export interface CrewNote {
+  orderId: number;
+  fieldId: number;
+  fieldName: string;
+  siteName: string;
+  task: WorkTask;
+  crewName: string | null;
+  status: WorkStatus;
+  /** The department's date of the latest report on the job. */
+  reportedOn: string;
+  /** The notes of its reports, oldest first. */
+  notes: string[];
+  photos: { id: number; url: string }[];
+}
+
 export interface Records {
   from: string;
   to: string;
@@ -52,5 +69,7 @@ export interface Records {
   byCrew: CrewRecord[];
   byWeek: WeekRecord[];
   lateMowings: LateMowing[];
+  /** Jobs with a crew's note or photos, newest report first (at most 200). */
+  crewNotes: CrewNote[];
   totals: RecordTally;
 }

@@ -18,6 +18,8 @@ export type WorkOrderDetails = {
   eventOn?: string;
   /** Set when a rain-out cancelled the order: the reason the crew sees, and who cancelled it on which day. */
   cancelled?: { reason: string; by: string; on: string };
+  /** The mowing pattern asked for (stripes, checkerboard…), when the order carries one. */
+  pattern?: string;
 } & Record<string, unknown>;
 
 /** A work order: a row of `GET /api/work-orders`, of the week board, and the order of every write. */
@@ -29,8 +31,9 @@ export interface WorkOrderRow<At extends Instant = string> {
   siteName: string;
   /** The site's street address, for the crew's way there. */
   siteAddress: string;
-  /** The field's status now (open, restricted, closed) and its note: a crew must see a closure before it drives there. */
+  /** The field's status now (open, restricted, closed): a crew must see a closure before it drives there; a closed field stops the job (a done report is refused). */
   fieldStatus: FieldStatus;
+  /** Why the field is restricted or closed, as the foreman wrote it. */
   fieldStatusNote: string;
   siteLat: number;
   siteLng: number;
@@ -56,6 +59,9 @@ export interface WorkOrderRow<At extends Instant = string> {
   doneAt: At | null;
   version: number;
   photoCount: number;
+  /** Centre of the field's outline (WGS 84), for a `geo:` directions link. */
+  fieldLat: number;
+  fieldLng: number;
 }
 
 /** `POST /api/work-orders`, `PATCH /api/work-orders/:id`: the order and how many crew leads were e-mailed. */
@@ -79,6 +85,8 @@ export interface WorkUpdate<At extends Instant = string> {
 
 export interface WorkUpdateRow<At extends Instant = string> extends WorkUpdate<At> {
   createdBy: number | null;
+  /** Who sent the report, for the foreman reading it. */
+  createdByName: string | null;
   createdAt: At;
 }
 
@@ -113,3 +121,24 @@ export interface PhotoAnswer<At extends Instant = string> {
 }
 
 export type WorkOrderList<At extends Instant = string> = Items<WorkOrderRow<At>>;
+
+/** One logged job of a field's work history: the order, what the crew reported and its photos. */
+export interface WorkHistoryEntry<At extends Instant = string> {
+  order: WorkOrderRow<At>;
+  updates: WorkUpdateRow<At>[];
+  photos: WorkPhoto<At>[];
+}
+
+/** `GET /api/fields/:id/work`: the field's logged work, newest first, one page at a time. */
+export interface WorkHistoryPage<At extends Instant = string> {
+  items: WorkHistoryEntry<At>[];
+  page: number;
+  pageSize: number;
+  total: number;
+}
+
+/** `POST /api/work-orders/:id/reopen`: the order back in its open state and the entry that records why. */
+export interface ReopenAnswer<At extends Instant = string> {
+  order: WorkOrderDetail<At>;
+  update: WorkUpdate<At>;
+}

@@ -158,7 +158,8 @@ export function surfaceScore(check: FieldCheckInput, ranges: Record<HardnessDevi
     const weight = (SCORE_WEIGHTS[key] * 100) / totalWeight;
     return { key, score, weight, points: (score * weight) / 100 };
   });
-  if (ratio > 1.5) flags.push('overdue_mowing');
+  // A height entered in inches comes back as 1.5000000000000002 × a 2 in HOC: exactly 1.5 is not over.
+  if (ratio > 1.5 + 1e-9) flags.push('overdue_mowing');
   if (ratio < 0.9) flags.push('scalped');
   if (check.turfCoverPct < 60) flags.push('low_cover');
   const score = components.reduce((s, c) => s + c.points, 0);

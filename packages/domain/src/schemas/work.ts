@@ -1,6 +1,7 @@
 /** Bodies and queries of the week plan, work orders, crew reports and field events. */
 import { z } from 'zod';
-import { FIELD_EVENT_KINDS, WORK_REPORTS, WORK_TASKS } from '../vocabulary.ts';
+import { FIELD_EVENT_KINDS, HARDNESS_DEVICES, WORK_REPORTS, WORK_TASKS } from '../vocabulary.ts';
+import { MAX_HARDNESS_READINGS, WEAR_AREAS } from '../engine/field-check.ts';
 import { changeOf, idSchema, isoDateSchema as isoDate, isoDateTimeSchema, versionSchema } from './common.ts';
 const hours = z.number({ error: 'hours must be a number' }).min(0, 'hours cannot be negative').max(24, 'more than 24 hours in a day is not possible');
 const plannedHours = z.number({ error: 'planned hours must be a number' }).positive('planned hours must be more than 0').max(24, 'more than 24 hours in a day is not possible');
@@ -66,6 +67,20 @@ export const workReportSchema = z
   });
 export type WorkReportInput = z.infer<typeof workReportSchema>;
 
+/** `POST /api/work-orders/:id/reopen`: why a finished job is opened again. */
+export const reopenSchema = z.object({
+  reason: z.string().trim().max(500, 'keep the reason under 500 characters').default(''),
+  version: versionSchema.optional(),
+});
+export type ReopenInput = z.infer<typeof reopenSchema>;
+
+/** `GET /api/fields/:id/work`: which page of the field's work history. */
+export const pageQuerySchema = z.object({
+  page: z.coerce.number({ error: 'page must be a number' }).int('page must be a whole number').min(1, 'pages start at 1').max(10_000).default(1),
+  pageSize: z.coerce.number({ error: 'pageSize must be a number' }).int('pageSize must be a whole number').min(1).max(50, 'ask for at most 50 per page').default(10),
+});
+export type PageQuery = z.infer<typeof pageQuerySchema>;
+
 const eventFields = {
   fieldId: idSchema,
   kind: z.enum(FIELD_EVENT_KINDS, { error: `kind must be one of ${FIELD_EVENT_KINDS.join(', ')}` }),
@@ -87,3 +102,29 @@ export const dateRangeQuerySchema = z
   .refine((q) => q.from <= q.to, { path: ['to'], message: 'the end date is before the start date' })
   .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / 86_400_000 <= 400, { path: ['to'], message: 'ask for at most 400 days at a time' });
 export type DateRangeQuery = z.infer<typeof dateRangeQuerySchema>;
+
+const pct = (what: string) => z.number({ error: `enter the ${what} (%)` }).min(0, `${what} cannot be below 0 %`).max(100, `${what} cannot pass 100 %`);
+const rating = (what: string) => z.number({ error: `rate the ${what} 1–5` }).int(`rate the ${what} in whole steps`).min(1, `rate the ${what} 1–5`).max(5, `rate the ${what} 1–5`);
+
+/** A field check as a crew (or staff) records it; the server scores it. */
+export const fieldCheckSchema = z
+  .object({
+    turfCoverPct: pct('turf cover'),
+    weedsPct: pct('weed cover'),
+    bareWornPct: pct('bare/worn area'),
+    bareAreas: z.array(z.enum(WEAR_AREAS, { error: `a worn area is one of ${WEAR_AREAS.join(', ')}` })).max(WEAR_AREAS.length).default([]),
+    heightMm: z.number({ error: 'enter the measured grass height' }).positive('the height must be more than 0').max(500, 'a height above 500 mm is not a mown field'),
+    hardnessReadingsG: z.array(z.number({ error: 'a reading is a number' }).min(0, 'a reading cannot be negative').max(1000, 'a reading above 1,000 G is not a field')).max(MAX_HARDNESS_READINGS, `at most ${MAX_HARDNESS_READINGS} readings`).default([]),
+    hardnessDevice: z.enum(HARDNESS_DEVICES, { error: `the tester is one of ${HARDNESS_DEVICES.join(', ')}` }).nullable().default(null),
+    evenness: rating('evenness'),
+    divots: rating('divots'),
+    tornLeafTips: z.boolean().default(false),
+    notes: z.string().trim().max(2000, 'keep the notes under 2,000 characters').default(''),
+    /** Hours the check took, for the work order it logs. */
+    actualHours: hours.nullable().default(null),
+  })
+  .superRefine((v, ctx) => {
+    if (v.turfCoverPct + v.weedsPct + v.bareWornPct > 100 + 1e-9) ctx.addIssue({ code: 'custom', path: ['bareWornPct'], message: 'turf, weeds and bare/worn share one surface: together at most 100 %' });
+    if (v.hardnessReadingsG.length > 0 && v.hardnessDevice === null) ctx.addIssue({ code: 'custom', path: ['hardnessDevice'], message: 'name the tester the readings were taken with' });
+  });
+export type FieldCheckBody = z.infer<typeof fieldCheckSchema>;

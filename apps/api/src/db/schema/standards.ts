@@ -1,9 +1,10 @@
 /** The department's Standards (one row per maintenance level), field checks and imports. */
 import { sql } from 'drizzle-orm';
-import { check, date, index, integer, jsonb, pgTable, real, smallint, text } from 'drizzle-orm/pg-core';
-import { HARDNESS_DEVICES, type HardnessDevice, type ImportSummary, type LevelStandard } from '@swardwise/domain';
+import { boolean, check, date, index, integer, jsonb, pgTable, real, smallint, text } from 'drizzle-orm/pg-core';
+import { HARDNESS_DEVICES, type HardnessDevice, type ImportSummary, type LevelStandard, type WearArea } from '@swardwise/domain';
 import { fieldRef } from './city.ts';
 import { users } from './people.ts';
+import { workOrders } from './work.ts';
 import { createdAt, id, instant, updatedAt } from './columns.ts';
 
 export const standards = pgTable('standards', {
@@ -34,6 +35,15 @@ export const fieldChecks = pgTable(
     notes: text('notes').notNull().default(''),
     score: real('score').notNull(),
     flags: jsonb('flags').$type<string[]>().notNull().default([]),
+    /** Where the bare or worn turf is (goalmouths, centre, wings, infield). */
+    bareAreas: jsonb('bare_areas').$type<WearArea[]>().notNull().default([]),
+    /** Each hardness reading (G); `gmax` is their mean, what the score used. */
+    hardnessReadings: jsonb('hardness_readings').$type<number[]>().notNull().default([]),
+    /** Divots 1 (torn up) to 5 (none). */
+    divots: smallint('divots'),
+    tornLeafTips: boolean('torn_leaf_tips').notNull().default(false),
+    /** The work order the check was logged on, when a crew logged it from Today (its photos are the order's). */
+    workOrderId: integer('work_order_id').references(() => workOrders.id, { onDelete: 'set null' }),
     ...createdAt,
   },
   (t) => [

@@ -74,4 +74,32 @@ describe('JobCard', () => {
     expect(card.get('[data-test="job-cancelled"]').text()).toBe('Cancelled by Dana Foreman: Thunderstorms, fields waterlogged');
     expect(card.findAll('.job__actions button')).toHaveLength(0);
   });
+
+  test('should stop a job on a closed field with the reason and offer only Skip', () => {
+    const card = mountCard({ order: order({ fieldStatus: 'closed', fieldStatusNote: 'Standing water' }) });
+    expect(card.get('[data-test="job-field-status"]').text()).toMatch(/Field closed: Standing water\. This job cannot be done while the field is closed/);
+    expect(card.findAll('.job__actions button').map((b) => b.text())).toEqual(['Skip']);
+    const restricted = mountCard({ order: order({ fieldStatus: 'restricted', fieldStatusNote: 'Goalmouths resting' }) });
+    expect(restricted.get('[data-test="job-field-status"]').text()).toBe('Field restricted: Goalmouths resting');
+    expect(restricted.findAll('.job__actions button').map((b) => b.text())).toEqual(['Start', 'Done', 'Skip']);
+    expect(mountCard({ order: order() }).find('[data-test="job-field-status"]').exists()).toBe(false);
+  });
+
+  test('should link to the field’s centre with a geo: URI and show the pattern only when the order asks one', () => {
+    const card = mountCard({ order: order({ fieldLat: 41.512345678, fieldLng: -66.4 }) });
+    expect(card.get('[data-test="job-directions"]').attributes('href')).toBe('geo:41.512346,-66.400000?q=41.512346,-66.400000(Soccer%201)');
+    expect(card.text()).not.toMatch(/Pattern/);
+    expect(mountCard({ order: order({ details: { hocMm: 50.8, pattern: 'Stripes along the long axis' } }) }).text()).toMatch(/Pattern\s*Stripes along the long axis/);
+  });
+
+  test('should offer Log check on a check job, and a same-day reopen on a done job', async () => {
+    const check = mountCard({ order: order({ task: 'field_check' }) });
+    expect(check.findAll('.job__actions button').map((b) => b.text())).toEqual(['Log check', 'Skip']);
+    await check.get('[data-test="job-check"]').trigger('click');
+    expect(check.emitted('check')).toHaveLength(1);
+    const done = mountCard({ order: order({ status: 'done', doneAt: new Date().toISOString() }) });
+    await done.get('[data-test="job-reopen"]').trigger('click');
+    expect(done.emitted('reopen')).toHaveLength(1);
+    expect(mountCard({ order: order({ status: 'done', doneAt: '2020-01-01T15:00:00Z' }) }).find('[data-test="job-reopen"]').exists()).toBe(false);
+  });
 });

@@ -37,6 +37,8 @@ export function order(over: Partial<WorkOrderRow> = {}): WorkOrderRow {
     siteLat: 40.01,
     siteLng: -75.02,
     photoCount: 0,
+    fieldLat: 41.5,
+    fieldLng: -66.5,
     ...over,
   };
 }
