@@ -28,7 +28,7 @@ function fit(page: Page): Promise<Fit> {
       if (style.display === 'none' || style.visibility === 'hidden' || r.width === 0) return 0;
       return Math.max(0, Math.min(r.bottom, window.innerHeight) - Math.max(r.top, 0));
     };
-    const navs = [...document.querySelectorAll('nav[aria-label="Main"], [data-test="phone-nav"]')];
+    const navs = Array.from(document.querySelectorAll('nav[aria-label="Main"], [data-test="phone-nav"]'));
     return {
       scrollWidth: document.scrollingElement!.scrollWidth,
       navOnScreen: navs.reduce((s, n) => s + visible(n), 0),
