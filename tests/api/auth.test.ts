@@ -40,9 +40,10 @@ describe('sign-in', () => {
     expect(res.body.error.code).toBe('auth/invalid_credentials');
   });
 
-  test('should refuse a deactivated account', async () => {
+  test('should refuse a deactivated account, saying so after the right password', async () => {
     const res = await supertest(api.app).post('/api/auth/sign-in').send({ email: 'inactive@test.example', password: PASSWORD });
-    expect(res.status).toBe(401);
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe('auth/deactivated');
   });
 
   test('should refuse a malformed body with field-level issues', async () => {

@@ -70,7 +70,8 @@ describe('user administration', () => {
     expect(res.body.user.active).toBe(false);
     expect((await victim.get('/api/fields')).status).toBe(401);
     const again = await supertest(api.app).post('/api/auth/sign-in').send({ email: api.fixture.users.foremanSouth.email, password: PASSWORD });
-    expect(again.status).toBe(401);
+    expect(again.status).toBe(403);
+    expect(again.body.error.code).toBe('auth/deactivated');
   });
 
   test('should move a crew lead to a crew and take the crew’s district', async () => {

@@ -55,12 +55,14 @@ describe('field page', () => {
       const level = field!.maintenanceLevel;
       const before = await page.evaluate(async () => (await (await fetch('/api/standards')).json()).levels);
       const original = (before as { level: number; data: { hocMm: { soccer: { cool: number } } } }[]).find((l) => l.level === level)!.data.hocMm.soccer.cool;
-      const next = original + 7;
+      // The form takes the person's unit: inches (to an eighth here, so the check is exact) or millimetres.
+      const typed = units === 'imperial' ? Math.round(((original + 7) / 25.4) * 8) / 8 : original + 7;
+      const next = units === 'imperial' ? typed * 25.4 : typed;
 
       await page.goto(`${baseUrl}/standards`);
       await page.locator(`[data-test="standards-edit-${level}"]`).click();
       const input = page.locator(`[data-test="standards-form-${level}"] [data-test="hoc-soccer-cool"] input`);
-      await input.fill(String(next));
+      await input.fill(String(typed));
       await input.blur();
       await page.locator('[data-test="standards-save"]').click();
       await expect.poll(() => page.getByText(`Level ${level} saved`).count()).toBeGreaterThan(0);

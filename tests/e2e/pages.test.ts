@@ -57,7 +57,7 @@ describe('crews, equipment, weather and bookings pages', () => {
       const text = await row.innerText();
       expect(text).toContain('North Ridge');
       expect(text).toContain('T. Bracken, U. Sorrel');
-      expect(text).toContain('9 h');
+      expect(text).toContain('9:00 h');
       expect(text).toContain('Mon–Thu, Sat');
       await page.screenshot({ path: path.join(shots, 'crews.png'), fullPage: true });
     } finally {

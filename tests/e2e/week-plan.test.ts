@@ -112,7 +112,7 @@ describe('the week plan board', () => {
       expect((await patched).status()).toBe(409);
       await expect.poll(() => page.getByText('Someone else changed this work order since you opened it').count()).toBeGreaterThan(0);
       // The reloaded card shows the other change and stays with its crew.
-      await expect.poll(() => cell(page, job.crewId!, job.plannedDate).locator(`[data-order-id="${job.id}"]`).textContent()).toContain('2.5 h');
+      await expect.poll(() => cell(page, job.crewId!, job.plannedDate).locator(`[data-order-id="${job.id}"]`).textContent()).toContain('2:30 h');
       const after = (await apiBoard(page, districtId)).orders.find((o) => o.id === job.id)!;
       expect(after.crewId).toBe(job.crewId);
     } finally {

@@ -61,6 +61,7 @@ export const ERROR_CODES = {
   'auth/invalid_token': 'invalid',
   'auth/forbidden': 'forbidden',
   'auth/deactivated': 'forbidden',
+  'auth/access_changed': 'unauthenticated',
   'auth/rate_limited': 'rate_limited',
 
   ...each(NOT_FOUND_RESOURCES, 'not_found', 'not_found'),
@@ -206,7 +207,11 @@ export function appError(code: ApiErrorCode, message: string, details?: ErrorDet
 
 const SIGN_IN = 'Sign in to continue';
 const WRONG_CREDENTIALS = 'The e-mail or password is not right';
-const DEACTIVATED = 'This account has been deactivated';
+const DEACTIVATED = 'This account has been deactivated; ask your administrator if you need access again';
+const ACCESS_CHANGED = {
+  access_changed: 'An administrator changed what your account may do; sign in again to continue with your new access',
+  deactivated: 'An administrator deactivated your account, which signed you out; ask them if you need access again',
+} as const;
 /** How a resource is named in a message where its code name would read badly. */
 const WORDS: Partial<Record<NotFoundResource, string>> = { weather_station: 'weather station' };
 
@@ -224,6 +229,8 @@ export const errors = {
   unauthenticated: () => appError('auth/unauthenticated', SIGN_IN),
   invalidCredentials: () => appError('auth/invalid_credentials', WRONG_CREDENTIALS),
   deactivated: () => appError('auth/deactivated', DEACTIVATED),
+  /** 401: an administrator changed the account's role or scope, or deactivated it, which ended its sessions. */
+  accessChanged: (reason: keyof typeof ACCESS_CHANGED) => appError('auth/access_changed', ACCESS_CHANGED[reason]),
   /** 400 with one issue per bad input. */
   invalid: (message: string, issues: FieldIssue[]) => appError('request/invalid', message, { issues }),
   /** 400: the body names a row that does not exist (`No such site`, at `body.siteId`). */

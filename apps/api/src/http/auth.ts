@@ -4,7 +4,7 @@ import { errors, type Actor } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import type { Clock } from '../services/clock.ts';
 import { contextFor, type Ctx } from '../services/context.ts';
-import { actorOf, sessionUser, type SessionUser } from '../services/users.ts';
+import { actorOf, sessionUser, type SessionEnd, type SessionUser } from '../services/users.ts';
 
 declare module 'express-serve-static-core' {
   interface Request {
@@ -37,9 +37,15 @@ export function loadUser(db: Db): RequestHandler {
 }
 
 export const requireUser: RequestHandler = (req, _res, next) => {
-  if (!req.actor) return next(errors.unauthenticated());
+  if (!req.actor) {
+    const ended = endedBecause(req);
+    return next(ended ? errors.accessChanged(ended) : errors.unauthenticated());
+  }
   next();
 };
+
+/** Why an administrator ended this session (role, scope or active changed), if one did. */
+const endedBecause = (req: { session?: { endedBecause?: SessionEnd } }) => req.session?.endedBecause;
 
 /** The service context for this request; only after `requireUser`. */
 export function ctxOf(db: Db, req: { actor?: Actor; user?: SessionUser; clock?: Clock }): Ctx {

@@ -70,5 +70,7 @@ export class DrizzleSessionStore extends session.Store {
 declare module 'express-session' {
   interface SessionData {
     userId: number;
+    /** Set when an administrator ended the session (`services/users.ts` endSessions). */
+    endedBecause: 'access_changed' | 'deactivated';
   }
 }

@@ -236,7 +236,7 @@ const users: RouteDoc[] = [
       json(
         201,
         'The account is created, waiting for the person to accept the invitation.',
-        shape({ user: row('The new account'), inviteUrl: str('The invitation link, to pass on by hand when e-mail is off'), emailed: bool('True when the invitation was e-mailed') }),
+        shape({ user: row('The new account'), inviteUrl: str('The invitation link, to pass on by hand when e-mail is off'), emailed: bool('True when the invitation was e-mailed'), mail: str("sent, off (no mail set up: pass the link on by hand) or failed") }),
       ),
     ],
     errors: [409],
@@ -452,7 +452,7 @@ const weekPlans: RouteDoc[] = [
     summary: 'Assign every suggested crew of the week (optionally of one crew); one e-mail per crew lead',
     access: allowed('update', 'WorkOrder', { probe: (actor) => ({ districtId: actor.districtId }) }),
     body: confirmSchema,
-    answers: [json(200, 'How many orders were assigned and crew leads e-mailed, and the board after it.', shape({ assigned: int('Orders assigned'), emailed: int('Crew leads e-mailed'), board: ref('WeekBoard') }))],
+    answers: [json(200, 'How many orders were assigned and crew leads e-mailed, and the board after it.', shape({ assigned: int('Orders assigned'), emailed: int('Crew leads e-mailed'), mail: row('The crew-lead e-mails: crews, sent, mailOff, crewsWithoutLead, failed'), board: ref('WeekBoard') }))],
     errors: [409],
   },
   {

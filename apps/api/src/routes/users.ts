@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { idParamSchema, inviteUserSchema, updateUserSchema } from '@swardwise/domain';
+import { idParamSchema, inviteUserSchema, updateUserSchema, type InviteAnswer } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
@@ -19,7 +19,8 @@ export function usersRouter({ db, config, mailer }: AppDeps): Router {
     const input = parse(inviteUserSchema, req.body, 'body');
     const result = await inviteUser(ctx, input, config.publicUrl);
     const emailed = await mailer.send(invitationMail(result.user.email, result.user.name, ROLE_LABELS[result.user.role].toLowerCase(), result.inviteUrl));
-    res.status(201).json({ ...result, emailed });
+    const answer: InviteAnswer<Date> = { ...result, emailed, mail: emailed ? 'sent' : mailer.enabled ? 'failed' : 'off' };
+    res.status(201).json(answer);
   });
 
   router.patch('/:id', async (req, res) => {

@@ -76,14 +76,14 @@ export async function sessionUser(db: Queryable, id: number): Promise<SessionUse
 
 /**
  * Checks an e-mail and password. The same message for an unknown e-mail and a wrong
- * password, and a hash is verified either way so timing does not tell them apart.
+ * password, and a hash is verified either way so timing does not tell them apart. Only after
+ * the right password is a deactivated account told so (403): it tells nothing to a guesser.
  */
 export async function verifyCredentials(db: Queryable, email: string, password: string): Promise<SessionUser> {
   const [row] = await db.select({ id: users.id, hash: users.passwordHash, active: users.active }).from(users).where(eq(users.email, email));
   const ok = row?.hash ? await verify(row.hash, password) : (await verify(DUMMY_HASH, password), false);
-  if (!row || !ok || !row.active) {
-    throw errors.invalidCredentials();
-  }
+  if (!row || !ok) throw errors.invalidCredentials();
+  if (!row.active) throw errors.deactivated();
   await db.update(users).set({ lastSignInAt: new Date() }).where(eq(users.id, row.id));
   const user = await sessionUser(db, row.id);
   if (!user) throw errors.invalidCredentials();
@@ -268,6 +268,17 @@ const ATTRIBUTE_WORDS: Record<(typeof USER_ATTRIBUTES)[number], string> = {
   active: 'active state',
 };
 
+/** Why a session lost its user under the person's feet; the next request answers with it. */
+export type SessionEnd = 'access_changed' | 'deactivated';
+
+/** Signs the account out everywhere, leaving each session a note of why. */
+async function endSessions(db: Queryable, userId: number, reason: SessionEnd) {
+  await db
+    .update(sessions)
+    .set({ userId: null, data: sql`(${sessions.data} - 'userId') || jsonb_build_object('endedBecause', ${reason}::text)` })
+    .where(eq(sessions.userId, userId));
+}
+
 export async function updateUser(ctx: Ctx, id: number, input: UpdateUserInput): Promise<UserRow> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = await findUser(tx, id);
@@ -309,11 +320,12 @@ export async function updateUser(ctx: Ctx, id: number, input: UpdateUserInput): 
       .returning({ id: users.id });
     if (!updated) throw errors.versionConflict('user');
     await replaceSites(tx, id, scope.siteIds);
-    if (input.active === false || role !== before.role) {
-      // A deactivated or re-scoped user signs in again.
-      await tx.delete(sessions).where(eq(sessions.userId, id));
-    }
     const after = (await findUser(tx, id))!;
+    if (input.active === false || JSON.stringify(permissionsOf(before)) !== JSON.stringify(permissionsOf(after))) {
+      // A deactivated or re-scoped user signs in again; the session is kept, without its user,
+      // so the person's next request says why it ended (auth/access_changed) instead of "sign in".
+      await endSessions(tx, id, input.active === false ? 'deactivated' : 'access_changed');
+    }
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'user', entityId: id, districtId: after.districtId, before, after });
     await auditPermissions(tx, ctx.actor.id, before, after);
     return after;

@@ -136,8 +136,8 @@ export async function confirmWeek(ctx: Ctx, q: WeekQuery & { crewId?: number | u
     await writeAudit(tx, after.map((a) => ({ actorId: ctx.actor.id, action: 'update' as const, entity: 'work_order', entityId: a.id, districtId: a.districtId, before: byId.get(a.id) ?? null, after: a })));
     return after;
   });
-  const emailed = await mailNewWork(ctx.db, changed.map((a) => a.id), deps, ctx.actorName);
-  return { assigned: changed.length, emailed, board: await getWeekBoard(ctx, q) };
+  const mail = await mailNewWork(ctx.db, changed.map((a) => a.id), deps, ctx.actorName);
+  return { assigned: changed.length, emailed: mail.sent, mail, board: await getWeekBoard(ctx, q) };
 }
 
 /**

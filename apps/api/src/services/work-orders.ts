@@ -5,6 +5,7 @@
  */
 import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import {
+  type CrewMailReport,
   appError,
   errors,
   mondayOf,
@@ -119,15 +120,25 @@ export interface WorkMoveNotice {
  * failure is logged by the mailer and never undoes the change.
  */
 export async function notifyCrews(db: Queryable, mailer: Mailer, notices: readonly WorkMoveNotice[], byName: string, portalUrl: string): Promise<number> {
-  let sent = 0;
+  return (await notifyCrewsReport(db, mailer, notices, byName, portalUrl)).sent;
+}
+
+/** As `notifyCrews`, with why a crew got no e-mail: mail off, no crew-lead account, a refused send. */
+export async function notifyCrewsReport(db: Queryable, mailer: Mailer, notices: readonly WorkMoveNotice[], byName: string, portalUrl: string): Promise<CrewMailReport> {
+  const report: CrewMailReport = { crews: 0, sent: 0, mailOff: !mailer.enabled, crewsWithoutLead: [], failed: 0 };
   for (const n of notices) {
     if (n.orders.length === 0) continue;
+    report.crews++;
     const [crew] = await db.select({ name: crews.name }).from(crews).where(eq(crews.id, n.crewId));
-    for (const lead of await crewLeads(db, n.crewId)) {
-      if (await mailer.send(workMovedMail(lead.email, lead.name, crew?.name ?? 'your crew', n, byName, portalUrl))) sent++;
+    const leads = await crewLeads(db, n.crewId);
+    if (leads.length === 0) report.crewsWithoutLead.push(crew?.name ?? `crew ${n.crewId}`);
+    for (const lead of leads) {
+      // With mail off the mailer only logs what it would have sent.
+      if (await mailer.send(workMovedMail(lead.email, lead.name, crew?.name ?? 'your crew', n, byName, portalUrl))) report.sent++;
+      else if (mailer.enabled) report.failed++;
     }
   }
-  return sent;
+  return report;
 }
 
 async function fieldScopeRow(db: Queryable, fieldId: number) {

@@ -31,6 +31,7 @@ export const MESSAGES: Partial<Record<ApiErrorCode | ClientErrorCode, string>> =
   'auth/forbidden': 'This is outside what your account may see or change.',
   'auth/invalid_token': 'This invitation link is not valid any more. Ask your administrator for a new one.',
   'auth/deactivated': 'This account has been deactivated. Ask your administrator if you need access again.',
+  'auth/access_changed': 'An administrator changed your account’s access, which signed you out. Sign in again to continue with your new access; if you cannot, ask them.',
   'http/413': 'The file is too large to upload.',
   ...CONFLICTS,
 };

@@ -28,7 +28,7 @@ export function useApiQuery<T>(
     enabled: computed(() => toValue(options.enabled ?? true)),
   });
   watch(query.error, (cause) => {
-    if (cause instanceof ApiError && cause.status === 401) session.expire();
+    if (cause instanceof ApiError && cause.status === 401) session.expire(cause);
   });
   return {
     data: computed(() => (query.data.value as T | undefined) ?? null),

@@ -1,4 +1,4 @@
-import { asSubject, type PlanDiff, type WeekBoard, type WorkOrderRow, type WorkTask } from '@swardwise/domain';
+import { asSubject, type ConfirmAnswer, type PlanDiff, type WeekBoard, type WorkOrderRow, type WorkTask } from '@swardwise/domain';
 import { useQueryClient } from '@tanstack/vue-query';
 import { ElMessage } from 'element-plus';
 import { computed, reactive, ref, shallowRef, toValue, type MaybeRefOrGetter } from 'vue';
@@ -93,7 +93,7 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
         await invalidate('workOrder');
       } else {
         replaceOrder(order.id, () => before);
-        if (cause instanceof ApiError && cause.status === 401) session.expire();
+        if (cause instanceof ApiError && cause.status === 401) session.expire(cause);
         ElMessage.error(errorMessage(cause));
       }
       return false;
@@ -122,7 +122,7 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
     try {
       return await run();
     } catch (cause) {
-      if (cause instanceof ApiError && cause.status === 401) session.expire();
+      if (cause instanceof ApiError && cause.status === 401) session.expire(cause);
       ElMessage.error(errorMessage(cause));
       return null;
     } finally {
@@ -146,13 +146,13 @@ export function useWeekBoard(key: MaybeRefOrGetter<WeekKey>) {
   }
 
   /** Confirms the suggested crews of the week; answers how many orders and e-mails that made. */
-  function confirm(): Promise<{ assigned: number; emailed: number } | null> {
+  function confirm(): Promise<Pick<ConfirmAnswer, 'assigned' | 'emailed' | 'mail'> | null> {
     const board = data.value;
     if (!board) return Promise.resolve(null);
     return running('confirm', async () => {
       const answer = await confirmWeek({ districtId: board.districtId, weekStart: board.weekStart });
       await showBoard(answer.board);
-      return { assigned: answer.assigned, emailed: answer.emailed };
+      return { assigned: answer.assigned, emailed: answer.emailed, mail: answer.mail };
     });
   }
 

@@ -4,6 +4,7 @@ import { computed, ref } from 'vue';
 import { ability } from '../ability.ts';
 import * as auth from '../api/auth.ts';
 import { ApiError } from '../api/client.ts';
+import { errorMessage, messageFor } from '../api/messages.ts';
 import { queryClient } from '../api/queryClient.ts';
 
 /** Where each role lands after sign-in and when a route is not theirs. */
@@ -22,12 +23,15 @@ export const useSessionStore = defineStore('session', () => {
   const loaded = ref(false);
   /** True once the person chose to sign out, so the end of the session is not treated as an expiry. */
   const signedOut = ref(false);
+  /** Why the last session ended under the person (expired, access changed); the sign-in page says it. */
+  const endNotice = ref<string | null>(null);
   let loading: Promise<void> | null = null;
 
   const units = computed<UnitSystem>(() => user.value?.units ?? 'imperial');
   const landing = computed(() => (user.value ? LANDING[user.value.role] : '/sign-in'));
 
   function setUser(next: SessionUser | null) {
+    if (next) endNotice.value = null;
     // Answers cached for one person are not another's to see (nor a signed-out screen's).
     if (!next || next.id !== user.value?.id) queryClient.clear();
     user.value = next;
@@ -62,6 +66,8 @@ export const useSessionStore = defineStore('session', () => {
       .getMe()
       .then(setSession, (error: unknown) => {
         if (!(error instanceof ApiError && error.status === 401)) throw error;
+        // A plain 401 here is nobody signed in; an ended one says why.
+        if (error.code === 'auth/access_changed') endNotice.value = errorMessage(error);
         setUser(null);
       })
       .finally(() => {
@@ -101,10 +107,11 @@ export const useSessionStore = defineStore('session', () => {
     setSession(await auth.updateMe({ version: user.value.version, units: next }));
   }
 
-  /** Called when any request finds the session gone (401). */
-  function expire() {
+  /** Called when any request finds the session gone (401); the sign-in page says why. */
+  function expire(cause?: unknown) {
+    endNotice.value = cause instanceof ApiError && cause.status === 401 ? errorMessage(cause) : messageFor('auth/unauthenticated') ?? null;
     setUser(null);
   }
 
-  return { user, timeZone, loaded, signedOut, units, landing, load, signIn, acceptInvite, resetPassword, signOut, setUnits, expire, setTimeZone, today, weekStart };
+  return { user, timeZone, loaded, signedOut, endNotice, units, landing, load, signIn, acceptInvite, resetPassword, signOut, setUnits, expire, setTimeZone, today, weekStart };
 });

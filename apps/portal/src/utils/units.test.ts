@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { formatHoc, formatLandArea, formatSurfaceArea, hocToMm, hocValue } from './units.ts';
+import { crewHoursText, distanceText, formatHoc, formatLandArea, formatSurfaceArea, hocToMm, hocValue, hoursMinutes, reasonText } from './units.ts';
 
 describe('units', () => {
   test('should show a land area in acres or hectares', () => {
@@ -28,5 +28,27 @@ describe('units', () => {
     expect(hocToMm(1.375, 'imperial')).toBe(34.925);
     expect(hocValue(34.925, 'imperial')).toBe(1.375);
     expect(hocValue(25.4, 'metric')).toBe(25);
+  });
+
+  test('should show crew time as hours and minutes', () => {
+    expect(hoursMinutes(1.5)).toBe('1:30');
+    expect(hoursMinutes(0.25)).toBe('0:15');
+    expect(hoursMinutes(7.9)).toBe('7:54');
+    expect(hoursMinutes(8)).toBe('8:00');
+    expect(hoursMinutes(1.999)).toBe('2:00');
+    expect(hoursMinutes(-0.5)).toBe('−0:30');
+    expect(crewHoursText(2.75)).toBe('2:45 h');
+  });
+
+  test('should show a drive in miles or kilometres', () => {
+    expect(distanceText(16.09344, 'imperial')).toBe('10.0 mi');
+    expect(distanceText(12.34, 'metric')).toBe('12.3 km');
+  });
+
+  test('should read a planner reason written in millimetres in inches under imperial', () => {
+    const mow = 'One-third rule: the grass would pass 38 mm (1.5 × HOC 25 mm) before the next mowing day';
+    expect(reasonText(mow, 'imperial')).toBe('One-third rule: the grass would pass 1½ in (1.5 × HOC 1 in) before the next mowing day');
+    expect(reasonText(mow, 'metric')).toBe(mow);
+    expect(reasonText('Water budget: 25.4 mm gross this week; set the controller to the run times', 'imperial')).toBe('Water budget: 1 in gross this week; set the controller to the run times');
   });
 });

@@ -89,6 +89,22 @@ describe('SignInView', () => {
     expect(wrapper.get('[data-test="sign-in-error"]').text()).toContain('The e-mail or password is not right');
   });
 
+  test('should say why the last session ended when an administrator changed the access', async () => {
+    const { wrapper } = await mountSignIn();
+    const { useSessionStore } = await import('../stores/session.ts');
+    const { ApiError } = await import('../api/client.ts');
+    useSessionStore().expire(new ApiError(401, 'auth/access_changed', 'changed'));
+    await flushPromises();
+    expect(wrapper.get('[data-test="sign-in-notice"]').text()).toMatch(/An administrator changed your account’s access, which signed you out/);
+  });
+
+  test('should tell a deactivated account so after the right password', async () => {
+    signInAnswer = () => jsonResponse(403, { error: { code: 'auth/deactivated', message: 'deactivated' } });
+    const { wrapper } = await mountSignIn();
+    await submit(wrapper, 'gone@swardwise.example', 'right-password');
+    expect(wrapper.get('[data-test="sign-in-error"]').text()).toContain('This account has been deactivated');
+  });
+
   test('should tell the user to wait when sign-in is rate limited', async () => {
     signInAnswer = () => jsonResponse(429, { error: { code: 'auth/rate_limited', message: 'slow down' } });
     const { wrapper } = await mountSignIn();

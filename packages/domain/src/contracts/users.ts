@@ -49,9 +49,16 @@ export interface Invitation<At extends Instant = string> {
   inviteUrl: string;
 }
 
-/** `POST /api/users` (201): the invitation, and whether the e-mail went out. */
+/**
+ * What became of an e-mail: `sent`; `off` when the server has no mail set up (SMTP_HOST), so
+ * nothing can be mailed; `failed` when the mail server refused or could not be reached.
+ */
+export type MailStatus = 'sent' | 'off' | 'failed';
+
+/** `POST /api/users` (201): the invitation, whether the e-mail went out and, if not, why. */
 export interface InviteAnswer<At extends Instant = string> extends Invitation<At> {
   emailed: boolean;
+  mail: MailStatus;
 }
 
 /** The scope a session user acts with; the API and the portal build the same abilities from it. */

@@ -81,5 +81,20 @@ export interface RainOutAnswer<At extends Instant = string> {
 export interface ConfirmAnswer<At extends Instant = string> {
   assigned: number;
   emailed: number;
+  /** Why fewer crew leads were e-mailed than there were crews with new work. */
+  mail: CrewMailReport;
   board: WeekBoard<At>;
+}
+
+/** The crew-lead e-mails of one change: how many went out and why the others did not. */
+export interface CrewMailReport {
+  /** Crews with new work. */
+  crews: number;
+  sent: number;
+  /** The server has no mail set up (SMTP_HOST): nothing could be mailed. */
+  mailOff: boolean;
+  /** Crews with new work but no active crew-lead account to write to. */
+  crewsWithoutLead: string[];
+  /** E-mails the mail server refused or could not take. */
+  failed: number;
 }

@@ -71,6 +71,7 @@ describe('CrewFormDialog', () => {
     expect(url).toBe('/api/crews');
     expect(JSON.parse(String(init.body))).toEqual({ districtId: 1, name: 'North Crew C', hoursPerDay: 9.5, workDays: ['mon', 'tue', 'wed', 'thu', 'sat'], members: ['P. Sedge', 'Q. Rush'] });
     expect(w.emitted('saved')).toHaveLength(1);
+    await vi.waitFor(() => expect(document.body.querySelector('.el-message--success')?.textContent).toContain('Crew North Crew C added.'));
     w.unmount();
   });
 

@@ -79,6 +79,7 @@ describe('EditFieldDialog', () => {
     expect(body.version).toBe(5);
     expect(body.hocOverrideMm).toBeCloseTo(38.1, 1);
     expect(body.name).toBe('Pitch 1');
+    await vi.waitFor(() => expect(document.body.querySelector('.el-message--success')?.textContent).toContain('Pitch 1 saved.'));
     w.unmount();
   });
 });

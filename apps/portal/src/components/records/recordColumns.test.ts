@@ -38,7 +38,7 @@ describe('record columns', () => {
     });
     const cells = w.findAll('[data-test="row"]')[0]!.findAll('td').map((td) => td.text());
     // Actual is compared with the planned hours of the done orders (20.04), not of all (24.04).
-    expect(cells).toEqual(['Pitch 1', 'Alder Green', '24.0', '18.5', '92 %', '12', '11', '2', '1', '92 %']);
+    expect(cells).toEqual(['Pitch 1', 'Alder Green', '24:02', '18:28', '92 %', '12', '11', '2', '1', '92 %']);
     expect(w.findAll('[data-test="row"]')[1]!.findAll('td').at(-1)!.text()).toBe('—');
     const csv = (w.vm as unknown as { csvText: () => string }).csvText().split(/\r?\n/);
     expect(csv[0]).toBe('Field,Site,Planned h,Actual h,Actual / planned of done orders (%),Mowings asked,Mowings done,Mowings late,Mowings missed,Mowings done / asked (%)');

@@ -1,10 +1,11 @@
 import type { CrewRecord, FieldRecord, WeekRecord } from '@swardwise/domain';
 import { h } from 'vue';
 import { columnHelper } from '../data-table/features.ts';
+import { hoursMinutes } from '../../utils/units.ts';
 import { weekLabel } from '../week/board.ts';
 
 const round1 = (h: number) => Math.round(h * 10) / 10;
-const hours = (h: number) => round1(h).toFixed(1);
+const hours = hoursMinutes;
 /** Actual hours against the planned hours of the same, done orders, in percent; blank when nothing is done. */
 export function actualShare(r: { plannedHoursDone: number; actualHours: number }): number | null {
   return r.plannedHoursDone > 0 ? Math.round((r.actualHours / r.plannedHoursDone) * 100) : null;

@@ -6,8 +6,8 @@ import { bodyFrom, formFrom } from './standardForm.ts';
 
 const row: StandardsRow = { level: 2, data: structuredClone(DEFAULT_STANDARDS[2]), version: 3, updatedAt: '2026-11-01T00:00:00Z', updatedBy: null };
 
-function mountForm() {
-  return mount(LevelStandardForm, { props: { row, units: 'metric' }, attachTo: document.body });
+function mountForm(units: 'metric' | 'imperial' = 'metric') {
+  return mount(LevelStandardForm, { props: { row, units }, attachTo: document.body });
 }
 
 async function setNumber(wrapper: ReturnType<typeof mountForm>, test: string, value: string) {
@@ -19,13 +19,13 @@ async function setNumber(wrapper: ReturnType<typeof mountForm>, test: string, va
 
 describe('LevelStandardForm', () => {
   test('should send a body the API schema accepts, with null for a level without irrigation or lines', () => {
-    const model = formFrom(DEFAULT_STANDARDS[4]);
-    const body = bodyFrom(model, 7);
+    const model = formFrom(DEFAULT_STANDARDS[4], 'metric');
+    const body = bodyFrom(model, 7, 'metric');
     expect(updateLevelStandardSchema.safeParse(body).success).toBe(true);
     expect(body).toMatchObject({ version: 7, irrigationShareOfEtc: null, lineRepaintDays: null });
     model.irrigated = true;
     model.irrigationShareOfEtc = 0.4;
-    expect(bodyFrom(model, 7).irrigationShareOfEtc).toBe(0.4);
+    expect(bodyFrom(model, 7, 'metric').irrigationShareOfEtc).toBe(0.4);
   });
 
   test('should refuse a HOC below 3 mm with the schema’s message and accept a sound one', async () => {
@@ -34,7 +34,7 @@ describe('LevelStandardForm', () => {
     expect(await form.validate()).toBe(true);
     await setNumber(wrapper, 'hoc-soccer-cool', '2');
     expect(await form.validate()).toBe(false);
-    expect(form.invalid).toEqual({ 'hocMm.soccer.cool': 'a height of cut below 3 mm is not a turf height' });
+    expect(form.invalid).toEqual({ 'hoc.soccer.cool': 'a height of cut below 3 mm is not a turf height' });
     await setNumber(wrapper, 'hoc-soccer-cool', '40');
     expect(await form.validate()).toBe(true);
     wrapper.unmount();
@@ -47,6 +47,36 @@ describe('LevelStandardForm', () => {
     await setNumber(wrapper, 'std-target-score', '120');
     expect(await form.validate()).toBe(false);
     expect(form.invalid).toEqual({ annualNShare: 'the feed share cannot be above 1 (100 %)', targetScore: 'the target score is 0–100' });
+    wrapper.unmount();
+  });
+});
+
+describe('LevelStandardForm in imperial units', () => {
+  test('should take heights of cut in inches and send millimetres', async () => {
+    const fetch = vi.fn(async (_url: string, init: RequestInit) => new Response(JSON.stringify({ ...row, data: { ...row.data, ...JSON.parse(String(init.body)) } }), { status: 200 }));
+    vi.stubGlobal('fetch', fetch);
+    const wrapper = mountForm('imperial');
+    expect(wrapper.text()).toContain('Height of cut, inches');
+    const shown = Number((wrapper.find('[data-test="hoc-soccer-cool"] input').element as HTMLInputElement).value);
+    expect(shown).toBeCloseTo(row.data.hocMm.soccer.cool / 25.4, 2);
+    await setNumber(wrapper, 'hoc-soccer-cool', '1.375');
+    expect(wrapper.get('[data-test="hoc-soccer-text"]').text()).toMatch(/^1⅜ in \//);
+    await wrapper.get('[data-test="standards-form-2"]').trigger('submit');
+    await vi.waitFor(() => expect(fetch).toHaveBeenCalledTimes(1));
+    const body = JSON.parse(String(fetch.mock.calls[0]![1].body));
+    expect(body.hocMm.soccer.cool).toBe(34.925);
+    // Untouched heights go back exactly as they were stored.
+    expect(body.hocMm.soccer.warm).toBe(row.data.hocMm.soccer.warm);
+    wrapper.unmount();
+    vi.unstubAllGlobals();
+  });
+
+  test('should judge an entry in inches by the millimetre rule and say so', async () => {
+    const wrapper = mountForm('imperial');
+    const form = wrapper.vm as unknown as { validate(): Promise<boolean>; invalid: Record<string, string> };
+    await setNumber(wrapper, 'hoc-soccer-cool', '0.1');
+    expect(await form.validate()).toBe(false);
+    expect(form.invalid['hoc.soccer.cool']).toBe('a height of cut below 3 mm is not a turf height (checked after converting to millimetres)');
     wrapper.unmount();
   });
 });

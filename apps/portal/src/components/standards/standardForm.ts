@@ -1,11 +1,13 @@
 /** The Standards form of one level: its model, the rules from the shared zod schema, and the body it sends. */
-import { levelStandardChangesSchema, SPORTS, standardHocMmSchema, type LevelStandard, type Sport, type UpdateLevelStandardInput } from '@swardwise/domain';
+import { levelStandardChangesSchema, SPORTS, standardHocMmSchema, type LevelStandard, type Sport, type UnitSystem, type UpdateLevelStandardInput } from '@swardwise/domain';
 import type { FormItemRule } from 'element-plus';
+import { hocToMm, hocValue } from '../../utils/units.ts';
 import { zodRules } from '../../utils/zodRules.ts';
 
 export interface StandardFormModel {
   name: string;
-  hocMm: Record<Sport, { cool: number; warm: number }>;
+  /** Heights of cut in the person's unit: inches (to 0.001, so eighths stay exact) or millimetres. */
+  hoc: Record<Sport, { cool: number; warm: number }>;
   minMowingsPerWeek: number;
   maxMowingIntervalDays: number;
   annualNShare: number;
@@ -18,10 +20,14 @@ export interface StandardFormModel {
   targetScore: number;
 }
 
-export function formFrom(data: LevelStandard): StandardFormModel {
+type SeasonHoc = { cool: number; warm: number };
+const mapHoc = (hoc: Record<Sport, SeasonHoc>, f: (v: number) => number) =>
+  Object.fromEntries(SPORTS.map((s) => [s, { cool: f(hoc[s].cool), warm: f(hoc[s].warm) }])) as Record<Sport, SeasonHoc>;
+
+export function formFrom(data: LevelStandard, units: UnitSystem): StandardFormModel {
   return {
     name: data.name,
-    hocMm: Object.fromEntries(SPORTS.map((s) => [s, { ...data.hocMm[s] }])) as StandardFormModel['hocMm'],
+    hoc: mapHoc(data.hocMm, (mm) => hocValue(mm, units)),
     minMowingsPerWeek: data.minMowingsPerWeek,
     maxMowingIntervalDays: data.maxMowingIntervalDays,
     annualNShare: data.annualNShare,
@@ -35,12 +41,21 @@ export function formFrom(data: LevelStandard): StandardFormModel {
   };
 }
 
-/** The PATCH body: every editable value, with the version the form was opened at. */
-export function bodyFrom(m: StandardFormModel, version: number): UpdateLevelStandardInput {
+/**
+ * The PATCH body: every editable value (heights of cut back in millimetres), with the version
+ * the form was opened at. A height shown as it was stored goes back as stored, so saving in
+ * inches does not nudge the millimetres of heights nobody touched.
+ */
+export function bodyFrom(m: StandardFormModel, version: number, units: UnitSystem, stored?: LevelStandard['hocMm']): UpdateLevelStandardInput {
+  const back = (sport: Sport, season: keyof SeasonHoc) => {
+    const was = stored?.[sport]?.[season];
+    const now = m.hoc[sport][season];
+    return was !== undefined && hocValue(was, units) === now ? was : hocToMm(now, units);
+  };
   return {
     version,
     name: m.name,
-    hocMm: m.hocMm,
+    hocMm: Object.fromEntries(SPORTS.map((s) => [s, { cool: back(s, 'cool'), warm: back(s, 'warm') }])) as Record<Sport, SeasonHoc>,
     minMowingsPerWeek: m.minMowingsPerWeek,
     maxMowingIntervalDays: m.maxMowingIntervalDays,
     annualNShare: m.annualNShare,
@@ -52,22 +67,27 @@ export function bodyFrom(m: StandardFormModel, version: number): UpdateLevelStan
   };
 }
 
-const hocRule = (trigger: 'blur' | 'change' = 'change'): FormItemRule[] => [
+/** The schema judges millimetres; an imperial entry is converted first and the message says so. */
+const hocRule = (units: UnitSystem, trigger: 'blur' | 'change' = 'change'): FormItemRule[] => [
   {
     required: true,
     trigger,
     validator: (_rule, value, callback) => {
-      const r = standardHocMmSchema.safeParse(value);
-      callback(r.success ? undefined : new Error(r.error.issues[0]?.message ?? 'invalid height of cut'));
+      const r = standardHocMmSchema.safeParse(typeof value === 'number' ? hocToMm(value, units) : value);
+      const message = r.success ? undefined : (r.error.issues[0]?.message ?? 'invalid height of cut');
+      callback(message ? new Error(units === 'imperial' ? `${message} (checked after converting to millimetres)` : message) : undefined);
     },
   },
 ];
 
 /** Element Plus rules, nested like the model, from the same schema the API parses with. */
-export function standardRules() {
+export function standardRules(units: UnitSystem) {
   const top = zodRules(levelStandardChangesSchema, { trigger: 'change' });
   return {
     ...top,
-    hocMm: Object.fromEntries(SPORTS.map((s) => [s, { cool: hocRule(), warm: hocRule() }])),
+    hoc: Object.fromEntries(SPORTS.map((s) => [s, { cool: hocRule(units), warm: hocRule(units) }])),
   };
 }
+
+/** The form's path of an API issue path: the API names heights `hocMm.<sport>.<season>`, the form `hoc.…`. */
+export const formPathOf = (apiPath: string) => apiPath.replace(/^hocMm\./, 'hoc.');

@@ -43,7 +43,7 @@ describe('JobCard', () => {
     // Heights show to the eighth of an inch crews set mowers in (was "2.00 in").
     expect(card.text()).toMatch(/HOC\s*2 in/);
     expect(card.text()).toMatch(/Mower\s*Reel mower/);
-    expect(card.text()).toMatch(/Planned\s*0\.94 h/);
+    expect(card.text()).toMatch(/Planned\s*0:56 h/);
     expect(card.get('[aria-label="Stop 2"]').text()).toBe('2');
     expect(card.get('[data-test="job-status"]').text()).toBe('Assigned');
     expect(card.findAll('.job__actions button').map((b) => b.text())).toEqual(['Start', 'Done', 'Skip']);
@@ -54,7 +54,7 @@ describe('JobCard', () => {
     const queued = { body: { status: 'done', actualHours: 1.25, note: '', clientRef: 'abcdefgh', reportedAt: '' }, state: 'waiting' } as unknown as QueuedReport;
     const card = mountCard({ order: order(), queued });
     expect(card.get('[data-test="job-status"]').text()).toMatch(/^Done\s*waiting to send$/);
-    expect(card.text()).toMatch(/Took\s*1\.25 h/);
+    expect(card.text()).toMatch(/Took\s*1:15 h/);
     expect(card.find('.job__actions').exists()).toBe(false);
     const started = mountCard({ order: order({ status: 'started' }) });
     expect(started.findAll('.job__actions button').map((b) => b.text())).toEqual(['Done', 'Skip']);

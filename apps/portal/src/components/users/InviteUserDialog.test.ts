@@ -22,7 +22,7 @@ cleanUpAfterEach();
 
 describe('InviteUserDialog', () => {
   test('should invite once, then show the link in place of the form and close on Done', async () => {
-    const fetch = answering(201, { user: INVITED, inviteUrl: 'http://portal.test/accept-invite/abc', emailed: true });
+    const fetch = answering(201, { user: INVITED, inviteUrl: 'http://portal.test/accept-invite/abc', emailed: true, mail: 'sent' });
     vi.stubGlobal('fetch', fetch);
     const w = mountDialog(InviteUserDialog, { options: OPTIONS });
     await flushPromises();
@@ -43,6 +43,24 @@ describe('InviteUserDialog', () => {
     ([...document.body.querySelectorAll('.el-dialog__footer button')].find((b) => b.textContent?.trim() === 'Done') as HTMLButtonElement).click();
     await flushPromises();
     expect(w.emitted('update:open')).toEqual([[false]]);
+    w.unmount();
+  });
+
+  test('should say no e-mail went out when mail is off, and that the link must be passed on by hand', async () => {
+    vi.stubGlobal('fetch', answering(201, { user: INVITED, inviteUrl: 'http://portal.test/accept-invite/xyz', emailed: false, mail: 'off' }));
+    const w = mountDialog(InviteUserDialog, { options: OPTIONS });
+    await flushPromises();
+    w.findAllComponents({ name: 'SelectItem' })[0]!.vm.$emit('update:modelValue', 'head');
+    await flushPromises();
+    await type('[data-test="invite-name"]', 'W. Reed');
+    await type('[data-test="invite-email"]', 'w.reed@test.example');
+    await submitDialog('invite');
+    await vi.waitFor(() => expect($('[data-test="invite-url"]')).not.toBeNull());
+    const said = $('[data-test="invite-mail"]')!.textContent!;
+    expect(said).toMatch(/No e-mail was sent: e-mail is not set up/);
+    expect(said).toMatch(/Pass this link on to w\.reed@test\.example yourself/);
+    expect(said).not.toMatch(/on its way/);
+    expect(($('[data-test="invite-url"] input, input[data-test="invite-url"]') as HTMLInputElement).value).toBe('http://portal.test/accept-invite/xyz');
     w.unmount();
   });
 });

@@ -1,6 +1,7 @@
 import type { PlanDiff } from '@swardwise/domain';
 import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
+import { createPinia } from 'pinia';
 import { afterEach, describe, expect, test } from 'vitest';
 import PlanDiffDialog from './PlanDiffDialog.vue';
 import { DATES, diffItem } from './sample.ts';
@@ -13,7 +14,7 @@ function diffOf(over: Partial<PlanDiff>): PlanDiff {
 function mountDialog(diff: PlanDiff) {
   return mount(PlanDiffDialog, {
     props: { open: true, diff, applying: false, weekText: '30 Nov – 6 Dec 2026' },
-    global: { plugins: [ElementPlus] },
+    global: { plugins: [ElementPlus, createPinia()] },
     attachTo: document.body,
   });
 }
@@ -37,8 +38,8 @@ describe('PlanDiffDialog', () => {
     expect(active.textContent).toBe('Changed (1)');
     const row = q('[data-test="diff-changed"] [data-test="diff-row"]')!;
     expect(row.textContent).toContain('day, crew');
-    expect(row.textContent).toContain('Mon 30 Nov · North A · 1.5 h');
-    expect(row.textContent).toContain('Wed 2 Dec · North B · 1.5 h');
+    expect(row.textContent).toContain('Mon 30 Nov · North A · 1:30 h');
+    expect(row.textContent).toContain('Wed 2 Dec · North B · 1:30 h');
     expect(row.textContent).toContain('Moved after the rain');
     w.unmount();
   });

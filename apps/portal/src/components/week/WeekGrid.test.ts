@@ -47,7 +47,7 @@ describe('WeekGrid', () => {
     expect(card.text()).toContain('Paint lines');
     expect(card.text()).toContain('Diamond 2');
     expect(card.text()).toContain('Birch Park');
-    expect(card.text()).toContain('2.3 h');
+    expect(card.text()).toContain('2:15 h');
     // Assigned (it sits in a crew's row), pinned and added by hand all say one thing: one mark.
     expect(card.findAll('.card__mark').map((m) => m.text())).toEqual(['By hand']);
     expect(card.attributes('aria-label')).toContain('Assigned, added by hand');
@@ -88,13 +88,13 @@ describe('WeekGrid', () => {
     const w = mountGrid(board([order({ crewId: 11, plannedDate: DATES[0] }), order({ crewId: 11, plannedDate: DATES[1] })], days));
     const calm = cell(w, 11, DATES[0]!);
     expect(calm.get('[data-test="cell-load"]').attributes('data-overloaded')).toBe('false');
-    expect(calm.text()).toContain('6.5 h / 8.0 h');
+    expect(calm.text()).toContain('6:30 h / 8:00 h');
     expect(calm.find('[data-test="overload"]').exists()).toBe(false);
     const busy = cell(w, 11, DATES[1]!);
     expect(busy.get('[data-test="cell-load"]').attributes('data-overloaded')).toBe('true');
-    expect(busy.get('[data-test="overload"]').text()).toBe('over by 1.2 h');
+    expect(busy.get('[data-test="overload"]').text()).toBe('over by 1:12 h');
     expect(busy.findAll('[data-test="cell-route"] li').map((li) => li.text())).toEqual(['Birch Park', 'Alder Green']);
-    expect(busy.get('[data-test="cell-route"]').text()).toContain('31.4 km');
+    expect(busy.get('[data-test="cell-route"]').text()).toContain('19.5 mi');
     expect(busy.get('[data-test="cell-route"]').attributes('title')).toBe('North yard → Birch Park → Alder Green → North yard');
     // The bar's segments follow the hours: 7.5 of 9.2 h is the work share.
     const work = busy.get('.cell__seg.is-work').attributes('style');

@@ -3,6 +3,7 @@
  * orders or filters (not once per render) and can be tested without a DOM.
  */
 import { addDaysIso, CAUTIONS, weekdayOf, type CautionKey, type CrewDay, type WeekBoard, type WorkOrderRow, type WorkTask } from '@swardwise/domain';
+import { crewHoursText } from '../../utils/units.ts';
 
 /** Row key of the orders no crew has yet. */
 const UNASSIGNED = 'none';
@@ -112,8 +113,9 @@ export function sumHours(orders: readonly WorkOrderRow[]): number {
   return orders.reduce((s, o) => s + o.plannedHours, 0);
 }
 
+/** Crew hours as h:mm ("1:30 h"), the way a crew reads time. */
 export function formatHours(h: number): string {
-  return `${(Math.round(h * 10) / 10).toFixed(1)} h`;
+  return crewHoursText(h);
 }
 
 const SHORT_DAY: Record<string, string> = { mon: 'Mon', tue: 'Tue', wed: 'Wed', thu: 'Thu', fri: 'Fri', sat: 'Sat', sun: 'Sun' };
