@@ -6,9 +6,12 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import sharp from 'sharp';
-import { afterAll, beforeAll, inject } from 'vitest';
+import { afterAll, afterEach, beforeAll, inject } from 'vitest';
 import type { Role } from '@swardwise/domain';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
+import { finishOpenPages, watchContext } from './axe.ts';
+
+export { checkA11y } from './axe.ts';
 
 const CHROMIUM_ARGS = [
   '--headless',
@@ -30,12 +33,20 @@ export const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshot
 /** The file's browser, set by `useBrowser()` before its tests (a live binding). */
 export let browser: Browser;
 
-/** Launches the file's browser before its tests and closes it after them. */
+/**
+ * Launches the file's browser before its tests and closes it after them. Every context and
+ * page it makes (`browser.newPage()`, `browser.newContext()`) is checked with axe-core against
+ * WCAG 2.1 A/AA after each navigation and when closed, which fails on a violation (axe.ts).
+ */
 export function useBrowser(): void {
   beforeAll(async () => {
     fs.mkdirSync(shots, { recursive: true });
     browser = await launchBrowser();
+    const newContext = browser.newContext.bind(browser);
+    // browser.newPage() makes its context through this too.
+    browser.newContext = async (options) => watchContext(await newContext(options));
   });
+  afterEach(finishOpenPages);
   afterAll(() => browser?.close());
 }
 
