@@ -79,3 +79,27 @@ export async function turfPhoto(name: string, width: number, height: number) {
   const png = name.endsWith('.png');
   return { name, mimeType: png ? 'image/png' : 'image/jpeg', buffer: await (png ? image.png() : image.jpeg()).toBuffer() };
 }
+
+/**
+ * Presses Tab (Shift+Tab with `back`) until the focused element is, or is inside, `selector`,
+ * as a person without a mouse moves through the page; fails after `max` presses.
+ */
+export async function tabTo(page: Page, selector: string, { max = 150, back = false } = {}): Promise<void> {
+  for (let i = 0; i < max; i++) {
+    await page.keyboard.press(back ? 'Shift+Tab' : 'Tab');
+    if (await page.evaluate((s) => !!document.activeElement?.closest(s), selector)) return;
+  }
+  throw new Error(`${selector} was not reached with ${max} presses of Tab`);
+}
+
+/** Signs in with the keyboard alone: Tab to each field, type, Enter. */
+export async function keyboardSignIn(page: Page, role: Role, landing?: string) {
+  await page.goto(`${inject('baseUrl')}/sign-in`);
+  await page.locator('[data-test="email"]').first().waitFor();
+  await tabTo(page, '[data-test="email"]');
+  await page.keyboard.type(DEMO_SIGN_INS[role].email);
+  await tabTo(page, '[data-test="password"]');
+  await page.keyboard.type(DEMO_SIGN_INS[role].password);
+  await page.keyboard.press('Enter');
+  await page.waitForURL((url) => (landing ? url.pathname === landing : !url.pathname.startsWith('/sign-in')));
+}

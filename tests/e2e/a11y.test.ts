@@ -1,0 +1,110 @@
+/**
+ * WCAG 2.1 A/AA with axe-core on every page of every role: each link of the role's side
+ * navigation, a site's and a field's page, the crew sheet and the pages before signing in;
+ * crew leads' and partners' pages also on a phone. (Every other browser test is checked as
+ * well, after each navigation: see axe.ts.)
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, test } from 'vitest';
+import type { Role } from '@swardwise/domain';
+import { a11yViolations, formatViolations, type A11yViolation } from './axe.ts';
+import { browser, PHONE, shots, signIn, useBrowser } from './browser.ts';
+
+const baseUrl = inject('baseUrl');
+const DESKTOP = { viewport: { width: 1366, height: 900 } };
+/** A role's pages one after the other, each waited for and checked: minutes, not seconds. */
+const ROLE_TIMEOUT = 300_000;
+
+useBrowser();
+
+/** Waits for the page's content: its title, no request open, the map's tiles of data placed. */
+async function settle(page: Page) {
+  await page.locator('[data-test="page-title"]').first().waitFor();
+  await page.waitForLoadState('networkidle');
+  if (await page.locator('[data-test="field-map"]').count()) await page.locator('[data-test="field-map"][data-ready="true"]').waitFor();
+  await page.evaluate(() => Promise.all(document.getAnimations().map((a) => a.finished.catch(() => undefined))));
+}
+
+/** The pages a role reaches: its navigation, then a site's, a field's and a crew sheet where it has them. */
+async function pagesOf(page: Page): Promise<string[]> {
+  const nav = await page.locator('[data-test^="nav-"]').evaluateAll((els) => els.map((el) => el.getAttribute('href')!));
+  const details = await page.evaluate(async () => {
+    const first = async (url: string, base: string) => {
+      const res = await fetch(url);
+      if (!res.ok) return [];
+      const items = (await res.json()).items as { id: number }[];
+      return items.length ? [`${base}/${items[0]!.id}`] : [];
+    };
+    return [...(await first('/api/sites', '/sites')), ...(await first('/api/fields', '/fields'))];
+  });
+  const pages = [...nav, ...details];
+  if (nav.includes('/week')) {
+    await page.goto(`${baseUrl}/week`);
+    await page.locator('[data-test="week-grid"]').waitFor();
+    const sheet = page.locator('[data-test="print-sheet"]').first();
+    if (await sheet.count()) pages.push((await sheet.getAttribute('href'))!);
+  }
+  return pages;
+}
+
+/** Visits each page and answers what axe finds there, by page. */
+async function auditPages(page: Page, pages: string[]): Promise<Map<string, A11yViolation[]>> {
+  const found = new Map<string, A11yViolation[]>();
+  for (const url of pages) {
+    await page.goto(`${baseUrl}${url}`);
+    await settle(page);
+    found.set(url, await a11yViolations(page));
+  }
+  return found;
+}
+
+const summary: Record<string, { elements: number; rules: string[] }> = {};
+
+function expectClean(label: string, found: Map<string, A11yViolation[]>) {
+  for (const [url, violations] of found) {
+    summary[`${label} ${url}`] = { elements: violations.length, rules: [...new Set(violations.map((v) => v.rule))] };
+  }
+  fs.writeFileSync(path.join(shots, '..', 'a11y-summary.json'), JSON.stringify(summary, null, 2));
+  const all = [...found.values()].flat();
+  expect(all, formatViolations(all)).toEqual([]);
+}
+
+const ROLES: Role[] = ['admin', 'head', 'foreman', 'crew', 'partner'];
+
+describe('accessibility (WCAG 2.1 A/AA, axe-core)', () => {
+  test('should find no violation on the pages before signing in', async () => {
+    const page = await browser.newPage(DESKTOP);
+    try {
+      expectClean('public', await auditPages(page, ['/sign-in', '/forgot-password', '/accept-invite?token=x']));
+    } finally {
+      // The pages were checked above; a close that repeats the list adds nothing.
+      await page.close().catch(() => undefined);
+    }
+  });
+
+  test.each(ROLES)('should find no violation on any page of the %s at desktop size', async (role) => {
+    const page = await browser.newPage(DESKTOP);
+    try {
+      await signIn(page, role);
+      const pages = await pagesOf(page);
+      expect(pages.length).toBeGreaterThanOrEqual(3);
+      expectClean(`${role} desktop`, await auditPages(page, [...pages, '/no-such-page']));
+    } finally {
+      await page.close().catch(() => undefined);
+    }
+  }, ROLE_TIMEOUT);
+
+  test.each(['crew', 'partner'] as Role[])('should find no violation on any page of the %s on a phone', async (role) => {
+    const context = await browser.newContext(PHONE);
+    const page = await context.newPage();
+    try {
+      await signIn(page, role);
+      const pages = await pagesOf(page);
+      expectClean(`${role} phone`, await auditPages(page, pages));
+    } finally {
+      await context.close().catch(() => undefined);
+    }
+  }, ROLE_TIMEOUT);
+});
