@@ -9,7 +9,7 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
 import type { Role } from '@swardwise/domain';
-import { a11yViolations, formatViolations, type A11yViolation } from './axe.ts';
+import { a11yViolations, formatViolations, violationsSoFar, type A11yViolation } from './axe.ts';
 import { browser, PHONE, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
@@ -74,6 +74,27 @@ function expectClean(label: string, found: Map<string, A11yViolation[]>) {
 const ROLES: Role[] = ['admin', 'head', 'foreman', 'crew', 'partner'];
 
 describe('accessibility (WCAG 2.1 A/AA, axe-core)', () => {
+  test('should check a page after each navigation by itself and fail its close with the list', async () => {
+    const page = await browser.newPage(DESKTOP);
+    const has = async (rule: string, at: string) => (await violationsSoFar(page)).some((v) => v.rule === rule && v.path === at);
+    let closed: unknown = null;
+    try {
+      // An input without a name in every document the page loads.
+      await page.addInitScript(() => document.addEventListener('DOMContentLoaded', () => document.body.append(Object.assign(document.createElement('input'), { id: 'nameless' }))));
+      await page.goto(`${baseUrl}/sign-in`);
+      await expect.poll(() => has('label', '/sign-in'), { timeout: 20_000 }).toBe(true);
+      // A picture without a text alternative, then the portal's own route change (no page load).
+      await page.evaluate(() => document.body.append(Object.assign(document.createElement('img'), { src: '/favicon.svg', width: 20 })));
+      await page.locator('[data-test="forgot-password"]').press('Enter');
+      await page.waitForURL((url) => url.pathname === '/forgot-password');
+      await expect.poll(() => has('image-alt', '/forgot-password'), { timeout: 20_000 }).toBe(true);
+    } finally {
+      closed = await page.close().then(() => null, (error: unknown) => error);
+    }
+    expect(String(closed)).toMatch(/label \(critical\) on \/sign-in — Form elements must have labels\n\s+#nameless\n\s+<input id="nameless">/);
+    expect(String(closed)).toMatch(/image-alt \(critical\) on \/forgot-password/);
+  });
+
   test('should find no violation on the pages before signing in', async () => {
     const page = await browser.newPage(DESKTOP);
     try {

@@ -9,6 +9,7 @@
  */
 import fs from 'node:fs';
 import { createRequire } from 'node:module';
+import type { AxeResults, RunOptions } from 'axe-core';
 import type { BrowserContext, Page } from 'playwright-core';
 
 const require = createRequire(import.meta.url);
@@ -54,7 +55,7 @@ async function runAxe(page: Page, force: boolean): Promise<RawViolation[] | null
   if (!present) await page.evaluate(AXE_SOURCE);
   return page.evaluate(
     async ({ tags, force }) => {
-      const axe = (window as unknown as { axe: typeof import('axe-core') }).axe;
+      const axe = (window as unknown as { axe: { run: (context: Document, options: RunOptions) => Promise<AxeResults> } }).axe;
       const moving = () => document.getAnimations().some((a) => a.playState === 'running');
       if (!force && moving()) return null;
       let changed = false;
@@ -164,6 +165,12 @@ class PageAudit {
     return run;
   }
 
+  /** What the checks so far found, once the one running has ended (no new check). */
+  async soFar(): Promise<A11yViolation[]> {
+    await this.queue;
+    return [...this.found.values()];
+  }
+
   /** Before the page closes: the last check, then everything found in its life (once: later calls answer nothing). */
   async finish(): Promise<A11yViolation[]> {
     if (this.reported) return [];
@@ -234,6 +241,11 @@ export async function checkA11y(page: Page): Promise<void> {
 /** The violations of the page as it shows now, without failing (for reports). */
 export async function a11yViolations(page: Page): Promise<A11yViolation[]> {
   return audit(page).checkNow();
+}
+
+/** What the automatic checks of the page have found so far, without a new check. */
+export function violationsSoFar(page: Page): Promise<A11yViolation[]> {
+  return audit(page).soFar();
 }
 
 /** For a test that left pages open: reports what they found, then forgets them. */
