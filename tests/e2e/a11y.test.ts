@@ -73,6 +73,35 @@ function expectClean(label: string, found: Map<string, A11yViolation[]>) {
 
 const ROLES: Role[] = ['admin', 'head', 'foreman', 'crew', 'partner'];
 
+/**
+ * The contrast of each visible form control's edge (Element Plus draws it as an inset box
+ * shadow) against the card or page behind it: WCAG 1.4.11 asks 3:1, which axe does not check.
+ */
+function controlEdges(page: Page) {
+  return page.evaluate(() => {
+    const rgb = (c: string) => (c.match(/\d+(\.\d+)?/g) ?? []).slice(0, 3).map(Number);
+    const lum = (c: number[]) => {
+      const [r, g, b] = c.map((v) => (v / 255 <= 0.03928 ? v / 255 / 12.92 : ((v / 255 + 0.055) / 1.055) ** 2.4));
+      return 0.2126 * r! + 0.7152 * g! + 0.0722 * b!;
+    };
+    const behind = (el: Element | null): number[] => {
+      for (let e = el; e; e = e.parentElement) {
+        const bg = getComputedStyle(e).backgroundColor;
+        if (bg && !bg.startsWith('rgba(0, 0, 0, 0)') && bg !== 'transparent') return rgb(bg);
+      }
+      return [255, 255, 255];
+    };
+    return Array.from(document.querySelectorAll('.el-input__wrapper, .el-select__wrapper, .el-textarea__inner'))
+      .filter((el) => (el as HTMLElement).offsetParent !== null && !el.closest('.is-disabled, .is-focus, .is-focused'))
+      .map((el) => {
+        const edge = rgb(getComputedStyle(el).boxShadow);
+        const [a, b] = [lum(edge), lum(behind(el.parentElement))];
+        return { control: el.className, ratio: Math.round(((Math.max(a, b) + 0.05) / (Math.min(a, b) + 0.05)) * 100) / 100 };
+      });
+  });
+}
+
+
 describe('accessibility (WCAG 2.1 A/AA, axe-core)', () => {
   test('should check a page after each navigation by itself and fail its close with the list', async () => {
     const page = await browser.newPage(DESKTOP);
@@ -102,6 +131,23 @@ describe('accessibility (WCAG 2.1 A/AA, axe-core)', () => {
     } finally {
       // The pages were checked above; a close that repeats the list adds nothing.
       await page.close().catch(() => undefined);
+    }
+  });
+
+  test('should give the edge of every form control 3:1 against what is behind it', async () => {
+    const page = await browser.newPage(DESKTOP);
+    try {
+      await page.goto(`${baseUrl}/sign-in`);
+      await page.locator('[data-test="email"]').first().waitFor();
+      const signInEdges = await controlEdges(page);
+      await signIn(page, 'foreman');
+      await page.goto(`${baseUrl}/fields`);
+      await page.locator('[data-test="row"]').first().waitFor();
+      const edges = [...signInEdges, ...(await controlEdges(page))];
+      expect(edges.length).toBeGreaterThanOrEqual(4);
+      expect(edges.filter((e) => e.ratio < 3)).toEqual([]);
+    } finally {
+      await page.close();
     }
   });
 
