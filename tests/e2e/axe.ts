@@ -42,6 +42,12 @@ interface RawViolation {
 const QUIET_MS = 300;
 /** A page that keeps changing under the check is tried this often, then checked as it is. */
 const ATTEMPTS = 6;
+/**
+ * The background check after a navigation gives up sooner: a page the test is busy with keeps
+ * changing, and axe on a large page takes the page's main thread for a while. The check at
+ * close sees what it missed.
+ */
+const BACKGROUND_ATTEMPTS = 2;
 
 /**
  * Runs axe in the page. Playwright evaluates in the page's main world through the DevTools
@@ -131,12 +137,13 @@ class PageAudit {
 
   /** One settled check: retried while the page changes under it; `force` checks the last try as it is. */
   private async checkSettled(force: boolean): Promise<A11yViolation[]> {
-    for (let attempt = 1; attempt <= ATTEMPTS && !this.closed; attempt++) {
+    const attempts = force ? ATTEMPTS : BACKGROUND_ATTEMPTS;
+    for (let attempt = 1; attempt <= attempts && !this.closed; attempt++) {
       await this.quiet();
       if (this.closed || this.page.url().startsWith('about:')) return [];
       const path = this.path;
       try {
-        const raw = await runAxe(this.page, force && attempt === ATTEMPTS);
+        const raw = await runAxe(this.page, force && attempt === attempts);
         if (raw) return this.record(raw, path);
       } catch (error) {
         // The test navigated or closed the page while axe looked: the next state gets its check.

@@ -83,7 +83,7 @@ describe('each role’s main task with the keyboard alone', () => {
       await checkA11y(page);
       await tabTo(page, '[data-test="diff-apply"]');
       await page.keyboard.press('Enter');
-      await expect.poll(() => page.locator('[data-test="order-card"]').count()).toBe(added);
+      await expect.poll(() => page.locator('[data-test="order-card"]').count(), { timeout: 15_000 }).toBe(added);
       await page.locator('[data-test="diff-summary"]').waitFor({ state: 'hidden' });
 
       // The keyboard's way of dragging: Enter on a card, then its crew in the dialog.
