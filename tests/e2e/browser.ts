@@ -6,9 +6,12 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import sharp from 'sharp';
-import { afterAll, beforeAll, inject } from 'vitest';
+import { afterAll, afterEach, beforeAll, inject } from 'vitest';
 import type { Role } from '@swardwise/domain';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
+import { finishOpenPages, watchContext } from './axe.ts';
+
+export { checkA11y } from './axe.ts';
 
 const CHROMIUM_ARGS = [
   '--headless',
@@ -30,12 +33,20 @@ export const shots = path.resolve(import.meta.dirname, '../.artifacts/screenshot
 /** The file's browser, set by `useBrowser()` before its tests (a live binding). */
 export let browser: Browser;
 
-/** Launches the file's browser before its tests and closes it after them. */
+/**
+ * Launches the file's browser before its tests and closes it after them. Every context and
+ * page it makes (`browser.newPage()`, `browser.newContext()`) is checked with axe-core against
+ * WCAG 2.1 A/AA after each navigation and when closed, which fails on a violation (axe.ts).
+ */
 export function useBrowser(): void {
   beforeAll(async () => {
     fs.mkdirSync(shots, { recursive: true });
     browser = await launchBrowser();
+    const newContext = browser.newContext.bind(browser);
+    // browser.newPage() makes its context through this too.
+    browser.newContext = async (options) => watchContext(await newContext(options));
   });
+  afterEach(finishOpenPages);
   afterAll(() => browser?.close());
 }
 
@@ -67,4 +78,28 @@ export async function turfPhoto(name: string, width: number, height: number) {
   const image = sharp({ create: { width, height, channels: 3, background: { r: 60, g: 125, b: 66 } } });
   const png = name.endsWith('.png');
   return { name, mimeType: png ? 'image/png' : 'image/jpeg', buffer: await (png ? image.png() : image.jpeg()).toBuffer() };
+}
+
+/**
+ * Presses Tab (Shift+Tab with `back`) until the focused element is, or is inside, `selector`,
+ * as a person without a mouse moves through the page; fails after `max` presses.
+ */
+export async function tabTo(page: Page, selector: string, { max = 150, back = false } = {}): Promise<void> {
+  for (let i = 0; i < max; i++) {
+    await page.keyboard.press(back ? 'Shift+Tab' : 'Tab');
+    if (await page.evaluate((s) => !!document.activeElement?.closest(s), selector)) return;
+  }
+  throw new Error(`${selector} was not reached with ${max} presses of Tab`);
+}
+
+/** Signs in with the keyboard alone: Tab to each field, type, Enter. */
+export async function keyboardSignIn(page: Page, role: Role, landing?: string) {
+  await page.goto(`${inject('baseUrl')}/sign-in`);
+  await page.locator('[data-test="email"]').first().waitFor();
+  await tabTo(page, '[data-test="email"]');
+  await page.keyboard.type(DEMO_SIGN_INS[role].email);
+  await tabTo(page, '[data-test="password"]');
+  await page.keyboard.type(DEMO_SIGN_INS[role].password);
+  await page.keyboard.press('Enter');
+  await page.waitForURL((url) => (landing ? url.pathname === landing : !url.pathname.startsWith('/sign-in')));
 }

@@ -66,7 +66,8 @@ describe('the week plan board', () => {
       expect((await apiBoard(page, districtId)).orders).toHaveLength(0);
       await page.screenshot({ path: path.join(shots, 'week-diff.png'), clip: { x: 0, y: 0, width: 1366, height: 900 } });
       await page.locator('[data-test="diff-apply"]').click();
-      await expect.poll(() => page.locator('[data-test="order-card"]').count()).toBe(added);
+      // Applying writes every order in one transaction: seconds on a busy machine.
+      await expect.poll(() => page.locator('[data-test="order-card"]').count(), { timeout: 15_000 }).toBe(added);
       await page.screenshot({ path: path.join(shots, 'week-board.png'), clip: { x: 0, y: 0, width: 1366, height: 900 } });
 
       const board = await apiBoard(page, districtId);

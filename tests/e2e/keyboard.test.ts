@@ -1,0 +1,166 @@
+/**
+ * Each role's main task with the keyboard alone (Tab, typing, Enter, arrows; no mouse, no
+ * `click`, no `fill`): a crew lead logs a job done from Today, a foreman generates and applies
+ * a week and moves a job to another crew, a partner asks for a booking, the head reaches the
+ * overview and a site. Each open dialog is checked with axe as well.
+ */
+import path from 'node:path';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, test } from 'vitest';
+import { browser, checkA11y, keyboardSignIn, PHONE, shots, tabTo, useBrowser } from './browser.ts';
+
+const baseUrl = inject('baseUrl');
+// A week of the demo season no other browser test plans.
+const WEEK = '2026-08-10';
+
+useBrowser();
+
+/** The element that has the focus, as its data-test key or tag. */
+const focused = (page: Page) => page.evaluate(() => document.activeElement?.closest('[data-test]')?.getAttribute('data-test') ?? document.activeElement?.tagName);
+
+/** Opens the focused Element Plus select with the keyboard and picks the option labelled `label`. */
+async function pickOption(page: Page, label: string) {
+  await page.keyboard.press('Enter');
+  const dropdown = page.locator('.el-select-dropdown:visible');
+  await dropdown.waitFor();
+  const options = await dropdown.locator('.el-select-dropdown__item').allInnerTexts();
+  expect(options).toContain(label);
+  for (let i = 0; i < options.length * 2; i++) {
+    if ((await dropdown.locator('.el-select-dropdown__item.is-hovering').innerText().catch(() => '')) === label) break;
+    await page.keyboard.press('ArrowDown');
+  }
+  await page.keyboard.press('Enter');
+  await dropdown.waitFor({ state: 'hidden' });
+}
+
+describe('each role’s main task with the keyboard alone', () => {
+  test('should let a crew lead log a job done from Today', async () => {
+    const context = await browser.newContext(PHONE);
+    try {
+      const page = await context.newPage();
+      await keyboardSignIn(page, 'crew', '/today');
+      await page.locator('[data-test="job-card"]').first().waitFor();
+      const open = page.locator('[data-test="job-card"]:not([data-status="done"]):not([data-status="skipped"])').first();
+      const id = Number(await open.getAttribute('data-order-id'));
+      await tabTo(page, `[data-test="job-card"][data-order-id="${id}"] [data-test="job-done"]`);
+      await page.keyboard.press('Enter');
+      const dialog = page.locator('[data-test="report-dialog"]').or(page.locator('.el-dialog').filter({ has: page.locator('[data-test="report-submit"]') })).first();
+      await dialog.waitFor();
+      await tabTo(page, '[data-test="report-hours"]');
+      await page.keyboard.press('ControlOrMeta+A');
+      await page.keyboard.type('1.5');
+      await tabTo(page, '[data-test="report-note"]');
+      await page.keyboard.type('Cut with the keyboard test');
+      await checkA11y(page);
+      await tabTo(page, '[data-test="report-submit"]');
+      await page.keyboard.press('Enter');
+      await page.locator(`[data-test="job-card"][data-order-id="${id}"][data-status="done"]`).waitFor();
+      await page.locator('[data-test="outbox-waiting"]').waitFor({ state: 'detached' });
+      const order = await page.evaluate(async (o) => (await (await fetch(`/api/work-orders/${o}`)).json()).order, id);
+      expect(order).toMatchObject({ status: 'done', actualHours: 1.5 });
+    } finally {
+      await context.close();
+    }
+  });
+
+  test('should let a foreman generate and apply a week, then move a job to another crew', async () => {
+    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
+    try {
+      await keyboardSignIn(page, 'foreman', '/district');
+      await tabTo(page, '[data-test="nav-week"]');
+      await page.keyboard.press('Enter');
+      await page.waitForURL((url) => url.pathname === '/week');
+      // The week is chosen by its address, as a bookmark or a typed URL would.
+      await page.goto(`${baseUrl}/week?week=${WEEK}`);
+      await page.locator('[data-test="week-grid"]').waitFor();
+      await page.waitForLoadState('networkidle');
+
+      await tabTo(page, '[data-test="generate-week"]');
+      await page.keyboard.press('Enter');
+      await page.locator('[data-test="diff-summary"]').waitFor();
+      const added = Number(/(\d+) added/.exec((await page.locator('[data-test="diff-summary"]').textContent()) ?? '')?.[1]);
+      expect(added).toBeGreaterThan(0);
+      await checkA11y(page);
+      await tabTo(page, '[data-test="diff-apply"]');
+      await page.keyboard.press('Enter');
+      await expect.poll(() => page.locator('[data-test="order-card"]').count(), { timeout: 15_000 }).toBe(added);
+      await page.locator('[data-test="diff-summary"]').waitFor({ state: 'hidden' });
+
+      // The keyboard's way of dragging: Enter on a card, then its crew in the dialog.
+      const districtId = await page.evaluate(async () => (await (await fetch('/api/auth/me')).json()).user.districtId as number);
+      const board = await page.evaluate(
+        async ([d, w]) => (await (await fetch(`/api/week-plans?districtId=${d}&weekStart=${w}`)).json()) as { crews: { id: number; name: string }[]; orders: { id: number; crewId: number | null; status: string }[] },
+        [districtId, WEEK] as const,
+      );
+      const job = board.orders.find((o) => o.status === 'planned' && o.crewId !== null)!;
+      const other = board.crews.find((c) => c.id !== job.crewId)!;
+      await tabTo(page, `[data-test="order-card"][data-order-id="${job.id}"]`, { max: 600 });
+      await page.keyboard.press('Enter');
+      await page.locator('[data-test="order-dialog"]').or(page.locator('.el-dialog').filter({ has: page.locator('[data-test="order-crew"]') })).first().waitFor();
+      await tabTo(page, '[data-test="order-crew"]');
+      await checkA11y(page);
+      await pickOption(page, other.name);
+      const patched = page.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${job.id}`) && r.request().method() === 'PATCH');
+      await tabTo(page, '[data-test="order-save"]');
+      await page.keyboard.press('Enter');
+      expect((await patched).status()).toBe(200);
+      const moved = await page.evaluate(async (o) => (await (await fetch(`/api/work-orders/${o}`)).json()).order, job.id);
+      expect(moved).toMatchObject({ crewId: other.id, status: 'assigned' });
+      await page.screenshot({ path: path.join(shots, 'keyboard-week.png') });
+    } finally {
+      await page.close();
+    }
+  });
+
+  test('should let a partner ask for a booking on his field from a phone', async () => {
+    const context = await browser.newContext(PHONE);
+    try {
+      const page = await context.newPage();
+      await keyboardSignIn(page, 'partner', '/my-fields');
+      await page.locator('[data-test="my-field"]').first().waitFor();
+      await tabTo(page, '[data-test="my-field"] a');
+      await page.keyboard.press('Enter');
+      await page.waitForURL((url) => /^\/fields\/\d+$/.test(url.pathname));
+      await page.locator('[data-test="field-bookings"]').waitFor();
+      await page.waitForLoadState('networkidle');
+      await tabTo(page, '[data-test="new-booking"]');
+      await page.keyboard.press('Enter');
+      const dialog = page.locator('[data-test="booking-dialog"]');
+      await dialog.waitFor();
+      await tabTo(page, '[data-test="booking-title"]');
+      await page.keyboard.type('Keyboard Cup semi-final');
+      await checkA11y(page);
+      await tabTo(page, '[data-test="booking-submit"]');
+      await page.keyboard.press('Enter');
+      await dialog.waitFor({ state: 'hidden' });
+      await expect.poll(() => page.locator('[data-test="booking"]', { hasText: 'Keyboard Cup semi-final' }).count()).toBe(1);
+    } finally {
+      await context.close();
+    }
+  });
+
+  test('should let the head reach the overview and a site', async () => {
+    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
+    try {
+      await keyboardSignIn(page, 'head', '/overview');
+      await page.locator('[data-test="city-totals"]').waitFor();
+      // From a district's card to its sites, then into the first site.
+      await tabTo(page, '[data-test^="district-"] a[href^="/sites"]');
+      await page.keyboard.press('Enter');
+      await page.waitForURL((url) => url.pathname === '/sites');
+      await page.locator('[data-test="row"]').first().waitFor();
+      await tabTo(page, '[data-test="row"] a[href^="/sites/"]');
+      const name = await page.evaluate(() => document.activeElement?.textContent?.trim());
+      await page.keyboard.press('Enter');
+      await page.waitForURL((url) => /^\/sites\/\d+$/.test(url.pathname));
+      await expect.poll(() => page.locator('[data-test="page-title"]').first().textContent()).toContain(name!);
+      // And back to the overview through the navigation.
+      await tabTo(page, '[data-test="nav-overview"]', { back: true });
+      expect(await focused(page)).toBe('nav-overview');
+      await page.keyboard.press('Enter');
+      await page.waitForURL((url) => url.pathname === '/overview');
+    } finally {
+      await page.close();
+    }
+  });
+});
