@@ -5,6 +5,7 @@ import { ability } from '../ability.ts';
 import * as auth from '../api/auth.ts';
 import { ApiError } from '../api/client.ts';
 import { queryClient } from '../api/queryClient.ts';
+import { forgetOfflineAnswers } from '../utils/offlineCache.ts';
 
 /** Where each role lands after sign-in and when a route is not theirs. */
 const LANDING: Record<Role, string> = {
@@ -30,6 +31,9 @@ export const useSessionStore = defineStore('session', () => {
   function setUser(next: SessionUser | null) {
     // Answers cached for one person are not another's to see (nor a signed-out screen's).
     if (!next || next.id !== user.value?.id) queryClient.clear();
+    // The service worker's copies too, but not when a page opens and learns who it is
+    // (perhaps from those copies, with no signal).
+    if (!next || (user.value && next.id !== user.value.id)) void forgetOfflineAnswers();
     user.value = next;
     if (next) signedOut.value = false;
     ability.update(next ? defineAbilityFor(actorOf(next)).rules : []);
