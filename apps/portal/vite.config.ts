@@ -6,7 +6,7 @@ import { defineConfig } from 'vite';
 import { compression } from 'vite-plugin-compression2';
 import { VitePWA } from 'vite-plugin-pwa';
 import { offlineShell } from './build/offlineShell.ts';
-import { TODAY_API_CACHE } from './src/utils/offlineCache.ts';
+import { TODAY_API_CACHE, TODAY_API_READS } from './src/utils/offlineCache.ts';
 
 const apiPort = process.env.API_PORT ?? '3000';
 const shell = offlineShell(/\/(AppLayout|TodayView)\.vue$/);
@@ -52,7 +52,7 @@ export default defineConfig(({ mode }) => ({
             // Only the reads Today needs, and only GET: each is asked of the network first
             // and answered from the last copy only when there is no connection. Every other
             // API request (and every write) goes to the network untouched.
-            urlPattern: /\/api\/(?:auth\/me|work-orders|crews|districts|sites)(?:\?|$)/,
+            urlPattern: TODAY_API_READS,
             method: 'GET',
             handler: 'NetworkFirst',
             options: { cacheName: TODAY_API_CACHE, cacheableResponse: { statuses: [200] }, expiration: { maxEntries: 20 } },

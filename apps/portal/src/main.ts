@@ -18,6 +18,7 @@ import { ability } from './ability.ts';
 import { queryClient } from './api/queryClient.ts';
 import App from './App.vue';
 import { router } from './router/index.ts';
+import { keepReadsOnceControlled } from './utils/offlineCache.ts';
 
 const app = createApp(App);
 app.use(createPinia());
@@ -25,3 +26,4 @@ app.use(router);
 app.use(VueQueryPlugin, { queryClient });
 app.use(abilitiesPlugin, ability, { useGlobalProperties: true });
 app.mount('#app');
+keepReadsOnceControlled();

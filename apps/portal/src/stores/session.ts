@@ -5,7 +5,7 @@ import { ability } from '../ability.ts';
 import * as auth from '../api/auth.ts';
 import { ApiError } from '../api/client.ts';
 import { queryClient } from '../api/queryClient.ts';
-import { forgetOfflineAnswers } from '../utils/offlineCache.ts';
+import { forgetOfflineAnswers, refreshOfflineSession } from '../utils/offlineCache.ts';
 
 /** Where each role lands after sign-in and when a route is not theirs. */
 const LANDING: Record<Role, string> = {
@@ -78,16 +78,19 @@ export const useSessionStore = defineStore('session', () => {
   async function signIn(email: string, password: string) {
     setSession(await auth.signIn(email, password));
     loaded.value = true;
+    refreshOfflineSession();
   }
 
   async function acceptInvite(token: string, password: string) {
     setSession(await auth.acceptInvite(token, password));
     loaded.value = true;
+    refreshOfflineSession();
   }
 
   async function resetPassword(token: string, password: string) {
     setSession(await auth.resetPassword(token, password));
     loaded.value = true;
+    refreshOfflineSession();
   }
 
   async function signOut() {
@@ -103,6 +106,7 @@ export const useSessionStore = defineStore('session', () => {
   async function setUnits(next: UnitSystem) {
     if (!user.value || user.value.units === next) return;
     setSession(await auth.updateMe({ version: user.value.version, units: next }));
+    refreshOfflineSession();
   }
 
   /** Called when any request finds the session gone (401). */
