@@ -34,6 +34,7 @@ export default defineConfig(({ mode }) => ({
       manifest: false,
       workbox: {
         globPatterns: ['**/*.{js,css,html,woff2,svg}'],
+        importScripts: ['/sw-routes.js'],
         manifestTransforms: [shell.manifestTransform],
         navigateFallback: 'index.html',
         // The API's own pages (photos, the OpenAPI document) are never the app's shell.

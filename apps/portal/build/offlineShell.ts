@@ -36,8 +36,9 @@ export function offlineShell(pages: RegExp): { plugin: Plugin; manifestTransform
     },
   };
   const manifestTransform = async (entries: ManifestEntry[]) => ({
-    // index.html is the shell itself; fonts are named by the stylesheets, not by the chunks.
-    manifest: entries.filter((e) => e.url === 'index.html' || e.url.endsWith('.woff2') || keep.has(e.url)),
+    // index.html and the public files (the icon) are the shell itself; fonts are named by the
+    // stylesheets, not by the chunks.
+    manifest: entries.filter((e) => !e.url.startsWith('assets/') || e.url.endsWith('.woff2') || keep.has(e.url)),
   });
   return { plugin, manifestTransform };
 }
