@@ -29,8 +29,8 @@ export default defineConfig(({ mode }) => ({
     // and Today open with no signal at all.
     VitePWA({
       registerType: 'autoUpdate',
-      // A script file, not inline: the API's content security policy allows no inline script.
-      injectRegister: 'script-defer',
+      // Registered by the app itself once its first page has settled (utils/offlineCache.ts).
+      injectRegister: false,
       manifest: false,
       workbox: {
         globPatterns: ['**/*.{js,css,html,woff2,svg}'],

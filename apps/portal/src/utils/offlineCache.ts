@@ -43,3 +43,18 @@ export function refreshOfflineSession(): void {
   if (typeof navigator === 'undefined' || !navigator.serviceWorker?.controller) return;
   void fetch('/api/auth/me', { credentials: 'same-origin' }).catch(() => undefined);
 }
+
+/**
+ * Registers the service worker (built by vite-plugin-pwa; none under the dev server) once
+ * the first page has shown and read its data: its downloads would otherwise share a slow
+ * connection with the page's own.
+ */
+export function registerWhenSettled(busy: () => boolean): void {
+  if (!import.meta.env.PROD || typeof navigator === 'undefined' || !('serviceWorker' in navigator)) return;
+  const register = () => {
+    if (busy()) return void setTimeout(register, 500);
+    void navigator.serviceWorker.register('/sw.js', { scope: '/' }).catch(() => undefined);
+  };
+  if (document.readyState === 'complete') register();
+  else window.addEventListener('load', register, { once: true });
+}
