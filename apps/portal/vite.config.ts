@@ -3,8 +3,13 @@ import vue from '@vitejs/plugin-vue';
 import Components from 'unplugin-vue-components/vite';
 import { ElementPlusResolver } from 'unplugin-vue-components/resolvers';
 import { defineConfig } from 'vite';
+import { compression } from 'vite-plugin-compression2';
+import { VitePWA } from 'vite-plugin-pwa';
+import { offlineShell } from './build/offlineShell.ts';
+import { TODAY_API_CACHE, TODAY_API_READS } from './src/utils/offlineCache.ts';
 
 const apiPort = process.env.API_PORT ?? '3000';
+const shell = offlineShell(/\/(AppLayout|TodayView)\.vue$/);
 
 export default defineConfig(({ mode }) => ({
   root: fileURLToPath(new URL('.', import.meta.url)),
@@ -15,6 +20,46 @@ export default defineConfig(({ mode }) => ({
     Components({
       resolvers: [ElementPlusResolver({ importStyle: mode === 'test' ? false : 'css' })],
       dts: false,
+    }),
+    shell.plugin,
+    // A brotli and a gzip copy beside each text file, sent by the API as the browser asks
+    // (apps/api/src/http/portal.ts): the best compression, paid once at build time.
+    compression({ algorithms: ['brotliCompress', 'gzip'], threshold: 1024, logLevel: 'silent' }),
+    // The service worker (production builds only; none under `npm run dev`): the app shell
+    // and Today open with no signal at all.
+    VitePWA({
+      registerType: 'autoUpdate',
+      // Registered by the app itself once its first page has settled (utils/offlineCache.ts).
+      injectRegister: false,
+      manifest: false,
+      workbox: {
+        globPatterns: ['**/*.{js,css,html,woff2,svg}'],
+        importScripts: ['/sw-routes.js'],
+        manifestTransforms: [shell.manifestTransform],
+        navigateFallback: 'index.html',
+        // The API's own pages (photos, the OpenAPI document) are never the app's shell.
+        navigateFallbackDenylist: [/^\/api\//],
+        cleanupOutdatedCaches: true,
+        clientsClaim: true,
+        skipWaiting: true,
+        runtimeCaching: [
+          {
+            // Hashed names: a chunk once fetched is the same chunk for ever.
+            urlPattern: /\/assets\//,
+            handler: 'CacheFirst',
+            options: { cacheName: 'swardwise-assets', expiration: { maxEntries: 200 } },
+          },
+          {
+            // Only the reads Today needs, and only GET: each is asked of the network first
+            // and answered from the last copy only when there is no connection. Every other
+            // API request (and every write) goes to the network untouched.
+            urlPattern: TODAY_API_READS,
+            method: 'GET',
+            handler: 'NetworkFirst',
+            options: { cacheName: TODAY_API_CACHE, cacheableResponse: { statuses: [200] }, expiration: { maxEntries: 20 } },
+          },
+        ],
+      },
     }),
   ],
   server: {

@@ -1,10 +1,11 @@
 /**
- * The HTTP application, top to bottom as one pipeline: security headers, logs, the origin
- * of writes, sessions, the caller's identity, body parsing (bounded by who is asking), the
- * API routes, the built portal, errors.
+ * The HTTP application, top to bottom as one pipeline: security headers, compression, logs,
+ * the origin of writes, sessions, the caller's identity, body parsing (bounded by who is
+ * asking), the API routes, the built portal, errors.
  */
 import fs from 'node:fs';
 import path from 'node:path';
+import compression from 'compression';
 import express, { type Express } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
@@ -17,6 +18,7 @@ import { loadUser, requireUser } from './http/auth.ts';
 import { withClock } from './http/clock.ts';
 import { errorHandler, noRoute } from './http/errors.ts';
 import { MAX_JSON_DEPTH, nestedDeeperThan } from './http/json-depth.ts';
+import { portalRouter } from './http/portal.ts';
 import { loggableUrl } from './http/request-log.ts';
 import { sameOriginWrites } from './http/same-origin.ts';
 import { sessionLifetime } from './http/session-lifetime.ts';
@@ -79,6 +81,9 @@ export function createApp(
       strictTransportSecurity: config.cookieSecure,
     }),
   );
+  // JSON and index.html compressed as they are sent (brotli or gzip, as the client asks); the
+  // portal's assets are sent in the copies compressed at build time (http/portal.ts).
+  app.use(compression());
   app.use(
     pinoHttp({
       logger,
@@ -156,12 +161,7 @@ export function createApp(
   if (devRoutes) app.use('/api/dev', devRouter(full));
   app.use('/api', noRoute);
 
-  // The built portal, with the single-page app's routes answered by index.html.
-  const index = path.join(config.portalDist, 'index.html');
-  if (fs.existsSync(index)) {
-    app.use(express.static(config.portalDist, { index: false, maxAge: '1h' }));
-    app.get('/{*splat}', (_req, res) => res.sendFile(index));
-  }
+  if (fs.existsSync(path.join(config.portalDist, 'index.html'))) app.use(portalRouter(config.portalDist));
 
   app.use(errorHandler);
   return { app, store, background };

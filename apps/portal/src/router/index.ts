@@ -18,8 +18,23 @@ function allowed(to: RouteLocationNormalized, role: string): boolean {
   });
 }
 
+/**
+ * Starts fetching the code of the page being opened now, while the guard asks who is signed
+ * in, instead of after: one round trip less before a page shows on a slow connection. The
+ * router loads the same modules itself later (the browser fetches each once).
+ */
+function prefetchPage(to: RouteLocationNormalized) {
+  for (const record of to.matched) {
+    for (const component of Object.values(record.components ?? {})) {
+      // Lazy views are `() => import(…)`; a loaded one is an object.
+      if (typeof component === 'function') void Promise.resolve((component as () => unknown)()).catch(() => undefined);
+    }
+  }
+}
+
 router.beforeEach(async (to) => {
   const session = useSessionStore();
+  if (!session.loaded) prefetchPage(to);
   try {
     await session.load();
   } catch {

@@ -6,6 +6,7 @@ import * as auth from '../api/auth.ts';
 import { ApiError } from '../api/client.ts';
 import { errorMessage, messageFor } from '../api/messages.ts';
 import { queryClient } from '../api/queryClient.ts';
+import { forgetOfflineAnswers, refreshOfflineSession } from '../utils/offlineCache.ts';
 
 /** Where each role lands after sign-in and when a route is not theirs. */
 const LANDING: Record<Role, string> = {
@@ -34,6 +35,9 @@ export const useSessionStore = defineStore('session', () => {
     if (next) endNotice.value = null;
     // Answers cached for one person are not another's to see (nor a signed-out screen's).
     if (!next || next.id !== user.value?.id) queryClient.clear();
+    // The service worker's copies too, but not when a page opens and learns who it is
+    // (perhaps from those copies, with no signal).
+    if (!next || (user.value && next.id !== user.value.id)) void forgetOfflineAnswers();
     user.value = next;
     if (next) signedOut.value = false;
     ability.update(next ? defineAbilityFor(actorOf(next)).rules : []);
@@ -80,16 +84,19 @@ export const useSessionStore = defineStore('session', () => {
   async function signIn(email: string, password: string) {
     setSession(await auth.signIn(email, password));
     loaded.value = true;
+    refreshOfflineSession();
   }
 
   async function acceptInvite(token: string, password: string) {
     setSession(await auth.acceptInvite(token, password));
     loaded.value = true;
+    refreshOfflineSession();
   }
 
   async function resetPassword(token: string, password: string) {
     setSession(await auth.resetPassword(token, password));
     loaded.value = true;
+    refreshOfflineSession();
   }
 
   async function signOut() {
@@ -105,6 +112,7 @@ export const useSessionStore = defineStore('session', () => {
   async function setUnits(next: UnitSystem) {
     if (!user.value || user.value.units === next) return;
     setSession(await auth.updateMe({ version: user.value.version, units: next }));
+    refreshOfflineSession();
   }
 
   /** Called when any request finds the session gone (401); the sign-in page says why. */
