@@ -2,7 +2,7 @@ import { eq } from 'drizzle-orm';
 import { pino } from 'pino';
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { ROLES } from '@swardwise/domain';
+import { DEFAULT_TIME_ZONE, ROLES } from '@swardwise/domain';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
@@ -10,16 +10,20 @@ import { districts, fieldChecks, fields, settings, sites, users } from '../../ap
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
 import { createMailer } from '../../apps/api/src/mail/mailer.ts';
+import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
 
 let database: Database;
 let app: ReturnType<typeof createApp>['app'];
 let firstSeed: Awaited<ReturnType<typeof seedDemoCity>>;
+/** A day in the autumn leagues: the demo books games only when the turf is playable. */
+const SEEDED_ON = '2026-10-07';
 
 beforeAll(async () => {
   database = await openDatabase({ pgliteDir: 'memory://' });
-  firstSeed = await seedDemoCity(database.db);
+  firstSeed = await seedDemoCity(database.db, SEEDED_ON);
   const logger = pino({ level: 'silent' });
-  app = createApp({ db: database.db, config: loadConfig({ NODE_ENV: 'test' }), logger, sessionSecret: 'test', mailer: createMailer(null, logger) }).app;
+  const clock = new DepartmentClock(database.db, DEFAULT_TIME_ZONE, () => new Date(`${SEEDED_ON}T18:00:00Z`));
+  app = createApp({ db: database.db, config: loadConfig({ NODE_ENV: 'test' }), logger, sessionSecret: 'test', mailer: createMailer(null, logger), clock }).app;
 });
 afterAll(() => database.close());
 
@@ -35,7 +39,7 @@ describe('demo city seed', () => {
       users: (await database.db.select().from(users)).length,
     });
     const before = await counts();
-    expect(await seedDemoCity(database.db)).toBeNull();
+    expect(await seedDemoCity(database.db, SEEDED_ON)).toBeNull();
     expect(await counts()).toEqual(before);
   });
 
