@@ -281,6 +281,8 @@ function mowings(f: FieldFacts, startI: number, endI: number, rand: Rng, rainOf:
   let from = startI;
   let height = hocMm;
   let sinceCut = 0;
+  // Index of the last cut: the day before the window at first (the run's own assumption).
+  let lastCut = startI - 1;
   while (from <= endI) {
     const sim = simulateMowing(hocMm, growth.slice(from, endI + 1), height, { startDate: dates[from]!, ...policy, mowingDays: DEMO_WORK_DAYS, daysSinceCutAtStart: sinceCut });
     let restart: number | null = null;
@@ -307,7 +309,7 @@ function mowings(f: FieldFacts, startI: number, endI: number, rand: Rng, rainOf:
         if (i + 1 <= endI) {
           restart = i + 1;
           height = ev.heightBeforeMm + (growth[i] as number);
-          sinceCut = sinceCut + (i - from) + 1;
+          sinceCut = i - lastCut;
         } else restart = endI + 1;
         break;
       }
@@ -326,13 +328,13 @@ function mowings(f: FieldFacts, startI: number, endI: number, rand: Rng, rainOf:
         restart = j + 1;
         height = hocMm + (growth[j] as number);
         sinceCut = 0;
+        lastCut = j;
         break;
       }
       out.push({ ...base, status: 'done', doneOn: date, actualHours: hours(), notes: '' });
       cuts.push(date);
       // An on-time cut is the run's own: it goes on from there.
-      height = hocMm;
-      sinceCut = 0;
+      lastCut = i;
     }
     if (restart === null) break;
     from = restart;
@@ -480,7 +482,8 @@ function fieldChecks(f: FieldFacts, closedNow: boolean, window: DemoSeasonWindow
 /** A sports field closed for a day after a storm soaked it (rain of 30 mm or more), now and then. */
 function wetClosures(f: FieldFacts, sports: boolean, window: DemoSeasonWindow, rand: Rng, rainOf: (iso: string) => number, out: DemoClosure[]): void {
   if (!sports) return;
-  for (let d = window.start; d <= window.yesterday; d = addDaysIso(d, 1)) {
+  // Past days only: a booking of today on would have the week plan paint lines for it.
+  for (let d = window.start; d < window.yesterday; d = addDaysIso(d, 1)) {
     const rain = rainOf(d);
     if (rain < 30 || f.outlook.maintenanceLevel === 4 || rand() > 0.2) continue;
     out.push({
