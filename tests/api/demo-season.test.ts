@@ -7,7 +7,7 @@ import { eq } from 'drizzle-orm';
 import { pino } from 'pino';
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { DEFAULT_TIME_ZONE, addDaysIso, grassSeason, type Grass } from '@swardwise/domain';
+import { DEFAULT_TIME_ZONE, addDaysIso, grassSeason, weekdayOf, type Grass } from '@swardwise/domain';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
@@ -29,7 +29,7 @@ async function startDemo(today: string): Promise<Demo> {
   await clock.ready();
   const config = loadConfig({ NODE_ENV: 'test' });
   const logger = pino({ level: 'silent' });
-  await prepareInstallation(database.db, { ...config, demo: true }, logger, () => {}, clock.today());
+  await prepareInstallation(database.db, { ...config, demo: true }, logger, () => {}, clock.today(), clock.timeZone);
   const { app } = createApp({ db: database.db, config, logger, sessionSecret: 'test', mailer: createMailer(null, logger), clock });
   return {
     database,
@@ -63,6 +63,8 @@ describe('demo season in Records', () => {
       expect(totals.mowingsMissed, d.code).toBeGreaterThan(5);
       expect(totals.mowingsMissed / totals.mowingsAsked, d.code).toBeLessThan(0.2);
       expect(lateMowings.length, d.code).toBe(totals.mowingsLate);
+      // Reported on the crews' working days, as the department's calendar reads the moment.
+      for (const l of lateMowings) expect(['mon', 'tue', 'wed', 'thu', 'fri'], `${l.fieldName} ${l.doneOn}`).toContain(weekdayOf(l.doneOn));
       expect(byField.length, d.code).toBeGreaterThan(10);
       // Work in every week from the first mowings of March to the end of November.
       const weeks = byWeek.map((w: { weekStart: string }) => w.weekStart);

@@ -4,7 +4,7 @@
  * than thousands of bound parameters, so a fresh demo database stays quick to make.
  */
 import { sql } from 'drizzle-orm';
-import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor, surfaceScore, type Level } from '@swardwise/domain';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor, localDateOf, localTimeOf, surfaceScore, type Level } from '@swardwise/domain';
 import type { Queryable } from '../client.ts';
 import { fieldChecks, workOrders, workUpdates } from '../schema/index.ts';
 import type { DemoCity } from './demo-city.ts';
@@ -19,13 +19,15 @@ export interface SeasonIds {
   crewUserOf: (crewName: string) => number | null;
 }
 
-/**
- * The moment a crew reported a job done on a department-local date: early afternoon in the
- * demo city's zone (18:00 UTC), which is that same date in every zone from UTC−12 to UTC+5.
- */
-const reportedAt = (date: string) => `${date}T18:00:00Z`;
+/** The instant of a wall-clock time on a department-local date (the crew's report, mid-afternoon). */
+function localMoment(date: string, time: string, timeZone: string): string {
+  const guess = Date.parse(`${date}T${time}:00Z`);
+  const wall = Date.parse(`${localDateOf(guess, timeZone)}T${localTimeOf(guess, timeZone)}:00Z`);
+  return new Date(guess - (wall - guess)).toISOString();
+}
 
-export async function insertDemoSeason(tx: Queryable, city: DemoCity, season: DemoSeason, ids: SeasonIds): Promise<{ workOrders: number; fieldChecks: number }> {
+export async function insertDemoSeason(tx: Queryable, city: DemoCity, season: DemoSeason, ids: SeasonIds, timeZone: string): Promise<{ workOrders: number; fieldChecks: number }> {
+  const reportedAt = (date: string) => localMoment(date, '15:30', timeZone);
   const orders = season.orders.map((o) => {
     const f = city.fields[o.fieldIndex]!;
     const done = o.status === 'done';

@@ -40,9 +40,9 @@ export async function hasDemoCity(db: Db): Promise<boolean> {
 
 /**
  * Returns what was inserted, or null when the demo city (or any data) is already there.
- * `today` is the department's date (the server passes its clock's); the demo city's zone by default.
+ * `today` is the department's date (the server passes its clock's), `timeZone` its zone; the demo city's by default.
  */
-export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TIME_ZONE)): Promise<SeedSummary | null> {
+export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TIME_ZONE), timeZone: string = DEFAULT_TIME_ZONE): Promise<SeedSummary | null> {
   const [marker] = await db.select().from(settings).where(eq(settings.key, MARKER));
   if (marker) return null;
   const existing = await db.select({ id: districts.id }).from(districts).limit(1);
@@ -253,7 +253,7 @@ export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TI
       districtIdOf: (key) => districtIds.get(siteOf.get(key)!.districtCode)!,
       crewIdOf: (name) => crewIds.get(name)!,
       crewUserOf: (name) => crewUsers.get(name) ?? null,
-    });
+    }, timeZone);
 
     // Invented games, tournaments and practices across the season and around today.
     // A field closed for a day after a storm is kept as a booking of the day ("other").
