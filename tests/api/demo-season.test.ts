@@ -22,6 +22,16 @@ interface Demo {
   agent: (role: keyof typeof DEMO_SIGN_INS) => Promise<ReturnType<typeof supertest.agent>>;
 }
 
+const started = new Map<string, Promise<Demo>>();
+/** The demo started on `today`, once per file: each seed is a fresh demo database. */
+const demoOn = (today: string): Promise<Demo> => {
+  if (!started.has(today)) started.set(today, startDemo(today));
+  return started.get(today)!;
+};
+afterAll(async () => {
+  for (const demo of started.values()) await (await demo).database.close();
+});
+
 /** A demo started on `today` (mid-afternoon in the department's zone), as the server starts one. */
 async function startDemo(today: string): Promise<Demo> {
   const database = await openDatabase({ pgliteDir: 'memory://' });
@@ -45,9 +55,8 @@ async function startDemo(today: string): Promise<Demo> {
 describe('demo season in Records', () => {
   let demo: Demo;
   beforeAll(async () => {
-    demo = await startDemo('2026-12-02');
+    demo = await demoOn('2026-12-02');
   });
-  afterAll(() => demo.database.close());
 
   test('should show each district’s season: orders done and skipped, mowings late and missed, every week since March', async () => {
     const head = await demo.agent('head');
@@ -97,9 +106,8 @@ describe('demo season in Records', () => {
 describe.each(['2026-07-15', '2026-12-02', '2027-03-20'])('demo started on %s', (today) => {
   let demo: Demo;
   beforeAll(async () => {
-    demo = await startDemo(today);
+    demo = await demoOn(today);
   });
-  afterAll(() => demo.database.close());
 
   test('should hold weather observed through yesterday and a forecast for the coming week', async () => {
     const head = await demo.agent('head');
