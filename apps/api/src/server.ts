@@ -24,7 +24,7 @@ async function main() {
   try {
     await clock.ready();
     logger.info({ timeZone: clock.timeZone, today: clock.today() }, 'department clock');
-    await prepareInstallation(database.db, config, logger, undefined, clock.today());
+    await prepareInstallation(database.db, config, logger, undefined, clock.today(), clock.timeZone);
   } catch (err) {
     await database.close();
     throw err;

@@ -38,9 +38,11 @@ export async function prepareInstallation(
   print: (line: string) => void = (line) => process.stdout.write(`${line}\n`),
   /** The department's today (its clock), which the demo's season of work is laid around. */
   today?: string,
+  /** The department's time zone (its clock), the zone of the demo's reported work. */
+  timeZone?: string,
 ): Promise<void> {
   if (config.demo) {
-    const seeded = await seedDemoCity(db, today);
+    const seeded = await seedDemoCity(db, today, timeZone);
     if (seeded) logger.info(seeded, 'demo city seeded (invented data)');
   }
   const demoPresent = await hasDemoCity(db);

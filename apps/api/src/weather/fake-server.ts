@@ -7,6 +7,7 @@ import type { AddressInfo } from 'node:net';
 import type { Server } from 'node:http';
 import express from 'express';
 import { addDaysIso, dayOfYear, DEFAULT_TIME_ZONE, isoToDayNumber, localToday } from '@swardwise/domain';
+import { demoCityWeather, demoWeatherStations } from '../db/seed/demo-city.ts';
 import type { ProviderDay } from './provider.ts';
 
 export type FakeBehaviour = 'ok' | 'slow' | 'error' | 'malformed' | 'gaps' | 'not_json';
@@ -51,6 +52,33 @@ function fakeDay(lat: number, lng: number, date: string, today: string): Provide
   };
 }
 
+/** How near (km) a place must be to a demo station to be served that station's demo weather. */
+const DEMO_STATION_KM = 1;
+
+/**
+ * The demo city's own weather when the place is a demo station (the days the demo seeds are
+ * the days this service answers, so pulling from it changes nothing but the newest days);
+ * null elsewhere.
+ */
+function demoStationDays(lat: number, lng: number, from: string, to: string, today: string): ProviderDay[] | null {
+  const station = demoWeatherStations().find((s) => Math.hypot((s.lat - lat) * 111, (s.lng - lng) * 111 * Math.cos((lat * Math.PI) / 180)) <= DEMO_STATION_KM);
+  if (!station) return null;
+  return demoCityWeather(from, to)
+    .filter((w) => w.stationCode === station.code)
+    .map((w) => ({
+      date: w.date,
+      kind: w.date > today ? 'forecast' : 'observed',
+      t_max_c: w.tmaxC,
+      t_min_c: w.tminC,
+      rh_max_pct: w.rhMaxPct,
+      rh_min_pct: w.rhMinPct,
+      wind_2m_ms: w.windMs,
+      sunshine_h: w.sunshineH,
+      solar_mj: null,
+      rain_mm: w.rainMm,
+    }));
+}
+
 /** `today` (the last observed day) defaults to the local date in `timeZone`, by default the demo city's. */
 export async function startFakeWeather(options: { port?: number; apiKey?: string; today?: string; timeZone?: string; slowMs?: number } = {}): Promise<FakeWeather> {
   const apiKey = options.apiKey ?? 'fake-weather-key';
@@ -73,9 +101,11 @@ export async function startFakeWeather(options: { port?: number; apiKey?: string
     if (behaviour === 'error') return void res.status(502).json({ message: 'upstream station network unavailable' });
     if (behaviour === 'not_json') return void res.type('text/html').send('<html>maintenance</html>');
     const days: unknown[] = [];
+    const last = to < from ? to : addDaysIso(from, 399) < to ? addDaysIso(from, 399) : to;
+    const demo = demoStationDays(lat, lng, from, last, today);
     for (let d = from, i = 0; d <= to && i < 400; d = addDaysIso(d, 1), i += 1) {
       if (behaviour === 'gaps' && i % 4 === 2) continue;
-      const day: Record<string, unknown> = fakeDay(lat, lng, d, today);
+      const day: Record<string, unknown> = demo?.[i] ?? fakeDay(lat, lng, d, today);
       if (behaviour === 'malformed' && i === 1) day.t_max_c = 'hot';
       if (behaviour === 'malformed' && i === 3) day.t_min_c = (day.t_max_c as number) + 5;
       days.push(day);

@@ -20,7 +20,7 @@ import {
   type Vec,
 } from './city-geometry.ts';
 import { rngFor, uniform } from './prng.ts';
-import { stationSeason, type DemoWeatherDay, type DemoWeatherStation, type StationClimate } from './demo-weather.ts';
+import { stationSeason, stationWeather, type DemoWeatherDay, type DemoWeatherStation, type StationClimate } from './demo-weather.ts';
 
 export type { DemoWeatherDay, DemoWeatherStation } from './demo-weather.ts';
 
@@ -869,10 +869,7 @@ export function buildDemoCity(): DemoCity {
 
   const crews: DemoCrew[] = CREW_SPECS.map((c) => ({ districtCode: c.districtCode, name: c.name, hoursPerDay: c.hoursPerDay, members: [...c.members] }));
 
-  const weatherStations: DemoWeatherStation[] = STATION_SPECS.map((s) => {
-    const p = km(s.at[0], s.at[1]);
-    return { code: s.code, name: s.name, lat: p.lat, lng: p.lng, elevationM: s.elevationM };
-  });
+  const weatherStations = demoWeatherStations();
   const weather = STATION_SPECS.flatMap((s, i) => stationSeason(weatherStations[i]!, s.climate));
 
   return {
@@ -886,4 +883,21 @@ export function buildDemoCity(): DemoCity {
     weather,
     basemap: buildBasemap(parkOutlines),
   };
+}
+
+/** The demo city's weather stations. */
+export function demoWeatherStations(): DemoWeatherStation[] {
+  return STATION_SPECS.map((s) => {
+    const p = km(s.at[0], s.at[1]);
+    return { code: s.code, name: s.name, lat: p.lat, lng: p.lng, elevationM: s.elevationM };
+  });
+}
+
+/**
+ * Every demo station's invented weather from `from` to `to` (inclusive), whatever the dates:
+ * a day gets the same weather in every window (see `stationWeather`).
+ */
+export function demoCityWeather(from: string, to: string): DemoWeatherDay[] {
+  const stations = demoWeatherStations();
+  return STATION_SPECS.flatMap((s, i) => stationWeather(stations[i]!, s.climate, from, to));
 }

@@ -77,14 +77,29 @@ function matchup(rng: Rng): string {
   return `${home} v ${away}`;
 }
 
-export function demoFieldEvents(city: DemoCity, seededOn: string): DemoFieldEvent[] {
-  const year = DEMO_SEASON.start.slice(0, 4);
+/**
+ * What the seed knows of the season when it books: its years and whether a field's turf can be
+ * played on a day (`DemoSeason.playable`, from the engine's growth potential). Without it the
+ * bookings are the 2026 season's, whatever the weather.
+ */
+export interface BookingSeason {
+  window: { start: string; today: string };
+  playable: (fieldIndex: number, date: string) => boolean;
+}
+
+export function demoFieldEvents(city: DemoCity, seededOn: string, season?: BookingSeason): DemoFieldEvent[] {
+  const first = Number((season?.window.start ?? DEMO_SEASON.start).slice(0, 4));
+  const last = Number((season?.window.today ?? DEMO_SEASON.start).slice(0, 4));
+  const years: string[] = [];
+  for (let y = first; y <= last; y++) years.push(String(y));
   const siteKind = new Map(city.sites.map((s) => [s.key, s.kind]));
   const events: DemoFieldEvent[] = [];
   const taken = new Set<string>();
   const add = (e: DemoFieldEvent) => {
     const key = `${e.fieldIndex}:${e.startsOn}`;
     if (taken.has(key)) return;
+    // No game on dormant or frozen turf: the booking is not made (the league plays elsewhere).
+    if (season && !season.playable(e.fieldIndex, e.startsOn)) return;
     taken.add(key);
     events.push(e);
   };
@@ -100,18 +115,20 @@ export function demoFieldEvents(city: DemoCity, seededOn: string): DemoFieldEven
     // Better-kept fields host more: every week at levels 1–2, every fortnight below.
     const everyDays = field.maintenanceLevel <= 2 ? 7 : 14;
 
-    for (const [start, end] of SEASONS[sport]) {
-      const last = `${year}-${end}`;
-      for (let d = onOrAfter(`${year}-${start}`, day); d <= last; d = addDaysIso(d, everyDays)) {
-        // A bye week now and then.
-        if (rng() < 0.15) continue;
-        add({ fieldIndex, kind: 'game', title: `${LEAGUE[sport]}: ${matchup(rng)}`, startsOn: d, startTime: pick(rng, times), notes: '' });
-      }
-      // Weekly practices for the first month of the season on the school and complex fields.
-      if (field.maintenanceLevel <= 3 && rng() < 0.35) {
-        const practiceDay = onOrAfter(`${year}-${start}`, day === 2 ? 4 : 2);
-        for (let w = 0; w < 4; w++) {
-          add({ fieldIndex, kind: 'practice', title: `${pick(rng, TEAMS)} practice`, startsOn: addDaysIso(practiceDay, w * 7), startTime: '16:30', notes: '' });
+    for (const year of years) {
+      for (const [start, end] of SEASONS[sport]) {
+        const last = `${year}-${end}`;
+        for (let d = onOrAfter(`${year}-${start}`, day); d <= last; d = addDaysIso(d, everyDays)) {
+          // A bye week now and then.
+          if (rng() < 0.15) continue;
+          add({ fieldIndex, kind: 'game', title: `${LEAGUE[sport]}: ${matchup(rng)}`, startsOn: d, startTime: pick(rng, times), notes: '' });
+        }
+        // Weekly practices for the first month of the season on the school and complex fields.
+        if (field.maintenanceLevel <= 3 && rng() < 0.35) {
+          const practiceDay = onOrAfter(`${year}-${start}`, day === 2 ? 4 : 2);
+          for (let w = 0; w < 4; w++) {
+            add({ fieldIndex, kind: 'practice', title: `${pick(rng, TEAMS)} practice`, startsOn: addDaysIso(practiceDay, w * 7), startTime: '16:30', notes: '' });
+          }
         }
       }
     }
@@ -122,12 +139,12 @@ export function demoFieldEvents(city: DemoCity, seededOn: string): DemoFieldEven
     .map((f, i) => ({ f, i }))
     .filter(({ f }) => f.sport !== 'lawn' && f.status === 'open' && f.maintenanceLevel <= 2)
     .sort((a, b) => a.f.maintenanceLevel - b.f.maintenanceLevel || a.f.siteKey.localeCompare(b.f.siteKey) || a.f.name.localeCompare(b.f.name));
-  const tournaments: [string, string][] = [
+  const tournaments: [string, string][] = years.flatMap((year): [string, string][] => [
     [`${year}-06-13`, 'Sallowmere Spring Cup'],
     [`${year}-10-17`, 'Riverbend Fall Showcase'],
-  ];
+  ]);
   tournaments.forEach(([from, name], t) => {
-    const host = showcase[t * 2];
+    const host = showcase[(t % 2) * 2];
     if (!host) return;
     for (let d = 0; d < 2; d++) {
       add({
@@ -154,7 +171,10 @@ export function demoFieldEvents(city: DemoCity, seededOn: string): DemoFieldEven
     for (let offset = -7 + Math.floor(rng() * 4); offset <= 21; offset += 7 + Math.floor(rng() * 7)) {
       const startsOn = addDaysIso(seededOn, offset);
       const kind: FieldEventKind = rng() < 0.15 ? 'ceremony' : 'game';
-      const title = kind === 'ceremony' ? pick(rng, ['Community day', 'Season awards', 'School field day']) : `${LEAGUE[sport]}: ${matchup(rng)}`;
+      // Out of the league's season a booking is a friendly, not a league game.
+      const inSeason = SEASONS[sport].some(([a, b]) => startsOn.slice(5) >= a && startsOn.slice(5) <= b);
+      const game = inSeason || !season ? `${LEAGUE[sport]}: ${matchup(rng)}` : `Off-season friendly: ${matchup(rng)}`;
+      const title = kind === 'ceremony' ? pick(rng, ['Community day', 'Season awards', 'School field day']) : game;
       add({ fieldIndex: i, kind, title, startsOn, startTime: pick(rng, weekday(startsOn) % 6 === 0 ? WEEKEND_TIMES : EVENING_TIMES), notes: '' });
     }
   });

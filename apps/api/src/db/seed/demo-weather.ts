@@ -3,6 +3,7 @@
  * (hot humid summers, cool springs and autumns) made from a seasonal sine, a day-to-day
  * anomaly, and rain events every few days. Deterministic: the same numbers on every build.
  */
+import { addDaysIso } from '@swardwise/domain';
 import { mulberry32, normal, rngFor, uniform } from './prng.ts';
 
 export interface DemoWeatherStation {
@@ -156,4 +157,30 @@ export function stationSeason(
       rainMm: rain,
     };
   });
+}
+
+/**
+ * The day from which the demo's weather runs on: the series is generated from it, so a date
+ * always gets the same weather whatever window is asked for. Dates before it come from an
+ * earlier run from 1 January 2025 (or from the first 1 January asked for, if earlier still).
+ */
+const WEATHER_EPOCH = DEMO_SEASON.start;
+const EARLY_EPOCH = '2025-01-01';
+
+/**
+ * A station's invented daily weather from `from` to `to` (inclusive), whatever the dates: the
+ * same generator as `stationSeason`, run on from a fixed epoch so that a day's weather does
+ * not depend on the window (the seed, the fake weather service and the tests agree).
+ */
+export function stationWeather(station: DemoWeatherStation, climate: StationClimate, from: string, to: string): DemoWeatherDay[] {
+  if (to < from) return [];
+  const out: DemoWeatherDay[] = [];
+  const main = WEATHER_EPOCH;
+  const early = from < EARLY_EPOCH ? `${from.slice(0, 4)}-01-01` : EARLY_EPOCH;
+  if (from < main) {
+    const end = to < main ? to : addDaysIso(main, -1);
+    out.push(...stationSeason(station, climate, seasonDates(early, end)).filter((d) => d.date >= from));
+  }
+  if (to >= main) out.push(...stationSeason(station, climate, seasonDates(main, to)).filter((d) => d.date >= from));
+  return out;
 }

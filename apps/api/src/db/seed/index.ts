@@ -8,9 +8,11 @@ import type { Db } from '../client.ts';
 import { crews, districts, equipment, fieldChecks, fieldEvents, fields, settings, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../schema/index.ts';
 import { outlineFacts } from '../../services/fields.ts';
 import { hashPassword } from '../../services/users.ts';
-import { buildDemoCity } from './demo-city.ts';
+import { buildDemoCity, type DemoCity } from './demo-city.ts';
 import { demoFieldEvents } from './demo-events.ts';
 import { demoFieldHistory } from './demo-history.ts';
+import { buildDemoSeason } from './demo-season.ts';
+import { insertDemoSeason } from './demo-season-insert.ts';
 
 /** Settings key of the row that records the demo city was seeded. */
 export const DEMO_MARKER = 'demo_city';
@@ -28,6 +30,8 @@ export interface SeedSummary {
   fieldEvents: number;
 }
 
+let demoCity: DemoCity | undefined;
+
 /** True when this database holds the invented demo city (and so its published sign-ins). */
 export async function hasDemoCity(db: Db): Promise<boolean> {
   const [marker] = await db.select({ key: settings.key }).from(settings).where(eq(settings.key, DEMO_MARKER));
@@ -36,15 +40,18 @@ export async function hasDemoCity(db: Db): Promise<boolean> {
 
 /**
  * Returns what was inserted, or null when the demo city (or any data) is already there.
- * `today` is the department's date (the server passes its clock's); the demo city's zone by default.
+ * `today` is the department's date (the server passes its clock's), `timeZone` its zone; the demo city's by default.
  */
-export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TIME_ZONE)): Promise<SeedSummary | null> {
+export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TIME_ZONE), timeZone: string = DEFAULT_TIME_ZONE): Promise<SeedSummary | null> {
   const [marker] = await db.select().from(settings).where(eq(settings.key, MARKER));
   if (marker) return null;
   const existing = await db.select({ id: districts.id }).from(districts).limit(1);
   if (existing.length) return null; // a real installation's data is never mixed with the demo
 
-  const city = buildDemoCity();
+  // Built once per process (it is pure): tests make many fresh demo databases.
+  const city = (demoCity ??= buildDemoCity());
+  // The season of history up to yesterday and the coming week's forecast, laid around today.
+  const season = buildDemoSeason(city, today);
   // One hash per distinct password: the demo shares a password per role.
   const hashes = new Map<string, string>();
   for (const password of new Set(city.users.map((u) => u.password))) hashes.set(password, await hashPassword(password));
@@ -96,13 +103,14 @@ export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TI
         weeklyUseHours: f.weeklyUseHours,
         geometry: f.geometry,
         ...outlineFacts(f.geometry),
-        lastMowedOn: history[i]!.lastMowedOn,
+        lastMowedOn: season.lastMowedOn[i] ?? history[i]!.lastMowedOn,
       })),
     ).returning({ id: fields.id });
 
     // Invented field checks, scored by the engine as a real check would be.
+    // Only the checks of the season so far: none dated today or later.
     const checks = city.fields.flatMap((f, i) =>
-      history[i]!.checks.map((c) => {
+      history[i]!.checks.filter((c) => c.checkedOn >= season.window.start && c.checkedOn < today).map((c) => {
         const hocMm = hocFor({ ...f, maintenanceLevel: f.maintenanceLevel as Level }, DEFAULT_STANDARDS);
         const scored = surfaceScore(
           { turfCoverPct: c.turfCoverPct, weedsPct: c.weedsPct, bareWornPct: c.barePct, heightMm: c.heightRatio * hocMm, hocMm, hardnessG: c.gmax, hardnessDevice: c.gmaxDevice, evenness: c.evenness },
@@ -135,10 +143,10 @@ export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TI
         .returning({ id: weatherStations.id });
       stationIds.set(st.code, row!.id);
     }
-    const days = city.weather.map((w) => ({
+    const days = season.weather.map((w) => ({
       stationId: stationIds.get(w.stationCode)!,
       date: w.date,
-      kind: 'observed' as const,
+      kind: w.kind,
       tmaxC: w.tmaxC,
       tminC: w.tminC,
       rhMaxPct: w.rhMaxPct,
@@ -153,6 +161,7 @@ export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TI
 
 
     const crewIds = new Map<string, number>();
+    const crewUsers = new Map<string, number>();
     for (const c of city.crews) {
       const [row] = await tx
         .insert(crews)
@@ -196,6 +205,7 @@ export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TI
           crewId: u.crewName ? crewIds.get(u.crewName)! : null,
         })
         .returning({ id: users.id });
+      if (u.crewName && !crewUsers.has(u.crewName)) crewUsers.set(u.crewName, row!.id);
       if (u.siteKeys.length) {
         await tx.insert(userSites).values(u.siteKeys.map((key) => ({ userId: row!.id, siteId: siteIds.get(key)! })));
       }
@@ -237,9 +247,20 @@ export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TI
       ];
     });
     if (orders.length) await tx.insert(workOrders).values(orders);
+    const seasonRows = await insertDemoSeason(tx, city, season, {
+      fieldIds: fieldRows.map((r) => r.id),
+      siteIdOf: (key) => siteIds.get(key)!,
+      districtIdOf: (key) => districtIds.get(siteOf.get(key)!.districtCode)!,
+      crewIdOf: (name) => crewIds.get(name)!,
+      crewUserOf: (name) => crewUsers.get(name) ?? null,
+    }, timeZone);
 
     // Invented games, tournaments and practices across the season and around today.
-    const bookings = demoFieldEvents(city, today).map((e) => {
+    // A field closed for a day after a storm is kept as a booking of the day ("other").
+    const closures = season.closures.map((c) => ({ fieldIndex: c.fieldIndex, kind: 'other' as const, title: c.title, startsOn: c.startsOn, startTime: null, notes: c.notes }));
+    const closedDays = new Set(closures.map((c) => `${c.fieldIndex}:${c.startsOn}`));
+    const booked = demoFieldEvents(city, today, season).filter((e) => !closedDays.has(`${e.fieldIndex}:${e.startsOn}`));
+    const bookings = [...booked, ...closures].map((e) => {
       const f = city.fields[e.fieldIndex]!;
       return {
         fieldId: fieldRows[e.fieldIndex]!.id,
@@ -261,8 +282,8 @@ export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TI
       crews: city.crews.length,
       users: city.users.length,
       weatherDays: days.length,
-      fieldChecks: checks.length,
-      workOrders: orders.length,
+      fieldChecks: checks.length + seasonRows.fieldChecks,
+      workOrders: orders.length + seasonRows.workOrders,
       fieldEvents: bookings.length,
     };
     await tx.insert(settings).values({ key: MARKER, value: { seededAt: new Date().toISOString(), note: city.city.note, ...summary } });
