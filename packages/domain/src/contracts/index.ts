@@ -14,3 +14,4 @@ export * from './week-plans.ts';
 export * from './records.ts';
 export * from './dev.ts';
 export * from './config.ts';
+export * from './closures.ts';

@@ -15,3 +15,4 @@ export * from './outlook.ts';
 export * from './cautions.ts';
 export * from './weekgen.ts';
 export * from './week-warnings.ts';
+export * from './closures.ts';
