@@ -12,6 +12,10 @@ export const queryKeys = {
   fields: (query: object) => ['fields', 'list', query] as const,
   field: (id: number) => ['fields', 'detail', id] as const,
   fieldNeeds: (id: number, date: string | null) => ['fields', 'needs', id, date] as const,
+  /** Under `fields`: a field's change (its status) makes its closures stale. */
+  fieldClosures: (id: number) => ['fields', 'closures', id] as const,
+  /** The public board, read without signing in. */
+  statusBoard: () => ['status-board'] as const,
   imports: () => ['imports'] as const,
   map: () => ['map'] as const,
   /** Not under `map`: the bundled basemap does not change with the data. */
