@@ -125,6 +125,7 @@ describe('the operations', () => {
       'GET /api/config',
       'GET /api/health',
       'GET /api/openapi.json',
+      'GET /api/public/status',
       'POST /api/auth/accept-invite',
       'POST /api/auth/forgot-password',
       'POST /api/auth/reset-password',

@@ -109,6 +109,17 @@ const cases: Case[] = [
   ['foreman', 'update', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 5 }, true],
   ['foreman', 'delete', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 5 }, true],
   ['crew', 'update', 'FieldEvent', { siteId: SITE_A, districtId: D1, createdBy: 4 }, false],
+  // Closures: foremen of the district, the head and the administrator close and reopen; crews and partners read
+  ['admin', 'create', 'FieldClosure', other.field, true],
+  ['head', 'create', 'FieldClosure', other.field, true],
+  ['foreman', 'create', 'FieldClosure', own.field, true],
+  ['foreman', 'create', 'FieldClosure', other.field, false],
+  ['foreman', 'read', 'FieldClosure', other.field, false],
+  ['crew', 'read', 'FieldClosure', own.field, true],
+  ['crew', 'create', 'FieldClosure', own.field, false],
+  ['partner', 'read', 'FieldClosure', own.field, true],
+  ['partner', 'read', 'FieldClosure', other.field, false],
+  ['partner', 'create', 'FieldClosure', own.field, false],
   // Standards and settings: the head sets them
   ['head', 'update', 'Standards', null, true],
   ['foreman', 'read', 'Standards', null, true],

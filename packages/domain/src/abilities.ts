@@ -19,6 +19,8 @@ export const SUBJECTS = [
   'WorkOrder',
   'FieldCheck',
   'FieldEvent',
+  /** Closing, restricting and reopening a field (its history of closures). */
+  'FieldClosure',
   'Standards',
   'Settings',
   'AuditEntry',
@@ -86,13 +88,15 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can('update', ['Standards', 'Settings']);
       // The head decides maintenance levels and may correct any site or field.
       can(['create', 'update'], ['Site', 'Field']);
+      // The head may close or reopen any field.
+      can(['read', 'create'], 'FieldClosure');
       can(['create', 'read'], 'Import');
       break;
 
     case 'foreman': {
       const d = actor.districtId ?? -1;
       can('read', 'District', { id: d });
-      can('manage', ['Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck', 'FieldEvent'], { districtId: d });
+      can('manage', ['Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck', 'FieldEvent', 'FieldClosure'], { districtId: d });
       can(['read', 'update'], 'Request', { districtId: d });
       can('read', ['Standards', 'Weather']);
       can('create', ['Import', 'Weather']);
@@ -114,6 +118,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can(['read', 'log'], 'WorkOrder', { crewId: c });
       can('create', 'FieldCheck', { districtId: d });
       can('read', 'FieldEvent', { districtId: d });
+      can('read', 'FieldClosure', { districtId: d });
       can('read', ['Standards', 'Weather']);
       break;
     }
@@ -128,6 +133,8 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can(['read', 'create'], 'FieldEvent', { siteId: { $in: sites } });
       can(['update', 'delete'], 'FieldEvent', { siteId: { $in: sites }, createdBy: actor.id });
       can(['read', 'create'], 'Request', { siteId: { $in: sites } });
+      // Partners see why their fields are closed; closing them is the department's.
+      can('read', 'FieldClosure', { siteId: { $in: sites } });
       can('read', 'Standards');
       break;
     }

@@ -74,6 +74,8 @@ export const ERROR_CODES = {
   'user/forbidden_attribute': 'forbidden',
   'crew/has_lead': 'conflict',
   'field/has_work_history': 'conflict',
+  'field/not_closed': 'conflict',
+  'field/retired': 'conflict',
 
   'work_order/logged': 'conflict',
   'week_plan/changed': 'conflict',

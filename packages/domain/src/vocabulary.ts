@@ -113,6 +113,38 @@ export const FIELD_STATUS_LABELS: Record<FieldStatus, string> = {
   retired: 'Retired',
 };
 
+/** Why a field is closed or restricted; the public status board says it in plain words. */
+export const CLOSURE_REASONS = ['wet', 'lightning', 'hardness', 'renovation', 'event', 'other'] as const;
+export type ClosureReason = (typeof CLOSURE_REASONS)[number];
+export const CLOSURE_REASON_LABELS: Record<ClosureReason, string> = {
+  wet: 'Wet field',
+  lightning: 'Lightning',
+  hardness: 'Surface too hard',
+  renovation: 'Renovation',
+  event: 'Event',
+  other: 'Other',
+};
+/** The reason as the public reads it on the status board and in a partner's e-mail. */
+export const CLOSURE_REASON_PUBLIC: Record<ClosureReason, string> = {
+  wet: 'The ground is wet and needs time to drain.',
+  lightning: 'Lightning in the area: stay off until 30 minutes after the last thunder.',
+  hardness: 'The playing surface is too hard for safe play.',
+  renovation: 'The grass is being repaired or renovated.',
+  event: 'The field is set aside for an event.',
+  other: 'Closed by the parks department.',
+};
+/** A closure's status: the field's status while it is in force (`open` is a reopening). */
+export const CLOSURE_STATUSES = ['open', 'restricted', 'closed'] as const;
+export type ClosureStatus = (typeof CLOSURE_STATUSES)[number];
+/** What closing a field does with its planned work: keep it, move it to the next open working day, or cancel it. */
+export const CLOSURE_WORK_CHOICES = ['keep', 'move', 'cancel'] as const;
+export type ClosureWorkChoice = (typeof CLOSURE_WORK_CHOICES)[number];
+export const CLOSURE_WORK_CHOICE_LABELS: Record<ClosureWorkChoice, string> = {
+  keep: 'Keep it as planned',
+  move: 'Move it to the next open working day',
+  cancel: 'Cancel it with the closure’s reason',
+};
+
 export const SITE_KINDS = ['park', 'school', 'complex'] as const;
 export type SiteKind = (typeof SITE_KINDS)[number];
 export const SITE_KIND_LABELS: Record<SiteKind, string> = {

@@ -75,3 +75,28 @@ export function workMovedMail(to: string, name: string, crewName: string, notice
     text: [`Hello ${name},`, '', intro, '', ...lines, '', `Your route for each day is on Today: ${portalUrl.replace(/\/$/, '')}/today`, '', 'Check slopes, wet ground and the weather before mowing; clear the field when thunder is heard.'].join('\n'),
   };
 }
+
+export interface ClosureNotice {
+  fieldName: string;
+  siteName: string;
+  status: 'open' | 'restricted' | 'closed';
+  /** The reason in plain words; null for a reopening. */
+  reason: string | null;
+  expectedReopenOn: string | null;
+  caution: string | null;
+}
+
+/** To a partner of the site: a field closed, restricted or reopened. No internal note, no names. */
+export function closureMail(to: string, name: string, notice: ClosureNotice, portalUrl: string): OutgoingMail {
+  const where = `${notice.fieldName} at ${notice.siteName}`;
+  const subject = notice.status === 'open' ? `Reopened: ${where}` : notice.status === 'closed' ? `Closed: ${where}` : `Restricted: ${where}`;
+  const said =
+    notice.status === 'open'
+      ? `${where} is open for play again.`
+      : `${where} is ${notice.status === 'closed' ? 'closed to play' : 'open for restricted play only'}. ${notice.reason ?? ''}`.trim();
+  const lines = [`Hello ${name},`, '', said];
+  if (notice.status !== 'open') lines.push('', notice.expectedReopenOn ? `Expected to reopen: ${when(notice.expectedReopenOn)}.` : 'No reopening date is set yet.');
+  if (notice.caution) lines.push('', notice.caution);
+  lines.push('', `The status of every field: ${portalUrl.replace(/\/$/, '')}/status`);
+  return { to, subject, text: lines.join('\n') };
+}

@@ -7,6 +7,7 @@ import type { z } from 'zod';
 import type { oas31 } from 'zod-openapi';
 import {
   acceptInviteSchema,
+  closeFieldSchema,
   createCrewSchema,
   createEquipmentSchema,
   createFieldEventSchema,
@@ -29,6 +30,7 @@ import {
   pageQuerySchema,
   fieldCheckSchema,
   reopenSchema,
+  reopenFieldSchema,
   resetPasswordSchema,
   signInSchema,
   updateCrewSchema,
@@ -53,6 +55,7 @@ import { csvQuerySchema, MAX_CSV_BYTES } from '../routes/weather.ts';
 import { confirmSchema } from '../routes/week-plans.ts';
 import { querySchema as workOrdersQuery } from '../routes/work-orders.ts';
 import { versionQuerySchema } from '../routes/write-routes.ts';
+import { STATUS_MAX_AGE_S } from '../routes/public.ts';
 import { photoBodySchema, photoParamsSchema } from '../routes/work-reports.ts';
 import { PHOTO_MAX_BYTES, PHOTOS_PER_ORDER } from '../services/work-photos.ts';
 import { allowed, publicAccess, signedIn, type Access } from './access.ts';
@@ -924,6 +927,61 @@ const dev: RouteDoc[] = [
   },
 ];
 
+const closures: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/public/status',
+    tag: 'Closures',
+    summary: 'The public status board: every kept field by district and site, with its status, the reason in plain words and the last change',
+    description: `No sign-in. Says nothing else: no ids, no people, no internal notes. Cacheable for ${STATUS_MAX_AGE_S} s with an ETag; a request with a matching If-None-Match answers 304 with no body.`,
+    access: publicAccess(),
+    answers: [
+      json(
+        200,
+        'The board.',
+        shape({
+          at: str('When the answer was built (ISO instant)'),
+          counts: row('Fields by status: { open, restricted, closed }'),
+          districts: rows('[{ name, sites: [{ name, address, fields: [{ name, sport, status, reason, since, expectedReopenOn }] }] }]'),
+        }),
+      ),
+    ],
+  },
+  {
+    method: 'get',
+    path: '/api/fields/:id/closures',
+    tag: 'Closures',
+    summary: 'A field’s closures: the decision in force, its history, the planned work closing would touch, and what the latest field check suggests',
+    access: allowed('read', 'FieldClosure'),
+    params: idParamSchema,
+    answers: [json(200, 'The field’s closures.', shape({ closures: row('{ fieldId, status, version, current, history, plannedWork, suggestion }') }))],
+  },
+  {
+    method: 'post',
+    path: '/api/fields/:id/closures',
+    tag: 'Closures',
+    summary: 'Close or restrict a field (or change the closure in force), deciding what becomes of its planned work',
+    description: `${VERSION_NOTE} The version is the field’s. With planned or assigned work before the expected reopening, \`work\` is required: keep it, move it to the next open working day of its crew (needs \`expectedReopenOn\`), or cancel it with the closure’s reason; done in the same transaction. The site’s partners are e-mailed. Lightning, hardness and wet-field cautions apply; local rules and the governing body decide.`,
+    access: allowed('create', 'FieldClosure'),
+    params: idParamSchema,
+    body: closeFieldSchema,
+    answers: [json(201, 'The closure and what happened to the work.', shape({ closure: row('The closure in force'), fieldVersion: int('The field’s version after the change'), work: row('{ kept, moved: [{ id, from, to }], cancelled }') }))],
+    errors: [409],
+  },
+  {
+    method: 'post',
+    path: '/api/fields/:id/reopen',
+    tag: 'Closures',
+    summary: 'Reopen a closed or restricted field',
+    description: `${VERSION_NOTE} The version is the field’s. The site’s partners are e-mailed.`,
+    access: allowed('create', 'FieldClosure'),
+    params: idParamSchema,
+    body: reopenFieldSchema,
+    answers: [json(201, 'The reopening.', shape({ closure: row('The reopening, now in force'), fieldVersion: int('The field’s version after the change'), work: row('Empty lists') }))],
+    errors: [409],
+  },
+];
+
 export const ROUTES: readonly RouteDoc[] = [
   ...service,
   ...auth,
@@ -934,6 +992,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...sites,
   ...fields,
   ...fieldEvents,
+  ...closures,
   ...standards,
   ...settings,
   ...imports,

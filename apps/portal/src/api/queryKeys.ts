@@ -14,6 +14,10 @@ export const queryKeys = {
   fieldNeeds: (id: number, date: string | null) => ['fields', 'needs', id, date] as const,
   fieldWork: (id: number, page: number) => ['fields', 'work', id, page] as const,
   fieldChecks: (id: number) => ['fields', 'checks', id] as const,
+  /** Under `fields`: a field's change (its status) makes its closures stale. */
+  fieldClosures: (id: number) => ['fields', 'closures', id] as const,
+  /** The public board, read without signing in. */
+  statusBoard: () => ['status-board'] as const,
   imports: () => ['imports'] as const,
   map: () => ['map'] as const,
   /** Not under `map`: the bundled basemap does not change with the data. */

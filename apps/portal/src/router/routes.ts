@@ -36,6 +36,13 @@ export const routes: RouteRecordRaw[] = [
     meta: { public: true, title: 'Forgot your password' },
   },
   {
+    // The public status board: no sign-in, no portal frame; players and parents read it on a phone.
+    path: '/status',
+    name: 'status',
+    component: () => import('../views/StatusView.vue'),
+    meta: { public: true, title: 'Field status' },
+  },
+  {
     // Printed and taken to the field: no portal frame around it.
     path: '/week/sheet',
     name: 'crew-sheet',

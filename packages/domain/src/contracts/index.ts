@@ -15,3 +15,4 @@ export * from './records.ts';
 export * from './field-checks.ts';
 export * from './dev.ts';
 export * from './config.ts';
+export * from './closures.ts';

@@ -13,7 +13,9 @@ export const CAUTIONS = {
     'Surface hardness above the limit for the tester used raises the risk of head injury: consider closing the field until it is corrected. Readings from different testers are not comparable; the range for the 2.25 kg tester is a department setting, not a published standard.',
   wetField:
     'Wet or waterlogged fields tear and compact under play and footing is poor: close or restrict them until they drain.',
-  lightning: 'Lightning: clear fields when thunder is heard and wait at least 30 minutes after the last thunder before returning (local policy governs).',
+  // NOAA / National Weather Service lightning safety, "When thunder roars, go indoors" (from memory).
+  lightning:
+    'Lightning: clear the field at the first thunder and stay off until 30 minutes after the last thunder (NOAA / National Weather Service: “When thunder roars, go indoors”). Local rules and the sport’s governing body decide.',
   water:
     'Watering restrictions are local law: the allowed days, hours and volumes set by the water provider override this schedule.',
   lines:

@@ -17,3 +17,4 @@ export * from './cautions.ts';
 export * from './weekgen.ts';
 export * from './week-warnings.ts';
 export * from './field-check.ts';
+export * from './closures.ts';

@@ -10,3 +10,4 @@ export * from './weather.ts';
 export * from './crews.ts';
 export * from './work.ts';
 export * from './settings.ts';
+export * from './closures.ts';

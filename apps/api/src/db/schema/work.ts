@@ -1,6 +1,7 @@
 /** Equipment, work orders and their photos: the crews' side of the week plan. */
-import { boolean, date, index, integer, jsonb, pgTable, real, text, uniqueIndex } from 'drizzle-orm/pg-core';
-import type { EquipmentKind, FieldEventKind, WorkStatus, WorkTask } from '@swardwise/domain';
+import { sql } from 'drizzle-orm';
+import { boolean, date, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
+import type { ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, WorkStatus, WorkTask } from '@swardwise/domain';
 import { districtRef, fieldRef, sites } from './city.ts';
 import { crews, users } from './people.ts';
 import { createdAt, id, instant, versioned } from './columns.ts';
@@ -133,4 +134,34 @@ export const fieldEvents = pgTable(
     ...versioned,
   },
   (t) => [index('field_events_field_idx').on(t.fieldId, t.startsOn), index('field_events_district_idx').on(t.districtId, t.startsOn)],
+);
+
+/**
+ * Every decision about a field's status (closed, restricted, reopened), kept as history. The
+ * one in force has no `to_at`; `fields.status` is kept in step with it in the same transaction,
+ * so code that reads the field's status needs no join. Scope comes from the field's site.
+ */
+export const fieldClosures = pgTable(
+  'field_closures',
+  {
+    ...id,
+    ...fieldRef,
+    status: text('status').$type<ClosureStatus>().notNull(),
+    /** Null for a reopening. */
+    reason: text('reason').$type<ClosureReason>(),
+    /** Internal: never on the public status board. */
+    note: text('note').notNull().default(''),
+    fromAt: instant('from_at').notNull(),
+    toAt: instant('to_at'),
+    expectedReopenOn: date('expected_reopen_on', { mode: 'string' }),
+    decidedBy: integer('decided_by').references(() => users.id),
+    workChoice: text('work_choice').$type<ClosureWorkChoice>(),
+    workCount: smallint('work_count').notNull().default(0),
+    ...createdAt,
+  },
+  (t) => [
+    index('field_closures_field_idx').on(t.fieldId, t.fromAt),
+    // One decision in force per field: the status board joins on it.
+    uniqueIndex('field_closures_current_key').on(t.fieldId).where(sql`${t.toAt} is null`),
+  ],
 );
