@@ -16,7 +16,7 @@
 import type { Polygon } from '../schemas/common.ts';
 import { fieldFrame } from '../geometry.ts';
 import type { EquipmentKind, Sport, StripePattern } from '../vocabulary.ts';
-import { STRIPE_PATTERNS } from '../vocabulary.ts';
+import { STRIPE_PATTERN_LABELS, STRIPE_PATTERNS } from '../vocabulary.ts';
 import { fail, requireFraction, requireNonNegative, requirePositive } from './check.ts';
 import type { DepartmentParameters, MowerSpec } from './standards.ts';
 
@@ -183,3 +183,9 @@ export function stripeOfficialsNote(sport: Sport, pattern: StripePattern): strin
 /** The caution shown with every pattern: on a slope the slope, not the pattern, sets the direction. */
 export const STRIPE_SLOPE_CAUTION =
   'On a bank or slope the slope sets the direction, not the pattern: ride-on mowers usually go up and down a slope rather than across it, walk-behind mowers across it. Check the grade against the mower maker’s limit and follow the operator’s manual and local practice (common practice).';
+
+/** An order's `details.pattern` in words: the label of a known pattern, else the text as written; null for none. */
+export function stripePatternText(value: unknown): string | null {
+  if (typeof value !== 'string' || !value) return null;
+  return isStripePattern(value) ? STRIPE_PATTERN_LABELS[value] : value;
+}
