@@ -78,7 +78,10 @@ export async function setFieldStripes(ctx: Ctx, fieldId: number, input: SetField
     if ((before?.version ?? null) !== input.version) throw errors.versionConflict('field_stripes');
     let after: typeof before | null = null;
     if (input.pattern === null) {
-      if (before) await tx.delete(fieldStripes).where(and(eq(fieldStripes.id, before.id), eq(fieldStripes.version, before.version)));
+      if (before) {
+        const gone = await tx.delete(fieldStripes).where(and(eq(fieldStripes.id, before.id), eq(fieldStripes.version, before.version))).returning({ id: fieldStripes.id });
+        if (!gone.length) throw errors.versionConflict('field_stripes');
+      }
     } else if (before) {
       [after] = await tx
         .update(fieldStripes)
