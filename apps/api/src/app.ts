@@ -28,6 +28,7 @@ import { BackgroundTasks } from './services/background.ts';
 import { demoAnnouncement } from './services/first-run.ts';
 import { authRouter } from './routes/auth.ts';
 import { closuresRouter } from './routes/closures.ts';
+import { stripesRouter } from './routes/stripes.ts';
 import { crewsRouter } from './routes/crews.ts';
 import { devRouter } from './routes/dev.ts';
 import { directoryRouter } from './routes/directory.ts';
@@ -155,6 +156,7 @@ export function createApp(
   app.use('/api/sites', sitesRouter(full));
   app.use('/api/fields', fieldsRouter(full));
   app.use('/api/fields', closuresRouter(full));
+  app.use('/api/fields', stripesRouter(full));
   app.use('/api/field-events', fieldEventsRouter(full));
   app.use('/api/standards', standardsRouter(full));
   app.use('/api/imports', importsRouter(full));

@@ -222,3 +222,13 @@ export const FIELD_EVENT_KIND_LABELS: Record<FieldEventKind, string> = {
   ceremony: 'Ceremony',
   other: 'Other booking',
 };
+
+/** Stripe patterns a foreman may ask for on a field's mowings (field frame: length along the long axis). */
+export const STRIPE_PATTERNS = ['lengthwise', 'side_to_side', 'checkerboard', 'diagonal'] as const;
+export type StripePattern = (typeof STRIPE_PATTERNS)[number];
+export const STRIPE_PATTERN_LABELS: Record<StripePattern, string> = {
+  lengthwise: 'Length-wise stripes',
+  side_to_side: 'Side-to-side stripes',
+  checkerboard: 'Checkerboard (criss-cross)',
+  diagonal: 'Diagonal stripes',
+};

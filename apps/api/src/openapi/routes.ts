@@ -8,6 +8,7 @@ import type { oas31 } from 'zod-openapi';
 import {
   acceptInviteSchema,
   closeFieldSchema,
+  setFieldStripesSchema,
   createCrewSchema,
   createEquipmentSchema,
   createFieldEventSchema,
@@ -982,6 +983,31 @@ const closures: RouteDoc[] = [
   },
 ];
 
+const stripes: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/fields/:id/stripes',
+    tag: 'Fields',
+    summary: 'A field’s stripe pattern and the district’s mowers its pass plan may be worked out for',
+    description: 'The pass plan itself (passes, distance, time) is the engine’s `fieldStripePlan` over the field’s outline with the chosen mower’s figures.',
+    access: allowed('read', 'Field'),
+    params: idParamSchema,
+    answers: [json(200, 'The pattern.', shape({ stripes: row('{ fieldId, pattern, mowerId, version, updatedAt, setByName, mowers, defaultMower }') }))],
+  },
+  {
+    method: 'patch',
+    path: '/api/fields/:id/stripes',
+    tag: 'Fields',
+    summary: 'Set or clear (pattern null) a field’s stripe pattern and the mower it is planned for',
+    description: 'The version is the stripe row’s (null while the field has none); a stale one is a 409. The mower must be an active mower of the field’s district. The week plan puts the pattern on the field’s mowing orders.',
+    access: allowed('update', 'Field'),
+    params: idParamSchema,
+    body: setFieldStripesSchema,
+    answers: [json(200, 'The pattern as saved.', shape({ stripes: row('As GET') }))],
+    errors: [409],
+  },
+];
+
 export const ROUTES: readonly RouteDoc[] = [
   ...service,
   ...auth,
@@ -993,6 +1019,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...fields,
   ...fieldEvents,
   ...closures,
+  ...stripes,
   ...standards,
   ...settings,
   ...imports,

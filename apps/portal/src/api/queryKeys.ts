@@ -16,6 +16,8 @@ export const queryKeys = {
   fieldChecks: (id: number) => ['fields', 'checks', id] as const,
   /** Under `fields`: a field's change (its status) makes its closures stale. */
   fieldClosures: (id: number) => ['fields', 'closures', id] as const,
+  /** Under `fields`: saving a pattern invalidates `field`, which also makes the week plan stale. */
+  fieldStripes: (id: number) => ['fields', 'stripes', id] as const,
   /** The public board, read without signing in. */
   statusBoard: () => ['status-board'] as const,
   imports: () => ['imports'] as const,

@@ -231,6 +231,33 @@ describe('planFieldWeek', () => {
   });
 });
 
+describe('stripe patterns on mowing orders', () => {
+  test('should put the field’s pattern on its mowings and plan the pass-plan time when it is longer', () => {
+    const plain = planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders.filter((o) => o.task === 'mow');
+    const board = planFieldWeek({ field: field({ stripes: { pattern: 'checkerboard', mowerId: null } }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders.filter((o) => o.task === 'mow');
+    expect(board.map((o) => o.askedDate)).toEqual(plain.map((o) => o.askedDate));
+    const [p, b] = [plain[0]!, board[0]!];
+    expect(p.details.pattern).toBeUndefined();
+    expect(b.details.pattern).toBe('checkerboard');
+    // A checkerboard drives the field twice: its pass plan passes the side-to-side plan.
+    expect(b.plannedHours).toBeGreaterThan(p.plannedHours);
+    expect(b.details.hoursMethod).toBe('stripe_plan');
+    expect(b.reason).toMatch(/Checkerboard \(criss-cross\): \d+ passes take [\d.]+ h, longer than the plain mowing time/);
+  });
+
+  test('should keep the plain time and say so when the pattern takes no longer', () => {
+    // A sports field's plain time is its side-to-side plan; length-wise passes at full efficiency
+    // drive the same distance with fewer turns (100 m × 64 m: about 64 ÷ w passes against 100 ÷ w).
+    const full = (m: (typeof DEFAULT_PARAMETERS.mowers)['reel']) => ({ ...m, efficiency: 1 });
+    const params = { ...DEFAULT_PARAMETERS, mowers: { reel: full(DEFAULT_PARAMETERS.mowers.reel), rotary: full(DEFAULT_PARAMETERS.mowers.rotary) } };
+    const withPattern = planFieldWeek({ field: field({ stripes: { pattern: 'lengthwise', mowerId: null } }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays, params }).orders.find((o) => o.task === 'mow')!;
+    const without = planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays, params }).orders.find((o) => o.task === 'mow')!;
+    expect(withPattern.details.pattern).toBe('lengthwise');
+    expect(withPattern.plannedHours).toBe(without.plannedHours);
+    expect(withPattern.reason).toMatch(/within the plain mowing time/);
+  });
+});
+
 describe('assignWeek', () => {
   const yard = { lat: 38, lng: -77 };
   const sites = new Map([

@@ -17,8 +17,8 @@
  */
 import type { Polygon } from '../schemas/common.ts';
 import type { WeekWarning } from './week-warnings.ts';
-import type { Clippings, FieldStatus, Grass, IrrigationKind, Level, Sport, WorkStatus, WorkTask } from '../vocabulary.ts';
-import { LEVEL_NAMES } from '../vocabulary.ts';
+import type { Clippings, FieldStatus, Grass, IrrigationKind, Level, Sport, StripePattern, WorkStatus, WorkTask } from '../vocabulary.ts';
+import { LEVEL_NAMES, STRIPE_PATTERN_LABELS } from '../vocabulary.ts';
 import { fail } from './check.ts';
 import { WEEKDAYS, addDaysIso, isoToDayNumber, monthOf, weekdayOf } from './dates.ts';
 import type { Weekday } from './dates.ts';
@@ -31,6 +31,7 @@ import { levelIntervalDays, mowTriggerHeightMm, mowerTypeFor, mowingPolicy, simu
 import { fieldDailySeries } from './outlook.ts';
 import type { FieldDailySeries, OutlookField, PreparedWeather } from './outlook.ts';
 import { planRoute } from './routing.ts';
+import { fieldStripePlan } from './stripes.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor, levelStandard } from './standards.ts';
 import type { DepartmentParameters, LevelStandard, MowerSpec, PlanningParameters, Standards } from './standards.ts';
 import { irrigationVolumeLitres, weekIrrigation, weeklyIrrigationSchedule } from './water.ts';
@@ -61,6 +62,8 @@ export interface PlanField {
    * counts from them.
    */
   paints?: ReadonlyArray<{ date: string; eventId: number | null }>;
+  /** The stripe pattern asked for on its mowings, and the mower chosen for it (null: the plan's pick). */
+  stripes?: { pattern: StripePattern; mowerId: number | null } | null;
 }
 
 /** An order that stays as people left it; it counts as work already planned or done. */
@@ -280,7 +283,10 @@ function mowingOrders(ctx: FieldWeekContext, growth: number[]): void {
   const hocMm = hocFor(ctx.outlookField, ctx.standards);
   const trigger = mowTriggerHeightMm(hocMm);
   const { spec, mower } = chooseMower(hocMm, ctx.input.mowers ?? [], params);
-  const { hours, method } = mowingHours(field, spec);
+  const plain = mowingHours(field, spec);
+  const stripes = stripeHours(ctx, spec, plain.hours);
+  const hours = stripes?.longer ? stripes.hours : plain.hours;
+  const method = stripes?.longer ? 'stripe_plan' : plain.method;
   for (const a of askedCuts(ctx, growth, hocMm)) {
     const why =
       a.reason === 'overdue'
@@ -294,13 +300,47 @@ function mowingOrders(ctx: FieldWeekContext, growth: number[]): void {
       task: 'mow',
       askedDate: a.date,
       plannedHours: round(hours),
-      reason: why,
-      details: { hocMm: round(hocMm, 3), triggerMm: round(trigger, 1), heightBeforeMm: round(a.heightMm, 1), mowerKind: spec.kind, mowerId: mower?.id ?? null, hoursMethod: method, overdueSince: a.overdueSince ?? null },
+      reason: stripes ? `${why}. ${stripes.note}` : why,
+      details: {
+        hocMm: round(hocMm, 3),
+        triggerMm: round(trigger, 1),
+        heightBeforeMm: round(a.heightMm, 1),
+        mowerKind: spec.kind,
+        mowerId: mower?.id ?? null,
+        hoursMethod: method,
+        overdueSince: a.overdueSince ?? null,
+        ...(stripes ? { pattern: field.stripes!.pattern, passes: stripes.passes } : {}),
+      },
       latestDate: a.date,
       flexible: false,
       equipmentKind: 'mower',
     });
   }
+}
+
+/**
+ * The field's stripe pattern over its outline (`fieldStripePlan`) with the mower chosen for it
+ * (else the plan's pick): its hours, whether they pass the plain mowing time, and the words for
+ * the reason. Null without a pattern, or when the outline gives no plan.
+ */
+function stripeHours(ctx: FieldWeekContext, spec: MowerSpec, plainHours: number): { hours: number; passes: number; longer: boolean; note: string } | null {
+  const stripes = ctx.field.stripes;
+  if (!stripes) return null;
+  const chosen = stripes.mowerId === null ? undefined : (ctx.input.mowers ?? []).find((m) => m.id === stripes.mowerId);
+  const base = chosen ? ctx.params.mowers[chosen.kind === 'reel' ? 'reel' : 'rotary'] : spec;
+  const mower = chosen ? { widthM: chosen.widthM, speedKmh: chosen.speedKmh, efficiency: chosen.efficiency, overlapM: base.overlapM, turnTimeS: base.turnTimeS } : spec;
+  let plan;
+  try {
+    plan = fieldStripePlan(ctx.field.geometry, stripes.pattern, mower);
+  } catch {
+    return null;
+  }
+  const label = STRIPE_PATTERN_LABELS[stripes.pattern];
+  const longer = plan.hours > plainHours;
+  const note = longer
+    ? `${label}: ${plan.passes} passes take ${round(plan.hours)} h, longer than the plain mowing time (${round(plainHours)} h), so the order is planned at the pass plan`
+    : `${label}: ${plan.passes} passes (${round(plan.hours)} h, within the plain mowing time)`;
+  return { hours: plan.hours, passes: plan.passes, longer, note };
 }
 
 /** The cuts the rule asks for in the week, stepping from one cut (asked or kept) to the next. */

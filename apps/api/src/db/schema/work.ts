@@ -1,7 +1,7 @@
 /** Equipment, work orders and their photos: the crews' side of the week plan. */
 import { sql } from 'drizzle-orm';
 import { boolean, date, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
-import type { ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, WorkStatus, WorkTask } from '@swardwise/domain';
+import type { ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, StripePattern, WorkStatus, WorkTask } from '@swardwise/domain';
 import { districtRef, fieldRef, sites } from './city.ts';
 import { crews, users } from './people.ts';
 import { createdAt, id, instant, versioned } from './columns.ts';
@@ -164,4 +164,22 @@ export const fieldClosures = pgTable(
     // One decision in force per field: the status board joins on it.
     uniqueIndex('field_closures_current_key').on(t.fieldId).where(sql`${t.toAt} is null`),
   ],
+);
+
+/**
+ * The stripe pattern a foreman asks for on a field's mowings, and the mower its pass plan is
+ * worked out for (null: the mower the week plan picks). One row per field; no row, no pattern.
+ * Scope comes from the field's site.
+ */
+export const fieldStripes = pgTable(
+  'field_stripes',
+  {
+    ...id,
+    ...fieldRef,
+    pattern: text('pattern').$type<StripePattern>().notNull(),
+    mowerId: integer('mower_id').references(() => equipment.id, { onDelete: 'set null' }),
+    setBy: integer('set_by').references(() => users.id),
+    ...versioned,
+  },
+  (t) => [uniqueIndex('field_stripes_field_key').on(t.fieldId)],
 );

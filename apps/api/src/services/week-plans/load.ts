@@ -4,6 +4,7 @@ import { errors, addDaysIso, MOWER_KINDS, type Level, type PlanEquipment, type P
 import type { Queryable } from '../../db/client.ts';
 import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, workOrders } from '../../db/schema/index.ts';
 import { workOrderRows, type WorkOrderRow } from '../work-orders.ts';
+import { stripePatternsOf } from '../stripes.ts';
 
 export interface GenerationInput {
   districtId: number;
@@ -108,6 +109,7 @@ export async function planFields(db: Queryable, q: GenerationInput) {
     .where(and(eq(workOrders.districtId, q.districtId), eq(workOrders.task, 'paint_lines'), ne(workOrders.status, 'skipped'), gte(workOrders.plannedDate, addDaysIso(q.weekStart, -14)), lt(workOrders.plannedDate, q.weekStart)));
   const paintsOf = new Map<number, { date: string; eventId: number | null }[]>();
   for (const p of paintRows) paintsOf.set(p.fieldId, [...(paintsOf.get(p.fieldId) ?? []), { date: p.date, eventId: typeof p.details.eventId === 'number' ? p.details.eventId : null }]);
+  const stripesOf = await stripePatternsOf(db, fieldRows.map((f) => f.id));
   const eventsOf = new Map<number, { id: number; startsOn: string; title: string }[]>();
   for (const e of events) eventsOf.set(e.fieldId, [...(eventsOf.get(e.fieldId) ?? []), e]);
   const toPlanField = (f: DistrictFieldRow): PlanField => ({
@@ -130,6 +132,7 @@ export async function planFields(db: Queryable, q: GenerationInput) {
     lastCheckedOn: done.get(`${f.id}|field_check`) ?? null,
     events: eventsOf.get(f.id) ?? [],
     paints: paintsOf.get(f.id) ?? [],
+    stripes: stripesOf.get(f.id) ?? null,
   });
   return { fieldRows, toPlanField };
 }
