@@ -32,7 +32,7 @@ export interface GrowthCalibrationFactor {
   spread: number | null;
   confidence: CalibrationConfidence;
   /** Each reading used: its observed and predicted growth (mm) and their ratio. */
-  readings: { checkedOn: string; observedMm: number; predictedMm: number; ratio: number }[];
+  readings: { checkedOn: string; daysSinceCut: number; measuredHeightMm: number; observedMm: number; predictedMm: number; ratio: number }[];
   /** Readings left out, with why. */
   skipped: { checkedOn: string; reason: string }[];
 }
@@ -73,7 +73,7 @@ export function growthCalibrationFactor(readings: readonly GrowthReading[]): Gro
       continue;
     }
     const observedMm = Math.max(0, r.measuredHeightMm - r.hocMm);
-    used.push({ checkedOn: r.checkedOn, observedMm, predictedMm: r.predictedGrowthMm, ratio: observedMm / r.predictedGrowthMm });
+    used.push({ checkedOn: r.checkedOn, daysSinceCut: r.daysSinceCut, measuredHeightMm: r.measuredHeightMm, observedMm, predictedMm: r.predictedGrowthMm, ratio: observedMm / r.predictedGrowthMm });
   }
   const n = used.length;
   if (n === 0) return { factor: 1, n: 0, spread: null, confidence: 'none', readings: used, skipped };
