@@ -14,6 +14,7 @@ export const queryKeys = {
   fieldNeeds: (id: number, date: string | null) => ['fields', 'needs', id, date] as const,
   fieldWork: (id: number, page: number) => ['fields', 'work', id, page] as const,
   fieldChecks: (id: number) => ['fields', 'checks', id] as const,
+  fieldGrowthCalibration: (id: number) => ['fields', 'growth-calibration', id] as const,
   /** Under `fields`: a field's change (its status) makes its closures stale. */
   fieldClosures: (id: number) => ['fields', 'closures', id] as const,
   /** The public board, read without signing in. */
@@ -37,7 +38,7 @@ export const queryKeys = {
 };
 
 /** What a write changes, by what was written. */
-export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail';
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck';
 
 /**
  * The answers a write makes stale: the resource itself and every answer that shows it (a
@@ -55,4 +56,5 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map']],
   weather: [['weather'], ['fields', 'needs'], ['map']],
   devMail: [['dev-mail']],
+  fieldCheck: [['fields'], ['map'], ['records']],
 };
