@@ -51,10 +51,10 @@ describe('field checks on the field page', () => {
       await page.screenshot({ path: path.join(shots, 'field-check-staff-phone-result.png') });
       await dialog.getByRole('button', { name: 'Close', exact: true }).click();
 
-      // The history has one more check, from the field page, with its flags in words and its photo.
+      // The history has one more check, with its flags in words and its photo.
       await expect.poll(async () => card.locator('[data-test="field-check-row"]').count(), { timeout: 20_000 }).toBe(Math.min(before + 1, 20));
       const latest = card.locator('[data-test="field-check-row"]').first();
-      expect(await latest.innerText()).toMatch(/from the field page[\s\S]*Hardness above the tester’s limit: consider closing the field/);
+      expect(await latest.innerText()).toMatch(/score \d+[\s\S]*height 3 (in|mm)[\s\S]*62, 70, 112 G[\s\S]*Hardness above the tester’s limit: consider closing the field/);
       await card.locator('[data-test="check-photos-by-date"] img').first().waitFor();
       const photo = card.locator('[data-test="check-photos-by-date"] img').last();
       await photo.scrollIntoViewIfNeeded();
