@@ -58,6 +58,8 @@ import { querySchema as workOrdersQuery } from '../routes/work-orders.ts';
 import { versionQuerySchema } from '../routes/write-routes.ts';
 import { STATUS_MAX_AGE_S } from '../routes/public.ts';
 import { photoBodySchema, photoParamsSchema } from '../routes/work-reports.ts';
+import { checkParamsSchema, checkPhotoParamsSchema } from '../routes/fields.ts';
+import { PHOTOS_PER_CHECK } from '../services/field-checks.ts';
 import { PHOTO_MAX_BYTES, PHOTOS_PER_ORDER } from '../services/work-photos.ts';
 import { allowed, publicAccess, signedIn, type Access } from './access.ts';
 
@@ -573,7 +575,52 @@ const fields: RouteDoc[] = [
     summary: 'A field’s latest field checks with their scores and flags, newest first',
     access: allowed('read', 'FieldCheck'),
     params: idParamSchema,
-    answers: [json(200, 'Up to 20 checks.', shape({ items: rows('Field checks') }))],
+    answers: [json(200, 'Up to 20 checks, each with its photos, and the level’s target score.', shape({ items: rows('Field checks'), targetScore: num('The surface score the field’s level targets') }))],
+  },
+  {
+    method: 'post',
+    path: '/api/fields/:id/checks',
+    tag: 'Fields',
+    summary: 'Log a field check from the field page, without a work order: scored, flagged, stored',
+    description: 'For staff who may create field checks in the field’s district (its foreman, an administrator). The caller is checked before the body is read.',
+    access: allowed('create', 'FieldCheck'),
+    params: idParamSchema,
+    body: fieldCheckSchema,
+    answers: [json(201, 'The stored check with its score and flags, the advice for each flag and the cautions.', shape({ check: row('The field check'), advice: strings('What each flag means'), cautions: strings('Safety cautions'), coverTargetPct: int('The level’s cover target (%)'), hocMm: num('The field’s HOC (mm)') }))],
+  },
+  {
+    method: 'post',
+    path: '/api/fields/:id/checks/:checkId/photos',
+    tag: 'Fields',
+    summary: 'Add a photo to a field check logged from the field page',
+    description: `Stored as the crews’ photos are (1,600 px JPEG without metadata); at most ${PHOTOS_PER_CHECK} per check. A check logged on a work order keeps its photos with the order (409). The caller is checked before the upload is read.`,
+    access: allowed('create', 'FieldCheck'),
+    params: checkParamsSchema,
+    upload: { file: 'photo', fields: photoBodySchema, mediaTypes: 'image/jpeg, image/png, image/webp', maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` },
+    answers: [
+      json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo'), duplicate: bool('False') })),
+      json(200, 'The same photo was already stored (same `clientRef`).', shape({ photo: row('The photo stored first'), duplicate: bool('True') })),
+    ],
+    errors: [409, 413, 415],
+  },
+  {
+    method: 'get',
+    path: '/api/fields/:id/checks/:checkId/photos/:photoId',
+    tag: 'Fields',
+    summary: 'The image of a field check’s photo',
+    access: allowed('read', 'FieldCheck'),
+    params: checkPhotoParamsSchema,
+    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+  },
+  {
+    method: 'get',
+    path: '/api/fields/:id/growth-calibration',
+    tag: 'Fields',
+    summary: 'The field’s growth against the engine’s prediction: calibration factor, calibrated rate and confidence',
+    description: 'Each check with a measured height and the days since the last cut gives an observed growth (height − HOC), compared with the engine’s predicted growth for those days. Shown on the field page; the mowing prediction keeps the default rate.',
+    access: allowed('read', 'FieldCheck'),
+    params: idParamSchema,
+    answers: [json(200, 'The calibration.', shape({ calibration: row('factor, n, spread, confidence, defaultRateMmPerDay, calibratedRateMmPerDay, hocMm, readings, skipped, usedForMowing, stationName') }))],
   },
   {
     method: 'get',

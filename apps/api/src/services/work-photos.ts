@@ -36,8 +36,11 @@ function answer(orderId: number, row: { id: number; width: number; height: numbe
   return { photo: { id: row.id, width: row.width, height: row.height, bytes: row.bytes, createdAt: row.createdAt, url: photoUrl(orderId, row.id) }, duplicate };
 }
 
-/** The real format from the bytes (the browser's mime type is only a claim). */
-async function readImage(buffer: Buffer) {
+/**
+ * The real format from the bytes (the browser's mime type is only a claim), re-encoded as the
+ * module comment says. Field-check photos go through the same door.
+ */
+export async function readImage(buffer: Buffer) {
   let meta: sharp.Metadata;
   try {
     meta = await sharp(buffer, { limitInputPixels: false }).metadata();

@@ -14,6 +14,7 @@ export const queryKeys = {
   fieldNeeds: (id: number, date: string | null) => ['fields', 'needs', id, date] as const,
   fieldWork: (id: number, page: number) => ['fields', 'work', id, page] as const,
   fieldChecks: (id: number) => ['fields', 'checks', id] as const,
+  fieldGrowthCalibration: (id: number) => ['fields', 'growth-calibration', id] as const,
   /** Under `fields`: a field's change (its status) makes its closures stale. */
   fieldClosures: (id: number) => ['fields', 'closures', id] as const,
   /** Under `fields`: saving a pattern invalidates `field`, which also makes the week plan stale. */
@@ -39,7 +40,7 @@ export const queryKeys = {
 };
 
 /** What a write changes, by what was written. */
-export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail';
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck';
 
 /**
  * The answers a write makes stale: the resource itself and every answer that shows it (a
@@ -57,4 +58,5 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map']],
   weather: [['weather'], ['fields', 'needs'], ['map']],
   devMail: [['dev-mail']],
+  fieldCheck: [['fields'], ['map'], ['records']],
 };

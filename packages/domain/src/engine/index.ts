@@ -3,6 +3,7 @@ export * from './units.ts';
 export * from './dates.ts';
 export * from './standards.ts';
 export * from './growth.ts';
+export * from './growth-calibration.ts';
 export * from './mowing.ts';
 export * from './due.ts';
 export * from './labour.ts';
