@@ -35,6 +35,7 @@ import { fieldEventsRouter } from './routes/field-events.ts';
 import { fieldsRouter } from './routes/fields.ts';
 import { importsRouter } from './routes/imports.ts';
 import { mapRouter } from './routes/map.ts';
+import { partnerRouter } from './routes/partner.ts';
 import { publicRouter } from './routes/public.ts';
 import { recordsRouter } from './routes/records.ts';
 import { settingsRouter } from './routes/settings.ts';
@@ -159,6 +160,7 @@ export function createApp(
   app.use('/api/standards', standardsRouter(full));
   app.use('/api/imports', importsRouter(full));
   app.use('/api/map', mapRouter(full));
+  app.use('/api/partner', partnerRouter(full));
   app.use('/api/settings', settingsRouter(full));
   app.use('/api', directoryRouter(full));
   app.use('/api', crewsRouter(full));

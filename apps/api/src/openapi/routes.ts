@@ -982,6 +982,63 @@ const closures: RouteDoc[] = [
   },
 ];
 
+const partner: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/partner/fields',
+    tag: 'Partner',
+    summary: 'The partner’s fields in plain words, by site: status and expected reopening, latest surface score, next mowing and line painting, coming bookings',
+    description: 'Only the fields of the caller’s linked sites. No costs, no internal notes, no staff names.',
+    access: allowed('read', 'PartnerView'),
+    answers: [
+      json(
+        200,
+        'The partner’s fields.',
+        shape({
+          today: date('The department’s local date'),
+          sites: rows('[{ name, address, fields: [{ id, name, sport, status: { status, headline, reason, since, expectedReopenOn }, score, checkedOn, nextMowing: { on, basis }, nextLines: { on, basis }, comingBookings }] }]'),
+          cautions: strings('Wet fields, lightning, what the surface score is for'),
+        }),
+      ),
+    ],
+  },
+  {
+    method: 'get',
+    path: '/api/partner/fields/:id',
+    tag: 'Partner',
+    summary: 'One of the partner’s fields: status, latest field check with photos and its meaning, next mowing and line painting, one list of bookings',
+    description: 'A field of another site answers 404, as if it did not exist.',
+    access: allowed('read', 'PartnerView'),
+    params: idParamSchema,
+    answers: [
+      json(
+        200,
+        'The field.',
+        shape({
+          today: date('The department’s local date'),
+          field: row('{ id, name, sport, siteName, siteAddress }'),
+          status: row('{ status, headline, reason, since, expectedReopenOn }'),
+          check: nullable(row('{ checkedOn, score, targetScore, meaning, photos: [{ url, width, height }] }')),
+          nextMowing: row('{ on, basis }'),
+          nextLines: row('{ on, basis }'),
+          agenda: rows('[{ type: "booking", id, kind, title, startsOn, startTime, notes, mine, version }]'),
+          canBook: bool('The caller may book this field'),
+          cautions: strings('Wet fields, lightning, what the surface score is for'),
+        }),
+      ),
+    ],
+  },
+  {
+    method: 'get',
+    path: '/api/partner/fields/:id/photos/:photoId',
+    tag: 'Partner',
+    summary: 'A photo of the latest field check of one of the partner’s fields',
+    access: allowed('read', 'PartnerView'),
+    params: photoParamsSchema,
+    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+  },
+];
+
 export const ROUTES: readonly RouteDoc[] = [
   ...service,
   ...auth,
@@ -993,6 +1050,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...fields,
   ...fieldEvents,
   ...closures,
+  ...partner,
   ...standards,
   ...settings,
   ...imports,
