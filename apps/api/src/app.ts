@@ -27,6 +27,7 @@ import { serveOpenApi } from './openapi/document.ts';
 import { BackgroundTasks } from './services/background.ts';
 import { demoAnnouncement } from './services/first-run.ts';
 import { authRouter } from './routes/auth.ts';
+import { calendarFeedsRouter, calendarPublicRouter } from './routes/calendar-feeds.ts';
 import { closuresRouter } from './routes/closures.ts';
 import { crewsRouter } from './routes/crews.ts';
 import { devRouter } from './routes/dev.ts';
@@ -146,6 +147,7 @@ export function createApp(
   });
   app.use('/api/auth', authRouter(full));
   app.use('/api/public', publicRouter(full));
+  app.use('/api/calendar', calendarPublicRouter(full));
   app.use('/api', requireUser);
   app.use('/api/users', usersRouter(full));
   app.use('/api/weather', weatherRouter(full));
@@ -161,6 +163,7 @@ export function createApp(
   app.use('/api/imports', importsRouter(full));
   app.use('/api/map', mapRouter(full));
   app.use('/api/partner', partnerRouter(full));
+  app.use('/api/calendar-feeds', calendarFeedsRouter(full));
   app.use('/api/settings', settingsRouter(full));
   app.use('/api', directoryRouter(full));
   app.use('/api', crewsRouter(full));

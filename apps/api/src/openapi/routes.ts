@@ -43,6 +43,8 @@ import {
   updateSiteSchema,
   updateUserSchema,
   updateWorkOrderSchema,
+  calendarTokenParamsSchema,
+  createCalendarFeedSchema,
   weatherRangeSchema,
   weekQuerySchema,
   workReportSchema,
@@ -1039,6 +1041,48 @@ const partner: RouteDoc[] = [
   },
 ];
 
+const calendarFeeds: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/calendar-feeds',
+    tag: 'Calendar feeds',
+    summary: 'The private calendar feeds the caller may have: a partner’s own, or one per crew of a foreman’s district, each with the one that works now',
+    description: 'The secret addresses are never shown again; only when each feed was made.',
+    access: allowed('read', 'CalendarFeed'),
+    answers: [json(200, 'The feeds.', items('[{ kind, crewId, name, feed: { id, createdAt } | null }]'))],
+  },
+  {
+    method: 'post',
+    path: '/api/calendar-feeds',
+    tag: 'Calendar feeds',
+    summary: 'Make a new private calendar feed (a partner: of their fields; a foreman: of a crew of his district, `crewId`); the previous feed of the same owner stops working',
+    description: 'The answer carries the secret address once; only a hash of its secret is stored.',
+    access: allowed('create', 'CalendarFeed'),
+    body: createCalendarFeedSchema,
+    answers: [json(201, 'The new feed and its secret address.', shape({ feed: row('{ id, createdAt }'), url: str('The secret iCalendar address, shown this once') }))],
+  },
+  {
+    method: 'delete',
+    path: '/api/calendar-feeds/:id',
+    tag: 'Calendar feeds',
+    summary: 'Revoke a calendar feed: its address answers 404 from now on',
+    access: allowed('delete', 'CalendarFeed'),
+    params: idParamSchema,
+    answers: [noContent('The feed is revoked.')],
+  },
+  {
+    method: 'get',
+    path: '/api/calendar/:token.ics',
+    tag: 'Calendar feeds',
+    summary: 'A private calendar feed (iCalendar) in the department’s time zone: a partner’s bookings, game-day line painting and mowing, and closures; or a crew’s work and its fields’ closures',
+    description: 'No sign-in: the secret in the address is the key. An unknown or revoked secret answers 404.',
+    access: publicAccess('The secret address'),
+    params: calendarTokenParamsSchema,
+    answers: [{ status: 200, description: 'The calendar.', contentType: 'text/calendar', body: { type: 'string' } }],
+    errors: [404],
+  },
+];
+
 export const ROUTES: readonly RouteDoc[] = [
   ...service,
   ...auth,
@@ -1051,6 +1095,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...fieldEvents,
   ...closures,
   ...partner,
+  ...calendarFeeds,
   ...standards,
   ...settings,
   ...imports,
