@@ -60,4 +60,59 @@ describe('the partner’s own view', () => {
       await context.close();
     }
   });
+
+  test('should give a partner a private calendar address, shown once, that a new one or Stop turns off', async () => {
+    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
+    const status = (url: string) => page.evaluate(async (u) => (await fetch(new URL(u).pathname, { credentials: 'omit' })).status, url);
+    try {
+      await signIn(page, 'partner', '/my-fields');
+      const card = page.locator('[data-test="calendar-feeds"]');
+      await card.waitFor();
+      const slot = card.locator('[data-test="calendar-feed-own"]');
+      await slot.locator('[data-test="calendar-feed-make"]').click();
+      const input = slot.locator('[data-test="calendar-feed-url"] input');
+      await input.waitFor();
+      const first = await input.inputValue();
+      expect(first).toMatch(/\/api\/calendar\/[A-Za-z0-9_-]{43}\.ics$/);
+      const ics = await page.evaluate(async (u) => (await fetch(new URL(u).pathname, { credentials: 'omit' })).text(), first);
+      expect(ics).toContain('BEGIN:VCALENDAR');
+      expect(ics).toContain('BEGIN:VTIMEZONE');
+      await card.scrollIntoViewIfNeeded();
+      await page.screenshot({ path: path.join(shots, 'partner-calendar-desktop.png') });
+      // A new address stops the old one.
+      await slot.locator('[data-test="calendar-feed-make"]').click();
+      await page.locator('.el-message-box').getByRole('button', { name: 'Make a new address' }).click();
+      await expect.poll(() => input.inputValue()).not.toBe(first);
+      const second = await input.inputValue();
+      expect(await status(first)).toBe(404);
+      expect(await status(second)).toBe(200);
+      await slot.locator('[data-test="calendar-feed-stop"]').click();
+      await page.locator('.el-message-box').getByRole('button', { name: 'Stop it' }).click();
+      await expect.poll(() => slot.locator('[data-test="calendar-feed-state"]').innerText()).toBe('No address yet');
+      expect(await status(second)).toBe(404);
+    } finally {
+      await page.close();
+    }
+  });
+
+  test('should give a foreman one calendar address per crew on the crews page, on a phone too', async () => {
+    const context = await browser.newContext(PHONE);
+    try {
+      const page = await context.newPage();
+      await signIn(page, 'foreman');
+      await page.goto(`${baseUrl}/crews`);
+      const card = page.locator('[data-test="calendar-feeds"]');
+      await card.waitFor();
+      const slots = card.locator('[data-test^="calendar-feed-crew-"]');
+      await slots.first().waitFor();
+      expect(await slots.count()).toBeGreaterThan(0);
+      await slots.first().locator('[data-test="calendar-feed-make"]').click();
+      await slots.first().locator('[data-test="calendar-feed-url"] input').waitFor();
+      await card.scrollIntoViewIfNeeded();
+      expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+      await page.screenshot({ path: path.join(shots, 'foreman-calendar-phone.png') });
+    } finally {
+      await context.close();
+    }
+  });
 });

@@ -37,10 +37,11 @@ export const queryKeys = {
   /** The partner's own pages: a booking, a closure or planned work changes them. */
   partnerFields: () => ['partner', 'fields'] as const,
   partnerField: (id: number) => ['partner', 'field', id] as const,
+  calendarFeeds: () => ['calendar-feeds'] as const,
 };
 
 /** What a write changes, by what was written. */
-export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail';
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'calendarFeed';
 
 /**
  * The answers a write makes stale: the resource itself and every answer that shows it (a
@@ -58,4 +59,5 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map'], ['partner']],
   weather: [['weather'], ['fields', 'needs'], ['map']],
   devMail: [['dev-mail']],
+  calendarFeed: [['calendar-feeds']],
 };
