@@ -120,7 +120,9 @@ describe('each role’s main task with the keyboard alone', () => {
       await page.locator('[data-test="my-field"]').first().waitFor();
       await tabTo(page, '[data-test="my-field"] a');
       await page.keyboard.press('Enter');
-      await page.waitForURL((url) => /^\/fields\/\d+$/.test(url.pathname));
+      // The partner's own page of the field, not the staff's.
+      await page.waitForURL((url) => /^\/my-fields\/\d+$/.test(url.pathname));
+      await page.locator('[data-test="partner-status"]').waitFor();
       await page.locator('[data-test="field-bookings"]').waitFor();
       await page.waitForLoadState('networkidle');
       await tabTo(page, '[data-test="new-booking"]');

@@ -44,6 +44,8 @@ import {
   updateSiteSchema,
   updateUserSchema,
   updateWorkOrderSchema,
+  calendarTokenParamsSchema,
+  createCalendarFeedSchema,
   weatherRangeSchema,
   weekQuerySchema,
   workReportSchema,
@@ -1055,6 +1057,105 @@ const stripes: RouteDoc[] = [
   },
 ];
 
+const partner: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/partner/fields',
+    tag: 'Partner',
+    summary: 'The partner’s fields in plain words, by site: status and expected reopening, latest surface score, next mowing and line painting, coming bookings',
+    description: 'Only the fields of the caller’s linked sites. No costs, no internal notes, no staff names.',
+    access: allowed('read', 'PartnerView'),
+    answers: [
+      json(
+        200,
+        'The partner’s fields.',
+        shape({
+          today: date('The department’s local date'),
+          sites: rows('[{ name, address, fields: [{ id, name, sport, status: { status, headline, reason, since, expectedReopenOn }, score, checkedOn, nextMowing: { on, basis }, nextLines: { on, basis }, comingBookings }] }]'),
+          cautions: strings('Wet fields, lightning, what the surface score is for'),
+        }),
+      ),
+    ],
+  },
+  {
+    method: 'get',
+    path: '/api/partner/fields/:id',
+    tag: 'Partner',
+    summary: 'One of the partner’s fields: status, latest field check with photos and its meaning, next mowing and line painting, one list of bookings',
+    description: 'A field of another site answers 404, as if it did not exist.',
+    access: allowed('read', 'PartnerView'),
+    params: idParamSchema,
+    answers: [
+      json(
+        200,
+        'The field.',
+        shape({
+          today: date('The department’s local date'),
+          field: row('{ id, name, sport, siteName, siteAddress }'),
+          status: row('{ status, headline, reason, since, expectedReopenOn }'),
+          check: nullable(row('{ checkedOn, score, targetScore, meaning, photos: [{ url, width, height }] }')),
+          nextMowing: row('{ on, basis }'),
+          nextLines: row('{ on, basis }'),
+          agenda: rows('[{ type: "booking", id, kind, title, startsOn, startTime, notes, mine, version }]'),
+          canBook: bool('The caller may book this field'),
+          cautions: strings('Wet fields, lightning, what the surface score is for'),
+        }),
+      ),
+    ],
+  },
+  {
+    method: 'get',
+    path: '/api/partner/fields/:id/photos/:photoId',
+    tag: 'Partner',
+    summary: 'A photo of the latest field check of one of the partner’s fields',
+    access: allowed('read', 'PartnerView'),
+    params: photoParamsSchema,
+    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+  },
+];
+
+const calendarFeeds: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/calendar-feeds',
+    tag: 'Calendar feeds',
+    summary: 'The private calendar feeds the caller may have: a partner’s own, or one per crew of a foreman’s district, each with the one that works now',
+    description: 'The secret addresses are never shown again; only when each feed was made.',
+    access: allowed('read', 'CalendarFeed'),
+    answers: [json(200, 'The feeds.', items('[{ kind, crewId, name, feed: { id, createdAt } | null }]'))],
+  },
+  {
+    method: 'post',
+    path: '/api/calendar-feeds',
+    tag: 'Calendar feeds',
+    summary: 'Make a new private calendar feed (a partner: of their fields; a foreman: of a crew of his district, `crewId`); the previous feed of the same owner stops working',
+    description: 'The answer carries the secret address once; only a hash of its secret is stored.',
+    access: allowed('create', 'CalendarFeed'),
+    body: createCalendarFeedSchema,
+    answers: [json(201, 'The new feed and its secret address.', shape({ feed: row('{ id, createdAt }'), url: str('The secret iCalendar address, shown this once') }))],
+  },
+  {
+    method: 'delete',
+    path: '/api/calendar-feeds/:id',
+    tag: 'Calendar feeds',
+    summary: 'Revoke a calendar feed: its address answers 404 from now on',
+    access: allowed('delete', 'CalendarFeed'),
+    params: idParamSchema,
+    answers: [noContent('The feed is revoked.')],
+  },
+  {
+    method: 'get',
+    path: '/api/calendar/:token.ics',
+    tag: 'Calendar feeds',
+    summary: 'A private calendar feed (iCalendar) in the department’s time zone: a partner’s bookings, game-day line painting and mowing, and closures; or a crew’s work and its fields’ closures',
+    description: 'No sign-in: the secret in the address is the key. An unknown or revoked secret answers 404.',
+    access: publicAccess('The secret address'),
+    params: calendarTokenParamsSchema,
+    answers: [{ status: 200, description: 'The calendar.', contentType: 'text/calendar', body: { type: 'string' } }],
+    errors: [404],
+  },
+];
+
 export const ROUTES: readonly RouteDoc[] = [
   ...service,
   ...auth,
@@ -1067,6 +1168,8 @@ export const ROUTES: readonly RouteDoc[] = [
   ...fieldEvents,
   ...closures,
   ...stripes,
+  ...partner,
+  ...calendarFeeds,
   ...standards,
   ...settings,
   ...imports,

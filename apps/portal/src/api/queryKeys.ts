@@ -37,10 +37,14 @@ export const queryKeys = {
   workOrders: (query: object) => ['work-orders', 'list', query] as const,
   workOrder: (id: number) => ['work-orders', 'detail', id] as const,
   users: () => ['users'] as const,
+  /** The partner's own pages: a booking, a closure or planned work changes them. */
+  partnerFields: () => ['partner', 'fields'] as const,
+  partnerField: (id: number) => ['partner', 'field', id] as const,
+  calendarFeeds: () => ['calendar-feeds'] as const,
 };
 
 /** What a write changes, by what was written. */
-export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck';
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed';
 
 /**
  * The answers a write makes stale: the resource itself and every answer that shows it (a
@@ -48,15 +52,16 @@ export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | '
  */
 export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   site: [['sites'], ['fields'], ['districts'], ['map']],
-  field: [['fields'], ['sites'], ['districts'], ['map'], ['week-plans'], ['work-orders'], ['records']],
-  fieldEvent: [['field-events'], ['fields', 'needs'], ['week-plans']],
+  field: [['fields'], ['sites'], ['districts'], ['map'], ['week-plans'], ['work-orders'], ['records'], ['partner']],
+  fieldEvent: [['field-events'], ['fields', 'needs'], ['week-plans'], ['partner']],
   crew: [['crews'], ['equipment'], ['users'], ['week-plans'], ['work-orders']],
   equipment: [['equipment'], ['week-plans']],
   user: [['users'], ['crews']],
   standards: [['standards'], ['fields', 'needs'], ['map'], ['week-plans']],
   import: [['imports'], ['sites'], ['fields'], ['districts'], ['map']],
-  workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map']],
+  workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map'], ['partner']],
   weather: [['weather'], ['fields', 'needs'], ['map']],
   devMail: [['dev-mail']],
   fieldCheck: [['fields'], ['map'], ['records']],
+  calendarFeed: [['calendar-feeds']],
 };

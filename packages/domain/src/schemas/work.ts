@@ -128,3 +128,10 @@ export const fieldCheckSchema = z
     if (v.hardnessReadingsG.length > 0 && v.hardnessDevice === null) ctx.addIssue({ code: 'custom', path: ['hardnessDevice'], message: 'name the tester the readings were taken with' });
   });
 export type FieldCheckBody = z.infer<typeof fieldCheckSchema>;
+
+/** `POST /api/calendar-feeds`: a partner sends nothing; a foreman names the crew. */
+export const createCalendarFeedSchema = z.object({ crewId: idSchema.optional() }).strict();
+export type CreateCalendarFeedInput = z.infer<typeof createCalendarFeedSchema>;
+
+/** `GET /api/calendar/:token.ics`: the secret as it was made (base64url, 43 characters). */
+export const calendarTokenParamsSchema = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'not a calendar address') });
