@@ -456,3 +456,30 @@ describe('spreading work with slack', () => {
     expect(loads.filter((l) => l.overloaded)).toEqual([]);
   });
 });
+
+describe('watering kept by a crew that does not work the run day', () => {
+  // A crew off on Fridays (Mon–Thu and Saturday) waters Friday's run on Thursday.
+  const offFriday = ['mon', 'tue', 'wed', 'thu', 'sat'] as const;
+  const dry = weather({ tmax: 30, tmin: 18, rain: 0 });
+  const f = field({ irrigation: 'quick_coupler' });
+
+  test('should not ask a run again once the order for it is kept on another day', () => {
+    const first = planFieldWeek({ field: f, weather: dry, weekStart: WEEK, kept: [], workDays: offFriday });
+    const runs = first.orders.filter((o) => o.task === 'irrigate');
+    expect(runs.map((o) => o.askedDate)).toEqual(['2026-06-01', '2026-06-03', '2026-06-05']);
+    const { orders: placed } = assignWeek({ weekStart: WEEK, orders: runs, crews: [{ id: 7, hoursPerDay: 9, workDays: offFriday }], sites: new Map([[10, { lat: 38.01, lng: -77 }]]), yard: { lat: 38, lng: -77 }, travel: DEFAULT_PARAMETERS.travel });
+    expect(placed.map((o) => o.plannedDate)).toEqual(['2026-06-01', '2026-06-03', '2026-06-04']);
+    // Confirmed: every order is kept where the crew does it.
+    const kept: KeptOrder[] = placed.map((o, i) => ({ id: i + 1, fieldId: o.fieldId, task: o.task, plannedDate: o.plannedDate, status: 'assigned', details: o.details }));
+    const again = planFieldWeek({ field: f, weather: dry, weekStart: WEEK, kept, workDays: offFriday });
+    expect(again.orders.filter((o) => o.task === 'irrigate')).toEqual([]);
+  });
+
+  test('should count an order kept without the run it was for against the run it was moved from', () => {
+    const kept: KeptOrder[] = ['2026-06-01', '2026-06-03', '2026-06-04'].map((d, i) => ({ id: i + 1, fieldId: f.id, task: 'irrigate', plannedDate: d, status: 'assigned', details: {} }));
+    expect(planFieldWeek({ field: f, weather: dry, weekStart: WEEK, kept, workDays: offFriday }).orders.filter((o) => o.task === 'irrigate')).toEqual([]);
+    // Two runs kept: the one left is asked.
+    const two = planFieldWeek({ field: f, weather: dry, weekStart: WEEK, kept: kept.slice(0, 2), workDays: offFriday });
+    expect(two.orders.filter((o) => o.task === 'irrigate').map((o) => o.askedDate)).toEqual(['2026-06-05']);
+  });
+});

@@ -490,14 +490,14 @@ function irrigationOrders(ctx: FieldWeekContext, daily: FieldDailySeries): void 
   const week = weekIrrigation(etc, eff, daily.share, daily.du, planning.minIrrigationMm);
   if (!week.scheduled) return;
   const gross = week.grossMm;
-  const keptDays = new Set(ctx.keptOf('irrigate').map((k) => k.plannedDate));
+  const kept = ctx.keptOf('irrigate');
   const irr = { ...DEFAULT_PARAMETERS.irrigation, ...params.irrigation };
   const schedule = weeklyIrrigationSchedule({ grossMmPerWeek: gross, precipRateMmPerH: irr.precipRateMmPerH, allowedDays: planning.wateringDays, maxRunMinPerCycle: irr.maxRunMinPerCycle, maxCyclesPerDay: irr.maxCyclesPerDay });
   const runs = schedule.days.map((d) => ({ day: d.day, date: dates[WEEK_FROM_MONDAY.indexOf(d.day)] as string, cycles: d.cycles, minutesPerCycle: round(d.minutesPerCycle, 0), totalMinutes: round(d.totalMinutes, 0) }));
   const base = { grossMm: round(gross, 1), volumeL: round(irrigationVolumeLitres(schedule.appliedMm, field.areaM2), 0), shortfallMm: round(schedule.shortfallMm, 1) };
   if (field.irrigation === 'automatic') {
     // A controller is set once for the week; a kept setting stands.
-    if (keptDays.size > 0) return;
+    if (kept.length > 0) return;
     const firstRun = runs.map((r) => r.date).filter((d) => d >= start).sort()[0] ?? start;
     ctx.orders.push({
       fieldId: field.id,
@@ -513,8 +513,9 @@ function irrigationOrders(ctx: FieldWeekContext, daily: FieldDailySeries): void 
     });
     return;
   }
+  const covered = coveredRuns(runs.filter((r) => r.totalMinutes > 0).map((r) => r.date), kept);
   for (const run of runs) {
-    if (keptDays.has(run.date) || run.totalMinutes <= 0 || run.date < start) continue;
+    if (covered.has(run.date) || run.totalMinutes <= 0 || run.date < start) continue;
     ctx.orders.push({
       fieldId: field.id,
       siteId: field.siteId,
@@ -522,12 +523,35 @@ function irrigationOrders(ctx: FieldWeekContext, daily: FieldDailySeries): void 
       askedDate: run.date,
       plannedHours: planning.quickCouplerHoursPerDay,
       reason: `Water budget: ${round(gross / runs.length, 1)} mm on ${dayName(run.date)} (${run.cycles} × ${run.minutesPerCycle} min, cycle and soak)`,
-      details: { ...base, system: 'quick_coupler', runTimeMin: run.totalMinutes, cycles: run.cycles, minutesPerCycle: run.minutesPerCycle },
+      details: { ...base, system: 'quick_coupler', runOn: run.date, runTimeMin: run.totalMinutes, cycles: run.cycles, minutesPerCycle: run.minutesPerCycle },
       latestDate: run.date,
       flexible: false,
       equipmentKind: null,
     });
   }
+}
+
+/**
+ * The watering runs that kept irrigation orders already stand for. An order names its run
+ * (`details.runOn`): a crew that does not work the run's day does it on its working day
+ * before, so the order's date is not the run's. An order without the name stands for the run
+ * on its date, else the first run after it not yet covered (the scheduler only moves a run
+ * earlier), else the last one before it.
+ */
+export function coveredRuns(runDates: readonly string[], kept: readonly Pick<KeptOrder, 'plannedDate' | 'details'>[]): Set<string> {
+  const covered = new Set<string>();
+  const runs = [...runDates].sort();
+  const rest: typeof kept[number][] = [];
+  for (const k of kept) {
+    const named = k.details?.runOn;
+    if (typeof named === 'string' && runs.includes(named) && !covered.has(named)) covered.add(named);
+    else rest.push(k);
+  }
+  for (const k of [...rest].sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : 0))) {
+    const run = runs.find((d) => d === k.plannedDate && !covered.has(d)) ?? runs.find((d) => d > k.plannedDate && !covered.has(d)) ?? [...runs].reverse().find((d) => d < k.plannedDate && !covered.has(d));
+    if (run) covered.add(run);
+  }
+  return covered;
 }
 
 /** Field check by the level's frequency. */
