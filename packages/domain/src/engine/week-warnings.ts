@@ -22,7 +22,9 @@ export type WeekWarning =
   /** A task on a field lands after its latest date (`date`): the crew works no day before it. */
   | { code: 'due_date_missed'; fieldId: number; date: string; task: WorkTask }
   /** No working day is left before the booking on `date`: its lines are painted on the day itself. */
-  | { code: 'paint_on_event_day'; fieldId: number; date: string; eventTitle: string };
+  | { code: 'paint_on_event_day'; fieldId: number; date: string; eventTitle: string }
+  /** Work due on `date` does not fit the crew's hours that day (`hours` planned of `available`) and no other crew has room. */
+  | { code: 'crew_day_over'; crewId: number; date: string; hours: number; available: number };
 
 /** The warnings a district's week shows from its fields' plans (the others explain one field only). */
 export const DISTRICT_WEEK_WARNINGS: ReadonlySet<WeekWarning['code']> = new Set(['no_weather_before_week', 'weather_projected', 'paint_on_event_day']);
@@ -31,8 +33,9 @@ export const DISTRICT_WEEK_WARNINGS: ReadonlySet<WeekWarning['code']> = new Set(
  * The plain-language sentence of a warning, as the district week shows it. `fieldName` names
  * a field by id (else "field <id>").
  */
-export function weekWarningText(w: WeekWarning, fieldName: (id: number) => string | undefined = () => undefined): string {
+export function weekWarningText(w: WeekWarning, fieldName: (id: number) => string | undefined = () => undefined, crewName: (id: number) => string | undefined = () => undefined): string {
   const name = (id: number) => fieldName(id) ?? `field ${id}`;
+  const hm = (h: number) => `${Math.floor(Math.round(h * 60) / 60)}:${String(Math.round(h * 60) % 60).padStart(2, '0')}`;
   switch (w.code) {
     case 'field_retired':
       return 'The field is retired: nothing is planned for it.';
@@ -52,6 +55,8 @@ export function weekWarningText(w: WeekWarning, fieldName: (id: number) => strin
       return 'No crew with working days in this district: every order is left unassigned.';
     case 'due_date_missed':
       return `${w.task === 'mow' ? 'Mowing' : 'Work'} on ${name(w.fieldId)} falls after ${w.date}: no working day of the crew before it.`;
+    case 'crew_day_over':
+      return `${crewName(w.crewId) ?? `Crew ${w.crewId}`} has ${hm(w.hours)} h planned on ${w.date} for ${hm(w.available)} h: work due that day does not fit and no other crew has room. Move work by hand or add hours.`;
     case 'paint_on_event_day':
       return `Lines on ${name(w.fieldId)} for ${w.eventTitle} are painted on the day itself (${w.date}): no working day is left before it. Paint early and keep players off until the paint is dry.`;
   }
