@@ -11,3 +11,4 @@ export * from './crews.ts';
 export * from './work.ts';
 export * from './settings.ts';
 export * from './closures.ts';
+export * from './requests.ts';
