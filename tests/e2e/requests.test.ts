@@ -28,10 +28,12 @@ async function pickOption(page: Page, label: string) {
   await dropdown.waitFor({ state: 'hidden' });
 }
 
+// The steps run in order, each its own test: the request the partner files is the one the foreman schedules.
 describe('requests', () => {
-  test('should let a partner file a game request from a phone, the foreman schedule it, and the partner see it scheduled', async () => {
+  let requestId = 0;
+
+  test('should let a partner file a game request from a phone with the keyboard, with a photo', async () => {
     const phone = await browser.newContext(PHONE);
-    let requestId = 0;
     try {
       const page = await phone.newPage();
       await keyboardSignIn(page, 'partner');
@@ -69,7 +71,10 @@ describe('requests', () => {
     } finally {
       await phone.close();
     }
+  });
 
+  test('should let the foreman find it from his district page, answer it and turn it into a booking', async () => {
+    expect(requestId, 'the request filed before').toBeGreaterThan(0);
     const desk = await browser.newPage({ viewport: { width: 1400, height: 900 } });
     try {
       await signIn(desk, 'foreman', '/district');
@@ -99,7 +104,10 @@ describe('requests', () => {
     } finally {
       await desk.close();
     }
+  });
 
+  test('should show the partner the request scheduled, with the foreman’s answer', async () => {
+    expect(requestId, 'the request scheduled before').toBeGreaterThan(0);
     const again = await browser.newContext(PHONE);
     try {
       const page = await again.newPage();
@@ -107,6 +115,7 @@ describe('requests', () => {
       await page.goto(`${baseUrl}/requests`);
       const row = page.locator('[data-test="request-state"]').first();
       await row.waitFor();
+      await page.screenshot({ path: path.join(shots, 'requests-list-phone.png'), fullPage: true });
       await page.goto(`${baseUrl}/requests?open=${requestId}`);
       const drawer = page.locator('[data-test="request-detail"]');
       await drawer.waitFor();
