@@ -46,6 +46,8 @@ describe('requests', () => {
       await page.keyboard.press('Enter');
       const dialog = page.locator('[data-test="request-dialog"]');
       await dialog.waitFor();
+      // The dialog as it opens, before a picker's panel is open over it (the panel is Element Plus's unnamed popup).
+      await checkA11y(page);
       await tabTo(page, '[data-test="request-field"]');
       await pickOption(page, 'Stadium field · Kestrel Hill High School');
       await tabTo(page, '[data-test="request-date"]');
