@@ -40,6 +40,7 @@ import { mapRouter } from './routes/map.ts';
 import { partnerRouter } from './routes/partner.ts';
 import { publicRouter } from './routes/public.ts';
 import { recordsRouter } from './routes/records.ts';
+import { requestsRouter } from './routes/requests.ts';
 import { settingsRouter } from './routes/settings.ts';
 import { sitesRouter } from './routes/sites.ts';
 import { standardsRouter } from './routes/standards.ts';
@@ -161,6 +162,7 @@ export function createApp(
   app.use('/api/fields', closuresRouter(full));
   app.use('/api/fields', stripesRouter(full));
   app.use('/api/field-events', fieldEventsRouter(full));
+  app.use('/api/requests', requestsRouter(full));
   app.use('/api/standards', standardsRouter(full));
   app.use('/api/imports', importsRouter(full));
   app.use('/api/map', mapRouter(full));

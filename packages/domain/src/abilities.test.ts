@@ -163,6 +163,16 @@ const cases: Case[] = [
   ['foreman', 'read', 'CalendarFeed', { userId: 5 }, false],
   ['crew', 'create', 'CalendarFeed', { crewId: CREW_1, districtId: D1 }, false],
   ['head', 'create', 'CalendarFeed', { crewId: CREW_1, districtId: D1 }, false],
+  ['foreman', 'assign', 'Request', { siteId: SITE_A, districtId: D1 }, true],
+  ['foreman', 'assign', 'Request', { siteId: SITE_B, districtId: D2 }, false],
+  ['partner', 'read', 'Request', { siteId: SITE_A, districtId: D1, createdBy: 3 }, true],
+  ['partner', 'read', 'Request', { siteId: SITE_B, districtId: D2, createdBy: 5 }, false],
+  ['partner', 'update', 'Request', { siteId: SITE_A, districtId: D1, createdBy: 5 }, true],
+  ['partner', 'update', 'Request', { siteId: SITE_A, districtId: D1, createdBy: 3 }, false],
+  ['partner', 'assign', 'Request', { siteId: SITE_A, districtId: D1, createdBy: 5 }, false],
+  ['crew', 'read', 'Request', { siteId: SITE_A, districtId: D1 }, false],
+  ['head', 'read', 'Request', { siteId: SITE_B, districtId: D2 }, true],
+  ['head', 'assign', 'Request', { siteId: SITE_B, districtId: D2 }, false],
 ];
 
 type FieldCase = [role: string, field: string, allowed: boolean];

@@ -103,7 +103,8 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       const d = actor.districtId ?? -1;
       can('read', 'District', { id: d });
       can('manage', ['Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck', 'FieldEvent', 'FieldClosure'], { districtId: d });
-      can(['read', 'update'], 'Request', { districtId: d });
+      // A foreman answers his district's requests and decides them ('assign': schedule into work, decline, close).
+      can(['read', 'update', 'assign'], 'Request', { districtId: d });
       can('read', ['Standards', 'Weather']);
       can('create', ['Import', 'Weather']);
       can('read', 'Import', { districtId: d });
@@ -141,6 +142,8 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can(['read', 'create'], 'FieldEvent', { siteId: { $in: sites } });
       can(['update', 'delete'], 'FieldEvent', { siteId: { $in: sites }, createdBy: actor.id });
       can(['read', 'create'], 'Request', { siteId: { $in: sites } });
+      // A partner changes only the requests they filed themselves; deciding them is the foreman's.
+      can('update', 'Request', { siteId: { $in: sites }, createdBy: actor.id });
       // Partners see why their fields are closed; closing them is the department's.
       can('read', 'FieldClosure', { siteId: { $in: sites } });
       can('read', 'Standards');

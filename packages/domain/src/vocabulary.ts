@@ -232,3 +232,22 @@ export const STRIPE_PATTERN_LABELS: Record<StripePattern, string> = {
   checkerboard: 'Checkerboard (criss-cross)',
   diagonal: 'Diagonal stripes',
 };
+
+/** What a partner asks of the department (a school athletic director, a league contact). */
+export const REQUEST_KINDS = ['game_lines', 'wet_area', 'damaged_turf', 'safety'] as const;
+export type RequestKind = (typeof REQUEST_KINDS)[number];
+export const REQUEST_KIND_LABELS: Record<RequestKind, string> = {
+  game_lines: 'Lines for a game',
+  wet_area: 'Wet area',
+  damaged_turf: 'Damaged turf',
+  safety: 'Safety concern',
+};
+/** requested → scheduled → done, or declined with a reason. */
+export const REQUEST_STATES = ['requested', 'scheduled', 'done', 'declined'] as const;
+export type RequestState = (typeof REQUEST_STATES)[number];
+export const REQUEST_STATE_LABELS: Record<RequestState, string> = {
+  requested: 'Requested',
+  scheduled: 'Scheduled',
+  done: 'Done',
+  declined: 'Declined',
+};

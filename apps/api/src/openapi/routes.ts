@@ -9,6 +9,13 @@ import {
   acceptInviteSchema,
   closeFieldSchema,
   setFieldStripesSchema,
+  closeFieldRequestSchema,
+  createFieldRequestSchema,
+  declineFieldRequestSchema,
+  requestListQuerySchema,
+  requestMessageSchema,
+  scheduleFieldRequestSchema,
+  updateFieldRequestSchema,
   createCrewSchema,
   createEquipmentSchema,
   createFieldEventSchema,
@@ -63,6 +70,8 @@ import { photoBodySchema, photoParamsSchema } from '../routes/work-reports.ts';
 import { checkParamsSchema, checkPhotoParamsSchema } from '../routes/fields.ts';
 import { PHOTOS_PER_CHECK } from '../services/field-checks.ts';
 import { PHOTO_MAX_BYTES, PHOTOS_PER_ORDER } from '../services/work-photos.ts';
+import { requestPhotoParamsSchema } from '../routes/requests.ts';
+import { PHOTOS_PER_REQUEST } from '../services/requests.ts';
 import { allowed, publicAccess, signedIn, type Access } from './access.ts';
 
 /** The list queries default their dates to the department's today; the documented input is the same whatever the day. */
@@ -1114,6 +1123,121 @@ const partner: RouteDoc[] = [
   },
 ];
 
+const REQUEST_ROW = 'The request: { id, fieldId, fieldName, siteId, siteName, districtId, kind, gameOn, startTime, layout, description, state, reason, eventId, workOrderId, createdBy, createdByName, photoCount, messageCount, version, createdAt, updatedAt }';
+const REQUEST_DETAIL = shape({ request: row(REQUEST_ROW), messages: rows('The thread, oldest first'), photos: rows('Photos with id, size and `url`'), work: rows('Work the request became: { id, task, plannedDate, status }') });
+
+const requests: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/requests',
+    tag: 'Requests',
+    summary: 'Partners’ requests the caller may read: a partner’s sites, a foreman’s district, or all',
+    description: 'Open requests first, newest first within a state.',
+    access: allowed('read', 'Request'),
+    query: requestListQuerySchema,
+    answers: [json(200, 'The requests.', items('Requests'))],
+  },
+  {
+    method: 'post',
+    path: '/api/requests',
+    tag: 'Requests',
+    summary: 'File a request about a field: lines for a game (day and layout), a wet area, damaged turf, a safety concern',
+    description: 'A partner files only for fields of their own sites. The district’s foremen are e-mailed.',
+    access: allowed('create', 'Request'),
+    body: createFieldRequestSchema,
+    answers: [json(201, 'The request, requested.', shape({ request: row(REQUEST_ROW) }))],
+  },
+  {
+    method: 'get',
+    path: '/api/requests/:id',
+    tag: 'Requests',
+    summary: 'One request with its thread, photos and the work it became',
+    description: 'A request the caller may not read answers 404, as one that does not exist.',
+    access: allowed('read', 'Request'),
+    params: idParamSchema,
+    answers: [json(200, 'The request.', REQUEST_DETAIL)],
+  },
+  {
+    method: 'patch',
+    path: '/api/requests/:id',
+    tag: 'Requests',
+    summary: 'Change a request while it is still requested (a partner: only what they filed)',
+    description: VERSION_NOTE,
+    access: allowed('update', 'Request'),
+    params: idParamSchema,
+    body: updateFieldRequestSchema,
+    answers: [json(200, 'The request after the change.', shape({ request: row(REQUEST_ROW) }))],
+    errors: [409],
+  },
+  {
+    method: 'post',
+    path: '/api/requests/:id/messages',
+    tag: 'Requests',
+    summary: 'Add a message to a request’s thread: the foreman’s answer (e-mailed to the partner who filed) or the partner’s reply (e-mailed to the foremen)',
+    access: allowed('update', 'Request'),
+    params: idParamSchema,
+    body: requestMessageSchema,
+    answers: [json(201, 'The request with its thread.', REQUEST_DETAIL)],
+  },
+  {
+    method: 'post',
+    path: '/api/requests/:id/schedule',
+    tag: 'Requests',
+    summary: 'Turn a request into work: a game request becomes a booking the week plan paints lines before; any other kind one work order',
+    description: `${VERSION_NOTE} \`work\` (task, day, hours, crew) is required for every kind but lines for a game. The partner is e-mailed; the request is done when its work is.`,
+    access: allowed('assign', 'Request'),
+    params: idParamSchema,
+    body: scheduleFieldRequestSchema,
+    answers: [json(200, 'The request, scheduled.', shape({ request: row(REQUEST_ROW) }))],
+    errors: [409],
+  },
+  {
+    method: 'post',
+    path: '/api/requests/:id/decline',
+    tag: 'Requests',
+    summary: 'Decline a request with the reason the partner reads',
+    description: `${VERSION_NOTE} The partner is e-mailed.`,
+    access: allowed('assign', 'Request'),
+    params: idParamSchema,
+    body: declineFieldRequestSchema,
+    answers: [json(200, 'The request, declined.', shape({ request: row(REQUEST_ROW) }))],
+    errors: [409],
+  },
+  {
+    method: 'post',
+    path: '/api/requests/:id/close',
+    tag: 'Requests',
+    summary: 'Close a request as done',
+    description: `${VERSION_NOTE} The partner is e-mailed.`,
+    access: allowed('assign', 'Request'),
+    params: idParamSchema,
+    body: closeFieldRequestSchema,
+    answers: [json(200, 'The request, done.', shape({ request: row(REQUEST_ROW) }))],
+    errors: [409],
+  },
+  {
+    method: 'post',
+    path: '/api/requests/:id/photos',
+    tag: 'Requests',
+    summary: 'Add a photo to a request (the partner who filed it, while it is open)',
+    description: `The photo is resized to 1,600 px, stored as JPEG without its metadata; at most ${PHOTOS_PER_REQUEST} per request. The caller is checked before the upload is read.`,
+    access: allowed('update', 'Request'),
+    params: idParamSchema,
+    upload: { file: 'photo', mediaTypes: 'image/jpeg, image/png, image/webp', maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` },
+    answers: [json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo') }))],
+    errors: [409, 413, 415],
+  },
+  {
+    method: 'get',
+    path: '/api/requests/:id/photos/:photoId',
+    tag: 'Requests',
+    summary: 'The image of a request’s photo',
+    access: allowed('read', 'Request'),
+    params: requestPhotoParamsSchema,
+    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+  },
+];
+
 const calendarFeeds: RouteDoc[] = [
   {
     method: 'get',
@@ -1170,6 +1294,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...stripes,
   ...partner,
   ...calendarFeeds,
+  ...requests,
   ...standards,
   ...settings,
   ...imports,

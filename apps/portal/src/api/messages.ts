@@ -12,6 +12,7 @@ const NOUNS: Partial<Record<VersionedResource, string>> = {
   work_order: 'work order',
   standards: 'level',
   field_stripes: 'stripe pattern',
+  field_request: 'request',
 };
 
 /** Someone saved the row after this person read it (the API's `<resource>/version_conflict`, 409). */

@@ -26,6 +26,8 @@ export const queryKeys = {
   /** Not under `map`: the bundled basemap does not change with the data. */
   basemap: () => ['basemap'] as const,
   records: (query: object) => ['records', query] as const,
+  requests: (query: object) => ['requests', 'list', query] as const,
+  request: (id: number) => ['requests', 'detail', id] as const,
   sites: (query: object) => ['sites', 'list', query] as const,
   site: (id: number) => ['sites', 'detail', id] as const,
   standards: () => ['standards'] as const,
@@ -44,7 +46,7 @@ export const queryKeys = {
 };
 
 /** What a write changes, by what was written. */
-export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed';
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request';
 
 /**
  * The answers a write makes stale: the resource itself and every answer that shows it (a
@@ -64,4 +66,6 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   devMail: [['dev-mail']],
   fieldCheck: [['fields'], ['map'], ['records']],
   calendarFeed: [['calendar-feeds']],
+  // Scheduling a request books the field or adds a work order.
+  request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders']],
 };

@@ -74,6 +74,12 @@ export const routes: RouteRecordRaw[] = [
         meta: { roles: ['crew'], can: ['read', 'Crew'], title: 'Today' },
       },
       {
+        path: 'requests',
+        name: 'requests',
+        component: () => import('../views/RequestsView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman', 'partner'], can: ['read', 'Request'], title: 'Requests' },
+      },
+      {
         path: 'my-fields',
         name: 'my-fields',
         component: () => import('../views/MyFieldsView.vue'),

@@ -19,3 +19,4 @@ export * from './closures.ts';
 export * from './stripes.ts';
 export * from './partner.ts';
 export * from './calendar-feeds.ts';
+export * from './requests.ts';

@@ -12,3 +12,4 @@ export * from './work.ts';
 export * from './settings.ts';
 export * from './closures.ts';
 export * from './stripes.ts';
+export * from './requests.ts';
