@@ -42,7 +42,7 @@ function fit(page: Page): Promise<Fit> {
         for (let box = el.parentElement; box; box = box.parentElement) if (scrolls(box) || box.classList.contains('leaflet-container')) return false;
         return true;
       })
-      .map((el) => `${el.tagName.toLowerCase()}.${[...el.classList].join('.')} right ${Math.round(el.getBoundingClientRect().right)}`);
+      .map((el) => `${el.tagName.toLowerCase()}.${Array.from(el.classList).join('.')} right ${Math.round(el.getBoundingClientRect().right)}`);
     return {
       scrollWidth: document.scrollingElement!.scrollWidth,
       pastEdge,
