@@ -35,8 +35,7 @@ describe('field checks on the field page', () => {
       await dialog.locator('[data-test="check-bare"] input').fill('10');
       await dialog.getByText('Goalmouths', { exact: true }).click();
       await dialog.locator('[data-test="check-height"] input').fill('3');
-      await dialog.locator('[data-test="check-device"]').click();
-      await page.getByRole('option', { name: /2\.25 kg portable tester/ }).click();
+      await dialog.locator('[data-test="check-device"]').getByText(/2\.25 kg portable tester/).click();
       for (const [i, g] of ['62', '70', '112'].entries()) await dialog.locator(`[data-test="check-reading-${i}"] input`).fill(g);
       await dialog.locator('[data-test="check-evenness"]').getByText('4', { exact: true }).click();
       await dialog.locator('[data-test="check-divots"]').getByText('3', { exact: true }).click();
