@@ -33,12 +33,15 @@ describe('Today on a phone, first visit', () => {
       const phone = await fresh.newPage();
       const answer = await phone.goto(`${baseUrl}/today`);
       await phone.locator('[data-test="job-card"]').first().waitFor();
+      // What was asked for before Today asked for its jobs: the code on its critical path, which
+      // must come in one wave named by its HTML. (With other browser tests running the dialogs'
+      // code, loaded when idle, can come before the first card is drawn; it is not on that path.)
       const asked = await phone.evaluate(() => {
+        const entries = performance.getEntriesByType('resource') as PerformanceResourceTiming[];
+        const orders = entries.find((e) => new URL(e.name).pathname === '/api/work-orders');
         const card = (window as unknown as { firstCard: number }).firstCard;
-        return performance
-          .getEntriesByType('resource')
-          .filter((e) => e.startTime < card)
-          .map((e) => new URL(e.name).pathname);
+        const cut = Math.min(card, orders?.startTime ?? card);
+        return entries.filter((e) => e.startTime < cut).map((e) => new URL(e.name).pathname);
       });
 
       const html = await answer!.text();
