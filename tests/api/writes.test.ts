@@ -127,6 +127,14 @@ describe('audit log', () => {
     const list = await head.get('/api/audit?entity=field');
     expect(list.status).toBe(200);
     expect(list.body.items[0]).toMatchObject({ entity: 'field', entityId: id, actorName: 'Test foreman' });
+    // In words: the field by its name and site, the level by its name, the outline without coordinates.
+    const site = (await api.database.db.select().from(sites).where(eq(sites.id, (await fieldRow(id)).siteId)))[0]!;
+    const field = await fieldRow(id);
+    expect(list.body.items[0].entityName).toBe(`${field.name} (${site.name})`);
+    const changes = list.body.items[0].changes as { attribute: string; label: string; before: string; after: string }[];
+    expect(changes.find((c) => c.attribute === 'maintenanceLevel')).toEqual({ attribute: 'maintenanceLevel', label: 'Maintenance level', before: 'Competition', after: 'Showcase' });
+    expect(changes.map((c) => c.attribute)).not.toContain('version');
+    expect(changes.map((c) => c.attribute)).not.toContain('updatedAt');
   });
 
   test('should show a foreman only his district’s history', async () => {

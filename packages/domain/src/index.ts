@@ -7,3 +7,4 @@ export * from './clock.ts';
 export * from './engine/index.ts';
 export * from './contracts/index.ts';
 export * from './partner-words.ts';
+export * from './audit-words.ts';

@@ -7,6 +7,7 @@ import { ApiError } from '../api/client.ts';
 import { errorMessage, messageFor } from '../api/messages.ts';
 import { queryClient } from '../api/queryClient.ts';
 import { forgetOfflineAnswers, refreshOfflineSession } from '../utils/offlineCache.ts';
+import { setDisplayTimeZone } from '../utils/units.ts';
 
 /** Where each role lands after sign-in and when a route is not theirs. */
 const LANDING: Record<Role, string> = {
@@ -50,7 +51,10 @@ export const useSessionStore = defineStore('session', () => {
 
   /** Takes the department's zone (from a session answer or after an administrator changed it); a name the browser does not know is ignored. */
   function setTimeZone(next: string | undefined) {
-    if (next && isTimeZone(next)) timeZone.value = next;
+    if (next && isTimeZone(next)) {
+      timeZone.value = next;
+      setDisplayTimeZone(next);
+    }
   }
 
   /** The department's local date (YYYY-MM-DD) at `now`: the one "today" of every page. */

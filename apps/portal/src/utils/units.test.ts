@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { crewHoursText, distanceText, formatHoc, formatLandArea, formatSurfaceArea, hocToMm, hocValue, hoursMinutes, reasonText } from './units.ts';
+import { crewHoursText, distanceText, formatDateTime, formatHoc, formatLandArea, formatSurfaceArea, hocToMm, hocValue, hoursMinutes, reasonText, setDisplayTimeZone } from './units.ts';
 
 describe('units', () => {
   test('should show a land area in acres or hectares', () => {
@@ -50,5 +50,16 @@ describe('units', () => {
     expect(reasonText(mow, 'imperial')).toBe('One-third rule: the grass would pass 1½ in (1.5 × HOC 1 in) before the next mowing day');
     expect(reasonText(mow, 'metric')).toBe(mow);
     expect(reasonText('Water budget: 25.4 mm gross this week; set the controller to the run times', 'imperial')).toBe('Water budget: 1 in gross this week; set the controller to the run times');
+  });
+});
+
+describe('formatDateTime', () => {
+  test('should show an instant in the department’s zone, not the browser’s or UTC', () => {
+    setDisplayTimeZone('America/Chicago');
+    // 04:30 UTC on Dec 3 is 22:30 on Dec 2 in a US Central city (UTC−6 in winter).
+    expect(formatDateTime('2026-12-03T04:30:00Z')).toBe('Dec 2, 2026, 10:30 PM');
+    setDisplayTimeZone('Europe/Berlin');
+    expect(formatDateTime('2026-12-03T04:30:00Z')).toBe('Dec 3, 2026, 5:30 AM');
+    expect(formatDateTime(null)).toBe('—');
   });
 });

@@ -1,4 +1,4 @@
-import { formatDepth, formatHocText, type UnitSystem } from '@swardwise/domain';
+import { DEFAULT_TIME_ZONE, formatDepth, formatHocText, type UnitSystem } from '@swardwise/domain';
 
 /** Exact definitions: international acre and foot, inch of 25.4 mm. */
 const M2_PER_ACRE = 4046.8564224;
@@ -26,12 +26,23 @@ export function formatHoc(mm: number, units: UnitSystem): string {
   return formatHocText(mm, units);
 }
 
+/**
+ * The zone instants are shown in: the department's, set by the session store when a session
+ * answer names it (before any page shows a time), never the browser's own.
+ */
+let displayTimeZone: string = DEFAULT_TIME_ZONE;
+
+export function setDisplayTimeZone(zone: string): void {
+  displayTimeZone = zone;
+}
+
+/** An instant as the department's local date and time ("Dec 3, 2026, 1:15 AM"). */
 export function formatDateTime(iso: string | null): string {
   if (!iso) return '—';
   const d = new Date(iso);
   return Number.isNaN(d.getTime())
     ? iso
-    : d.toLocaleString('en-US', { year: 'numeric', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' });
+    : d.toLocaleString('en-US', { year: 'numeric', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit', timeZone: displayTimeZone });
 }
 
 /** A large area as a plain number in acres or hectares (2 decimals), for exports. */
