@@ -42,6 +42,7 @@ import { publicRouter } from './routes/public.ts';
 import { recordsRouter } from './routes/records.ts';
 import { requestsRouter } from './routes/requests.ts';
 import { settingsRouter } from './routes/settings.ts';
+import { costsRouter } from './routes/costs.ts';
 import { sitesRouter } from './routes/sites.ts';
 import { standardsRouter } from './routes/standards.ts';
 import { usersRouter } from './routes/users.ts';
@@ -169,6 +170,7 @@ export function createApp(
   app.use('/api/partner', partnerRouter(full));
   app.use('/api/calendar-feeds', calendarFeedsRouter(full));
   app.use('/api/settings', settingsRouter(full));
+  app.use('/api/costs', costsRouter(full));
   app.use('/api', directoryRouter(full));
   app.use('/api', crewsRouter(full));
   if (devRoutes) app.use('/api/dev', devRouter(full));

@@ -149,6 +149,13 @@ const cases: Case[] = [
   ['partner', 'create', 'Request', { siteId: SITE_B, districtId: D2 }, false],
   ['foreman', 'update', 'Request', { siteId: SITE_A, districtId: D1 }, true],
   ['foreman', 'update', 'Request', { siteId: SITE_B, districtId: D2 }, false],
+  // Costs and rates: the head sets them, a foreman reads them, crews and partners never see them
+  ['admin', 'update', 'CostSettings', null, true],
+  ['head', 'update', 'CostSettings', null, true],
+  ['foreman', 'read', 'CostSettings', null, true],
+  ['foreman', 'update', 'CostSettings', null, false],
+  ['crew', 'read', 'CostSettings', null, false],
+  ['partner', 'read', 'CostSettings', null, false],
   // The partner's own pages
   ['partner', 'read', 'PartnerView', null, true],
   ['head', 'read', 'PartnerView', null, false],

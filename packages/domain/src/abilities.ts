@@ -31,6 +31,8 @@ export const SUBJECTS = [
   'PartnerView',
   /** A private calendar feed (a partner's own, or a crew's made by its foreman). */
   'CalendarFeed',
+  /** The department's costs and rates (labour, fuel, water, products): internal, never a partner's or a crew's. */
+  'CostSettings',
 ] as const;
 export type SubjectName = (typeof SUBJECTS)[number];
 /** A row tagged with its subject type (see `asSubject`). */
@@ -97,6 +99,8 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       // The head may close or reopen any field.
       can(['read', 'create'], 'FieldClosure');
       can(['create', 'read'], 'Import');
+      // The head defends the budget: he sets what labour, fuel, water and products cost.
+      can(['read', 'update'], 'CostSettings');
       break;
 
     case 'foreman': {
@@ -106,6 +110,8 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       // A foreman answers his district's requests and decides them ('assign': schedule into work, decline, close).
       can(['read', 'update', 'assign'], 'Request', { districtId: d });
       can('read', ['Standards', 'Weather']);
+      // A foreman sees his district's costs, so he reads the rates they are worked out with.
+      can('read', 'CostSettings');
       can('create', ['Import', 'Weather']);
       can('read', 'Import', { districtId: d });
       can('read', 'AuditEntry', { districtId: d });

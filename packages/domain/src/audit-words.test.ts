@@ -46,6 +46,19 @@ describe('audit in words', () => {
     expect(describeAuditChanges({ id: 1, name: 'Meadow 2', notes: null }, null)).toEqual([{ attribute: 'name', label: 'Name', before: 'Meadow 2', after: '—' }]);
   });
 
+  test('should show nested settings one attribute at a time, and lists of rates with names', () => {
+    const changes = describeAuditChanges(
+      { fuelLPerHour: { reel_mower: 4, rotary_mower: 6 }, crewRates: [] },
+      { fuelLPerHour: { reel_mower: 4.5, rotary_mower: 6 }, crewRates: [{ crewId: 2, ratePerHour: 52.5 }] },
+      names,
+    );
+    expect(changes).toEqual([
+      { attribute: 'fuelLPerHour.reel_mower', label: 'Fuel per machine hour (L) · Reel mower', before: '4', after: '4.5' },
+      { attribute: 'crewRates', label: 'Crew rates per hour', before: '—', after: 'Crew B 52.5' },
+    ]);
+    expect([...auditReferences([{ before: null, after: { crewRates: [{ crewId: 2, ratePerHour: 1 }] } }]).crew]).toEqual([2]);
+  });
+
   test('should name attributes and kinds in words', () => {
     expect(auditAttributeLabel('hocMm')).toBe('Height of cut (mm)');
     expect(auditAttributeLabel('expectedReopenAt')).toBe('Expected reopening');

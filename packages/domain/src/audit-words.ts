@@ -60,10 +60,21 @@ const ATTRIBUTE_WORDS: Readonly<Record<string, string>> = {
   lat: 'Latitude',
   lng: 'Longitude',
   geometry: 'Outline',
+  labourRatePerHour: 'Labour rate per hour',
+  crewRates: 'Crew rates per hour',
+  fuelPricePerL: 'Fuel price per L',
+  fuelLPerHour: 'Fuel per machine hour (L)',
+  waterPricePerM3: 'Water price per m³',
+  fertiliserPricePerKgN: 'Fertiliser price per kg N',
+  seedPricePerKg: 'Seed price per kg',
+  paintPricePerL: 'Paint concentrate price per L',
+  colourantPricePerL: 'Colourant price per L',
 };
 
 /** An attribute's name in words: a known label, else camelCase split ("expectedReopenAt" → "Expected reopen at"). */
 export function auditAttributeLabel(key: string): string {
+  const dot = key.indexOf('.');
+  if (dot > 0) return `${auditAttributeLabel(key.slice(0, dot))} · ${auditAttributeLabel(key.slice(dot + 1))}`;
   const known = ATTRIBUTE_WORDS[key];
   if (known) return known;
   const ref = AUDIT_REFERENCE_KEYS[key];
@@ -105,12 +116,23 @@ function plainValue(v: unknown): string {
   if (typeof v === 'number') return Number.isInteger(v) ? String(v) : String(Math.round(v * 100) / 100);
   if (typeof v === 'string') return ISO_INSTANT.test(v) ? `${v.slice(0, 10)} ${v.slice(11, 16)} UTC` : v;
   if (Array.isArray(v)) return v.length ? v.map(plainValue).join(', ') : '—';
+  if (typeof v === 'object' && !Array.isArray(v)) return objectText(v as Record<string, unknown>, {});
   const text = JSON.stringify(v);
+  return text.length > 120 ? `${text.slice(0, 117)}…` : text;
+}
+
+/** A small object in words: its values in order, ids named ("North Crew 52.5"). */
+function objectText(o: Record<string, unknown>, names: AuditNames): string {
+  const text = Object.entries(o)
+    .map(([k, v]) => auditValueText(k, v, names))
+    .join(' ');
   return text.length > 120 ? `${text.slice(0, 117)}…` : text;
 }
 
 /** One attribute's value in words, with ids named and the trade's own words for levels and tasks. */
 export function auditValueText(key: string, value: unknown, names: AuditNames = {}): string {
+  if (key.includes('.')) return auditValueText(key.slice(key.lastIndexOf('.') + 1), value, names);
+  if (Array.isArray(value) && value.some(isPlainObject)) return value.map((v) => (isPlainObject(v) ? objectText(v, names) : auditValueText('', v, names))).join(', ');
   const ref = AUDIT_REFERENCE_KEYS[key];
   if (ref) {
     if (value === null || value === undefined) return '—';
@@ -126,8 +148,8 @@ export function auditValueText(key: string, value: unknown, names: AuditNames = 
  * creation lists what was set, a removal what was there (both without empty values).
  */
 export function describeAuditChanges(before: Record<string, unknown> | null, after: Record<string, unknown> | null, names: AuditNames = {}): AuditChange[] {
-  const b = before ?? {};
-  const a = after ?? {};
+  const b = flatten(before ?? {});
+  const a = flatten(after ?? {});
   const keys = [...new Set([...Object.keys(b), ...Object.keys(a)])].filter((k) => !SILENT_KEYS.has(k));
   const out: AuditChange[] = [];
   for (const key of keys) {
@@ -141,15 +163,33 @@ export function describeAuditChanges(before: Record<string, unknown> | null, aft
   return out;
 }
 
+function isPlainObject(v: unknown): v is Record<string, unknown> {
+  return typeof v === 'object' && v !== null && !Array.isArray(v);
+}
+
+/** Nested objects one level down as their own attributes (`fuelLPerHour.reel_mower`), so each change reads alone. */
+function flatten(row: Record<string, unknown>): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  for (const [key, value] of Object.entries(row)) {
+    if (isPlainObject(value) && key !== 'geometry') for (const [sub, v] of Object.entries(value)) out[`${key}.${sub}`] = v;
+    else out[key] = value;
+  }
+  return out;
+}
+
 /** The ids an entry refers to, by kind, so the API can look up their names in one query per kind. */
 export function auditReferences(rows: readonly { before: Record<string, unknown> | null; after: Record<string, unknown> | null }[]): Record<AuditRefKind, Set<number>> {
   const out: Record<AuditRefKind, Set<number>> = { user: new Set(), field: new Set(), site: new Set(), crew: new Set(), district: new Set(), equipment: new Set() };
   for (const row of rows) {
     for (const side of [row.before, row.after]) {
       if (!side) continue;
-      for (const [key, kind] of Object.entries(AUDIT_REFERENCE_KEYS)) {
-        const v = side[key];
-        for (const id of Array.isArray(v) ? v : [v]) if (typeof id === 'number') out[kind].add(id);
+      // Ids at the top, in lists (siteIds) and in lists of small objects (crewRates[].crewId).
+      const nested = Object.values(side).flatMap((v) => (Array.isArray(v) ? v.filter(isPlainObject) : []));
+      for (const obj of [side, ...nested]) {
+        for (const [key, kind] of Object.entries(AUDIT_REFERENCE_KEYS)) {
+          const v = obj[key];
+          for (const id of Array.isArray(v) ? v : [v]) if (typeof id === 'number') out[kind].add(id);
+        }
       }
     }
   }

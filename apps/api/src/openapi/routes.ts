@@ -43,6 +43,7 @@ import {
   signInSchema,
   updateCrewSchema,
   updateDepartmentSettingsSchema,
+  updateCostSettingsSchema,
   updateEquipmentSchema,
   updateFieldEventSchema,
   updateFieldSchema,
@@ -770,6 +771,33 @@ const settings: RouteDoc[] = [
   },
 ];
 
+const costsAnswer = shape({
+  costs: row('Every cost and rate, per SI unit: currency, labourRatePerHour, crewRates [{crewId, ratePerHour}], fuelPricePerL, fuelLPerHour by machine kind, waterPricePerM3, fertiliserPricePerKgN, seedPricePerKg, paintPricePerL, colourantPricePerL'),
+  source: str('setting once entered, default while the starting values apply'),
+  version: int(),
+});
+const costs: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/costs',
+    tag: 'Settings',
+    summary: 'The department’s costs and rates: labour per crew hour, fuel, water and product prices',
+    access: allowed('read', 'CostSettings'),
+    answers: [json(200, 'The costs and rates.', costsAnswer)],
+  },
+  {
+    method: 'patch',
+    path: '/api/costs',
+    tag: 'Settings',
+    summary: 'Set every cost and rate at once; audited',
+    description: `${VERSION_NOTE} Crew rates must name crews that exist.`,
+    access: allowed('update', 'CostSettings'),
+    body: updateCostSettingsSchema,
+    answers: [json(200, 'The costs after the change.', costsAnswer)],
+    errors: [409],
+  },
+];
+
 const importNote = 'Only the person who uploaded an import may commit or undo it.';
 const imports: RouteDoc[] = [
   {
@@ -1297,6 +1325,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...requests,
   ...standards,
   ...settings,
+  ...costs,
   ...imports,
   ...map,
   ...directory,
