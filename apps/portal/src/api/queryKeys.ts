@@ -31,6 +31,7 @@ export const queryKeys = {
   sites: (query: object) => ['sites', 'list', query] as const,
   site: (id: number) => ['sites', 'detail', id] as const,
   standards: () => ['standards'] as const,
+  costs: () => ['costs'] as const,
   stations: () => ['weather', 'stations'] as const,
   weatherDays: (stationId: number | null, from: string, to: string) => ['weather', 'days', stationId, from, to] as const,
   weekBoard: (districtId: number | null, weekStart: string) => ['week-plans', 'board', districtId, weekStart] as const,
@@ -46,7 +47,7 @@ export const queryKeys = {
 };
 
 /** What a write changes, by what was written. */
-export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request';
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request' | 'costs';
 
 /**
  * The answers a write makes stale: the resource itself and every answer that shows it (a
@@ -66,6 +67,7 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   devMail: [['dev-mail']],
   fieldCheck: [['fields'], ['map'], ['records']],
   calendarFeed: [['calendar-feeds']],
+  costs: [['costs']],
   // Scheduling a request books the field or adds a work order.
   request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders']],
 };

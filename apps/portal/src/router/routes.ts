@@ -143,6 +143,12 @@ export const routes: RouteRecordRaw[] = [
         meta: { can: ['read', 'Standards'], title: 'Standards' },
       },
       {
+        path: 'costs',
+        name: 'costs',
+        component: () => import('../views/CostsView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'CostSettings'], title: 'Costs and rates' },
+      },
+      {
         path: 'map',
         name: 'map',
         component: () => import('../views/MapView.vue'),

@@ -2,7 +2,7 @@ import type { Action, AppAbility, Role, SubjectName } from '@swardwise/domain';
 
 export interface NavItem {
   key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields' | 'standards' | 'map' | 'imports' | 'crews' | 'equipment' | 'weather'
-    | 'week' | 'records' | 'requests';
+    | 'week' | 'records' | 'requests' | 'costs';
   label: string;
   to: string;
   roles: Role[];
@@ -26,6 +26,7 @@ const NAV_ITEMS: NavItem[] = [
   { key: 'equipment', label: 'Equipment', to: '/equipment', roles: ['admin', 'head', 'foreman'], can: ['read', 'Equipment'] },
   { key: 'weather', label: 'Weather', to: '/weather', roles: ['admin', 'head', 'foreman'], can: ['read', 'Weather'] },
   { key: 'standards', label: 'Standards', to: '/standards', roles: ['admin', 'head'], can: ['read', 'Standards'] },
+  { key: 'costs', label: 'Costs and rates', to: '/costs', roles: ['admin', 'head', 'foreman'], can: ['read', 'CostSettings'] },
   { key: 'week', label: 'Week plan', to: '/week', roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'] },
   { key: 'records', label: 'Records', to: '/records', roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'] },
   { key: 'imports', label: 'Imports', to: '/imports', roles: ['admin', 'head', 'foreman'], can: ['create', 'Import'] },
