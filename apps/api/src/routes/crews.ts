@@ -5,8 +5,8 @@ import { createCrewSchema, createEquipmentSchema, idSchema, updateCrewSchema, up
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { createCrew, deleteCrew, listCrews, updateCrew } from '../services/crews.ts';
-import { createEquipment, deleteEquipment, listEquipment, updateEquipment } from '../services/equipment.ts';
+import { createCrew, crewRow, deleteCrew, listCrews, updateCrew } from '../services/crews.ts';
+import { createEquipment, deleteEquipment, getRow as equipmentRow, listEquipment, updateEquipment } from '../services/equipment.ts';
 import { writeRoutes } from './write-routes.ts';
 
 export const districtQuery = z.object({ districtId: idSchema.optional() });
@@ -18,6 +18,7 @@ export function crewsRouter({ db }: AppDeps): Router {
     res.json({ items: await listCrews(ctxOf(db, req), parse(districtQuery, req.query, 'query')) });
   });
   writeRoutes(router, db, '/crews', 'crew', {
+    guard: { subject: 'Crew', resource: 'crew', row: crewRow },
     create: { body: createCrewSchema, run: createCrew },
     update: { body: updateCrewSchema, run: updateCrew },
     remove: deleteCrew,
@@ -27,6 +28,7 @@ export function crewsRouter({ db }: AppDeps): Router {
     res.json({ items: await listEquipment(ctxOf(db, req), parse(districtQuery, req.query, 'query')) });
   });
   writeRoutes(router, db, '/equipment', 'equipment', {
+    guard: { subject: 'Equipment', resource: 'equipment', row: equipmentRow },
     create: { body: createEquipmentSchema, run: createEquipment },
     update: { body: updateEquipmentSchema, run: updateEquipment },
     remove: deleteEquipment,

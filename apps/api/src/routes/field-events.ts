@@ -5,7 +5,7 @@ import { addDaysIso, createFieldEventSchema, idSchema, isoDateSchema as isoDate,
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { createFieldEvent, deleteFieldEvent, listFieldEvents, updateFieldEvent } from '../services/field-events.ts';
+import { createFieldEvent, deleteFieldEvent, getRow as fieldEventRow, listFieldEvents, updateFieldEvent } from '../services/field-events.ts';
 import { writeRoutes } from './write-routes.ts';
 
 /** Without dates: the coming three months, what a season's bookings list needs at a glance. */
@@ -36,6 +36,7 @@ export function fieldEventsRouter({ db }: AppDeps): Router {
     res.json({ items: await listFieldEvents(ctx, parse(listQuery(ctx.clock.today()), req.query, 'query')) });
   });
   writeRoutes(router, db, '/', 'event', {
+    guard: { subject: 'FieldEvent', resource: 'field_event', row: fieldEventRow },
     create: { body: createFieldEventSchema, run: createFieldEvent },
     update: { body: updateFieldEventSchema, run: updateFieldEvent },
     remove: deleteFieldEvent,

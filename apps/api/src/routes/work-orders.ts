@@ -4,7 +4,7 @@ import { addDaysIso, createWorkOrderSchema, idSchema, isoDateSchema, updateWorkO
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { createWorkOrder, deleteWorkOrder, listWorkOrders, updateWorkOrder, type WriteDeps } from '../services/work-orders.ts';
+import { createWorkOrder, deleteWorkOrder, listWorkOrders, updateWorkOrder, storedWorkOrder, type WriteDeps } from '../services/work-orders.ts';
 import { writeRoutes } from './write-routes.ts';
 
 /** Without dates: the department's today and the six days after it. */
@@ -32,6 +32,7 @@ export function workOrdersRouter(deps: AppDeps): Router {
     res.json({ items: await listWorkOrders(ctx, parse(querySchema(ctx.clock.today()), req.query, 'query')) });
   });
   writeRoutes(router, db, '/', null, {
+    guard: { subject: 'WorkOrder', resource: 'work_order', row: storedWorkOrder },
     create: { body: createWorkOrderSchema, run: (ctx, input) => createWorkOrder(ctx, input, writeDeps(deps)) },
     update: { body: updateWorkOrderSchema, run: (ctx, id, input) => updateWorkOrder(ctx, id, input, writeDeps(deps)) },
     remove: (ctx, id, version) => deleteWorkOrder(ctx, id, version, writeDeps(deps)),

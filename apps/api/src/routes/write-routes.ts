@@ -1,16 +1,29 @@
 /** The write routes of a resource people edit with versions, mounted the same way for each. */
 import type { Request, Router } from 'express';
 import { z } from 'zod';
-import { idParamSchema, versionSchema } from '@swardwise/domain';
+import { idParamSchema, versionSchema, type NotFoundResource, type ScopedRow, type SubjectName } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import type { Ctx } from '../services/context.ts';
+import { authorize, type Ctx } from '../services/context.ts';
+import { writable } from '../services/versioned.ts';
 
 /** `?version=` of a delete: the version of the row the client read. */
 export const versionQuerySchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
 
+/**
+ * Who may write, checked before the body is read: the role for a creation (its place is in the
+ * body, which the service checks again), the role and the row's district, site and crew for a
+ * change or a removal (a missing row is 404, a row out of scope 403, as the service answers).
+ */
+export interface WriteGuard {
+  subject: SubjectName;
+  resource: NotFoundResource;
+  row: (db: Db, id: number) => Promise<ScopedRow | undefined>;
+}
+
 export interface WriteOps<C extends z.ZodType, U extends z.ZodType> {
+  guard: WriteGuard;
   create?: { body: C; run: (ctx: Ctx, input: z.infer<C>, req: Request) => Promise<unknown> };
   update?: { body: U; run: (ctx: Ctx, id: number, input: z.infer<U>, req: Request) => Promise<unknown> };
   remove?: (ctx: Ctx, id: number, version: number, req: Request) => Promise<void>;
@@ -25,16 +38,20 @@ export function writeRoutes<C extends z.ZodType, U extends z.ZodType>(router: Ro
   const one = `${base.replace(/\/$/, '')}/:id`;
   const answer = (value: unknown) => (key ? { [key]: value } : value);
   const idOf = (req: Request) => parse(idParamSchema, req.params, 'params').id;
-  const { create, update, remove } = ops;
+  const { create, update, remove, guard } = ops;
+  const rowWritable = async (ctx: Ctx, action: 'update' | 'delete', id: number) => writable(ctx, action, guard.subject, guard.resource, id, await guard.row(db, id));
   if (create) {
     router.post(base, async (req, res) => {
-      res.status(201).json(answer(await create.run(ctxOf(db, req), parse(create.body, req.body, 'body'), req)));
+      const ctx = ctxOf(db, req);
+      authorize(ctx, 'create', guard.subject);
+      res.status(201).json(answer(await create.run(ctx, parse(create.body, req.body, 'body'), req)));
     });
   }
   if (update) {
     router.patch(one, async (req, res) => {
       const ctx = ctxOf(db, req);
       const id = idOf(req);
+      await rowWritable(ctx, 'update', id);
       res.json(answer(await update.run(ctx, id, parse(update.body, req.body, 'body'), req)));
     });
   }
@@ -42,7 +59,9 @@ export function writeRoutes<C extends z.ZodType, U extends z.ZodType>(router: Ro
     router.delete(one, async (req, res) => {
       const ctx = ctxOf(db, req);
       const id = idOf(req);
-      await remove(ctx, id, parse(versionQuerySchema, req.query, 'query').version, req);
+      const { version } = parse(versionQuerySchema, req.query, 'query');
+      await rowWritable(ctx, 'delete', id);
+      await remove(ctx, id, version, req);
       res.status(204).end();
     });
   }

@@ -32,7 +32,7 @@ export async function listCrews(ctx: Ctx, filter: { districtId?: number | undefi
   return rows.filter((row) => can(ctx, 'read', 'Crew', row));
 }
 
-async function crewRow(db: Ctx['db'], id: number) {
+export async function crewRow(db: Ctx['db'], id: number) {
   const [row] = await db.select().from(crews).where(eq(crews.id, id));
   return row;
 }

@@ -43,7 +43,7 @@ function withBladeCare<T extends { hourMeterH: number; sharpenIntervalH: number 
   return { ...row, hoursSinceSharpening: since, sharpeningDue: since != null && row.sharpenIntervalH != null && since >= row.sharpenIntervalH };
 }
 
-async function getRow(db: Ctx['db'], id: number) {
+export async function getRow(db: Ctx['db'], id: number) {
   const [row] = await select(db).where(eq(equipment.id, id));
   return row;
 }

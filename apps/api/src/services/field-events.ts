@@ -39,7 +39,7 @@ function select(db: Ctx['db']) {
   return db.select(columns).from(fieldEvents).innerJoin(fields, eq(fields.id, fieldEvents.fieldId)).innerJoin(sites, eq(sites.id, fieldEvents.siteId));
 }
 
-async function getRow(db: Ctx['db'], id: number) {
+export async function getRow(db: Ctx['db'], id: number) {
   const [row] = await select(db).where(eq(fieldEvents.id, id));
   return row;
 }

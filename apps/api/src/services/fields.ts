@@ -49,7 +49,7 @@ export function outlineFacts(geometry: Polygon) {
   return { areaM2: polygonAreaM2(geometry), longAxisDeg: longAxis(geometry).bearingDeg };
 }
 
-async function getFieldRow(db: Ctx['db'], id: number) {
+export async function getFieldRow(db: Ctx['db'], id: number) {
   const [row] = await db
     .select({ ...listColumns, geometry: fields.geometry })
     .from(fields)

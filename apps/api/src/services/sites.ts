@@ -43,7 +43,7 @@ function selectSites(db: Ctx['db']) {
     .leftJoin(fc, eq(fc.siteId, sites.id));
 }
 
-async function getSiteRow(db: Ctx['db'], id: number) {
+export async function getSiteRow(db: Ctx['db'], id: number) {
   const [row] = await selectSites(db).where(eq(sites.id, id));
   return row;
 }

@@ -209,6 +209,11 @@ export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, dep
   return { ...row, emailed };
 }
 
+/** One stored order, for the check of who may write it before its body is read. */
+export async function storedWorkOrder(db: Ctx['db'], id: number) {
+  return (await db.select().from(workOrders).where(eq(workOrders.id, id)))[0];
+}
+
 /**
  * Assign, move or re-time one order. The version must be the one the caller read (two
  * foremen on one order: the second gets a 409). Any change pins the order, so re-generating
