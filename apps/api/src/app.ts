@@ -88,6 +88,9 @@ export function createApp(
           // Map tiles load only from the one configured tile server (none by default).
           // blob: previews of the photos a crew has chosen but not yet sent.
           imgSrc: ["'self'", 'data:', ...tileOrigins(config.mapTileUrl), 'blob:'],
+          // No inline style, and no stylesheets from elsewhere: the portal's CSS is in its own
+          // files, and Vue, Element Plus and Leaflet set styles through the CSSOM, which CSP allows.
+          styleSrc: ["'self'"],
         },
       },
       strictTransportSecurity: config.cookieSecure,
