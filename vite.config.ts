@@ -37,6 +37,8 @@ export default defineConfig({
           root: './tests',
           include: ['api/**/*.test.ts'],
           environment: 'node',
+          // Server logs of every API test go to one folder, scanned for secrets after the run.
+          globalSetup: ['./support/log-scan.ts'],
           // Each file opens its own PGlite database (a few seconds); keep the two cores busy
           // without running more databases than there are cores.
           maxWorkers: 2,

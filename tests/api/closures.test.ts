@@ -67,6 +67,16 @@ describe('closures', () => {
     expect((await admin.post(`/api/fields/${id}/reopen`).send({ version: byHead.body.fieldVersion })).status).toBe(201);
   });
 
+  test('should show a crew lead the closure history of a field of his crew’s work, and not of another field', async () => {
+    const crew = await api.signIn('crew');
+    const { fields: f, crews } = api.fixture;
+    await giveWork(api.database.db, f.northLawn, crews.north, 1);
+    const own = await crew.get(`/api/fields/${f.northLawn}/closures`);
+    expect(own.status).toBe(200);
+    expect(own.body.closures.fieldId).toBe(f.northLawn);
+    expect((await crew.get(`/api/fields/${f.southBaseball}/closures`)).status).toBe(403);
+  });
+
   test('should answer 400 for a bad body and write nothing', async () => {
     const foreman = await api.signIn('foreman');
     const id = api.fixture.fields.northSoccer;

@@ -1,4 +1,6 @@
 /** A fresh API on its own in-memory PGlite, for one test file. */
+import fs from 'node:fs';
+import path from 'node:path';
 import { pino, type Logger } from 'pino';
 import supertest from 'supertest';
 import { afterAll, beforeAll } from 'vitest';
@@ -10,6 +12,7 @@ import { startMailSink, type MailSink } from '../../apps/api/src/mail/sink.ts';
 import type { BackgroundTasks } from '../../apps/api/src/services/background.ts';
 import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
 import { buildFixture, PASSWORD, type Fixture } from './fixture.ts';
+import { API_LOG_DIR, TEST_SESSION_SECRET } from './log-scan.ts';
 
 type App = ReturnType<typeof createApp>['app'];
 
@@ -42,14 +45,16 @@ export async function startTestApi(env: Record<string, string> = {}, options: { 
   const database = await openDatabase({ pgliteDir: 'memory://' });
   const fixture = await buildFixture(database.db);
   const mail = await startMailSink();
-  const silent = pino({ level: 'silent' });
+  // The whole run's server log, scanned for secrets when the API tests end (support/log-scan.ts).
+  fs.mkdirSync(API_LOG_DIR, { recursive: true });
+  const fileLog = pino({ level: 'info' }, pino.destination({ dest: path.join(API_LOG_DIR, `api-${process.pid}.log`), sync: true, append: true }));
   const baseConfig = loadConfig({ ...BASE_ENV, ...env });
   const clock = new DepartmentClock(database.db, baseConfig.departmentTimeZone, options.now);
   const makeApp: TestApi['makeApp'] = (overrides = {}, extra = {}) => {
     const config = loadConfig({ ...BASE_ENV, ...overrides });
-    const logger = extra.logger ?? silent;
+    const logger = extra.logger ?? fileLog;
     const mailer = extra.mailer ?? createMailer({ host: '127.0.0.1', port: mail.port, secure: false, ignoreTLS: true, from: config.mailFrom }, logger);
-    const { app, background } = createApp({ db: database.db, config, logger, sessionSecret: 'test-secret', mailer, mailSink: mail, clock });
+    const { app, background } = createApp({ db: database.db, config, logger, sessionSecret: TEST_SESSION_SECRET, mailer, mailSink: mail, clock });
     return { app, background };
   };
   const { app, background } = makeApp(env);

@@ -53,6 +53,11 @@ import { workReportsRouter } from './routes/work-reports.ts';
 import { DepartmentClock } from './services/clock.ts';
 
 export const COOKIE_NAME = 'swardwise.sid';
+/**
+ * Behind HTTPS the cookie takes the `__Host-` prefix: browsers then keep it only when it is
+ * Secure, for path / and without a Domain, so no sibling subdomain can set or shadow it.
+ */
+export const SECURE_COOKIE_NAME = '__Host-swardwise.sid';
 /** JSON bodies: a signed-in user's edits (field outlines) may be large; nobody else's need be. */
 const JSON_LIMIT_SIGNED_IN = '2mb';
 const JSON_LIMIT_ANONYMOUS = '16kb';
@@ -64,7 +69,8 @@ export function createApp(
   const mailer = deps.mailer ?? createMailer(null, deps.logger);
   const clock = deps.clock ?? new DepartmentClock(deps.db, deps.config.departmentTimeZone);
   const background = new BackgroundTasks(deps.logger);
-  const full: AppDeps = { ...deps, mailer, clock, background, config: { ...deps.config, cookieName: COOKIE_NAME } };
+  const cookieName = deps.config.cookieSecure ? SECURE_COOKIE_NAME : COOKIE_NAME;
+  const full: AppDeps = { ...deps, mailer, clock, background, config: { ...deps.config, cookieName } };
   const { db, config, logger } = full;
   const app = express();
   const store = new DrizzleSessionStore(db);
@@ -83,6 +89,9 @@ export function createApp(
           // Map tiles load only from the one configured tile server (none by default).
           // blob: previews of the photos a crew has chosen but not yet sent.
           imgSrc: ["'self'", 'data:', ...tileOrigins(config.mapTileUrl), 'blob:'],
+          // No inline style, and no stylesheets from elsewhere: the portal's CSS is in its own
+          // files, and Vue, Element Plus and Leaflet set styles through the CSSOM, which CSP allows.
+          styleSrc: ["'self'"],
         },
       },
       strictTransportSecurity: config.cookieSecure,
@@ -107,7 +116,7 @@ export function createApp(
   app.use(
     '/api',
     session({
-      name: COOKIE_NAME,
+      name: cookieName,
       secret: full.sessionSecret,
       store,
       resave: false,
@@ -143,7 +152,7 @@ export function createApp(
     await db.execute('select 1');
     res.json({ status: 'ok' });
   });
-  app.get('/api/openapi.json', serveOpenApi({ dev: devRoutes, cookieName: COOKIE_NAME }));
+  app.get('/api/openapi.json', serveOpenApi({ dev: devRoutes, cookieName }));
   // Public: what the sign-in page needs before anyone has signed in.
   app.get('/api/config', async (_req, res) => {
     res.json({ demo: await demoAnnouncement(db, config) });

@@ -1,3 +1,5 @@
+// Before any schema is made (see zod-jitless.ts).
+import './zod-jitless.ts';
 import '@fontsource/noto-sans/latin-400.css';
 import '@fontsource/noto-sans/latin-500.css';
 import '@fontsource/noto-sans/latin-600.css';

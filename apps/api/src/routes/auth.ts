@@ -88,7 +88,8 @@ export function authRouter({ db, config, mailer, background, clock }: AppDeps): 
     if (userId) await audit(req, 'sign_out', userId);
     req.session.destroy((err) => {
       if (err) return next(err);
-      res.clearCookie(config.cookieName, { path: '/' });
+      // The same attributes as the cookie had: a browser drops a `__Host-` cookie only for a Secure one.
+      res.clearCookie(config.cookieName, { path: '/', httpOnly: true, sameSite: 'lax', secure: config.cookieSecure });
       res.status(204).end();
     });
   });

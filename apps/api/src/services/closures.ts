@@ -33,6 +33,7 @@ import type { Mailer } from '../mail/mailer.ts';
 import { closureMail } from '../mail/messages.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
+import { fieldCrewIds } from './scope.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 import { notifyCrews, type WorkMoveNotice } from './work-orders.ts';
 import { auditRow, updateAtVersion, writable } from './versioned.ts';
@@ -88,6 +89,8 @@ async function fieldRow(db: Queryable, id: number) {
       statusNote: fields.statusNote,
       maintenanceLevel: fields.maintenanceLevel,
       version: fields.version,
+      // A crew lead reads the fields of his crew's work: the ability needs the crews.
+      crewIds: fieldCrewIds,
     })
     .from(fields)
     .innerJoin(sites, eq(sites.id, fields.siteId))
