@@ -3,14 +3,11 @@
  * scoped queries; the answers are written field by field from the contract, so nothing the
  * staff see (costs, internal closure notes, crews, staff names, districts) can slip in.
  */
-import fs from 'node:fs/promises';
-import path from 'node:path';
 import { and, asc, desc, eq, gte, inArray, isNull, ne, sql } from 'drizzle-orm';
 import {
   CLOSURE_REASON_PUBLIC,
   PARTNER_CAUTIONS,
   PARTNER_STATUS_HEADLINES,
-  appError,
   errors,
   levelStandard,
   mowingDueBy,
@@ -31,6 +28,7 @@ import type { Queryable } from '../db/client.ts';
 import { fieldChecks, fieldClosures, fieldEvents, fields, sites, workOrders, workPhotos } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { siteScope } from './scope.ts';
+import { storedPhotoPath } from './work-photos.ts';
 import { loadStandards } from './standards.ts';
 
 /** Work that is still to happen: what "next" means. */
@@ -237,11 +235,5 @@ export async function partnerPhotoFile(ctx: Ctx, fieldId: number, photoId: numbe
         .where(and(eq(workPhotos.id, photoId), eq(workPhotos.workOrderId, check.workOrderId)))
     : [];
   if (!photo) throw errors.notFound('work_photo', photoId);
-  const file = path.join(uploadsDir, path.basename(photo.fileName));
-  try {
-    await fs.access(file);
-  } catch {
-    throw appError('work_photo/file_missing', 'The photo’s file is missing from the server’s uploads folder');
-  }
-  return { file, mime: photo.mime };
+  return { file: await storedPhotoPath(uploadsDir, photo.fileName), mime: photo.mime };
 }

@@ -7,9 +7,7 @@
  * is done, or when the foreman closes it. Every step is audited, and e-mailed after the
  * commit: filed and replied to the district's foremen, the rest to the partner who filed it.
  */
-import { createHash, randomUUID } from 'node:crypto';
-import fs from 'node:fs/promises';
-import path from 'node:path';
+import { randomUUID } from 'node:crypto';
 import { and, asc, count, desc, eq, or, sql, type SQL } from 'drizzle-orm';
 import {
   addDaysIso,
@@ -44,7 +42,7 @@ import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { placeScope } from './scope.ts';
 import { auditRow, updateAtVersion } from './versioned.ts';
-import { PHOTO_MAX_BYTES, readImage } from './work-photos.ts';
+import { PHOTO_MAX_BYTES, photoFileName, storePhoto, storedPhotoPath } from './work-photos.ts';
 
 export { PHOTO_MAX_BYTES as REQUEST_PHOTO_MAX_BYTES };
 /** Enough to show a wet patch or a broken sprinkler head from a few sides. */
@@ -417,26 +415,17 @@ function tell(ctx: Ctx, deps: RequestDeps, row: NonNullable<Row>, step: RequestS
 export async function addRequestPhoto(ctx: Ctx, id: number, buffer: Buffer, uploadsDir: string): Promise<FieldRequestPhotoAnswer<Date>> {
   const row = changeable(ctx, 'update', id, await rowOf(ctx.db, id));
   mustBe(row, ['requested', 'scheduled'], 'given photos');
-  const [{ n } = { n: 0 }] = await ctx.db.select({ n: count() }).from(fieldRequestPhotos).where(eq(fieldRequestPhotos.requestId, id));
-  if (n >= PHOTOS_PER_REQUEST) throw appError('request_photo/too_many', `A request keeps at most ${PHOTOS_PER_REQUEST} photos; this one has ${n}`);
-  const image = await readImage(buffer, 'request_photo');
-  const fileName = `rq${id}-${createHash('sha256').update(randomUUID()).digest('hex').slice(0, 24)}.jpg`;
-  await fs.mkdir(uploadsDir, { recursive: true });
-  const file = path.join(uploadsDir, fileName);
-  await fs.writeFile(file, image.data);
-  try {
-    return await (ctx.db as Db).transaction(async (tx) => {
-      const [photo] = await tx
-        .insert(fieldRequestPhotos)
-        .values({ requestId: id, fileName, mime: 'image/jpeg', width: image.info.width, height: image.info.height, bytes: image.data.length, createdBy: ctx.actor.id })
-        .returning();
-      await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_request_photo', entityId: photo!.id, districtId: row.districtId, before: null, after: photo! });
-      return { photo: { id: photo!.id, width: photo!.width, height: photo!.height, bytes: photo!.bytes, createdAt: photo!.createdAt, url: photoUrl(id, photo!.id) } };
-    });
-  } catch (err) {
-    await fs.rm(file, { force: true });
-    throw err;
-  }
+  const fileName = photoFileName(`rq${id}`, randomUUID());
+  const { row: photo } = await storePhoto(ctx, uploadsDir, fileName, buffer, {
+    find: async (db) => (await db.select().from(fieldRequestPhotos).where(and(eq(fieldRequestPhotos.requestId, id), eq(fieldRequestPhotos.fileName, fileName))))[0],
+    count: async () => (await ctx.db.select({ n: count() }).from(fieldRequestPhotos).where(eq(fieldRequestPhotos.requestId, id)))[0]?.n ?? 0,
+    limit: PHOTOS_PER_REQUEST,
+    tooMany: (n) => `A request keeps at most ${PHOTOS_PER_REQUEST} photos; this one has ${n}`,
+    insert: async (tx, image) => (await tx.insert(fieldRequestPhotos).values({ requestId: id, fileName, mime: 'image/jpeg', ...image, createdBy: ctx.actor.id }).returning())[0],
+    audit: (tx, p) => writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_request_photo', entityId: p.id, districtId: row.districtId, before: null, after: p }),
+    code: 'request_photo',
+  });
+  return { photo: { id: photo.id, width: photo.width, height: photo.height, bytes: photo.bytes, createdAt: photo.createdAt, url: photoUrl(id, photo.id) } };
 }
 
 export async function requestPhotoFile(ctx: Ctx, id: number, photoId: number, uploadsDir: string) {
@@ -446,11 +435,5 @@ export async function requestPhotoFile(ctx: Ctx, id: number, photoId: number, up
     .from(fieldRequestPhotos)
     .where(and(eq(fieldRequestPhotos.id, photoId), eq(fieldRequestPhotos.requestId, id)));
   if (!photo) throw errors.notFound('request_photo', photoId);
-  const file = path.join(uploadsDir, path.basename(photo.fileName));
-  try {
-    await fs.access(file);
-  } catch {
-    throw appError('request_photo/file_missing', 'The photo’s file is missing from the server’s uploads folder');
-  }
-  return { file, mime: photo.mime };
+  return { file: await storedPhotoPath(uploadsDir, photo.fileName, 'request_photo'), mime: photo.mime };
 }
