@@ -198,6 +198,30 @@ describe('requests', () => {
     expect((await partner.get(`/api/requests/${filed.id}`)).body.request.state).toBe('done');
   });
 
+  test('should schedule a done request again when its work order is reopened, and tell the partner', async () => {
+    const partner = await api.signIn('partner');
+    const foreman = await api.signIn('foreman');
+    const filed = (await partner.post('/api/requests').send(wet({ kind: 'damaged_turf', description: 'Worn strip by the bench' }))).body.request;
+    const res = await foreman.post(`/api/requests/${filed.id}/schedule`).send({ version: 1, work: { task: 'overseed', plannedDate: '2026-05-26', plannedHours: 1, crewId: api.fixture.crews.north } });
+    const orderId = res.body.request.workOrderId as number;
+    expect((await (await api.signIn('crew')).post(`/api/work-orders/${orderId}/reports`).send({ status: 'done', actualHours: 1 })).status).toBe(201);
+    expect((await requestRow(filed.id)).state).toBe('done');
+
+    const reopened = await foreman.post(`/api/work-orders/${orderId}/reopen`).send({ reason: 'Seed washed out' });
+    expect(reopened.status).toBe(200);
+    const row = await requestRow(filed.id);
+    expect(row).toMatchObject({ state: 'scheduled', closedAt: null, workOrderId: orderId });
+    expect((await partner.get(`/api/requests/${filed.id}`)).body.request.state).toBe('scheduled');
+    const mail = await api.mail.waitFor((m) => m.to.includes(api.fixture.users.partner.email) && /Scheduled: your request/.test(m.subject) && m.text.includes('reopened'));
+    expect(mail.text).toContain(`/requests?open=${filed.id}`);
+    const audit = await api.database.db.select().from(auditLog).where(and(eq(auditLog.entity, 'field_request'), eq(auditLog.entityId, filed.id)));
+    expect(audit.map((a) => (a.after as { state: string }).state)).toEqual(['requested', 'scheduled', 'done', 'scheduled']);
+
+    // Logged done again, it is done again.
+    expect((await (await api.signIn('crew')).post(`/api/work-orders/${orderId}/reports`).send({ status: 'done', actualHours: 1 })).status).toBe(201);
+    expect((await requestRow(filed.id)).state).toBe('done');
+  });
+
   test('should decline with the reason the partner reads, and let the foreman close a request', async () => {
     const partner = await api.signIn('partner');
     const foreman = await api.signIn('foreman');

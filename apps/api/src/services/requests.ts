@@ -358,12 +358,7 @@ export async function closeRequest(ctx: Ctx, deps: RequestDeps, id: number, inpu
  * it; the request's own abilities are not his, the consequence is the department's.
  */
 export async function finishRequestsOf(ctx: Ctx, deps: RequestDeps, orderId: number): Promise<number[]> {
-  const [order] = await ctx.db.select({ id: workOrders.id, status: workOrders.status, details: workOrders.details }).from(workOrders).where(eq(workOrders.id, orderId));
-  if (!order || order.status !== 'done') return [];
-  const eventId = Number(order.details?.eventId);
-  const links: SQL[] = [eq(fieldRequests.workOrderId, orderId)];
-  if (Number.isInteger(eventId) && eventId > 0) links.push(eq(fieldRequests.eventId, eventId));
-  const candidates = await ctx.db.select({ id: fieldRequests.id }).from(fieldRequests).where(and(eq(fieldRequests.state, 'scheduled'), or(...links)));
+  const candidates = await requestsOfOrder(ctx.db, orderId, 'done', 'scheduled');
   const done: NonNullable<Row>[] = [];
   for (const { id } of candidates) {
     const after = await (ctx.db as Db).transaction(async (tx) => {
@@ -380,6 +375,41 @@ export async function finishRequestsOf(ctx: Ctx, deps: RequestDeps, orderId: num
   }
   for (const row of done) tell(ctx, deps, row, 'done', 'The work is done.');
   return done.map((r) => r.id);
+}
+
+/** The requests in `state` that order `orderId` was made for (its own, or its event's), when the order is `orderStatus`. */
+async function requestsOfOrder(db: Queryable, orderId: number, orderStatus: 'done' | 'open', state: RequestState) {
+  const [order] = await db.select({ id: workOrders.id, status: workOrders.status, details: workOrders.details }).from(workOrders).where(eq(workOrders.id, orderId));
+  if (!order) return [];
+  const finished = order.status === 'done' || order.status === 'skipped';
+  if (orderStatus === 'done' ? order.status !== 'done' : finished) return [];
+  const eventId = Number(order.details?.eventId);
+  const links: SQL[] = [eq(fieldRequests.workOrderId, orderId)];
+  if (Number.isInteger(eventId) && eventId > 0) links.push(eq(fieldRequests.eventId, eventId));
+  return db.select({ id: fieldRequests.id }).from(fieldRequests).where(and(eq(fieldRequests.state, state), or(...links)));
+}
+
+/**
+ * After a work order is reopened: a request it had finished is scheduled again, since its work
+ * is open once more, and the partner who filed it is told. Runs as whoever reopened the order,
+ * as `finishRequestsOf` does.
+ */
+export async function reopenRequestsOf(ctx: Ctx, deps: RequestDeps, orderId: number): Promise<number[]> {
+  const candidates = await requestsOfOrder(ctx.db, orderId, 'open', 'done');
+  const again: NonNullable<Row>[] = [];
+  for (const { id } of candidates) {
+    const after = await (ctx.db as Db).transaction(async (tx) => {
+      const before = await rowOf(tx, id);
+      if (!before || before.state !== 'done') return null;
+      await tx.update(fieldRequests).set({ state: 'scheduled', closedAt: null, version: sql`${fieldRequests.version} + 1`, updatedAt: new Date() }).where(eq(fieldRequests.id, id));
+      const after = (await rowOf(tx, id))!;
+      await auditRow(ctx, tx, 'field_request', before, after);
+      return after;
+    });
+    if (after) again.push(after);
+  }
+  for (const row of again) tell(ctx, deps, row, 'scheduled', 'The work was reopened: the request is scheduled again until it is done.');
+  return again.map((r) => r.id);
 }
 
 /** The people a step is e-mailed to: the district's foremen for a new request or a reply, else the partner who filed it. */
