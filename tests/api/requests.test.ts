@@ -126,6 +126,31 @@ describe('requests', () => {
     expect((await requestRow(filed.id)).startTime).toBe('19:00');
   });
 
+  test('should let only the partner who filed change the day, layout and words, and not once it is scheduled', async () => {
+    const partner = await api.signIn('partner');
+    const foreman = await api.signIn('foreman');
+    const mate = await api.signInAs(colleague.email);
+    const filed = (await partner.post('/api/requests').send(game({ description: 'Senior night' }))).body.request;
+    // Own request while requested: day, layout and words change.
+    const own = await partner.patch(`/api/requests/${filed.id}`).send({ version: 1, gameOn: '2026-05-29', layout: 'football', description: 'Senior night, moved a day' });
+    expect(own.status).toBe(200);
+    expect(own.body.request).toMatchObject({ gameOn: '2026-05-29', description: 'Senior night, moved a day', state: 'requested', version: 2 });
+    // A colleague at the same school, and the foreman, may not rewrite it.
+    const other = await mate.patch(`/api/requests/${filed.id}`).send({ version: 2, description: 'Changed by a colleague' });
+    expect(other.status).toBe(403);
+    const boss = await foreman.patch(`/api/requests/${filed.id}`).send({ version: 2, description: 'Changed by the foreman' });
+    expect(boss.status).toBe(403);
+    expect(boss.body.error.message).toContain('Only the partner who filed');
+    expect((await requestRow(filed.id)).description).toBe('Senior night, moved a day');
+    // Once scheduled, it is fixed: a clear 4xx and nothing changes.
+    expect((await foreman.post(`/api/requests/${filed.id}/schedule`).send({ version: 2 })).status).toBe(200);
+    const late = await partner.patch(`/api/requests/${filed.id}`).send({ version: 3, description: 'Too late' });
+    expect(late.status).toBeGreaterThanOrEqual(400);
+    expect(late.status).toBeLessThan(500);
+    expect(late.body.error.code).toBe('field_request/not_open');
+    expect((await requestRow(filed.id)).description).toBe('Senior night, moved a day');
+  });
+
   test('should e-mail the partner the foreman’s answer and the foreman the partner’s reply', async () => {
     const partner = await api.signIn('partner');
     const foreman = await api.signIn('foreman');

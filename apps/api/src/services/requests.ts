@@ -217,6 +217,8 @@ export async function createRequest(ctx: Ctx, deps: RequestDeps, input: CreateFi
 export async function updateRequest(ctx: Ctx, id: number, input: UpdateFieldRequestInput): Promise<FieldRequestRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = changeable(ctx, 'update', id, await rowOf(tx, id));
+    // The request is the partner's own words: the foreman answers, schedules or declines it, but does not rewrite it.
+    if (before.createdBy !== ctx.actor.id) throw errors.forbidden('Only the partner who filed a request can change it; answer it with a message instead');
     mustBe(before, ['requested'], 'changed once the foreman has decided it');
     const { version, ...changes } = input;
     const game = before.kind === 'game_lines';
