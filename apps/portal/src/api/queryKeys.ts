@@ -66,6 +66,6 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   devMail: [['dev-mail']],
   fieldCheck: [['fields'], ['map'], ['records']],
   calendarFeed: [['calendar-feeds']],
-  // Scheduling a request books the field or adds a work order.
-  request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders']],
+  // Scheduling a request books the field or adds a work order; the partner's pages list requests.
+  request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders'], ['partner']],
 };
