@@ -168,4 +168,37 @@ describe('partner view', () => {
     const list = await partner.get('/api/partner/fields');
     expect(list.body.sites[0].fields[0]).toMatchObject({ score: 72, checkedOn: addDaysIso(today(), -2), comingBookings: 2, nextMowing: { on: addDaysIso(today(), 3), basis: 'planned' } });
   });
+
+  test('should list the field’s requests beside the bookings with their state, the reason of a decline, and changes only on the partner’s own', async () => {
+    const { db } = api.database;
+    const id = api.fixture.fields.northSchoolFootball;
+    const partner = await api.signIn('partner');
+    const foreman = await api.signIn('foreman');
+    const colleague = await addUser(db, 'partnerMate', 'partner', { siteIds: [api.fixture.sites.northSchool] });
+    const mate = await api.signInAs(colleague.email);
+    const gameOn = addDaysIso(today(), 4);
+    const game = (await partner.post('/api/requests').send({ fieldId: id, kind: 'game_lines', gameOn, startTime: '17:30', layout: 'football', description: 'Junior varsity game' })).body.request;
+    const turf = (await partner.post('/api/requests').send({ fieldId: id, kind: 'damaged_turf', description: 'Goal mouth worn bare' })).body.request;
+    const wet = (await partner.post('/api/requests').send({ fieldId: id, kind: 'wet_area', description: 'Puddle by the gate' })).body.request;
+    const theirs = (await mate.post('/api/requests').send({ fieldId: id, kind: 'safety', description: 'Loose sprinkler cover' })).body.request;
+    const scheduled = await foreman.post(`/api/requests/${turf.id}/schedule`).send({ version: 1, work: { task: 'overseed', plannedDate: addDaysIso(today(), 2), plannedHours: 1, crewId: api.fixture.crews.north } });
+    expect(scheduled.status).toBe(200);
+    expect((await foreman.post(`/api/requests/${wet.id}/decline`).send({ version: 1, reason: 'Drains are on the spring list' })).status).toBe(200);
+
+    const body = (await partner.get(`/api/partner/fields/${id}`)).body as PartnerFieldAnswer;
+    const requests = body.agenda.filter((a) => a.type === 'request');
+    expect(requests.map((r) => r.id).sort((a, b) => a - b)).toEqual([game.id, turf.id, wet.id, theirs.id].sort((a, b) => a - b));
+    const byId = new Map(requests.map((r) => [r.id, r]));
+    expect(byId.get(game.id)).toEqual({ type: 'request', id: game.id, kind: 'game_lines', startsOn: gameOn, gameOn, startTime: '17:30', layout: 'football', description: 'Junior varsity game', state: 'requested', reason: '', mine: true, version: 1 });
+    expect(byId.get(turf.id)).toMatchObject({ state: 'scheduled', startsOn: today(), mine: true });
+    expect(byId.get(wet.id)).toMatchObject({ state: 'declined', reason: 'Drains are on the spring list' });
+    expect(byId.get(theirs.id)).toMatchObject({ state: 'requested', mine: false, version: null });
+    // By day: the filed-today requests come before the game four days ahead.
+    const days = body.agenda.map((a) => a.startsOn);
+    expect(days).toEqual([...days].sort());
+
+    // Another school's partner sees none of it, and a staff view is not touched.
+    const other = await addUser(db, 'otherPartner3', 'partner', { siteIds: [api.fixture.sites.southPark] });
+    expect((await (await api.signInAs(other.email)).get(`/api/partner/fields/${id}`)).status).toBe(404);
+  });
 });

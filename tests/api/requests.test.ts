@@ -126,6 +126,31 @@ describe('requests', () => {
     expect((await requestRow(filed.id)).startTime).toBe('19:00');
   });
 
+  test('should let only the partner who filed change the day, layout and words, and not once it is scheduled', async () => {
+    const partner = await api.signIn('partner');
+    const foreman = await api.signIn('foreman');
+    const mate = await api.signInAs(colleague.email);
+    const filed = (await partner.post('/api/requests').send(game({ description: 'Senior night' }))).body.request;
+    // Own request while requested: day, layout and words change.
+    const own = await partner.patch(`/api/requests/${filed.id}`).send({ version: 1, gameOn: '2026-05-29', layout: 'football', description: 'Senior night, moved a day' });
+    expect(own.status).toBe(200);
+    expect(own.body.request).toMatchObject({ gameOn: '2026-05-29', description: 'Senior night, moved a day', state: 'requested', version: 2 });
+    // A colleague at the same school, and the foreman, may not rewrite it.
+    const other = await mate.patch(`/api/requests/${filed.id}`).send({ version: 2, description: 'Changed by a colleague' });
+    expect(other.status).toBe(403);
+    const boss = await foreman.patch(`/api/requests/${filed.id}`).send({ version: 2, description: 'Changed by the foreman' });
+    expect(boss.status).toBe(403);
+    expect(boss.body.error.message).toContain('Only the partner who filed');
+    expect((await requestRow(filed.id)).description).toBe('Senior night, moved a day');
+    // Once scheduled, it is fixed: a clear 4xx and nothing changes.
+    expect((await foreman.post(`/api/requests/${filed.id}/schedule`).send({ version: 2 })).status).toBe(200);
+    const late = await partner.patch(`/api/requests/${filed.id}`).send({ version: 3, description: 'Too late' });
+    expect(late.status).toBeGreaterThanOrEqual(400);
+    expect(late.status).toBeLessThan(500);
+    expect(late.body.error.code).toBe('field_request/not_open');
+    expect((await requestRow(filed.id)).description).toBe('Senior night, moved a day');
+  });
+
   test('should e-mail the partner the foreman’s answer and the foreman the partner’s reply', async () => {
     const partner = await api.signIn('partner');
     const foreman = await api.signIn('foreman');
@@ -196,6 +221,30 @@ describe('requests', () => {
     expect((await crew.post(`/api/work-orders/${orderId}/reports`).send({ status: 'done', actualHours: 2 })).status).toBe(201);
     expect((await requestRow(filed.id)).state).toBe('done');
     expect((await partner.get(`/api/requests/${filed.id}`)).body.request.state).toBe('done');
+  });
+
+  test('should schedule a done request again when its work order is reopened, and tell the partner', async () => {
+    const partner = await api.signIn('partner');
+    const foreman = await api.signIn('foreman');
+    const filed = (await partner.post('/api/requests').send(wet({ kind: 'damaged_turf', description: 'Worn strip by the bench' }))).body.request;
+    const res = await foreman.post(`/api/requests/${filed.id}/schedule`).send({ version: 1, work: { task: 'overseed', plannedDate: '2026-05-26', plannedHours: 1, crewId: api.fixture.crews.north } });
+    const orderId = res.body.request.workOrderId as number;
+    expect((await (await api.signIn('crew')).post(`/api/work-orders/${orderId}/reports`).send({ status: 'done', actualHours: 1 })).status).toBe(201);
+    expect((await requestRow(filed.id)).state).toBe('done');
+
+    const reopened = await foreman.post(`/api/work-orders/${orderId}/reopen`).send({ reason: 'Seed washed out' });
+    expect(reopened.status).toBe(200);
+    const row = await requestRow(filed.id);
+    expect(row).toMatchObject({ state: 'scheduled', closedAt: null, workOrderId: orderId });
+    expect((await partner.get(`/api/requests/${filed.id}`)).body.request.state).toBe('scheduled');
+    const mail = await api.mail.waitFor((m) => m.to.includes(api.fixture.users.partner.email) && /Scheduled: your request/.test(m.subject) && m.text.includes('reopened'));
+    expect(mail.text).toContain(`/requests?open=${filed.id}`);
+    const audit = await api.database.db.select().from(auditLog).where(and(eq(auditLog.entity, 'field_request'), eq(auditLog.entityId, filed.id)));
+    expect(audit.map((a) => (a.after as { state: string }).state)).toEqual(['requested', 'scheduled', 'done', 'scheduled']);
+
+    // Logged done again, it is done again.
+    expect((await (await api.signIn('crew')).post(`/api/work-orders/${orderId}/reports`).send({ status: 'done', actualHours: 1 })).status).toBe(201);
+    expect((await requestRow(filed.id)).state).toBe('done');
   });
 
   test('should decline with the reason the partner reads, and let the foreman close a request', async () => {

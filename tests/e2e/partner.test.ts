@@ -5,7 +5,7 @@
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
-import { browser, PHONE, shots, signIn, useBrowser } from './browser.ts';
+import { browser, checkA11y, PHONE, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -115,4 +115,50 @@ describe('the partner’s own view', () => {
       await context.close();
     }
   });
+
+  for (const [name, options] of [
+    ['desktop', { viewport: { width: 1366, height: 900 } }],
+    ['phone', PHONE],
+  ] as const) {
+    test(`should list the partner’s request on the field’s page with its state and let them change it while requested (${name})`, async () => {
+      const context = await browser.newContext(options);
+      try {
+        const page = await context.newPage();
+        await signIn(page, 'partner', '/my-fields');
+        const card = page.locator('[data-test="my-field"]').first();
+        await card.waitFor();
+        await card.locator('a').first().click();
+        await page.waitForURL((url) => /^\/my-fields\/\d+$/.test(url.pathname));
+        const fieldId = Number(new URL(page.url()).pathname.split('/').pop());
+        const filed = await page.evaluate(async (id) => {
+          const res = await fetch('/api/requests', { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ fieldId: id, kind: 'wet_area', description: 'Water stands by the north gate' }) });
+          return (await res.json()).request as { id: number };
+        }, fieldId);
+        await page.reload();
+        const row = page.locator('[data-type="request"]').filter({ has: page.locator(`[data-test="edit-request-${filed.id}"]`) });
+        await row.waitFor();
+        expect(await row.locator('[data-test="request-state"]').innerText()).toBe('Requested');
+        await page.waitForLoadState('networkidle');
+        await checkA11y(page);
+        expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(page.viewportSize()!.width);
+        await row.scrollIntoViewIfNeeded();
+        await page.screenshot({ path: path.join(shots, `partner-field-request-${name}.png`) });
+
+        await row.locator(`[data-test="edit-request-${filed.id}"]`).click();
+        const dialog = page.locator('[data-test="request-dialog"]');
+        await dialog.waitFor();
+        await page.waitForLoadState('networkidle');
+        await checkA11y(page);
+        await page.screenshot({ path: path.join(shots, `partner-request-edit-${name}.png`) });
+        const area = dialog.locator('textarea');
+        await area.fill('Water stands by the north gate after every rain');
+        await dialog.locator('[data-test="request-submit"]').click();
+        await dialog.waitFor({ state: 'hidden' });
+        await expect.poll(() => row.innerText()).toMatch(/Request · Wet area/);
+        await expect.poll(() => page.locator('[data-type="request"]').allInnerTexts()).toEqual(expect.arrayContaining([expect.stringMatching(/after every rain/)]));
+      } finally {
+        await context.close();
+      }
+    });
+  }
 });

@@ -9,7 +9,7 @@ import { parse } from '../http/validate.ts';
 import { addWorkPhoto, PHOTO_MAX_BYTES, photoFile } from '../services/work-photos.ts';
 import { logFieldCheck } from '../services/field-checks.ts';
 import { getWorkOrder, orderFor, reopenWork, reportWork } from '../services/work-reports.ts';
-import { finishRequestsOf } from '../services/requests.ts';
+import { finishRequestsOf, reopenRequestsOf } from '../services/requests.ts';
 
 // The photo and the phone's reference for it.
 const receivePhoto = receiveUpload({ field: 'photo', maxFileBytes: PHOTO_MAX_BYTES, maxFields: 1, code: 'work_photo', what: 'The photo' });
@@ -48,7 +48,10 @@ export function workReportsRouter({ db, config, mailer, background }: AppDeps): 
   router.post('/:id/reopen', async (req, res) => {
     const ctx = ctxOf(db, req);
     const { id } = parse(idParamSchema, req.params, 'params');
-    res.json(await reopenWork(ctx, id, parse(reopenSchema, req.body ?? {}, 'body')));
+    const answer = await reopenWork(ctx, id, parse(reopenSchema, req.body ?? {}, 'body'));
+    // A partner's request this order had finished is scheduled again.
+    await reopenRequestsOf(ctx, requestDeps, id);
+    res.json(answer);
   });
 
   router.post(

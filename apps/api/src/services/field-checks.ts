@@ -4,9 +4,6 @@
  * flags what needs doing; the check is stored in `field_checks`, with the days since the last
  * mowing on record, which the field's growth calibration reads.
  */
-import { createHash, randomUUID } from 'node:crypto';
-import fs from 'node:fs/promises';
-import path from 'node:path';
 import { and, asc, count, desc, eq, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import {
   appError,
@@ -34,7 +31,7 @@ import { authorize, type Ctx } from './context.ts';
 import { getField } from './fields.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 import { nearestStation, prepareStationWeather, stationsWithWeather, unbrokenRunAround } from './stations.ts';
-import { readImage, type PhotoUpload } from './work-photos.ts';
+import { photoFileName, storePhoto, storedPhotoPath, type PhotoUpload } from './work-photos.ts';
 import { orderFor, reportWork } from './work-reports.ts';
 
 /** Photos a check logged from the field page keeps (as many as a work order). */
@@ -198,42 +195,27 @@ export async function checkPhotoAllowed(ctx: Ctx, fieldId: number, checkId: numb
 export async function addFieldCheckPhoto(ctx: Ctx, fieldId: number, checkId: number, upload: PhotoUpload, uploadsDir: string): Promise<PhotoAnswer<Date>> {
   const field = await fieldForCheck(ctx, fieldId);
   await ownCheck(ctx, fieldId, checkId);
-  const fileName = upload.clientRef
-    ? `fc${checkId}-${createHash('sha256').update(upload.clientRef).digest('hex').slice(0, 24)}.jpg`
-    : `fc${checkId}-${randomUUID()}.jpg`;
-  const answer = (row: typeof fieldCheckPhotos.$inferSelect, duplicate: boolean): PhotoAnswer<Date> => ({
+  const fileName = photoFileName(`fc${checkId}`, upload.clientRef);
+  const sameFile = and(eq(fieldCheckPhotos.fieldCheckId, checkId), eq(fieldCheckPhotos.fileName, fileName));
+  const { row, duplicate } = await storePhoto(ctx, uploadsDir, fileName, upload.buffer, {
+    find: async (db) => (await db.select().from(fieldCheckPhotos).where(sameFile))[0],
+    count: async () => (await ctx.db.select({ n: count() }).from(fieldCheckPhotos).where(eq(fieldCheckPhotos.fieldCheckId, checkId)))[0]?.n ?? 0,
+    limit: PHOTOS_PER_CHECK,
+    tooMany: (n) => `A field check keeps at most ${PHOTOS_PER_CHECK} photos; this one has ${n}`,
+    insert: async (tx, image) =>
+      (
+        await tx
+          .insert(fieldCheckPhotos)
+          .values({ fieldCheckId: checkId, fileName, mime: 'image/jpeg', ...image, createdBy: ctx.actor.id })
+          .onConflictDoNothing({ target: [fieldCheckPhotos.fieldCheckId, fieldCheckPhotos.fileName] })
+          .returning()
+      )[0],
+    audit: (tx, row) => writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_check_photo', entityId: row.id, districtId: field.districtId, before: null, after: row }),
+  });
+  return {
     photo: { id: row.id, width: row.width, height: row.height, bytes: row.bytes, createdAt: row.createdAt, url: checkPhotoUrl(fieldId, checkId, row.id) },
     duplicate,
-  });
-  const sameFile = and(eq(fieldCheckPhotos.fieldCheckId, checkId), eq(fieldCheckPhotos.fileName, fileName));
-  const [earlier] = await ctx.db.select().from(fieldCheckPhotos).where(sameFile);
-  if (earlier) return answer(earlier, true);
-  const [{ n } = { n: 0 }] = await ctx.db.select({ n: count() }).from(fieldCheckPhotos).where(eq(fieldCheckPhotos.fieldCheckId, checkId));
-  if (n >= PHOTOS_PER_CHECK) throw appError('work_photo/too_many', `A field check keeps at most ${PHOTOS_PER_CHECK} photos; this one has ${n}`);
-
-  const image = await readImage(upload.buffer);
-  await fs.mkdir(uploadsDir, { recursive: true });
-  const file = path.join(uploadsDir, fileName);
-  await fs.writeFile(file, image.data);
-  try {
-    return await (ctx.db as Db).transaction(async (tx) => {
-      const [row] = await tx
-        .insert(fieldCheckPhotos)
-        .values({ fieldCheckId: checkId, fileName, mime: 'image/jpeg', width: image.info.width, height: image.info.height, bytes: image.data.length, createdBy: ctx.actor.id })
-        .onConflictDoNothing({ target: [fieldCheckPhotos.fieldCheckId, fieldCheckPhotos.fileName] })
-        .returning();
-      if (!row) {
-        const [first] = await tx.select().from(fieldCheckPhotos).where(sameFile);
-        return answer(first!, true);
-      }
-      await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_check_photo', entityId: row.id, districtId: field.districtId, before: null, after: row });
-      return answer(row, false);
-    });
-  } catch (err) {
-    const [kept] = await ctx.db.select({ id: fieldCheckPhotos.id }).from(fieldCheckPhotos).where(sameFile);
-    if (!kept) await fs.rm(file, { force: true });
-    throw err;
-  }
+  };
 }
 
 /** Where a field-page check's photo is, for a caller who may read the field's checks. */
@@ -246,13 +228,7 @@ export async function fieldCheckPhotoFile(ctx: Ctx, fieldId: number, checkId: nu
     .innerJoin(fieldChecks, eq(fieldChecks.id, fieldCheckPhotos.fieldCheckId))
     .where(and(eq(fieldCheckPhotos.id, photoId), eq(fieldCheckPhotos.fieldCheckId, checkId), eq(fieldChecks.fieldId, fieldId)));
   if (!photo) throw errors.notFound('work_photo', photoId);
-  const file = path.join(uploadsDir, path.basename(photo.fileName));
-  try {
-    await fs.access(file);
-  } catch {
-    throw appError('work_photo/file_missing', 'The photo’s file is missing from the server’s uploads folder');
-  }
-  return { file, mime: photo.mime };
+  return { file: await storedPhotoPath(uploadsDir, photo.fileName), mime: photo.mime };
 }
 
 /** Checks the calibration reads: the latest with a height and the days since the cut. */

@@ -3,14 +3,12 @@
  * scoped queries; the answers are written field by field from the contract, so nothing the
  * staff see (costs, internal closure notes, crews, staff names, districts) can slip in.
  */
-import fs from 'node:fs/promises';
-import path from 'node:path';
 import { and, asc, desc, eq, gte, inArray, isNull, ne, sql } from 'drizzle-orm';
 import {
   CLOSURE_REASON_PUBLIC,
   PARTNER_CAUTIONS,
   PARTNER_STATUS_HEADLINES,
-  appError,
+  addDaysIso,
   errors,
   levelStandard,
   mowingDueBy,
@@ -22,15 +20,18 @@ import {
   type PartnerFieldStatus,
   type PartnerFieldsAnswer,
   type PartnerFieldSummary,
+  type LineLayout,
   type PartnerNextWork,
+  type PartnerRequestItem,
   type PartnerSite,
   type Standards,
   type WorkTask,
 } from '@swardwise/domain';
 import type { Queryable } from '../db/client.ts';
-import { fieldChecks, fieldClosures, fieldEvents, fields, sites, workOrders, workPhotos } from '../db/schema/index.ts';
+import { fieldChecks, fieldClosures, fieldEvents, fieldRequests, fields, sites, workOrders, workPhotos } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { siteScope } from './scope.ts';
+import { storedPhotoPath } from './work-photos.ts';
 import { loadStandards } from './standards.ts';
 
 /** Work that is still to happen: what "next" means. */
@@ -204,6 +205,9 @@ export async function partnerFieldAnswer(ctx: Ctx, id: number): Promise<PartnerF
     const mine = b.createdBy === ctx.actor.id;
     return { type: 'booking', id: b.id, kind: b.kind, title: b.title, startsOn: b.startsOn, startTime: b.startTime, notes: mine ? b.notes : '', mine, version: mine ? b.version : null };
   });
+  agenda.push(...(await fieldRequestItems(ctx, f, today)));
+  // Bookings before requests on the same day; `sort` is stable, so each kind keeps its own order.
+  agenda.sort((a, b) => a.startsOn.localeCompare(b.startsOn) || (a.startTime ?? '').localeCompare(b.startTime ?? ''));
   const targetScore = levelStandard(f.maintenanceLevel as Level, standards).targetScore;
   return {
     today,
@@ -226,6 +230,55 @@ export async function partnerFieldAnswer(ctx: Ctx, id: number): Promise<PartnerF
   };
 }
 
+/** How long a closed (done or declined) request stays in the partner's list, in days. */
+const CLOSED_REQUEST_DAYS = 14;
+
+/**
+ * The field's requests the partner may read: a game request while its day lies ahead, any other
+ * while it is open or for two weeks after it was closed, so the partner sees how it ended.
+ */
+async function fieldRequestItems(ctx: Ctx, f: { id: number; siteId: number; districtId: number }, today: string): Promise<PartnerRequestItem[]> {
+  const rows = await ctx.db
+    .select({
+      id: fieldRequests.id,
+      kind: fieldRequests.kind,
+      gameOn: fieldRequests.gameOn,
+      startTime: fieldRequests.startTime,
+      layout: fieldRequests.layout,
+      description: fieldRequests.description,
+      state: fieldRequests.state,
+      reason: fieldRequests.reason,
+      createdBy: fieldRequests.createdBy,
+      createdAt: fieldRequests.createdAt,
+      closedAt: fieldRequests.closedAt,
+      version: fieldRequests.version,
+    })
+    .from(fieldRequests)
+    .where(eq(fieldRequests.fieldId, f.id))
+    .orderBy(asc(fieldRequests.createdAt), asc(fieldRequests.id));
+  const since = addDaysIso(today, -CLOSED_REQUEST_DAYS);
+  return rows
+    .filter((r) => can(ctx, 'read', 'Request', { siteId: f.siteId, districtId: f.districtId, createdBy: r.createdBy }))
+    .filter((r) => (r.gameOn ? r.gameOn >= today : r.state === 'requested' || r.state === 'scheduled' || (r.closedAt !== null && ctx.clock.dateOf(r.closedAt) >= since)))
+    .map((r) => {
+      const mine = r.createdBy === ctx.actor.id;
+      return {
+        type: 'request',
+        id: r.id,
+        kind: r.kind,
+        startsOn: r.gameOn ?? ctx.clock.dateOf(r.createdAt),
+        gameOn: r.gameOn,
+        startTime: r.startTime,
+        layout: r.layout as LineLayout | null,
+        description: r.description,
+        state: r.state,
+        reason: r.reason,
+        mine,
+        version: mine ? r.version : null,
+      };
+    });
+}
+
 /** A photo of the field's latest check, for a partner of the field's site; any other photo is "not found". */
 export async function partnerPhotoFile(ctx: Ctx, fieldId: number, photoId: number, uploadsDir: string) {
   const f = await partnerField(ctx, fieldId);
@@ -237,11 +290,5 @@ export async function partnerPhotoFile(ctx: Ctx, fieldId: number, photoId: numbe
         .where(and(eq(workPhotos.id, photoId), eq(workPhotos.workOrderId, check.workOrderId)))
     : [];
   if (!photo) throw errors.notFound('work_photo', photoId);
-  const file = path.join(uploadsDir, path.basename(photo.fileName));
-  try {
-    await fs.access(file);
-  } catch {
-    throw appError('work_photo/file_missing', 'The photo’s file is missing from the server’s uploads folder');
-  }
-  return { file, mime: photo.mime };
+  return { file: await storedPhotoPath(uploadsDir, photo.fileName), mime: photo.mime };
 }

@@ -7,9 +7,7 @@
  * is done, or when the foreman closes it. Every step is audited, and e-mailed after the
  * commit: filed and replied to the district's foremen, the rest to the partner who filed it.
  */
-import { createHash, randomUUID } from 'node:crypto';
-import fs from 'node:fs/promises';
-import path from 'node:path';
+import { randomUUID } from 'node:crypto';
 import { and, asc, count, desc, eq, or, sql, type SQL } from 'drizzle-orm';
 import {
   addDaysIso,
@@ -44,7 +42,7 @@ import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { placeScope } from './scope.ts';
 import { auditRow, updateAtVersion } from './versioned.ts';
-import { PHOTO_MAX_BYTES, readImage } from './work-photos.ts';
+import { PHOTO_MAX_BYTES, photoFileName, storePhoto, storedPhotoPath } from './work-photos.ts';
 
 export { PHOTO_MAX_BYTES as REQUEST_PHOTO_MAX_BYTES };
 /** Enough to show a wet patch or a broken sprinkler head from a few sides. */
@@ -219,6 +217,8 @@ export async function createRequest(ctx: Ctx, deps: RequestDeps, input: CreateFi
 export async function updateRequest(ctx: Ctx, id: number, input: UpdateFieldRequestInput): Promise<FieldRequestRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
     const before = changeable(ctx, 'update', id, await rowOf(tx, id));
+    // The request is the partner's own words: the foreman answers, schedules or declines it, but does not rewrite it.
+    if (before.createdBy !== ctx.actor.id) throw errors.forbidden('Only the partner who filed a request can change it; answer it with a message instead');
     mustBe(before, ['requested'], 'changed once the foreman has decided it');
     const { version, ...changes } = input;
     const game = before.kind === 'game_lines';
@@ -360,12 +360,7 @@ export async function closeRequest(ctx: Ctx, deps: RequestDeps, id: number, inpu
  * it; the request's own abilities are not his, the consequence is the department's.
  */
 export async function finishRequestsOf(ctx: Ctx, deps: RequestDeps, orderId: number): Promise<number[]> {
-  const [order] = await ctx.db.select({ id: workOrders.id, status: workOrders.status, details: workOrders.details }).from(workOrders).where(eq(workOrders.id, orderId));
-  if (!order || order.status !== 'done') return [];
-  const eventId = Number(order.details?.eventId);
-  const links: SQL[] = [eq(fieldRequests.workOrderId, orderId)];
-  if (Number.isInteger(eventId) && eventId > 0) links.push(eq(fieldRequests.eventId, eventId));
-  const candidates = await ctx.db.select({ id: fieldRequests.id }).from(fieldRequests).where(and(eq(fieldRequests.state, 'scheduled'), or(...links)));
+  const candidates = await requestsOfOrder(ctx.db, orderId, 'done', 'scheduled');
   const done: NonNullable<Row>[] = [];
   for (const { id } of candidates) {
     const after = await (ctx.db as Db).transaction(async (tx) => {
@@ -382,6 +377,41 @@ export async function finishRequestsOf(ctx: Ctx, deps: RequestDeps, orderId: num
   }
   for (const row of done) tell(ctx, deps, row, 'done', 'The work is done.');
   return done.map((r) => r.id);
+}
+
+/** The requests in `state` that order `orderId` was made for (its own, or its event's), when the order is `orderStatus`. */
+async function requestsOfOrder(db: Queryable, orderId: number, orderStatus: 'done' | 'open', state: RequestState) {
+  const [order] = await db.select({ id: workOrders.id, status: workOrders.status, details: workOrders.details }).from(workOrders).where(eq(workOrders.id, orderId));
+  if (!order) return [];
+  const finished = order.status === 'done' || order.status === 'skipped';
+  if (orderStatus === 'done' ? order.status !== 'done' : finished) return [];
+  const eventId = Number(order.details?.eventId);
+  const links: SQL[] = [eq(fieldRequests.workOrderId, orderId)];
+  if (Number.isInteger(eventId) && eventId > 0) links.push(eq(fieldRequests.eventId, eventId));
+  return db.select({ id: fieldRequests.id }).from(fieldRequests).where(and(eq(fieldRequests.state, state), or(...links)));
+}
+
+/**
+ * After a work order is reopened: a request it had finished is scheduled again, since its work
+ * is open once more, and the partner who filed it is told. Runs as whoever reopened the order,
+ * as `finishRequestsOf` does.
+ */
+export async function reopenRequestsOf(ctx: Ctx, deps: RequestDeps, orderId: number): Promise<number[]> {
+  const candidates = await requestsOfOrder(ctx.db, orderId, 'open', 'done');
+  const again: NonNullable<Row>[] = [];
+  for (const { id } of candidates) {
+    const after = await (ctx.db as Db).transaction(async (tx) => {
+      const before = await rowOf(tx, id);
+      if (!before || before.state !== 'done') return null;
+      await tx.update(fieldRequests).set({ state: 'scheduled', closedAt: null, version: sql`${fieldRequests.version} + 1`, updatedAt: new Date() }).where(eq(fieldRequests.id, id));
+      const after = (await rowOf(tx, id))!;
+      await auditRow(ctx, tx, 'field_request', before, after);
+      return after;
+    });
+    if (after) again.push(after);
+  }
+  for (const row of again) tell(ctx, deps, row, 'scheduled', 'The work was reopened: the request is scheduled again until it is done.');
+  return again.map((r) => r.id);
 }
 
 /** The people a step is e-mailed to: the district's foremen for a new request or a reply, else the partner who filed it. */
@@ -417,26 +447,17 @@ function tell(ctx: Ctx, deps: RequestDeps, row: NonNullable<Row>, step: RequestS
 export async function addRequestPhoto(ctx: Ctx, id: number, buffer: Buffer, uploadsDir: string): Promise<FieldRequestPhotoAnswer<Date>> {
   const row = changeable(ctx, 'update', id, await rowOf(ctx.db, id));
   mustBe(row, ['requested', 'scheduled'], 'given photos');
-  const [{ n } = { n: 0 }] = await ctx.db.select({ n: count() }).from(fieldRequestPhotos).where(eq(fieldRequestPhotos.requestId, id));
-  if (n >= PHOTOS_PER_REQUEST) throw appError('request_photo/too_many', `A request keeps at most ${PHOTOS_PER_REQUEST} photos; this one has ${n}`);
-  const image = await readImage(buffer, 'request_photo');
-  const fileName = `rq${id}-${createHash('sha256').update(randomUUID()).digest('hex').slice(0, 24)}.jpg`;
-  await fs.mkdir(uploadsDir, { recursive: true });
-  const file = path.join(uploadsDir, fileName);
-  await fs.writeFile(file, image.data);
-  try {
-    return await (ctx.db as Db).transaction(async (tx) => {
-      const [photo] = await tx
-        .insert(fieldRequestPhotos)
-        .values({ requestId: id, fileName, mime: 'image/jpeg', width: image.info.width, height: image.info.height, bytes: image.data.length, createdBy: ctx.actor.id })
-        .returning();
-      await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_request_photo', entityId: photo!.id, districtId: row.districtId, before: null, after: photo! });
-      return { photo: { id: photo!.id, width: photo!.width, height: photo!.height, bytes: photo!.bytes, createdAt: photo!.createdAt, url: photoUrl(id, photo!.id) } };
-    });
-  } catch (err) {
-    await fs.rm(file, { force: true });
-    throw err;
-  }
+  const fileName = photoFileName(`rq${id}`, randomUUID());
+  const { row: photo } = await storePhoto(ctx, uploadsDir, fileName, buffer, {
+    find: async (db) => (await db.select().from(fieldRequestPhotos).where(and(eq(fieldRequestPhotos.requestId, id), eq(fieldRequestPhotos.fileName, fileName))))[0],
+    count: async () => (await ctx.db.select({ n: count() }).from(fieldRequestPhotos).where(eq(fieldRequestPhotos.requestId, id)))[0]?.n ?? 0,
+    limit: PHOTOS_PER_REQUEST,
+    tooMany: (n) => `A request keeps at most ${PHOTOS_PER_REQUEST} photos; this one has ${n}`,
+    insert: async (tx, image) => (await tx.insert(fieldRequestPhotos).values({ requestId: id, fileName, mime: 'image/jpeg', ...image, createdBy: ctx.actor.id }).returning())[0],
+    audit: (tx, p) => writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_request_photo', entityId: p.id, districtId: row.districtId, before: null, after: p }),
+    code: 'request_photo',
+  });
+  return { photo: { id: photo.id, width: photo.width, height: photo.height, bytes: photo.bytes, createdAt: photo.createdAt, url: photoUrl(id, photo.id) } };
 }
 
 export async function requestPhotoFile(ctx: Ctx, id: number, photoId: number, uploadsDir: string) {
@@ -446,11 +467,5 @@ export async function requestPhotoFile(ctx: Ctx, id: number, photoId: number, up
     .from(fieldRequestPhotos)
     .where(and(eq(fieldRequestPhotos.id, photoId), eq(fieldRequestPhotos.requestId, id)));
   if (!photo) throw errors.notFound('request_photo', photoId);
-  const file = path.join(uploadsDir, path.basename(photo.fileName));
-  try {
-    await fs.access(file);
-  } catch {
-    throw appError('request_photo/file_missing', 'The photo’s file is missing from the server’s uploads folder');
-  }
-  return { file, mime: photo.mime };
+  return { file: await storedPhotoPath(uploadsDir, photo.fileName, 'request_photo'), mime: photo.mime };
 }

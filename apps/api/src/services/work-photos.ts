@@ -10,7 +10,7 @@ import path from 'node:path';
 import sharp from 'sharp';
 import { and, count, eq } from 'drizzle-orm';
 import { appError, errors, type PhotoAnswer } from '@swardwise/domain';
-import type { Db } from '../db/client.ts';
+import type { Db, Queryable } from '../db/client.ts';
 import { workPhotos } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import type { Ctx } from './context.ts';
@@ -65,44 +65,94 @@ export async function readImage(buffer: Buffer, code: 'work_photo' | 'request_ph
   }
 }
 
-export async function addWorkPhoto(ctx: Ctx, orderId: number, upload: PhotoUpload, uploadsDir: string): Promise<PhotoAnswer<Date>> {
-  const order = await orderFor(ctx, orderId, 'log');
-  // A stable name per (order, phone reference): a retried upload finds its first copy.
-  const fileName = upload.clientRef
-    ? `wo${orderId}-${createHash('sha256').update(upload.clientRef).digest('hex').slice(0, 24)}.jpg`
-    : `wo${orderId}-${randomUUID()}.jpg`;
-  const [earlier] = await ctx.db.select().from(workPhotos).where(and(eq(workPhotos.workOrderId, orderId), eq(workPhotos.fileName, fileName)));
-  if (earlier) return answer(orderId, earlier, true);
-  const [{ n } = { n: 0 }] = await ctx.db.select({ n: count() }).from(workPhotos).where(eq(workPhotos.workOrderId, orderId));
-  if (n >= PHOTOS_PER_ORDER) {
-    throw appError('work_photo/too_many', `A work order keeps at most ${PHOTOS_PER_ORDER} photos; this one has ${n}`);
-  }
+/** The columns every photo table shares, as a stored photo answers with them. */
+type StoredPhoto = { id: number; width: number; height: number; bytes: number; createdAt: Date };
 
-  const image = await readImage(upload.buffer);
+/** A file name from the phone's reference (stable, so a retried upload finds its first copy) or a random one. */
+export function photoFileName(prefix: string, clientRef: string | undefined): string {
+  return clientRef ? `${prefix}-${createHash('sha256').update(clientRef).digest('hex').slice(0, 24)}.jpg` : `${prefix}-${randomUUID()}.jpg`;
+}
+
+/**
+ * Stores an upload once: an earlier row with the same file name answers as a duplicate, the
+ * count is checked against `limit`, the image is re-encoded (`readImage`) and written, and the
+ * row inserted and audited in one transaction. On a failure the file is removed unless a row
+ * already holds that name (a retry of a stored photo).
+ */
+export async function storePhoto<R extends StoredPhoto>(
+  ctx: Ctx,
+  uploadsDir: string,
+  fileName: string,
+  buffer: Buffer,
+  how: {
+    /** The stored row with this file name, if any. */
+    find: (db: Queryable) => Promise<R | undefined>;
+    /** How many photos the owner keeps now. */
+    count: () => Promise<number>;
+    limit: number;
+    tooMany: (n: number) => string;
+    /** Inserts the row; undefined when the same upload arrived twice at once and the first one stored it. */
+    insert: (tx: Queryable, image: { width: number; height: number; bytes: number }) => Promise<R | undefined>;
+    audit: (tx: Queryable, row: R) => Promise<void>;
+    /** Names the errors, as `readImage` does. */
+    code?: 'work_photo' | 'request_photo';
+  },
+): Promise<{ row: R; duplicate: boolean }> {
+  const earlier = await how.find(ctx.db);
+  if (earlier) return { row: earlier, duplicate: true };
+  const n = await how.count();
+  const code = how.code ?? 'work_photo';
+  if (n >= how.limit) throw appError(`${code}/too_many`, how.tooMany(n));
+
+  const image = await readImage(buffer, code);
   await fs.mkdir(uploadsDir, { recursive: true });
   const file = path.join(uploadsDir, fileName);
   await fs.writeFile(file, image.data);
   try {
     return await (ctx.db as Db).transaction(async (tx) => {
-      const [row] = await tx
-        .insert(workPhotos)
-        .values({ workOrderId: orderId, fileName, mime: 'image/jpeg', width: image.info.width, height: image.info.height, bytes: image.data.length, createdBy: ctx.actor.id })
-        .onConflictDoNothing({ target: [workPhotos.workOrderId, workPhotos.fileName] })
-        .returning();
-      if (!row) {
-        // The same upload arrived twice at once: the first one stored it (same bytes, same file).
-        const [first] = await tx.select().from(workPhotos).where(and(eq(workPhotos.workOrderId, orderId), eq(workPhotos.fileName, fileName)));
-        return answer(orderId, first!, true);
-      }
-      await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'work_photo', entityId: row!.id, districtId: order.districtId, before: null, after: row! });
-      return answer(orderId, row!, false);
+      const row = await how.insert(tx, { width: image.info.width, height: image.info.height, bytes: image.data.length });
+      if (!row) return { row: (await how.find(tx))!, duplicate: true };
+      await how.audit(tx, row);
+      return { row, duplicate: false };
     });
   } catch (err) {
     // A retry name may already belong to a stored photo: remove the file only if no row has it.
-    const [kept] = await ctx.db.select({ id: workPhotos.id }).from(workPhotos).where(and(eq(workPhotos.workOrderId, orderId), eq(workPhotos.fileName, fileName)));
-    if (!kept) await fs.rm(file, { force: true });
+    if (!(await how.find(ctx.db))) await fs.rm(file, { force: true });
     throw err;
   }
+}
+
+/** The path of a stored photo's file; a clear error when the uploads folder lost it. */
+export async function storedPhotoPath(uploadsDir: string, fileName: string, code: 'work_photo' | 'request_photo' = 'work_photo'): Promise<string> {
+  const file = path.join(uploadsDir, path.basename(fileName));
+  try {
+    await fs.access(file);
+  } catch {
+    throw appError(`${code}/file_missing`, 'The photo’s file is missing from the server’s uploads folder');
+  }
+  return file;
+}
+
+export async function addWorkPhoto(ctx: Ctx, orderId: number, upload: PhotoUpload, uploadsDir: string): Promise<PhotoAnswer<Date>> {
+  const order = await orderFor(ctx, orderId, 'log');
+  const fileName = photoFileName(`wo${orderId}`, upload.clientRef);
+  const sameFile = and(eq(workPhotos.workOrderId, orderId), eq(workPhotos.fileName, fileName));
+  const { row, duplicate } = await storePhoto(ctx, uploadsDir, fileName, upload.buffer, {
+    find: async (db) => (await db.select().from(workPhotos).where(sameFile))[0],
+    count: async () => (await ctx.db.select({ n: count() }).from(workPhotos).where(eq(workPhotos.workOrderId, orderId)))[0]?.n ?? 0,
+    limit: PHOTOS_PER_ORDER,
+    tooMany: (n) => `A work order keeps at most ${PHOTOS_PER_ORDER} photos; this one has ${n}`,
+    insert: async (tx, image) =>
+      (
+        await tx
+          .insert(workPhotos)
+          .values({ workOrderId: orderId, fileName, mime: 'image/jpeg', ...image, createdBy: ctx.actor.id })
+          .onConflictDoNothing({ target: [workPhotos.workOrderId, workPhotos.fileName] })
+          .returning()
+      )[0],
+    audit: (tx, row) => writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'work_photo', entityId: row.id, districtId: order.districtId, before: null, after: row }),
+  });
+  return answer(orderId, row, duplicate);
 }
 
 /** Where a photo's file is, for a caller who may read its order. */
@@ -113,11 +163,5 @@ export async function photoFile(ctx: Ctx, orderId: number, photoId: number, uplo
     .from(workPhotos)
     .where(and(eq(workPhotos.id, photoId), eq(workPhotos.workOrderId, orderId)));
   if (!photo) throw errors.notFound('work_photo', photoId);
-  const file = path.join(uploadsDir, path.basename(photo.fileName));
-  try {
-    await fs.access(file);
-  } catch {
-    throw appError('work_photo/file_missing', 'The photo’s file is missing from the server’s uploads folder');
-  }
-  return { file, mime: photo.mime };
+  return { file: await storedPhotoPath(uploadsDir, photo.fileName), mime: photo.mime };
 }

@@ -68,6 +68,6 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   fieldCheck: [['fields'], ['map'], ['records']],
   calendarFeed: [['calendar-feeds']],
   costs: [['costs']],
-  // Scheduling a request books the field or adds a work order.
-  request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders']],
+  // Scheduling a request books the field or adds a work order; the partner's pages list requests.
+  request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders'], ['partner']],
 };

@@ -3,7 +3,8 @@
  * plain words. These answers carry no costs, no internal notes, no staff names and no ids
  * beyond what the pages link or write with.
  */
-import type { ClosureStatus, FieldEventKind, Sport } from '../vocabulary.ts';
+import type { LineLayout } from '../engine/lines.ts';
+import type { ClosureStatus, FieldEventKind, RequestKind, RequestState, Sport } from '../vocabulary.ts';
 
 /** Whether the field can be played, in words. */
 export interface PartnerFieldStatus {
@@ -90,11 +91,32 @@ export interface PartnerBookingItem {
   version: number | null;
 }
 
+/** A request filed for the field, in the partner's one list with its state. */
+export interface PartnerRequestItem {
+  type: 'request';
+  id: number;
+  kind: RequestKind;
+  /** The game's day for a game request, else the day it was filed (department's date). */
+  startsOn: string;
+  /** The game request's day, as the request holds it (null for other kinds). */
+  gameOn: string | null;
+  startTime: string | null;
+  layout: LineLayout | null;
+  description: string;
+  state: RequestState;
+  /** Why it was declined, or the foreman's word on scheduling or closing it. */
+  reason: string;
+  /** Filed by this partner: they may change it while it is still requested. */
+  mine: boolean;
+  /** The request's version, which a change must send (only on the partner's own requests). */
+  version: number | null;
+}
+
 /**
  * One row of the partner's list of bookings and requests, newest kind of row added as a new
  * member of this union (`type` tells them apart; every row has `startsOn` to sort by).
  */
-export type PartnerAgendaItem = PartnerBookingItem;
+export type PartnerAgendaItem = PartnerBookingItem | PartnerRequestItem;
 
 /** `GET /api/partner/fields/:id`. */
 export interface PartnerFieldAnswer {
@@ -110,7 +132,7 @@ export interface PartnerFieldAnswer {
   check: PartnerCheck | null;
   nextMowing: PartnerNextWork;
   nextLines: PartnerNextWork;
-  /** Bookings (and, later, requests) from today on, by day. */
+  /** Bookings from today on, and the field's requests (open ones, and those closed in the last weeks), by day. */
   agenda: PartnerAgendaItem[];
   /** The partner may book this field. */
   canBook: boolean;

@@ -2,7 +2,7 @@
  * Invented work history for the demo city: the date each field was last mowed and a few
  * field checks through the season. Deterministic, like the rest of the demo.
  */
-import { addDaysIso } from '@swardwise/domain';
+import { addDaysIso, DEFAULT_PARAMETERS, surfaceScore } from '@swardwise/domain';
 import type { DemoCity } from './demo-city.ts';
 import { DEMO_SEASON } from './demo-weather.ts';
 import { rngFor } from './prng.ts';
@@ -20,6 +20,33 @@ export interface DemoCheck {
   gmaxDevice: 'portable_2_25kg';
   evenness: number;
   notes: string;
+}
+
+/**
+ * An invented check as a `field_checks` row, scored by the engine as a real check would be.
+ * `scoreHeightMm` is the height the score reads (the season's checks round it first, the
+ * history's score the unrounded height); the row keeps the rounded height either way.
+ */
+export function demoCheckRow(fieldId: number, c: Omit<DemoCheck, 'daysSinceCut'> & { daysSinceCut: number | null }, hocMm: number, scoreHeightMm: number) {
+  const scored = surfaceScore(
+    { turfCoverPct: c.turfCoverPct, weedsPct: c.weedsPct, bareWornPct: c.barePct, heightMm: scoreHeightMm, hocMm, hardnessG: c.gmax, hardnessDevice: c.gmaxDevice, evenness: c.evenness },
+    DEFAULT_PARAMETERS.hardnessRangesG,
+  );
+  return {
+    fieldId,
+    checkedOn: c.checkedOn,
+    turfCoverPct: c.turfCoverPct,
+    weedsPct: c.weedsPct,
+    barePct: c.barePct,
+    heightMm: Math.round(c.heightRatio * hocMm),
+    daysSinceCut: c.daysSinceCut,
+    gmax: c.gmax,
+    gmaxDevice: c.gmaxDevice,
+    evenness: c.evenness,
+    notes: c.notes,
+    score: Math.round(scored.score * 10) / 10,
+    flags: scored.flags,
+  };
 }
 
 export interface DemoHistory {

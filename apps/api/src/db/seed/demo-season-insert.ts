@@ -4,11 +4,12 @@
  * than thousands of bound parameters, so a fresh demo database stays quick to make.
  */
 import { sql } from 'drizzle-orm';
-import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor, localDateOf, localTimeOf, surfaceScore, type Level } from '@swardwise/domain';
+import { DEFAULT_STANDARDS, hocFor, localDateOf, localTimeOf, type Level } from '@swardwise/domain';
 import type { Queryable } from '../client.ts';
 import { fieldChecks, workOrders, workUpdates } from '../schema/index.ts';
 import type { DemoCity } from './demo-city.ts';
 import type { DemoSeason } from './demo-season.ts';
+import { demoCheckRow } from './demo-history.ts';
 
 export interface SeasonIds {
   fieldIds: number[];
@@ -71,26 +72,7 @@ export async function insertDemoSeason(tx: Queryable, city: DemoCity, season: De
   const checks = season.checks.map((c) => {
     const f = city.fields[c.fieldIndex]!;
     const hocMm = hocFor({ ...f, maintenanceLevel: f.maintenanceLevel as Level }, DEFAULT_STANDARDS);
-    const heightMm = Math.round(c.heightRatio * hocMm);
-    const scored = surfaceScore(
-      { turfCoverPct: c.turfCoverPct, weedsPct: c.weedsPct, bareWornPct: c.barePct, heightMm, hocMm, hardnessG: c.gmax, hardnessDevice: c.gmaxDevice, evenness: c.evenness },
-      DEFAULT_PARAMETERS.hardnessRangesG,
-    );
-    return {
-      fieldId: ids.fieldIds[c.fieldIndex]!,
-      checkedOn: c.checkedOn,
-      turfCoverPct: c.turfCoverPct,
-      weedsPct: c.weedsPct,
-      barePct: c.barePct,
-      heightMm,
-      daysSinceCut: c.daysSinceCut,
-      gmax: c.gmax,
-      gmaxDevice: c.gmaxDevice,
-      evenness: c.evenness,
-      notes: c.notes,
-      score: Math.round(scored.score * 10) / 10,
-      flags: scored.flags,
-    };
+    return demoCheckRow(ids.fieldIds[c.fieldIndex]!, c, hocMm, Math.round(c.heightRatio * hocMm));
   });
   if (checks.length) {
     await tx.execute(sql`

@@ -3,14 +3,14 @@
  * again changes nothing (a marker row in `settings` records that it ran).
  */
 import { eq } from 'drizzle-orm';
-import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, DEFAULT_TIME_ZONE, LEVELS, addDaysIso, localToday, hocFor, hoursPerMowingPolygon, mondayOf, mowerTypeFor, surfaceScore, weekdayOf, type Level } from '@swardwise/domain';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, DEFAULT_TIME_ZONE, LEVELS, addDaysIso, localToday, hocFor, hoursPerMowingPolygon, mondayOf, mowerTypeFor, weekdayOf, type Level } from '@swardwise/domain';
 import type { Db } from '../client.ts';
 import { crews, districts, equipment, fieldChecks, fieldEvents, fields, settings, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../schema/index.ts';
 import { outlineFacts } from '../../services/fields.ts';
 import { hashPassword } from '../../services/users.ts';
 import { buildDemoCity, type DemoCity } from './demo-city.ts';
 import { demoFieldEvents } from './demo-events.ts';
-import { demoFieldHistory } from './demo-history.ts';
+import { demoCheckRow, demoFieldHistory } from './demo-history.ts';
 import { buildDemoSeason } from './demo-season.ts';
 import { insertDemoSeason } from './demo-season-insert.ts';
 
@@ -112,25 +112,7 @@ export async function seedDemoCity(db: Db, today: string = localToday(DEFAULT_TI
     const checks = city.fields.flatMap((f, i) =>
       history[i]!.checks.filter((c) => c.checkedOn >= season.window.start && c.checkedOn < today).map((c) => {
         const hocMm = hocFor({ ...f, maintenanceLevel: f.maintenanceLevel as Level }, DEFAULT_STANDARDS);
-        const scored = surfaceScore(
-          { turfCoverPct: c.turfCoverPct, weedsPct: c.weedsPct, bareWornPct: c.barePct, heightMm: c.heightRatio * hocMm, hocMm, hardnessG: c.gmax, hardnessDevice: c.gmaxDevice, evenness: c.evenness },
-          DEFAULT_PARAMETERS.hardnessRangesG,
-        );
-        return {
-          fieldId: fieldRows[i]!.id,
-          checkedOn: c.checkedOn,
-          turfCoverPct: c.turfCoverPct,
-          weedsPct: c.weedsPct,
-          barePct: c.barePct,
-          heightMm: Math.round(c.heightRatio * hocMm),
-          daysSinceCut: c.daysSinceCut,
-          gmax: c.gmax,
-          gmaxDevice: c.gmaxDevice,
-          evenness: c.evenness,
-          notes: c.notes,
-          score: Math.round(scored.score * 10) / 10,
-          flags: scored.flags,
-        };
+        return demoCheckRow(fieldRows[i]!.id, c, hocMm, c.heightRatio * hocMm);
       }),
     );
     if (checks.length) await tx.insert(fieldChecks).values(checks);

@@ -1,4 +1,4 @@
-import type { PartnerBookingItem, PartnerFieldAnswer } from '@swardwise/domain';
+import type { PartnerBookingItem, PartnerFieldAnswer, PartnerRequestItem } from '@swardwise/domain';
 import { VueQueryPlugin } from '@tanstack/vue-query';
 import { mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
@@ -17,6 +17,22 @@ const booking = (id: number, mine: boolean, startsOn: string): PartnerBookingIte
   notes: mine ? 'Home bench' : '',
   mine,
   version: mine ? 2 : null,
+});
+
+const request = (id: number, over: Partial<PartnerRequestItem>): PartnerRequestItem => ({
+  type: 'request',
+  id,
+  kind: 'wet_area',
+  startsOn: '2026-12-03',
+  gameOn: null,
+  startTime: null,
+  layout: null,
+  description: `Invented puddle ${id}`,
+  state: 'requested',
+  reason: '',
+  mine: true,
+  version: 1,
+  ...over,
 });
 
 const answer = (agenda: PartnerFieldAnswer['agenda'], canBook = true): PartnerFieldAnswer => ({
@@ -50,5 +66,30 @@ describe('PartnerAgenda', () => {
     const w = mountAgenda(answer([], false));
     expect(w.find('[data-test="bookings-empty"]').text()).toBe('Nothing booked from today on.');
     expect(w.find('[data-test="new-booking"]').exists()).toBe(false);
+  });
+
+  test('should show requests beside bookings with their state and a decline’s reason, and offer a change only on the partner’s own still-requested ones', () => {
+    const w = mountAgenda(
+      answer([
+        request(5, {}),
+        request(6, { state: 'declined', reason: 'Drains are on the spring list' }),
+        request(7, { mine: false, version: null, kind: 'safety' }),
+        booking(2, true, '2026-12-09'),
+        request(8, { kind: 'game_lines', startsOn: '2026-12-09', gameOn: '2026-12-09', startTime: '18:30', layout: 'football', description: 'Senior night', state: 'scheduled' }),
+      ]),
+    );
+    const rows = w.findAll('[data-type="request"]');
+    expect(rows).toHaveLength(4);
+    expect(rows.map((r) => r.find('[data-test="request-state"]').text())).toEqual(['Requested', 'Declined', 'Requested', 'Scheduled']);
+    expect(rows[0]!.text()).toContain('Today');
+    expect(rows[0]!.text()).toContain('Request · Wet area');
+    expect(rows[1]!.find('[data-test="request-reason"]').text()).toBe('Declined: Drains are on the spring list');
+    expect(rows[2]!.text()).toContain('filed by a colleague');
+    expect(rows[3]!.text()).toContain('American football (NFHS) lines');
+    expect(rows[3]!.text()).toContain('Senior night');
+    expect(rows[3]!.text()).toContain('18:30');
+    // Only request 5 is the partner's own and still requested.
+    expect(w.findAll('[data-test^="edit-request-"]').map((b) => b.attributes('data-test'))).toEqual(['edit-request-5']);
+    expect(w.findAll('[data-type="booking"]')).toHaveLength(1);
   });
 });

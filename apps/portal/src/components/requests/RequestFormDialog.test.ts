@@ -21,9 +21,9 @@ function api(answer: (init: RequestInit) => Response) {
 }
 const sent = (fetch: ReturnType<typeof api>) => fetch.mock.calls.filter(([url]) => String(url).startsWith('/api/requests'));
 
-async function mountForm() {
+async function mountForm(props: Record<string, unknown> = { fieldId: 40 }) {
   const w = mount(RequestFormDialog, {
-    props: { open: true, fieldId: 40 },
+    props: { open: true, ...props },
     global: { plugins: [createPinia(), ElementPlus, [abilitiesPlugin, defineAbilityFor(PARTNER)], [VueQueryPlugin, { queryClient: createQueryClient() }]] },
     attachTo: document.body,
   });
@@ -59,6 +59,41 @@ describe('RequestFormDialog', () => {
     await vi.waitFor(() => expect(sent(fetch)).toHaveLength(1));
     expect(JSON.parse(String(sent(fetch)[0]![1]!.body))).toMatchObject({ fieldId: 40, kind: 'game_lines', layout: 'football', description: 'League final, home v away' });
     await vi.waitFor(() => expect(errorsShown()).toContain('must be 2026-12-03 or later'));
+    expect($('[data-test="request-dialog"]')).not.toBeNull();
+    expect(w.emitted('saved')).toBeUndefined();
+    w.unmount();
+  }, 30_000);
+
+  test('should change a filed request: its day, time, layout and words go as a PATCH with the version, field and kind stay fixed, no photos', async () => {
+    const row = { id: 71, fieldId: 40, kind: 'game_lines', gameOn: '2030-06-01', startTime: '18:00', layout: 'football', description: 'League final', version: 3 };
+    const fetch = api(() => json(200, { request: { ...row, description: 'League final, home side', version: 4 } }));
+    const w = await mountForm({ request: row });
+    expect($('[data-test="request-dialog"]')?.textContent).toContain('Change request');
+    expect(($('[data-test="request-field"] input, input[data-test="request-field"]') as HTMLInputElement | null)?.disabled ?? $('[data-test="request-field"]')?.className.includes('is-disabled')).toBeTruthy();
+    expect($('[data-test="request-photos"]')).toBeNull();
+    const area = $('textarea[data-test="request-description"], [data-test="request-description"] textarea') as HTMLTextAreaElement;
+    expect(area.value).toBe('League final');
+    area.value = 'League final, home side';
+    area.dispatchEvent(new Event('input'));
+    await flushPromises();
+    await submitDialog('request');
+    await vi.waitFor(() => expect(sent(fetch)).toHaveLength(1));
+    const [url, init] = sent(fetch)[0]!;
+    expect(String(url)).toContain('/api/requests/71');
+    expect(init!.method).toBe('PATCH');
+    expect(JSON.parse(String(init!.body))).toEqual({ version: 3, gameOn: '2030-06-01', startTime: '18:00', layout: 'football', description: 'League final, home side' });
+    await vi.waitFor(() => expect(w.emitted('saved')).toHaveLength(1));
+    w.unmount();
+  }, 30_000);
+
+  test('should show the server’s refusal of a change once the request is decided, and keep the dialog open', async () => {
+    const row = { id: 72, fieldId: 40, kind: 'wet_area', gameOn: null, startTime: null, layout: null, description: 'Puddle by the gate', version: 1 };
+    const fetch = api(() => json(409, { error: { code: 'field_request/not_open', message: 'Request #72 is scheduled: it cannot be changed once the foreman has decided it' } }));
+    const w = await mountForm({ request: row });
+    await submitDialog('request');
+    await vi.waitFor(() => expect(sent(fetch)).toHaveLength(1));
+    expect(JSON.parse(String(sent(fetch)[0]![1]!.body))).toEqual({ version: 1, description: 'Puddle by the gate' });
+    await vi.waitFor(() => expect(document.body.textContent).toContain('cannot be changed once the foreman has decided it'));
     expect($('[data-test="request-dialog"]')).not.toBeNull();
     expect(w.emitted('saved')).toBeUndefined();
     w.unmount();
