@@ -18,3 +18,4 @@ export * from './weekgen.ts';
 export * from './week-warnings.ts';
 export * from './field-check.ts';
 export * from './closures.ts';
+export * from './cultural.ts';
