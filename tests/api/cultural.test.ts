@@ -1,7 +1,7 @@
 import { and, eq } from 'drizzle-orm';
 import { describe, expect, test } from 'vitest';
 import { DEFAULT_CULTURAL } from '@swardwise/domain';
-import { standards, workOrders } from '../../apps/api/src/db/schema/index.ts';
+import { applications, fields, standards, weatherDays, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { useTestApi } from '../support/app.ts';
 
 const api = useTestApi();
@@ -70,5 +70,56 @@ describe('the cultural program in the Standards', () => {
       .from(workOrders)
       .where(and(eq(workOrders.fieldId, api.fixture.fields.northSoccer), eq(workOrders.task, 'aerate')));
     expect(asked).toHaveLength(1);
+  });
+});
+
+describe('application records', () => {
+  const order = async (task: 'weed_control' | 'mow' | 'overseed') => {
+    const [f] = await api.database.db.select().from(fields).where(eq(fields.id, api.fixture.fields.northSoccer));
+    const [row] = await api.database.db
+      .insert(workOrders)
+      .values({ fieldId: f!.id, siteId: f!.siteId, districtId: api.fixture.districts.north, task, weekStart: '2026-05-25', plannedDate: '2026-05-26', crewId: api.fixture.crews.north, plannedHours: 1, status: 'assigned', origin: 'manual' })
+      .returning();
+    return row!.id;
+  };
+  const body = { product: 'Test broadleaf herbicide', rate: 1.1, rateUnit: 'fl oz/1000 ft²', areaM2: 600, appliedOn: '2026-05-26', applicator: 'A. Tester' };
+
+  test('should refuse weed control without a licence number, a day to come and a bad rate with 400, writing nothing', async () => {
+    const crew = await api.signIn('crew');
+    const id = await order('weed_control');
+    const noLicence = await crew.post(`/api/work-orders/${id}/application`).send(body);
+    expect(noLicence.status).toBe(400);
+    expect(noLicence.body.error.details.issues).toContainEqual({ path: 'body.licenceNumber', message: "a pesticide application needs the applicator's licence number" });
+    const future = await crew.post(`/api/work-orders/${id}/application`).send({ ...body, licenceNumber: 'QA-1234', appliedOn: '2099-01-01' });
+    expect(future.status).toBe(400);
+    expect(future.body.error.details.issues[0].message).toBe('an application cannot be recorded for a day still to come');
+    const rate = await crew.post(`/api/work-orders/${id}/application`).send({ ...body, licenceNumber: 'QA-1234', rate: 0 });
+    expect(rate.status).toBe(400);
+    expect(rate.body.error.details.issues[0]).toMatchObject({ path: 'body.rate', message: 'the rate must be more than 0' });
+    expect(await api.database.db.select().from(applications)).toHaveLength(0);
+  });
+
+  test("should refuse another district's foreman before reading the body, and a mowing order", async () => {
+    const id = await order('weed_control');
+    const south = await (await api.signIn('foremanSouth')).post(`/api/work-orders/${id}/application`).send({ nonsense: true });
+    expect(south.status).toBe(403);
+    const mow = await order('mow');
+    const res = await (await api.signIn('foreman')).post(`/api/work-orders/${mow}/application`).send({ ...body, licenceNumber: 'QA-1234' });
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe('application/not_applicable');
+  });
+
+  test("should store the crew lead's record with the station's weather that day and show it in the records", async () => {
+    const id = await order('weed_control');
+    const res = await (await api.signIn('crew')).post(`/api/work-orders/${id}/application`).send({ ...body, licenceNumber: 'QA-1234' });
+    expect(res.status).toBe(201);
+    const [day] = await api.database.db.select().from(weatherDays).where(and(eq(weatherDays.stationId, api.fixture.weather.stationId), eq(weatherDays.date, '2026-05-26')));
+    expect(res.body.application).toMatchObject({ task: 'weed_control', product: 'Test broadleaf herbicide', rate: 1.1, rateUnit: 'fl oz/1000 ft²', licenceNumber: 'QA-1234', workOrderId: id });
+    expect(res.body.application.weather).toEqual({ stationName: 'Test Weather', date: '2026-05-26', tmaxC: day!.tmaxC, tminC: day!.tminC, rainMm: day!.rainMm, windMs: 2, kind: 'observed' });
+    const list = await (await api.signIn('foreman')).get('/api/records/applications').query({ from: '2026-05-01', to: '2026-05-31' });
+    expect(list.status).toBe(200);
+    expect(list.body.applications.map((a: { id: number }) => a.id)).toContain(res.body.application.id);
+    const south = await (await api.signIn('foremanSouth')).get('/api/records/applications').query({ from: '2026-05-01', to: '2026-05-31' });
+    expect(south.body.applications).toEqual([]);
   });
 });

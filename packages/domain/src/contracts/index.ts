@@ -16,3 +16,4 @@ export * from './field-checks.ts';
 export * from './dev.ts';
 export * from './config.ts';
 export * from './closures.ts';
+export * from './applications.ts';

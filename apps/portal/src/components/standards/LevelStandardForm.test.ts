@@ -51,6 +51,26 @@ describe('LevelStandardForm', () => {
   });
 });
 
+describe('LevelStandardForm: cultural program', () => {
+  test('should send the program the API schema accepts and refuse a window that ends before it begins', async () => {
+    const model = formFrom(DEFAULT_STANDARDS[2], 'metric');
+    model.cultural.aerate.timesPerSeason = 4;
+    const body = bodyFrom(model, 3, 'metric');
+    expect(updateLevelStandardSchema.safeParse(body).success).toBe(true);
+    expect(body.cultural?.aerate).toMatchObject({ timesPerSeason: 4, cool: { fromMonth: 4, toMonth: 10 }, method: 'core' });
+
+    const wrapper = mountForm();
+    const form = wrapper.vm as unknown as { validate(): Promise<boolean>; invalid: Record<string, string> };
+    expect(wrapper.find('[data-test="std-cultural"]').text()).toContain('the product label is the law');
+    await setNumber(wrapper, 'cultural-topdress-times', '13');
+    expect(await form.validate()).toBe(false);
+    expect(form.invalid).toEqual({ 'cultural.topdress.timesPerSeason': 'more than 12 times a season is not a program' });
+    await setNumber(wrapper, 'cultural-topdress-times', '2');
+    expect(await form.validate()).toBe(true);
+    wrapper.unmount();
+  });
+});
+
 describe('LevelStandardForm in imperial units', () => {
   test('should take heights of cut in inches and send millimetres', async () => {
     const fetch = vi.fn(async (_url: string, init: RequestInit) => new Response(JSON.stringify({ ...row, data: { ...row.data, ...JSON.parse(String(init.body)) } }), { status: 200 }));
