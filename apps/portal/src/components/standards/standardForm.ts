@@ -39,6 +39,9 @@ type SeasonHoc = { cool: number; warm: number };
 const mapHoc = (hoc: Record<Sport, SeasonHoc>, f: (v: number) => number) =>
   Object.fromEntries(SPORTS.map((s) => [s, { cool: f(hoc[s].cool), warm: f(hoc[s].warm) }])) as Record<Sport, SeasonHoc>;
 
+const copyPrograms = (p: CulturalPrograms): CulturalPrograms =>
+  Object.fromEntries(CULTURAL_TASKS.map((t) => [t, { ...p[t], cool: { ...p[t].cool }, warm: { ...p[t].warm } }])) as CulturalPrograms;
+
 export function formFrom(data: LevelStandard, units: UnitSystem): StandardFormModel {
   return {
     name: data.name,
@@ -53,7 +56,8 @@ export function formFrom(data: LevelStandard, units: UnitSystem): StandardFormMo
     lineRepaintDays: data.lineRepaintDays ?? 14,
     fieldCheckDays: data.fieldCheckDays,
     targetScore: data.targetScore,
-    cultural: structuredClone(culturalProgramsOf(data)),
+    // A copy per task (the row may be a reactive proxy, which structuredClone refuses).
+    cultural: copyPrograms(culturalProgramsOf(data)),
   };
 }
 
@@ -80,7 +84,7 @@ export function bodyFrom(m: StandardFormModel, version: number, units: UnitSyste
     lineRepaintDays: m.linesKept ? m.lineRepaintDays : null,
     fieldCheckDays: m.fieldCheckDays,
     targetScore: m.targetScore,
-    cultural: Object.fromEntries(CULTURAL_TASKS.map((t) => [t, { ...m.cultural[t], cool: { ...m.cultural[t].cool }, warm: { ...m.cultural[t].warm } }])) as CulturalPrograms,
+    cultural: copyPrograms(m.cultural),
   };
 }
 

@@ -1,0 +1,108 @@
+/**
+ * Cultural work in chromium: the head sets a level's aeration program on the Standards page,
+ * a foreman generates a week and finds the aeration on the board with its reason, then records
+ * an application on a weed-control job, and finds it in Records with the day's weather.
+ */
+import path from 'node:path';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, test } from 'vitest';
+import { browser, shots, signIn, useBrowser } from './browser.ts';
+
+const baseUrl = inject('baseUrl');
+// A September week of the demo season (cool-season turf growing); no other browser test plans it.
+const WEEK = '2026-09-07';
+const COOL = ['kentucky_bluegrass', 'perennial_ryegrass', 'tall_fescue', 'fine_fescue'];
+
+useBrowser();
+
+type Order = { id: number; fieldId: number; task: string; reason: string; status: string };
+const json = <T>(page: Page, url: string): Promise<T> => page.evaluate(async (u) => (await fetch(u)).json(), url) as Promise<T>;
+
+describe('cultural work', () => {
+  test('should plan the aeration the Standards ask for, with its reason, and record an application', async () => {
+    const foreman = await browser.newPage({ viewport: { width: 1366, height: 1000 } });
+    const head = await browser.newPage({ viewport: { width: 1366, height: 1000 } });
+    try {
+      await signIn(foreman, 'foreman');
+      const me = await json<{ user: { districtId: number } }>(foreman, '/api/auth/me');
+      const fields = (await json<{ items: { id: number; grass: string; maintenanceLevel: number; status: string; districtId: number }[] }>(foreman, '/api/fields')).items;
+      const field = fields.find((f) => COOL.includes(f.grass) && f.maintenanceLevel <= 3 && f.status !== 'retired');
+      expect(field, 'a cool-season field kept at level 1–3 in the foreman’s district').toBeTruthy();
+      const level = field!.maintenanceLevel;
+
+      // The head sets the level's aeration to six a season on the Standards page.
+      await signIn(head, 'head');
+      const before = (await json<{ levels: { level: number; data: { cultural?: Record<string, unknown> } }[] }>(head, '/api/standards')).levels.find((l) => l.level === level)!.data.cultural;
+      await head.goto(`${baseUrl}/standards`);
+      await head.locator(`[data-test="standards-edit-${level}"]`).click();
+      const times = head.locator(`[data-test="standards-form-${level}"] [data-test="cultural-aerate-times"] input`);
+      await times.fill('6');
+      await times.blur();
+      await head.locator('[data-test="std-cultural"]').scrollIntoViewIfNeeded();
+      await head.screenshot({ path: path.join(shots, 'standards-cultural-form.png') });
+      await head.locator('[data-test="standards-save"]').click();
+      await expect.poll(() => head.getByText(`Level ${level} saved`).count()).toBeGreaterThan(0);
+      await expect.poll(() => head.locator('[data-test="standards-table"]').innerText()).toContain('6× core (hollow tine), Apr–Oct');
+      await head.screenshot({ path: path.join(shots, 'standards-cultural.png'), fullPage: true });
+
+      // The foreman generates the week: the aeration is on the board with its reason.
+      await foreman.goto(`${baseUrl}/week?week=${WEEK}`);
+      await foreman.locator('[data-test="week-grid"]').waitFor();
+      await foreman.locator('[data-test="generate-week"]').click();
+      await foreman.locator('[data-test="diff-summary"]').waitFor();
+      await foreman.locator('[data-test="diff-apply"]').click();
+      const board = async () => (await json<{ orders: Order[] }>(foreman, `/api/week-plans?districtId=${me.user.districtId}&weekStart=${WEEK}`)).orders;
+      await expect.poll(async () => (await board()).some((o) => o.task === 'aerate' && o.fieldId === field!.id), { timeout: 20_000 }).toBe(true);
+      const aeration = (await board()).find((o) => o.task === 'aerate' && o.fieldId === field!.id)!;
+      expect(aeration.reason).toMatch(new RegExp(`^Level ${level} program: core \\(hollow tine\\) aeration 6× a season in Apr–Oct`));
+      await foreman.locator(`[data-test="order-card"][data-order-id="${aeration.id}"]`).click();
+      const dialog = foreman.locator('[data-test="order-dialog"]');
+      await dialog.getByText(`Level ${level} program`).waitFor();
+      await foreman.screenshot({ path: path.join(shots, 'week-aeration-order.png') });
+      await dialog.getByRole('button', { name: 'Cancel' }).click();
+
+      // A weed-control job on the field, added by hand, takes the application record.
+      const made = await foreman.evaluate(
+        async (fieldId) => (await fetch('/api/work-orders', { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ fieldId, task: 'weed_control', plannedDate: '2026-09-08', plannedHours: 1 }) })).json(),
+        field!.id,
+      );
+      await foreman.reload();
+      await foreman.locator(`[data-test="order-card"][data-order-id="${made.id}"]`).click();
+      await dialog.locator('[data-test="order-record-application"]').click();
+      const form = dialog.locator('[data-test="application-form"]');
+      await form.locator('[data-test="application-product"] input').fill('Demo broadleaf herbicide');
+      await form.locator('[data-test="application-rate"] input').fill('1.1');
+      await form.locator('[data-test="application-area"] input').fill('5000');
+      // Without the licence number the form refuses, as the API would.
+      await form.locator('[data-test="application-save"]').click();
+      await form.getByText("a pesticide application needs the applicator's licence number").waitFor();
+      await form.locator('[data-test="application-licence"] input').fill('QA-20417');
+      await foreman.screenshot({ path: path.join(shots, 'order-application-form.png') });
+      const saved = foreman.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${made.id}/application`));
+      await form.locator('[data-test="application-save"]').click();
+      expect((await saved).status()).toBe(201);
+
+      await foreman.goto(`${baseUrl}/records`);
+      const section = foreman.locator('[data-test="records-applications"]');
+      await section.getByText('Demo broadleaf herbicide').waitFor();
+      expect(await section.innerText()).toContain('licence QA-20417');
+      await section.scrollIntoViewIfNeeded();
+      await foreman.screenshot({ path: path.join(shots, 'records-applications.png') });
+
+      // Put the Standards back for the other browser tests.
+      const status = await head.evaluate(
+        async ({ level, before }) => {
+          const rows = (await (await fetch('/api/standards')).json()).levels as { level: number; version: number }[];
+          const version = rows.find((l) => l.level === level)!.version;
+          const res = await fetch(`/api/standards/${level}`, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ version, cultural: before }) });
+          return res.status;
+        },
+        { level, before },
+      );
+      expect(status).toBe(200);
+    } finally {
+      await foreman.close();
+      await head.close();
+    }
+  });
+});
