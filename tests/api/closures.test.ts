@@ -156,6 +156,8 @@ describe('closures', () => {
   test('should e-mail the site’s partners when a field closes and when it reopens, without the internal note', async () => {
     const id = api.fixture.fields.northSchoolFootball;
     const foreman = await api.signIn('foreman');
+    // Mail of the tests before (a crew lead told of moved work) is sent in the background: let it go first.
+    await api.background.idle();
     api.mail.clear();
     const { version } = await fieldVersion(id);
     const res = await foreman.post(`/api/fields/${id}/closures`).send(close({ version, reason: 'lightning', note: 'Internal: radio the yard' }));

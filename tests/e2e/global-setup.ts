@@ -45,7 +45,9 @@ async function waitForHealth(url: string, child: ChildProcess, log: () => string
 
 export default async function setup(project: TestProject) {
   if (!process.env.E2E_SKIP_BUILD) {
-    execSync('npm run build -w @swardwise/portal', { cwd: repoRoot, stdio: 'pipe' });
+    // vitest sets NODE_ENV=test, and a build under it is not a production build
+    // (import.meta.env.PROD false: no service worker). The portal is built as it ships.
+    execSync('npm run build -w @swardwise/portal', { cwd: repoRoot, stdio: 'pipe', env: { ...process.env, NODE_ENV: 'production' } });
   }
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-e2e-'));
   const port = await freePort();

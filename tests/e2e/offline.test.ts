@@ -52,7 +52,9 @@ describe('Today with no signal', () => {
       await context.setOffline(false);
       await page.reload();
       await page.locator('[data-test="job-card"]').first().waitFor();
-      await page.locator('[data-test="sign-out"]').click();
+      // On a phone, signing out is in the menu drawer.
+      await page.locator('[data-test="phone-menu"]').click();
+      await page.locator('[data-test="phone-drawer"] [data-test="sign-out"]').click();
       await page.waitForURL((url) => url.pathname === '/sign-in');
       await expect.poll(() => page.evaluate(async (name) => (await caches.has(name) ? (await (await caches.open(name)).keys()).length : 0), TODAY_API_CACHE)).toBe(0);
     } finally {

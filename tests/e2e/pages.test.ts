@@ -149,7 +149,20 @@ describe('crews, equipment, weather and bookings pages', () => {
       await settled(page);
       await page.screenshot({ path: path.join(shots, 'equipment-dialog.png') });
 
-      const fieldId = await page.evaluate(async () => ((await (await fetch('/api/field-events')).json()).items as { fieldId: number }[])[0]!.fieldId);
+      // Out of season the demo books nothing for weeks: the foreman books a game a week ahead on one of his fields.
+      const fieldId = await page.evaluate(async () => {
+        const fieldsAnswer = await (await fetch('/api/fields')).json();
+        const field = (fieldsAnswer.items as { id: number }[])[0]!;
+        const on = new Date(Date.now() + 7 * 86_400_000);
+        const startsOn = `${on.getFullYear()}-${String(on.getMonth() + 1).padStart(2, '0')}-${String(on.getDate()).padStart(2, '0')}`;
+        const res = await fetch('/api/field-events', {
+          method: 'POST',
+          headers: { Accept: 'application/json', 'Content-Type': 'application/json' },
+          body: JSON.stringify({ fieldId: field.id, kind: 'game', title: 'Winter friendly', startsOn }),
+        });
+        if (res.status !== 201) throw new Error(`booking refused: ${res.status} ${await res.text()}`);
+        return field.id;
+      });
       await page.goto(`${baseUrl}/fields/${fieldId}`);
       await page.locator('[data-test="booking"]').first().waitFor();
       expect(await page.locator('[data-test="new-booking"]').count()).toBe(1);

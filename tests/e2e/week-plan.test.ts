@@ -69,6 +69,8 @@ describe('the week plan board', () => {
       await page.locator('[data-test="diff-apply"]').click();
       // Applying writes every order in one transaction: seconds on a busy machine.
       await expect.poll(() => page.locator('[data-test="order-card"]').count(), { timeout: 15_000 }).toBe(before + added);
+      // The board reloads after applying; a drag that starts under the loading mask is lost.
+      await expect.poll(() => page.locator('[data-test="week-grid"] .el-loading-mask').first().isVisible().catch(() => false), { timeout: 20_000 }).toBe(false);
       await page.screenshot({ path: path.join(shots, 'week-board.png'), clip: { x: 0, y: 0, width: 1366, height: 900 } });
 
       const board = await apiBoard(page, districtId);
@@ -102,6 +104,7 @@ describe('the week plan board', () => {
       const districtId = await myDistrict(page);
       const board = await apiBoard(page, districtId);
       const job = board.orders.find((o) => o.status === 'planned' && o.crewId !== null)!;
+      await expect.poll(() => page.locator('[data-test="week-grid"] .el-loading-mask').first().isVisible().catch(() => false), { timeout: 20_000 }).toBe(false);
       const other = board.crews.find((c) => c.id !== job.crewId)!;
       // Another session changes the order behind the board's back.
       const res = await page.evaluate(
