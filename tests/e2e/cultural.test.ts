@@ -104,5 +104,5 @@ describe('cultural work', () => {
       await foreman.close();
       await head.close();
     }
-  });
+  }, 300_000);
 });
