@@ -15,7 +15,17 @@ const COOL = ['kentucky_bluegrass', 'perennial_ryegrass', 'tall_fescue', 'fine_f
 
 useBrowser();
 
-type Order = { id: number; fieldId: number; task: string; reason: string; status: string };
+type Order = { id: number; fieldId: number; task: string; reason: string; status: string; crewId: number | null; plannedDate: string };
+
+/** Opens an order's card, showing every job of its cell first when the cell shows counts. */
+async function openCard(page: Page, o: Order) {
+  const cell = page.locator(`[data-test="board-cell"][data-crew="${o.crewId ?? 'none'}"][data-date="${o.plannedDate}"]`);
+  const card = cell.locator(`[data-test="order-card"][data-order-id="${o.id}"]`);
+  const expand = cell.locator('[data-test="cell-expand"]');
+  await expect.poll(async () => (await card.count()) + (await expand.count()), { timeout: 20_000 }).toBeGreaterThan(0);
+  if (await expand.count()) await expand.click();
+  await card.click();
+}
 const json = <T>(page: Page, url: string): Promise<T> => page.evaluate(async (u) => (await fetch(u)).json(), url) as Promise<T>;
 
 describe('cultural work', () => {
@@ -55,7 +65,7 @@ describe('cultural work', () => {
       await expect.poll(async () => (await board()).some((o) => o.task === 'aerate' && o.fieldId === field!.id), { timeout: 20_000 }).toBe(true);
       const aeration = (await board()).find((o) => o.task === 'aerate' && o.fieldId === field!.id)!;
       expect(aeration.reason).toMatch(new RegExp(`^Level ${level} program: core \\(hollow tine\\) aeration 6× a season in Apr–Oct`));
-      await foreman.locator(`[data-test="order-card"][data-order-id="${aeration.id}"]`).click();
+      await openCard(foreman, aeration);
       const dialog = foreman.locator('[data-test="order-dialog"]');
       await dialog.getByText(`Level ${level} program`).waitFor();
       await foreman.screenshot({ path: path.join(shots, 'week-aeration-order.png') });
@@ -67,7 +77,7 @@ describe('cultural work', () => {
         field!.id,
       );
       await foreman.reload();
-      await foreman.locator(`[data-test="order-card"][data-order-id="${made.id}"]`).click();
+      await openCard(foreman, made as Order);
       await dialog.locator('[data-test="order-record-application"]').click();
       const form = dialog.locator('[data-test="application-form"]');
       await form.locator('[data-test="application-product"] input').fill('Demo broadleaf herbicide');
