@@ -80,13 +80,13 @@ describe('cultural work', () => {
       await openCard(foreman, made as Order);
       await dialog.locator('[data-test="order-record-application"]').click();
       const form = dialog.locator('[data-test="application-form"]');
-      await form.locator('[data-test="application-product"] input').fill('Demo broadleaf herbicide');
+      await form.locator('[data-test="application-product"]').fill('Demo broadleaf herbicide');
       await form.locator('[data-test="application-rate"] input').fill('1.1');
       await form.locator('[data-test="application-area"] input').fill('5000');
       // Without the licence number the form refuses, as the API would.
       await form.locator('[data-test="application-save"]').click();
       await form.getByText("a pesticide application needs the applicator's licence number").waitFor();
-      await form.locator('[data-test="application-licence"] input').fill('QA-20417');
+      await form.locator('[data-test="application-licence"]').fill('QA-20417');
       await foreman.screenshot({ path: path.join(shots, 'order-application-form.png') });
       const saved = foreman.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${made.id}/application`));
       await form.locator('[data-test="application-save"]').click();
