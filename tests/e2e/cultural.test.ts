@@ -91,6 +91,8 @@ describe('cultural work', () => {
       const saved = foreman.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${made.id}/application`));
       await form.locator('[data-test="application-save"]').click();
       expect((await saved).status()).toBe(201);
+      // The form closes once the record is stored.
+      await dialog.locator('[data-test="order-record-application"]').waitFor();
 
       await foreman.goto(`${baseUrl}/records`);
       const section = foreman.locator('[data-test="records-applications"]');
