@@ -16,6 +16,8 @@ const dist = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-dist-'));
 const SCRIPT = `export const rows = ${JSON.stringify(Array.from({ length: 200 }, (_, i) => ({ id: i, name: `Field ${i}` })))};\n`;
 fs.mkdirSync(path.join(dist, 'assets'));
 fs.writeFileSync(path.join(dist, 'index.html'), '<!doctype html><html><head><script type="module" src="/assets/index-Ab12Cd34.js"></script></head><body><div id="app"></div></body></html>');
+// Today's own copy of index.html, naming its files too (apps/portal/build/todayChunks.ts).
+fs.writeFileSync(path.join(dist, 'today.html'), '<!doctype html><html><head><link rel="modulepreload" href="/assets/today-Ef56Gh78.js"></head><body><div id="app"></div></body></html>');
 fs.writeFileSync(path.join(dist, 'sw.js'), 'self.addEventListener("fetch", () => {});');
 fs.writeFileSync(path.join(dist, 'assets/index-Ab12Cd34.js'), SCRIPT);
 fs.writeFileSync(path.join(dist, 'assets/index-Ab12Cd34.js.br'), zlib.brotliCompressSync(SCRIPT));
@@ -80,6 +82,9 @@ describe('the built portal', () => {
       expect(res.text, url).toMatch(/<div id="app">/);
       expect(res.headers['cache-control'], url).toBe('no-cache');
     }
+    // Today's page names its own files; every other page, and a deeper path, gets index.html.
+    expect((await supertest(api.app).get('/today')).text).toMatch(/today-Ef56Gh78\.js/);
+    for (const url of ['/', '/fields/12', '/today/x', '/sign-in']) expect((await supertest(api.app).get(url)).text, url).not.toMatch(/today-Ef56Gh78/);
     const sw = await supertest(api.app).get('/sw.js');
     expect(sw.headers['cache-control']).toBe('no-cache');
     expect(sw.headers['content-type']).toMatch(/javascript/);

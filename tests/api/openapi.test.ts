@@ -122,6 +122,7 @@ describe('the operations', () => {
       .map(({ route }) => route)
       .sort();
     expect(open).toEqual([
+      'GET /api/calendar/{token}.ics',
       'GET /api/config',
       'GET /api/health',
       'GET /api/openapi.json',

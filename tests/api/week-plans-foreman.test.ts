@@ -5,8 +5,9 @@
  */
 import { and, eq } from 'drizzle-orm';
 import { describe, expect, test } from 'vitest';
-import { auditLog, fieldEvents, fields, sites, workOrders } from '../../apps/api/src/db/schema/index.ts';
+import { auditLog, crews, fieldEvents, fields, sites, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { useTestApi } from '../support/app.ts';
+import { addCrew } from '../support/fixture.ts';
 
 // Wednesday 27 May 2026, mid-afternoon in the department: the fixture's weather runs 4 May – 7 June.
 const api = useTestApi({}, { now: () => new Date('2026-05-27T19:00:00Z') });
@@ -96,5 +97,37 @@ describe('a rain-out', () => {
     for (const cancelled of again) {
       expect(live.some((o) => o.fieldId === cancelled.fieldId && o.task === cancelled.task && o.plannedDate !== THURSDAY && o.plannedDate >= '2026-05-27')).toBe(true);
     }
+  });
+});
+
+describe('generating a week again when a crew does not work the watering day', () => {
+  // A database of its own: the crews' days and a field's system change here.
+  const own = useTestApi({}, { now: () => new Date('2026-05-27T19:00:00Z') });
+  const PAST = '2026-05-18';
+  const offFriday = ['mon', 'tue', 'wed', 'thu', 'sat'] as const;
+
+  test('should propose nothing after apply and confirm, nor when a crew is added before generating again', async () => {
+    const districtId = own.fixture.districts.north;
+    await own.database.db.update(fields).set({ irrigation: 'quick_coupler' }).where(eq(fields.id, own.fixture.fields.northSoccer));
+    await own.database.db.update(crews).set({ workDays: [...offFriday] }).where(eq(crews.id, own.fixture.crews.north));
+    const foreman = await own.signIn('foreman');
+    const first = await foreman.post('/api/week-plans/generate').send({ districtId, weekStart: PAST });
+    expect(first.status).toBe(200);
+    // Friday's run goes to the crew's Thursday, its reason still naming Friday.
+    const water = (first.body.board.orders as Order[]).filter((o) => o.task === 'irrigate' && o.fieldId === own.fixture.fields.northSoccer);
+    expect(water.some((o) => o.plannedDate === '2026-05-21' && /Friday/.test(o.reason))).toBe(true);
+    expect((await foreman.post('/api/week-plans/confirm').send({ districtId, weekStart: PAST })).status).toBe(200);
+
+    const again = await foreman.post('/api/week-plans/generate').send({ districtId, weekStart: PAST, dryRun: true });
+    expect(again.status).toBe(200);
+    expect(again.body.diff.summary).toMatchObject({ added: 0, changed: 0, removed: 0 });
+
+    // A crew added in the meantime (off on Fridays too) takes nothing that is already planned.
+    const extra = await addCrew(own.database.db, districtId, 'Second North Crew');
+    await own.database.db.update(crews).set({ workDays: [...offFriday], hoursPerDay: 9 }).where(eq(crews.id, extra));
+    const withCrew = await foreman.post('/api/week-plans/generate').send({ districtId, weekStart: PAST, dryRun: true });
+    expect(withCrew.status).toBe(200);
+    expect(withCrew.body.diff.added).toEqual([]);
+    expect(withCrew.body.diff.summary).toMatchObject({ added: 0, changed: 0, removed: 0 });
   });
 });

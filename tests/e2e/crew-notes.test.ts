@@ -71,8 +71,7 @@ describe('a crew’s note and photo reach the foreman', () => {
       await form.locator('[data-test="check-bare"] input').fill('10');
       await form.getByText('Goalmouths', { exact: true }).click();
       await form.locator('[data-test="check-height"] input').fill('3');
-      await form.locator('[data-test="check-device"]').click();
-      await phone.getByRole('option', { name: /2\.25 kg portable tester/ }).click();
+      await form.locator('[data-test="check-device"]').getByText(/2\.25 kg portable tester/).click();
       for (const [i, g] of ['62', '70', '104'].entries()) await form.locator(`[data-test="check-reading-${i}"] input`).fill(g);
       await form.locator('[data-test="check-evenness"]').getByText('4', { exact: true }).click();
       await form.locator('[data-test="check-divots"]').getByText('3', { exact: true }).click();

@@ -74,6 +74,14 @@ describe('each role’s main task with the keyboard alone', () => {
       await page.goto(`${baseUrl}/week?week=${WEEK}`);
       await page.locator('[data-test="week-grid"]').waitFor();
       await page.waitForLoadState('networkidle');
+      // The demo season already holds the week's done work: the plan adds to it (a full cell shows counts, not cards, so the API counts).
+      const districtId = await page.evaluate(async () => (await (await fetch('/api/auth/me')).json()).user.districtId as number);
+      const readBoard = () =>
+        page.evaluate(
+          async ([d, w]) => (await (await fetch(`/api/week-plans?districtId=${d}&weekStart=${w}`)).json()) as { crews: { id: number; name: string }[]; orders: { id: number; crewId: number | null; status: string }[] },
+          [districtId, WEEK] as const,
+        );
+      const before = (await readBoard()).orders.length;
 
       await tabTo(page, '[data-test="generate-week"]');
       await page.keyboard.press('Enter');
@@ -83,16 +91,14 @@ describe('each role’s main task with the keyboard alone', () => {
       await checkA11y(page);
       await tabTo(page, '[data-test="diff-apply"]');
       await page.keyboard.press('Enter');
-      await expect.poll(() => page.locator('[data-test="order-card"]').count(), { timeout: 15_000 }).toBe(added);
+      await expect.poll(async () => (await readBoard()).orders.length, { timeout: 15_000 }).toBe(before + added);
       await page.locator('[data-test="diff-summary"]').waitFor({ state: 'hidden' });
+      await expect.poll(() => page.locator('[data-test="week-grid"] .el-loading-mask').first().isVisible().catch(() => false), { timeout: 20_000 }).toBe(false);
 
       // The keyboard's way of dragging: Enter on a card, then its crew in the dialog.
-      const districtId = await page.evaluate(async () => (await (await fetch('/api/auth/me')).json()).user.districtId as number);
-      const board = await page.evaluate(
-        async ([d, w]) => (await (await fetch(`/api/week-plans?districtId=${d}&weekStart=${w}`)).json()) as { crews: { id: number; name: string }[]; orders: { id: number; crewId: number | null; status: string }[] },
-        [districtId, WEEK] as const,
-      );
-      const job = board.orders.find((o) => o.status === 'planned' && o.crewId !== null)!;
+      const board = await readBoard();
+      const shown = new Set((await page.locator('[data-test="order-card"]').evaluateAll((els) => els.map((e) => e.getAttribute('data-order-id')))).map(Number));
+      const job = board.orders.find((o) => o.status === 'planned' && o.crewId !== null && shown.has(o.id))!;
       const other = board.crews.find((c) => c.id !== job.crewId)!;
       await tabTo(page, `[data-test="order-card"][data-order-id="${job.id}"]`, { max: 600 });
       await page.keyboard.press('Enter');
@@ -120,7 +126,9 @@ describe('each role’s main task with the keyboard alone', () => {
       await page.locator('[data-test="my-field"]').first().waitFor();
       await tabTo(page, '[data-test="my-field"] a');
       await page.keyboard.press('Enter');
-      await page.waitForURL((url) => /^\/fields\/\d+$/.test(url.pathname));
+      // The partner's own page of the field, not the staff's.
+      await page.waitForURL((url) => /^\/my-fields\/\d+$/.test(url.pathname));
+      await page.locator('[data-test="partner-status"]').waitFor();
       await page.locator('[data-test="field-bookings"]').waitFor();
       await page.waitForLoadState('networkidle');
       await tabTo(page, '[data-test="new-booking"]');

@@ -15,6 +15,8 @@ const VIEW = PHONE.viewport;
 
 interface Fit {
   scrollWidth: number;
+  /** Shown elements reaching past the right edge of the screen, not inside a box that scrolls sideways. */
+  pastEdge: string[];
   /** Height of the navigation visible on the first screen (0 when it is out of sight or closed). */
   navOnScreen: number;
 }
@@ -29,8 +31,21 @@ function fit(page: Page): Promise<Fit> {
       return Math.max(0, Math.min(r.bottom, window.innerHeight) - Math.max(r.top, 0));
     };
     const navs = Array.from(document.querySelectorAll('nav[aria-label="Main"], [data-test="phone-nav"]'));
+    // A page can be no wider than the screen and still cut a control off (a box that hides
+    // what overflows it), so each element is measured too.
+    const scrolls = (el: Element) => ['auto', 'scroll'].includes(getComputedStyle(el).overflowX);
+    const pastEdge = Array.from(document.body.querySelectorAll('*'))
+      .filter((el) => {
+        const r = el.getBoundingClientRect();
+        if (r.width === 0 || r.height === 0 || r.right <= window.innerWidth + 0.5 || getComputedStyle(el).visibility === 'hidden') return false;
+        // A map draws its tiles past its own box, which clips them.
+        for (let box = el.parentElement; box; box = box.parentElement) if (scrolls(box) || box.classList.contains('leaflet-container')) return false;
+        return true;
+      })
+      .map((el) => `${el.tagName.toLowerCase()}.${Array.from(el.classList).join('.')} right ${Math.round(el.getBoundingClientRect().right)}`);
     return {
       scrollWidth: document.scrollingElement!.scrollWidth,
+      pastEdge,
       navOnScreen: navs.reduce((s, n) => s + visible(n), 0),
     };
   });
@@ -41,6 +56,7 @@ async function checkPage(page: Page, name: string) {
   await page.screenshot({ path: path.join(shots, `phone-${name}.png`) });
   const f = await fit(page);
   expect(f.scrollWidth, `${name}: page wider than the phone`).toBeLessThanOrEqual(VIEW.width);
+  expect(f.pastEdge, `${name}: past the right edge of the phone`).toEqual([]);
   // A bottom bar of one row of links: well under a tenth of the screen.
   expect(f.navOnScreen, `${name}: navigation height on the first screen`).toBeLessThanOrEqual(VIEW.height * 0.1);
   return f;
@@ -192,5 +208,10 @@ describe('a foreman on a phone', () => {
     await go(page, '/records');
     await page.locator('h1').first().waitFor();
     await checkPage(page, 'foreman-records');
+    // Its date range, open: the calendars fit the screen too.
+    await page.locator('.el-range-editor').first().click();
+    await page.locator('.el-picker-panel').first().waitFor();
+    await page.waitForTimeout(400);
+    await checkPage(page, 'foreman-records-range');
   });
 });

@@ -13,11 +13,11 @@ const baseUrl = inject('baseUrl');
 useBrowser();
 
 const expected: Record<Role, { landing: string; nav: string[] }> = {
-  admin: { landing: '/admin/users', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'week', 'records', 'imports', 'users', 'audit'] },
-  head: { landing: '/overview', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'week', 'records', 'imports', 'audit'] },
-  foreman: { landing: '/district', nav: ['district', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'week', 'records', 'imports'] },
+  admin: { landing: '/admin/users', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'week', 'records', 'requests', 'imports', 'users', 'audit'] },
+  head: { landing: '/overview', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'week', 'records', 'requests', 'imports', 'audit'] },
+  foreman: { landing: '/district', nav: ['district', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'week', 'records', 'requests', 'imports'] },
   crew: { landing: '/today', nav: ['today', 'fields', 'map'] },
-  partner: { landing: '/my-fields', nav: ['my-fields', 'map'] },
+  partner: { landing: '/my-fields', nav: ['my-fields', 'map', 'requests'] },
 };
 
 describe('signing in by role', () => {

@@ -22,10 +22,11 @@ interface Board {
 useBrowser();
 
 /**
- * Tall enough for the whole board: Playwright's drag scrolls to the target after pressing on
- * the source, which on a scrolled page would pick up whatever card is then under the mouse.
+ * Tall enough for the whole board, the demo season's done work included: Playwright's drag
+ * scrolls to the target after pressing on the source, which on a scrolled page would pick up
+ * whatever card is then under the mouse.
  */
-const TALL = { width: 1366, height: 2400 };
+const TALL = { width: 1366, height: 3600 };
 
 async function openAs(role: Role, viewport = { width: 1366, height: 900 }): Promise<Page> {
   const page = await browser.newPage({ viewport });
@@ -91,6 +92,9 @@ describe('the week plan board', () => {
         expect(after.orders.find((o) => o.id === job.id)).toMatchObject({ crewId: to!.id, plannedDate: target, status: 'assigned', pinned: true });
       }
       expect(await card(page, jobs[0]!.id).locator('[data-test="mark-pinned"]').count()).toBe(1);
+    } catch (e) {
+      await page.screenshot({ path: path.join(shots, 'week-drag-failed.png'), fullPage: true });
+      throw e;
     } finally {
       await page.close();
     }

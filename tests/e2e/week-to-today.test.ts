@@ -9,7 +9,8 @@ import { DEFAULT_TIME_ZONE, localToday, mondayOf } from '@swardwise/domain';
 import { browser, PHONE, reportDialog, shots, signIn, turfPhoto, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
-const TALL = { width: 1366, height: 2400 };
+// Tall enough for the whole board with the demo season's done work: a drag on a scrolled page picks up the wrong card.
+const TALL = { width: 1366, height: 3600 };
 
 useBrowser();
 
@@ -46,11 +47,21 @@ describe('from the week plan to the crew’s phone', () => {
         const patched = foreman.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${id}`) && r.request().method() === 'PATCH');
         await foreman.locator(`[data-test="order-card"][data-order-id="${id}"]`).dragTo(target);
         expect((await patched).status()).toBe(200);
-        await expect.poll(() => target.locator(`[data-order-id="${id}"]`).count()).toBe(1);
+        // Today's cell may already hold more jobs than it lists (the board shows counts then): open it.
+        const expand = target.locator('[data-test="cell-expand"]');
+        await expect
+          .poll(async () => {
+            if (await expand.isVisible().catch(() => false)) await expand.click();
+            return target.locator(`[data-order-id="${id}"]`).count();
+          })
+          .toBe(1);
       }
       const after = await read();
       for (const id of jobIds) expect(after.orders.find((o) => o.id === id)).toMatchObject({ crewId: crewA.id, plannedDate: today, status: 'assigned' });
       await foreman.screenshot({ path: path.join(shots, 'week-to-today-board.png'), clip: { x: 0, y: 0, width: 1366, height: 1100 } });
+    } catch (e) {
+      await foreman.screenshot({ path: path.join(shots, 'week-to-today-failed.png'), fullPage: true });
+      throw e;
     } finally {
       await foreman.close();
     }

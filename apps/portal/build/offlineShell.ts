@@ -27,11 +27,15 @@ export function offlineShell(pages: RegExp): { plugin: Plugin; manifestTransform
         if (chunk.type !== 'chunk') return;
         for (const css of chunk.viteMetadata?.importedCss ?? []) keep.add(css);
         for (const asset of chunk.viteMetadata?.importedAssets ?? []) keep.add(asset);
-        // Static imports only: what the page cannot run without.
+        // What the page cannot run without; the entry's lazy imports are the other pages.
         for (const imported of chunk.imports) visit(imported);
+        // A page's own lazy parts (Today's dialogs, fetched after its first screen) are
+        // needed with no signal too.
+        if (!chunk.isEntry && chunk.moduleIds.some((id) => pages.test(id))) for (const imported of chunk.dynamicImports) visit(imported);
       };
       for (const chunk of Object.values(bundle)) {
-        if (chunk.type === 'chunk' && (chunk.isEntry || (chunk.facadeModuleId && pages.test(chunk.facadeModuleId)))) visit(chunk.fileName);
+        // By the modules a file holds: a page may share its file with others (build/todayChunks.ts).
+        if (chunk.type === 'chunk' && (chunk.isEntry || chunk.moduleIds.some((id) => pages.test(id)))) visit(chunk.fileName);
       }
     },
   };

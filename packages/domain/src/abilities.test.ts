@@ -149,6 +149,30 @@ const cases: Case[] = [
   ['partner', 'create', 'Request', { siteId: SITE_B, districtId: D2 }, false],
   ['foreman', 'update', 'Request', { siteId: SITE_A, districtId: D1 }, true],
   ['foreman', 'update', 'Request', { siteId: SITE_B, districtId: D2 }, false],
+  // The partner's own pages
+  ['partner', 'read', 'PartnerView', null, true],
+  ['head', 'read', 'PartnerView', null, false],
+  ['foreman', 'read', 'PartnerView', null, false],
+  ['crew', 'read', 'PartnerView', null, false],
+  // Calendar feeds: a partner's own; a foreman's for the crews of his district
+  ['partner', 'create', 'CalendarFeed', { userId: 5 }, true],
+  ['partner', 'delete', 'CalendarFeed', { userId: 99 }, false],
+  ['partner', 'create', 'CalendarFeed', { userId: 5, crewId: CREW_1, districtId: D1 }, true],
+  ['foreman', 'create', 'CalendarFeed', { crewId: CREW_1, districtId: D1 }, true],
+  ['foreman', 'create', 'CalendarFeed', { crewId: CREW_2, districtId: D2 }, false],
+  ['foreman', 'read', 'CalendarFeed', { userId: 5 }, false],
+  ['crew', 'create', 'CalendarFeed', { crewId: CREW_1, districtId: D1 }, false],
+  ['head', 'create', 'CalendarFeed', { crewId: CREW_1, districtId: D1 }, false],
+  ['foreman', 'assign', 'Request', { siteId: SITE_A, districtId: D1 }, true],
+  ['foreman', 'assign', 'Request', { siteId: SITE_B, districtId: D2 }, false],
+  ['partner', 'read', 'Request', { siteId: SITE_A, districtId: D1, createdBy: 3 }, true],
+  ['partner', 'read', 'Request', { siteId: SITE_B, districtId: D2, createdBy: 5 }, false],
+  ['partner', 'update', 'Request', { siteId: SITE_A, districtId: D1, createdBy: 5 }, true],
+  ['partner', 'update', 'Request', { siteId: SITE_A, districtId: D1, createdBy: 3 }, false],
+  ['partner', 'assign', 'Request', { siteId: SITE_A, districtId: D1, createdBy: 5 }, false],
+  ['crew', 'read', 'Request', { siteId: SITE_A, districtId: D1 }, false],
+  ['head', 'read', 'Request', { siteId: SITE_B, districtId: D2 }, true],
+  ['head', 'assign', 'Request', { siteId: SITE_B, districtId: D2 }, false],
 ];
 
 type FieldCase = [role: string, field: string, allowed: boolean];

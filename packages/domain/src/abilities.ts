@@ -27,6 +27,10 @@ export const SUBJECTS = [
   'Import',
   'Weather',
   'Request',
+  /** The partner's own pages: their fields in plain words. */
+  'PartnerView',
+  /** A private calendar feed (a partner's own, or a crew's made by its foreman). */
+  'CalendarFeed',
 ] as const;
 export type SubjectName = (typeof SUBJECTS)[number];
 /** A row tagged with its subject type (see `asSubject`). */
@@ -57,6 +61,8 @@ export interface ScopedRow {
   crewIds?: number[];
   /** Who made the row (a booking). */
   createdBy?: number | null;
+  /** Whose row it is (a partner's calendar feed). */
+  userId?: number | null;
 }
 
 /**
@@ -97,12 +103,15 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       const d = actor.districtId ?? -1;
       can('read', 'District', { id: d });
       can('manage', ['Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck', 'FieldEvent', 'FieldClosure'], { districtId: d });
-      can(['read', 'update'], 'Request', { districtId: d });
+      // A foreman answers his district's requests and decides them ('assign': schedule into work, decline, close).
+      can(['read', 'update', 'assign'], 'Request', { districtId: d });
       can('read', ['Standards', 'Weather']);
       can('create', ['Import', 'Weather']);
       can('read', 'Import', { districtId: d });
       can('read', 'AuditEntry', { districtId: d });
       can('read', 'User', { districtId: d });
+      // One calendar feed per crew of the district (a partner's feed has no district).
+      can(['read', 'create', 'delete'], 'CalendarFeed', { districtId: d });
       break;
     }
 
@@ -133,9 +142,14 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can(['read', 'create'], 'FieldEvent', { siteId: { $in: sites } });
       can(['update', 'delete'], 'FieldEvent', { siteId: { $in: sites }, createdBy: actor.id });
       can(['read', 'create'], 'Request', { siteId: { $in: sites } });
+      // A partner changes only the requests they filed themselves; deciding them is the foreman's.
+      can('update', 'Request', { siteId: { $in: sites }, createdBy: actor.id });
       // Partners see why their fields are closed; closing them is the department's.
       can('read', 'FieldClosure', { siteId: { $in: sites } });
       can('read', 'Standards');
+      can('read', 'PartnerView');
+      // Their own calendar feed of their fields.
+      can(['read', 'create', 'delete'], 'CalendarFeed', { userId: actor.id });
       break;
     }
   }

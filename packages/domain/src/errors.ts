@@ -31,15 +31,15 @@ export const ERROR_STATUS: Record<ErrorKind, number> = {
 };
 
 /** Resources whose rows can be missing: `<resource>/not_found` (404). */
-export const NOT_FOUND_RESOURCES = ['route', 'district', 'site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'work_photo', 'import', 'standards', 'user', 'weather_station'] as const;
+export const NOT_FOUND_RESOURCES = ['route', 'district', 'site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'work_photo', 'field_check', 'import', 'standards', 'user', 'weather_station', 'calendar_feed', 'field_request', 'request_photo'] as const;
 export type NotFoundResource = (typeof NOT_FOUND_RESOURCES)[number];
 
 /** Resources written with a version check: `<resource>/version_conflict` (409). */
-export const VERSIONED_RESOURCES = ['site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'standards', 'settings', 'user'] as const;
+export const VERSIONED_RESOURCES = ['site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'standards', 'settings', 'user', 'field_stripes', 'field_request'] as const;
 export type VersionedResource = (typeof VERSIONED_RESOURCES)[number];
 
 /** Routes that take a file upload: `<resource>/too_large` (413) and `<resource>/bad_upload` (400). */
-export const UPLOAD_RESOURCES = ['import', 'weather', 'work_photo'] as const;
+export const UPLOAD_RESOURCES = ['import', 'weather', 'work_photo', 'request_photo'] as const;
 export type UploadResource = (typeof UPLOAD_RESOURCES)[number];
 
 /** `<resource>/<suffix>` for each resource, all of one kind. */
@@ -85,6 +85,7 @@ export const ERROR_CODES = {
   'work_report/field_closed': 'conflict',
   'field_check/not_a_check': 'conflict',
   'application/not_applicable': 'conflict',
+  'field_check/photos_on_order': 'conflict',
   'work_photo/no_file': 'invalid',
   'work_photo/not_an_image': 'unsupported',
   'work_photo/unsupported_format': 'unsupported',
@@ -92,6 +93,17 @@ export const ERROR_CODES = {
   'work_photo/too_many_pixels': 'too_large',
   'work_photo/too_many': 'conflict',
   'work_photo/file_missing': 'not_found',
+
+  'field_request/not_open': 'conflict',
+  'field_request/past_game': 'invalid',
+  'field_request/layout': 'invalid',
+  'request_photo/no_file': 'invalid',
+  'request_photo/not_an_image': 'unsupported',
+  'request_photo/unsupported_format': 'unsupported',
+  'request_photo/unreadable': 'unsupported',
+  'request_photo/too_many_pixels': 'too_large',
+  'request_photo/too_many': 'conflict',
+  'request_photo/file_missing': 'not_found',
 
   'import/no_file': 'invalid',
   'import/unsupported_type': 'unsupported',
@@ -216,7 +228,7 @@ const ACCESS_CHANGED = {
   deactivated: 'An administrator deactivated your account, which signed you out; ask them if you need access again',
 } as const;
 /** How a resource is named in a message where its code name would read badly. */
-const WORDS: Partial<Record<NotFoundResource, string>> = { weather_station: 'weather station' };
+const WORDS: Partial<Record<NotFoundResource, string>> = { weather_station: 'weather station', field_check: 'field check', calendar_feed: 'calendar feed' };
 
 /** The errors that many places raise, each written once. */
 export const errors = {

@@ -1,5 +1,6 @@
 /**
- * Field outline geometry: geodesic area and the bearing of a field's long axis.
+ * Field outline geometry: geodesic area, the bearing of a field's long axis, and the outline
+ * in the field's own frame.
  */
 import turfArea from '@turf/area';
 import { DomainError } from './errors.ts';
@@ -106,4 +107,34 @@ export function longAxis(polygon: Polygon): LongAxis {
   if (bearing >= 180 - 1e-9) bearing = 0;
   const fromNorth = Math.min(bearing, 180 - bearing);
   return { bearingDeg: bearing, lengthM: Math.max(best.w, best.h), widthM: Math.min(best.w, best.h), eastWest: fromNorth > 45 };
+}
+
+/** A field outline in its own frame, metres: x along the long axis, y across it, both from 0. */
+export interface FieldFrame {
+  /** Corners of the outer ring (not closed), metres. */
+  points: Array<[number, number]>;
+  /** Extent along x and y, metres (the long axis's enclosing rectangle). */
+  lengthM: number;
+  widthM: number;
+  /** Bearing of the x axis, degrees from true north (as `longAxis`). */
+  bearingDeg: number;
+}
+
+/**
+ * The outline turned so its long axis (`longAxis`) runs along x: local metres (equirectangular
+ * about the ring's mean point, fine at field scale) rotated by the axis bearing, then shifted so
+ * the smallest x and y are 0. Plans in this frame (line plans, stripe passes) draw the same
+ * whichever way the field lies on the map.
+ */
+export function fieldFrame(polygon: Polygon): FieldFrame {
+  const axis = longAxis(polygon);
+  // Compass bearing (from north, clockwise) → math angle (from east, counter-clockwise).
+  const a = ((90 - axis.bearingDeg) * Math.PI) / 180;
+  const c = Math.cos(a);
+  const s = Math.sin(a);
+  const turned = localMetres(polygon).map(([x, y]) => [x * c + y * s, -x * s + y * c] as [number, number]);
+  const minX = Math.min(...turned.map((p) => p[0]));
+  const minY = Math.min(...turned.map((p) => p[1]));
+  const points = turned.map(([x, y]) => [x - minX, y - minY] as [number, number]);
+  return { points, lengthM: Math.max(...points.map((p) => p[0])), widthM: Math.max(...points.map((p) => p[1])), bearingDeg: axis.bearingDeg };
 }

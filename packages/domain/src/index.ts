@@ -6,3 +6,4 @@ export * from './geometry.ts';
 export * from './clock.ts';
 export * from './engine/index.ts';
 export * from './contracts/index.ts';
+export * from './partner-words.ts';

@@ -222,3 +222,32 @@ export const FIELD_EVENT_KIND_LABELS: Record<FieldEventKind, string> = {
   ceremony: 'Ceremony',
   other: 'Other booking',
 };
+
+/** Stripe patterns a foreman may ask for on a field's mowings (field frame: length along the long axis). */
+export const STRIPE_PATTERNS = ['lengthwise', 'side_to_side', 'checkerboard', 'diagonal'] as const;
+export type StripePattern = (typeof STRIPE_PATTERNS)[number];
+export const STRIPE_PATTERN_LABELS: Record<StripePattern, string> = {
+  lengthwise: 'Length-wise stripes',
+  side_to_side: 'Side-to-side stripes',
+  checkerboard: 'Checkerboard (criss-cross)',
+  diagonal: 'Diagonal stripes',
+};
+
+/** What a partner asks of the department (a school athletic director, a league contact). */
+export const REQUEST_KINDS = ['game_lines', 'wet_area', 'damaged_turf', 'safety'] as const;
+export type RequestKind = (typeof REQUEST_KINDS)[number];
+export const REQUEST_KIND_LABELS: Record<RequestKind, string> = {
+  game_lines: 'Lines for a game',
+  wet_area: 'Wet area',
+  damaged_turf: 'Damaged turf',
+  safety: 'Safety concern',
+};
+/** requested → scheduled → done, or declined with a reason. */
+export const REQUEST_STATES = ['requested', 'scheduled', 'done', 'declined'] as const;
+export type RequestState = (typeof REQUEST_STATES)[number];
+export const REQUEST_STATE_LABELS: Record<RequestState, string> = {
+  requested: 'Requested',
+  scheduled: 'Scheduled',
+  done: 'Done',
+  declined: 'Declined',
+};

@@ -2,8 +2,11 @@
  * The built portal: each file in the brotli or gzip copy written beside it at build time,
  * as the request's Accept-Encoding allows; hashed assets cached for a year, everything else
  * (index.html, the service worker, the icon) asked again on every use, since it names the
- * current hashes. The single-page app's routes are answered by index.html.
+ * current hashes. The single-page app's routes are answered by index.html, or by the page's
+ * own copy of it when the build wrote one (`today.html` for `/today`: index.html that also
+ * names the page's files, so a phone asks for them at once; apps/portal/build/todayChunks.ts).
  */
+import fs from 'node:fs';
 import path from 'node:path';
 import express, { type Router } from 'express';
 import expressStaticGzip from 'express-static-gzip';
@@ -16,6 +19,13 @@ export const REVALIDATE = 'no-cache';
 export function portalRouter(dist: string): Router {
   const router = express.Router();
   const index = path.join(dist, 'index.html');
+  /** `/today` → today.html: the top-level pages the build wrote an HTML file of its own for. */
+  const pages = new Map(
+    fs
+      .readdirSync(dist)
+      .filter((f) => f.endsWith('.html') && f !== 'index.html')
+      .map((f) => [`/${f.slice(0, -'.html'.length)}`, path.join(dist, f)]),
+  );
   const assets = path.join(dist, 'assets') + path.sep;
   router.use(
     expressStaticGzip(dist, {
@@ -34,9 +44,9 @@ export function portalRouter(dist: string): Router {
   router.use('/assets', (_req, res) => {
     res.status(404).type('text/plain').send('Not found');
   });
-  router.get('/{*splat}', (_req, res) => {
+  router.get('/{*splat}', (req, res) => {
     res.setHeader('Cache-Control', REVALIDATE);
-    res.sendFile(index, { cacheControl: false });
+    res.sendFile(pages.get(req.path) ?? index, { cacheControl: false });
   });
   return router;
 }

@@ -100,3 +100,66 @@ export function closureMail(to: string, name: string, notice: ClosureNotice, por
   lines.push('', `The status of every field: ${portalUrl.replace(/\/$/, '')}/status`);
   return { to, subject, text: lines.join('\n') };
 }
+
+/** What happened to a request: filed and replied go to the foreman, the rest to the partner who filed it. */
+export type RequestStep = 'filed' | 'replied' | 'answered' | 'scheduled' | 'done' | 'declined';
+
+export interface RequestNotice {
+  id: number;
+  step: RequestStep;
+  /** The kind in words ("Lines for a game"). */
+  kind: string;
+  fieldName: string;
+  siteName: string;
+  /** The game's day (game requests). */
+  gameOn: string | null;
+  /** The layout in words (game requests). */
+  layout: string | null;
+  /** What the step says: the description, the message, the reason, the foreman's note. */
+  text: string;
+  /** Who took the step. */
+  byName: string;
+  /** For a scheduled request: the work it became, in words. */
+  work?: string | null;
+}
+
+const REQUEST_SUBJECTS: Record<RequestStep, string> = {
+  filed: 'New request',
+  replied: 'Reply on request',
+  answered: 'Answer to your request',
+  scheduled: 'Scheduled: your request',
+  done: 'Done: your request',
+  declined: 'Declined: your request',
+};
+
+/** A step of a partner's request, to the foreman or to the partner; the link opens the request. */
+export function requestMail(to: string, name: string, notice: RequestNotice, portalUrl: string): OutgoingMail {
+  const where = `${notice.fieldName} at ${notice.siteName}`;
+  const what = `${notice.kind}${notice.gameOn ? ` on ${when(notice.gameOn)}` : ''}${notice.layout ? ` (${notice.layout})` : ''}`;
+  const lines = [`Hello ${name},`, ''];
+  switch (notice.step) {
+    case 'filed':
+      lines.push(`${notice.byName} filed a request for ${where}: ${what}.`, '', notice.text);
+      break;
+    case 'replied':
+      lines.push(`${notice.byName} replied on the request for ${where} (${what}):`, '', notice.text);
+      break;
+    case 'answered':
+      lines.push(`${notice.byName} answered your request for ${where} (${what}):`, '', notice.text);
+      break;
+    case 'scheduled':
+      lines.push(`Your request for ${where} (${what}) is scheduled.`);
+      if (notice.work) lines.push('', notice.work);
+      if (notice.text) lines.push('', notice.text);
+      break;
+    case 'done':
+      lines.push(`Your request for ${where} (${what}) is done.`);
+      if (notice.text) lines.push('', notice.text);
+      break;
+    case 'declined':
+      lines.push(`Your request for ${where} (${what}) was declined.`, '', `Reason: ${notice.text}`);
+      break;
+  }
+  lines.push('', `The request: ${portalUrl.replace(/\/$/, '')}/requests?open=${notice.id}`);
+  return { to, subject: `${REQUEST_SUBJECTS[notice.step]} #${notice.id} — ${where}`, text: lines.join('\n') };
+}

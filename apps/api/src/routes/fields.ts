@@ -1,13 +1,22 @@
 import { Router } from 'express';
-import { createFieldSchema, idParamSchema, listQuerySchema, needsQuerySchema, pageQuerySchema, updateFieldSchema } from '@swardwise/domain';
+import { z } from 'zod';
+import { appError, createFieldSchema, fieldCheckSchema, idParamSchema, idSchema, listQuerySchema, needsQuerySchema, pageQuerySchema, updateFieldSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
+import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
 import { createField, deleteField, getField, listFieldsJson, updateField } from '../services/fields.ts';
 import { fieldNeeds } from '../services/needs.ts';
 import { fieldWorkHistory } from '../services/field-history.ts';
-import { listFieldChecks } from '../services/field-checks.ts';
+import { addFieldCheckPhoto, checkPhotoAllowed, fieldCheckPhotoFile, fieldForCheck, fieldGrowthCalibration, listFieldChecks, logStaffFieldCheck } from '../services/field-checks.ts';
+import { PHOTO_MAX_BYTES } from '../services/work-photos.ts';
+import { photoBodySchema } from './work-reports.ts';
 import { writeRoutes } from './write-routes.ts';
+
+// The photo and the phone's reference for it, as the crews' photos.
+const receivePhoto = receiveUpload({ field: 'photo', maxFileBytes: PHOTO_MAX_BYTES, maxFields: 1, code: 'work_photo', what: 'The photo' });
+export const checkParamsSchema = z.object({ id: idSchema, checkId: idSchema });
+export const checkPhotoParamsSchema = z.object({ id: idSchema, checkId: idSchema, photoId: idSchema });
 
 export function fieldsRouter({ db, config }: AppDeps): Router {
   const router = Router();
@@ -36,6 +45,43 @@ export function fieldsRouter({ db, config }: AppDeps): Router {
   router.get('/:id/checks', async (req, res) => {
     const { id } = parse(idParamSchema, req.params, 'params');
     res.json(await listFieldChecks(ctxOf(db, req), id));
+  });
+
+  // Staff log a check from the field page: who may is settled before the body is read.
+  router.post('/:id/checks', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    const { id } = parse(idParamSchema, req.params, 'params');
+    await fieldForCheck(ctx, id);
+    res.status(201).json(await logStaffFieldCheck(ctx, id, parse(fieldCheckSchema, req.body, 'body')));
+  });
+
+  router.post(
+    '/:id/checks/:checkId/photos',
+    async (req, _res, next) => {
+      const { id, checkId } = parse(checkParamsSchema, req.params, 'params');
+      await checkPhotoAllowed(ctxOf(db, req), id, checkId);
+      next();
+    },
+    receivePhoto,
+    async (req, res) => {
+      const { id, checkId } = parse(checkParamsSchema, req.params, 'params');
+      const { clientRef } = parse(photoBodySchema, req.body, 'body');
+      if (!req.file) throw appError('work_photo/no_file', 'Choose a photo to upload', { issues: [{ path: 'body.photo', message: 'choose a photo' }] });
+      const answer = await addFieldCheckPhoto(ctxOf(db, req), id, checkId, { buffer: req.file.buffer, clientRef }, config.uploadsDir);
+      res.status(answer.duplicate ? 200 : 201).json(answer);
+    },
+  );
+
+  router.get('/:id/checks/:checkId/photos/:photoId', async (req, res) => {
+    const { id, checkId, photoId } = parse(checkPhotoParamsSchema, req.params, 'params');
+    const { file, mime } = await fieldCheckPhotoFile(ctxOf(db, req), id, checkId, photoId, config.uploadsDir);
+    res.setHeader('Cache-Control', 'private, max-age=86400');
+    res.type(mime).sendFile(file);
+  });
+
+  router.get('/:id/growth-calibration', async (req, res) => {
+    const { id } = parse(idParamSchema, req.params, 'params');
+    res.json({ calibration: await fieldGrowthCalibration(ctxOf(db, req), id) });
   });
 
   writeRoutes(router, db, '/', 'field', {

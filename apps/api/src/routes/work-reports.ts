@@ -10,6 +10,7 @@ import { addWorkPhoto, PHOTO_MAX_BYTES, photoFile } from '../services/work-photo
 import { logFieldCheck } from '../services/field-checks.ts';
 import { recordApplication } from '../services/applications.ts';
 import { getWorkOrder, orderFor, reopenWork, reportWork } from '../services/work-reports.ts';
+import { finishRequestsOf } from '../services/requests.ts';
 
 // The photo and the phone's reference for it.
 const receivePhoto = receiveUpload({ field: 'photo', maxFileBytes: PHOTO_MAX_BYTES, maxFields: 1, code: 'work_photo', what: 'The photo' });
@@ -19,8 +20,9 @@ export const photoBodySchema = z.object({
   clientRef: z.string().trim().min(8).max(64).regex(/^[A-Za-z0-9_-]+$/, 'a client reference uses letters, digits, - and _').optional(),
 });
 
-export function workReportsRouter({ db, config }: AppDeps): Router {
+export function workReportsRouter({ db, config, mailer, background }: AppDeps): Router {
   const router = Router();
+  const requestDeps = { mailer, publicUrl: config.publicUrl, background };
 
   router.get('/:id', async (req, res) => {
     const { id } = parse(idParamSchema, req.params, 'params');
@@ -32,6 +34,8 @@ export function workReportsRouter({ db, config }: AppDeps): Router {
     const { id } = parse(idParamSchema, req.params, 'params');
     const input = parse(workReportSchema, req.body, 'body');
     const answer = await reportWork(ctx, id, input);
+    // A partner's request whose work this finishes is done too.
+    if (answer.order.status === 'done' && !answer.duplicate) await finishRequestsOf(ctx, requestDeps, id);
     res.status(answer.duplicate ? 200 : 201).json(answer);
   });
 

@@ -4,10 +4,10 @@
  */
 import { and, count, desc, eq, sql } from 'drizzle-orm';
 import type { PageQuery, WorkHistoryPage } from '@swardwise/domain';
-import { crews, equipment, fields, sites, workOrders, workUpdates } from '../db/schema/index.ts';
+import { workOrders, workUpdates } from '../db/schema/index.ts';
 import { can, type Ctx } from './context.ts';
 import { getField } from './fields.ts';
-import { readScope, workOrderColumns } from './work-orders.ts';
+import { readScope, selectWorkOrders } from './work-orders.ts';
 import { photosOf, updatesOf } from './work-reports.ts';
 
 export async function fieldWorkHistory(ctx: Ctx, fieldId: number, q: PageQuery): Promise<WorkHistoryPage<Date>> {
@@ -17,13 +17,7 @@ export async function fieldWorkHistory(ctx: Ctx, fieldId: number, q: PageQuery):
   const where = and(eq(workOrders.fieldId, fieldId), readScope(ctx), logged);
   const [{ total } = { total: 0 }] = await ctx.db.select({ total: count() }).from(workOrders).where(where);
   const orders = (
-    await ctx.db
-      .select(workOrderColumns)
-      .from(workOrders)
-      .innerJoin(fields, eq(fields.id, workOrders.fieldId))
-      .innerJoin(sites, eq(sites.id, workOrders.siteId))
-      .leftJoin(crews, eq(crews.id, workOrders.crewId))
-      .leftJoin(equipment, eq(equipment.id, workOrders.equipmentId))
+    await selectWorkOrders(ctx.db)
       .where(where)
       .orderBy(desc(sql`coalesce(${workOrders.doneAt}, ${workOrders.plannedDate}::timestamptz)`), desc(workOrders.id))
       .limit(q.pageSize)

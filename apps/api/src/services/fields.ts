@@ -4,7 +4,7 @@ import path from 'node:path';
 import { and, asc, count, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import { longAxis, polygonAreaM2, appError, errors, type CreateFieldInput, type FieldDetail, type FieldRow, type Polygon, type UpdateFieldInput } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
-import { districts, fieldChecks, fields, sites, workOrders, workPhotos } from '../db/schema/index.ts';
+import { districts, fieldCheckPhotos, fieldChecks, fields, sites, workOrders, workPhotos } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { cachedAnswer } from './answer-cache.ts';
 import { followMove } from './scope-copies.ts';
@@ -161,11 +161,16 @@ export async function removeField(db: Queryable, fieldId: number, version?: numb
     .from(workPhotos)
     .innerJoin(workOrders, eq(workOrders.id, workPhotos.workOrderId))
     .where(eq(workOrders.fieldId, fieldId));
+  const checkPhotos = await db
+    .select({ fileName: fieldCheckPhotos.fileName })
+    .from(fieldCheckPhotos)
+    .innerJoin(fieldChecks, eq(fieldChecks.id, fieldCheckPhotos.fieldCheckId))
+    .where(eq(fieldChecks.fieldId, fieldId));
   const [deleted] = await db
     .delete(fields)
     .where(version === undefined ? eq(fields.id, fieldId) : and(eq(fields.id, fieldId), eq(fields.version, version)))
     .returning({ id: fields.id });
-  return { deleted: !!deleted, photoFiles: deleted ? photos.map((p) => p.fileName) : [] };
+  return { deleted: !!deleted, photoFiles: deleted ? [...photos, ...checkPhotos].map((p) => p.fileName) : [] };
 }
 
 /** Removes photo files from the uploads folder (after the rows are gone); a missing file is no error. */

@@ -66,14 +66,19 @@ export const workOrderColumns = {
 
 export type WorkOrderRow = Awaited<ReturnType<typeof selectRows>>[number];
 
-async function selectRows(db: Queryable, where: SQL | undefined) {
+/** Work orders joined with their field, site, crew and equipment, as `workOrderColumns` reads them; the caller filters and orders. */
+export function selectWorkOrders(db: Queryable) {
   return db
     .select(workOrderColumns)
     .from(workOrders)
     .innerJoin(fields, eq(fields.id, workOrders.fieldId))
     .innerJoin(sites, eq(sites.id, workOrders.siteId))
     .leftJoin(crews, eq(crews.id, workOrders.crewId))
-    .leftJoin(equipment, eq(equipment.id, workOrders.equipmentId))
+    .leftJoin(equipment, eq(equipment.id, workOrders.equipmentId));
+}
+
+async function selectRows(db: Queryable, where: SQL | undefined) {
+  return selectWorkOrders(db)
     .where(where)
     .orderBy(asc(workOrders.plannedDate), asc(sites.name), asc(fields.name), asc(workOrders.id));
 }

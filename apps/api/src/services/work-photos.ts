@@ -36,19 +36,23 @@ function answer(orderId: number, row: { id: number; width: number; height: numbe
   return { photo: { id: row.id, width: row.width, height: row.height, bytes: row.bytes, createdAt: row.createdAt, url: photoUrl(orderId, row.id) }, duplicate };
 }
 
-/** The real format from the bytes (the browser's mime type is only a claim). */
-async function readImage(buffer: Buffer) {
+/**
+ * The real format from the bytes (the browser's mime type is only a claim), turned upright,
+ * shrunk and re-encoded as JPEG without metadata. `code` names the errors (a crew's work
+ * photo, a partner's request photo).
+ */
+export async function readImage(buffer: Buffer, code: 'work_photo' | 'request_photo' = 'work_photo') {
   let meta: sharp.Metadata;
   try {
     meta = await sharp(buffer, { limitInputPixels: false }).metadata();
   } catch {
-    throw appError('work_photo/not_an_image', 'This file is not a photo; send a JPEG, PNG or WebP image');
+    throw appError(`${code}/not_an_image`, 'This file is not a photo; send a JPEG, PNG or WebP image');
   }
   if (!meta.format || !ACCEPTED_FORMATS.has(meta.format)) {
-    throw appError('work_photo/unsupported_format', `A ${String(meta.format ?? 'file of this kind').toUpperCase()} image cannot be used; send a JPEG, PNG or WebP photo`);
+    throw appError(`${code}/unsupported_format`, `A ${String(meta.format ?? 'file of this kind').toUpperCase()} image cannot be used; send a JPEG, PNG or WebP photo`);
   }
   if ((meta.width ?? 0) * (meta.height ?? 0) > MAX_INPUT_PIXELS) {
-    throw appError('work_photo/too_many_pixels', 'The image is larger than 50 megapixels; send a smaller photo');
+    throw appError(`${code}/too_many_pixels`, 'The image is larger than 50 megapixels; send a smaller photo');
   }
   try {
     return await sharp(buffer, { limitInputPixels: MAX_INPUT_PIXELS })
@@ -57,7 +61,7 @@ async function readImage(buffer: Buffer) {
       .jpeg({ quality: PHOTO_QUALITY, mozjpeg: true })
       .toBuffer({ resolveWithObject: true });
   } catch {
-    throw appError('work_photo/unreadable', 'The photo could not be read (the file may be damaged); take it again or choose another');
+    throw appError(`${code}/unreadable`, 'The photo could not be read (the file may be damaged); take it again or choose another');
   }
 }
 

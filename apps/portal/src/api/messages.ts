@@ -11,6 +11,8 @@ const NOUNS: Partial<Record<VersionedResource, string>> = {
   equipment: 'machine',
   work_order: 'work order',
   standards: 'level',
+  field_stripes: 'stripe pattern',
+  field_request: 'request',
 };
 
 /** Someone saved the row after this person read it (the API's `<resource>/version_conflict`, 409). */

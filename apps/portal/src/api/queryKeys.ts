@@ -14,8 +14,11 @@ export const queryKeys = {
   fieldNeeds: (id: number, date: string | null) => ['fields', 'needs', id, date] as const,
   fieldWork: (id: number, page: number) => ['fields', 'work', id, page] as const,
   fieldChecks: (id: number) => ['fields', 'checks', id] as const,
+  fieldGrowthCalibration: (id: number) => ['fields', 'growth-calibration', id] as const,
   /** Under `fields`: a field's change (its status) makes its closures stale. */
   fieldClosures: (id: number) => ['fields', 'closures', id] as const,
+  /** Under `fields`: saving a pattern invalidates `field`, which also makes the week plan stale. */
+  fieldStripes: (id: number) => ['fields', 'stripes', id] as const,
   /** The public board, read without signing in. */
   statusBoard: () => ['status-board'] as const,
   imports: () => ['imports'] as const,
@@ -25,6 +28,8 @@ export const queryKeys = {
   records: (query: object) => ['records', query] as const,
   /** Under `records`: a work order's change (an application recorded on it) makes them stale. */
   applications: (query: object) => ['records', 'applications', query] as const,
+  requests: (query: object) => ['requests', 'list', query] as const,
+  request: (id: number) => ['requests', 'detail', id] as const,
   sites: (query: object) => ['sites', 'list', query] as const,
   site: (id: number) => ['sites', 'detail', id] as const,
   standards: () => ['standards'] as const,
@@ -36,10 +41,14 @@ export const queryKeys = {
   workOrders: (query: object) => ['work-orders', 'list', query] as const,
   workOrder: (id: number) => ['work-orders', 'detail', id] as const,
   users: () => ['users'] as const,
+  /** The partner's own pages: a booking, a closure or planned work changes them. */
+  partnerFields: () => ['partner', 'fields'] as const,
+  partnerField: (id: number) => ['partner', 'field', id] as const,
+  calendarFeeds: () => ['calendar-feeds'] as const,
 };
 
 /** What a write changes, by what was written. */
-export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail';
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request';
 
 /**
  * The answers a write makes stale: the resource itself and every answer that shows it (a
@@ -47,14 +56,18 @@ export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | '
  */
 export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   site: [['sites'], ['fields'], ['districts'], ['map']],
-  field: [['fields'], ['sites'], ['districts'], ['map'], ['week-plans'], ['work-orders'], ['records']],
-  fieldEvent: [['field-events'], ['fields', 'needs'], ['week-plans']],
+  field: [['fields'], ['sites'], ['districts'], ['map'], ['week-plans'], ['work-orders'], ['records'], ['partner']],
+  fieldEvent: [['field-events'], ['fields', 'needs'], ['week-plans'], ['partner']],
   crew: [['crews'], ['equipment'], ['users'], ['week-plans'], ['work-orders']],
   equipment: [['equipment'], ['week-plans']],
   user: [['users'], ['crews']],
   standards: [['standards'], ['fields', 'needs'], ['map'], ['week-plans']],
   import: [['imports'], ['sites'], ['fields'], ['districts'], ['map']],
-  workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map']],
+  workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map'], ['partner']],
   weather: [['weather'], ['fields', 'needs'], ['map']],
   devMail: [['dev-mail']],
+  fieldCheck: [['fields'], ['map'], ['records']],
+  calendarFeed: [['calendar-feeds']],
+  // Scheduling a request books the field or adds a work order.
+  request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders']],
 };

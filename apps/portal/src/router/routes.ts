@@ -74,10 +74,23 @@ export const routes: RouteRecordRaw[] = [
         meta: { roles: ['crew'], can: ['read', 'Crew'], title: 'Today' },
       },
       {
+        path: 'requests',
+        name: 'requests',
+        component: () => import('../views/RequestsView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman', 'partner'], can: ['read', 'Request'], title: 'Requests' },
+      },
+      {
         path: 'my-fields',
         name: 'my-fields',
         component: () => import('../views/MyFieldsView.vue'),
         meta: { roles: ['partner'], can: ['read', 'Field'], title: 'My fields' },
+      },
+      {
+        // The partner's own page of a field: a different page from the staff's, in plain words.
+        path: 'my-fields/:id(\\d+)',
+        name: 'my-field',
+        component: () => import('../views/PartnerFieldView.vue'),
+        meta: { roles: ['partner'], can: ['read', 'PartnerView'], title: 'My field' },
       },
       {
         path: 'sites',
@@ -101,6 +114,8 @@ export const routes: RouteRecordRaw[] = [
         path: 'fields/:id(\\d+)',
         name: 'field',
         component: () => import('../views/FieldView.vue'),
+        // A partner following an old link to the staff page gets his own page of the field.
+        beforeEnter: (to) => (useSessionStore().user?.role === 'partner' ? { name: 'my-field', params: { id: to.params.id } } : true),
         meta: { can: ['read', 'Field'], title: 'Field' },
       },
       {

@@ -13,7 +13,7 @@ afterEach(() => vi.unstubAllGlobals());
 async function mountSheet() {
   const day = DATES[0]!;
   const orders = [
-    order({ id: 1, crewId: 11, plannedDate: day, siteId: 1, siteName: 'Alder Green', siteAddress: '14 Larch Row', details: { hocMm: 38, mower: 'rotary' } }),
+    order({ id: 1, crewId: 11, plannedDate: day, siteId: 1, siteName: 'Alder Green', siteAddress: '14 Larch Row', details: { hocMm: 38, mower: 'rotary', pattern: 'side_to_side' } }),
     order({ id: 2, crewId: 11, plannedDate: day, siteId: 2, siteName: 'Fen Park', siteAddress: '2 Reed Lane', fieldName: 'Fen 1', fieldStatus: 'closed', fieldStatusNote: 'Waterlogged goalmouths', details: { hocMm: 25, mowerKind: 'reel' } }),
     order({ id: 3, crewId: 11, plannedDate: day, siteId: 2, siteName: 'Fen Park', siteAddress: '2 Reed Lane', task: 'paint_lines', equipmentName: 'N-P1 line painter', details: {} }),
   ];
@@ -46,5 +46,12 @@ describe('CrewSheetView', () => {
     expect(rows[1]!.get('[data-test="sheet-field-status"]').text()).toBe('Closed');
     expect(rows[0]!.find('[data-test="sheet-field-status"]').exists()).toBe(false);
     expect(w.get('[data-test="sheet-closures"]').text()).toContain('Fen 1 at Fen Park is closed: Waterlogged goalmouths.');
+  });
+
+  test('should show the stripe pattern a mowing asks for, and none where it asks none', async () => {
+    const w = await mountSheet();
+    const rows = w.findAll('[data-test="sheet-job"]');
+    expect(rows[0]!.get('[data-test="sheet-pattern"]').text()).toBe('Pattern: Side-to-side stripes');
+    expect(rows[1]!.find('[data-test="sheet-pattern"]').exists()).toBe(false);
   });
 });

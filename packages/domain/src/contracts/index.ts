@@ -17,3 +17,7 @@ export * from './dev.ts';
 export * from './config.ts';
 export * from './closures.ts';
 export * from './applications.ts';
+export * from './stripes.ts';
+export * from './partner.ts';
+export * from './calendar-feeds.ts';
+export * from './requests.ts';

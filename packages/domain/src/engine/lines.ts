@@ -554,3 +554,29 @@ export function linePlan(template: LineTemplate, s: LineSettings, season: { days
     seasonHours: firstCoat.hours * firstCoats + touchUp.hours * touchUps,
   };
 }
+
+/**
+ * The layouts a partner may ask lines for, each one of the templates above (dimensions and
+ * sources as there). `sport` is the sport the layout is played on.
+ */
+export const LINE_LAYOUTS = {
+  soccer_full: { sport: 'soccer', name: 'Soccer, full size (105 × 68 m)', template: () => soccerTemplate() },
+  soccer_9v9: { sport: 'soccer', name: 'Soccer 9v9', template: () => smallSidedSoccerTemplate('9v9') },
+  soccer_7v7: { sport: 'soccer', name: 'Soccer 7v7', template: () => smallSidedSoccerTemplate('7v7') },
+  football: { sport: 'football', name: 'American football (NFHS)', template: () => footballTemplate() },
+  lacrosse: { sport: 'lacrosse', name: "Men's lacrosse", template: () => lacrosseTemplate() },
+  field_hockey: { sport: 'field_hockey', name: 'Field hockey (FIH)', template: () => fieldHockeyTemplate() },
+  baseball: { sport: 'baseball', name: 'Baseball', template: () => baseballTemplate() },
+  softball: { sport: 'softball', name: 'Softball', template: () => softballTemplate() },
+} as const satisfies Record<string, { sport: Sport; name: string; template: () => LineTemplate }>;
+export type LineLayout = keyof typeof LINE_LAYOUTS;
+export const LINE_LAYOUT_IDS = Object.keys(LINE_LAYOUTS) as LineLayout[];
+
+/**
+ * The layouts that can go on a field of `sport`: the sport's own, or every layout on a
+ * multi-use field or lawn (a school lawn lined for a small-sided game).
+ */
+export function layoutsForSport(sport: Sport): LineLayout[] {
+  const own = LINE_LAYOUT_IDS.filter((id) => LINE_LAYOUTS[id].sport === sport);
+  return own.length ? own : LINE_LAYOUT_IDS;
+}

@@ -169,7 +169,10 @@ export interface MowerSpec {
   efficiency: number;
   /** Overlap between passes, m. */
   overlapM: number;
-  /** Time per headland turn, s. */
+  /**
+   * Time per headland turn, s: lift, turn and line up on the next pass. Defaults 15 s for a
+   * ride-on reel, 10 s for a ride-on rotary (from memory; time a crew to set the department's own).
+   */
   turnTimeS: number;
   hocMinMm: number;
   hocMaxMm: number;

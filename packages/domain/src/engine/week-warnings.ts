@@ -27,7 +27,9 @@ export type WeekWarning =
   /** A cultural task is due but the turf grows too little this week (mean GP `gp` below `needs`) to recover: it waits. */
   | { code: 'cultural_waits_growth'; fieldId: number; task: WorkTask; gp: number; needs: number }
   /** A cultural task is due but every working day left in the week is a booking or the day before one. */
-  | { code: 'cultural_no_day'; fieldId: number; task: WorkTask };
+  | { code: 'cultural_no_day'; fieldId: number; task: WorkTask }
+  /** Work due on `date` does not fit the crew's hours that day (`hours` planned of `available`) and no other crew has room. */
+  | { code: 'crew_day_over'; crewId: number; date: string; hours: number; available: number };
 
 /** The warnings a district's week shows from its fields' plans (the others explain one field only). */
 export const DISTRICT_WEEK_WARNINGS: ReadonlySet<WeekWarning['code']> = new Set(['no_weather_before_week', 'weather_projected', 'paint_on_event_day', 'cultural_no_day']);
@@ -36,8 +38,9 @@ export const DISTRICT_WEEK_WARNINGS: ReadonlySet<WeekWarning['code']> = new Set(
  * The plain-language sentence of a warning, as the district week shows it. `fieldName` names
  * a field by id (else "field <id>").
  */
-export function weekWarningText(w: WeekWarning, fieldName: (id: number) => string | undefined = () => undefined): string {
+export function weekWarningText(w: WeekWarning, fieldName: (id: number) => string | undefined = () => undefined, crewName: (id: number) => string | undefined = () => undefined): string {
   const name = (id: number) => fieldName(id) ?? `field ${id}`;
+  const hm = (h: number) => `${Math.floor(Math.round(h * 60) / 60)}:${String(Math.round(h * 60) % 60).padStart(2, '0')}`;
   switch (w.code) {
     case 'field_retired':
       return 'The field is retired: nothing is planned for it.';
@@ -57,6 +60,8 @@ export function weekWarningText(w: WeekWarning, fieldName: (id: number) => strin
       return 'No crew with working days in this district: every order is left unassigned.';
     case 'due_date_missed':
       return `${w.task === 'mow' ? 'Mowing' : 'Work'} on ${name(w.fieldId)} falls after ${w.date}: no working day of the crew before it.`;
+    case 'crew_day_over':
+      return `${crewName(w.crewId) ?? `Crew ${w.crewId}`} has ${hm(w.hours)} h planned on ${w.date} for ${hm(w.available)} h: work due that day does not fit and no other crew has room. Move work by hand or add hours.`;
     case 'paint_on_event_day':
       return `Lines on ${name(w.fieldId)} for ${w.eventTitle} are painted on the day itself (${w.date}): no working day is left before it. Paint early and keep players off until the paint is dry.`;
     case 'cultural_waits_growth':

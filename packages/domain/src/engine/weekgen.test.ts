@@ -231,6 +231,33 @@ describe('planFieldWeek', () => {
   });
 });
 
+describe('stripe patterns on mowing orders', () => {
+  test('should put the field’s pattern on its mowings and plan the pass-plan time when it is longer', () => {
+    const plain = planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders.filter((o) => o.task === 'mow');
+    const board = planFieldWeek({ field: field({ stripes: { pattern: 'checkerboard', mowerId: null } }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays }).orders.filter((o) => o.task === 'mow');
+    expect(board.map((o) => o.askedDate)).toEqual(plain.map((o) => o.askedDate));
+    const [p, b] = [plain[0]!, board[0]!];
+    expect(p.details.pattern).toBeUndefined();
+    expect(b.details.pattern).toBe('checkerboard');
+    // A checkerboard drives the field twice: its pass plan passes the side-to-side plan.
+    expect(b.plannedHours).toBeGreaterThan(p.plannedHours);
+    expect(b.details.hoursMethod).toBe('stripe_plan');
+    expect(b.reason).toMatch(/Checkerboard \(criss-cross\): \d+ passes take [\d.]+ h, longer than the plain mowing time/);
+  });
+
+  test('should keep the plain time and say so when the pattern takes no longer', () => {
+    // A sports field's plain time is its side-to-side plan; length-wise passes at full efficiency
+    // drive the same distance with fewer turns (100 m × 64 m: about 64 ÷ w passes against 100 ÷ w).
+    const full = (m: (typeof DEFAULT_PARAMETERS.mowers)['reel']) => ({ ...m, efficiency: 1 });
+    const params = { ...DEFAULT_PARAMETERS, mowers: { reel: full(DEFAULT_PARAMETERS.mowers.reel), rotary: full(DEFAULT_PARAMETERS.mowers.rotary) } };
+    const withPattern = planFieldWeek({ field: field({ stripes: { pattern: 'lengthwise', mowerId: null } }), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays, params }).orders.find((o) => o.task === 'mow')!;
+    const without = planFieldWeek({ field: field(), weather: WARM, weekStart: WEEK, kept: [], workDays: allDays, params }).orders.find((o) => o.task === 'mow')!;
+    expect(withPattern.details.pattern).toBe('lengthwise');
+    expect(withPattern.plannedHours).toBe(without.plannedHours);
+    expect(withPattern.reason).toMatch(/within the plain mowing time/);
+  });
+});
+
 describe('assignWeek', () => {
   const yard = { lat: 38, lng: -77 };
   const sites = new Map([
@@ -454,5 +481,87 @@ describe('spreading work with slack', () => {
     expect(checks.some((o) => o.crewId === 3)).toBe(true);
     const loads = crewDayLoads(placed.map((o, i) => ({ ...o, id: i + 1 })), crews, sites, { lat: 38, lng: -77 }, DEFAULT_PARAMETERS.travel, WEEK);
     expect(loads.filter((l) => l.overloaded)).toEqual([]);
+  });
+});
+
+describe('watering kept by a crew that does not work the run day', () => {
+  // A crew off on Fridays (Mon–Thu and Saturday) waters Friday's run on Thursday.
+  const offFriday = ['mon', 'tue', 'wed', 'thu', 'sat'] as const;
+  const dry = weather({ tmax: 30, tmin: 18, rain: 0 });
+  const f = field({ irrigation: 'quick_coupler' });
+
+  test('should not ask a run again once the order for it is kept on another day', () => {
+    const first = planFieldWeek({ field: f, weather: dry, weekStart: WEEK, kept: [], workDays: offFriday });
+    const runs = first.orders.filter((o) => o.task === 'irrigate');
+    expect(runs.map((o) => o.askedDate)).toEqual(['2026-06-01', '2026-06-03', '2026-06-05']);
+    const { orders: placed } = assignWeek({ weekStart: WEEK, orders: runs, crews: [{ id: 7, hoursPerDay: 9, workDays: offFriday }], sites: new Map([[10, { lat: 38.01, lng: -77 }]]), yard: { lat: 38, lng: -77 }, travel: DEFAULT_PARAMETERS.travel });
+    expect(placed.map((o) => o.plannedDate)).toEqual(['2026-06-01', '2026-06-03', '2026-06-04']);
+    // Confirmed: every order is kept where the crew does it.
+    const kept: KeptOrder[] = placed.map((o, i) => ({ id: i + 1, fieldId: o.fieldId, task: o.task, plannedDate: o.plannedDate, status: 'assigned', details: o.details }));
+    const again = planFieldWeek({ field: f, weather: dry, weekStart: WEEK, kept, workDays: offFriday });
+    expect(again.orders.filter((o) => o.task === 'irrigate')).toEqual([]);
+  });
+
+  test('should count an order kept without the run it was for against the run it was moved from', () => {
+    const kept: KeptOrder[] = ['2026-06-01', '2026-06-03', '2026-06-04'].map((d, i) => ({ id: i + 1, fieldId: f.id, task: 'irrigate', plannedDate: d, status: 'assigned', details: {} }));
+    expect(planFieldWeek({ field: f, weather: dry, weekStart: WEEK, kept, workDays: offFriday }).orders.filter((o) => o.task === 'irrigate')).toEqual([]);
+    // Two runs kept: the one left is asked.
+    const two = planFieldWeek({ field: f, weather: dry, weekStart: WEEK, kept: kept.slice(0, 2), workDays: offFriday });
+    expect(two.orders.filter((o) => o.task === 'irrigate').map((o) => o.askedDate)).toEqual(['2026-06-05']);
+  });
+});
+
+describe('crew-days within their hours with kept work on them', () => {
+  const yard = { lat: 38, lng: -77 };
+  const sites = new Map<number, { lat: number; lng: number }>([
+    [10, { lat: 38.01, lng: -77 }],
+    [11, { lat: 38.02, lng: -77.01 }],
+    [12, { lat: 38.0, lng: -77.03 }],
+    [13, { lat: 38.015, lng: -77.02 }],
+  ]);
+  const travel = DEFAULT_PARAMETERS.travel;
+  const MONDAY = WEEK;
+  const FRIDAY = '2026-06-05';
+  const water = (siteId: number, fieldId: number, date: string): AskedOrder => ({ fieldId, siteId, task: 'irrigate', askedDate: date, plannedHours: 0.75, reason: '', details: {}, latestDate: date, flexible: false, equipmentKind: null });
+  const check = (siteId: number, fieldId: number): AskedOrder => ({ fieldId, siteId, task: 'field_check', askedDate: MONDAY, plannedHours: 0.6, reason: '', details: {}, latestDate: null, flexible: true, equipmentKind: null });
+  // Crew 1 (9 h) did the season's mowing at every site: 6.5 h of it is kept (done, pinned) on Monday and on Friday.
+  const keptHours = new Map([[`1|${MONDAY}`, 6.5], [`1|${FRIDAY}`, 6.5]]);
+  const keptSites = new Map([[`1|${MONDAY}`, [10, 11, 12, 13]], [`1|${FRIDAY}`, [10, 11, 12, 13]]]);
+  const hint = new Map([[10, 1], [11, 1], [12, 1], [13, 1]]);
+  const asked: AskedOrder[] = [];
+  for (const [i, siteId] of [10, 11, 12, 13].entries()) {
+    asked.push(water(siteId, 20 + i, MONDAY), water(siteId, 30 + i, MONDAY), water(siteId, 20 + i, FRIDAY), check(siteId, 40 + i));
+  }
+  const loadsOf = (placed: ReturnType<typeof assignWeek>['orders'], crews: { id: number; hoursPerDay: number; workDays: readonly ('mon' | 'tue' | 'wed' | 'thu' | 'fri')[] }[]) => {
+    // The kept orders stand on the board beside the new ones.
+    const keptRows = [MONDAY, FRIDAY].flatMap((date, k) => [10, 11, 12, 13].map((siteId, i) => ({ id: 900 + k * 10 + i, crewId: 1, plannedDate: date, siteId, plannedHours: 6.5 / 4, status: 'done' as const })));
+    return crewDayLoads([...keptRows, ...placed.map((o, i) => ({ ...o, id: i + 1 }))], crews, sites, yard, travel, WEEK);
+  };
+
+  test('should keep each crew-day within its hours, moving work due that day to a crew with room', () => {
+    const crews = [
+      { id: 1, hoursPerDay: 9, workDays: allDays },
+      { id: 2, hoursPerDay: 8, workDays: allDays },
+    ];
+    const { orders: placed, warnings } = assignWeek({ weekStart: WEEK, orders: asked, crews, keptHours, keptSites, siteCrewHint: hint, sites, yard, travel });
+    expect(placed).toHaveLength(asked.length);
+    // Watering stays on its day; the work with slack finds a day with room.
+    for (const o of placed.filter((o) => o.task === 'irrigate')) expect(o.plannedDate).toBe(o.askedDate);
+    const over = loadsOf(placed, crews).filter((l) => l.overloaded);
+    expect(over.map((l) => `${l.crewId} ${l.date} ${l.totalHours}/${l.availableHours}`)).toEqual([]);
+    expect(placed.some((o) => o.crewId === 2 && o.plannedDate === MONDAY)).toBe(true);
+    expect(warnings.filter((w) => w.code === 'crew_day_over')).toEqual([]);
+  });
+
+  test('should put only work due that day over the hours when no crew has room, and say so', () => {
+    const crews = [{ id: 1, hoursPerDay: 9, workDays: allDays }];
+    const { orders: placed, warnings } = assignWeek({ weekStart: WEEK, orders: asked, crews, keptHours, keptSites, siteCrewHint: hint, sites, yard, travel });
+    const over = loadsOf(placed, crews).filter((l) => l.overloaded);
+    expect(over.map((l) => l.date)).toEqual([MONDAY, FRIDAY]);
+    // What stands over the hours is the watering due those days, nothing with slack.
+    expect(placed.filter((o) => o.plannedDate === MONDAY || o.plannedDate === FRIDAY).every((o) => o.task === 'irrigate')).toBe(true);
+    const said = warnings.filter((w) => w.code === 'crew_day_over');
+    expect(said).toEqual([expect.objectContaining({ crewId: 1, date: MONDAY, available: 9 }), expect.objectContaining({ crewId: 1, date: FRIDAY, available: 9 })]);
+    expect(weekWarningText(said[0]!, undefined, () => 'Crew A')).toMatch(/^Crew A has \d+:\d\d h planned on 2026-06-01 for 9:00 h/);
   });
 });

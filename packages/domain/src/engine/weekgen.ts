@@ -17,8 +17,8 @@
  */
 import type { Polygon } from '../schemas/common.ts';
 import type { WeekWarning } from './week-warnings.ts';
-import type { Clippings, FieldStatus, Grass, IrrigationKind, Level, Sport, WorkStatus, WorkTask } from '../vocabulary.ts';
-import { LEVEL_NAMES } from '../vocabulary.ts';
+import type { Clippings, FieldStatus, Grass, IrrigationKind, Level, Sport, StripePattern, WorkStatus, WorkTask } from '../vocabulary.ts';
+import { LEVEL_NAMES, STRIPE_PATTERN_LABELS } from '../vocabulary.ts';
 import { fail } from './check.ts';
 import { WEEKDAYS, addDaysIso, isoToDayNumber, monthOf, weekdayOf } from './dates.ts';
 import type { Weekday } from './dates.ts';
@@ -31,6 +31,7 @@ import { levelIntervalDays, mowTriggerHeightMm, mowerTypeFor, mowingPolicy, simu
 import { fieldDailySeries } from './outlook.ts';
 import type { FieldDailySeries, OutlookField, PreparedWeather } from './outlook.ts';
 import { planRoute } from './routing.ts';
+import { fieldStripePlan } from './stripes.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor, levelStandard } from './standards.ts';
 import type { DepartmentParameters, LevelStandard, MowerSpec, PlanningParameters, Standards } from './standards.ts';
 import { culturalProgramsOf, grassSeason } from './standards.ts';
@@ -68,6 +69,8 @@ export interface PlanField {
   culturalDone?: Partial<Record<CulturalTask, readonly string[]>>;
   /** The last field check's bare share (%) and where the wear is, for overseeding. */
   lastWear?: { checkedOn: string; barePct: number; areas: readonly string[] } | null;
+  /** The stripe pattern asked for on its mowings, and the mower chosen for it (null: the plan's pick). */
+  stripes?: { pattern: StripePattern; mowerId: number | null } | null;
 }
 
 /** An order that stays as people left it; it counts as work already planned or done. */
@@ -290,7 +293,10 @@ function mowingOrders(ctx: FieldWeekContext, growth: number[]): void {
   const hocMm = hocFor(ctx.outlookField, ctx.standards);
   const trigger = mowTriggerHeightMm(hocMm);
   const { spec, mower } = chooseMower(hocMm, ctx.input.mowers ?? [], params);
-  const { hours, method } = mowingHours(field, spec);
+  const plain = mowingHours(field, spec);
+  const stripes = stripeHours(ctx, spec, plain.hours);
+  const hours = stripes?.longer ? stripes.hours : plain.hours;
+  const method = stripes?.longer ? 'stripe_plan' : plain.method;
   for (const a of askedCuts(ctx, growth, hocMm)) {
     const why =
       a.reason === 'overdue'
@@ -304,13 +310,47 @@ function mowingOrders(ctx: FieldWeekContext, growth: number[]): void {
       task: 'mow',
       askedDate: a.date,
       plannedHours: round(hours),
-      reason: why,
-      details: { hocMm: round(hocMm, 3), triggerMm: round(trigger, 1), heightBeforeMm: round(a.heightMm, 1), mowerKind: spec.kind, mowerId: mower?.id ?? null, hoursMethod: method, overdueSince: a.overdueSince ?? null },
+      reason: stripes ? `${why}. ${stripes.note}` : why,
+      details: {
+        hocMm: round(hocMm, 3),
+        triggerMm: round(trigger, 1),
+        heightBeforeMm: round(a.heightMm, 1),
+        mowerKind: spec.kind,
+        mowerId: mower?.id ?? null,
+        hoursMethod: method,
+        overdueSince: a.overdueSince ?? null,
+        ...(stripes ? { pattern: field.stripes!.pattern, passes: stripes.passes } : {}),
+      },
       latestDate: a.date,
       flexible: false,
       equipmentKind: 'mower',
     });
   }
+}
+
+/**
+ * The field's stripe pattern over its outline (`fieldStripePlan`) with the mower chosen for it
+ * (else the plan's pick): its hours, whether they pass the plain mowing time, and the words for
+ * the reason. Null without a pattern, or when the outline gives no plan.
+ */
+function stripeHours(ctx: FieldWeekContext, spec: MowerSpec, plainHours: number): { hours: number; passes: number; longer: boolean; note: string } | null {
+  const stripes = ctx.field.stripes;
+  if (!stripes) return null;
+  const chosen = stripes.mowerId === null ? undefined : (ctx.input.mowers ?? []).find((m) => m.id === stripes.mowerId);
+  const base = chosen ? ctx.params.mowers[chosen.kind === 'reel' ? 'reel' : 'rotary'] : spec;
+  const mower = chosen ? { widthM: chosen.widthM, speedKmh: chosen.speedKmh, efficiency: chosen.efficiency, overlapM: base.overlapM, turnTimeS: base.turnTimeS } : spec;
+  let plan;
+  try {
+    plan = fieldStripePlan(ctx.field.geometry, stripes.pattern, mower);
+  } catch {
+    return null;
+  }
+  const label = STRIPE_PATTERN_LABELS[stripes.pattern];
+  const longer = plan.hours > plainHours;
+  const note = longer
+    ? `${label}: ${plan.passes} passes take ${round(plan.hours)} h, longer than the plain mowing time (${round(plainHours)} h), so the order is planned at the pass plan`
+    : `${label}: ${plan.passes} passes (${round(plan.hours)} h, within the plain mowing time)`;
+  return { hours: plan.hours, passes: plan.passes, longer, note };
 }
 
 /** The cuts the rule asks for in the week, stepping from one cut (asked or kept) to the next. */
@@ -500,14 +540,14 @@ function irrigationOrders(ctx: FieldWeekContext, daily: FieldDailySeries): void 
   const week = weekIrrigation(etc, eff, daily.share, daily.du, planning.minIrrigationMm);
   if (!week.scheduled) return;
   const gross = week.grossMm;
-  const keptDays = new Set(ctx.keptOf('irrigate').map((k) => k.plannedDate));
+  const kept = ctx.keptOf('irrigate');
   const irr = { ...DEFAULT_PARAMETERS.irrigation, ...params.irrigation };
   const schedule = weeklyIrrigationSchedule({ grossMmPerWeek: gross, precipRateMmPerH: irr.precipRateMmPerH, allowedDays: planning.wateringDays, maxRunMinPerCycle: irr.maxRunMinPerCycle, maxCyclesPerDay: irr.maxCyclesPerDay });
   const runs = schedule.days.map((d) => ({ day: d.day, date: dates[WEEK_FROM_MONDAY.indexOf(d.day)] as string, cycles: d.cycles, minutesPerCycle: round(d.minutesPerCycle, 0), totalMinutes: round(d.totalMinutes, 0) }));
   const base = { grossMm: round(gross, 1), volumeL: round(irrigationVolumeLitres(schedule.appliedMm, field.areaM2), 0), shortfallMm: round(schedule.shortfallMm, 1) };
   if (field.irrigation === 'automatic') {
     // A controller is set once for the week; a kept setting stands.
-    if (keptDays.size > 0) return;
+    if (kept.length > 0) return;
     const firstRun = runs.map((r) => r.date).filter((d) => d >= start).sort()[0] ?? start;
     ctx.orders.push({
       fieldId: field.id,
@@ -523,8 +563,9 @@ function irrigationOrders(ctx: FieldWeekContext, daily: FieldDailySeries): void 
     });
     return;
   }
+  const covered = coveredRuns(runs.filter((r) => r.totalMinutes > 0).map((r) => r.date), kept);
   for (const run of runs) {
-    if (keptDays.has(run.date) || run.totalMinutes <= 0 || run.date < start) continue;
+    if (covered.has(run.date) || run.totalMinutes <= 0 || run.date < start) continue;
     ctx.orders.push({
       fieldId: field.id,
       siteId: field.siteId,
@@ -532,7 +573,7 @@ function irrigationOrders(ctx: FieldWeekContext, daily: FieldDailySeries): void 
       askedDate: run.date,
       plannedHours: planning.quickCouplerHoursPerDay,
       reason: `Water budget: ${round(gross / runs.length, 1)} mm on ${dayName(run.date)} (${run.cycles} × ${run.minutesPerCycle} min, cycle and soak)`,
-      details: { ...base, system: 'quick_coupler', runTimeMin: run.totalMinutes, cycles: run.cycles, minutesPerCycle: run.minutesPerCycle },
+      details: { ...base, system: 'quick_coupler', runOn: run.date, runTimeMin: run.totalMinutes, cycles: run.cycles, minutesPerCycle: run.minutesPerCycle },
       latestDate: run.date,
       flexible: false,
       equipmentKind: null,
@@ -606,6 +647,29 @@ function culturalOrders(ctx: FieldWeekContext, weekGp: number): void {
       ...(avoid.size > 0 ? { avoidDates: [...avoid].sort() } : {}),
     });
   }
+}
+
+/**
+ * The watering runs that kept irrigation orders already stand for. An order names its run
+ * (`details.runOn`): a crew that does not work the run's day does it on its working day
+ * before, so the order's date is not the run's. An order without the name stands for the run
+ * on its date, else the first run after it not yet covered (the scheduler only moves a run
+ * earlier), else the last one before it.
+ */
+export function coveredRuns(runDates: readonly string[], kept: readonly Pick<KeptOrder, 'plannedDate' | 'details'>[]): Set<string> {
+  const covered = new Set<string>();
+  const runs = [...runDates].sort();
+  const rest: typeof kept[number][] = [];
+  for (const k of kept) {
+    const named = k.details?.runOn;
+    if (typeof named === 'string' && runs.includes(named) && !covered.has(named)) covered.add(named);
+    else rest.push(k);
+  }
+  for (const k of [...rest].sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : 0))) {
+    const run = runs.find((d) => d === k.plannedDate && !covered.has(d)) ?? runs.find((d) => d > k.plannedDate && !covered.has(d)) ?? [...runs].reverse().find((d) => d < k.plannedDate && !covered.has(d));
+    if (run) covered.add(run);
+  }
+  return covered;
 }
 
 /** Field check by the level's frequency. */
@@ -697,9 +761,9 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
   if (crews.length === 0 && input.orders.length > 0) warnings.push({ code: 'no_crew' });
   const openDay = (c: PlanCrewInput, d: string) => !closed.has(`${c.id}|${d}`);
   const spread = (o: AskedOrder) => o.flexible && crews.length > 0;
-  const scheduled = input.orders.filter((o) => !spread(o)).map((o) => scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings, openDay));
   const ledger = crewDayLedger(input);
-  for (const s of scheduled) ledger.place(s);
+  const fixed = input.orders.filter((o) => !spread(o)).map((o) => scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings, openDay));
+  const scheduled = placeFixed(fixed, crews, ledger, openDay);
   const lastOf = (o: AskedOrder) => o.latestDate ?? (dates[dates.length - 1] as string);
   const flexible = input.orders
     .filter(spread)
@@ -710,9 +774,70 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
     ledger.place(s);
     scheduled.push(s);
   }
+  // A crew-day over its hours can only hold work due that day (nothing else had room): say so.
+  for (const c of crews) {
+    for (const d of dates) {
+      const h = ledger.hoursOf(c.id, d);
+      if (h > c.hoursPerDay + 1e-9 && scheduled.some((s) => s.crewId === c.id && s.plannedDate === d)) warnings.push({ code: 'crew_day_over', crewId: c.id, date: d, hours: round(h), available: c.hoursPerDay });
+    }
+  }
   for (const s of scheduled) s.equipmentId = suggestEquipment(s, input.equipment ?? []);
   scheduled.sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : a.siteId - b.siteId || a.fieldId - b.fieldId || (a.task < b.task ? -1 : a.task > b.task ? 1 : 0)));
   return { orders: scheduled, warnings: [...new Map(warnings.map((w) => [JSON.stringify(w), w])).values()] };
+}
+
+/**
+ * Work tied to its day (mowing, watering) on the day the site's crew does it: the site's
+ * orders of a day go together to the site's crew when they fit its hours (kept orders
+ * counted), else together to the crew working that day with the most room they fit in, else
+ * one by one; an order that fits no crew stays with the site's crew over its hours (it is due
+ * that day). Larger site-days go first, so they stay whole.
+ */
+function placeFixed(fixed: readonly ScheduledOrder[], crews: readonly PlanCrewInput[], ledger: ReturnType<typeof crewDayLedger>, open: (c: PlanCrewInput, d: string) => boolean): ScheduledOrder[] {
+  const groups = new Map<string, ScheduledOrder[]>();
+  const out: ScheduledOrder[] = [];
+  for (const s of fixed) {
+    if (s.crewId === null) {
+      out.push(s);
+      continue;
+    }
+    const key = `${s.plannedDate}|${s.siteId}|${s.crewId}`;
+    groups.set(key, [...(groups.get(key) ?? []), s]);
+  }
+  const sum = (list: readonly ScheduledOrder[]) => list.reduce((t, s) => t + s.plannedHours, 0);
+  const ordered = [...groups.values()].sort((a, b) => {
+    const x = a[0] as ScheduledOrder;
+    const y = b[0] as ScheduledOrder;
+    return (x.plannedDate < y.plannedDate ? -1 : x.plannedDate > y.plannedDate ? 1 : 0) || sum(b) - sum(a) || x.siteId - y.siteId || (x.crewId as number) - (y.crewId as number);
+  });
+  const crewById = new Map(crews.map((c) => [c.id, c]));
+  /** The crew that takes `hours` at the site on the day within its hours: the site's crew first, else the one with the most room left. */
+  const fitting = (own: number, date: string, siteId: number, hours: number): number | null => {
+    const ownCrew = crewById.get(own);
+    if (ownCrew && ledger.hoursWith(own, date, siteId, hours) <= ownCrew.hoursPerDay + 1e-9) return own;
+    let best: { id: number; share: number } | null = null;
+    for (const c of crews) {
+      if (c.id === own || !c.workDays.includes(weekdayOf(date)) || !open(c, date)) continue;
+      const after = ledger.hoursWith(c.id, date, siteId, hours);
+      if (after > c.hoursPerDay + 1e-9) continue;
+      const share = after / Math.max(1e-9, c.hoursPerDay);
+      if (!best || share < best.share - 1e-9) best = { id: c.id, share };
+    }
+    return best?.id ?? null;
+  };
+  for (const list of ordered) {
+    const first = list[0] as ScheduledOrder;
+    const own = first.crewId as number;
+    const whole = fitting(own, first.plannedDate, first.siteId, sum(list));
+    const sorted = [...list].sort((a, b) => b.plannedHours - a.plannedHours || a.fieldId - b.fieldId || (a.task < b.task ? -1 : a.task > b.task ? 1 : 0));
+    for (const s of sorted) {
+      const crewId = whole ?? fitting(own, s.plannedDate, s.siteId, s.plannedHours) ?? own;
+      const placed = { ...s, crewId };
+      ledger.place(placed);
+      out.push(placed);
+    }
+  }
+  return out;
 }
 
 /** A crew that is not the site's own takes work only when it has clearly more room (share of a day). */
@@ -854,7 +979,12 @@ function crewDayLedger(input: AssignInput) {
     }
     return d.hours + hours + (d.sites.size + 1) * unload + d.drive + (2 * detourKm) / input.travel.speedKmh;
   };
-  return { place, hoursWith };
+  /** The day's hours as they stand (work, load/unload, drive). */
+  const hoursOf = (crewId: number, date: string) => {
+    const d = dayOf(crewId, date);
+    return d.hours + d.sites.size * unload + d.drive;
+  };
+  return { place, hoursWith, hoursOf };
 }
 
 /** Equipment: the crew's own unit of the kind first, then the district pool; a mower must fit the kind and HOC asked. */

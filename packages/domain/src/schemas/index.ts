@@ -11,3 +11,5 @@ export * from './crews.ts';
 export * from './work.ts';
 export * from './settings.ts';
 export * from './closures.ts';
+export * from './stripes.ts';
+export * from './requests.ts';

@@ -150,3 +150,9 @@ export const applicationSchema = z
   })
   .strict();
 export type ApplicationInput = z.infer<typeof applicationSchema>;
+/** `POST /api/calendar-feeds`: a partner sends nothing; a foreman names the crew. */
+export const createCalendarFeedSchema = z.object({ crewId: idSchema.optional() }).strict();
+export type CreateCalendarFeedInput = z.infer<typeof createCalendarFeedSchema>;
+
+/** `GET /api/calendar/:token.ics`: the secret as it was made (base64url, 43 characters). */
+export const calendarTokenParamsSchema = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'not a calendar address') });

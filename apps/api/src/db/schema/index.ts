@@ -4,3 +4,4 @@ export * from './records.ts';
 export * from './weather.ts';
 export * from './standards.ts';
 export * from './work.ts';
+export * from './requests.ts';

@@ -80,3 +80,30 @@ export const userTokens = pgTable(
   },
   (t) => [uniqueIndex('user_tokens_hash_key').on(t.tokenHash)],
 );
+
+/**
+ * Private calendar feeds: a partner's own (bookings, game-day work and closures of his fields)
+ * or a crew's, made by its foreman. Only a hash of the secret is kept; making a new one for the
+ * same owner revokes the old, so a leaked address stops working.
+ */
+export const calendarFeeds = pgTable(
+  'calendar_feeds',
+  {
+    ...id,
+    kind: text('kind').$type<'partner' | 'crew'>().notNull(),
+    /** The partner whose feed it is (kind partner). */
+    userId: integer('user_id').references(() => users.id, { onDelete: 'cascade' }),
+    /** The crew whose work it shows (kind crew), with its district for scope. */
+    crewId: integer('crew_id').references(() => crews.id, { onDelete: 'cascade' }),
+    districtId: integer('district_id').references(() => districts.id, { onDelete: 'cascade' }),
+    tokenHash: text('token_hash').notNull(),
+    createdBy: integer('created_by').references(() => users.id, { onDelete: 'set null' }),
+    revokedAt: instant('revoked_at'),
+    ...createdAt,
+  },
+  (t) => [
+    uniqueIndex('calendar_feeds_hash_key').on(t.tokenHash),
+    index('calendar_feeds_user_idx').on(t.userId),
+    index('calendar_feeds_crew_idx').on(t.crewId),
+  ],
+);

@@ -1,6 +1,6 @@
 /** The department's Standards (one row per maintenance level), field checks and imports. */
 import { sql } from 'drizzle-orm';
-import { boolean, check, date, index, integer, jsonb, pgTable, real, smallint, text } from 'drizzle-orm/pg-core';
+import { boolean, check, date, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
 import { HARDNESS_DEVICES, type HardnessDevice, type ImportSummary, type LevelStandard, type WearArea } from '@swardwise/domain';
 import { fieldRef } from './city.ts';
 import { users } from './people.ts';
@@ -51,6 +51,30 @@ export const fieldChecks = pgTable(
     // A reading names its tester, and a tester is named only with a reading.
     check('field_checks_gmax_device_check', sql`(${t.gmax} IS NULL) = (${t.gmaxDevice} IS NULL) AND (${t.gmaxDevice} IS NULL OR ${t.gmaxDevice} IN (${sql.raw(HARDNESS_DEVICES.map((d) => `'${d}'`).join(', '))}))`),
   ],
+);
+
+/**
+ * Photos of a field check logged from the field page (a check logged on a work order keeps its
+ * photos with the order). Stored as the crews' photos are: re-encoded, the name made here.
+ */
+export const fieldCheckPhotos = pgTable(
+  'field_check_photos',
+  {
+    ...id,
+    fieldCheckId: integer('field_check_id')
+      .notNull()
+      .references(() => fieldChecks.id, { onDelete: 'cascade' }),
+    /** File name inside the uploads folder (never a client-supplied path). */
+    fileName: text('file_name').notNull(),
+    mime: text('mime').notNull(),
+    width: integer('width').notNull(),
+    height: integer('height').notNull(),
+    bytes: integer('bytes').notNull(),
+    createdBy: integer('created_by').references(() => users.id),
+    ...createdAt,
+  },
+  // A retried upload (same check, same reference, same name) is stored once.
+  (t) => [index('field_check_photos_check_idx').on(t.fieldCheckId), uniqueIndex('field_check_photos_file_key').on(t.fieldCheckId, t.fileName)],
 );
 
 /**

@@ -1,7 +1,7 @@
 /** Equipment, work orders and their photos: the crews' side of the week plan. */
 import { sql } from 'drizzle-orm';
 import { boolean, date, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
-import type { ApplicationRateUnit, ApplicationTask, ApplicationWeather, ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, WorkStatus, WorkTask } from '@swardwise/domain';
+import type { ApplicationRateUnit, ApplicationTask, ApplicationWeather, ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, StripePattern, WorkStatus, WorkTask } from '@swardwise/domain';
 import { districtRef, fieldRef, sites } from './city.ts';
 import { crews, users } from './people.ts';
 import { createdAt, id, instant, versioned } from './columns.ts';
@@ -191,4 +191,22 @@ export const applications = pgTable(
     ...createdAt,
   },
   (t) => [index('applications_field_idx').on(t.fieldId, t.appliedOn), index('applications_district_idx').on(t.districtId, t.appliedOn)],
+);
+
+/**
+ * The stripe pattern a foreman asks for on a field's mowings, and the mower its pass plan is
+ * worked out for (null: the mower the week plan picks). One row per field; no row, no pattern.
+ * Scope comes from the field's site.
+ */
+export const fieldStripes = pgTable(
+  'field_stripes',
+  {
+    ...id,
+    ...fieldRef,
+    pattern: text('pattern').$type<StripePattern>().notNull(),
+    mowerId: integer('mower_id').references(() => equipment.id, { onDelete: 'set null' }),
+    setBy: integer('set_by').references(() => users.id),
+    ...versioned,
+  },
+  (t) => [uniqueIndex('field_stripes_field_key').on(t.fieldId)],
 );

@@ -4,6 +4,7 @@ import { errors, addDaysIso, CULTURAL_TASKS, MOWER_KINDS, type CulturalTask, typ
 import type { Queryable } from '../../db/client.ts';
 import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, workOrders } from '../../db/schema/index.ts';
 import { workOrderRows, type WorkOrderRow } from '../work-orders.ts';
+import { stripePatternsOf } from '../stripes.ts';
 
 export interface GenerationInput {
   districtId: number;
@@ -137,6 +138,7 @@ export async function planFields(db: Queryable, q: GenerationInput) {
   const paintsOf = new Map<number, { date: string; eventId: number | null }[]>();
   for (const p of paintRows) paintsOf.set(p.fieldId, [...(paintsOf.get(p.fieldId) ?? []), { date: p.date, eventId: typeof p.details.eventId === 'number' ? p.details.eventId : null }]);
   const { culturalOf, wearOf } = await culturalRecords(db, fieldRows.map((f) => f.id), q.weekStart);
+  const stripesOf = await stripePatternsOf(db, fieldRows.map((f) => f.id));
   const eventsOf = new Map<number, { id: number; startsOn: string; title: string }[]>();
   for (const e of events) eventsOf.set(e.fieldId, [...(eventsOf.get(e.fieldId) ?? []), e]);
   const toPlanField = (f: DistrictFieldRow): PlanField => ({
@@ -161,6 +163,7 @@ export async function planFields(db: Queryable, q: GenerationInput) {
     paints: paintsOf.get(f.id) ?? [],
     culturalDone: culturalOf.get(f.id) ?? {},
     lastWear: wearOf.get(f.id) ?? null,
+    stripes: stripesOf.get(f.id) ?? null,
   });
   return { fieldRows, toPlanField };
 }

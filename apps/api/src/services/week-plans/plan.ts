@@ -91,6 +91,7 @@ export async function planDistrictWeek(db: Queryable, q: GenerationInput, existi
     ...(notBefore ? { notBefore } : {}),
   });
   const fieldNames = new Map(fieldRows.map((f) => [f.id, f.name]));
-  const words = [...warnings, ...assigned.warnings].map((w) => weekWarningText(w, (id) => fieldNames.get(id)));
+  const crewNames = new Map(crewRows.map((c) => [c.id, c.name]));
+  const words = [...warnings, ...assigned.warnings].map((w) => weekWarningText(w, (id) => fieldNames.get(id), (id) => crewNames.get(id)));
   return { orders: assigned.orders, warnings: [...new Set(words)], crewRows, fieldCount: fieldRows.length };
 }

@@ -2,7 +2,7 @@ import type { Action, AppAbility, Role, SubjectName } from '@swardwise/domain';
 
 export interface NavItem {
   key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields' | 'standards' | 'map' | 'imports' | 'crews' | 'equipment' | 'weather'
-    | 'week' | 'records';
+    | 'week' | 'records' | 'requests';
   label: string;
   to: string;
   roles: Role[];
@@ -18,6 +18,7 @@ const NAV_ITEMS: NavItem[] = [
   { key: 'district', label: 'My district', to: '/district', roles: ['foreman'], can: ['read', 'District'] },
   { key: 'today', label: 'Today', to: '/today', roles: ['crew'], can: ['read', 'Crew'] },
   { key: 'my-fields', label: 'My fields', to: '/my-fields', roles: ['partner'], can: ['read', 'Field'] },
+  { key: 'requests', label: 'Requests', to: '/requests', roles: ['admin', 'head', 'foreman', 'partner'], can: ['read', 'Request'] },
   { key: 'sites', label: 'Sites', to: '/sites', roles: ['admin', 'head', 'foreman'], can: ['read', 'Site'] },
   { key: 'fields', label: 'Fields', to: '/fields', roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'] },
   { key: 'map', label: 'Map', to: '/map', roles: ['admin', 'head', 'foreman', 'crew', 'partner'], can: ['read', 'Field'] },

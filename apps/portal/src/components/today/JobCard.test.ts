@@ -90,6 +90,8 @@ describe('JobCard', () => {
     expect(card.get('[data-test="job-directions"]').attributes('href')).toBe('geo:41.512346,-66.400000?q=41.512346,-66.400000(Soccer%201)');
     expect(card.text()).not.toMatch(/Pattern/);
     expect(mountCard({ order: order({ details: { hocMm: 50.8, pattern: 'Stripes along the long axis' } }) }).text()).toMatch(/Pattern\s*Stripes along the long axis/);
+    // A pattern the week plan set reads as its label.
+    expect(mountCard({ order: order({ details: { hocMm: 50.8, pattern: 'checkerboard' } }) }).text()).toMatch(/Pattern\s*Checkerboard \(criss-cross\)/);
   });
 
   test('should offer Log check on a check job, and a same-day reopen on a done job', async () => {
