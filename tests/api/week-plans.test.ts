@@ -73,12 +73,7 @@ describe('week plan generation', () => {
     expect(patch.body).toMatchObject({ pinned: true, plannedDate: '2026-05-29', status: 'assigned' });
     const again = await foreman.post('/api/week-plans/generate').send({ districtId: api.fixture.districts.north, weekStart: WEEK });
     expect(again.status).toBe(200);
-    expect(again.body.diff.summary).toMatchObject({ added: 0, removed: 0, kept: 1 });
-    // Only cultural work, which may go on any day of the week, moves to the day with the most room after the hand move.
-    for (const c of again.body.diff.changed as Array<{ after: { task: string }; what: string[] }>) {
-      expect(['aerate', 'overseed', 'topdress', 'weed_control']).toContain(c.after.task);
-      expect(c.what.every((w) => w === 'date' || w === 'crew')).toBe(true);
-    }
+    expect(again.body.diff.summary).toMatchObject({ added: 0, removed: 0, changed: 0, kept: 1 });
     const after = again.body.board as Board;
     expect(after.orders.find((o) => o.id === moved.id)).toMatchObject({ plannedDate: '2026-05-29', pinned: true });
     expect(after.orders).toHaveLength(before.orders.length);

@@ -738,6 +738,12 @@ export interface AssignInput {
   travel: TravelSettings;
   /** First day work can still go on (today, when the week has begun). */
   notBefore?: string;
+  /**
+   * Where the last generation put the week's generated orders that are not kept (the plan the
+   * foreman applied). Work with slack stays on its day and crew while that day is still in its
+   * window and within the crew's hours, so generating again moves nothing whose inputs did not change.
+   */
+  previous?: ReadonlyArray<{ fieldId: number; task: WorkTask; plannedDate: string; crewId: number | null }>;
 }
 
 /**
@@ -769,8 +775,12 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
     .filter(spread)
     .sort((a, b) => (lastOf(a) < lastOf(b) ? -1 : lastOf(a) > lastOf(b) ? 1 : 0) || b.plannedHours - a.plannedHours || a.siteId - b.siteId || a.fieldId - b.fieldId || (a.task < b.task ? -1 : a.task > b.task ? 1 : 0));
   const today = input.notBefore && dates[0] === input.notBefore ? input.notBefore : null;
+  const previous = [...(input.previous ?? [])];
   for (const o of flexible) {
-    const s = spreadOrder(o, { crews, dates, today, siteCrew: crewOfSite.get(o.siteId) ?? null, ledger, open: openDay }) ?? scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings, openDay);
+    const s =
+      stayPut(o, previous, { crews, dates, ledger, open: openDay }) ??
+      spreadOrder(o, { crews, dates, today, siteCrew: crewOfSite.get(o.siteId) ?? null, ledger, open: openDay }) ??
+      scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings, openDay);
     ledger.place(s);
     scheduled.push(s);
   }
@@ -844,6 +854,30 @@ function placeFixed(fixed: readonly ScheduledOrder[], crews: readonly PlanCrewIn
 const OTHER_CREW_PENALTY = 0.15;
 /** A painting moves earlier than the last working day before its booking only when that day is much fuller (share of a day per day earlier). */
 const PAINT_EARLY_PENALTY = 0.3;
+
+/**
+ * The crew-day the last generation gave the same field's same task, when it is still open to
+ * the order (in its window, not a day it avoids, the crew works it) and within the crew's
+ * hours; the placement is used up so a second order of the task spreads on its own.
+ */
+function stayPut(
+  o: AskedOrder,
+  previous: Array<{ fieldId: number; task: WorkTask; plannedDate: string; crewId: number | null }>,
+  env: { crews: readonly PlanCrewInput[]; dates: readonly string[]; ledger: ReturnType<typeof crewDayLedger>; open: (c: PlanCrewInput, d: string) => boolean },
+): ScheduledOrder | null {
+  const latest = o.latestDate ?? (env.dates[env.dates.length - 1] as string);
+  const earliest = o.earliestDate && o.earliestDate > (env.dates[0] as string) ? o.earliestDate : (env.dates[0] as string);
+  const k = previous.findIndex((p) => {
+    if (p.fieldId !== o.fieldId || p.task !== o.task || p.crewId === null) return false;
+    const d = p.plannedDate;
+    if (d < earliest || d > latest || !env.dates.includes(d) || o.avoidDates?.includes(d)) return false;
+    const c = env.crews.find((x) => x.id === p.crewId);
+    return !!c && c.workDays.includes(weekdayOf(d)) && env.open(c, d) && env.ledger.hoursWith(c.id, d, o.siteId, o.plannedHours) <= c.hoursPerDay + 1e-9;
+  });
+  if (k < 0) return null;
+  const [p] = previous.splice(k, 1);
+  return { ...o, plannedDate: p!.plannedDate, crewId: p!.crewId, equipmentId: null };
+}
 
 /** The crew-day in the order's window with the most room after it; null when no crew works a day of the window. */
 function spreadOrder(
