@@ -6,7 +6,7 @@
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { browser, checkA11y, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 // A September week of the demo season (cool-season turf growing); no other browser test plans it.
@@ -81,13 +81,42 @@ describe('cultural work', () => {
       await dialog.locator('[data-test="order-record-application"]').click();
       const form = dialog.locator('[data-test="application-form"]');
       await form.locator('[data-test="application-product"]').fill('Demo broadleaf herbicide');
+      // A rate with decimals, as labels give them: the browser's own number check must not block it.
       await form.locator('[data-test="application-rate"] input').fill('1.1');
       await form.locator('[data-test="application-area"] input').fill('5000');
       await form.locator('[data-test="application-licence"]').fill('QA-20417');
       await foreman.screenshot({ path: path.join(shots, 'order-application-form.png') });
+      await foreman.setViewportSize({ width: 390, height: 844 });
+      await form.locator('[data-test="application-licence"]').scrollIntoViewIfNeeded();
+      await checkA11y(foreman);
+      await foreman.screenshot({ path: path.join(shots, 'order-application-form-phone.png') });
+      // The dialog and its form fit the phone's width (nothing scrolls sideways).
+      expect(await foreman.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+      expect((await form.boundingBox())!.width).toBeLessThanOrEqual(390);
+      await foreman.setViewportSize({ width: 1366, height: 1000 });
+      const save = form.locator('[data-test="application-save"]');
+      // The button's text keeps AA contrast when hovered and while the record is being stored.
+      await save.hover();
+      await checkA11y(foreman);
+      let release = () => {};
+      const held = new Promise<void>((resolve) => (release = resolve));
+      let routed = 0;
+      // On the context: the portal's service worker makes the request, which a page route does not see.
+      await foreman.context().route(`**/api/work-orders/${made.id}/application`, async (route) => {
+        routed += 1;
+        await held;
+        await route.continue();
+      });
+      await save.click();
+      await expect.poll(() => routed, { timeout: 20_000 }).toBe(1);
+      await expect.poll(() => save.getAttribute('class'), { timeout: 20_000 }).toContain('is-loading');
+      await checkA11y(foreman);
+      await foreman.screenshot({ path: path.join(shots, 'order-application-saving.png') });
+      // Held until now, so the answer cannot come before it is awaited.
       const saved = foreman.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${made.id}/application`));
-      await form.locator('[data-test="application-save"]').click();
+      release();
       expect((await saved).status()).toBe(201);
+      await foreman.context().unroute(`**/api/work-orders/${made.id}/application`);
       // The form closes once the record is stored.
       await dialog.locator('[data-test="order-record-application"]').waitFor();
 
