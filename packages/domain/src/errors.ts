@@ -84,6 +84,7 @@ export const ERROR_CODES = {
   'work_report/not_finished': 'conflict',
   'work_report/field_closed': 'conflict',
   'field_check/not_a_check': 'conflict',
+  'application/not_applicable': 'conflict',
   'field_check/photos_on_order': 'conflict',
   'work_photo/no_file': 'invalid',
   'work_photo/not_an_image': 'unsupported',

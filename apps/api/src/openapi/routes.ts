@@ -6,6 +6,7 @@
 import type { z } from 'zod';
 import type { oas31 } from 'zod-openapi';
 import {
+  applicationSchema,
   acceptInviteSchema,
   closeFieldSchema,
   setFieldStripesSchema,
@@ -400,6 +401,18 @@ const workOrders: RouteDoc[] = [
   },
   {
     method: 'post',
+    path: '/api/work-orders/:id/application',
+    tag: 'Work orders',
+    summary: 'Record what was applied on a feed, overseeding, topdressing or weed-control order: product, rate, area, date, applicator (and licence for a pesticide); the day’s station weather is added',
+    description: 'The product label is the law; pesticides by a licensed applicator where required. A day still to come, or weed control without a licence number, is refused with 400.',
+    access: allowed('log', 'WorkOrder'),
+    params: idParamSchema,
+    body: applicationSchema,
+    answers: [json(201, 'The stored application with the weather on file for its day.', shape({ application: row('The application') }))],
+    errors: [409],
+  },
+  {
+    method: 'post',
     path: '/api/work-orders/:id/reopen',
     tag: 'Work orders',
     summary: 'Reopen a done or skipped work order',
@@ -507,6 +520,15 @@ const weekPlans: RouteDoc[] = [
         }),
       ),
     ],
+  },
+  {
+    method: 'get',
+    path: '/api/records/applications',
+    tag: 'Records',
+    summary: 'Applications (feed, seed, topdressing, pesticides) over a range of dates, latest first, with the weather of each day',
+    access: allowed('read', 'WorkOrder'),
+    query: dateRangeQuerySchema,
+    answers: [json(200, 'Applications the caller may read.', shape({ applications: rows('Applications') }))],
   },
 ];
 

@@ -1,13 +1,14 @@
 /** One work order as a crew works it: read it, report on it, add and show its photos. */
 import { Router } from 'express';
 import { z } from 'zod';
-import { fieldCheckSchema, idParamSchema, idSchema, reopenSchema, workReportSchema, appError } from '@swardwise/domain';
+import { applicationSchema, fieldCheckSchema, idParamSchema, idSchema, reopenSchema, workReportSchema, appError } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
 import { addWorkPhoto, PHOTO_MAX_BYTES, photoFile } from '../services/work-photos.ts';
 import { logFieldCheck } from '../services/field-checks.ts';
+import { recordApplication } from '../services/applications.ts';
 import { getWorkOrder, orderFor, reopenWork, reportWork } from '../services/work-reports.ts';
 import { finishRequestsOf, reopenRequestsOf } from '../services/requests.ts';
 
@@ -43,6 +44,14 @@ export function workReportsRouter({ db, config, mailer, background }: AppDeps): 
     const { id } = parse(idParamSchema, req.params, 'params');
     await orderFor(ctx, id, 'log');
     res.status(201).json(await logFieldCheck(ctx, id, parse(fieldCheckSchema, req.body, 'body')));
+  });
+
+  router.post('/:id/application', async (req, res) => {
+    const ctx = ctxOf(db, req);
+    const { id } = parse(idParamSchema, req.params, 'params');
+    // Who may log on this order is checked before the body is read.
+    await orderFor(ctx, id, 'log');
+    res.status(201).json({ application: await recordApplication(ctx, id, parse(applicationSchema, req.body, 'body')) });
   });
 
   router.post('/:id/reopen', async (req, res) => {

@@ -4,6 +4,8 @@ import {
   DEFAULT_PARAMETERS,
   DEFAULT_STANDARDS,
   LEVELS,
+  culturalProgramsOf,
+  type CulturalPrograms,
   type DepartmentParameters,
   type Level,
   type LevelStandard,
@@ -68,8 +70,10 @@ export async function listStandards(ctx: Ctx): Promise<StandardsAnswer<Date>> {
 
 function merge(data: LevelStandard, changes: Omit<UpdateLevelStandardInput, 'version'>): LevelStandard {
   const next: LevelStandard = { ...data, hocMm: { ...data.hocMm }, hocByGrassMm: { ...data.hocByGrassMm } };
-  const { hocMm, hocByGrassMm, ...plain } = changes;
+  const { hocMm, hocByGrassMm, cultural, ...plain } = changes;
   Object.assign(next, plain);
+  // A task's program is replaced whole; the tasks not sent keep theirs.
+  if (cultural) next.cultural = { ...culturalProgramsOf(data), ...(cultural as Partial<CulturalPrograms>) };
   for (const [sport, seasons] of Object.entries(hocMm ?? {}) as [keyof LevelStandard['hocMm'], { cool?: number; warm?: number }][]) {
     next.hocMm[sport] = { ...next.hocMm[sport], ...seasons };
   }

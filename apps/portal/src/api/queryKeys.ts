@@ -26,6 +26,8 @@ export const queryKeys = {
   /** Not under `map`: the bundled basemap does not change with the data. */
   basemap: () => ['basemap'] as const,
   records: (query: object) => ['records', query] as const,
+  /** Under `records`: a work order's change (an application recorded on it) makes them stale. */
+  applications: (query: object) => ['records', 'applications', query] as const,
   requests: (query: object) => ['requests', 'list', query] as const,
   request: (id: number) => ['requests', 'detail', id] as const,
   sites: (query: object) => ['sites', 'list', query] as const,

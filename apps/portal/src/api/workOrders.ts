@@ -1,4 +1,6 @@
 import type {
+  ApplicationInput,
+  ApplicationRow,
   CreateWorkOrderInput,
   FieldCheckAnswer,
   FieldCheckBody,
@@ -71,4 +73,9 @@ export function listFieldWork(fieldId: number, page: number, pageSize: number, s
 /** A field's latest field checks. */
 export async function listFieldChecks(fieldId: number, signal?: AbortSignal): Promise<FieldCheckList> {
   return api.get<FieldCheckList>(`/fields/${fieldId}/checks`, undefined, signal);
+}
+
+/** Records what was applied on a feed, seeding, topdressing or weed-control order. */
+export function recordApplication(orderId: number, body: ApplicationInput): Promise<{ application: ApplicationRow }> {
+  return api.post<{ application: ApplicationRow }>(`/work-orders/${orderId}/application`, body);
 }

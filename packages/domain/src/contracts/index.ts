@@ -16,6 +16,7 @@ export * from './field-checks.ts';
 export * from './dev.ts';
 export * from './config.ts';
 export * from './closures.ts';
+export * from './applications.ts';
 export * from './stripes.ts';
 export * from './partner.ts';
 export * from './calendar-feeds.ts';

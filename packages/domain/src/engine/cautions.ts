@@ -18,6 +18,9 @@ export const CAUTIONS = {
     'Lightning: clear the field at the first thunder and stay off until 30 minutes after the last thunder (NOAA / National Weather Service: “When thunder roars, go indoors”). Local rules and the sport’s governing body decide.',
   water:
     'Watering restrictions are local law: the allowed days, hours and volumes set by the water provider override this schedule.',
+  /** Shown where a pesticide or fertiliser application is recorded (the 10 mph drift limit many labels set: from memory). */
+  application:
+    'The product label is the law: apply only at its rate, to its sites and in its weather limits. Pesticides by a licensed applicator where required; keep people off for the label\'s re-entry interval and post the notice local rules ask for; do not spray in wind that drifts (most labels: not above about 10 mph) or before rain the label warns of; keep buffers to water. Local codes and licensed practice decide.',
   lines:
     'Use turf-safe line paint at the label\'s dilution; dark pigments (reds, blues) can damage turf, so put a white base coat under colours.',
 } as const;

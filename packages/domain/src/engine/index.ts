@@ -19,4 +19,5 @@ export * from './weekgen.ts';
 export * from './week-warnings.ts';
 export * from './field-check.ts';
 export * from './closures.ts';
+export * from './cultural.ts';
 export * from './stripes.ts';

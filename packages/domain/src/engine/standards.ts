@@ -14,6 +14,8 @@ import type { Weekday } from './dates.ts';
 import { G_PER_M2_PER_LB_PER_1000FT2 } from './units.ts';
 import type { LineSettings } from './lines.ts';
 import type { TurfKcSettings } from './water.ts';
+import { DEFAULT_CULTURAL } from './cultural.ts';
+import type { CulturalPrograms } from './cultural.ts';
 
 /** What one maintenance level asks for. */
 export interface LevelStandard {
@@ -39,6 +41,8 @@ export interface LevelStandard {
   fieldCheckDays: number;
   /** Surface score (0–100) the level aims for. */
   targetScore: number;
+  /** Aeration, overseeding, topdressing and weed control per season (absent in rows saved before it: the level's default, `culturalProgramsOf`). */
+  cultural?: CulturalPrograms;
 }
 
 export type Standards = Record<Level, LevelStandard>;
@@ -86,6 +90,7 @@ export const DEFAULT_STANDARDS: Standards = {
     lineRepaintDays: 7,
     fieldCheckDays: 7,
     targetScore: 85,
+    cultural: DEFAULT_CULTURAL[1],
   },
   2: {
     level: 2,
@@ -103,6 +108,7 @@ export const DEFAULT_STANDARDS: Standards = {
     lineRepaintDays: 10,
     fieldCheckDays: 14,
     targetScore: 75,
+    cultural: DEFAULT_CULTURAL[2],
   },
   3: {
     level: 3,
@@ -117,6 +123,7 @@ export const DEFAULT_STANDARDS: Standards = {
     lineRepaintDays: 14,
     fieldCheckDays: 30,
     targetScore: 65,
+    cultural: DEFAULT_CULTURAL[3],
   },
   4: {
     level: 4,
@@ -131,8 +138,15 @@ export const DEFAULT_STANDARDS: Standards = {
     lineRepaintDays: null,
     fieldCheckDays: 60,
     targetScore: 50,
+    cultural: DEFAULT_CULTURAL[4],
   },
 };
+
+/** The cultural programs of a level: its own, else the level's default, task by task. */
+export function culturalProgramsOf(std: LevelStandard): CulturalPrograms {
+  const base = DEFAULT_CULTURAL[std.level];
+  return { ...base, ...(std.cultural ?? {}) };
+}
 
 /** The range of Gmax readings a department accepts from one tester. */
 export interface HardnessRange {
@@ -263,6 +277,24 @@ export interface PlanningParameters {
   dormantGp: number;
   /** Least gross irrigation need in a week worth a watering order, mm. */
   minIrrigationMm: number;
+  /**
+   * Cultural work: the machine of each task (working width m, speed km/h, field efficiency,
+   * set-up and clean-up min), the growth potential aeration and overseeding wait for (the
+   * turf must grow to heal holes and take seed; common practice), and the share of a field
+   * overseeded when no field check names its worn share. Demo defaults, not published values.
+   */
+  cultural?: CulturalPlanning;
+}
+
+/** How cultural work is sized and when it may go (department settings). */
+export interface CulturalPlanning {
+  machines: Record<'aerate' | 'overseed' | 'topdress' | 'weed_control', { widthM: number; speedKmh: number; efficiency: number; setupMin: number }>;
+  /** Aeration and overseeding wait while the week's mean GP is below this; topdressing and weed control use `dormantGp`. */
+  activeGrowthGp: number;
+  /** Share of the field overseeded (worn goalmouths and centre) when no field check gives a bare share. */
+  defaultOverseedShare: number;
+  /** No aeration, overseeding or topdressing on a booking's day or this many days before it. */
+  clearDaysBeforeBooking: number;
 }
 
 /** Demo defaults of the department parameters; every cost is invented. */
@@ -324,6 +356,18 @@ export const DEFAULT_PARAMETERS: DepartmentParameters = {
     firstCoatAfterDays: 28,
     dormantGp: 0.1,
     minIrrigationMm: 2,
+    cultural: {
+      // Tractor-mounted core aerator, slit seeder, spinner topdresser and boom sprayer (demo defaults).
+      machines: {
+        aerate: { widthM: 1.5, speedKmh: 4, efficiency: 0.75, setupMin: 20 },
+        overseed: { widthM: 1.5, speedKmh: 5, efficiency: 0.7, setupMin: 20 },
+        topdress: { widthM: 2, speedKmh: 6, efficiency: 0.7, setupMin: 30 },
+        weed_control: { widthM: 4.5, speedKmh: 6, efficiency: 0.65, setupMin: 30 },
+      },
+      activeGrowthGp: 0.5,
+      defaultOverseedShare: 0.15,
+      clearDaysBeforeBooking: 1,
+    },
   },
 };
 

@@ -17,7 +17,14 @@ describe('weekWarningText', () => {
     expect(weekWarningText({ code: 'mowing_assumed', fieldId: 1, date: '2026-05-19' })).toMatch(/\(2026-05-19\) is after this week began/);
   });
 
-  test('should pass the weather warnings and lines painted on a booking\'s day from a field up to the district week', () => {
-    expect([...DISTRICT_WEEK_WARNINGS].sort()).toEqual(['no_weather_before_week', 'paint_on_event_day', 'weather_projected']);
+  test('should pass the weather warnings, lines painted on a booking\'s day and cultural work with no day left from a field up to the district week', () => {
+    expect([...DISTRICT_WEEK_WARNINGS].sort()).toEqual(['cultural_no_day', 'no_weather_before_week', 'paint_on_event_day', 'weather_projected']);
+  });
+
+  test('should word cultural work that waits for growth or for a day clear of bookings', () => {
+    expect(weekWarningText({ code: 'cultural_waits_growth', fieldId: 3, task: 'aerate', gp: 0.04, needs: 0.5 }, () => 'East Lawn')).toBe(
+      'Aerate on East Lawn is due but waits: the turf grows too little this week (growth potential 0.04, needs 0.50) to recover.',
+    );
+    expect(weekWarningText({ code: 'cultural_no_day', fieldId: 3, task: 'overseed' })).toMatch(/^Overseed on field 3 is due but every working day left/);
   });
 });

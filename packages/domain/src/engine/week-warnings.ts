@@ -2,6 +2,7 @@
  * What the week plan engine has to say about a week, as data: the engine returns these and
  * the words are chosen here, in one place, for whoever shows them.
  */
+import { WORK_TASK_LABELS } from '../vocabulary.ts';
 import type { WorkTask } from '../vocabulary.ts';
 
 export type WeekWarning =
@@ -23,11 +24,15 @@ export type WeekWarning =
   | { code: 'due_date_missed'; fieldId: number; date: string; task: WorkTask }
   /** No working day is left before the booking on `date`: its lines are painted on the day itself. */
   | { code: 'paint_on_event_day'; fieldId: number; date: string; eventTitle: string }
+  /** A cultural task is due but the turf grows too little this week (mean GP `gp` below `needs`) to recover: it waits. */
+  | { code: 'cultural_waits_growth'; fieldId: number; task: WorkTask; gp: number; needs: number }
+  /** A cultural task is due but every working day left in the week is a booking or the day before one. */
+  | { code: 'cultural_no_day'; fieldId: number; task: WorkTask }
   /** Work due on `date` does not fit the crew's hours that day (`hours` planned of `available`) and no other crew has room. */
   | { code: 'crew_day_over'; crewId: number; date: string; hours: number; available: number };
 
 /** The warnings a district's week shows from its fields' plans (the others explain one field only). */
-export const DISTRICT_WEEK_WARNINGS: ReadonlySet<WeekWarning['code']> = new Set(['no_weather_before_week', 'weather_projected', 'paint_on_event_day']);
+export const DISTRICT_WEEK_WARNINGS: ReadonlySet<WeekWarning['code']> = new Set(['no_weather_before_week', 'weather_projected', 'paint_on_event_day', 'cultural_no_day']);
 
 /**
  * The plain-language sentence of a warning, as the district week shows it. `fieldName` names
@@ -59,5 +64,9 @@ export function weekWarningText(w: WeekWarning, fieldName: (id: number) => strin
       return `${crewName(w.crewId) ?? `Crew ${w.crewId}`} has ${hm(w.hours)} h planned on ${w.date} for ${hm(w.available)} h: work due that day does not fit and no other crew has room. Move work by hand or add hours.`;
     case 'paint_on_event_day':
       return `Lines on ${name(w.fieldId)} for ${w.eventTitle} are painted on the day itself (${w.date}): no working day is left before it. Paint early and keep players off until the paint is dry.`;
+    case 'cultural_waits_growth':
+      return `${WORK_TASK_LABELS[w.task]} on ${name(w.fieldId)} is due but waits: the turf grows too little this week (growth potential ${w.gp.toFixed(2)}, needs ${w.needs.toFixed(2)}) to recover.`;
+    case 'cultural_no_day':
+      return `${WORK_TASK_LABELS[w.task]} on ${name(w.fieldId)} is due but every working day left this week is a booking or the day before one: it waits for next week.`;
   }
 }

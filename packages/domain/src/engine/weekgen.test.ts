@@ -564,4 +564,17 @@ describe('crew-days within their hours with kept work on them', () => {
     expect(said).toEqual([expect.objectContaining({ crewId: 1, date: MONDAY, available: 9 }), expect.objectContaining({ crewId: 1, date: FRIDAY, available: 9 })]);
     expect(weekWarningText(said[0]!, undefined, () => 'Crew A')).toMatch(/^Crew A has \d+:\d\d h planned on 2026-06-01 for 9:00 h/);
   });
+  test('should leave work with slack where the last generation put it while that day still has room, and move it when it has none', () => {
+    const crews = [{ id: 1, hoursPerDay: 9, workDays: allDays }];
+    const aerate: AskedOrder = { fieldId: 50, siteId: 10, task: 'aerate', askedDate: MONDAY, plannedHours: 2, reason: '', details: {}, latestDate: FRIDAY, flexible: true, equipmentKind: null };
+    const first = assignWeek({ weekStart: WEEK, orders: [aerate], crews, sites, yard, travel }).orders[0]!;
+    // A foreman then pins 3 h of other work on that day: the day still has room, the aeration stays.
+    const withHand = { keptHours: new Map([[`1|${first.plannedDate}`, 3]]), keptSites: new Map([[`1|${first.plannedDate}`, [11]]]) };
+    const previous = [{ fieldId: 50, task: 'aerate' as const, plannedDate: first.plannedDate, crewId: 1 }];
+    expect(assignWeek({ weekStart: WEEK, orders: [aerate], crews, sites, yard, travel, ...withHand }).orders[0]!.plannedDate).not.toBe(first.plannedDate);
+    expect(assignWeek({ weekStart: WEEK, orders: [aerate], crews, sites, yard, travel, ...withHand, previous }).orders[0]).toMatchObject({ plannedDate: first.plannedDate, crewId: 1 });
+    // A day filled past the crew's hours is a changed input: the aeration goes where there is room.
+    const full = { keptHours: new Map([[`1|${first.plannedDate}`, 8]]), keptSites: new Map([[`1|${first.plannedDate}`, [11]]]) };
+    expect(assignWeek({ weekStart: WEEK, orders: [aerate], crews, sites, yard, travel, ...full, previous }).orders[0]!.plannedDate).not.toBe(first.plannedDate);
+  });
 });

@@ -34,6 +34,9 @@ import { planRoute } from './routing.ts';
 import { fieldStripePlan } from './stripes.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor, levelStandard } from './standards.ts';
 import type { DepartmentParameters, LevelStandard, MowerSpec, PlanningParameters, Standards } from './standards.ts';
+import { culturalProgramsOf, grassSeason } from './standards.ts';
+import { AERATION_METHOD_LABELS, CULTURAL_TASKS, CULTURAL_TASK_WORDS, culturalDue, monthWindowWords, overseedShare } from './cultural.ts';
+import type { CulturalTask } from './cultural.ts';
 import { irrigationVolumeLitres, weekIrrigation, weeklyIrrigationSchedule } from './water.ts';
 
 /** A field as the week plan needs it. */
@@ -62,6 +65,10 @@ export interface PlanField {
    * counts from them.
    */
   paints?: ReadonlyArray<{ date: string; eventId: number | null }>;
+  /** Dates each cultural task was done this season (work orders logged done). */
+  culturalDone?: Partial<Record<CulturalTask, readonly string[]>>;
+  /** The last field check's bare share (%) and where the wear is, for overseeding. */
+  lastWear?: { checkedOn: string; barePct: number; areas: readonly string[] } | null;
   /** The stripe pattern asked for on its mowings, and the mower chosen for it (null: the plan's pick). */
   stripes?: { pattern: StripePattern; mowerId: number | null } | null;
 }
@@ -107,6 +114,8 @@ export interface AskedOrder {
   flexible: boolean;
   /** Equipment kind the order needs, to suggest a unit. */
   equipmentKind: 'mower' | 'line_marker' | 'spreader' | null;
+  /** Days a flexible order must not go on (a booking, or the day before it, for aeration). */
+  avoidDates?: readonly string[];
 }
 
 export interface FieldWeekInput {
@@ -247,6 +256,7 @@ export function planFieldWeek(input: FieldWeekInput): FieldWeekPlan {
     lineOrders(ctx, weekGp);
     if (weekGp >= ctx.planning.dormantGp && ctx.keptOf('feed').length === 0) feedOrders(ctx, daily);
     if (daily.share > 0) irrigationOrders(ctx, daily);
+    culturalOrders(ctx, weekGp);
   }
   fieldCheckOrders(ctx);
   return { fieldId: field.id, orders: ctx.orders, warnings: ctx.warnings };
@@ -572,6 +582,74 @@ function irrigationOrders(ctx: FieldWeekContext, daily: FieldDailySeries): void 
 }
 
 /**
+ * Cultural work: each task of the level's program that is due this week (`culturalDue`:
+ * in its window, fewer done this season than the program asks, its share of the window
+ * reached) while the turf grows enough to recover, on a working day that is not a booking
+ * or the day before one (aeration holes, seed and sand want a day clear of play).
+ */
+function culturalOrders(ctx: FieldWeekContext, weekGp: number): void {
+  const { field, level, planning, weekStart, weekEnd, start } = ctx;
+  const settings = planning.cultural ?? DEFAULT_PARAMETERS.planning.cultural!;
+  const programs = culturalProgramsOf(ctx.std);
+  const season = grassSeason(field.grass);
+  const workDays = ctx.input.workDays.length ? ctx.input.workDays : WEEKDAYS;
+  for (const task of CULTURAL_TASKS) {
+    const program = programs[task];
+    const kept = ctx.keptOf(task).map((k) => k.plannedDate);
+    // Kept in this week: planned or done already, never asked twice.
+    if (kept.length > 0) continue;
+    const doneDates = (field.culturalDone?.[task] ?? []).filter((d) => d < weekStart || d > weekEnd);
+    const due = culturalDue({ program, season, weekStart, weekEnd, doneDates });
+    if (!due.due) continue;
+    const needsGp = task === 'aerate' || task === 'overseed' ? settings.activeGrowthGp : planning.dormantGp;
+    if (weekGp < needsGp) {
+      ctx.warnings.push({ code: 'cultural_waits_growth', fieldId: field.id, task, gp: round(weekGp, 2), needs: needsGp });
+      continue;
+    }
+    // Turf work that leaves holes, seed or sand on the surface keeps clear of bookings; weed control follows the label's re-entry interval instead.
+    const avoid = new Set<string>();
+    if (task !== 'weed_control') {
+      for (const e of field.events) for (let k = 0; k <= settings.clearDaysBeforeBooking; k++) avoid.add(addDaysIso(e.startsOn, -k));
+    }
+    const earliest = [start, due.nextFrom, due.from].sort().pop() as string;
+    const latest = due.to < weekEnd ? due.to : weekEnd;
+    const days = ctx.dates.filter((d) => d >= earliest && d <= latest && workDays.includes(weekdayOf(d)) && !avoid.has(d));
+    if (days.length === 0) {
+      ctx.warnings.push({ code: 'cultural_no_day', fieldId: field.id, task });
+      continue;
+    }
+    const share = task === 'overseed' ? overseedShare(field.lastWear?.barePct, settings.defaultOverseedShare) : 1;
+    const areaM2 = field.areaM2 * share;
+    const machine = settings.machines[task];
+    const hours = hoursPerMowing(areaM2, machine) + machine.setupMin / 60;
+    const nth = due.done + 1;
+    const method = task === 'aerate' ? (program.method ?? 'core') : null;
+    const what = method ? `${AERATION_METHOD_LABELS[method].toLowerCase()} aeration` : CULTURAL_TASK_WORDS[task];
+    const wear =
+      task === 'overseed'
+        ? field.lastWear && field.lastWear.barePct > 0
+          ? `; worn areas${field.lastWear.areas.length ? ` (${field.lastWear.areas.map((a) => a.replace(/_/g, ' ')).join(', ')})` : ''}: ${round(field.lastWear.barePct, 0)} % bare at the check of ${field.lastWear.checkedOn}`
+          : `; goalmouths and centre, about ${round(settings.defaultOverseedShare * 100, 0)} % of the field (no bare share on record)`
+        : '';
+    const clear = avoid.size > 0 ? '; not on a booking day or the day before' : '';
+    ctx.orders.push({
+      fieldId: field.id,
+      siteId: field.siteId,
+      task,
+      askedDate: days[0] as string,
+      earliestDate: days[0] as string,
+      plannedHours: round(hours),
+      reason: `Level ${level} program: ${what} ${program.timesPerSeason}× a season in ${monthWindowWords(program[season])}; this is ${nth} of ${program.timesPerSeason} (${due.done} done)${wear}${clear}`,
+      details: { nth, of: program.timesPerSeason, windowFrom: due.from, windowTo: due.to, areaM2: round(areaM2, 0), share: round(share, 3), weekGp: round(weekGp, 2), ...(method ? { method } : {}) },
+      latestDate: latest,
+      flexible: true,
+      equipmentKind: null,
+      ...(avoid.size > 0 ? { avoidDates: [...avoid].sort() } : {}),
+    });
+  }
+}
+
+/**
  * The watering runs that kept irrigation orders already stand for. An order names its run
  * (`details.runOn`): a crew that does not work the run's day does it on its working day
  * before, so the order's date is not the run's. An order without the name stands for the run
@@ -660,6 +738,12 @@ export interface AssignInput {
   travel: TravelSettings;
   /** First day work can still go on (today, when the week has begun). */
   notBefore?: string;
+  /**
+   * Where the last generation put the week's generated orders that are not kept (the plan the
+   * foreman applied). Work with slack stays on its day and crew while that day is still in its
+   * window and within the crew's hours, so generating again moves nothing whose inputs did not change.
+   */
+  previous?: ReadonlyArray<{ fieldId: number; task: WorkTask; plannedDate: string; crewId: number | null }>;
 }
 
 /**
@@ -691,8 +775,12 @@ export function assignWeek(input: AssignInput): { orders: ScheduledOrder[]; warn
     .filter(spread)
     .sort((a, b) => (lastOf(a) < lastOf(b) ? -1 : lastOf(a) > lastOf(b) ? 1 : 0) || b.plannedHours - a.plannedHours || a.siteId - b.siteId || a.fieldId - b.fieldId || (a.task < b.task ? -1 : a.task > b.task ? 1 : 0));
   const today = input.notBefore && dates[0] === input.notBefore ? input.notBefore : null;
+  const previous = [...(input.previous ?? [])];
   for (const o of flexible) {
-    const s = spreadOrder(o, { crews, dates, today, siteCrew: crewOfSite.get(o.siteId) ?? null, ledger, open: openDay }) ?? scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings, openDay);
+    const s =
+      stayPut(o, previous, { crews, dates, ledger, open: openDay }) ??
+      spreadOrder(o, { crews, dates, today, siteCrew: crewOfSite.get(o.siteId) ?? null, ledger, open: openDay }) ??
+      scheduleOrder(o, crewOfSite.get(o.siteId) ?? null, dates, warnings, openDay);
     ledger.place(s);
     scheduled.push(s);
   }
@@ -767,6 +855,30 @@ const OTHER_CREW_PENALTY = 0.15;
 /** A painting moves earlier than the last working day before its booking only when that day is much fuller (share of a day per day earlier). */
 const PAINT_EARLY_PENALTY = 0.3;
 
+/**
+ * The crew-day the last generation gave the same field's same task, when it is still open to
+ * the order (in its window, not a day it avoids, the crew works it) and within the crew's
+ * hours; the placement is used up so a second order of the task spreads on its own.
+ */
+function stayPut(
+  o: AskedOrder,
+  previous: Array<{ fieldId: number; task: WorkTask; plannedDate: string; crewId: number | null }>,
+  env: { crews: readonly PlanCrewInput[]; dates: readonly string[]; ledger: ReturnType<typeof crewDayLedger>; open: (c: PlanCrewInput, d: string) => boolean },
+): ScheduledOrder | null {
+  const latest = o.latestDate ?? (env.dates[env.dates.length - 1] as string);
+  const earliest = o.earliestDate && o.earliestDate > (env.dates[0] as string) ? o.earliestDate : (env.dates[0] as string);
+  const k = previous.findIndex((p) => {
+    if (p.fieldId !== o.fieldId || p.task !== o.task || p.crewId === null) return false;
+    const d = p.plannedDate;
+    if (d < earliest || d > latest || !env.dates.includes(d) || o.avoidDates?.includes(d)) return false;
+    const c = env.crews.find((x) => x.id === p.crewId);
+    return !!c && c.workDays.includes(weekdayOf(d)) && env.open(c, d) && env.ledger.hoursWith(c.id, d, o.siteId, o.plannedHours) <= c.hoursPerDay + 1e-9;
+  });
+  if (k < 0) return null;
+  const [p] = previous.splice(k, 1);
+  return { ...o, plannedDate: p!.plannedDate, crewId: p!.crewId, equipmentId: null };
+}
+
 /** The crew-day in the order's window with the most room after it; null when no crew works a day of the window. */
 function spreadOrder(
   o: AskedOrder,
@@ -777,7 +889,7 @@ function spreadOrder(
   const forEvent = o.task === 'paint_lines' && o.latestDate !== null;
   let best: { date: string; crewId: number; fits: boolean; notToday: boolean; score: number } | null = null;
   for (const date of env.dates) {
-    if (date < earliest || date > latest) continue;
+    if (date < earliest || date > latest || o.avoidDates?.includes(date)) continue;
     for (const c of env.crews) {
       if (!c.workDays.includes(weekdayOf(date)) || !env.open(c, date)) continue;
       const after = env.ledger.hoursWith(c.id, date, o.siteId, o.plannedHours);

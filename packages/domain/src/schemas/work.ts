@@ -129,6 +129,27 @@ export const fieldCheckSchema = z
   });
 export type FieldCheckBody = z.infer<typeof fieldCheckSchema>;
 
+/** Work orders an application can be recorded on: something was put on the field. */
+export const APPLICATION_TASKS = ['feed', 'overseed', 'topdress', 'weed_control'] as const;
+export type ApplicationTask = (typeof APPLICATION_TASKS)[number];
+/** Rates as product labels state them (metric and US). */
+export const APPLICATION_RATE_UNITS = ['g/m²', 'kg/ha', 'L/ha', 'mL/100 m²', 'lb/1000 ft²', 'oz/1000 ft²', 'fl oz/1000 ft²', 'mm depth'] as const;
+export type ApplicationRateUnit = (typeof APPLICATION_RATE_UNITS)[number];
+
+/** `POST /api/work-orders/:id/application`: what was applied. A pesticide (weed control) names the applicator's licence. */
+export const applicationSchema = z
+  .object({
+    product: z.string({ error: 'enter the product as named on its label' }).trim().min(1, 'enter the product as named on its label').max(120, 'keep the product name under 120 characters'),
+    rate: z.number({ error: 'enter the rate applied' }).positive('the rate must be more than 0').max(100_000, 'that rate is not a field application'),
+    rateUnit: z.enum(APPLICATION_RATE_UNITS, { error: `the rate unit is one of ${APPLICATION_RATE_UNITS.join(', ')}` }),
+    areaM2: z.number({ error: 'enter the area treated' }).positive('the area must be more than 0').max(1_000_000, 'an area above 100 ha is not one field'),
+    appliedOn: isoDate,
+    applicator: z.string({ error: 'enter who applied it' }).trim().min(1, 'enter who applied it').max(80, 'keep the name under 80 characters'),
+    licenceNumber: z.string().trim().max(40, 'keep the licence number under 40 characters').nullable().default(null),
+    notes: z.string().trim().max(2000, 'keep the notes under 2,000 characters').default(''),
+  })
+  .strict();
+export type ApplicationInput = z.infer<typeof applicationSchema>;
 /** `POST /api/calendar-feeds`: a partner sends nothing; a foreman names the crew. */
 export const createCalendarFeedSchema = z.object({ crewId: idSchema.optional() }).strict();
 export type CreateCalendarFeedInput = z.infer<typeof createCalendarFeedSchema>;

@@ -1,7 +1,7 @@
 /** Equipment, work orders and their photos: the crews' side of the week plan. */
 import { sql } from 'drizzle-orm';
 import { boolean, date, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
-import type { ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, StripePattern, WorkStatus, WorkTask } from '@swardwise/domain';
+import type { ApplicationRateUnit, ApplicationTask, ApplicationWeather, ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, StripePattern, WorkStatus, WorkTask } from '@swardwise/domain';
 import { districtRef, fieldRef, sites } from './city.ts';
 import { crews, users } from './people.ts';
 import { createdAt, id, instant, versioned } from './columns.ts';
@@ -164,6 +164,33 @@ export const fieldClosures = pgTable(
     // One decision in force per field: the status board joins on it.
     uniqueIndex('field_closures_current_key').on(t.fieldId).where(sql`${t.toAt} is null`),
   ],
+);
+
+/**
+ * What was put on a field (fertiliser, seed, topdressing, a pesticide): product, rate as the
+ * label states it, area, date, who applied it (and the licence for a pesticide), and the
+ * station's weather that day. A record outlives its work order: pesticide records are kept.
+ */
+export const applications = pgTable(
+  'applications',
+  {
+    ...id,
+    ...ofField,
+    workOrderId: integer('work_order_id').references(() => workOrders.id, { onDelete: 'set null' }),
+    task: text('task').$type<ApplicationTask>().notNull(),
+    product: text('product').notNull(),
+    rate: real('rate').notNull(),
+    rateUnit: text('rate_unit').$type<ApplicationRateUnit>().notNull(),
+    areaM2: real('area_m2').notNull(),
+    appliedOn: date('applied_on', { mode: 'string' }).notNull(),
+    applicator: text('applicator').notNull(),
+    licenceNumber: text('licence_number'),
+    weather: jsonb('weather').$type<ApplicationWeather | null>(),
+    notes: text('notes').notNull().default(''),
+    createdBy: integer('created_by').references(() => users.id),
+    ...createdAt,
+  },
+  (t) => [index('applications_field_idx').on(t.fieldId, t.appliedOn), index('applications_district_idx').on(t.districtId, t.appliedOn)],
 );
 
 /**

@@ -1,6 +1,6 @@
 /** What a district's week is planned from, read in a few queries. */
-import { and, asc, eq, gte, inArray, lt, lte, max, ne, sql } from 'drizzle-orm';
-import { errors, addDaysIso, MOWER_KINDS, type Level, type PlanEquipment, type PlanField, type PlanMower } from '@swardwise/domain';
+import { and, asc, desc, eq, gte, inArray, lt, lte, max, ne, sql } from 'drizzle-orm';
+import { errors, addDaysIso, CULTURAL_TASKS, MOWER_KINDS, type CulturalTask, type Level, type PlanEquipment, type PlanField, type PlanMower } from '@swardwise/domain';
 import type { Queryable } from '../../db/client.ts';
 import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, workOrders } from '../../db/schema/index.ts';
 import { workOrderRows, type WorkOrderRow } from '../work-orders.ts';
@@ -94,6 +94,34 @@ async function districtFieldRows(db: Queryable, districtId: number) {
 
 export type DistrictFieldRow = Awaited<ReturnType<typeof districtFieldRows>>[number];
 
+/**
+ * Cultural work logged done in the season (the calendar year of the week) per field and task,
+ * and each field's last field check (its bare share and where the wear is, for overseeding).
+ */
+async function culturalRecords(db: Queryable, fieldIds: number[], weekStart: string) {
+  const culturalOf = new Map<number, Partial<Record<CulturalTask, string[]>>>();
+  const wearOf = new Map<number, NonNullable<PlanField['lastWear']>>();
+  if (fieldIds.length === 0) return { culturalOf, wearOf };
+  const year = weekStart.slice(0, 4);
+  const doneRows = await db
+    .select({ fieldId: workOrders.fieldId, task: workOrders.task, date: workOrders.plannedDate })
+    .from(workOrders)
+    .where(and(inArray(workOrders.fieldId, fieldIds), inArray(workOrders.task, [...CULTURAL_TASKS]), eq(workOrders.status, 'done'), gte(workOrders.plannedDate, `${year}-01-01`), lte(workOrders.plannedDate, `${year}-12-31`)));
+  for (const r of doneRows) {
+    const byTask = culturalOf.get(r.fieldId) ?? {};
+    const task = r.task as CulturalTask;
+    byTask[task] = [...(byTask[task] ?? []), r.date];
+    culturalOf.set(r.fieldId, byTask);
+  }
+  const checks = await db
+    .selectDistinctOn([fieldChecks.fieldId], { fieldId: fieldChecks.fieldId, checkedOn: fieldChecks.checkedOn, barePct: fieldChecks.barePct, areas: fieldChecks.bareAreas })
+    .from(fieldChecks)
+    .where(and(inArray(fieldChecks.fieldId, fieldIds), lt(fieldChecks.checkedOn, addDaysIso(weekStart, 7))))
+    .orderBy(fieldChecks.fieldId, desc(fieldChecks.checkedOn), desc(fieldChecks.id));
+  for (const c of checks) wearOf.set(c.fieldId, { checkedOn: c.checkedOn, barePct: c.barePct, areas: c.areas });
+  return { culturalOf, wearOf };
+}
+
 /** The district's fields as the engine takes them: with the last work done and the week's events. */
 export async function planFields(db: Queryable, q: GenerationInput) {
   const fieldRows = await districtFieldRows(db, q.districtId);
@@ -109,6 +137,7 @@ export async function planFields(db: Queryable, q: GenerationInput) {
     .where(and(eq(workOrders.districtId, q.districtId), eq(workOrders.task, 'paint_lines'), ne(workOrders.status, 'skipped'), gte(workOrders.plannedDate, addDaysIso(q.weekStart, -14)), lt(workOrders.plannedDate, q.weekStart)));
   const paintsOf = new Map<number, { date: string; eventId: number | null }[]>();
   for (const p of paintRows) paintsOf.set(p.fieldId, [...(paintsOf.get(p.fieldId) ?? []), { date: p.date, eventId: typeof p.details.eventId === 'number' ? p.details.eventId : null }]);
+  const { culturalOf, wearOf } = await culturalRecords(db, fieldRows.map((f) => f.id), q.weekStart);
   const stripesOf = await stripePatternsOf(db, fieldRows.map((f) => f.id));
   const eventsOf = new Map<number, { id: number; startsOn: string; title: string }[]>();
   for (const e of events) eventsOf.set(e.fieldId, [...(eventsOf.get(e.fieldId) ?? []), e]);
@@ -132,6 +161,8 @@ export async function planFields(db: Queryable, q: GenerationInput) {
     lastCheckedOn: done.get(`${f.id}|field_check`) ?? null,
     events: eventsOf.get(f.id) ?? [],
     paints: paintsOf.get(f.id) ?? [],
+    culturalDone: culturalOf.get(f.id) ?? {},
+    lastWear: wearOf.get(f.id) ?? null,
     stripes: stripesOf.get(f.id) ?? null,
   });
   return { fieldRows, toPlanField };

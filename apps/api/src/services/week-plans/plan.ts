@@ -89,6 +89,7 @@ export async function planDistrictWeek(db: Queryable, q: GenerationInput, existi
     yard: { lat: district.yardLat, lng: district.yardLng },
     travel: params.travel,
     ...(notBefore ? { notBefore } : {}),
+    previous: existing.filter((e) => !isKept(e)),
   });
   const fieldNames = new Map(fieldRows.map((f) => [f.id, f.name]));
   const crewNames = new Map(crewRows.map((c) => [c.id, c.name]));

@@ -6,8 +6,13 @@ import { bodyFrom, formFrom } from './standardForm.ts';
 
 const row: StandardsRow = { level: 2, data: structuredClone(DEFAULT_STANDARDS[2]), version: 3, updatedAt: '2026-11-01T00:00:00Z', updatedBy: null };
 
+/**
+ * The month and method pickers are stubbed: happy-dom lays out each Element select's popper on
+ * every validation, which took over a minute for the program's seventeen selects; no test here
+ * works a picker (the browser test of cultural work does).
+ */
 function mountForm(units: 'metric' | 'imperial' = 'metric') {
-  return mount(LevelStandardForm, { props: { row, units }, attachTo: document.body });
+  return mount(LevelStandardForm, { props: { row, units }, attachTo: document.body, global: { stubs: { ElSelect: true, ElOption: true } } });
 }
 
 async function setNumber(wrapper: ReturnType<typeof mountForm>, test: string, value: string) {
@@ -17,7 +22,7 @@ async function setNumber(wrapper: ReturnType<typeof mountForm>, test: string, va
   await flushPromises();
 }
 
-describe('LevelStandardForm', () => {
+describe('LevelStandardForm', { timeout: 30_000 }, () => {
   test('should send a body the API schema accepts, with null for a level without irrigation or lines', () => {
     const model = formFrom(DEFAULT_STANDARDS[4], 'metric');
     const body = bodyFrom(model, 7, 'metric');
@@ -51,7 +56,27 @@ describe('LevelStandardForm', () => {
   });
 });
 
-describe('LevelStandardForm in imperial units', () => {
+describe('LevelStandardForm: cultural program', { timeout: 30_000 }, () => {
+  test('should send the program the API schema accepts and refuse a window that ends before it begins', async () => {
+    const model = formFrom(DEFAULT_STANDARDS[2], 'metric');
+    model.cultural.aerate.timesPerSeason = 4;
+    const body = bodyFrom(model, 3, 'metric');
+    expect(updateLevelStandardSchema.safeParse(body).success).toBe(true);
+    expect(body.cultural?.aerate).toMatchObject({ timesPerSeason: 4, cool: { fromMonth: 4, toMonth: 10 }, method: 'core' });
+
+    const wrapper = mountForm();
+    const form = wrapper.vm as unknown as { validate(): Promise<boolean>; invalid: Record<string, string> };
+    expect(wrapper.find('[data-test="std-cultural"]').text()).toContain('the product label is the law');
+    await setNumber(wrapper, 'cultural-topdress-times', '13');
+    expect(await form.validate()).toBe(false);
+    expect(form.invalid).toEqual({ 'cultural.topdress.timesPerSeason': 'more than 12 times a season is not a program' });
+    await setNumber(wrapper, 'cultural-topdress-times', '2');
+    expect(await form.validate()).toBe(true);
+    wrapper.unmount();
+  });
+});
+
+describe('LevelStandardForm in imperial units', { timeout: 30_000 }, () => {
   test('should take heights of cut in inches and send millimetres', async () => {
     const fetch = vi.fn(async (_url: string, init: RequestInit) => new Response(JSON.stringify({ ...row, data: { ...row.data, ...JSON.parse(String(init.body)) } }), { status: 200 }));
     vi.stubGlobal('fetch', fetch);
@@ -81,7 +106,7 @@ describe('LevelStandardForm in imperial units', () => {
   });
 });
 
-describe('LevelStandardForm server errors', () => {
+describe('LevelStandardForm server errors', { timeout: 30_000 }, () => {
   test('should show an issue the API found under the field it names, even a nested one', async () => {
     vi.stubGlobal(
       'fetch',

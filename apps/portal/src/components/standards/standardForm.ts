@@ -1,5 +1,18 @@
 /** The Standards form of one level: its model, the rules from the shared zod schema, and the body it sends. */
-import { levelStandardChangesSchema, SPORTS, standardHocMmSchema, type LevelStandard, type Sport, type UnitSystem, type UpdateLevelStandardInput } from '@swardwise/domain';
+import {
+  CULTURAL_TASKS,
+  culturalProgramSchema,
+  culturalProgramsOf,
+  levelStandardChangesSchema,
+  SPORTS,
+  standardHocMmSchema,
+  type CulturalPrograms,
+  type CulturalTask,
+  type LevelStandard,
+  type Sport,
+  type UnitSystem,
+  type UpdateLevelStandardInput,
+} from '@swardwise/domain';
 import type { FormItemRule } from 'element-plus';
 import { hocToMm, hocValue } from '../../utils/units.ts';
 import { zodRules } from '../../utils/zodRules.ts';
@@ -18,11 +31,16 @@ export interface StandardFormModel {
   lineRepaintDays: number;
   fieldCheckDays: number;
   targetScore: number;
+  /** Aeration, overseeding, topdressing and weed control: times a season and months (no units to convert). */
+  cultural: CulturalPrograms;
 }
 
 type SeasonHoc = { cool: number; warm: number };
 const mapHoc = (hoc: Record<Sport, SeasonHoc>, f: (v: number) => number) =>
   Object.fromEntries(SPORTS.map((s) => [s, { cool: f(hoc[s].cool), warm: f(hoc[s].warm) }])) as Record<Sport, SeasonHoc>;
+
+const copyPrograms = (p: CulturalPrograms): CulturalPrograms =>
+  Object.fromEntries(CULTURAL_TASKS.map((t) => [t, { ...p[t], cool: { ...p[t].cool }, warm: { ...p[t].warm } }])) as CulturalPrograms;
 
 export function formFrom(data: LevelStandard, units: UnitSystem): StandardFormModel {
   return {
@@ -38,6 +56,8 @@ export function formFrom(data: LevelStandard, units: UnitSystem): StandardFormMo
     lineRepaintDays: data.lineRepaintDays ?? 14,
     fieldCheckDays: data.fieldCheckDays,
     targetScore: data.targetScore,
+    // A copy per task (the row may be a reactive proxy, which structuredClone refuses).
+    cultural: copyPrograms(culturalProgramsOf(data)),
   };
 }
 
@@ -64,6 +84,7 @@ export function bodyFrom(m: StandardFormModel, version: number, units: UnitSyste
     lineRepaintDays: m.linesKept ? m.lineRepaintDays : null,
     fieldCheckDays: m.fieldCheckDays,
     targetScore: m.targetScore,
+    cultural: copyPrograms(m.cultural),
   };
 }
 
@@ -80,12 +101,28 @@ const hocRule = (units: UnitSystem, trigger: 'blur' | 'change' = 'change'): Form
   },
 ];
 
+/** A rule judging one key of a task's program by the shared schema, given the whole program (a window's end depends on its start). */
+const culturalRule = (program: () => unknown, path: string): FormItemRule[] => [
+  {
+    trigger: 'change',
+    validator: (_rule, _value, callback) => {
+      const r = culturalProgramSchema.safeParse(program());
+      const issue = r.success ? undefined : r.error.issues.find((i) => i.path.join('.') === path);
+      callback(issue ? new Error(issue.message) : undefined);
+    },
+  },
+];
+
 /** Element Plus rules, nested like the model, from the same schema the API parses with. */
-export function standardRules(units: UnitSystem) {
+export function standardRules(units: UnitSystem, model?: StandardFormModel) {
   const top = zodRules(levelStandardChangesSchema, { trigger: 'change' });
+  const program = (t: CulturalTask) => () => model?.cultural[t];
   return {
     ...top,
     hoc: Object.fromEntries(SPORTS.map((s) => [s, { cool: hocRule(units), warm: hocRule(units) }])),
+    cultural: Object.fromEntries(
+      CULTURAL_TASKS.map((t) => [t, { timesPerSeason: culturalRule(program(t), 'timesPerSeason'), cool: { toMonth: culturalRule(program(t), 'cool.toMonth') }, warm: { toMonth: culturalRule(program(t), 'warm.toMonth') } }]),
+    ),
   };
 }
 

@@ -151,13 +151,13 @@ export function filterOptions(board: WeekBoard | null): { sites: { id: number; n
 const TASK_CAUTIONS: Partial<Record<WorkTask, CautionKey[]>> = {
   mow: ['mowing'],
   feed: ['feed'],
-  weed_control: ['pesticide'],
+  weed_control: ['pesticide', 'application'],
   paint_lines: ['lines'],
   irrigate: ['water'],
 };
 
 /** Mowing first (most jobs), chemicals next, then the weather that stops all work. */
-const CAUTION_ORDER: CautionKey[] = ['mowing', 'feed', 'pesticide', 'lines', 'water', 'wetField', 'lightning'];
+const CAUTION_ORDER: CautionKey[] = ['mowing', 'feed', 'pesticide', 'application', 'lines', 'water', 'wetField', 'lightning'];
 
 /**
  * The cautions for a set of tasks: each task's own, then the weather ones every outdoor job
