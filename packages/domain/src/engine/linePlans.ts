@@ -222,12 +222,13 @@ const KEY_CENTRES: Record<string, string> = { 'centre circle': 'centre spot', 'p
 export function setOutSheet(t: LineTemplate, l: Pick<PlanLayout, 'layout'>, p: Placement): SetOutSheet {
   const points: SetOutPoint[] = [];
   const seen = new Set<string>();
-  const add = (name: string, q: Point) => {
+  const add = (name: string, q: Point): boolean => {
     const key = `${q[0].toFixed(2)},${q[1].toFixed(2)}`;
-    if (seen.has(key)) return;
+    if (seen.has(key)) return false;
     seen.add(key);
     const [fx, fy] = p.at(q);
     points.push({ name, alongM: q[0], acrossM: q[1], fieldX: fx, fieldY: fy });
+    return true;
   };
   const diamond = isDiamond(l.layout);
   const checks: SetOutCheck[] = [];
@@ -259,14 +260,12 @@ export function setOutSheet(t: LineTemplate, l: Pick<PlanLayout, 'layout'>, p: P
     if (s.kind === 'line' && KEY_LINES.has(s.label)) {
       for (const q of [s.from, s.to]) {
         const n = (counts.get(s.label) ?? 0) + 1;
-        counts.set(s.label, n);
-        add(`${s.label[0]!.toUpperCase()}${s.label.slice(1)} ${n}`, q);
+        if (add(`${s.label[0]!.toUpperCase()}${s.label.slice(1)} ${n}`, q)) counts.set(s.label, n);
       }
     } else if (s.kind === 'arc' && KEY_CENTRES[s.label]) {
       const name = KEY_CENTRES[s.label]!;
       const n = (counts.get(name) ?? 0) + 1;
-      counts.set(name, n);
-      add(`${name[0]!.toUpperCase()}${name.slice(1)} ${n}`, s.center);
+      if (add(`${name[0]!.toUpperCase()}${name.slice(1)} ${n}`, s.center)) counts.set(name, n);
     }
   }
   return { reference: diamond ? 'Home plate apex; along = towards second base' : 'Corner A: the start of the touchline/sideline; along = the length, across = the width', points, checks };
@@ -360,4 +359,81 @@ export const LINE_COLOURS = ['#ffffff', '#f2c200', '#1f6fd1', '#d1341f', '#7a3fb
 /** Layout names for lists. */
 export function layoutName(layout: LineLayout): string {
   return LINE_LAYOUTS[layout].name;
+}
+
+/** One layout of a plan with everything worked out for a season. */
+export interface PlacedLayout {
+  index: number;
+  layout: LineLayout;
+  name: string;
+  source: string;
+  colour: string;
+  template: LineTemplate;
+  segments: LineSegment[];
+  sheet: SetOutSheet;
+  totals: LineTotals;
+  /** True when a corner of the layout's box lies outside the field's enclosing rectangle. */
+  overhangs: boolean;
+}
+
+export interface LinePlanFigures {
+  season: string;
+  shift: SeasonShift;
+  layouts: PlacedLayout[];
+  /** One painting of every layout (the season's first). */
+  totals: LineTotals;
+  schedule: RepaintDate[];
+  /** One touch-up of every layout (the department's touch-up coat, one coat). */
+  touchUp: LineTotals;
+  /** First painting + touch-ups on the other dates of the schedule. */
+  seasonTotals: LineTotals;
+}
+
+/**
+ * Everything a line plan works out for `season` (a year) on a field of the given frame size:
+ * each layout placed with the season's shift, its segments, set-out sheet and totals; one
+ * painting of the plan; the repaint schedule from the level's interval and the events in the
+ * season window; the season's totals (the first painting, then touch-ups).
+ */
+export function linePlanFigures(
+  plan: { layouts: PlanLayout[]; paint: PlanPaint; seasonStart: string; seasonEnd: string; shifts: Record<string, SeasonShift> },
+  field: { lengthM: number; widthM: number },
+  season: string,
+  settings: LineSettings,
+  markerSpeedKmh: number,
+  repaintDays: number | null,
+  events: ReadonlyArray<{ date: string; title: string }>,
+): LinePlanFigures {
+  const shift = plan.shifts[season] ?? { alongM: 0, acrossM: 0 };
+  const touchPaint: PlanPaint = { dilutionWaterPerPaint: settings.touchUp.dilutionWaterPerPaint, coats: 1, passes: settings.touchUp.passes };
+  const layouts = plan.layouts.map((l, index): PlacedLayout & { touch: LineTotals } => {
+    const template = layoutTemplate(l.layout, l);
+    const p = placement(template, l, field, shift);
+    const box = templateBox(template, isDiamond(l.layout));
+    const corners = [p.at([box.minX, box.minY]), p.at([box.maxX, box.minY]), p.at([box.maxX, box.maxY]), p.at([box.minX, box.maxY])];
+    const tol = 0.01;
+    return {
+      index,
+      layout: l.layout,
+      name: template.name,
+      source: template.source,
+      colour: l.colour,
+      template,
+      segments: placedSegments(template, p),
+      sheet: setOutSheet(template, l, p),
+      totals: layoutTotals(template, settings, plan.paint, markerSpeedKmh),
+      touch: layoutTotals(template, { ...settings, firstCoat: settings.touchUp }, touchPaint, markerSpeedKmh),
+      overhangs: corners.some(([x, y]) => x < -tol || y < -tol || x > field.lengthM + tol || y > field.widthM + tol),
+    };
+  });
+  const year = Number(season);
+  const start = `${season}-${plan.seasonStart}`;
+  const endYear = plan.seasonEnd < plan.seasonStart ? year + 1 : year;
+  const end = `${endYear}-${plan.seasonEnd}`;
+  const schedule = layouts.length ? repaintSchedule(start, end, repaintDays, events.filter((e) => e.date >= start && e.date <= end)) : [];
+  const totals = addTotals(layouts.map((l) => l.totals));
+  const touchUp = addTotals(layouts.map((l) => l.touch));
+  const later = Math.max(0, schedule.length - 1);
+  const seasonTotals = addTotals([schedule.length ? totals : addTotals([]), ...Array.from({ length: later }, () => touchUp)]);
+  return { season, shift, layouts: layouts.map(({ touch: _touch, ...l }) => l), totals, schedule, touchUp, seasonTotals };
 }
