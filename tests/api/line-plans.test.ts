@@ -56,7 +56,7 @@ describe('field line plans', () => {
     const id = api.fixture.fields.northSchoolFootball;
     let version: number | null = null;
     for (const who of ['admin', 'head'] as const) {
-      const res = await (await api.signIn(who)).patch(`/api/fields/${id}/lines`).send(body({ version }));
+      const res: { status: number; body: { linePlan: { version: number } } } = await (await api.signIn(who)).patch(`/api/fields/${id}/lines`).send(body({ version }));
       expect(res.status, who).toBe(200);
       version = res.body.linePlan.version;
     }

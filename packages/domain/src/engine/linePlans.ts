@@ -145,7 +145,11 @@ function templateBox(t: LineTemplate, diamond: boolean): { minX: number; minY: n
   if (!diamond) return { minX: 0, minY: 0, maxX: t.lengthM, maxY: t.widthM };
   const xs: number[] = [];
   const ys: number[] = [];
-  for (const s of t.segments) if (s.kind === 'line') xs.push(s.from[0], s.to[0]), ys.push(s.from[1], s.to[1]);
+  for (const s of t.segments) {
+    if (s.kind !== 'line') continue;
+    xs.push(s.from[0], s.to[0]);
+    ys.push(s.from[1], s.to[1]);
+  }
   return { minX: Math.min(...xs), minY: Math.min(...ys), maxX: Math.max(...xs), maxY: Math.max(...ys) };
 }
 
