@@ -4,7 +4,6 @@
  * on a phone without being offered to change it.
  */
 import { execFileSync } from 'node:child_process';
-import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
 import { browser, PHONE, shots, signIn, useBrowser } from './browser.ts';
@@ -78,15 +77,32 @@ describe('line plan page', () => {
       await page.close();
     }
 
+    // The crew lead reads the plan of a field of his crew's scope (another field may be denied, as the abilities say).
     const phone = await browser.newPage({ ...PHONE });
     try {
       await signIn(phone, 'crew');
-      await phone.goto(`${baseUrl}/fields/${fieldId}/lines`);
+      const readable = await phone.evaluate(async () => (await (await fetch('/api/fields')).json()).items as { id: number }[]);
+      expect(readable.length, 'a field the crew lead reads').toBeGreaterThan(0);
+      const crewField = readable[0]!.id;
+      const foreman = await browser.newPage();
+      try {
+        await signIn(foreman, 'foreman');
+        const status = await foreman.evaluate(async (id) => {
+          const plan = (await (await fetch(`/api/fields/${id}/lines`)).json()).linePlan;
+          const body = { layouts: [{ layout: 'soccer_7v7', lengthM: 55, widthM: 36, colour: '#ffffff', alongM: 0, acrossM: 0, rotationDeg: 0 }], paint: plan.paint, markerId: null, seasonStart: plan.seasonStart, seasonEnd: plan.seasonEnd, shifts: plan.shifts, version: plan.version };
+          return (await fetch(`/api/fields/${id}/lines`, { method: 'PATCH', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })).status;
+        }, crewField);
+        expect(status).toBe(200);
+      } finally {
+        await foreman.close();
+      }
+      await phone.goto(`${baseUrl}/fields/${crewField}/lines`);
       await phone.locator('[data-test="lines-setout"]').waitFor();
       expect(await phone.locator('[data-test="lines-save"]').count()).toBe(0);
       expect(await phone.locator('[data-test="lines-remove-0"]').count()).toBe(0);
       await phone.screenshot({ path: path.join(shots, 'line-plan-phone.png') });
-      writeFileSync(path.join(shots, 'line-plan-phone.txt'), await phone.locator('[data-test="lines-setout-0"]').innerText());
+      // Saving is refused to a crew lead on the server too.
+      expect(await phone.evaluate(async (id) => (await fetch(`/api/fields/${id}/lines`, { method: 'PATCH', headers: { 'content-type': 'application/json' }, body: '{}' })).status, crewField)).toBe(403);
     } finally {
       await phone.close();
     }
