@@ -15,6 +15,12 @@ type XY = [number, number];
 
 /** The outer ring in local metres (x east, y north) around its mean point; fine at field scale. */
 function localMetres(polygon: Polygon): XY[] {
+  const { pts, lat0, lng0, mLat, mLng } = localOrigin(polygon);
+  return pts.map((p) => [(p[0] - lng0) * mLng, (p[1] - lat0) * mLat]);
+}
+
+/** The ring's mean point and metres per degree there (the series for the WGS 84 ellipsoid). */
+function localOrigin(polygon: Polygon) {
   const ring = polygon.coordinates[0];
   if (!ring || ring.length < 4) throw new DomainError('geometry/invalid_polygon', 'A field outline needs at least three corners');
   const pts = ring.slice(0, -1);
@@ -23,7 +29,7 @@ function localMetres(polygon: Polygon): XY[] {
   const phi = (lat0 * Math.PI) / 180;
   const mLat = 111_132.92 - 559.82 * Math.cos(2 * phi) + 1.175 * Math.cos(4 * phi);
   const mLng = 111_412.84 * Math.cos(phi) - 93.5 * Math.cos(3 * phi);
-  return pts.map((p) => [(p[0] - lng0) * mLng, (p[1] - lat0) * mLat]);
+  return { pts, lat0, lng0, mLat, mLng };
 }
 
 /**
@@ -127,6 +133,10 @@ export interface FieldFrame {
  * whichever way the field lies on the map.
  */
 export function fieldFrame(polygon: Polygon): FieldFrame {
+  return frameOf(polygon).frame;
+}
+
+function frameOf(polygon: Polygon) {
   const axis = longAxis(polygon);
   // Compass bearing (from north, clockwise) → math angle (from east, counter-clockwise).
   const a = ((90 - axis.bearingDeg) * Math.PI) / 180;
@@ -136,5 +146,25 @@ export function fieldFrame(polygon: Polygon): FieldFrame {
   const minX = Math.min(...turned.map((p) => p[0]));
   const minY = Math.min(...turned.map((p) => p[1]));
   const points = turned.map(([x, y]) => [x - minX, y - minY] as [number, number]);
-  return { points, lengthM: Math.max(...points.map((p) => p[0])), widthM: Math.max(...points.map((p) => p[1])), bearingDeg: axis.bearingDeg };
+  const frame: FieldFrame = { points, lengthM: Math.max(...points.map((p) => p[0])), widthM: Math.max(...points.map((p) => p[1])), bearingDeg: axis.bearingDeg };
+  return { frame, c, s, minX, minY };
+}
+
+/**
+ * The way back from `fieldFrame`: a point in the field's frame (metres along x and across y)
+ * as a GeoJSON position [longitude, latitude] in degrees, by undoing the shift, the turn and
+ * the local-metres projection. Line plans use it to put a layout on the map and to give the
+ * set-out points as coordinates.
+ */
+export function fieldFrameToLngLat(polygon: Polygon): (x: number, y: number) => [number, number] {
+  const { c, s, minX, minY } = frameOf(polygon);
+  const { lat0, lng0, mLat, mLng } = localOrigin(polygon);
+  return (x, y) => {
+    const tx = x + minX;
+    const ty = y + minY;
+    // The turn is a rotation: its inverse is its transpose.
+    const ex = tx * c - ty * s;
+    const ny = tx * s + ty * c;
+    return [lng0 + ex / mLng, lat0 + ny / mLat];
+  };
 }

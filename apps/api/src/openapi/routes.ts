@@ -10,6 +10,7 @@ import {
   acceptInviteSchema,
   closeFieldSchema,
   setFieldStripesSchema,
+  setFieldLinePlanSchema,
   closeFieldRequestSchema,
   createFieldRequestSchema,
   declineFieldRequestSchema,
@@ -73,6 +74,7 @@ import { checkParamsSchema, checkPhotoParamsSchema } from '../routes/fields.ts';
 import { PHOTOS_PER_CHECK } from '../services/field-checks.ts';
 import { PHOTO_MAX_BYTES, PHOTOS_PER_ORDER } from '../services/work-photos.ts';
 import { requestPhotoParamsSchema } from '../routes/requests.ts';
+import { setOutQuerySchema } from '../routes/line-plans.ts';
 import { PHOTOS_PER_REQUEST } from '../services/requests.ts';
 import { allowed, publicAccess, signedIn, type Access } from './access.ts';
 
@@ -1116,6 +1118,42 @@ const stripes: RouteDoc[] = [
   },
 ];
 
+const linePlans: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/fields/:id/lines',
+    tag: 'Fields',
+    summary: 'A field’s line plan: its layouts, paint choices, season window and seasonal shifts, with what its figures need',
+    description: 'The figures (segments on the field’s frame, totals, set-out points, repaint schedule) are the engine’s `linePlanFigures` over the field’s outline.',
+    access: allowed('read', 'Field'),
+    params: idParamSchema,
+    answers: [json(200, 'The plan (no layouts while the field has none).', shape({ linePlan: row('{ fieldId, layouts, paint, markerId, seasonStart, seasonEnd, shifts, version, updatedAt, setByName, settings, markers, repaintDays, events, today }') }))],
+  },
+  {
+    method: 'patch',
+    path: '/api/fields/:id/lines',
+    tag: 'Fields',
+    summary: 'Save a field’s line plan',
+    description: `Each layout’s size must lie in its governing body’s range (the message gives the range). The marker must be an active line marker of the field’s district. The version is the plan row’s (null while the field has none). ${VERSION_NOTE}`,
+    access: allowed('update', 'Field'),
+    params: idParamSchema,
+    body: setFieldLinePlanSchema,
+    answers: [json(200, 'The plan as saved.', shape({ linePlan: row('As GET') }))],
+    errors: [409],
+  },
+  {
+    method: 'get',
+    path: '/api/fields/:id/lines/set-out.pdf',
+    tag: 'Fields',
+    summary: 'The string-line set-out sheet of a field’s line plan for a season, as a PDF',
+    description: 'The plan drawn to scale on the field’s outline, then per layout its points as distances from the reference corner and as coordinates, and the tape checks (diagonals, 3-4-5).',
+    access: allowed('read', 'Field'),
+    params: idParamSchema,
+    query: setOutQuerySchema,
+    answers: [{ status: 200, description: 'The set-out sheet.', contentType: 'application/pdf', body: { type: 'string', format: 'binary' } }],
+  },
+];
+
 const partner: RouteDoc[] = [
   {
     method: 'get',
@@ -1342,6 +1380,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...fieldEvents,
   ...closures,
   ...stripes,
+  ...linePlans,
   ...partner,
   ...calendarFeeds,
   ...requests,

@@ -12,6 +12,7 @@ const NOUNS: Partial<Record<VersionedResource, string>> = {
   work_order: 'work order',
   standards: 'level',
   field_stripes: 'stripe pattern',
+  field_line_plan: 'line plan',
   field_request: 'request',
 };
 

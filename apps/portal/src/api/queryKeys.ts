@@ -19,6 +19,7 @@ export const queryKeys = {
   fieldClosures: (id: number) => ['fields', 'closures', id] as const,
   /** Under `fields`: saving a pattern invalidates `field`, which also makes the week plan stale. */
   fieldStripes: (id: number) => ['fields', 'stripes', id] as const,
+  fieldLinePlan: (id: number) => ['fields', 'lines', id] as const,
   /** The public board, read without signing in. */
   statusBoard: () => ['status-board'] as const,
   imports: () => ['imports'] as const,

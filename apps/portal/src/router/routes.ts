@@ -119,6 +119,12 @@ export const routes: RouteRecordRaw[] = [
         meta: { can: ['read', 'Field'], title: 'Field' },
       },
       {
+        path: 'fields/:id(\\d+)/lines',
+        name: 'field-lines',
+        component: () => import('../views/FieldLinesView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'], title: 'Line plan' },
+      },
+      {
         path: 'crews',
         name: 'crews',
         component: () => import('../views/CrewsView.vue'),

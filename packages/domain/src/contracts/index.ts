@@ -22,3 +22,4 @@ export * from './partner.ts';
 export * from './calendar-feeds.ts';
 export * from './requests.ts';
 export * from './costs.ts';
+export * from './linePlans.ts';

@@ -21,3 +21,4 @@ export * from './field-check.ts';
 export * from './closures.ts';
 export * from './cultural.ts';
 export * from './stripes.ts';
+export * from './linePlans.ts';

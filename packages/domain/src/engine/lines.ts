@@ -166,19 +166,25 @@ export const SMALL_SIDED_SOCCER = {
   '9v9': { lengthM: 73, widthM: 46, centreCircleR: 7.3, goalAreaWidth: 14.6, goalAreaDepth: 4.5, penaltyAreaWidth: 32, penaltyAreaDepth: 13, penaltyMarkM: 9, penaltyArcR: 7.3, cornerArcR: 1 },
 } as const;
 
-/** Small-sided soccer layout (7v7 or 9v9; common practice / from memory). */
-export function smallSidedSoccerTemplate(format: keyof typeof SMALL_SIDED_SOCCER, lineWidthM = 0.1): LineTemplate {
+/**
+ * Small-sided soccer layout (7v7 or 9v9; common practice / from memory). `size` changes the
+ * touchline and goal line; the areas, circle and marks keep the format's sizes.
+ */
+export function smallSidedSoccerTemplate(format: keyof typeof SMALL_SIDED_SOCCER, lineWidthM = 0.1, size?: { lengthM: number; widthM: number }): LineTemplate {
   const d = SMALL_SIDED_SOCCER[format];
   if (!d) fail('unknown_template', `unknown small-sided format ${JSON.stringify(format)}`);
+  const L = size?.lengthM ?? d.lengthM;
+  const W = size?.widthM ?? d.widthM;
+  if (W <= d.penaltyAreaWidth || L <= 2 * d.penaltyAreaDepth) fail('invalid_dimension', `a ${format} field must be wider than its penalty area (${d.penaltyAreaWidth} m) and longer than two of them (${2 * d.penaltyAreaDepth} m)`);
   return {
-    id: `soccer_${format}`,
+    id: size ? `soccer_${format}_${L}x${W}` : `soccer_${format}`,
     sport: 'soccer',
-    name: `Soccer ${format}`,
+    name: size ? `Soccer ${format} ${L} × ${W} m` : `Soccer ${format}`,
     source: 'common practice / from memory (league rules govern)',
-    lengthM: d.lengthM,
-    widthM: d.widthM,
+    lengthM: L,
+    widthM: W,
     lineWidthM,
-    segments: soccerSegments(d.lengthM, d.widthM, d),
+    segments: soccerSegments(L, W, d),
   };
 }
 

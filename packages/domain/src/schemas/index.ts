@@ -14,3 +14,4 @@ export * from './closures.ts';
 export * from './stripes.ts';
 export * from './requests.ts';
 export * from './costs.ts';
+export * from './linePlans.ts';

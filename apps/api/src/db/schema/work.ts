@@ -1,7 +1,7 @@
 /** Equipment, work orders and their photos: the crews' side of the week plan. */
 import { sql } from 'drizzle-orm';
 import { boolean, date, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
-import type { ApplicationRateUnit, ApplicationTask, ApplicationWeather, ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, StripePattern, WorkStatus, WorkTask } from '@swardwise/domain';
+import type { ApplicationRateUnit, ApplicationTask, ApplicationWeather, ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, PlanLayout, PlanPaint, SeasonShift, StripePattern, WorkStatus, WorkTask } from '@swardwise/domain';
 import { districtRef, fieldRef, sites } from './city.ts';
 import { crews, users } from './people.ts';
 import { createdAt, id, instant, versioned } from './columns.ts';
@@ -209,4 +209,26 @@ export const fieldStripes = pgTable(
     ...versioned,
   },
   (t) => [uniqueIndex('field_stripes_field_key').on(t.fieldId)],
+);
+
+/**
+ * A field's line plan: its layouts (template, size, colour, place on the field), the paint
+ * choices and marker, the season window (MM-DD) and the seasonal shift of each season (key:
+ * the year). One row per field; no row, no plan. Scope comes from the field's site.
+ */
+export const fieldLinePlans = pgTable(
+  'field_line_plans',
+  {
+    ...id,
+    ...fieldRef,
+    layouts: jsonb('layouts').$type<PlanLayout[]>().notNull(),
+    paint: jsonb('paint').$type<PlanPaint>().notNull(),
+    markerId: integer('marker_id').references(() => equipment.id, { onDelete: 'set null' }),
+    seasonStart: text('season_start').notNull(),
+    seasonEnd: text('season_end').notNull(),
+    shifts: jsonb('shifts').$type<Record<string, SeasonShift>>().notNull(),
+    setBy: integer('set_by').references(() => users.id),
+    ...versioned,
+  },
+  (t) => [uniqueIndex('field_line_plans_field_key').on(t.fieldId)],
 );
