@@ -30,6 +30,7 @@ import { authRouter } from './routes/auth.ts';
 import { calendarFeedsRouter, calendarPublicRouter } from './routes/calendar-feeds.ts';
 import { closuresRouter } from './routes/closures.ts';
 import { stripesRouter } from './routes/stripes.ts';
+import { logosRouter } from './routes/logos.ts';
 import { crewsRouter } from './routes/crews.ts';
 import { devRouter } from './routes/dev.ts';
 import { directoryRouter } from './routes/directory.ts';
@@ -161,6 +162,7 @@ export function createApp(
   app.use('/api/fields', fieldsRouter(full));
   app.use('/api/fields', closuresRouter(full));
   app.use('/api/fields', stripesRouter(full));
+  app.use('/api/fields', logosRouter(full));
   app.use('/api/field-events', fieldEventsRouter(full));
   app.use('/api/requests', requestsRouter(full));
   app.use('/api/standards', standardsRouter(full));
