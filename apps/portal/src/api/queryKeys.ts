@@ -19,6 +19,7 @@ export const queryKeys = {
   fieldClosures: (id: number) => ['fields', 'closures', id] as const,
   /** Under `fields`: saving a pattern invalidates `field`, which also makes the week plan stale. */
   fieldStripes: (id: number) => ['fields', 'stripes', id] as const,
+  fieldLogos: (id: number) => ['fields', 'logos', id] as const,
   /** The public board, read without signing in. */
   statusBoard: () => ['status-board'] as const,
   imports: () => ['imports'] as const,
@@ -46,7 +47,7 @@ export const queryKeys = {
 };
 
 /** What a write changes, by what was written. */
-export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request';
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request' | 'fieldLogo';
 
 /**
  * The answers a write makes stale: the resource itself and every answer that shows it (a
@@ -66,6 +67,7 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   devMail: [['dev-mail']],
   fieldCheck: [['fields'], ['map'], ['records']],
   calendarFeed: [['calendar-feeds']],
+  fieldLogo: [['fields', 'logos']],
   // Scheduling a request books the field or adds a work order.
   request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders']],
 };

@@ -119,6 +119,12 @@ export const routes: RouteRecordRaw[] = [
         meta: { can: ['read', 'Field'], title: 'Field' },
       },
       {
+        path: 'fields/:id(\\d+)/logos',
+        name: 'field-logos',
+        component: () => import('../views/FieldLogosView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'], title: 'Logos' },
+      },
+      {
         path: 'crews',
         name: 'crews',
         component: () => import('../views/CrewsView.vue'),
