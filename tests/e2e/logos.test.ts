@@ -5,12 +5,16 @@
 import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
+import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
 import { browser, PHONE, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
 useBrowser();
+
+/** The native input of an Element Plus input, whether its data-test sits on the input or on its wrapper. */
+const inputOf = (page: Page, test: string) => page.locator(`input[data-test="${test}"], [data-test="${test}"] input`).first();
 
 const LOGO_SVG = `<svg xmlns="http://www.w3.org/2000/svg" width="200" height="100" viewBox="0 0 200 100">
   <rect width="100" height="100" fill="#c81010"/><rect x="100" width="100" height="100" fill="#ffffff"/><circle cx="150" cy="50" r="40" fill="#1030c0"/>
@@ -33,7 +37,7 @@ describe('field logos', () => {
       const file = path.join(shots, '..', 'e2e-logo.svg');
       fs.mkdirSync(path.dirname(file), { recursive: true });
       fs.writeFileSync(file, LOGO_SVG);
-      await page.locator('[data-test="logo-name"] input').fill('Harbor crest');
+      await inputOf(page, 'logo-name').fill('Harbor crest');
       await page.locator('[data-test="logo-file"]').setInputFiles(file);
       await page.locator('[data-test="logo-send"]').click();
       await page.locator('[data-test="logo-place"]').waitFor();
@@ -41,7 +45,7 @@ describe('field logos', () => {
 
       // Keyboard placement: type into the number inputs, Tab between them.
       const typeInto = async (test: string, value: string) => {
-        const input = page.locator(`[data-test="${test}"] input`);
+        const input = inputOf(page, test);
         await input.focus();
         await page.keyboard.press('Control+A');
         await page.keyboard.type(value);

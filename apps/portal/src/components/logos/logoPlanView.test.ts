@@ -22,5 +22,9 @@ describe('logoPlanView', () => {
   test('should draw the sport’s layout for context and nothing for a lawn', () => {
     expect(templatePath('soccer', 105, 68)).toMatch(/^M0\.00 68\.00L/);
     expect(templatePath('lawn', 50, 30)).toBe('');
+    // A youth pitch half the size gets the layout at half scale, inside its rectangle.
+    const numbers = templatePath('soccer', 52.5, 34).match(/-?\d+\.\d+/g)!.map(Number);
+    expect(Math.min(...numbers)).toBeGreaterThanOrEqual(0);
+    expect(Math.max(...numbers)).toBeLessThanOrEqual(52.5);
   });
 });

@@ -6,22 +6,28 @@ export const PLAN_PAD_M = 4;
 /** A field-frame point (y up) on the plan's SVG (y down): the plan reads like the map and the printed sheet. */
 export const flipY = (widthM: number) => (y: number) => widthM - y;
 
-/** SVG path of the sport's default line layout, centred on the field rectangle, for context. */
+/**
+ * SVG path of the sport's default line layout centred on the field rectangle, for context;
+ * shrunk evenly to fit a smaller field (a youth pitch), never stretched.
+ */
 export function templatePath(sport: Sport, lengthM: number, widthM: number): string {
   const t = defaultTemplateFor(sport);
   if (!t) return '';
-  const dx = (lengthM - t.lengthM) / 2;
-  const dy = (widthM - t.widthM) / 2;
+  const k = Math.min(1, lengthM / t.lengthM, widthM / t.widthM);
+  const dx = (lengthM - t.lengthM * k) / 2;
+  const dy = (widthM - t.widthM * k) / 2;
   const y = flipY(widthM);
+  const X = (v: number) => (v * k + dx).toFixed(2);
+  const Y = (v: number) => y(v * k + dy).toFixed(2);
   const part = (s: LineSegment) => {
-    if (s.kind === 'line') return `M${(s.from[0] + dx).toFixed(2)} ${y(s.from[1] + dy).toFixed(2)}L${(s.to[0] + dx).toFixed(2)} ${y(s.to[1] + dy).toFixed(2)}`;
-    const p = (a: number) => [s.center[0] + dx + s.radiusM * Math.cos(a), y(s.center[1] + dy + s.radiusM * Math.sin(a))] as const;
+    if (s.kind === 'line') return `M${X(s.from[0])} ${Y(s.from[1])}L${X(s.to[0])} ${Y(s.to[1])}`;
+    const p = (a: number) => [(s.center[0] + s.radiusM * Math.cos(a)) * k + dx, y((s.center[1] + s.radiusM * Math.sin(a)) * k + dy)] as const;
     const [x0, y0] = p(s.startRad);
     const sweep = s.endRad - s.startRad;
     // An SVG arc cannot draw a full circle in one piece: split at the half.
     const mid = p(s.startRad + sweep / 2);
     const [x1, y1] = p(s.endRad);
-    const r = s.radiusM.toFixed(2);
+    const r = (s.radiusM * k).toFixed(2);
     // y is flipped, so an anticlockwise sweep in the field frame is clockwise on screen (sweep flag 0).
     const flag = sweep > 0 ? 0 : 1;
     return `M${x0.toFixed(2)} ${y0.toFixed(2)}A${r} ${r} 0 0 ${flag} ${mid[0].toFixed(2)} ${mid[1].toFixed(2)}A${r} ${r} 0 0 ${flag} ${x1.toFixed(2)} ${y1.toFixed(2)}`;
