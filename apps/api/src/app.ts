@@ -31,6 +31,7 @@ import { calendarFeedsRouter, calendarPublicRouter } from './routes/calendar-fee
 import { closuresRouter } from './routes/closures.ts';
 import { stripesRouter } from './routes/stripes.ts';
 import { linePlansRouter } from './routes/line-plans.ts';
+import { logosRouter } from './routes/logos.ts';
 import { crewsRouter } from './routes/crews.ts';
 import { devRouter } from './routes/dev.ts';
 import { directoryRouter } from './routes/directory.ts';
@@ -173,6 +174,7 @@ export function createApp(
   app.use('/api/fields', closuresRouter(full));
   app.use('/api/fields', stripesRouter(full));
   app.use('/api/fields', linePlansRouter(full));
+  app.use('/api/fields', logosRouter(full));
   app.use('/api/field-events', fieldEventsRouter(full));
   app.use('/api/requests', requestsRouter(full));
   app.use('/api/standards', standardsRouter(full));

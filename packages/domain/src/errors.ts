@@ -31,15 +31,15 @@ export const ERROR_STATUS: Record<ErrorKind, number> = {
 };
 
 /** Resources whose rows can be missing: `<resource>/not_found` (404). */
-export const NOT_FOUND_RESOURCES = ['route', 'district', 'site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'work_photo', 'field_check', 'import', 'standards', 'user', 'weather_station', 'calendar_feed', 'field_request', 'request_photo'] as const;
+export const NOT_FOUND_RESOURCES = ['route', 'district', 'site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'work_photo', 'field_check', 'import', 'standards', 'user', 'weather_station', 'calendar_feed', 'field_request', 'request_photo', 'field_logo'] as const;
 export type NotFoundResource = (typeof NOT_FOUND_RESOURCES)[number];
 
 /** Resources written with a version check: `<resource>/version_conflict` (409). */
-export const VERSIONED_RESOURCES = ['site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'standards', 'settings', 'user', 'field_stripes', 'field_request', 'field_line_plan'] as const;
+export const VERSIONED_RESOURCES = ['site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'standards', 'settings', 'user', 'field_stripes', 'field_request', 'field_line_plan', 'field_logo'] as const;
 export type VersionedResource = (typeof VERSIONED_RESOURCES)[number];
 
 /** Routes that take a file upload: `<resource>/too_large` (413) and `<resource>/bad_upload` (400). */
-export const UPLOAD_RESOURCES = ['import', 'weather', 'work_photo', 'request_photo'] as const;
+export const UPLOAD_RESOURCES = ['import', 'weather', 'work_photo', 'request_photo', 'field_logo'] as const;
 export type UploadResource = (typeof UPLOAD_RESOURCES)[number];
 
 /** `<resource>/<suffix>` for each resource, all of one kind. */
@@ -104,6 +104,16 @@ export const ERROR_CODES = {
   'request_photo/too_many_pixels': 'too_large',
   'request_photo/too_many': 'conflict',
   'request_photo/file_missing': 'not_found',
+
+  'field_logo/no_file': 'invalid',
+  'field_logo/not_an_image': 'unsupported',
+  'field_logo/unsupported_format': 'unsupported',
+  'field_logo/unsafe_svg': 'unsupported',
+  'field_logo/unreadable': 'unsupported',
+  'field_logo/too_many_pixels': 'too_large',
+  'field_logo/no_colours': 'invalid',
+  'field_logo/too_many': 'conflict',
+  'field_logo/file_missing': 'not_found',
 
   'import/no_file': 'invalid',
   'import/unsupported_type': 'unsupported',

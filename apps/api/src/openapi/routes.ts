@@ -11,6 +11,10 @@ import {
   closeFieldSchema,
   setFieldStripesSchema,
   setFieldLinePlanSchema,
+  createLogoSchema,
+  logoParamsSchema,
+  updateLogoSchema,
+  LOGO_MAX_COLOURS,
   closeFieldRequestSchema,
   createFieldRequestSchema,
   declineFieldRequestSchema,
@@ -68,6 +72,8 @@ import { csvQuerySchema, MAX_CSV_BYTES } from '../routes/weather.ts';
 import { confirmSchema } from '../routes/week-plans.ts';
 import { querySchema as workOrdersQuery } from '../routes/work-orders.ts';
 import { versionQuerySchema } from '../routes/write-routes.ts';
+import { LOGO_MAX_BYTES } from '../services/logo-files.ts';
+import { LOGOS_PER_FIELD } from '../services/logos.ts';
 import { STATUS_MAX_AGE_S } from '../routes/public.ts';
 import { photoBodySchema, photoParamsSchema } from '../routes/work-reports.ts';
 import { checkParamsSchema, checkPhotoParamsSchema } from '../routes/fields.ts';
@@ -1118,6 +1124,73 @@ const stripes: RouteDoc[] = [
   },
 ];
 
+const LOGO_ROW = 'The logo: { id, fieldId, name, mime, pixelWidth, pixelHeight, centerXM, centerYM, widthM, heightM, rotationDeg, gridSpacingM, colours, backgroundHex, grid, paint, insideField, imageUrl, pdfUrl, version, createdAt, updatedAt }';
+
+const logos: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/fields/:id/logos',
+    tag: 'Fields',
+    summary: 'A field’s logos with their grid set-out and paint per colour',
+    description: 'Coordinates are metres in the field’s frame (x along the long axis from an end line, y across from a side line). Paint is the department’s first coat, with a white base coat under every colour that is not white.',
+    access: allowed('read', 'Field'),
+    params: idParamSchema,
+    answers: [json(200, 'The field’s frame, its logos and the dark-pigment caution.', shape({ logos: row('{ fieldId, fieldName, lengthM, widthM, logos, caution }') }))],
+  },
+  {
+    method: 'post',
+    path: '/api/fields/:id/logos',
+    tag: 'Fields',
+    summary: 'Upload a logo (SVG or PNG) onto a field, placed at its centre',
+    description: `An SVG is cleaned (no scripts, event handlers, foreignObject, styles or links outside the file; a DOCTYPE or entities refuse it) and rendered to PNG; a PNG is re-encoded without metadata. The picture is reduced to at most ${LOGO_MAX_COLOURS} paint colours. At most ${LOGOS_PER_FIELD} logos per field. The caller is checked before the upload is read.`,
+    access: allowed('update', 'Field'),
+    params: idParamSchema,
+    upload: { file: 'logo', fields: createLogoSchema, mediaTypes: 'image/svg+xml, image/png', maxBytes: LOGO_MAX_BYTES, description: `The logo, at most ${LOGO_MAX_BYTES / MB} MB` },
+    answers: [json(201, 'The logo is stored.', shape({ logo: row(LOGO_ROW) }))],
+    errors: [409, 413, 415],
+  },
+  {
+    method: 'patch',
+    path: '/api/fields/:id/logos/:logoId',
+    tag: 'Fields',
+    summary: 'Move, scale, turn or rename a logo, or change its grid spacing',
+    access: allowed('update', 'Field'),
+    params: logoParamsSchema,
+    body: updateLogoSchema,
+    answers: [json(200, 'The logo as saved.', shape({ logo: row(LOGO_ROW) }))],
+    errors: [409],
+  },
+  {
+    method: 'delete',
+    path: '/api/fields/:id/logos/:logoId',
+    tag: 'Fields',
+    summary: 'Remove a logo and its files',
+    access: allowed('update', 'Field'),
+    params: logoParamsSchema,
+    query: versionQuerySchema,
+    answers: [noContent('The logo is removed.')],
+    errors: [409],
+  },
+  {
+    method: 'get',
+    path: '/api/fields/:id/logos/:logoId/image',
+    tag: 'Fields',
+    summary: 'The logo drawn as a PNG (the cleaned upload, rendered)',
+    access: allowed('read', 'Field'),
+    params: logoParamsSchema,
+    answers: [{ status: 200, description: 'The image (PNG), privately cacheable for a day.', contentType: 'image/png', body: { type: 'string', format: 'binary' } }],
+  },
+  {
+    method: 'get',
+    path: '/api/fields/:id/logos/:logoId/grid.pdf',
+    tag: 'Fields',
+    summary: 'The logo’s set-out sheet: the grid with its coordinates, the logo over it, the reference corner, paint per colour and the caution',
+    access: allowed('read', 'Field'),
+    params: logoParamsSchema,
+    answers: [{ status: 200, description: 'The sheet (PDF, A4 landscape).', contentType: 'application/pdf', body: { type: 'string', format: 'binary' } }],
+  },
+];
+
 const linePlans: RouteDoc[] = [
   {
     method: 'get',
@@ -1381,6 +1454,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...closures,
   ...stripes,
   ...linePlans,
+  ...logos,
   ...partner,
   ...calendarFeeds,
   ...requests,

@@ -20,6 +20,7 @@ export const queryKeys = {
   /** Under `fields`: saving a pattern invalidates `field`, which also makes the week plan stale. */
   fieldStripes: (id: number) => ['fields', 'stripes', id] as const,
   fieldLinePlan: (id: number) => ['fields', 'lines', id] as const,
+  fieldLogos: (id: number) => ['fields', 'logos', id] as const,
   /** The public board, read without signing in. */
   statusBoard: () => ['status-board'] as const,
   imports: () => ['imports'] as const,
@@ -50,7 +51,7 @@ export const queryKeys = {
 };
 
 /** What a write changes, by what was written. */
-export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request' | 'costs';
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request' | 'costs' | 'fieldLogo';
 
 /**
  * The answers a write makes stale: the resource itself and every answer that shows it (a
@@ -70,6 +71,7 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   devMail: [['dev-mail']],
   fieldCheck: [['fields'], ['map'], ['records']],
   calendarFeed: [['calendar-feeds']],
+  fieldLogo: [['fields', 'logos']],
   costs: [['costs']],
   // Scheduling a request books the field or adds a work order; the partner's pages list requests.
   request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders'], ['partner']],

@@ -125,6 +125,12 @@ export const routes: RouteRecordRaw[] = [
         meta: { roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'], title: 'Line plan' },
       },
       {
+        path: 'fields/:id(\\d+)/logos',
+        name: 'field-logos',
+        component: () => import('../views/FieldLogosView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'], title: 'Logos' },
+      },
+      {
         path: 'crews',
         name: 'crews',
         component: () => import('../views/CrewsView.vue'),

@@ -23,3 +23,4 @@ export * from './calendar-feeds.ts';
 export * from './requests.ts';
 export * from './costs.ts';
 export * from './linePlans.ts';
+export * from './logos.ts';

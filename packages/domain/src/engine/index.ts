@@ -22,3 +22,4 @@ export * from './closures.ts';
 export * from './cultural.ts';
 export * from './stripes.ts';
 export * from './linePlans.ts';
+export * from './logos.ts';

@@ -15,3 +15,4 @@ export * from './stripes.ts';
 export * from './requests.ts';
 export * from './costs.ts';
 export * from './linePlans.ts';
+export * from './logos.ts';

@@ -232,3 +232,35 @@ export const fieldLinePlans = pgTable(
   },
   (t) => [uniqueIndex('field_line_plans_field_key').on(t.fieldId)],
 );
+
+/**
+ * A logo placed on a field for painting: the stored picture (a cleaned SVG or a PNG, and a
+ * PNG rendering of it the portal and the set-out sheet show), where it sits in the field frame
+ * (m), how it is turned and scaled, the grid the crew strings out, and the colours it was
+ * reduced to with each one's share of the picture. Scope comes from the field's site.
+ */
+export const fieldLogos = pgTable(
+  'field_logos',
+  {
+    ...id,
+    ...fieldRef,
+    name: text('name').notNull(),
+    /** The cleaned upload inside the uploads folder (never a client-supplied name). */
+    fileName: text('file_name').notNull(),
+    /** The PNG rendering inside the uploads folder. */
+    renderName: text('render_name').notNull(),
+    mime: text('mime').notNull(),
+    pixelWidth: integer('pixel_width').notNull(),
+    pixelHeight: integer('pixel_height').notNull(),
+    centerXM: real('center_x_m').notNull(),
+    centerYM: real('center_y_m').notNull(),
+    widthM: real('width_m').notNull(),
+    rotationDeg: real('rotation_deg').notNull().default(0),
+    gridSpacingM: real('grid_spacing_m').notNull().default(1),
+    colours: jsonb('colours').$type<Array<{ hex: string; share: number }>>().notNull(),
+    backgroundHex: text('background_hex'),
+    createdBy: integer('created_by').references(() => users.id),
+    ...versioned,
+  },
+  (t) => [index('field_logos_field_idx').on(t.fieldId)],
+);
