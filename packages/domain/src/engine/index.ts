@@ -20,3 +20,4 @@ export * from './week-warnings.ts';
 export * from './field-check.ts';
 export * from './closures.ts';
 export * from './stripes.ts';
+export * from './game-day.ts';
