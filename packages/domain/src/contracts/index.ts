@@ -20,3 +20,4 @@ export * from './stripes.ts';
 export * from './partner.ts';
 export * from './calendar-feeds.ts';
 export * from './requests.ts';
+export * from './game-days.ts';

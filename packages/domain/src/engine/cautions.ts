@@ -18,6 +18,9 @@ export const CAUTIONS = {
     'Lightning: clear the field at the first thunder and stay off until 30 minutes after the last thunder (NOAA / National Weather Service: “When thunder roars, go indoors”). Local rules and the sport’s governing body decide.',
   water:
     'Watering restrictions are local law: the allowed days, hours and volumes set by the water provider override this schedule.',
+  // Turf colourants (dyes, pigments) only tint the leaf: common practice.
+  colourant:
+    'Colourant changes colour, not turf health: it hides no disease, drought or wear. Follow the label for rate, mixing, protective equipment and drying time, and keep spray off paths, seats and players\' kit.',
   lines:
     'Use turf-safe line paint at the label\'s dilution; dark pigments (reds, blues) can damage turf, so put a white base coat under colours.',
 } as const;

@@ -13,3 +13,4 @@ export * from './settings.ts';
 export * from './closures.ts';
 export * from './stripes.ts';
 export * from './requests.ts';
+export * from './game-days.ts';
