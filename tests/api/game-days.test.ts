@@ -83,6 +83,10 @@ describe('game-day preparation', () => {
     expect(prep.steps.map((s) => s.step)).toEqual(['mow', 'colourant', 'paint_lines', 'logo', 'field_check']);
     expect(prep.steps.every((s) => s.plannedDate === '2026-05-29' && s.crewName === 'North Crew' && s.status === 'assigned')).toBe(true);
     expect(prep.progress).toEqual({ done: 0, total: 5 });
+    // The crew lead hears of the new jobs, as of any assigned work.
+    expect(res.body.emailed).toBe(1);
+    const mail = await api.mail.waitFor((m) => m.subject.includes('New work for North Crew') && m.text.includes('Colourant'));
+    expect(mail.to).toContain(api.fixture.users.crew.email);
     const rows = await api.database.db.select().from(workOrders).where(eq(workOrders.details, workOrders.details));
     const mine = rows.filter((r) => ordersOf(prep).includes(r.id));
     expect(mine).toHaveLength(5);

@@ -16,7 +16,8 @@ useBrowser();
 const TITLE = `Rivals night ${Date.now() % 100000}`;
 
 async function partnerSees(page: Page, fieldId: number, eventId: number, name: string) {
-  await signIn(page, 'partner', `/my-fields/${fieldId}`);
+  await signIn(page, 'partner', '/my-fields');
+  await page.goto(`${baseUrl}/my-fields/${fieldId}`);
   const card = page.locator(`[data-test="partner-game-day-${eventId}"]`);
   await card.waitFor();
   await page.waitForLoadState('networkidle');
@@ -91,6 +92,7 @@ describe('game-day preparation', () => {
       const card = page.locator(`[data-order-id="${colour.workOrderId}"]`).first();
       await card.waitFor();
       expect(await card.innerText()).toContain('Colourant');
+      expect(await card.locator('[data-test="mark-game-day"]').innerText()).toBe('Game day');
       await card.scrollIntoViewIfNeeded();
       await page.screenshot({ path: path.join(shots, 'game-day-week-desktop.png') });
       const paint = mine.steps.find((s: { step: string }) => s.step === 'paint_lines');

@@ -1107,7 +1107,7 @@ const gameDays: RouteDoc[] = [
     access: allowed('create', 'GameDayPrep'),
     params: eventParamSchema,
     body: createGameDaySchema,
-    answers: [json(201, 'The preparation.', shape({ gameDay: row('As an item of GET /api/game-days') }))],
+    answers: [json(201, 'The preparation, and how many crew leads were e-mailed of their new jobs.', shape({ gameDay: row('As an item of GET /api/game-days'), emailed: int('Crew leads e-mailed') }))],
     errors: [409],
   },
 ];

@@ -6,13 +6,15 @@ import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { gameDayChecklistPdf } from '../services/game-day-pdf.ts';
+import { writeDeps } from './work-orders.ts';
 import { authorizeGameDay, createGameDayPrep, getGameDay, listGameDays } from '../services/game-days.ts';
 
 /** Without dates: from today, two months of events. */
 const DEFAULT_DAYS = 60;
 export const eventParamSchema = z.object({ eventId: z.coerce.number().int().positive('an event id is a positive whole number') });
 
-export function gameDaysRouter({ db }: AppDeps): Router {
+export function gameDaysRouter(deps: AppDeps): Router {
+  const { db } = deps;
   const router = Router();
 
   router.get('/', async (req, res) => {
@@ -43,7 +45,7 @@ export function gameDaysRouter({ db }: AppDeps): Router {
     const { eventId } = parse(eventParamSchema, req.params, 'params');
     await authorizeGameDay(ctx, eventId);
     const input = parse(createGameDaySchema, req.body, 'body');
-    res.status(201).json({ gameDay: await createGameDayPrep(ctx, eventId, input) });
+    res.status(201).json(await createGameDayPrep(ctx, eventId, input, writeDeps(deps)));
   });
 
   return router;

@@ -43,6 +43,7 @@ import { placeScope } from './scope.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 import { stripePatternsOf } from './stripes.ts';
 import { districtCrews, planEquipment, siteCrewHints } from './week-plans/load.ts';
+import { notifyCrews, workOrderRows, type WorkMoveNotice, type WriteDeps } from './work-orders.ts';
 
 /** The booking with its field, as preparing it needs; 404 when there is none. */
 async function eventOf(db: Queryable, eventId: number) {
@@ -162,7 +163,7 @@ async function crewLoad(db: Queryable, districtId: number, from: string, to: str
  * on the last working days before the booking within the crews' hours. 409 when the booking
  * has one already; 400 for a booking already past.
  */
-export async function createGameDayPrep(ctx: Ctx, eventId: number, input: CreateGameDayInput): Promise<GameDayPrepRow<Date>> {
+export async function createGameDayPrep(ctx: Ctx, eventId: number, input: CreateGameDayInput, deps: WriteDeps): Promise<{ gameDay: GameDayPrepRow<Date>; emailed: number }> {
   const today = ctx.clock.today();
   const prepId = await (ctx.db as Db).transaction(async (tx) => {
     const e = await eventOf(tx, eventId);
@@ -247,7 +248,12 @@ export async function createGameDayPrep(ctx: Ctx, eventId: number, input: Create
     return prep!.id;
   });
   const [row] = await gameDayRows(ctx, eq(gameDayPreps.id, prepId));
-  return row!;
+  // Each crew lead hears of the jobs given to the crew, as with any assigned work.
+  const orders = await workOrderRows(ctx.db, row!.steps.map((s) => s.workOrderId).filter((id): id is number => id !== null));
+  const byCrew = new Map<number, WorkMoveNotice['orders']>();
+  for (const o of orders) if (o.crewId !== null) byCrew.set(o.crewId, [...(byCrew.get(o.crewId) ?? []), o]);
+  const emailed = byCrew.size ? await notifyCrews(ctx.db, deps.mailer, [...byCrew].map(([crewId, list]) => ({ crewId, kind: 'assigned' as const, orders: list })), ctx.actorName, deps.publicUrl) : 0;
+  return { gameDay: row!, emailed };
 }
 
 /** What the order carries for the crew: the booking, and per step its HOC and pattern, paint, colourant or logo. */

@@ -14,7 +14,7 @@ export async function listGameDays(query: GameDayQuery, signal?: AbortSignal): P
 }
 
 export async function createGameDay(eventId: number, input: CreateGameDayInput): Promise<GameDayPrepRow> {
-  return (await api.post<{ gameDay: GameDayPrepRow }>(`/game-days/events/${eventId}`, input)).gameDay;
+  return (await api.post<{ gameDay: GameDayPrepRow; emailed: number }>(`/game-days/events/${eventId}`, input)).gameDay;
 }
 
 /** The checklist PDF, opened by the browser with the session cookie. */
