@@ -81,7 +81,7 @@ describe('game-day preparation', () => {
       const pdf = await page.evaluate(async (href) => {
         const r = await fetch(href);
         return { status: r.status, type: r.headers.get('content-type'), head: new TextDecoder().decode((await r.arrayBuffer()).slice(0, 5)) };
-      }, await prep.locator(`[data-test="game-day-pdf-${eventId}"]`).getAttribute('href'));
+      }, (await prep.locator(`[data-test="game-day-pdf-${eventId}"]`).getAttribute('href'))!);
       expect(pdf).toEqual({ status: 200, type: 'application/pdf', head: '%PDF-' });
 
       // Its jobs are on the week plan of their week, the colourant among them; one is done.
