@@ -37,6 +37,7 @@ import { devRouter } from './routes/dev.ts';
 import { directoryRouter } from './routes/directory.ts';
 import { fieldEventsRouter } from './routes/field-events.ts';
 import { fieldsRouter } from './routes/fields.ts';
+import { gameDaysRouter } from './routes/game-days.ts';
 import { importsRouter } from './routes/imports.ts';
 import { mapRouter } from './routes/map.ts';
 import { partnerRouter } from './routes/partner.ts';
@@ -176,6 +177,7 @@ export function createApp(
   app.use('/api/fields', linePlansRouter(full));
   app.use('/api/fields', logosRouter(full));
   app.use('/api/field-events', fieldEventsRouter(full));
+  app.use('/api/game-days', gameDaysRouter(full));
   app.use('/api/requests', requestsRouter(full));
   app.use('/api/standards', standardsRouter(full));
   app.use('/api/imports', importsRouter(full));

@@ -19,6 +19,8 @@ export const SUBJECTS = [
   'WorkOrder',
   'FieldCheck',
   'FieldEvent',
+  /** A game-day preparation: an event's checklist and its work orders. */
+  'GameDayPrep',
   /** Closing, restricting and reopening a field (its history of closures). */
   'FieldClosure',
   'Standards',
@@ -91,7 +93,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       break;
 
     case 'head':
-      can('read', ['District', 'Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck', 'FieldEvent', 'Weather', 'Request']);
+      can('read', ['District', 'Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck', 'FieldEvent', 'Weather', 'Request', 'GameDayPrep']);
       can('read', ['Standards', 'Settings', 'AuditEntry']);
       can('update', ['Standards', 'Settings']);
       // The head decides maintenance levels and may correct any site or field.
@@ -106,7 +108,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
     case 'foreman': {
       const d = actor.districtId ?? -1;
       can('read', 'District', { id: d });
-      can('manage', ['Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck', 'FieldEvent', 'FieldClosure'], { districtId: d });
+      can('manage', ['Site', 'Field', 'Crew', 'Equipment', 'WorkOrder', 'FieldCheck', 'FieldEvent', 'FieldClosure', 'GameDayPrep'], { districtId: d });
       // A foreman answers his district's requests and decides them ('assign': schedule into work, decline, close).
       can(['read', 'update', 'assign'], 'Request', { districtId: d });
       can('read', ['Standards', 'Weather']);
@@ -133,6 +135,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can(['read', 'log'], 'WorkOrder', { crewId: c });
       can('create', 'FieldCheck', { districtId: d });
       can('read', 'FieldEvent', { districtId: d });
+      can('read', 'GameDayPrep', { districtId: d });
       can('read', 'FieldClosure', { districtId: d });
       can('read', ['Standards', 'Weather']);
       break;
@@ -147,6 +150,8 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       // or cancel only the bookings they made themselves, not the department's or another partner's.
       can(['read', 'create'], 'FieldEvent', { siteId: { $in: sites } });
       can(['update', 'delete'], 'FieldEvent', { siteId: { $in: sites }, createdBy: actor.id });
+      // They follow how the department readies their events (progress only, in plain words).
+      can('read', 'GameDayPrep', { siteId: { $in: sites } });
       can(['read', 'create'], 'Request', { siteId: { $in: sites } });
       // A partner changes only the requests they filed themselves; deciding them is the foreman's.
       can('update', 'Request', { siteId: { $in: sites }, createdBy: actor.id });

@@ -31,11 +31,11 @@ export const ERROR_STATUS: Record<ErrorKind, number> = {
 };
 
 /** Resources whose rows can be missing: `<resource>/not_found` (404). */
-export const NOT_FOUND_RESOURCES = ['route', 'district', 'site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'work_photo', 'field_check', 'import', 'standards', 'user', 'weather_station', 'calendar_feed', 'field_request', 'request_photo', 'field_logo'] as const;
+export const NOT_FOUND_RESOURCES = ['route', 'district', 'site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'work_photo', 'field_check', 'import', 'standards', 'user', 'weather_station', 'calendar_feed', 'field_request', 'request_photo', 'field_logo', 'game_day'] as const;
 export type NotFoundResource = (typeof NOT_FOUND_RESOURCES)[number];
 
 /** Resources written with a version check: `<resource>/version_conflict` (409). */
-export const VERSIONED_RESOURCES = ['site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'standards', 'settings', 'user', 'field_stripes', 'field_request', 'field_line_plan', 'field_logo'] as const;
+export const VERSIONED_RESOURCES = ['site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'standards', 'settings', 'user', 'field_stripes', 'field_request', 'field_line_plan', 'field_logo', 'game_day'] as const;
 export type VersionedResource = (typeof VERSIONED_RESOURCES)[number];
 
 /** Routes that take a file upload: `<resource>/too_large` (413) and `<resource>/bad_upload` (400). */
@@ -95,6 +95,9 @@ export const ERROR_CODES = {
   'work_photo/file_missing': 'not_found',
 
   'field_request/not_open': 'conflict',
+  'game_day/exists': 'conflict',
+  'game_day/past_event': 'invalid',
+  'game_day/colourant_missing': 'invalid',
   'field_request/past_game': 'invalid',
   'field_request/layout': 'invalid',
   'request_photo/no_file': 'invalid',
@@ -238,7 +241,7 @@ const ACCESS_CHANGED = {
   deactivated: 'An administrator deactivated your account, which signed you out; ask them if you need access again',
 } as const;
 /** How a resource is named in a message where its code name would read badly. */
-const WORDS: Partial<Record<NotFoundResource, string>> = { weather_station: 'weather station', field_check: 'field check', calendar_feed: 'calendar feed' };
+const WORDS: Partial<Record<NotFoundResource, string>> = { weather_station: 'weather station', field_check: 'field check', calendar_feed: 'calendar feed', game_day: 'game-day preparation' };
 
 /** The errors that many places raise, each written once. */
 export const errors = {

@@ -187,7 +187,7 @@ export const EQUIPMENT_KIND_LABELS: Record<EquipmentKind, string> = {
 };
 export const MOWER_KINDS: readonly EquipmentKind[] = ['reel_mower', 'rotary_mower', 'flail_mower'];
 
-export const WORK_TASKS = ['mow', 'paint_lines', 'feed', 'irrigate', 'field_check', 'aerate', 'overseed', 'topdress', 'weed_control'] as const;
+export const WORK_TASKS = ['mow', 'paint_lines', 'feed', 'irrigate', 'field_check', 'aerate', 'overseed', 'topdress', 'weed_control', 'colourant'] as const;
 export type WorkTask = (typeof WORK_TASKS)[number];
 export const WORK_TASK_LABELS: Record<WorkTask, string> = {
   mow: 'Mow',
@@ -199,6 +199,7 @@ export const WORK_TASK_LABELS: Record<WorkTask, string> = {
   overseed: 'Overseed',
   topdress: 'Topdress',
   weed_control: 'Weed control',
+  colourant: 'Colourant',
 };
 export const WORK_STATUSES = ['planned', 'assigned', 'started', 'done', 'skipped'] as const;
 export type WorkStatus = (typeof WORK_STATUSES)[number];

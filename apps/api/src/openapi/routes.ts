@@ -8,6 +8,8 @@ import type { oas31 } from 'zod-openapi';
 import {
   applicationSchema,
   acceptInviteSchema,
+  createGameDaySchema,
+  gameDayListSchema,
   closeFieldSchema,
   setFieldStripesSchema,
   setFieldLinePlanSchema,
@@ -70,6 +72,7 @@ import { listQuery as fieldEventsQuery } from '../routes/field-events.ts';
 import { listQuerySchema as importsQuery } from '../routes/imports.ts';
 import { csvQuerySchema, MAX_CSV_BYTES } from '../routes/weather.ts';
 import { confirmSchema } from '../routes/week-plans.ts';
+import { eventParamSchema } from '../routes/game-days.ts';
 import { querySchema as workOrdersQuery } from '../routes/work-orders.ts';
 import { versionQuerySchema } from '../routes/write-routes.ts';
 import { LOGO_MAX_BYTES } from '../services/logo-files.ts';
@@ -1227,6 +1230,49 @@ const linePlans: RouteDoc[] = [
   },
 ];
 
+const gameDays: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/game-days',
+    tag: 'Game days',
+    summary: 'Game-day preparations of events in a date range (default: from today, 60 days), with each step’s work order and the progress',
+    description: 'A partner reads only those of their sites, without work order ids, crews or hours.',
+    access: allowed('read', 'GameDayPrep'),
+    query: gameDayListSchema,
+    answers: [json(200, 'Preparations the caller may read.', items('Game-day preparations'))],
+  },
+  {
+    method: 'get',
+    path: '/api/game-days/:id',
+    tag: 'Game days',
+    summary: 'One game-day preparation',
+    access: allowed('read', 'GameDayPrep'),
+    params: idParamSchema,
+    answers: [json(200, 'The preparation.', shape({ gameDay: row('As an item of GET /api/game-days') }))],
+  },
+  {
+    method: 'get',
+    path: '/api/game-days/:id/checklist.pdf',
+    tag: 'Game days',
+    summary: 'The game-day checklist as a printable PDF: event, field, date, steps with day, crew and hours, tick boxes',
+    access: allowed('read', 'GameDayPrep'),
+    params: idParamSchema,
+    answers: [{ status: 200, description: 'The checklist (PDF, one page).', contentType: 'application/pdf', body: { type: 'string', format: 'binary' } }],
+  },
+  {
+    method: 'post',
+    path: '/api/game-days/events/:eventId',
+    tag: 'Game days',
+    summary: 'Prepare an event: a checklist of the chosen steps, each a pinned work order on the last working days before it within the crews’ hours',
+    description: 'Work already planned for the event (the week plan’s painting for it, a cut or a check in the days before) joins the checklist instead of being doubled. Re-generating a week keeps the orders. 409 when the event has one already.',
+    access: allowed('create', 'GameDayPrep'),
+    params: eventParamSchema,
+    body: createGameDaySchema,
+    answers: [json(201, 'The preparation, and how many crew leads were e-mailed of their new jobs.', shape({ gameDay: row('As an item of GET /api/game-days'), emailed: int('Crew leads e-mailed') }))],
+    errors: [409],
+  },
+];
+
 const partner: RouteDoc[] = [
   {
     method: 'get',
@@ -1455,6 +1501,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...stripes,
   ...linePlans,
   ...logos,
+  ...gameDays,
   ...partner,
   ...calendarFeeds,
   ...requests,

@@ -198,6 +198,7 @@ export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, dep
         pinned: true,
         reason: 'Added by hand',
         notes: input.notes,
+        ...(input.colourant ? { details: { colourant: input.colourant } } : {}),
         createdBy: ctx.actor.id,
       })
       .returning();

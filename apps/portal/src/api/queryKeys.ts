@@ -9,6 +9,7 @@ export const queryKeys = {
   districts: () => ['districts'] as const,
   equipment: () => ['equipment'] as const,
   fieldEvents: (query: object) => ['field-events', query] as const,
+  gameDays: (query: object) => ['game-days', query] as const,
   fields: (query: object) => ['fields', 'list', query] as const,
   field: (id: number) => ['fields', 'detail', id] as const,
   fieldNeeds: (id: number, date: string | null) => ['fields', 'needs', id, date] as const,
@@ -51,7 +52,7 @@ export const queryKeys = {
 };
 
 /** What a write changes, by what was written. */
-export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request' | 'costs' | 'fieldLogo';
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request' | 'costs' | 'fieldLogo' | 'gameDay';
 
 /**
  * The answers a write makes stale: the resource itself and every answer that shows it (a
@@ -66,11 +67,13 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   user: [['users'], ['crews']],
   standards: [['standards'], ['fields', 'needs'], ['map'], ['week-plans']],
   import: [['imports'], ['sites'], ['fields'], ['districts'], ['map']],
-  workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map'], ['partner']],
+  workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map'], ['partner'], ['game-days']],
   weather: [['weather'], ['fields', 'needs'], ['map']],
   devMail: [['dev-mail']],
   fieldCheck: [['fields'], ['map'], ['records']],
   calendarFeed: [['calendar-feeds']],
+  // A game-day preparation adds or pins work orders.
+  gameDay: [['game-days'], ['week-plans'], ['work-orders'], ['partner']],
   fieldLogo: [['fields', 'logos']],
   costs: [['costs']],
   // Scheduling a request books the field or adds a work order; the partner's pages list requests.

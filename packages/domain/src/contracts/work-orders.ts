@@ -20,6 +20,8 @@ export type WorkOrderDetails = {
   cancelled?: { reason: string; by: string; on: string };
   /** The mowing pattern asked for (stripes, checkerboard…), when the order carries one. */
   pattern?: string;
+  /** A colourant job's product, label rate (mL/m²) and area (m²). */
+  colourant?: { product: string; rateMlPerM2: number; areaM2: number };
 } & Record<string, unknown>;
 
 /** A work order: a row of `GET /api/work-orders`, of the week board, and the order of every write. */

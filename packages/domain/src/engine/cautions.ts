@@ -21,6 +21,9 @@ export const CAUTIONS = {
   /** Shown where a pesticide or fertiliser application is recorded (the 10 mph drift limit many labels set: from memory). */
   application:
     'The product label is the law: apply only at its rate, to its sites and in its weather limits. Pesticides by a licensed applicator where required; keep people off for the label\'s re-entry interval and post the notice local rules ask for; do not spray in wind that drifts (most labels: not above about 10 mph) or before rain the label warns of; keep buffers to water. Local codes and licensed practice decide.',
+  // Turf colourants (dyes, pigments) only tint the leaf: common practice.
+  colourant:
+    'Colourant changes colour, not turf health: it hides no disease, drought or wear. Follow the label for rate, mixing, protective equipment and drying time, and keep spray off paths, seats and players\' kit.',
   lines:
     'Use turf-safe line paint at the label\'s dilution; dark pigments (reds, blues) can damage turf, so put a white base coat under colours.',
 } as const;

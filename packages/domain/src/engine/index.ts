@@ -23,3 +23,4 @@ export * from './cultural.ts';
 export * from './stripes.ts';
 export * from './linePlans.ts';
 export * from './logos.ts';
+export * from './game-day.ts';

@@ -16,3 +16,4 @@ export * from './requests.ts';
 export * from './costs.ts';
 export * from './linePlans.ts';
 export * from './logos.ts';
+export * from './game-days.ts';

@@ -29,15 +29,33 @@ export const rainOutSchema = z.object({
 });
 export type RainOutInput = z.infer<typeof rainOutSchema>;
 
-export const createWorkOrderSchema = z.object({
-  fieldId: idSchema,
-  task: z.enum(WORK_TASKS, { error: `task must be one of ${WORK_TASKS.join(', ')}` }),
-  plannedDate: isoDate,
-  crewId: idSchema.nullable().default(null),
-  equipmentId: idSchema.nullable().default(null),
-  plannedHours,
-  notes: z.string().max(2000).default(''),
+/**
+ * A colourant (turf dye or pigment) application: the product, the label's rate in mL of
+ * product per m², and the area coloured in m².
+ */
+export const colourantSchema = z.object({
+  product: z.string({ error: 'name the colourant product' }).trim().min(2, 'name the colourant product').max(120, 'keep the product name under 120 characters'),
+  rateMlPerM2: z.number({ error: 'the rate must be a number' }).positive('the rate must be more than 0').max(100, 'a rate above 100 mL/m² is not a colourant rate; check the label'),
+  areaM2: z.number({ error: 'the area must be a number' }).positive('the area must be more than 0').max(500_000, 'an area above 50 ha is not one field'),
 });
+export type ColourantInput = z.infer<typeof colourantSchema>;
+
+export const createWorkOrderSchema = z
+  .object({
+    fieldId: idSchema,
+    task: z.enum(WORK_TASKS, { error: `task must be one of ${WORK_TASKS.join(', ')}` }),
+    plannedDate: isoDate,
+    crewId: idSchema.nullable().default(null),
+    equipmentId: idSchema.nullable().default(null),
+    plannedHours,
+    notes: z.string().max(2000).default(''),
+    /** Required for a colourant job, refused on any other. */
+    colourant: colourantSchema.nullable().default(null),
+  })
+  .superRefine((v, ctx) => {
+    if (v.task === 'colourant' && !v.colourant) ctx.addIssue({ code: 'custom', path: ['colourant'], message: 'a colourant job needs the product, the rate and the area' });
+    if (v.task !== 'colourant' && v.colourant) ctx.addIssue({ code: 'custom', path: ['colourant'], message: 'only a colourant job takes a colourant' });
+  });
 export type CreateWorkOrderInput = z.infer<typeof createWorkOrderSchema>;
 
 /** A foreman's change: assign, move, re-time. Any change pins the order against re-generation. */

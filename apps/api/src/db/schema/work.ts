@@ -1,7 +1,7 @@
 /** Equipment, work orders and their photos: the crews' side of the week plan. */
 import { sql } from 'drizzle-orm';
 import { boolean, date, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
-import type { ApplicationRateUnit, ApplicationTask, ApplicationWeather, ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, PlanLayout, PlanPaint, SeasonShift, StripePattern, WorkStatus, WorkTask } from '@swardwise/domain';
+import type { ApplicationRateUnit, ApplicationTask, ApplicationWeather, ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, GameDayStep, PlanLayout, PlanPaint, SeasonShift, StripePattern, WorkStatus, WorkTask } from '@swardwise/domain';
 import { districtRef, fieldRef, sites } from './city.ts';
 import { crews, users } from './people.ts';
 import { createdAt, id, instant, versioned } from './columns.ts';
@@ -263,4 +263,28 @@ export const fieldLogos = pgTable(
     ...versioned,
   },
   (t) => [index('field_logos_field_idx').on(t.fieldId)],
+);
+
+/**
+ * A game-day preparation: the checklist that readies a field for one booking (a partner's game
+ * request becomes a booking too). Each step names the work order it became; its progress is
+ * those orders' statuses. Scope copies come from the field, as on every work row.
+ */
+export const gameDayPreps = pgTable(
+  'game_day_preps',
+  {
+    ...id,
+    ...ofField,
+    eventId: integer('event_id')
+      .notNull()
+      .references(() => fieldEvents.id, { onDelete: 'cascade' }),
+    steps: jsonb('steps').$type<{ step: GameDayStep; workOrderId: number | null }[]>().notNull(),
+    /** The colourant chosen (product, label rate mL/m², area m²); null: none. */
+    colourant: jsonb('colourant').$type<{ product: string; rateMlPerM2: number; areaM2: number } | null>(),
+    /** The mowing pattern chosen for the event; null: plain mowing. */
+    pattern: text('pattern').$type<StripePattern>(),
+    createdBy: integer('created_by').references(() => users.id),
+    ...versioned,
+  },
+  (t) => [uniqueIndex('game_day_preps_event_key').on(t.eventId), index('game_day_preps_district_idx').on(t.districtId)],
 );

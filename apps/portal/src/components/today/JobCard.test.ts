@@ -50,6 +50,19 @@ describe('JobCard', () => {
     expect(mountCard({ order: order() }, 'metric').text()).toMatch(/HOC\s*51 mm/);
   });
 
+  test('should show a colourant job’s product, rate, area and amount in the user’s units, with its caution', () => {
+    const colourant = { product: 'Meadow Deep pigment', rateMlPerM2: 3, areaM2: 7140 };
+    const card = mountCard({ order: order({ task: 'colourant', details: { colourant } }) });
+    expect(card.text()).toMatch(/Product\s*Meadow Deep pigment/);
+    // 3 mL/m² = 9.4 fl oz per 1,000 ft²; 7,140 m² = 76,854 ft²; 21.42 L = 5.7 US gal.
+    expect(card.text()).toMatch(/Rate\s*9\.4 fl oz per 1,000 ft²/);
+    expect(card.text()).toMatch(/Area\s*76,854 ft²/);
+    expect(card.text()).toMatch(/Amount\s*5\.7 gal/);
+    expect(card.get('[data-test="job-colourant-caution"]').text()).toMatch(/changes colour, not turf health/);
+    expect(mountCard({ order: order({ task: 'colourant', details: { colourant } }) }, 'metric').text()).toMatch(/Rate\s*3\.0 mL\/m²/);
+    expect(mountCard({ order: order() }).find('[data-test="job-colourant-caution"]').exists()).toBe(false);
+  });
+
   test('should show a queued report’s status before the server has it, and no buttons once done', () => {
     const queued = { body: { status: 'done', actualHours: 1.25, note: '', clientRef: 'abcdefgh', reportedAt: '' }, state: 'waiting' } as unknown as QueuedReport;
     const card = mountCard({ order: order(), queued });

@@ -103,5 +103,7 @@ describe('filterOptions and cautionsFor', () => {
     expect(cautionsFor(['mow', 'feed', 'mow']).map((c) => c.key)).toEqual(['mowing', 'feed', 'wetField', 'lightning']);
     expect(cautionsFor(['field_check']).map((c) => c.key)).toEqual(['wetField', 'lightning']);
     expect(cautionsFor(['weed_control'])[0]!.text).toMatch(/label/);
+    expect(cautionsFor(['colourant']).map((c) => c.key)).toEqual(['colourant', 'wetField', 'lightning']);
+    expect(cautionsFor(['colourant'])[0]!.text).toMatch(/changes colour, not turf health.*label/);
   });
 });

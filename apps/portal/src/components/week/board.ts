@@ -154,10 +154,11 @@ const TASK_CAUTIONS: Partial<Record<WorkTask, CautionKey[]>> = {
   weed_control: ['pesticide', 'application'],
   paint_lines: ['lines'],
   irrigate: ['water'],
+  colourant: ['colourant'],
 };
 
 /** Mowing first (most jobs), chemicals next, then the weather that stops all work. */
-const CAUTION_ORDER: CautionKey[] = ['mowing', 'feed', 'pesticide', 'application', 'lines', 'water', 'wetField', 'lightning'];
+const CAUTION_ORDER: CautionKey[] = ['mowing', 'feed', 'pesticide', 'application', 'colourant', 'lines', 'water', 'wetField', 'lightning'];
 
 /**
  * The cautions for a set of tasks: each task's own, then the weather ones every outdoor job
