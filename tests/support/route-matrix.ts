@@ -10,7 +10,7 @@ import crypto from 'node:crypto';
 import type { Db } from '../../apps/api/src/db/client.ts';
 import { calendarFeeds } from '../../apps/api/src/db/schema/index.ts';
 import type supertest from 'supertest';
-import type { Role } from '@swardwise/domain';
+import { DEFAULT_COSTS, type Role } from '@swardwise/domain';
 
 export type Agent = ReturnType<typeof supertest.agent>;
 /** A request on its way (supertest's Test) or the answer of one awaited first. */
@@ -281,7 +281,10 @@ export const MATRIX: MatrixRow[] = [
   { route: 'GET /api/requests/:id', allow: 'admin head foreman:own partner:own', call: (c) => c.agent.get(`/api/requests/${c.ids.request}`) },
   {
     route: 'PATCH /api/requests/:id',
-    allow: 'admin foreman:own partner:own',
+    allow: 'partner:own',
+    // The other side's request was filed by an administrator, who may change his own: called on the partner's only.
+    scoped: false,
+    narrower: 'Only the partner who filed a request changes it; the department answers it with messages and decisions.',
     call: (c) => c.agent.patch(`/api/requests/${c.ids.request}`).send({ version: STALE, description: 'Changed words' }),
   },
   {
@@ -398,6 +401,42 @@ export const MATRIX: MatrixRow[] = [
   // Developer mail sink (only beside the local sink, never in production)
   { route: 'GET /api/dev/mail', allow: 'admin', scoped: false, call: (c) => c.agent.get('/api/dev/mail') },
   { route: 'DELETE /api/dev/mail', allow: 'admin', scoped: false, call: (c) => c.agent.delete('/api/dev/mail') },
+
+  // Costs and rates
+  { route: 'GET /api/costs', allow: 'admin head foreman', scoped: false, call: (c) => c.agent.get('/api/costs') },
+  { route: 'PATCH /api/costs', allow: 'admin head', scoped: false, call: (c) => c.agent.patch('/api/costs').send({ ...DEFAULT_COSTS, version: STALE }) },
+
+  // Cultural work: application records
+  { route: 'GET /api/records/applications', allow: 'everyone', scoped: false, call: (c) => c.agent.get('/api/records/applications') },
+  {
+    route: 'POST /api/work-orders/:id/application',
+    allow: 'admin foreman:own crew:own',
+    call: (c) => c.agent.post(`/api/work-orders/${c.ids.workOrder}/application`).send({ product: 'x' }),
+  },
+
+  // Line plans
+  { route: 'GET /api/fields/:id/lines', allow: 'admin head foreman:own crew:own partner:own', call: (c) => c.agent.get(`/api/fields/${c.ids.field}/lines`) },
+  { route: 'GET /api/fields/:id/lines/set-out.pdf', allow: 'admin head foreman:own crew:own partner:own', call: (c) => c.agent.get(`/api/fields/${c.ids.field}/lines/set-out.pdf`) },
+  { route: 'PATCH /api/fields/:id/lines', allow: 'admin head foreman:own', call: (c) => c.agent.patch(`/api/fields/${c.ids.field}/lines`).send({ version: STALE }) },
+
+  // Logos (no logo exists: an allowed caller is told the logo is missing)
+  { route: 'GET /api/fields/:id/logos', allow: 'admin head foreman:own crew:own partner:own', call: (c) => c.agent.get(`/api/fields/${c.ids.field}/logos`) },
+  { route: 'POST /api/fields/:id/logos', allow: 'admin head foreman:own', call: (c) => c.agent.post(`/api/fields/${c.ids.field}/logos`).attach('logo', PNG_1PX, 'logo.png') },
+  {
+    route: 'PATCH /api/fields/:id/logos/:logoId',
+    allow: 'admin head foreman:own',
+    allowed: 404,
+    call: (c) => c.agent.patch(`/api/fields/${c.ids.field}/logos/999999`).send({ version: STALE, widthM: 5 }),
+  },
+  { route: 'DELETE /api/fields/:id/logos/:logoId', allow: 'admin head foreman:own', allowed: 404, call: (c) => c.agent.delete(`/api/fields/${c.ids.field}/logos/999999?version=${STALE}`) },
+  { route: 'GET /api/fields/:id/logos/:logoId/image', allow: 'admin head foreman:own crew:own partner:own', allowed: 404, call: (c) => c.agent.get(`/api/fields/${c.ids.field}/logos/999999/image`) },
+  { route: 'GET /api/fields/:id/logos/:logoId/grid.pdf', allow: 'admin head foreman:own crew:own partner:own', allowed: 404, call: (c) => c.agent.get(`/api/fields/${c.ids.field}/logos/999999/grid.pdf`) },
+
+  // Game-day preparations
+  { route: 'GET /api/game-days', allow: 'everyone', scoped: false, call: (c) => c.agent.get('/api/game-days') },
+  { route: 'GET /api/game-days/:id', allow: 'everyone', scoped: false, allowed: 404, call: (c) => c.agent.get('/api/game-days/999999') },
+  { route: 'GET /api/game-days/:id/checklist.pdf', allow: 'everyone', scoped: false, allowed: 404, call: (c) => c.agent.get('/api/game-days/999999/checklist.pdf') },
+  { route: 'POST /api/game-days/events/:eventId', allow: 'admin foreman:own', call: (c) => c.agent.post(`/api/game-days/events/${c.ids.event}`).send({ steps: 'none' }) },
 ];
 
 export type Caller = 'anonymous' | Role;

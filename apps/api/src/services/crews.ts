@@ -55,6 +55,8 @@ export async function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput): 
     if (changes.districtId !== undefined && changes.districtId !== before.districtId) {
       // A crew lead's district follows his crew, so a crew with a lead stays where it is.
       authorize(ctx, 'create', 'Crew', { districtId: changes.districtId });
+      const [d] = await tx.select({ id: districts.id }).from(districts).where(eq(districts.id, changes.districtId));
+      if (!d) throw errors.noSuch('district', 'body.districtId');
       const [lead] = await tx.select({ id: users.id }).from(users).where(eq(users.crewId, id)).limit(1);
       if (lead) throw appError('crew/has_lead', 'Move the crew lead to another crew before moving this crew to another district');
     }

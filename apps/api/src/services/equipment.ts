@@ -70,9 +70,16 @@ async function checkCrew(db: Ctx['db'], crewId: number | null | undefined, distr
   }
 }
 
+/** A district named in the body must exist (400, not a foreign-key failure). */
+async function requireDistrict(db: Ctx['db'], id: number): Promise<void> {
+  const [d] = await db.select({ id: districts.id }).from(districts).where(eq(districts.id, id));
+  if (!d) throw errors.noSuch('district', 'body.districtId');
+}
+
 export async function createEquipment(ctx: Ctx, input: CreateEquipmentInput): Promise<EquipmentRow<Date>> {
   authorize(ctx, 'create', 'Equipment', { districtId: input.districtId });
   return (ctx.db as Db).transaction(async (tx) => {
+    await requireDistrict(tx, input.districtId);
     await checkCrew(tx, input.crewId, input.districtId);
     const [created] = await tx.insert(equipment).values(input).returning({ id: equipment.id });
     const row = (await getRow(tx, created!.id))!;
@@ -86,7 +93,10 @@ export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipme
     const before: Row = writable(ctx, 'update', 'Equipment', 'equipment', id, await getRow(tx, id));
     const { version, ...changes } = input;
     const districtId = changes.districtId ?? before.districtId;
-    if (districtId !== before.districtId) authorize(ctx, 'create', 'Equipment', { districtId });
+    if (districtId !== before.districtId) {
+      authorize(ctx, 'create', 'Equipment', { districtId });
+      await requireDistrict(tx, districtId);
+    }
     await checkCrew(tx, changes.crewId === undefined ? before.crewId : changes.crewId, districtId);
     const merged = { ...before, ...changes };
     if (merged.hocMinMm != null && merged.hocMaxMm != null && merged.hocMinMm > merged.hocMaxMm) {
