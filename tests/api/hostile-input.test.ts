@@ -25,7 +25,7 @@ const SEED = Number(process.env.FUZZ_SEED ?? 20261203);
  * Measured: about 100 ms a body on a machine loaded far past its cores, so the test's time
  * limit is generous; FUZZ_PER_ROUTE=20 for a quick local run.
  */
-const PER_ROUTE = Number(process.env.FUZZ_PER_ROUTE ?? 224);
+const PER_ROUTE = Number(process.env.FUZZ_PER_ROUTE ?? 200);
 
 interface Ids {
   district: number;

@@ -1,7 +1,7 @@
 /** Game-day preparation: an event's checklist, its work orders, and the checklist as a PDF. */
 import { Router } from 'express';
 import { z } from 'zod';
-import { addDaysIso, createGameDaySchema, gameDayListSchema, idParamSchema } from '@swardwise/domain';
+import { addDaysIso, createGameDaySchema, gameDayListSchema, idParamSchema, idSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
@@ -11,7 +11,7 @@ import { authorizeGameDay, createGameDayPrep, getGameDay, listGameDays } from '.
 
 /** Without dates: from today, two months of events. */
 const DEFAULT_DAYS = 60;
-export const eventParamSchema = z.object({ eventId: z.coerce.number().int().positive('an event id is a positive whole number') });
+export const eventParamSchema = z.object({ eventId: idSchema });
 
 export function gameDaysRouter(deps: AppDeps): Router {
   const { db } = deps;
