@@ -3,7 +3,6 @@
  * set. The same Drizzle schema and migrations serve both; migrations run here, inside the
  * one process that owns the data folder.
  */
-import fs from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { PGlite } from '@electric-sql/pglite';
