@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, beforeEach, describe, expect, test } from 'vitest';
-import { addDaysIso } from '@swardwise/domain';
+import { addDaysIso, mondayOf } from '@swardwise/domain';
 import { auditLog, weatherDays, weatherStations } from '../../apps/api/src/db/schema/index.ts';
 import { startFakeWeather, type FakeWeather } from '../../apps/api/src/weather/fake-server.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
@@ -149,5 +149,35 @@ describe('hosted weather service', () => {
     expect(long.status).toBe(400);
     const missing = await foreman.post('/api/weather/stations/99999/pull').send({ from: '2027-05-01', to: '2027-05-02' });
     expect(missing.status).toBe(404);
+  });
+});
+
+describe('weather service down', () => {
+  test('should keep needs and the week plan answering on the last weather and show the days missing since then', async () => {
+    // Only the fixture station keeps weather, ending weeks ago: the service has been down since.
+    await api.database.db.delete(weatherDays).where(eq(weatherDays.stationId, stationId));
+    fake.setBehaviour('slow');
+    const foreman = await api.signIn('foreman');
+    const today = api.clock.today();
+    const pull = await foreman.post(`/api/weather/stations/${api.fixture.weather.stationId}/pull`).send({ from: addDaysIso(today, -6), to: today });
+    expect(pull.status).toBe(503);
+    expect(pull.body.error.code).toBe('weather/timeout');
+
+    const gap = { since: addDaysIso(api.fixture.weather.end, 1), through: today, days: expect.any(Number) };
+    const stations = await foreman.get('/api/weather/stations');
+    expect(stations.status).toBe(200);
+    const fixtureStation = stations.body.items.find((s: { id: number }) => s.id === api.fixture.weather.stationId);
+    expect(fixtureStation.gap).toEqual(gap);
+    expect(addDaysIso(fixtureStation.gap.since, fixtureStation.gap.days - 1)).toBe(today);
+
+    const needs = await foreman.get(`/api/fields/${api.fixture.fields.northSoccer}/needs`);
+    expect(needs.status).toBe(200);
+    expect(needs.body.needs.weatherGap).toEqual(fixtureStation.gap);
+    expect(needs.body.needs.week.fallback).toBe(true);
+    expect(needs.body.needs.week.end).toBe(api.fixture.weather.end);
+    expect(needs.body.needs.growth.growthMmWeek).toBeGreaterThan(0);
+
+    const week = await foreman.post('/api/week-plans/generate').send({ districtId: api.fixture.districts.north, weekStart: mondayOf(today), dryRun: true });
+    expect(week.status).toBeLessThan(300);
   });
 });

@@ -8,6 +8,7 @@ import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
 import { createMailer, type Mailer } from '../../apps/api/src/mail/mailer.ts';
+import type { MailOutbox, OutboxOptions } from '../../apps/api/src/mail/outbox.ts';
 import { startMailSink, type MailSink } from '../../apps/api/src/mail/sink.ts';
 import type { BackgroundTasks } from '../../apps/api/src/services/background.ts';
 import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
@@ -34,7 +35,7 @@ export interface TestApi {
    * A second app over the same database with other settings (its own rate-limit counters),
    * optionally with its own logger or mailer.
    */
-  makeApp(env?: Record<string, string>, extra?: { logger?: Logger; mailer?: Mailer }): { app: App; background: BackgroundTasks };
+  makeApp(env?: Record<string, string>, extra?: { logger?: Logger; mailer?: Mailer; outbox?: OutboxOptions }): { app: App; background: BackgroundTasks; outbox: MailOutbox };
   close(): Promise<void>;
 }
 
@@ -54,8 +55,8 @@ export async function startTestApi(env: Record<string, string> = {}, options: { 
     const config = loadConfig({ ...BASE_ENV, ...overrides });
     const logger = extra.logger ?? fileLog;
     const mailer = extra.mailer ?? createMailer({ host: '127.0.0.1', port: mail.port, secure: false, ignoreTLS: true, from: config.mailFrom }, logger);
-    const { app, background } = createApp({ db: database.db, config, logger, sessionSecret: TEST_SESSION_SECRET, mailer, mailSink: mail, clock });
-    return { app, background };
+    const { app, background, outbox } = createApp({ db: database.db, config, logger, sessionSecret: TEST_SESSION_SECRET, mailer, mailSink: mail, clock, outbox: extra.outbox });
+    return { app, background, outbox };
   };
   const { app, background } = makeApp(env);
   async function signInAs(email: string, target: App = app) {

@@ -14,6 +14,7 @@ import { appError } from '@swardwise/domain';
 import type { AppDeps } from './app-deps.ts';
 import type { Config } from './config.ts';
 import { createMailer, type Mailer } from './mail/mailer.ts';
+import { MailOutbox, type OutboxOptions } from './mail/outbox.ts';
 import { loadUser, requireUser } from './http/auth.ts';
 import { withClock } from './http/clock.ts';
 import { errorHandler, noRoute } from './http/errors.ts';
@@ -66,12 +67,13 @@ const JSON_LIMIT_SIGNED_IN = '2mb';
 const JSON_LIMIT_ANONYMOUS = '16kb';
 
 export function createApp(
-  deps: Omit<AppDeps, 'config' | 'mailer' | 'clock' | 'background'> & { config: Config; mailer?: Mailer; clock?: DepartmentClock },
-): { app: Express; store: DrizzleSessionStore; background: BackgroundTasks } {
-  // Without a mailer, e-mail is off (logged), as in a deployment with no SMTP settings.
-  const mailer = deps.mailer ?? createMailer(null, deps.logger);
+  deps: Omit<AppDeps, 'config' | 'mailer' | 'clock' | 'background'> & { config: Config; mailer?: Mailer; clock?: DepartmentClock; outbox?: OutboxOptions },
+): { app: Express; store: DrizzleSessionStore; background: BackgroundTasks; outbox: MailOutbox } {
   const clock = deps.clock ?? new DepartmentClock(deps.db, deps.config.departmentTimeZone);
   const background = new BackgroundTasks(deps.logger);
+  // Without a mailer, e-mail is off (logged), as in a deployment with no SMTP settings.
+  // Every message goes through the outbox, so an SMTP outage holds mail rather than losing it.
+  const mailer = new MailOutbox(deps.db, deps.mailer ?? createMailer(null, deps.logger), deps.logger, background, deps.outbox);
   const cookieName = deps.config.cookieSecure ? SECURE_COOKIE_NAME : COOKIE_NAME;
   const full: AppDeps = { ...deps, mailer, clock, background, config: { ...deps.config, cookieName } };
   const { db, config, logger } = full;
@@ -194,7 +196,7 @@ export function createApp(
   if (fs.existsSync(path.join(config.portalDist, 'index.html'))) app.use(portalRouter(config.portalDist));
 
   app.use(errorHandler);
-  return { app, store, background };
+  return { app, store, background, outbox: mailer };
 }
 
 /** CSP source of a tile URL template: its origin, with a `{s}` subdomain as a wildcard. */

@@ -53,6 +53,7 @@ export interface Config {
   /** Run the local SMTP sink (development only, when no SMTP_HOST is set). */
   mailSink: boolean;
   mailSinkPort: number;
+  mailRetryIntervalMs: number;
   /** Hosted weather service (our client's format); unset: station files only. */
   weatherApiUrl: string | undefined;
   weatherApiKey: string | undefined;
@@ -159,6 +160,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, argv: string[] 
     mailFrom: env.MAIL_FROM ?? 'Swardwise <no-reply@swardwise.example>',
     mailSink: !env.SMTP_HOST && bool(env.MAIL_SINK, env.NODE_ENV !== 'production'),
     mailSinkPort: Number(env.MAIL_SINK_PORT ?? 2525),
+    /** How often the mail outbox looks for messages due for another attempt. */
+    mailRetryIntervalMs: Number(env.MAIL_RETRY_INTERVAL_MS ?? 15_000),
     weatherApiUrl: env.WEATHER_API_URL || undefined,
     weatherApiKey: env.WEATHER_API_KEY || undefined,
     weatherTimeoutMs: Number(env.WEATHER_TIMEOUT_MS ?? 10_000),

@@ -43,7 +43,10 @@ async function main() {
     logger.info({ port: mailSink.port }, 'development mail sink listening; messages at /api/dev/mail');
   }
   const mailer = createMailer(smtp, logger);
-  const { app, store, background } = createApp({ db: database.db, config, logger, sessionSecret, mailer, mailSink, clock });
+  const { app, store, background, outbox } = createApp({ db: database.db, config, logger, sessionSecret, mailer, mailSink, clock });
+  // Mail left from before a restart or waiting out an SMTP outage goes when it is due.
+  outbox.start(config.mailRetryIntervalMs);
+  void outbox.flush().catch((err: unknown) => logger.warn({ err }, 'mail outbox pass failed'));
   const server = app.listen(config.port, config.host, () => {
     logger.info({ url: `http://localhost:${config.port}`, production: config.production, demo: config.demo }, config.demo ? 'Swardwise is listening (demo mode)' : 'Swardwise is listening');
   });
@@ -52,6 +55,7 @@ async function main() {
 
   const stop = (signal: string) => {
     logger.info({ signal }, 'shutting down');
+    outbox.stop();
     server.close(() => {
       void background
         .idle()

@@ -3,12 +3,12 @@
  * set. The same Drizzle schema and migrations serve both; migrations run here, inside the
  * one process that owns the data folder.
  */
-import fs from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { PGlite } from '@electric-sql/pglite';
 import { drizzle as drizzlePglite, type PgliteDatabase } from 'drizzle-orm/pglite';
 import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator';
+import { checkDataFolder } from './data-folder.ts';
 import * as schema from './schema/index.ts';
 
 export type Schema = typeof schema;
@@ -46,7 +46,7 @@ export async function openDatabase(options: OpenOptions): Promise<Database> {
   }
 
   const dir = options.pgliteDir ?? './data/pglite';
-  if (!dir.startsWith('memory://')) fs.mkdirSync(dir, { recursive: true });
+  if (!dir.startsWith('memory://')) checkDataFolder(dir);
   const client = options.loadDataDir
     ? await PGlite.create({ dataDir: dir, loadDataDir: options.loadDataDir })
     : await PGlite.create(dir);

@@ -27,6 +27,8 @@ export interface Mailer {
   enabled: boolean;
   /** Sends; a failure is logged and reported as false, never thrown at the caller's request. */
   send(mail: OutgoingMail): Promise<boolean>;
+  /** Sends and throws the SMTP failure, so the outbox can keep its reason. */
+  deliver?(mail: OutgoingMail): Promise<void>;
 }
 
 export function createMailer(settings: SmtpSettings | null, logger: Logger): Mailer {
@@ -48,11 +50,15 @@ export function createMailer(settings: SmtpSettings | null, logger: Logger): Mai
     connectionTimeout: 10_000,
     socketTimeout: 20_000,
   });
+  const deliver = async (mail: OutgoingMail) => {
+    await transport.sendMail({ from: settings.from, to: mail.to, subject: mail.subject, text: mail.text });
+  };
   return {
     enabled: true,
+    deliver,
     async send(mail) {
       try {
-        await transport.sendMail({ from: settings.from, to: mail.to, subject: mail.subject, text: mail.text });
+        await deliver(mail);
         return true;
       } catch (err) {
         logger.error({ err, to: mail.to, subject: mail.subject }, 'sending e-mail failed');

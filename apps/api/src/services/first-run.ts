@@ -13,13 +13,11 @@ import type { Db } from '../db/client.ts';
 import { settings, users, userTokens } from '../db/schema/index.ts';
 import { DEMO_CITY_NAME, DEMO_SIGN_INS } from '../db/seed/demo-city.ts';
 import { DEMO_MARKER, hasDemoCity, seedDemoCity } from '../db/seed/index.ts';
+import { StartupError } from '../startup-error.ts';
 import { writeAudit } from './audit.ts';
 import { hashPassword, newToken } from './users.ts';
 
-/** A start that cannot go on; the message says what to set. */
-export class StartupError extends Error {
-  override name = 'StartupError';
-}
+export { StartupError };
 
 /** How long the printed first-administrator link works. */
 const SETUP_LINK_HOURS = 24;

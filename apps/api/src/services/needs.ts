@@ -5,7 +5,7 @@
  * note on how it is worked out, and the cautions that apply. The cards are worked out in
  * `needs/`; this assembles the answer.
  */
-import type { FieldNeeds, NeedInput } from '@swardwise/domain';
+import { weatherGapUntil, type FieldNeeds, type NeedInput } from '@swardwise/domain';
 import type { Ctx } from './context.ts';
 import { loadNeedsBasis, r, type NeedsBasis } from './needs/basis.ts';
 import { feedCard } from './needs/feed.ts';
@@ -46,6 +46,7 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
     requestedDate: b.requested,
     week: { start: b.weekStart, end: b.weekEnd, days: b.weekDays, fallback: b.weatherNote !== null },
     weatherNote: b.weatherNote,
+    weatherGap: weatherGapUntil(b.lastWeatherDate, ctx.clock.today()),
     station: { id: station.id, code: station.code, name: station.name, distanceKm: station.distanceKm, hargreavesDays: prepared.hargreavesDays },
     standards: { level, name: std.name, version: versions[level], missingLevels: missing },
     hoc,

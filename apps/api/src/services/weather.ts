@@ -6,6 +6,7 @@ import {
   errors,
   addDaysIso,
   weatherDaySchema,
+  weatherGapUntil,
   type DailyWeather,
   type PullAnswer,
   type StationCsvAnswer,
@@ -44,7 +45,7 @@ export async function listStations(ctx: Ctx): Promise<WeatherStationRow[]> {
     .from(weatherDays)
     .groupBy(weatherDays.stationId)
     .as('c');
-  return ctx.db
+  const rows = await ctx.db
     .select({
       id: weatherStations.id,
       code: weatherStations.code,
@@ -60,6 +61,8 @@ export async function listStations(ctx: Ctx): Promise<WeatherStationRow[]> {
     .from(weatherStations)
     .leftJoin(counts, eq(counts.stationId, weatherStations.id))
     .orderBy(asc(weatherStations.code));
+  const today = ctx.clock.today();
+  return rows.map((row) => ({ ...row, gap: weatherGapUntil(row.lastDate, today) }));
 }
 
 async function station(ctx: Ctx, id: number) {

@@ -3,6 +3,7 @@ import type { StripeDirection } from '../engine/labour.ts';
 import type { RecordTally } from './records.ts';
 import type { MowerWarning } from '../engine/mowing.ts';
 import type { Level } from '../vocabulary.ts';
+import type { WeatherGap } from '../engine/dates.ts';
 
 /** One input of a needs block: the raw SI value and its unit token, so the portal can convert it. */
 export interface NeedInput {
@@ -153,6 +154,8 @@ export interface FieldNeeds {
   /** The week the figures describe; `fallback` when it is not the week asked for (weather missing). */
   week: { start: string; end: string; days: number; fallback: boolean };
   weatherNote: string | null;
+  /** Days up to today the station has no weather for; the figures then rest on the last weather on file. */
+  weatherGap: WeatherGap | null;
   station: { id: number; code: string; name: string; distanceKm: number; hargreavesDays: number };
   standards: { level: Level; name: string; version: number | null; missingLevels: Level[] };
   hoc: HocNeed;

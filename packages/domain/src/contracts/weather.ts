@@ -1,6 +1,7 @@
 /** Weather stations and their daily weather. */
 import type { WeatherDayInput } from '../schemas/weather.ts';
 import type { Instant } from './common.ts';
+import type { WeatherGap } from '../engine/dates.ts';
 
 /** A row of `GET /api/weather/stations`, with what it has on file. */
 export interface WeatherStationRow {
@@ -15,6 +16,8 @@ export interface WeatherStationRow {
   /** First and last day on file; null for a station without weather. */
   firstDate: string | null;
   lastDate: string | null;
+  /** Days up to today with no weather after the last day on file (the service down, a file not uploaded). */
+  gap: WeatherGap | null;
 }
 
 /** `GET /api/weather/stations`; `service` says whether a hosted weather service is configured. */

@@ -101,3 +101,22 @@ export function monthOf(iso: string): number {
   isoToDayNumber(iso);
   return Number(iso.slice(5, 7));
 }
+
+/** The days up to today that have no weather after the last day on file. */
+export interface WeatherGap {
+  /** The first day without weather (the day after the last on file). */
+  since: string;
+  /** Today, the department's local date. */
+  through: string;
+  days: number;
+}
+
+/**
+ * The weather missing up to `today` after `lastDate`, the station's last day on file
+ * (observed or forecast); null when there is none, or when nothing is on file at all.
+ */
+export function weatherGapUntil(lastDate: string | null, today: string): WeatherGap | null {
+  if (!lastDate || lastDate >= today) return null;
+  const since = addDaysIso(lastDate, 1);
+  return { since, through: today, days: isoToDayNumber(today) - isoToDayNumber(since) + 1 };
+}

@@ -79,7 +79,7 @@ export async function loadNeedsBasis(ctx: Ctx, fieldId: number, date?: string) {
   const outlookField = { id: field.id, areaM2: field.areaM2, sport: field.sport, grass: field.grass, maintenanceLevel: level, hocOverrideMm: field.hocOverrideMm, clippings: field.clippings, irrigation: field.irrigation };
   const daily = fieldDailySeries(outlookField, prepared, standards, params);
   const season = grassSeason(field.grass);
-  return { field, site: site!, level, standards, versions, missing, params, std, station, requested, weekStart, weekEnd, weatherNote, run, prepared, w0, w1, weekDays, inWeek, outlookField, daily, season };
+  return { field, site: site!, level, standards, versions, missing, params, std, station, requested, weekStart, weekEnd, weatherNote, lastWeatherDate: allDays.at(-1)?.date ?? null, run, prepared, w0, w1, weekDays, inWeek, outlookField, daily, season };
 }
 
 export type NeedsBasis = Awaited<ReturnType<typeof loadNeedsBasis>>;

@@ -12,6 +12,7 @@ function needs(): FieldNeeds {
     requestedDate: '2026-06-03',
     week: { start: '2026-06-01', end: '2026-06-07', days: 7, fallback: false },
     weatherNote: null,
+    weatherGap: null,
     station: { id: 1, code: 'T', name: 'Test', distanceKm: 2, hargreavesDays: 0 },
     standards: { level: 2, name: 'Competition', version: 1, missingLevels: [] },
     hoc: { ...explained([{ key: 'override', label: 'Field override', value: null, unit: 'mm' }, { key: 'standardsHoc', label: 'Standards HOC', value: 50.8, unit: 'mm' }]), hocMm: 50.8, source: 'standards_sport', triggerHeightMm: 76.2, mowerKind: 'rotary', mowerWarnings: [] },

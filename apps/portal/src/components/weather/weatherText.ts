@@ -1,4 +1,4 @@
-import { formatDepth, formatTemperature, type UnitSystem } from '@swardwise/domain';
+import { addDaysIso, formatDepth, formatTemperature, type UnitSystem, type WeatherGap } from '@swardwise/domain';
 
 const shown = (d: { value: number; unit: string }) => `${d.value.toLocaleString('en-US')} ${d.unit}`;
 export const tempText = (c: number, u: UnitSystem) => shown(formatTemperature(c, u));
@@ -20,4 +20,10 @@ export function gapRuns(gaps: readonly string[]): { from: string; to: string; da
     } else runs.push({ from: d, to: d, days: 1 });
   }
   return runs.map((r) => ({ ...r, text: r.days === 1 ? short(r.from) : `${short(r.from)}–${short(r.to)} (${r.days} days)` }));
+}
+
+/** The weather a station is missing up to today, in words: what is missing, since when, and what the figures rest on. */
+export function weatherGapText(gap: WeatherGap, stationName: string): string {
+  const days = gap.days === 1 ? 'today has' : `the ${gap.days} days from ${dateText(gap.since)} to today have`;
+  return `No weather from ${stationName} since ${dateText(addDaysIso(gap.since, -1))}: ${days} none on file (the weather service may be down, or a station file is due). Figures rest on the last weather on file.`;
 }
