@@ -10,8 +10,10 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
 import { repoRoot } from '../../apps/api/src/config.ts';
+import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { clonePostgresDatabase } from '../support/app.ts';
 import { PASSWORD } from '../support/fixture.ts';
+import { adminQuery } from '../support/postgres-setup.ts';
 import { freePort } from '../support/postgres-cluster.ts';
 
 /**
@@ -148,5 +150,19 @@ describe.skipIf(!postgres)('two API processes on one PostgreSQL database', () =>
     // The version check holds across processes: B's stale write is a conflict.
     const stale = await call(b.url, 'PATCH', `/api/fields/${fieldId}`, { version: before.version, name: 'Stale on B' }, cookieB);
     expect(stale.status).toBe(409);
+  });
+
+  test('should migrate a new database once when processes start on it together', async () => {
+    const name = `fresh_${process.pid}_${Date.now()}`;
+    await adminQuery(postgres.baseUrl, `create database ${name}`);
+    try {
+      const opened = await Promise.all([1, 2, 3].map(() => openDatabase({ databaseUrl: `${postgres.baseUrl}/${name}` })));
+      const { rows } = await opened[0]!.db.execute('select count(*)::int as n from drizzle.__drizzle_migrations');
+      const journal = JSON.parse(fs.readFileSync(path.join(repoRoot, 'apps/api/src/db/migrations/meta/_journal.json'), 'utf8')) as { entries: unknown[] };
+      expect((rows[0] as { n: number }).n).toBe(journal.entries.length);
+      await Promise.all(opened.map((d) => d.close()));
+    } finally {
+      await adminQuery(postgres.baseUrl, `drop database if exists ${name} with (force)`);
+    }
   });
 });
