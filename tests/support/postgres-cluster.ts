@@ -85,7 +85,3 @@ export async function startCluster(): Promise<Cluster> {
     },
   };
 }
-
-/** True when `CI` is set: a missing PostgreSQL then fails the run instead of skipping its tests. */
-export const inCi = (env: NodeJS.ProcessEnv = process.env) => Boolean(env.CI) && env.CI !== 'false' && env.CI !== '0';
-
