@@ -2,7 +2,33 @@
  * The vitest projects of the whole repository. `npm test` runs them all; pick one with
  * `npx vitest run --project <name>`.
  */
-import { defineConfig } from 'vitest/config';
+import { defineConfig, type TestProjectInlineConfiguration } from 'vitest/config';
+import { postgresBinDir } from './tests/support/postgres-bin.ts';
+
+const ci = Boolean(process.env.CI) && process.env.CI !== 'false' && process.env.CI !== '0';
+const postgres = postgresBinDir();
+if (!postgres && ci) throw new Error('CI: PostgreSQL server programs not found; .ci/run installs them (apt-get install -y postgresql)');
+if (!postgres) console.warn('PostgreSQL server programs not found: the api-pg project (API tests on PostgreSQL) is left out. apt-get install -y postgresql, or set PG_BIN.');
+
+/** The API black-box tests; `api` runs them on in-memory PGlite, `api-pg` on a PostgreSQL server. */
+const apiTests = (name: 'api' | 'api-pg', globalSetup: string[], groupOrder: number): TestProjectInlineConfiguration => ({
+  test: {
+    name,
+    root: './tests',
+    include: ['api/**/*.test.ts'],
+    environment: 'node',
+    // Server logs of every API test go to one folder, scanned for secrets after the run.
+    globalSetup: ['./support/log-scan.ts', ...globalSetup],
+    // Each file opens its own database (a few seconds on PGlite); keep the two cores busy
+    // without running more databases than there are cores.
+    maxWorkers: 2,
+    // Projects with their own worker limits run in their own group, after the fast ones, and
+    // the two API projects one after the other (two workers each would overload two cores).
+    sequence: { groupOrder },
+    testTimeout: 30_000,
+    hookTimeout: 60_000,
+  },
+});
 
 export default defineConfig({
   test: {
@@ -31,23 +57,9 @@ export default defineConfig({
           environment: 'node',
         },
       },
-      {
-        test: {
-          name: 'api',
-          root: './tests',
-          include: ['api/**/*.test.ts'],
-          environment: 'node',
-          // Server logs of every API test go to one folder, scanned for secrets after the run.
-          globalSetup: ['./support/log-scan.ts'],
-          // Each file opens its own PGlite database (a few seconds); keep the two cores busy
-          // without running more databases than there are cores.
-          maxWorkers: 2,
-          // Projects with their own worker limits run in their own group, after the fast ones.
-          sequence: { groupOrder: 1 },
-          testTimeout: 30_000,
-          hookTimeout: 60_000,
-        },
-      },
+      apiTests('api', [], 1),
+      // A throw-away PostgreSQL server (support/postgres-setup.ts) with template databases.
+      ...(postgres ? [apiTests('api-pg', ['./support/postgres-setup.ts'], 2)] : []),
       {
         extends: './apps/portal/vite.config.ts',
         test: {
@@ -66,7 +78,7 @@ export default defineConfig({
           environment: 'node',
           globalSetup: ['./e2e/global-setup.ts'],
           fileParallelism: false,
-          sequence: { groupOrder: 2 },
+          sequence: { groupOrder: 3 },
           testTimeout: 60_000,
           hookTimeout: 120_000,
         },

@@ -10,7 +10,8 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { DEFAULT_TIME_ZONE, addDaysIso, grassSeason, weekdayOf, type Grass } from '@swardwise/domain';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
-import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
+import type { Database } from '../../apps/api/src/db/client.ts';
+import { openTestDatabase } from '../support/app.ts';
 import { districts, fieldChecks } from '../../apps/api/src/db/schema/index.ts';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { createMailer } from '../../apps/api/src/mail/mailer.ts';
@@ -34,7 +35,7 @@ afterAll(async () => {
 
 /** A demo started on `today` (mid-afternoon in the department's zone), as the server starts one. */
 async function startDemo(today: string): Promise<Demo> {
-  const database = await openDatabase({ pgliteDir: 'memory://' });
+  const database = await openTestDatabase();
   const clock = new DepartmentClock(database.db, DEFAULT_TIME_ZONE, () => new Date(`${today}T20:00:00Z`));
   await clock.ready();
   const config = loadConfig({ NODE_ENV: 'test' });

@@ -5,7 +5,8 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { DEFAULT_TIME_ZONE, ROLES, localToday } from '@swardwise/domain';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
-import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
+import type { Database } from '../../apps/api/src/db/client.ts';
+import { openTestDatabase } from '../support/app.ts';
 import { districts, fieldChecks, fields, settings, sites, users } from '../../apps/api/src/db/schema/index.ts';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
@@ -17,7 +18,7 @@ let app: ReturnType<typeof createApp>['app'];
 let firstSeed: Awaited<ReturnType<typeof seedDemoCity>>;
 
 beforeAll(async () => {
-  database = await openDatabase({ pgliteDir: 'memory://' });
+  database = await openTestDatabase();
   firstSeed = await seedDemoCity(database.db);
   const logger = pino({ level: 'silent' });
   app = createApp({ db: database.db, config: loadConfig({ NODE_ENV: 'test' }), logger, sessionSecret: 'test', mailer: createMailer(null, logger) }).app;

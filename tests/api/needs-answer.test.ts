@@ -6,7 +6,8 @@ import { createHash } from 'node:crypto';
 import { and, asc, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { DEFAULT_TIME_ZONE, defineAbilityFor, type Actor } from '@swardwise/domain';
-import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
+import type { Database } from '../../apps/api/src/db/client.ts';
+import { openTestDatabase } from '../support/app.ts';
 import { fields, users } from '../../apps/api/src/db/schema/index.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
 import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
@@ -19,7 +20,7 @@ let database: Database;
 let ctx: Parameters<typeof fieldNeeds>[0];
 
 beforeAll(async () => {
-  database = await openDatabase({ pgliteDir: 'memory://' });
+  database = await openTestDatabase();
   // The demo lays its bookings and work around the day it is seeded: a fixed day keeps the answers fixed.
   await seedDemoCity(database.db, SEEDED_ON);
   const [admin] = await database.db.select().from(users).where(and(eq(users.role, 'admin'), eq(users.active, true)));

@@ -6,7 +6,8 @@
 import { and, asc, eq, lte } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { addDaysIso, DEFAULT_TIME_ZONE, defineAbilityFor, greatCircleKm, planFieldWeek, prepareWeather, type Actor, type Level } from '@swardwise/domain';
-import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
+import type { Database } from '../../apps/api/src/db/client.ts';
+import { openTestDatabase } from '../support/app.ts';
 import { districts, fields, sites, users, weatherDays, weatherStations, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
 import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
@@ -21,7 +22,7 @@ const WARM = '2026-07-13';
 const COOL = '2026-03-23';
 
 beforeAll(async () => {
-  database = await openDatabase({ pgliteDir: 'memory://' });
+  database = await openTestDatabase();
   await seedDemoCity(database.db);
   // The plan of weeks the seeded season already holds would keep that work: these tests ask
   // for the engine's own plan of an empty week.

@@ -1,9 +1,12 @@
-/** A fresh API on its own in-memory PGlite, for one test file. */
+/**
+ * A fresh API on its own database, for one test file: an in-memory PGlite (project `api`) or
+ * a database cloned from a template on the run's PostgreSQL server (project `api-pg`).
+ */
 import fs from 'node:fs';
 import path from 'node:path';
 import { pino, type Logger } from 'pino';
 import supertest from 'supertest';
-import { afterAll, beforeAll } from 'vitest';
+import { afterAll, beforeAll, inject } from 'vitest';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
 import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
@@ -13,6 +16,7 @@ import { startMailSink, type MailSink } from '../../apps/api/src/mail/sink.ts';
 import type { BackgroundTasks } from '../../apps/api/src/services/background.ts';
 import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
 import { buildFixture, PASSWORD, type Fixture } from './fixture.ts';
+import { adminQuery, FIXTURE_TEMPLATE, MIGRATED_TEMPLATE } from './postgres-setup.ts';
 import { API_LOG_DIR, TEST_SESSION_SECRET } from './log-scan.ts';
 
 type App = ReturnType<typeof createApp>['app'];
@@ -43,19 +47,24 @@ const BASE_ENV = { NODE_ENV: 'test', PUBLIC_URL: 'http://portal.test' };
 
 /** `now`: the server's clock (by default the real one), for tests that stand at a chosen instant. */
 export async function startTestApi(env: Record<string, string> = {}, options: { now?: () => Date } = {}): Promise<TestApi> {
-  const database = await openDatabase({ pgliteDir: 'memory://' });
-  const fixture = await buildFixture(database.db);
+  const pg = inject('postgres');
+  const database = await openTestDatabase(pg ? 'fixture' : 'empty');
+  const fixture = pg ? structuredClone(pg.fixture) : await buildFixture(database.db);
   const mail = await startMailSink();
   // The whole run's server log, scanned for secrets when the API tests end (support/log-scan.ts).
   fs.mkdirSync(API_LOG_DIR, { recursive: true });
   const fileLog = pino({ level: 'info' }, pino.destination({ dest: path.join(API_LOG_DIR, `api-${process.pid}.log`), sync: true, append: true }));
   const baseConfig = loadConfig({ ...BASE_ENV, ...env });
   const clock = new DepartmentClock(database.db, baseConfig.departmentTimeZone, options.now);
+  let apps = 0;
   const makeApp: TestApi['makeApp'] = (overrides = {}, extra = {}) => {
+    // The first app counts sign-ins under the servers' own prefix; each other one on its own.
+    const rateLimitPrefix = apps === 0 ? '' : `app${apps}:`;
+    apps += 1;
     const config = loadConfig({ ...BASE_ENV, ...overrides });
     const logger = extra.logger ?? fileLog;
     const mailer = extra.mailer ?? createMailer({ host: '127.0.0.1', port: mail.port, secure: false, ignoreTLS: true, from: config.mailFrom }, logger);
-    const { app, background, outbox } = createApp({ db: database.db, config, logger, sessionSecret: TEST_SESSION_SECRET, mailer, mailSink: mail, clock, outbox: extra.outbox });
+    const { app, background, outbox } = createApp({ db: database.db, config, logger, sessionSecret: TEST_SESSION_SECRET, mailer, mailSink: mail, clock, outbox: extra.outbox, rateLimitPrefix });
     return { app, background, outbox };
   };
   const { app, background } = makeApp(env);
@@ -100,8 +109,41 @@ export function useTestApi(env: Record<string, string> = {}, options: { now?: ()
 export function useEmptyDatabase(): Database {
   const database = {} as Database;
   beforeAll(async () => {
-    Object.assign(database, await openDatabase({ pgliteDir: 'memory://' }));
+    Object.assign(database, await openTestDatabase());
   });
   afterAll(() => database.close());
   return database;
+}
+
+let cloned = 0;
+
+/**
+ * A database of its own for a test: in-memory PGlite, migrated; or, in the `api-pg` project, a
+ * new PostgreSQL database cloned from the migrated template (`'empty'`) or the one holding the
+ * test city (`'fixture'`, whose ids are `inject('postgres').fixture`), dropped when closed.
+ */
+export async function openTestDatabase(template: 'empty' | 'fixture' = 'empty'): Promise<Database> {
+  const pg = inject('postgres');
+  if (!pg) {
+    if (template === 'fixture') throw new Error('the fixture template exists only on PostgreSQL; build it with buildFixture');
+    return openDatabase({ pgliteDir: 'memory://' });
+  }
+  const clone = await clonePostgresDatabase(template);
+  const database = await openDatabase({ databaseUrl: clone.url });
+  return {
+    ...database,
+    close: async () => {
+      await database.close();
+      await clone.drop();
+    },
+  };
+}
+
+/** A new database on the run's PostgreSQL server, cloned from a template (`api-pg` only): its URL, and `drop`. */
+export async function clonePostgresDatabase(template: 'empty' | 'fixture'): Promise<{ url: string; drop(): Promise<void> }> {
+  const pg = inject('postgres');
+  if (!pg) throw new Error('no PostgreSQL server in this project (api-pg has one)');
+  const name = `t_${process.pid}_${(cloned += 1)}_${Math.random().toString(36).slice(2, 8)}`;
+  await adminQuery(pg.baseUrl, `create database ${name} template ${template === 'fixture' ? FIXTURE_TEMPLATE : MIGRATED_TEMPLATE}`);
+  return { url: `${pg.baseUrl}/${name}`, drop: () => adminQuery(pg.baseUrl, `drop database if exists ${name} with (force)`) };
 }

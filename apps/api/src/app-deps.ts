@@ -22,4 +22,10 @@ export interface AppDeps {
   clock: DepartmentClock;
   /** Work finished after the answer (password-reset look-ups and e-mail). */
   background: BackgroundTasks;
+  /**
+   * Prefix of this app's sign-in and reset counters in the database. Apps over one database
+   * with the same prefix (the default, '') count together, as API processes must; tests give
+   * an app with other limits its own.
+   */
+  rateLimitPrefix?: string;
 }

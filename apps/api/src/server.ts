@@ -7,6 +7,7 @@ import { pino } from 'pino';
 import { createApp } from './app.ts';
 import { loadConfig } from './config.ts';
 import { openDatabase } from './db/client.ts';
+import { DrizzleRateLimitStore } from './http/rate-limit-store.ts';
 import { createMailer, type SmtpSettings } from './mail/mailer.ts';
 import { startMailSink, type MailSink } from './mail/sink.ts';
 import { DepartmentClock } from './services/clock.ts';
@@ -50,7 +51,10 @@ async function main() {
   const server = app.listen(config.port, config.host, () => {
     logger.info({ url: `http://localhost:${config.port}`, production: config.production, demo: config.demo }, config.demo ? 'Swardwise is listening (demo mode)' : 'Swardwise is listening');
   });
-  const prune = setInterval(() => void store.prune().catch((err) => logger.warn({ err }, 'session prune failed')), 3600_000);
+  const prune = setInterval(() => {
+    void store.prune().catch((err) => logger.warn({ err }, 'session prune failed'));
+    void DrizzleRateLimitStore.prune(database.db).catch((err) => logger.warn({ err }, 'rate limit prune failed'));
+  }, 3600_000);
   prune.unref();
 
   const stop = (signal: string) => {

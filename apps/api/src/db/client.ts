@@ -20,6 +20,9 @@ export type Queryable = Db | Tx;
 
 const migrationsFolder = path.join(path.dirname(fileURLToPath(import.meta.url)), 'migrations');
 
+/** The advisory lock key the migrations run under on a PostgreSQL server (any fixed number). */
+const MIGRATION_LOCK = 7_731_160_416;
+
 export interface Database {
   db: Db;
   kind: 'pglite' | 'postgres';
@@ -40,8 +43,23 @@ export async function openDatabase(options: OpenOptions): Promise<Database> {
     const { drizzle } = await import('drizzle-orm/node-postgres');
     const { migrate } = await import('drizzle-orm/node-postgres/migrator');
     const pool = new pg.Pool({ connectionString: options.databaseUrl, max: 10 });
+    // Drizzle's migrator takes no lock: API processes starting together on a new database
+    // would each apply the migrations. One session-level advisory lock makes them take turns.
+    const client = await pool.connect();
+    try {
+      await client.query('select pg_advisory_lock($1)', [MIGRATION_LOCK]);
+      try {
+        await migrate(drizzle(client, { schema }), { migrationsFolder });
+      } finally {
+        await client.query('select pg_advisory_unlock($1)', [MIGRATION_LOCK]);
+      }
+    } catch (err) {
+      client.release();
+      await pool.end();
+      throw err;
+    }
+    client.release();
     const db = drizzle(pool, { schema });
-    await migrate(db, { migrationsFolder });
     return { db: db as unknown as Db, kind: 'postgres', close: () => pool.end() };
   }
 

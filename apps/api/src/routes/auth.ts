@@ -6,6 +6,7 @@ import type { Request } from 'express';
 import type { AppDeps } from '../app-deps.ts';
 import { users } from '../db/schema/index.ts';
 import { ctxOf, requireUser } from '../http/auth.ts';
+import { DrizzleRateLimitStore } from '../http/rate-limit-store.ts';
 import { capSessionExpiry } from '../http/session-lifetime.ts';
 import { parse } from '../http/validate.ts';
 import { passwordResetMail } from '../mail/messages.ts';
@@ -32,27 +33,29 @@ const addressKey = (req: Request) => ipKeyGenerator(req.ip ?? req.socket.remoteA
 
 type AuthAction = Extract<AuditAction, 'sign_in' | 'sign_in_failed' | 'sign_out'>;
 
-export function authRouter({ db, config, mailer, background, clock }: AppDeps): Router {
+export function authRouter({ db, config, mailer, background, clock, rateLimitPrefix = '' }: AppDeps): Router {
   const router = Router();
   // The session answer carries the department's time zone: the portal's "today" is its local date.
   const session = (user: SessionUser) => ({ user, timeZone: clock.timeZone });
 
-  const limiter = (options: Partial<Options> & { message: string }) =>
+  // Counted in the database, so every API process behind it counts the same attempts.
+  const limiter = (name: string, options: Partial<Options> & { message: string }) =>
     rateLimit({
       standardHeaders: 'draft-8',
       legacyHeaders: false,
+      store: new DrizzleRateLimitStore(db, `${rateLimitPrefix}${name}`),
       ...options,
       handler: (_req, _res, next) => next(appError('auth/rate_limited', options.message)),
     });
   const tooManySignIns = 'Too many sign-in attempts; wait a few minutes and try again';
   // Failed attempts per account, from wherever they come (a spread-out guesser is still one guesser)…
-  const signInPerAccount = limiter({ windowMs: config.loginWindowMs, limit: config.loginAttempts, keyGenerator: (req) => `account:${accountKey(req)}`, skipSuccessfulRequests: true, message: tooManySignIns });
+  const signInPerAccount = limiter('sign-in-account', { windowMs: config.loginWindowMs, limit: config.loginAttempts, keyGenerator: (req) => `account:${accountKey(req)}`, skipSuccessfulRequests: true, message: tooManySignIns });
   // …and per address, across accounts, invitation and reset links (one address trying many).
-  const failuresPerAddress = limiter({ windowMs: config.loginWindowMs, limit: config.loginAttemptsPerAddress, keyGenerator: addressKey, skipSuccessfulRequests: true, message: tooManySignIns });
+  const failuresPerAddress = limiter('failures-address', { windowMs: config.loginWindowMs, limit: config.loginAttemptsPerAddress, keyGenerator: addressKey, skipSuccessfulRequests: true, message: tooManySignIns });
   // Every reset request counts, answered or not, so the form cannot mail-bomb an inbox.
   const tooManyResets = 'Too many password reset requests; wait a while, then use the newest e-mail';
-  const resetsPerAccount = limiter({ windowMs: config.resetWindowMs, limit: config.resetRequestsPerAccount, keyGenerator: (req) => `reset:${accountKey(req)}`, message: tooManyResets });
-  const resetsPerAddress = limiter({ windowMs: config.resetWindowMs, limit: config.resetRequestsPerAddress, keyGenerator: addressKey, message: tooManyResets });
+  const resetsPerAccount = limiter('reset-account', { windowMs: config.resetWindowMs, limit: config.resetRequestsPerAccount, keyGenerator: (req) => `reset:${accountKey(req)}`, message: tooManyResets });
+  const resetsPerAddress = limiter('reset-address', { windowMs: config.resetWindowMs, limit: config.resetRequestsPerAddress, keyGenerator: addressKey, message: tooManyResets });
 
   /** Sign-ins, sign-outs and reset requests in the audit log: who, from where; never a password or token. */
   const audit = (req: Request, action: AuthAction, userId: number | null, details: Record<string, unknown> = {}) =>

@@ -5,7 +5,7 @@
  * forward and adds the hours to the mower's hour meter.
  */
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
-import { appError, errors, FIELD_STATUS_LABELS, type ReopenAnswer, type ReopenInput, type ReportAnswer as ReportAnswerOf, type WorkOrderAnswer, type WorkPhoto, type WorkReportInput, type WorkUpdateRow } from '@swardwise/domain';
+import { AppError, appError, errors, FIELD_STATUS_LABELS, type ReopenAnswer, type ReopenInput, type ReportAnswer as ReportAnswerOf, type WorkOrderAnswer, type WorkPhoto, type WorkReportInput, type WorkUpdateRow } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
 import { crews, equipment, fields, sites, users, workOrders, workPhotos, workUpdates } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
@@ -184,8 +184,10 @@ export async function reportWork(ctx: Ctx, id: number, input: WorkReportInput): 
       return { order: after, update: update!, duplicate: false };
     });
   } catch (err) {
-    // The same submission arriving twice at once: the other one was stored first.
-    if (input.clientRef && isUniqueViolation(err)) {
+    // The same submission arriving twice at once: the other one was stored first. Under
+    // PostgreSQL's read committed the second may also see the first's commit before its own
+    // insert and fail the status or version check instead of the unique index.
+    if (input.clientRef && (isUniqueViolation(err) || err instanceof AppError)) {
       const earlier = await earlierAnswer(ctx, id, input.clientRef);
       if (earlier) return earlier;
     }

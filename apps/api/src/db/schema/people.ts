@@ -64,6 +64,20 @@ export const sessions = pgTable(
   (t) => [index('sessions_user_idx').on(t.userId), index('sessions_expires_idx').on(t.expiresAt)],
 );
 
+/**
+ * Sign-in and reset attempt counters (`http/rate-limit-store.ts`), kept in the database so
+ * that every API process behind one database counts the same attempts.
+ */
+export const rateLimits = pgTable(
+  'rate_limits',
+  {
+    key: text('key').primaryKey(),
+    hits: integer('hits').notNull(),
+    resetAt: instant('reset_at').notNull(),
+  },
+  (t) => [index('rate_limits_reset_idx').on(t.resetAt)],
+);
+
 /** One-time tokens (invitations, password resets); only a hash of the token is kept. */
 export const userTokens = pgTable(
   'user_tokens',
