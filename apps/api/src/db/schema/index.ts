@@ -5,3 +5,4 @@ export * from './weather.ts';
 export * from './standards.ts';
 export * from './work.ts';
 export * from './requests.ts';
+export * from './budget.ts';
