@@ -5,7 +5,7 @@ import { hoursMinutes } from '../../utils/units.ts';
 const IMPERIAL: Record<string, { unit: string; per: number }> = {
   L: { unit: 'gal', per: L_PER_US_GALLON },
   'L concentrate': { unit: 'gal concentrate', per: L_PER_US_GALLON },
-  'm³': { unit: '1,000 gal', per: L_PER_US_GALLON },
+  'm³': { unit: 'thousand gal', per: L_PER_US_GALLON },
   kg: { unit: 'lb', per: KG_PER_LB },
   'kg N': { unit: 'lb N', per: KG_PER_LB },
 };
