@@ -10,3 +10,4 @@ export * from './partner-words.ts';
 export * from './audit-words.ts';
 export * from './costs.ts';
 export * from './budget.ts';
+export * from './what-if.ts';
