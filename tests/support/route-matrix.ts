@@ -415,6 +415,7 @@ export const MATRIX: MatrixRow[] = [
     allow: 'admin head',
     call: (c) => c.agent.patch('/api/budget/line').send({ season: 2026, districtId: c.ids.district, line: 'labour', amount: 1000, version: STALE }),
   },
+  { route: 'POST /api/what-if', allow: 'admin head foreman:own', call: (c) => c.agent.post('/api/what-if').send({ season: 2026, districtId: c.ids.district, moves: [{ fieldId: c.ids.field, level: 4 }] }) },
 
   // Cultural work: application records
   { route: 'GET /api/records/applications', allow: 'everyone', scoped: false, call: (c) => c.agent.get('/api/records/applications') },

@@ -54,6 +54,7 @@ import {
   updateCostSettingsSchema,
   budgetQuerySchema,
   budgetLineSchema,
+  whatIfSchema,
   updateEquipmentSchema,
   updateFieldEventSchema,
   updateFieldSchema,
@@ -885,6 +886,16 @@ const budget: RouteDoc[] = [
     body: budgetLineSchema,
     answers: [json(200, 'The line after the change.', shape({ line: row('{ line, budget, version }') }))],
     errors: [409],
+  },
+  {
+    method: 'post',
+    path: '/api/what-if',
+    tag: 'Budget',
+    summary: 'Preview a scenario (fields moved to other levels, levels’ Standards changed): the season before, after and the change in mowings, hours, inputs and cost; nothing is saved',
+    description: `${budgetScopeNote} A moved field of another district answers 403.`,
+    access: allowed('read', 'Budget'),
+    body: whatIfSchema,
+    answers: [json(200, 'The season before and after, and the change.', shape({ season: int(), districtId: nullable(int()), scopeName: str(), currency: str(), result: row('{ before, after, delta } each { totals, lines }; byDistrict; fieldsTouched') }))],
   },
 ];
 

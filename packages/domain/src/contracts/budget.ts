@@ -1,5 +1,6 @@
 /** The season budget as `GET /api/budget` answers it. */
 import type { BudgetFigure, BudgetLine } from '../budget.ts';
+import type { WhatIfResult } from '../what-if.ts';
 
 export interface BudgetLineRow {
   line: BudgetLine;
@@ -28,4 +29,13 @@ export interface BudgetAnswer {
   actualTo: string;
   lines: BudgetLineRow[];
   totals: { budget: number; outlook: number; actual: number };
+}
+
+/** `POST /api/what-if`: the season before and after the scenario, and the change (figures rounded). */
+export interface WhatIfAnswer {
+  season: number;
+  districtId: number | null;
+  scopeName: string;
+  currency: string;
+  result: WhatIfResult;
 }

@@ -2,6 +2,7 @@
 import { z } from 'zod';
 import { BUDGET_LINES } from '../budget.ts';
 import { idSchema, versionSchema } from './common.ts';
+import { levelStandardChangesSchema } from './standards.ts';
 
 /** A season is a calendar year of the department's dates. */
 export const seasonSchema = z.coerce.number({ error: 'the season is a year such as 2026' }).int('the season is a year such as 2026').min(2000, 'the season is a year from 2000').max(2100, 'the season is a year up to 2100');
@@ -26,3 +27,20 @@ export const budgetLineSchema = z
   })
   .strict();
 export type BudgetLineInput = z.infer<typeof budgetLineSchema>;
+
+/** The Standards a what-if may change per level: the ones that drive the season's work and inputs. */
+const scenarioLevelChanges = levelStandardChangesSchema.pick({ minMowingsPerWeek: true, maxMowingIntervalDays: true, annualNShare: true, irrigationShareOfEtc: true, reducedKc: true, lineRepaintDays: true });
+
+/** `POST /api/what-if`: a season, a scope (a district, or the department), fields moved to levels and levels' Standards changed. */
+export const whatIfSchema = z
+  .object({
+    season: seasonSchema,
+    districtId: idSchema.optional(),
+    moves: z
+      .array(z.object({ fieldId: idSchema, level: z.number({ error: 'level must be 1, 2, 3 or 4' }).int('level must be 1, 2, 3 or 4').min(1, 'level must be 1, 2, 3 or 4').max(4, 'level must be 1, 2, 3 or 4') }).strict())
+      .max(5000, 'at most 5,000 fields in one scenario')
+      .default([]),
+    standards: z.partialRecord(z.enum(['1', '2', '3', '4'], { error: 'a level is 1, 2, 3 or 4' }), scenarioLevelChanges).optional(),
+  })
+  .strict();
+export type WhatIfInput = z.infer<typeof whatIfSchema>;
