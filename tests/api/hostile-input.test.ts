@@ -130,6 +130,8 @@ const FUZZ: FuzzRow[] = [
   { route: 'DELETE /api/equipment/:id', url: (i) => `/api/equipment/${i.equipment}`, base: () => ({ version: V }), query: true },
   { route: 'POST /api/calendar-feeds', url: () => '/api/calendar-feeds', base: (i) => ({ crewId: i.crew }) },
   { route: 'PATCH /api/costs', url: () => '/api/costs', base: (i) => ({ ...DEFAULT_COSTS, crewRates: [{ crewId: i.crew, ratePerHour: 40 }], version: V }) },
+  { route: 'PATCH /api/budget/line', url: () => '/api/budget/line', base: (i) => ({ season: 2026, districtId: i.district, line: 'fuel', amount: 1200, version: V }) },
+  { route: 'POST /api/what-if', url: () => '/api/what-if', base: (i) => ({ season: 2026, districtId: i.district, moves: [{ fieldId: i.field, level: 2 }], standards: { '3': { minMowingsPerWeek: 2 } } }) },
   {
     route: 'POST /api/work-orders/:id/application',
     url: (i) => `/api/work-orders/${i.workOrder}/application`,

@@ -406,6 +406,17 @@ export const MATRIX: MatrixRow[] = [
   { route: 'GET /api/costs', allow: 'admin head foreman', scoped: false, call: (c) => c.agent.get('/api/costs') },
   { route: 'PATCH /api/costs', allow: 'admin head', scoped: false, call: (c) => c.agent.patch('/api/costs').send({ ...DEFAULT_COSTS, version: STALE }) },
 
+  // Season budget: the head sets it; a foreman reads his district's
+  { route: 'GET /api/budget', allow: 'admin head foreman:own', call: (c) => c.agent.get(`/api/budget?season=2026&districtId=${c.ids.district}`) },
+  { route: 'GET /api/budget/export.csv', allow: 'admin head foreman:own', call: (c) => c.agent.get(`/api/budget/export.csv?season=2026&districtId=${c.ids.district}`) },
+  { route: 'GET /api/budget/report.pdf', allow: 'admin head foreman:own', call: (c) => c.agent.get(`/api/budget/report.pdf?season=2026&districtId=${c.ids.district}`) },
+  {
+    route: 'PATCH /api/budget/line',
+    allow: 'admin head',
+    call: (c) => c.agent.patch('/api/budget/line').send({ season: 2026, districtId: c.ids.district, line: 'labour', amount: 1000, version: STALE }),
+  },
+  { route: 'POST /api/what-if', allow: 'admin head foreman:own', call: (c) => c.agent.post('/api/what-if').send({ season: 2026, districtId: c.ids.district, moves: [{ fieldId: c.ids.field, level: 4 }] }) },
+
   // Cultural work: application records
   { route: 'GET /api/records/applications', allow: 'everyone', scoped: false, call: (c) => c.agent.get('/api/records/applications') },
   {

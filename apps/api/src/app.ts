@@ -47,6 +47,8 @@ import { recordsRouter } from './routes/records.ts';
 import { requestsRouter } from './routes/requests.ts';
 import { settingsRouter } from './routes/settings.ts';
 import { costsRouter } from './routes/costs.ts';
+import { budgetRouter } from './routes/budget.ts';
+import { whatIfRouter } from './routes/what-if.ts';
 import { sitesRouter } from './routes/sites.ts';
 import { standardsRouter } from './routes/standards.ts';
 import { usersRouter } from './routes/users.ts';
@@ -188,6 +190,8 @@ export function createApp(
   app.use('/api/calendar-feeds', calendarFeedsRouter(full));
   app.use('/api/settings', settingsRouter(full));
   app.use('/api/costs', costsRouter(full));
+  app.use('/api/budget', budgetRouter(full));
+  app.use('/api/what-if', whatIfRouter(full));
   app.use('/api', directoryRouter(full));
   app.use('/api', crewsRouter(full));
   if (devRoutes) app.use('/api/dev', devRouter(full));

@@ -19,7 +19,7 @@ const actors: Record<string, Actor> = {
 const own = { district: { id: D1 }, site: { id: SITE_A, districtId: D1 }, field: { id: 1000, siteId: SITE_A, districtId: D1 } };
 const other = { district: { id: D2 }, site: { id: SITE_B, districtId: D2 }, field: { id: 2000, siteId: SITE_B, districtId: D2 } };
 
-type Row = Record<string, number | number[]>;
+type Row = Record<string, number | number[] | null>;
 type Case = [role: string, action: Action, subject: SubjectName, row: Row | null, allowed: boolean];
 
 const cases: Case[] = [
@@ -156,6 +156,15 @@ const cases: Case[] = [
   ['foreman', 'update', 'CostSettings', null, false],
   ['crew', 'read', 'CostSettings', null, false],
   ['partner', 'read', 'CostSettings', null, false],
+  // Season budget: the head sets it; a foreman reads his district's only
+  ['head', 'update', 'Budget', { districtId: D2 }, true],
+  ['head', 'read', 'Budget', { districtId: null }, true],
+  ['foreman', 'read', 'Budget', { districtId: D1 }, true],
+  ['foreman', 'read', 'Budget', { districtId: D2 }, false],
+  ['foreman', 'read', 'Budget', { districtId: null }, false],
+  ['foreman', 'update', 'Budget', { districtId: D1 }, false],
+  ['crew', 'read', 'Budget', { districtId: D1 }, false],
+  ['partner', 'read', 'Budget', { districtId: D1 }, false],
   // The partner's own pages
   ['partner', 'read', 'PartnerView', null, true],
   ['head', 'read', 'PartnerView', null, false],

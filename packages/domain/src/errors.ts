@@ -35,7 +35,7 @@ export const NOT_FOUND_RESOURCES = ['route', 'district', 'site', 'field', 'field
 export type NotFoundResource = (typeof NOT_FOUND_RESOURCES)[number];
 
 /** Resources written with a version check: `<resource>/version_conflict` (409). */
-export const VERSIONED_RESOURCES = ['site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'standards', 'settings', 'user', 'field_stripes', 'field_request', 'field_line_plan', 'field_logo', 'game_day'] as const;
+export const VERSIONED_RESOURCES = ['site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'standards', 'settings', 'user', 'field_stripes', 'field_request', 'field_line_plan', 'field_logo', 'game_day', 'budget_line'] as const;
 export type VersionedResource = (typeof VERSIONED_RESOURCES)[number];
 
 /** Routes that take a file upload: `<resource>/too_large` (413) and `<resource>/bad_upload` (400). */

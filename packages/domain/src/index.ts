@@ -9,3 +9,5 @@ export * from './contracts/index.ts';
 export * from './partner-words.ts';
 export * from './audit-words.ts';
 export * from './costs.ts';
+export * from './budget.ts';
+export * from './what-if.ts';

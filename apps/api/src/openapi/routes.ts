@@ -52,6 +52,9 @@ import {
   updateCrewSchema,
   updateDepartmentSettingsSchema,
   updateCostSettingsSchema,
+  budgetQuerySchema,
+  budgetLineSchema,
+  whatIfSchema,
   updateEquipmentSchema,
   updateFieldEventSchema,
   updateFieldSchema,
@@ -831,6 +834,71 @@ const costs: RouteDoc[] = [
   },
 ];
 
+const budgetAnswer = shape({
+  season: int('calendar year'),
+  districtId: nullable(int('null: the department')),
+  scopeName: str(),
+  currency: str('ISO 4217 code'),
+  outlook: row('{ from, to, fields, note }: the weather days and fields the turf engine’s outlook covers'),
+  actualTo: date('done work counted up to this department date'),
+  lines: rows('Per line (labour, fuel, fertiliser, water, paint, seed, equipment): label, quantityUnit, money, budget, version, outlook { quantity, cost }, actual { quantity, cost }'),
+  totals: row('{ budget, outlook, actual } of the money lines'),
+});
+const budgetScopeNote = 'A foreman reads his own district (the default when none is named); another district or the department answers 403.';
+const budget: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/budget',
+    tag: 'Budget',
+    summary: 'The season budget per line against the turf engine’s outlook and the actual to date from the work records',
+    description: budgetScopeNote,
+    access: allowed('read', 'Budget'),
+    query: budgetQuerySchema,
+    answers: [json(200, 'The budget lines.', budgetAnswer)],
+  },
+  {
+    method: 'get',
+    path: '/api/budget/export.csv',
+    tag: 'Budget',
+    summary: 'The season budget as CSV (one row per line, the same rounded figures as the JSON answer)',
+    description: budgetScopeNote,
+    access: allowed('read', 'Budget'),
+    query: budgetQuerySchema,
+    answers: [{ status: 200, description: 'The budget as CSV.', contentType: 'text/csv', body: { type: 'string' } }],
+  },
+  {
+    method: 'get',
+    path: '/api/budget/report.pdf',
+    tag: 'Budget',
+    summary: 'The season budget as a printable PDF with its chart (budget, outlook and actual per line)',
+    description: budgetScopeNote,
+    access: allowed('read', 'Budget'),
+    query: budgetQuerySchema,
+    answers: [{ status: 200, description: 'The report (PDF).', contentType: 'application/pdf', body: { type: 'string', format: 'binary' } }],
+  },
+  {
+    method: 'patch',
+    path: '/api/budget/line',
+    tag: 'Budget',
+    summary: 'Set (or clear, amount null) one line of a season’s budget for a district or the department; audited',
+    description: 'Send the line’s `version` you last read, none for a line never set; a stale one answers 409 and changes nothing.',
+    access: allowed('update', 'Budget'),
+    body: budgetLineSchema,
+    answers: [json(200, 'The line after the change.', shape({ line: row('{ line, budget, version }') }))],
+    errors: [409],
+  },
+  {
+    method: 'post',
+    path: '/api/what-if',
+    tag: 'Budget',
+    summary: 'Preview a scenario (fields moved to other levels, levels’ Standards changed): the season before, after and the change in mowings, hours, inputs and cost; nothing is saved',
+    description: `${budgetScopeNote} A moved field of another district answers 403.`,
+    access: allowed('read', 'Budget'),
+    body: whatIfSchema,
+    answers: [json(200, 'The season before and after, and the change.', shape({ season: int(), districtId: nullable(int()), scopeName: str(), currency: str(), result: row('{ before, after, delta } each { totals, lines }; byDistrict; fieldsTouched') }))],
+  },
+];
+
 const importNote = 'Only the person who uploaded an import may commit or undo it.';
 const imports: RouteDoc[] = [
   {
@@ -1508,6 +1576,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...standards,
   ...settings,
   ...costs,
+  ...budget,
   ...imports,
   ...map,
   ...directory,

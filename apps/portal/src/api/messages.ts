@@ -14,6 +14,7 @@ const NOUNS: Partial<Record<VersionedResource, string>> = {
   field_stripes: 'stripe pattern',
   field_line_plan: 'line plan',
   field_request: 'request',
+  budget_line: 'budget line',
 };
 
 /** Someone saved the row after this person read it (the API's `<resource>/version_conflict`, 409). */

@@ -37,6 +37,7 @@ export const queryKeys = {
   site: (id: number) => ['sites', 'detail', id] as const,
   standards: () => ['standards'] as const,
   costs: () => ['costs'] as const,
+  budget: (season: number, districtId: number | null) => ['budget', season, districtId] as const,
   stations: () => ['weather', 'stations'] as const,
   weatherDays: (stationId: number | null, from: string, to: string) => ['weather', 'days', stationId, from, to] as const,
   weekBoard: (districtId: number | null, weekStart: string) => ['week-plans', 'board', districtId, weekStart] as const,
@@ -52,7 +53,7 @@ export const queryKeys = {
 };
 
 /** What a write changes, by what was written. */
-export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request' | 'costs' | 'fieldLogo' | 'gameDay';
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request' | 'costs' | 'fieldLogo' | 'gameDay' | 'budget';
 
 /**
  * The answers a write makes stale: the resource itself and every answer that shows it (a
@@ -60,14 +61,14 @@ export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | '
  */
 export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   site: [['sites'], ['fields'], ['districts'], ['map']],
-  field: [['fields'], ['sites'], ['districts'], ['map'], ['week-plans'], ['work-orders'], ['records'], ['partner']],
+  field: [['fields'], ['sites'], ['districts'], ['map'], ['week-plans'], ['work-orders'], ['records'], ['partner'], ['budget']],
   fieldEvent: [['field-events'], ['fields', 'needs'], ['week-plans'], ['partner']],
   crew: [['crews'], ['equipment'], ['users'], ['week-plans'], ['work-orders']],
   equipment: [['equipment'], ['week-plans']],
   user: [['users'], ['crews']],
-  standards: [['standards'], ['fields', 'needs'], ['map'], ['week-plans']],
+  standards: [['standards'], ['fields', 'needs'], ['map'], ['week-plans'], ['budget']],
   import: [['imports'], ['sites'], ['fields'], ['districts'], ['map']],
-  workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map'], ['partner'], ['game-days']],
+  workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map'], ['partner'], ['game-days'], ['budget']],
   weather: [['weather'], ['fields', 'needs'], ['map']],
   devMail: [['dev-mail']],
   fieldCheck: [['fields'], ['map'], ['records']],
@@ -75,7 +76,8 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   // A game-day preparation adds or pins work orders.
   gameDay: [['game-days'], ['week-plans'], ['work-orders'], ['partner']],
   fieldLogo: [['fields', 'logos']],
-  costs: [['costs']],
+  costs: [['costs'], ['budget']],
+  budget: [['budget']],
   // Scheduling a request books the field or adds a work order; the partner's pages list requests.
   request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders'], ['partner']],
 };

@@ -161,6 +161,12 @@ export const routes: RouteRecordRaw[] = [
         meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'CostSettings'], title: 'Costs and rates' },
       },
       {
+        path: 'budget',
+        name: 'budget',
+        component: () => import('../views/BudgetView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Budget'], title: 'Season budget' },
+      },
+      {
         path: 'map',
         name: 'map',
         component: () => import('../views/MapView.vue'),

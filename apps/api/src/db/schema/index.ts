@@ -6,3 +6,4 @@ export * from './standards.ts';
 export * from './work.ts';
 export * from './requests.ts';
 export * from './mail.ts';
+export * from './budget.ts';
