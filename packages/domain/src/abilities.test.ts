@@ -156,6 +156,12 @@ const cases: Case[] = [
   ['foreman', 'update', 'CostSettings', null, false],
   ['crew', 'read', 'CostSettings', null, false],
   ['partner', 'read', 'CostSettings', null, false],
+  // The overview: the department's for the head, his district's for a foreman, none for crews and partners
+  ['head', 'read', 'Overview', { districtId: D2 }, true],
+  ['foreman', 'read', 'Overview', { districtId: D1 }, true],
+  ['foreman', 'read', 'Overview', { districtId: D2 }, false],
+  ['crew', 'read', 'Overview', null, false],
+  ['partner', 'read', 'Overview', null, false],
   // The partner's own pages
   ['partner', 'read', 'PartnerView', null, true],
   ['head', 'read', 'PartnerView', null, false],
