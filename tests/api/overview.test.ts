@@ -156,8 +156,9 @@ describe('overview of the demo city', () => {
 
   test('should count open requests and closures as SQL over their rows', async () => {
     const req = await one(sql`select sum(case when state in ('requested', 'scheduled') then 1 else 0 end) as open,
+      sum(case when state = 'requested' then 1 else 0 end) as waiting, sum(case when state = 'scheduled' then 1 else 0 end) as scheduled,
       sum(case when state in ('done', 'declined') and (closed_at at time zone ${DEFAULT_TIME_ZONE})::date >= ${SEASON_FROM}::date then 1 else 0 end) as closed from field_requests`);
-    expect(answer.total.requests).toEqual({ open: n(req.open), closedInSeason: n(req.closed) });
+    expect(answer.total.requests).toEqual({ open: n(req.open), waiting: n(req.waiting), scheduled: n(req.scheduled), closedInSeason: n(req.closed) });
     const now = await one(sql`select sum(case when status = 'closed' then 1 else 0 end) as closed, sum(case when status = 'restricted' then 1 else 0 end) as restricted from fields`);
     const decided = await one(sql`select count(*) as c from field_closures where status <> 'open' and (from_at at time zone ${DEFAULT_TIME_ZONE})::date between ${SEASON_FROM}::date and ${SEASON_TO}::date`);
     expect(answer.total.closures).toEqual({ closedNow: n(now.closed), restrictedNow: n(now.restricted), inSeason: n(decided.c) });

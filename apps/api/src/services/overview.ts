@@ -51,7 +51,7 @@ function emptyAcc(districtId: number | null, name: string, targets: Record<Level
       nitrogen: { appliedKg: 0, planKg: 0 },
       water: { budgetL: 0, usedL: 0 },
       paint: { plannedL: 0, usedL: 0 },
-      requests: { open: 0, closedInSeason: 0 },
+      requests: { open: 0, waiting: 0, scheduled: 0, closedInSeason: 0 },
       closures: { closedNow: 0, restrictedNow: 0, inSeason: 0 },
     },
     scoreSum: { 1: 0, 2: 0, 3: 0, 4: 0 },
@@ -192,13 +192,14 @@ export async function getOverview(ctx: Ctx, q: OverviewQuery): Promise<Overview>
   // Partners' requests: open now, and closed (done or declined) in the season.
   const requestRows = await ctx.db.execute<Row>(sql`
     select district_id,
-      count(*) filter (where state in ('requested', 'scheduled')) as open,
+      count(*) filter (where state = 'requested') as waiting,
+      count(*) filter (where state = 'scheduled') as scheduled,
       count(*) filter (where state in ('done', 'declined') and closed_at is not null and ${localDate(sql`closed_at`, tz)} between ${seasonFrom}::date and ${seasonTo}::date) as closed
     from field_requests where ${inDistricts(sql`district_id`)}
     group by district_id`);
   for (const r of requestRows.rows) {
     const a = of(r);
-    if (a) a.block.requests = { open: num(r.open), closedInSeason: num(r.closed) };
+    if (a) a.block.requests = { open: num(r.waiting) + num(r.scheduled), waiting: num(r.waiting), scheduled: num(r.scheduled), closedInSeason: num(r.closed) };
   }
 
   // Closures: fields closed or restricted now, and closures or restrictions decided in the season.
@@ -246,6 +247,8 @@ function sumOf(parts: Acc[], targets: Record<Level, number>): Acc {
     b.paint.plannedL += p.paint.plannedL;
     b.paint.usedL += p.paint.usedL;
     b.requests.open += p.requests.open;
+    b.requests.waiting += p.requests.waiting;
+    b.requests.scheduled += p.requests.scheduled;
     b.requests.closedInSeason += p.requests.closedInSeason;
     b.closures.closedNow += p.closures.closedNow;
     b.closures.restrictedNow += p.closures.restrictedNow;

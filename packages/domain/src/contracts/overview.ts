@@ -53,8 +53,8 @@ export interface OverviewBlock {
   water: { budgetL: number; usedL: number };
   /** Line paint (concentrate) of the season's line-marking orders: planned and used by the done ones (L). */
   paint: { plannedL: number; usedL: number };
-  /** Partner requests: waiting or scheduled now, and closed (done or declined) in the season. */
-  requests: { open: number; closedInSeason: number };
+  /** Partner requests: open now (waiting for an answer, or scheduled into work), and closed (done or declined) in the season. */
+  requests: { open: number; waiting: number; scheduled: number; closedInSeason: number };
   /** Fields closed or restricted now, and closures or restrictions decided in the season. */
   closures: { closedNow: number; restrictedNow: number; inSeason: number };
 }
