@@ -27,6 +27,8 @@ export interface FieldCareRow extends FieldRow {
   overdue: OverdueKey;
   score: number | null;
   scoredOn: string | null;
+  /** The latest score against the level's target; unknown until the Standards are read. */
+  target?: TargetKey;
 }
 
 /** A mowing is overdue when the grass has passed 1.5 × HOC or the policy's due day has gone by. */
@@ -136,8 +138,8 @@ export function targetOf(row: Pick<FieldCareRow, 'score' | 'maintenanceLevel'>, 
 }
 
 /** The score against the level's target, filterable (`/fields?target=below`). */
-export function targetColumn(targets: Record<Level, number> | null): DataColumn<FieldCareRow> {
-  return col.accessor((r) => targetOf(r, targets), {
+export function targetColumn(): DataColumn<FieldCareRow> {
+  return col.accessor((r) => r.target, {
     id: 'target',
     header: 'Target',
     sortUndefined: 'last',
