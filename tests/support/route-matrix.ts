@@ -192,6 +192,7 @@ export const MATRIX: MatrixRow[] = [
     allow: 'admin foreman:own',
     call: (c) => c.agent.post('/api/week-plans/rain-out').send({ districtId: c.ids.district, date: '2030-01-09', reason: 'thunderstorms' }),
   },
+  { route: 'GET /api/overview', allow: 'admin head foreman:own', call: (c) => c.agent.get(`/api/overview?districtId=${c.ids.district}`) },
   { route: 'GET /api/records', allow: 'everyone', scoped: false, call: (c) => c.agent.get('/api/records') },
 
   // Sites and fields

@@ -44,6 +44,7 @@ import { mapRouter } from './routes/map.ts';
 import { partnerRouter } from './routes/partner.ts';
 import { publicRouter } from './routes/public.ts';
 import { recordsRouter } from './routes/records.ts';
+import { overviewRouter } from './routes/overview.ts';
 import { requestsRouter } from './routes/requests.ts';
 import { settingsRouter } from './routes/settings.ts';
 import { costsRouter } from './routes/costs.ts';
@@ -174,6 +175,7 @@ export function createApp(
   app.use('/api/work-orders', workReportsRouter(full));
   app.use('/api/week-plans', weekPlansRouter(full));
   app.use('/api/records', recordsRouter(full));
+  app.use('/api/overview', overviewRouter(full));
   app.use('/api/sites', sitesRouter(full));
   app.use('/api/fields', fieldsRouter(full));
   app.use('/api/fields', closuresRouter(full));

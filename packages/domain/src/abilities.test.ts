@@ -165,6 +165,12 @@ const cases: Case[] = [
   ['foreman', 'update', 'Budget', { districtId: D1 }, false],
   ['crew', 'read', 'Budget', { districtId: D1 }, false],
   ['partner', 'read', 'Budget', { districtId: D1 }, false],
+  // The overview: the department's for the head, his district's for a foreman, none for crews and partners
+  ['head', 'read', 'Overview', { districtId: D2 }, true],
+  ['foreman', 'read', 'Overview', { districtId: D1 }, true],
+  ['foreman', 'read', 'Overview', { districtId: D2 }, false],
+  ['crew', 'read', 'Overview', null, false],
+  ['partner', 'read', 'Overview', null, false],
   // The partner's own pages
   ['partner', 'read', 'PartnerView', null, true],
   ['head', 'read', 'PartnerView', null, false],

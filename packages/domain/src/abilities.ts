@@ -37,6 +37,8 @@ export const SUBJECTS = [
   'CostSettings',
   /** The season budget of a district (districtId) or of the department (districtId null). */
   'Budget',
+  /** The overview's figures of a district (or, for the department, of all of them). */
+  'Overview',
 ] as const;
 export type SubjectName = (typeof SUBJECTS)[number];
 /** A row tagged with its subject type (see `asSubject`). */
@@ -106,6 +108,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       // The head defends the budget: he sets what labour, fuel, water and products cost.
       can(['read', 'update'], 'CostSettings');
       can(['read', 'update'], 'Budget');
+      can('read', 'Overview');
       break;
 
     case 'foreman': {
@@ -119,6 +122,8 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can('read', 'CostSettings');
       // His district's budget, read-only: the head sets it.
       can('read', 'Budget', { districtId: d });
+      // The overview of his own district, never another's or the department's.
+      can('read', 'Overview', { districtId: d });
       can('create', ['Import', 'Weather']);
       can('read', 'Import', { districtId: d });
       can('read', 'AuditEntry', { districtId: d });

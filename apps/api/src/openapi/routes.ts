@@ -32,6 +32,7 @@ import {
   createSiteSchema,
   createWorkOrderSchema,
   dateRangeQuerySchema,
+  overviewQuerySchema,
   forgotPasswordSchema,
   generateWeekSchema,
   rainOutSchema,
@@ -1555,6 +1556,37 @@ const calendarFeeds: RouteDoc[] = [
   },
 ];
 
+const overview: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/overview',
+    tag: 'Overview',
+    summary: 'The department head’s overview per district and for the department (a foreman: his own district only)',
+    description:
+      'Acres by level, labour planned against done (this week and the season), mowings on time, late and missed by the one-third rule, N applied against the feed plan, water against the water budget, paint, the mean surface score and fields below target per level, open requests and closures. A foreman asking for another district gets 403; without a district he gets his own.',
+    access: allowed('read', 'Overview', { probe: (actor) => ({ districtId: actor.districtId }) }),
+    query: overviewQuerySchema,
+    answers: [
+      json(
+        200,
+        'Quantities in SI units (m², h, kg N, L), per district and in total.',
+        shape({
+          season: int('The season year'),
+          seasonFrom: date(),
+          seasonTo: date(),
+          weekFrom: date('Monday of the department’s current week'),
+          weekTo: date(),
+          asOf: date('The department’s today'),
+          districtId: nullable(int()),
+          total: row('The whole of what was asked'),
+          districts: rows('One block per district'),
+        }),
+      ),
+    ],
+    errors: [404],
+  },
+];
+
 export const ROUTES: readonly RouteDoc[] = [
   ...service,
   ...auth,
@@ -1562,6 +1594,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...weather,
   ...workOrders,
   ...weekPlans,
+  ...overview,
   ...sites,
   ...fields,
   ...fieldEvents,

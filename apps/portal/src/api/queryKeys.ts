@@ -29,6 +29,8 @@ export const queryKeys = {
   /** Not under `map`: the bundled basemap does not change with the data. */
   basemap: () => ['basemap'] as const,
   records: (query: object) => ['records', query] as const,
+  /** Sums over work, fields, checks, requests and closures: most writes make it stale. */
+  overview: (query: object) => ['overview', query] as const,
   /** Under `records`: a work order's change (an application recorded on it) makes them stale. */
   applications: (query: object) => ['records', 'applications', query] as const,
   requests: (query: object) => ['requests', 'list', query] as const,
@@ -60,18 +62,18 @@ export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | '
  * field's change shows in its site's counts, the district's totals, the map and the week plan).
  */
 export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
-  site: [['sites'], ['fields'], ['districts'], ['map']],
-  field: [['fields'], ['sites'], ['districts'], ['map'], ['week-plans'], ['work-orders'], ['records'], ['partner'], ['budget']],
+  site: [['sites'], ['fields'], ['districts'], ['map'], ['overview']],
+  field: [['fields'], ['sites'], ['districts'], ['map'], ['week-plans'], ['work-orders'], ['records'], ['partner'], ['budget'], ['overview']],
   fieldEvent: [['field-events'], ['fields', 'needs'], ['week-plans'], ['partner']],
   crew: [['crews'], ['equipment'], ['users'], ['week-plans'], ['work-orders']],
   equipment: [['equipment'], ['week-plans']],
   user: [['users'], ['crews']],
-  standards: [['standards'], ['fields', 'needs'], ['map'], ['week-plans'], ['budget']],
-  import: [['imports'], ['sites'], ['fields'], ['districts'], ['map']],
-  workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map'], ['partner'], ['game-days'], ['budget']],
+  standards: [['standards'], ['fields', 'needs'], ['map'], ['week-plans'], ['budget'], ['overview']],
+  import: [['imports'], ['sites'], ['fields'], ['districts'], ['map'], ['overview']],
+  workOrder: [['week-plans'], ['work-orders'], ['records'], ['fields'], ['map'], ['partner'], ['game-days'], ['budget'], ['overview']],
   weather: [['weather'], ['fields', 'needs'], ['map']],
   devMail: [['dev-mail']],
-  fieldCheck: [['fields'], ['map'], ['records']],
+  fieldCheck: [['fields'], ['map'], ['records'], ['overview']],
   calendarFeed: [['calendar-feeds']],
   // A game-day preparation adds or pins work orders.
   gameDay: [['game-days'], ['week-plans'], ['work-orders'], ['partner']],
@@ -79,5 +81,5 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   costs: [['costs'], ['budget']],
   budget: [['budget']],
   // Scheduling a request books the field or adds a work order; the partner's pages list requests.
-  request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders'], ['partner']],
+  request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders'], ['partner'], ['overview']],
 };

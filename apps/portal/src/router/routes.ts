@@ -59,7 +59,8 @@ export const routes: RouteRecordRaw[] = [
         path: 'overview',
         name: 'overview',
         component: () => import('../views/OverviewView.vue'),
-        meta: { roles: ['admin', 'head'], can: ['read', 'District'], title: 'Overview' },
+        // A foreman reaches his own district's overview from My district.
+        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Overview'], title: 'Overview' },
       },
       {
         path: 'district',

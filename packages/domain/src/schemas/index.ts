@@ -18,3 +18,4 @@ export * from './linePlans.ts';
 export * from './logos.ts';
 export * from './game-days.ts';
 export * from './budget.ts';
+export * from './overview.ts';

@@ -70,6 +70,8 @@ export const workOrders = pgTable(
     index('work_orders_week_idx').on(t.districtId, t.weekStart),
     index('work_orders_crew_idx').on(t.crewId, t.plannedDate),
     index('work_orders_field_idx').on(t.fieldId, t.plannedDate),
+    // The overview's inputs (feed, water, paint) of a season read only those tasks.
+    index('work_orders_task_date_idx').on(t.task, t.plannedDate),
   ],
 );
 

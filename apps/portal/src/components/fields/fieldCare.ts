@@ -3,7 +3,7 @@
  * latest surface score. Every figure is the map answer's (`GET /api/map`), which the API works
  * out once per field with the engine's `mowingDue` and `fieldCheckDue`; the pages only show it.
  */
-import type { FieldRow, MapField } from '@swardwise/domain';
+import type { FieldRow, Level, MapField } from '@swardwise/domain';
 import { h } from 'vue';
 import { columnHelper, labelled, type DataColumn } from '../data-table/features.ts';
 
@@ -27,6 +27,8 @@ export interface FieldCareRow extends FieldRow {
   overdue: OverdueKey;
   score: number | null;
   scoredOn: string | null;
+  /** The latest score against the level's target; unknown until the Standards are read. */
+  target?: TargetKey;
 }
 
 /** A mowing is overdue when the grass has passed 1.5 × HOC or the policy's due day has gone by. */
@@ -124,3 +126,28 @@ export function careColumns(keys: CareColumnKey[]): DataColumn<FieldCareRow>[] {
 }
 
 const overdueRank = (k: OverdueKey) => ({ mowing_check: 3, mowing: 2, check: 1, none: 0 })[k];
+
+export type TargetKey = 'below' | 'met' | 'unscored';
+export const TARGET_LABELS: Record<TargetKey, string> = { below: 'Below target', met: 'At or above', unscored: 'No check yet' };
+
+/** Where a field's latest score stands against its level's target (Standards), as the overview counts it. */
+export function targetOf(row: Pick<FieldCareRow, 'score' | 'maintenanceLevel'>, targets: Record<Level, number> | null): TargetKey | undefined {
+  if (row.score === null) return 'unscored';
+  if (!targets) return undefined;
+  return row.score < targets[row.maintenanceLevel] ? 'below' : 'met';
+}
+
+/** The score against the level's target, filterable (`/fields?target=below`). */
+export function targetColumn(): DataColumn<FieldCareRow> {
+  return col.accessor((r) => r.target, {
+    id: 'target',
+    header: 'Target',
+    sortUndefined: 'last',
+    ...labelled(TARGET_LABELS),
+    cell: (c) => {
+      const v = c.getValue() as TargetKey | undefined;
+      if (v === undefined) return dash();
+      return v === 'below' ? h('span', { class: 'sw-late' }, TARGET_LABELS.below) : h('span', { class: v === 'unscored' ? 'sw-muted' : undefined }, TARGET_LABELS[v]);
+    },
+  }) as DataColumn<FieldCareRow>;
+}

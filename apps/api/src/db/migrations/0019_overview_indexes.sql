@@ -1,0 +1,1 @@
+CREATE INDEX "work_orders_task_date_idx" ON "work_orders" USING btree ("task","planned_date");
