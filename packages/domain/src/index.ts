@@ -9,3 +9,4 @@ export * from './contracts/index.ts';
 export * from './partner-words.ts';
 export * from './audit-words.ts';
 export * from './costs.ts';
+export * from './cost-of-work.ts';
