@@ -406,6 +406,10 @@ export const MATRIX: MatrixRow[] = [
   { route: 'GET /api/costs', allow: 'admin head foreman', scoped: false, call: (c) => c.agent.get('/api/costs') },
   { route: 'PATCH /api/costs', allow: 'admin head', scoped: false, call: (c) => c.agent.patch('/api/costs').send({ ...DEFAULT_COSTS, version: STALE }) },
 
+  // Sites compared
+  { route: 'GET /api/compare/sites', allow: 'admin head foreman:own', call: (c) => c.agent.get(`/api/compare/sites?districtId=${c.ids.district}`) },
+  { route: 'GET /api/compare/sites.csv', allow: 'admin head foreman:own', call: (c) => c.agent.get(`/api/compare/sites.csv?districtId=${c.ids.district}`) },
+
   // Cultural work: application records
   { route: 'GET /api/records/applications', allow: 'everyone', scoped: false, call: (c) => c.agent.get('/api/records/applications') },
   {

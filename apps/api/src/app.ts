@@ -46,6 +46,7 @@ import { recordsRouter } from './routes/records.ts';
 import { requestsRouter } from './routes/requests.ts';
 import { settingsRouter } from './routes/settings.ts';
 import { costsRouter } from './routes/costs.ts';
+import { compareRouter } from './routes/compare.ts';
 import { sitesRouter } from './routes/sites.ts';
 import { standardsRouter } from './routes/standards.ts';
 import { usersRouter } from './routes/users.ts';
@@ -186,6 +187,7 @@ export function createApp(
   app.use('/api/calendar-feeds', calendarFeedsRouter(full));
   app.use('/api/settings', settingsRouter(full));
   app.use('/api/costs', costsRouter(full));
+  app.use('/api/compare', compareRouter(full));
   app.use('/api', directoryRouter(full));
   app.use('/api', crewsRouter(full));
   if (devRoutes) app.use('/api/dev', devRouter(full));

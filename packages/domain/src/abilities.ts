@@ -35,6 +35,8 @@ export const SUBJECTS = [
   'CalendarFeed',
   /** The department's costs and rates (labour, fuel, water, products): internal, never a partner's or a crew's. */
   'CostSettings',
+  /** Sites compared by cost, hours and inputs per acre and surface score: the head's, a foreman's for his district. */
+  'SiteComparison',
 ] as const;
 export type SubjectName = (typeof SUBJECTS)[number];
 /** A row tagged with its subject type (see `asSubject`). */
@@ -103,6 +105,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can(['create', 'read'], 'Import');
       // The head defends the budget: he sets what labour, fuel, water and products cost.
       can(['read', 'update'], 'CostSettings');
+      can('read', 'SiteComparison');
       break;
 
     case 'foreman': {
@@ -114,6 +117,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can('read', ['Standards', 'Weather']);
       // A foreman sees his district's costs, so he reads the rates they are worked out with.
       can('read', 'CostSettings');
+      can('read', 'SiteComparison', { districtId: d });
       can('create', ['Import', 'Weather']);
       can('read', 'Import', { districtId: d });
       can('read', 'AuditEntry', { districtId: d });

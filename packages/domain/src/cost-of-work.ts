@@ -5,7 +5,7 @@
  */
 import { crewRatePerHour } from './costs.ts';
 import type { CostSettings } from './schemas/costs.ts';
-import type { EquipmentKind } from './vocabulary.ts';
+import type { EquipmentKind, WorkTask } from './vocabulary.ts';
 
 /** Quantities recorded on work orders and applications over a period (SI units). */
 export interface WorkQuantities {
@@ -63,3 +63,22 @@ export function costOfWork(q: WorkQuantities, costs: CostSettings): WorkCost {
   const inputs = fertiliser + water + paint + seed + colourant;
   return { labour, fuel, fertiliser, water, paint, seed, colourant, inputs, total: labour + fuel + inputs };
 }
+
+/**
+ * The machine a task runs when its order names none: mowing on the mower of its kind (a reel
+ * mower when the order says so, else a rotary), lines on the marker, feed and seed through the
+ * spreader, weed control and colourant through the sprayer; the rest by hand or on a
+ * controller, burning no fuel on the bill (common practice).
+ */
+export const MACHINE_OF_TASK: Record<WorkTask, EquipmentKind | null> = {
+  mow: 'rotary_mower',
+  paint_lines: 'line_marker',
+  feed: 'spreader',
+  overseed: 'spreader',
+  weed_control: 'sprayer',
+  colourant: 'sprayer',
+  irrigate: null,
+  field_check: null,
+  aerate: null,
+  topdress: null,
+};

@@ -17,3 +17,4 @@ export * from './costs.ts';
 export * from './linePlans.ts';
 export * from './logos.ts';
 export * from './game-days.ts';
+export * from './compare.ts';
