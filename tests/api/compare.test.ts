@@ -22,7 +22,7 @@ const TODAY = '2026-12-02';
 const ACRE_M2 = 4046.8564224;
 
 let database: Database;
-let app: Parameters<typeof supertest.agent>[0];
+let app: NonNullable<Parameters<typeof supertest.agent>[0]>;
 const agent = async (role: keyof typeof DEMO_SIGN_INS) => {
   const a = supertest.agent(app);
   expect((await a.post('/api/auth/sign-in').send(DEMO_SIGN_INS[role])).status).toBe(200);

@@ -31,6 +31,8 @@ export const queryKeys = {
   records: (query: object) => ['records', query] as const,
   /** Under `records`: a work order's change (an application recorded on it) makes them stale. */
   applications: (query: object) => ['records', 'applications', query] as const,
+  /** Under `records`: done work and field checks change it; costs and sites too (see staleAfter). */
+  compareSites: (query: object) => ['records', 'compare', query] as const,
   requests: (query: object) => ['requests', 'list', query] as const,
   request: (id: number) => ['requests', 'detail', id] as const,
   sites: (query: object) => ['sites', 'list', query] as const,
@@ -59,7 +61,7 @@ export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | '
  * field's change shows in its site's counts, the district's totals, the map and the week plan).
  */
 export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
-  site: [['sites'], ['fields'], ['districts'], ['map']],
+  site: [['sites'], ['fields'], ['districts'], ['map'], ['records', 'compare']],
   field: [['fields'], ['sites'], ['districts'], ['map'], ['week-plans'], ['work-orders'], ['records'], ['partner']],
   fieldEvent: [['field-events'], ['fields', 'needs'], ['week-plans'], ['partner']],
   crew: [['crews'], ['equipment'], ['users'], ['week-plans'], ['work-orders']],
@@ -75,7 +77,7 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   // A game-day preparation adds or pins work orders.
   gameDay: [['game-days'], ['week-plans'], ['work-orders'], ['partner']],
   fieldLogo: [['fields', 'logos']],
-  costs: [['costs']],
+  costs: [['costs'], ['records', 'compare']],
   // Scheduling a request books the field or adds a work order; the partner's pages list requests.
   request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders'], ['partner']],
 };
