@@ -1,7 +1,7 @@
 /**
  * Sites compared over a period: hours, inputs and money per acre, and the surface score they
- * bought. Summed in SQL (one grouped pass over the period's done work orders, by the
- * `work_orders_done_idx` index), priced in the domain (`costOfWork`), never a loop over rows here.
+ * bought. Summed in SQL (one grouped pass over the period's done work orders, per site, crew
+ * and machine kind), priced in the domain (`costOfWork`), never a loop over orders here.
  */
 import { sql, type SQL } from 'drizzle-orm';
 import {
