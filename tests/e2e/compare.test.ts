@@ -7,11 +7,10 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import Papa from 'papaparse';
 import type { Page } from 'playwright-core';
-import { describe, expect, inject, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import type { CompareSitesAnswer } from '@swardwise/domain';
 import { browser, keyboardSignIn, shots, signIn, tabTo, useBrowser } from './browser.ts';
 
-const baseUrl = inject('baseUrl');
 
 useBrowser();
 
