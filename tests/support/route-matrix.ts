@@ -417,6 +417,9 @@ export const MATRIX: MatrixRow[] = [
     call: (c) => c.agent.patch('/api/budget/line').send({ season: 2026, districtId: c.ids.district, line: 'labour', amount: 1000, version: STALE }),
   },
   { route: 'POST /api/what-if', allow: 'admin head foreman:own', call: (c) => c.agent.post('/api/what-if').send({ season: 2026, districtId: c.ids.district, moves: [{ fieldId: c.ids.field, level: 4 }] }) },
+  // Sites compared
+  { route: 'GET /api/compare/sites', allow: 'admin head foreman:own', call: (c) => c.agent.get(`/api/compare/sites?districtId=${c.ids.district}`) },
+  { route: 'GET /api/compare/sites.csv', allow: 'admin head foreman:own', call: (c) => c.agent.get(`/api/compare/sites.csv?districtId=${c.ids.district}`) },
 
   // Cultural work: application records
   { route: 'GET /api/records/applications', allow: 'everyone', scoped: false, call: (c) => c.agent.get('/api/records/applications') },

@@ -50,6 +50,7 @@ import { settingsRouter } from './routes/settings.ts';
 import { costsRouter } from './routes/costs.ts';
 import { budgetRouter } from './routes/budget.ts';
 import { whatIfRouter } from './routes/what-if.ts';
+import { compareRouter } from './routes/compare.ts';
 import { sitesRouter } from './routes/sites.ts';
 import { standardsRouter } from './routes/standards.ts';
 import { usersRouter } from './routes/users.ts';
@@ -194,6 +195,7 @@ export function createApp(
   app.use('/api/costs', costsRouter(full));
   app.use('/api/budget', budgetRouter(full));
   app.use('/api/what-if', whatIfRouter(full));
+  app.use('/api/compare', compareRouter(full));
   app.use('/api', directoryRouter(full));
   app.use('/api', crewsRouter(full));
   if (devRoutes) app.use('/api/dev', devRouter(full));

@@ -39,6 +39,8 @@ export const SUBJECTS = [
   'Budget',
   /** The overview's figures of a district (or, for the department, of all of them). */
   'Overview',
+  /** Sites compared by cost, hours and inputs per acre and surface score: the head's, a foreman's for his district. */
+  'SiteComparison',
 ] as const;
 export type SubjectName = (typeof SUBJECTS)[number];
 /** A row tagged with its subject type (see `asSubject`). */
@@ -109,6 +111,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can(['read', 'update'], 'CostSettings');
       can(['read', 'update'], 'Budget');
       can('read', 'Overview');
+      can('read', 'SiteComparison');
       break;
 
     case 'foreman': {
@@ -124,6 +127,7 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can('read', 'Budget', { districtId: d });
       // The overview of his own district, never another's or the department's.
       can('read', 'Overview', { districtId: d });
+      can('read', 'SiteComparison', { districtId: d });
       can('create', ['Import', 'Weather']);
       can('read', 'Import', { districtId: d });
       can('read', 'AuditEntry', { districtId: d });

@@ -11,3 +11,4 @@ export * from './audit-words.ts';
 export * from './costs.ts';
 export * from './budget.ts';
 export * from './what-if.ts';
+export * from './cost-of-work.ts';

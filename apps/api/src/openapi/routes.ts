@@ -56,6 +56,7 @@ import {
   budgetQuerySchema,
   budgetLineSchema,
   whatIfSchema,
+  compareQuerySchema,
   updateEquipmentSchema,
   updateFieldEventSchema,
   updateFieldSchema,
@@ -813,6 +814,34 @@ const costsAnswer = shape({
   source: str('setting once entered, default while the starting values apply'),
   version: int(),
 });
+const compareAnswer = shape({
+  period: row('The days compared: { kind: season | last12 | range, from, to } (department-local dates)'),
+  currency: str('The currency of every amount'),
+  districtId: int(),
+  rows: rows('One site: siteId, siteName, districtId, districtName, level (by most field area), fieldCount, areaM2, acres, ordersDone, hours, fertiliserKgN, waterM3, paintL, seedKg, colourantL, cost { labour, fuel, fertiliser, water, paint, seed, colourant, inputs, total }, costPerAcre, hoursPerAcre, inputsPerAcre (per international acre), surfaceScore (0–100), fieldsChecked'),
+  totals: row('Sums over the rows, per-acre figures over the summed acres'),
+});
+const compare: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/compare/sites',
+    tag: 'Settings',
+    summary: 'Sites compared over a period: cost, hours and inputs per acre, and surface score',
+    description: 'The head sees every district (or the one asked); a foreman his own (another district is a 403). Work counts on its planned day; hours are the actual ones, else the planned.',
+    access: allowed('read', 'SiteComparison'),
+    query: compareQuerySchema,
+    answers: [json(200, 'The sites and their totals.', compareAnswer)],
+  },
+  {
+    method: 'get',
+    path: '/api/compare/sites.csv',
+    tag: 'Settings',
+    summary: 'The same comparison as a CSV file, one line per site',
+    access: allowed('read', 'SiteComparison'),
+    query: compareQuerySchema,
+    answers: [{ status: 200, description: 'The CSV (UTF-8, header line first).', contentType: 'text/csv', body: { type: 'string' } }],
+  },
+];
 const costs: RouteDoc[] = [
   {
     method: 'get',
@@ -1610,6 +1639,7 @@ export const ROUTES: readonly RouteDoc[] = [
   ...settings,
   ...costs,
   ...budget,
+  ...compare,
   ...imports,
   ...map,
   ...directory,

@@ -33,6 +33,8 @@ export const queryKeys = {
   overview: (query: object) => ['overview', query] as const,
   /** Under `records`: a work order's change (an application recorded on it) makes them stale. */
   applications: (query: object) => ['records', 'applications', query] as const,
+  /** Under `records`: done work and field checks change it; costs and sites too (see staleAfter). */
+  compareSites: (query: object) => ['records', 'compare', query] as const,
   requests: (query: object) => ['requests', 'list', query] as const,
   request: (id: number) => ['requests', 'detail', id] as const,
   sites: (query: object) => ['sites', 'list', query] as const,
@@ -62,7 +64,7 @@ export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | '
  * field's change shows in its site's counts, the district's totals, the map and the week plan).
  */
 export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
-  site: [['sites'], ['fields'], ['districts'], ['map'], ['overview']],
+  site: [['sites'], ['fields'], ['districts'], ['map'], ['overview'], ['records', 'compare']],
   field: [['fields'], ['sites'], ['districts'], ['map'], ['week-plans'], ['work-orders'], ['records'], ['partner'], ['budget'], ['overview']],
   fieldEvent: [['field-events'], ['fields', 'needs'], ['week-plans'], ['partner']],
   crew: [['crews'], ['equipment'], ['users'], ['week-plans'], ['work-orders']],
@@ -78,7 +80,7 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   // A game-day preparation adds or pins work orders.
   gameDay: [['game-days'], ['week-plans'], ['work-orders'], ['partner']],
   fieldLogo: [['fields', 'logos']],
-  costs: [['costs'], ['budget']],
+  costs: [['costs'], ['budget'], ['records', 'compare']],
   budget: [['budget']],
   // Scheduling a request books the field or adds a work order; the partner's pages list requests.
   request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders'], ['partner'], ['overview']],

@@ -168,6 +168,12 @@ export const routes: RouteRecordRaw[] = [
         meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Budget'], title: 'Season budget' },
       },
       {
+        path: 'compare',
+        name: 'compare',
+        component: () => import('../views/CompareView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'SiteComparison'], title: 'Compare sites' },
+      },
+      {
         path: 'map',
         name: 'map',
         component: () => import('../views/MapView.vue'),

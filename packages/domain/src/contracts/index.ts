@@ -27,3 +27,4 @@ export * from './logos.ts';
 export * from './game-days.ts';
 export * from './budget.ts';
 export * from './overview.ts';
+export * from './compare.ts';

@@ -10,7 +10,7 @@ import { requireFinite } from './check.ts';
 export const MM_PER_INCH = 25.4;
 export const M_PER_FOOT = 0.3048;
 export const M2_PER_FT2 = M_PER_FOOT * M_PER_FOOT; // 0.09290304
-export const M2_PER_ACRE = 4046.8564224; // 43,560 ft²
+export const M2_PER_ACRE = 4046.8564224; // the international acre: 43,560 international ft², exact by definition
 export const M2_PER_HECTARE = 10_000;
 export const KG_PER_LB = 0.45359237;
 export const L_PER_US_GALLON = 3.785411784; // 231 in³

@@ -19,3 +19,4 @@ export * from './logos.ts';
 export * from './game-days.ts';
 export * from './budget.ts';
 export * from './overview.ts';
+export * from './compare.ts';

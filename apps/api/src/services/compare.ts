@@ -1,0 +1,203 @@
+/**
+ * Sites compared over a period: hours, inputs and money per acre, and the surface score they
+ * bought. Summed in SQL (one grouped pass over the period's done work orders, per site, crew
+ * and machine kind), priced in the domain (`costOfWork`), never a loop over orders here.
+ */
+import { sql, type SQL } from 'drizzle-orm';
+import {
+  addDaysIso,
+  costOfWork,
+  errors,
+  KG_PER_LB,
+  M2_PER_ACRE,
+  M2_PER_FT2,
+  MACHINE_OF_TASK,
+  type CompareQuery,
+  type CompareSiteRow,
+  type CompareSitesAnswer,
+  type EquipmentKind,
+  type Level,
+  type WorkCost,
+} from '@swardwise/domain';
+import { applications, districts, equipment, fieldChecks, fields, sites, workOrders } from '../db/schema/index.ts';
+import { authorize, type Ctx } from './context.ts';
+import { readCosts } from './costs.ts';
+
+/** The days compared: the season (the department's calendar year to today), the last 12 months, or the range asked. */
+export function comparePeriod(today: string, q: CompareQuery): CompareSitesAnswer['period'] {
+  if (q.period === 'range') return { kind: 'range', from: q.from!, to: q.to! };
+  if (q.period === 'last12') return { kind: 'last12', from: addDaysIso(today, -364), to: today };
+  return { kind: 'season', from: `${today.slice(0, 4)}-01-01`, to: today };
+}
+
+/** A number kept in a work order's details, or 0 when absent or not a number. */
+const detail = (path: SQL): SQL => sql`case when jsonb_typeof(${path}) = 'number' then (${path}#>>'{}')::float8 else 0 end`;
+
+/** The machine an order ran: its equipment's kind, else the task's usual machine. */
+const machineKind = sql`coalesce(e.kind, case wo.task ${sql.join(
+  Object.entries(MACHINE_OF_TASK)
+    .filter(([, kind]) => kind !== null)
+    .map(([task, kind]) =>
+      task === 'mow'
+        ? sql`when 'mow' then case when coalesce(wo.details->>'mowerKind', wo.details->>'mower', '') like 'reel%' then 'reel_mower' else 'rotary_mower' end`
+        : sql`when ${sql.raw(`'${task}'`)} then ${sql.raw(`'${kind}'`)}`,
+    ),
+  sql` `,
+)} end)`;
+
+/** Seed sown, kg, from an application's label rate and area. */
+const SEED_KG = sql`case a.rate_unit
+  when 'g/m²' then a.rate * a.area_m2 / 1000
+  when 'kg/ha' then a.rate * a.area_m2 / 10000
+  when 'lb/1000 ft²' then a.rate * ${KG_PER_LB}::float8 * a.area_m2 / (1000 * ${M2_PER_FT2}::float8)
+  when 'oz/1000 ft²' then a.rate * ${KG_PER_LB / 16}::float8 * a.area_m2 / (1000 * ${M2_PER_FT2}::float8)
+  else 0 end`;
+
+type SiteFacts = { site_id: number; site_name: string; district_id: number; district_name: string; field_count: number; area_m2: number; level: number };
+type WorkGroup = { site_id: number; crew_id: number | null; kind: EquipmentKind | null; orders: number; hours: number; kg_n: number; water_m3: number; paint_l: number; colourant_l: number };
+
+const perAcre = (value: number, acres: number): number | null => (acres > 0 ? value / acres : null);
+
+/** Sites in the caller's scope with their figures over the period. The head sees every district (or the one asked); a foreman only his own. */
+export async function compareSites(ctx: Ctx, q: CompareQuery): Promise<CompareSitesAnswer> {
+  authorize(ctx, 'read', 'SiteComparison');
+  const { actor } = ctx;
+  let districtId: number | null = q.districtId ?? null;
+  if (actor.role === 'foreman') {
+    // A foreman never widens his scope: another district's id is refused, none means his own.
+    if (districtId !== null && districtId !== actor.districtId) throw errors.forbidden('A foreman compares the sites of his own district');
+    districtId = actor.districtId ?? -1;
+  }
+  authorize(ctx, 'read', 'SiteComparison', districtId === null ? undefined : { districtId });
+  const period = comparePeriod(ctx.clock.today(), q);
+  const inDistrict = (col: SQL): SQL => (districtId === null ? sql`true` : sql`${col} = ${districtId}`);
+
+  const [{ costs }, facts, work, seed, scores] = await Promise.all([
+    readCosts(ctx.db),
+    ctx.db.execute<SiteFacts>(sql`
+      select s.id as site_id, s.name as site_name, d.id as district_id, d.name as district_name,
+        count(f.id)::int as field_count, coalesce(sum(f.area_m2), 0)::float8 as area_m2,
+        coalesce((select f2.maintenance_level from ${fields} f2 where f2.site_id = s.id
+          group by f2.maintenance_level order by sum(f2.area_m2) desc, f2.maintenance_level desc limit 1), 4)::int as level
+      from ${sites} s join ${districts} d on d.id = s.district_id left join ${fields} f on f.site_id = s.id
+      where ${inDistrict(sql`s.district_id`)}
+      group by s.id, d.id order by s.name, s.id`),
+    ctx.db.execute<WorkGroup>(sql`
+      select wo.site_id, wo.crew_id, ${machineKind} as kind, count(*)::int as orders,
+        sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours,
+        sum(case when wo.task = 'feed' then ${detail(sql`wo.details->'nGPerM2'`)} * f.area_m2 / 1000 else 0 end)::float8 as kg_n,
+        sum(case when wo.task = 'irrigate' then ${detail(sql`wo.details->'volumeL'`)} / 1000 else 0 end)::float8 as water_m3,
+        sum(case when wo.task = 'paint_lines' then ${detail(sql`wo.details->'paintL'`)} else 0 end)::float8 as paint_l,
+        sum(case when wo.task = 'colourant' then ${detail(sql`wo.details->'colourant'->'rateMlPerM2'`)} * ${detail(sql`wo.details->'colourant'->'areaM2'`)} / 1000 else 0 end)::float8 as colourant_l
+      from ${workOrders} wo join ${fields} f on f.id = wo.field_id left join ${equipment} e on e.id = wo.equipment_id
+      where wo.status = 'done' and wo.planned_date between ${period.from} and ${period.to} and ${inDistrict(sql`wo.district_id`)}
+      group by wo.site_id, wo.crew_id, 3`),
+    ctx.db.execute<{ site_id: number; seed_kg: number }>(sql`
+      select a.site_id, sum(${SEED_KG})::float8 as seed_kg from ${applications} a
+      where a.task = 'overseed' and a.applied_on between ${period.from} and ${period.to} and ${inDistrict(sql`a.district_id`)}
+      group by a.site_id`),
+    ctx.db.execute<{ site_id: number; score: number; checked: number }>(sql`
+      select f.site_id, (sum(l.score * f.area_m2) / nullif(sum(f.area_m2), 0))::float8 as score, count(*)::int as checked
+      from (select distinct on (c.field_id) c.field_id, c.score from ${fieldChecks} c
+            where c.checked_on between ${period.from} and ${period.to}
+            order by c.field_id, c.checked_on desc, c.id desc) l
+      join ${fields} f on f.id = l.field_id join ${sites} s on s.id = f.site_id
+      where ${inDistrict(sql`s.district_id`)}
+      group by f.site_id`),
+  ]);
+
+  const workOf = new Map<number, WorkGroup[]>();
+  for (const g of work.rows) workOf.set(g.site_id, [...(workOf.get(g.site_id) ?? []), g]);
+  const seedOf = new Map(seed.rows.map((r) => [r.site_id, r.seed_kg]));
+  const scoreOf = new Map(scores.rows.map((r) => [r.site_id, r]));
+
+  const rows: CompareSiteRow[] = facts.rows.map((s) => {
+    const groups = workOf.get(s.site_id) ?? [];
+    const sum = (k: 'orders' | 'hours' | 'kg_n' | 'water_m3' | 'paint_l' | 'colourant_l'): number => groups.reduce((t, g) => t + g[k], 0);
+    const machineHours: Partial<Record<EquipmentKind, number>> = {};
+    for (const g of groups) if (g.kind) machineHours[g.kind] = (machineHours[g.kind] ?? 0) + g.hours;
+    const quantities = { fertiliserKgN: sum('kg_n'), waterM3: sum('water_m3'), paintL: sum('paint_l'), seedKg: seedOf.get(s.site_id) ?? 0, colourantL: sum('colourant_l') };
+    const cost = costOfWork({ labour: groups.map((g) => ({ crewId: g.crew_id, hours: g.hours })), machineHours, ...quantities }, costs);
+    const acres = s.area_m2 / M2_PER_ACRE;
+    const hours = sum('hours');
+    const score = scoreOf.get(s.site_id);
+    return {
+      siteId: s.site_id,
+      siteName: s.site_name,
+      districtId: s.district_id,
+      districtName: s.district_name,
+      level: s.level as Level,
+      fieldCount: s.field_count,
+      areaM2: s.area_m2,
+      acres,
+      ordersDone: sum('orders'),
+      hours,
+      ...quantities,
+      cost,
+      costPerAcre: perAcre(cost.total, acres),
+      hoursPerAcre: perAcre(hours, acres),
+      inputsPerAcre: perAcre(cost.inputs, acres),
+      surfaceScore: score?.score ?? null,
+      fieldsChecked: score?.checked ?? 0,
+    };
+  });
+  return { period, currency: costs.currency, districtId, rows, totals: totalsOf(rows) };
+}
+
+function totalsOf(rows: CompareSiteRow[]): CompareSitesAnswer['totals'] {
+  const add = (k: 'fieldCount' | 'areaM2' | 'acres' | 'ordersDone' | 'hours' | 'fertiliserKgN' | 'waterM3' | 'paintL' | 'seedKg' | 'colourantL'): number => rows.reduce((t, r) => t + r[k], 0);
+  const cost = Object.fromEntries((['labour', 'fuel', 'fertiliser', 'water', 'paint', 'seed', 'colourant', 'inputs', 'total'] as const).map((k) => [k, rows.reduce((t, r) => t + r.cost[k], 0)])) as unknown as WorkCost;
+  const acres = add('acres');
+  const hours = add('hours');
+  return {
+    fieldCount: add('fieldCount'),
+    areaM2: add('areaM2'),
+    acres,
+    ordersDone: add('ordersDone'),
+    hours,
+    fertiliserKgN: add('fertiliserKgN'),
+    waterM3: add('waterM3'),
+    paintL: add('paintL'),
+    seedKg: add('seedKg'),
+    colourantL: add('colourantL'),
+    cost,
+    costPerAcre: perAcre(cost.total, acres),
+    hoursPerAcre: perAcre(hours, acres),
+    inputsPerAcre: perAcre(cost.inputs, acres),
+  };
+}
+
+/** The CSV's columns: heading and value (money and hours to the cent, the score to a tenth). */
+export const COMPARE_CSV_COLUMNS: ReadonlyArray<[string, (r: CompareSiteRow) => string | number | null]> = [
+  ['site', (r) => r.siteName],
+  ['district', (r) => r.districtName],
+  ['level', (r) => r.level],
+  ['fields', (r) => r.fieldCount],
+  ['acres', (r) => round(r.acres, 2)],
+  ['orders_done', (r) => r.ordersDone],
+  ['hours', (r) => round(r.hours, 2)],
+  ['hours_per_acre', (r) => round(r.hoursPerAcre, 2)],
+  ['labour', (r) => round(r.cost.labour, 2)],
+  ['fuel', (r) => round(r.cost.fuel, 2)],
+  ['fertiliser', (r) => round(r.cost.fertiliser, 2)],
+  ['water', (r) => round(r.cost.water, 2)],
+  ['paint', (r) => round(r.cost.paint, 2)],
+  ['seed', (r) => round(r.cost.seed, 2)],
+  ['colourant', (r) => round(r.cost.colourant, 2)],
+  ['inputs', (r) => round(r.cost.inputs, 2)],
+  ['total_cost', (r) => round(r.cost.total, 2)],
+  ['cost_per_acre', (r) => round(r.costPerAcre, 2)],
+  ['inputs_per_acre', (r) => round(r.inputsPerAcre, 2)],
+  ['fertiliser_kg_n', (r) => round(r.fertiliserKgN, 2)],
+  ['water_m3', (r) => round(r.waterM3, 2)],
+  ['paint_l', (r) => round(r.paintL, 2)],
+  ['seed_kg', (r) => round(r.seedKg, 2)],
+  ['colourant_l', (r) => round(r.colourantL, 2)],
+  ['surface_score', (r) => round(r.surfaceScore, 1)],
+];
+
+function round(v: number | null, places: number): number | null {
+  if (v === null) return null;
+  const f = 10 ** places;
+  return Math.round(v * f) / f;
+}
