@@ -8,4 +8,5 @@ export * from './engine/index.ts';
 export * from './contracts/index.ts';
 export * from './partner-words.ts';
 export * from './audit-words.ts';
+export * from './work-words.ts';
 export * from './costs.ts';

@@ -61,3 +61,11 @@ describe('planSharpeningJobs', () => {
     expect(planSharpeningJobs({ weekStart: '2026-12-07', machines: [reel], crews: [] })[0]).toMatchObject({ crewId: null, plannedDate: '2026-12-07' });
   });
 });
+
+describe('workTitle', () => {
+  test('should name a yard job by its machine and field work by its task', async () => {
+    const { workLabel, workTitle } = await import('../work-words.ts');
+    expect(workTitle({ task: 'sharpen_blades', fieldId: null, equipmentName: 'R-1 triplex reel' })).toBe('Sharpen blades \u2014 R-1 triplex reel');
+    expect(workLabel({ task: 'mow', fieldId: 4, fieldName: 'Field 2', equipmentName: 'R-1 triplex reel' })).toBe('Mow \u00b7 Field 2');
+  });
+});
