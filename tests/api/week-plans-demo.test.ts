@@ -51,7 +51,7 @@ describe('week plan on the demo city', () => {
   test('should write the mowing dates the engine gives for a field and its weather', async () => {
     const warm = await mowsOf(WARM);
     const byField = new Map<number, string[]>();
-    for (const o of warm) byField.set(o.fieldId, [...(byField.get(o.fieldId) ?? []), o.plannedDate].sort());
+    for (const o of warm) if (o.fieldId !== null) byField.set(o.fieldId, [...(byField.get(o.fieldId) ?? []), o.plannedDate].sort());
     const [fieldId, dates] = [...byField.entries()].sort((a, b) => b[1].length - a[1].length || a[0] - b[0])[0]!;
     const [f] = await database.db.select({ field: fields, lat: sites.lat, lng: sites.lng }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(fields.id, fieldId));
     // The nearest station and its unbroken run of days up to a week past Sunday, as the service reads it.

@@ -78,6 +78,8 @@ export const MACHINE_OF_TASK: Record<WorkTask, EquipmentKind | null> = {
   weed_control: 'sprayer',
   colourant: 'sprayer',
   irrigate: null,
+  // Sharpening is at the yard's grinder: the mower itself does not run.
+  sharpen_blades: null,
   field_check: null,
   aerate: null,
   topdress: null,

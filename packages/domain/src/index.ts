@@ -8,6 +8,7 @@ export * from './engine/index.ts';
 export * from './contracts/index.ts';
 export * from './partner-words.ts';
 export * from './audit-words.ts';
+export * from './work-words.ts';
 export * from './costs.ts';
 export * from './budget.ts';
 export * from './what-if.ts';

@@ -187,7 +187,7 @@ export const EQUIPMENT_KIND_LABELS: Record<EquipmentKind, string> = {
 };
 export const MOWER_KINDS: readonly EquipmentKind[] = ['reel_mower', 'rotary_mower', 'flail_mower'];
 
-export const WORK_TASKS = ['mow', 'paint_lines', 'feed', 'irrigate', 'field_check', 'aerate', 'overseed', 'topdress', 'weed_control', 'colourant'] as const;
+export const WORK_TASKS = ['mow', 'paint_lines', 'feed', 'irrigate', 'field_check', 'aerate', 'overseed', 'topdress', 'weed_control', 'colourant', 'sharpen_blades'] as const;
 export type WorkTask = (typeof WORK_TASKS)[number];
 export const WORK_TASK_LABELS: Record<WorkTask, string> = {
   mow: 'Mow',
@@ -200,6 +200,7 @@ export const WORK_TASK_LABELS: Record<WorkTask, string> = {
   topdress: 'Topdress',
   weed_control: 'Weed control',
   colourant: 'Colourant',
+  sharpen_blades: 'Sharpen blades',
 };
 export const WORK_STATUSES = ['planned', 'assigned', 'started', 'done', 'skipped'] as const;
 export type WorkStatus = (typeof WORK_STATUSES)[number];

@@ -61,7 +61,7 @@ export function workMovedMail(to: string, name: string, crewName: string, notice
     .sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : 0))
     .map((o) => {
       const moved = o.fromDate && o.fromDate !== o.plannedDate ? ` (was ${when(o.fromDate)})` : '';
-      return `- ${when(o.plannedDate)}${moved}: ${WORK_TASK_LABELS[o.task]}, ${o.fieldName} at ${o.siteName}, ${o.plannedHours.toFixed(1)} h planned`;
+      return `- ${when(o.plannedDate)}${moved}: ${WORK_TASK_LABELS[o.task]}, ${o.fieldName ? `${o.fieldName} at ${o.siteName}` : `at ${o.siteName}`}, ${o.plannedHours.toFixed(1)} h planned`;
     });
   const intro =
     notice.kind === 'assigned'

@@ -69,7 +69,8 @@ const strip = ({ siteId: _s, ...r }: Awaited<ReturnType<typeof selectApplication
  */
 export async function recordApplication(ctx: Ctx, orderId: number, input: ApplicationInput): Promise<ApplicationRow<Date>> {
   const order = await orderFor(ctx, orderId, 'log');
-  if (!(APPLICATION_TASKS as readonly string[]).includes(order.task)) {
+  const { fieldId, siteId } = order;
+  if (!(APPLICATION_TASKS as readonly string[]).includes(order.task) || fieldId === null || siteId === null) {
     throw appError('application/not_applicable', 'Nothing is applied on this kind of job: record applications on feed, overseeding, topdressing or weed control', { task: order.task });
   }
   const task = order.task as ApplicationTask;
@@ -77,12 +78,12 @@ export async function recordApplication(ctx: Ctx, orderId: number, input: Applic
   if (task === 'weed_control' && !input.licenceNumber) issues.push({ path: 'body.licenceNumber', message: "a pesticide application needs the applicator's licence number" });
   if (input.appliedOn > ctx.clock.today()) issues.push({ path: 'body.appliedOn', message: 'an application cannot be recorded for a day still to come' });
   if (issues.length) throw errors.invalid(issues[0]!.message, issues);
-  const [site] = await ctx.db.select({ lat: sites.lat, lng: sites.lng }).from(sites).where(eq(sites.id, order.siteId));
+  const [site] = await ctx.db.select({ lat: sites.lat, lng: sites.lng }).from(sites).where(eq(sites.id, siteId));
   const weather = site ? await weatherOn(ctx.db, site, input.appliedOn) : null;
   const id = await (ctx.db as Db).transaction(async (tx) => {
     const [row] = await tx
       .insert(applications)
-      .values({ fieldId: order.fieldId, siteId: order.siteId, districtId: order.districtId, workOrderId: order.id, task, ...input, licenceNumber: input.licenceNumber || null, weather, createdBy: ctx.actor.id })
+      .values({ fieldId, siteId, districtId: order.districtId, workOrderId: order.id, task, ...input, licenceNumber: input.licenceNumber || null, weather, createdBy: ctx.actor.id })
       .returning();
     await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'application', entityId: row!.id, districtId: order.districtId, before: null, after: row! });
     return row!.id;

@@ -145,7 +145,10 @@ function entityName(r: StoredEntry, names: AuditNames): string | null {
   if (r.entity === 'work_order') {
     const task = typeof row.task === 'string' && row.task in WORK_TASK_LABELS ? WORK_TASK_LABELS[row.task as WorkTask] : 'Work';
     const date = typeof row.plannedDate === 'string' ? `, ${row.plannedDate}` : '';
-    return field ? `${task} on ${field}${date}` : `${task}${date}`;
+    if (field) return `${task} on ${field}${date}`;
+    // A yard job (no field): its machine at the yard.
+    const machine = row.fieldId === null && typeof row.equipmentId === 'number' ? (names.equipment?.get(row.equipmentId) ?? `machine #${row.equipmentId}`) : null;
+    return machine ? `${task} — ${machine} at the yard${date}` : `${task}${date}`;
   }
   if (field) return field;
   if (ownName) return ownName;

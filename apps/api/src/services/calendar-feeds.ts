@@ -23,7 +23,7 @@ import {
   type CreateCalendarFeedInput,
 } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
-import { calendarFeeds, crews, fieldClosures, fieldEvents, fields, sites, users, userSites, workOrders } from '../db/schema/index.ts';
+import { calendarFeeds, crews, equipment, fieldClosures, fieldEvents, fields, sites, users, userSites, workOrders } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import type { Clock } from './clock.ts';
 import { authorize, can, type Ctx } from './context.ts';
@@ -173,8 +173,9 @@ export async function calendarFeedIcs(db: Queryable, clock: Clock, token: string
       .where(and(eq(workOrders.crewId, feed.crewId!), gte(workOrders.plannedDate, from), lte(workOrders.plannedDate, to)));
     scope = await fieldsWhere(db, inArray(fields.id, worked));
   }
-  if (!scope.ids.length) return calendar.toString();
-  const where = (fieldId: number) => scope.names.get(fieldId) ?? 'a field';
+  // A crew's feed also carries its yard jobs, which have no field.
+  if (!scope.ids.length && feed.kind === 'partner') return calendar.toString();
+  const where = (fieldId: number | null) => (fieldId === null ? 'the yard' : (scope.names.get(fieldId) ?? 'a field'));
 
   const bookings = await db
     .select({ id: fieldEvents.id, fieldId: fieldEvents.fieldId, kind: fieldEvents.kind, title: fieldEvents.title, startsOn: fieldEvents.startsOn, startTime: fieldEvents.startTime })
@@ -195,8 +196,9 @@ export async function calendarFeedIcs(db: Queryable, clock: Clock, token: string
   }
 
   const work = await db
-    .select({ id: workOrders.id, fieldId: workOrders.fieldId, task: workOrders.task, plannedDate: workOrders.plannedDate, status: workOrders.status })
+    .select({ id: workOrders.id, fieldId: workOrders.fieldId, task: workOrders.task, plannedDate: workOrders.plannedDate, status: workOrders.status, equipmentName: equipment.name })
     .from(workOrders)
+    .leftJoin(equipment, eq(equipment.id, workOrders.equipmentId))
     .where(
       and(
         feed.kind === 'partner' ? and(inArray(workOrders.fieldId, scope.ids), inArray(workOrders.task, ['mow', 'paint_lines'])) : eq(workOrders.crewId, feed.crewId!),
@@ -212,7 +214,7 @@ export async function calendarFeedIcs(db: Queryable, clock: Clock, token: string
     const label = w.task === 'paint_lines' ? 'Line painting' : w.task === 'mow' ? 'Mowing' : WORK_TASK_LABELS[w.task];
     calendar.createEvent({
       id: `work-${w.id}@swardwise`,
-      summary: `${label}: ${where(w.fieldId)}`,
+      summary: w.fieldId === null && w.equipmentName ? `${label} — ${w.equipmentName} (the yard)` : `${label}: ${where(w.fieldId)}`,
       description: w.status === 'done' ? `${label} done.` : `${label} planned by the parks department; the day can move with the weather.`,
       location: where(w.fieldId),
       stamp,

@@ -1,8 +1,8 @@
 /** A district's mowers, line markers, spreaders and sprayers, with hour meters and blade care. */
-import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
-import { errors, type CreateEquipmentInput, type EquipmentRow, type UpdateEquipmentInput } from '@swardwise/domain';
+import { and, asc, eq, inArray, sql, type SQL } from 'drizzle-orm';
+import { bladeCare, errors, type CreateEquipmentInput, type EquipmentRow, type UpdateEquipmentInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
-import { crews, districts, equipment } from '../db/schema/index.ts';
+import { crews, districts, equipment, workOrders } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { auditRow, deleteAtVersion, updateAtVersion, writable } from './versioned.ts';
 
@@ -35,12 +35,23 @@ function select(db: Ctx['db']) {
 type Row = Awaited<ReturnType<typeof getRow>> & object;
 
 /**
- * Blades are due when the hours run since the last sharpening reach the interval (a dull
- * reel or blade tears leaf tips, which brown and invite disease).
+ * Blade care by `bladeCare` (the engine's one rule): due when the hours run since the last
+ * sharpening reach the interval, due soon when this week's open mowings on the machine would.
  */
-function withBladeCare<T extends { hourMeterH: number; sharpenIntervalH: number | null; lastSharpenedAtH: number | null }>(row: T) {
-  const since = row.sharpenIntervalH == null ? null : row.hourMeterH - (row.lastSharpenedAtH ?? 0);
-  return { ...row, hoursSinceSharpening: since, sharpeningDue: since != null && row.sharpenIntervalH != null && since >= row.sharpenIntervalH };
+function withBladeCare<T extends { hourMeterH: number; sharpenIntervalH: number | null; lastSharpenedAtH: number | null }>(row: T, weekMowingH = 0) {
+  const care = bladeCare(row, weekMowingH);
+  return { ...row, hoursSinceSharpening: care.hoursSince, sharpeningDue: care.state === 'due', bladeState: care.state, weekMowingH: Math.round(weekMowingH * 100) / 100 };
+}
+
+/** Hours of open mowing (planned, assigned, started) on each machine in the department's current week. */
+async function weekMowingHours(ctx: Ctx, ids: number[]): Promise<Map<number, number>> {
+  if (ids.length === 0) return new Map();
+  const rows = await ctx.db
+    .select({ id: workOrders.equipmentId, hours: sql<number>`sum(${workOrders.plannedHours})`.mapWith(Number) })
+    .from(workOrders)
+    .where(and(inArray(workOrders.equipmentId, ids), eq(workOrders.task, 'mow'), eq(workOrders.weekStart, ctx.clock.weekStart()), inArray(workOrders.status, ['planned', 'assigned', 'started'])))
+    .groupBy(workOrders.equipmentId);
+  return new Map(rows.flatMap((r) => (r.id === null ? [] : [[r.id, r.hours] as const])));
 }
 
 export async function getRow(db: Ctx['db'], id: number) {
@@ -57,7 +68,9 @@ export async function listEquipment(ctx: Ctx, filter: { districtId?: number | un
   const rows = await select(ctx.db)
     .where(and(...conditions))
     .orderBy(asc(equipment.kind), asc(equipment.name));
-  return rows.filter((r) => can(ctx, 'read', 'Equipment', r)).map(withBladeCare);
+  const mine = rows.filter((r) => can(ctx, 'read', 'Equipment', r));
+  const week = await weekMowingHours(ctx, mine.map((r) => r.id));
+  return mine.map((r) => withBladeCare(r, week.get(r.id) ?? 0));
 }
 
 /** A crew, when given, must be of the same district. */

@@ -157,10 +157,11 @@ async function checkAnswer(ctx: Ctx, stored: Awaited<ReturnType<typeof storeChec
 /** A crew's field check logged on its work order; see the module comment. */
 export async function logFieldCheck(ctx: Ctx, orderId: number, input: FieldCheckBody): Promise<FieldCheckAnswer<Date>> {
   const order = await orderFor(ctx, orderId, 'log');
-  if (order.task !== 'field_check') throw appError('field_check/not_a_check', 'This work order is not a field check; report it with Done instead', { task: order.task });
+  if (order.task !== 'field_check' || order.fieldId === null) throw appError('field_check/not_a_check', 'This work order is not a field check; report it with Done instead', { task: order.task });
+  const fieldId = order.fieldId;
   if (order.status === 'done') throw appError('work_report/already_done', 'This field check is already logged; reopen the job to log it again', { status: order.status });
   authorize(ctx, 'create', 'FieldCheck', { districtId: order.districtId });
-  const stored = await storeCheck(ctx, order.fieldId, order.districtId, input, orderId);
+  const stored = await storeCheck(ctx, fieldId, order.districtId, input, orderId);
   const { result } = stored;
   const summary = `Field check: score ${Math.round(result.score)}${result.flags.length ? ` · ${result.flags.join(', ').replaceAll('_', ' ')}` : ''}${input.notes ? ` · ${input.notes}` : ''}`;
   await reportWork(ctx, orderId, { status: 'done', actualHours: input.actualHours ?? order.plannedHours, note: summary.slice(0, 2000) });

@@ -5,7 +5,7 @@
  */
 import { and, asc, eq, gte, lte } from 'drizzle-orm';
 import type { CrewNote, DateRangeQuery, RecordTally, Records } from '@swardwise/domain';
-import { crews, fields, sites, workOrders } from '../db/schema/index.ts';
+import { crews, districts, fields, sites, workOrders } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { readScope, workOrderColumns } from './work-orders.ts';
 import { photosOf, updatesOf } from './work-reports.ts';
@@ -31,8 +31,10 @@ export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.
     await ctx.db
       .select({ id, fieldId, fieldName, siteId, siteName, districtId, crewId, crewName, task, weekStart, plannedDate, plannedHours, actualHours, status, doneAt, details })
       .from(workOrders)
-      .innerJoin(fields, eq(fields.id, workOrders.fieldId))
-      .innerJoin(sites, eq(sites.id, workOrders.siteId))
+      // Left joins: a yard job (no field) counts for its crew and week, not for any field.
+      .leftJoin(fields, eq(fields.id, workOrders.fieldId))
+      .leftJoin(sites, eq(sites.id, workOrders.siteId))
+      .innerJoin(districts, eq(districts.id, workOrders.districtId))
       .leftJoin(crews, eq(crews.id, workOrders.crewId))
       .where(and(...conditions))
       .orderBy(asc(workOrders.plannedDate), asc(workOrders.id))
@@ -44,7 +46,7 @@ export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.
   const totals = empty();
   const late: Array<{ id: number; fieldName: string; siteName: string; dueBy: string; doneOn: string; daysLate: number }> = [];
   for (const r of rows) {
-    const f = byField.get(r.fieldId) ?? { ...empty(), fieldId: r.fieldId, fieldName: r.fieldName, siteName: r.siteName };
+    const f = r.fieldId === null ? null : (byField.get(r.fieldId) ?? { ...empty(), fieldId: r.fieldId, fieldName: r.fieldName, siteName: r.siteName });
     const crewKey = String(r.crewId ?? 'none');
     const c = byCrew.get(crewKey) ?? { ...empty(), crewId: r.crewId, crewName: r.crewName ?? 'No crew' };
     const w = byWeek.get(r.weekStart) ?? { ...empty(), weekStart: r.weekStart };
@@ -53,7 +55,7 @@ export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.
     const dueBy = typeof r.details.dueBy === 'string' ? r.details.dueBy : r.plannedDate;
     const isLate = r.status === 'done' && doneOn !== null && doneOn > dueBy;
     if (r.task === 'mow' && isLate && doneOn) late.push({ id: r.id, fieldName: r.fieldName, siteName: r.siteName, dueBy, doneOn, daysLate: Math.round((Date.parse(doneOn) - Date.parse(dueBy)) / 86_400_000) });
-    for (const t of [f, c, w, totals]) {
+    for (const t of f ? [f, c, w, totals] : [c, w, totals]) {
       t.plannedHours += r.plannedHours;
       if (r.status === 'done') {
         t.ordersDone++;
@@ -68,7 +70,7 @@ export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.
         if (r.status !== 'done' && r.plannedDate < today) t.mowingsMissed++;
       }
     }
-    byField.set(r.fieldId, f);
+    if (f && r.fieldId !== null) byField.set(r.fieldId, f);
     byCrew.set(crewKey, c);
     byWeek.set(r.weekStart, w);
   }
@@ -90,7 +92,7 @@ export async function getRecords(ctx: Ctx, q: DateRangeQuery, today = ctx.clock.
 const CREW_NOTES_MAX = 200;
 
 /** The jobs of the range a crew wrote a note on or took photos of, newest report first. */
-async function crewNotes(ctx: Ctx, rows: ReadonlyArray<{ id: number; fieldId: number; fieldName: string; siteName: string; task: CrewNote['task']; crewName: string | null; status: CrewNote['status'] }>): Promise<CrewNote[]> {
+async function crewNotes(ctx: Ctx, rows: ReadonlyArray<{ id: number; fieldId: number | null; fieldName: string; siteName: string; task: CrewNote['task']; crewName: string | null; status: CrewNote['status'] }>): Promise<CrewNote[]> {
   const ids = rows.map((r) => r.id);
   const [updates, photos] = [await updatesOf(ctx.db, ids), await photosOf(ctx.db, ids)];
   const out = new Map<number, CrewNote & { last: number }>();

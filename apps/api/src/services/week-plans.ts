@@ -11,7 +11,8 @@ import { writeAudit } from './audit.ts';
 import { authorize, type Ctx } from './context.ts';
 import { loadParameters } from './standards.ts';
 import { readScope, type WorkOrderRow, type WriteDeps } from './work-orders.ts';
-import { boardRows, districtCrews, districtRow, weekRows } from './week-plans/load.ts';
+import { boardRows, districtCrews, districtRow, weekRows, yardWeekRows } from './week-plans/load.ts';
+import { reconcileYard } from './week-plans/yard.ts';
 import { mailNewWork } from './week-plans/mail.ts';
 import { planDistrictWeek } from './week-plans/plan.ts';
 import { writeGeneratedWeek } from './week-plans/write.ts';
@@ -31,8 +32,9 @@ export async function getWeekBoard(ctx: Ctx, q: WeekQuery): Promise<WeekBoard<Da
       .where(and(eq(workOrders.districtId, q.districtId), gte(workOrders.plannedDate, dates[0]!), lte(workOrders.plannedDate, dates[6]!), readScope(ctx)))
   ).map((r) => r.id);
   const rows: WorkOrderRow[] = orders.length ? await boardRows(ctx.db, orders) : [];
-  const sitesMap = new Map(rows.map((r) => [r.siteId, { lat: r.siteLat, lng: r.siteLng }]));
-  const siteNames = new Map(rows.map((r) => [r.siteId, r.siteName]));
+  const onSites = rows.filter((r): r is WorkOrderRow & { siteId: number } => r.siteId !== null);
+  const sitesMap = new Map(onSites.map((r) => [r.siteId, { lat: r.siteLat, lng: r.siteLng }]));
+  const siteNames = new Map(onSites.map((r) => [r.siteId, r.siteName]));
   const yard = { lat: district.yardLat, lng: district.yardLng };
   const loads = crewDayLoads(rows, crewRows, sitesMap, yard, params.travel, q.weekStart).map((l) => ({
     ...l,
@@ -82,8 +84,10 @@ export async function generateWeek(ctx: Ctx, input: GenerateWeekInput): Promise<
   authorize(ctx, 'create', 'WorkOrder', { districtId: input.districtId });
   const q = { districtId: input.districtId, weekStart: input.weekStart };
   const existing = await weekRows(ctx.db, q.districtId, q.weekStart);
-  const plan = await planDistrictWeek(ctx.db, q, existing, ctx.clock.today());
+  const yardExisting = await yardWeekRows(ctx.db, q.districtId, q.weekStart);
+  const plan = await planDistrictWeek(ctx.db, q, existing, ctx.clock.today(), yardExisting);
   const rec = reconcileWeek(existing, plan.orders);
+  const yard = reconcileYard(yardExisting, plan.sharpenJobs);
 
   const fieldInfo = new Map(
     (await ctx.db.select({ id: fields.id, name: fields.name, siteName: sites.name }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(sites.districtId, q.districtId))).map((f) => [f.id, f]),
@@ -100,16 +104,34 @@ export async function generateWeek(ctx: Ctx, input: GenerateWeekInput): Promise<
     crewName: o.crewId === null ? null : (crewName.get(o.crewId) ?? null),
     reason: o.reason,
   });
+  // A yard job reads as its machine at the district's yard.
+  const yardItem = (o: { equipmentId: number | null; plannedDate: string; plannedHours: number; crewId: number | null; reason: string }): DiffItem => ({
+    fieldId: null,
+    fieldName: (o.equipmentId !== null && plan.machineNames.get(o.equipmentId)) || 'a machine',
+    siteName: plan.yardName,
+    task: 'sharpen_blades',
+    plannedDate: o.plannedDate,
+    plannedHours: o.plannedHours,
+    crewId: o.crewId,
+    crewName: o.crewId === null ? null : (crewName.get(o.crewId) ?? null),
+    reason: o.reason,
+  });
   const diff = {
-    added: rec.insert.map(item),
-    removed: rec.remove.map(item),
-    changed: rec.update.map((u) => ({ before: item(u.before), after: item(u.next), what: u.what })),
-    kept: rec.kept.map(item),
-    summary: { added: rec.insert.length, removed: rec.remove.length, changed: rec.update.length, kept: rec.kept.length, unchanged: rec.unchanged.length },
+    added: [...yard.insert.map(yardItem), ...rec.insert.map(item)],
+    removed: [...yard.remove.map(yardItem), ...rec.remove.map(item)],
+    changed: [...yard.update.map((u) => ({ before: yardItem(u.before), after: yardItem(u.next), what: u.what })), ...rec.update.map((u) => ({ before: item(u.before), after: item(u.next), what: u.what }))],
+    kept: [...yard.kept.map(yardItem), ...rec.kept.map(item)],
+    summary: {
+      added: rec.insert.length + yard.insert.length,
+      removed: rec.remove.length + yard.remove.length,
+      changed: rec.update.length + yard.update.length,
+      kept: rec.kept.length + yard.kept.length,
+      unchanged: rec.unchanged.length + yard.unchanged.length,
+    },
   };
 
   if (!input.dryRun) {
-    await writeGeneratedWeek(ctx, q, rec, plan.orders, diff.summary, plan.warnings);
+    await writeGeneratedWeek(ctx, q, rec, plan.orders, diff.summary, plan.warnings, yard);
   }
   const board = await getWeekBoard(ctx, q);
   return { dryRun: input.dryRun, diff, warnings: plan.warnings, board };

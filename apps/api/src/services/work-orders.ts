@@ -6,6 +6,7 @@
 import { and, asc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import {
   type CrewMailReport,
+  type FieldStatus,
   appError,
   errors,
   mondayOf,
@@ -15,7 +16,7 @@ import {
   type WorkOrderWriteAnswer,
 } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
-import { crews, equipment, fields, sites, users, workOrders, workPhotos } from '../db/schema/index.ts';
+import { crews, districts, equipment, fields, sites, users, workOrders, workPhotos } from '../db/schema/index.ts';
 import type { Mailer } from '../mail/mailer.ts';
 import { workMovedMail } from '../mail/messages.ts';
 import { writeAudit } from './audit.ts';
@@ -32,14 +33,15 @@ export interface WorkOrderFilter {
 export const workOrderColumns = {
   id: workOrders.id,
   fieldId: workOrders.fieldId,
-  fieldName: fields.name,
+  // A yard job (no field) reads as the district's yard: no field name, the yard's name and place.
+  fieldName: sql<string>`coalesce(${fields.name}, '')`,
   siteId: workOrders.siteId,
-  siteName: sites.name,
-  siteAddress: sites.address,
-  fieldStatus: fields.status,
-  fieldStatusNote: fields.statusNote,
-  siteLat: sites.lat,
-  siteLng: sites.lng,
+  siteName: sql<string>`coalesce(${sites.name}, ${districts.yardName})`,
+  siteAddress: sql<string>`coalesce(${sites.address}, '')`,
+  fieldStatus: sql<FieldStatus>`coalesce(${fields.status}, 'open')`,
+  fieldStatusNote: sql<string>`coalesce(${fields.statusNote}, '')`,
+  siteLat: sql<number>`coalesce(${sites.lat}, ${districts.yardLat})`,
+  siteLng: sql<number>`coalesce(${sites.lng}, ${districts.yardLng})`,
   districtId: workOrders.districtId,
   task: workOrders.task,
   weekStart: workOrders.weekStart,
@@ -59,20 +61,25 @@ export const workOrderColumns = {
   doneAt: workOrders.doneAt,
   version: workOrders.version,
   photoCount: sql<number>`(select count(*)::int from ${workPhotos} where ${workPhotos.workOrderId} = ${workOrders.id})`,
-  // The centre of the outline's bounding box: inside any field shape a crew drives to.
-  fieldLat: sql<number>`(select (min((p->>1)::float8) + max((p->>1)::float8)) / 2 from jsonb_array_elements(${fields.geometry}->'coordinates'->0) p)`,
-  fieldLng: sql<number>`(select (min((p->>0)::float8) + max((p->>0)::float8)) / 2 from jsonb_array_elements(${fields.geometry}->'coordinates'->0) p)`,
+  // The centre of the outline's bounding box: inside any field shape a crew drives to; the yard for a yard job.
+  fieldLat: sql<number>`coalesce((select (min((p->>1)::float8) + max((p->>1)::float8)) / 2 from jsonb_array_elements(${fields.geometry}->'coordinates'->0) p), ${districts.yardLat})`,
+  fieldLng: sql<number>`coalesce((select (min((p->>0)::float8) + max((p->>0)::float8)) / 2 from jsonb_array_elements(${fields.geometry}->'coordinates'->0) p), ${districts.yardLng})`,
 };
 
 export type WorkOrderRow = Awaited<ReturnType<typeof selectRows>>[number];
 
-/** Work orders joined with their field, site, crew and equipment, as `workOrderColumns` reads them; the caller filters and orders. */
+/**
+ * Work orders joined with their field, site, district, crew and equipment, as
+ * `workOrderColumns` reads them; the caller filters and orders. Field and site are left
+ * joins: a yard job has neither.
+ */
 export function selectWorkOrders(db: Queryable) {
   return db
     .select(workOrderColumns)
     .from(workOrders)
-    .innerJoin(fields, eq(fields.id, workOrders.fieldId))
-    .innerJoin(sites, eq(sites.id, workOrders.siteId))
+    .leftJoin(fields, eq(fields.id, workOrders.fieldId))
+    .leftJoin(sites, eq(sites.id, workOrders.siteId))
+    .innerJoin(districts, eq(districts.id, workOrders.districtId))
     .leftJoin(crews, eq(crews.id, workOrders.crewId))
     .leftJoin(equipment, eq(equipment.id, workOrders.equipmentId));
 }
@@ -80,7 +87,7 @@ export function selectWorkOrders(db: Queryable) {
 async function selectRows(db: Queryable, where: SQL | undefined) {
   return selectWorkOrders(db)
     .where(where)
-    .orderBy(asc(workOrders.plannedDate), asc(sites.name), asc(fields.name), asc(workOrders.id));
+    .orderBy(asc(workOrders.plannedDate), sql`${sites.name} nulls first`, sql`${fields.name} nulls first`, asc(workOrders.id));
 }
 
 /** SQL conditions that keep a list inside what the actor may read. */
@@ -179,6 +186,8 @@ export async function createWorkOrder(ctx: Ctx, input: CreateWorkOrderInput, dep
   const f = await fieldScopeRow(ctx.db, input.fieldId);
   if (!f) throw errors.noSuch('field', 'body.fieldId');
   authorize(ctx, 'create', 'WorkOrder', { districtId: f.districtId, siteId: f.siteId });
+  // Sharpening is yard work the week plan puts on the board from the hour meters, never work on a field.
+  if (input.task === 'sharpen_blades') throw errors.invalid('Blade sharpening is yard work: the week plan adds it when a mower is due', [{ path: 'body.task', message: 'blade sharpening is not work on a field' }]);
   const id = await (ctx.db as Db).transaction(async (tx) => {
     await checkCrewAndEquipment(tx, f.districtId, input.crewId, input.equipmentId);
     const [row] = await tx
@@ -230,6 +239,9 @@ export async function updateWorkOrder(ctx: Ctx, id: number, input: UpdateWorkOrd
     if ((before.status === 'done' || before.status === 'skipped') && (changes.plannedDate !== undefined || changes.crewId !== undefined)) {
       throw appError('work_order/logged', `This work order is already ${before.status}; it can no longer be moved or reassigned`);
     }
+    if (before.fieldId === null && changes.equipmentId !== undefined && changes.equipmentId !== before.equipmentId) {
+      throw errors.invalid('A yard job is about its machine: it cannot be moved to another one', [{ path: 'body.equipmentId', message: 'a yard job keeps its machine' }]);
+    }
     await checkCrewAndEquipment(tx, before.districtId, changes.crewId, changes.equipmentId);
     const crewId = changes.crewId === undefined ? before.crewId : changes.crewId;
     let status = before.status;
@@ -277,7 +289,7 @@ export async function deleteWorkOrder(ctx: Ctx, id: number, version: number, dep
     return row;
   });
   if (before.crewId && before.status === 'assigned') {
-    const [f] = await ctx.db.select({ fieldName: fields.name, siteName: sites.name }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(fields.id, before.fieldId));
+    const [f] = before.fieldId === null ? [] : await ctx.db.select({ fieldName: fields.name, siteName: sites.name }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(fields.id, before.fieldId));
     await notifyCrews(ctx.db, deps.mailer, [{ crewId: before.crewId, kind: 'removed', orders: [{ task: before.task, fieldName: f?.fieldName ?? '', siteName: f?.siteName ?? '', plannedDate: before.plannedDate, plannedHours: before.plannedHours }] }], ctx.actorName, deps.publicUrl);
   }
 }

@@ -2,12 +2,13 @@
  * A crew's reports from the field: started, done or skipped. A report is stored once per
  * `clientRef` (made by the phone before its first try), so a submission retried after a lost
  * answer is answered again, not counted twice. A done mowing moves the field's last mowing
- * forward and adds the hours to the mower's hour meter.
+ * forward and adds the hours to the mower's hour meter; a done sharpening (a yard job) records
+ * the machine's hour meter reading as its last sharpening.
  */
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import { AppError, appError, errors, FIELD_STATUS_LABELS, type ReopenAnswer, type ReopenInput, type ReportAnswer as ReportAnswerOf, type WorkOrderAnswer, type WorkPhoto, type WorkReportInput, type WorkUpdateRow } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
-import { crews, equipment, fields, sites, users, workOrders, workPhotos, workUpdates } from '../db/schema/index.ts';
+import { crews, districts, equipment, fields, sites, users, workOrders, workPhotos, workUpdates } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { workOrderColumns } from './work-orders.ts';
@@ -22,8 +23,10 @@ async function orderRow(db: Queryable, id: number) {
   const [row] = await db
     .select(orderColumns)
     .from(workOrders)
-    .innerJoin(fields, eq(fields.id, workOrders.fieldId))
-    .innerJoin(sites, eq(sites.id, workOrders.siteId))
+    // Left joins: a yard job has no field and no site; it reads as the district's yard.
+    .leftJoin(fields, eq(fields.id, workOrders.fieldId))
+    .leftJoin(sites, eq(sites.id, workOrders.siteId))
+    .innerJoin(districts, eq(districts.id, workOrders.districtId))
     .leftJoin(crews, eq(crews.id, workOrders.crewId))
     .leftJoin(equipment, eq(equipment.id, workOrders.equipmentId))
     .where(eq(workOrders.id, id));
@@ -177,11 +180,14 @@ export async function reportWork(ctx: Ctx, id: number, input: WorkReportInput): 
       await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'work_update', entityId: update!.id, districtId: district, before: null, after: { workOrderId: id, ...update!, clientRef: input.clientRef ?? null } });
       await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'work_order', entityId: id, districtId: district, before, after });
 
+      let order = after;
       if (input.status === 'done') {
-        if (after.task === 'mow') await moveLastMowing(ctx, tx, after.fieldId, reportedOn, district);
-        if (after.equipmentId != null && input.actualHours) await addMeterHours(ctx, tx, after.equipmentId, input.actualHours, district);
+        if (after.task === 'mow' && after.fieldId !== null) await moveLastMowing(ctx, tx, after.fieldId, reportedOn, district);
+        if (after.task === 'sharpen_blades') order = await recordSharpening(ctx, tx, after, input.hourMeterH);
+        // Sharpening hours are the crew's time at the bench, not the engine's.
+        else if (after.equipmentId != null && input.actualHours) await addMeterHours(ctx, tx, after.equipmentId, input.actualHours, district);
       }
-      return { order: after, update: update!, duplicate: false };
+      return { order, update: update!, duplicate: false };
     });
   } catch (err) {
     // The same submission arriving twice at once: the other one was stored first. Under
@@ -214,6 +220,43 @@ async function addMeterHours(ctx: Ctx, tx: Queryable, equipmentId: number, hours
     .where(eq(equipment.id, equipmentId))
     .returning({ id: equipment.id, name: equipment.name, hourMeterH: equipment.hourMeterH, version: equipment.version });
   await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'equipment', entityId: equipmentId, districtId, before, after: after ?? null });
+}
+
+/**
+ * A sharpening done: the machine's hour meter takes the reading (never backwards) and its last
+ * sharpening is set to it, so its blades count from zero again; the reading and the last
+ * sharpening before are kept on the order, so a reopening can put them back.
+ */
+async function recordSharpening(ctx: Ctx, tx: Queryable, order: OrderRow, reading: number | undefined): Promise<OrderRow> {
+  if (order.equipmentId === null) return order;
+  const cols = { id: equipment.id, name: equipment.name, hourMeterH: equipment.hourMeterH, lastSharpenedAtH: equipment.lastSharpenedAtH, version: equipment.version };
+  const [before] = await tx.select(cols).from(equipment).where(eq(equipment.id, order.equipmentId));
+  if (!before) return order;
+  const at = reading ?? before.hourMeterH;
+  if (at < before.hourMeterH) {
+    throw errors.invalid(`The hour meter of ${before.name} already reads ${before.hourMeterH} h; enter the reading now (${before.hourMeterH} h or more)`, [{ path: 'body.hourMeterH', message: `the meter already reads ${before.hourMeterH} h` }]);
+  }
+  const [after] = await tx
+    .update(equipment)
+    .set({ hourMeterH: at, lastSharpenedAtH: at, version: sql`${equipment.version} + 1`, updatedAt: new Date() })
+    .where(eq(equipment.id, before.id))
+    .returning(cols);
+  await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'equipment', entityId: before.id, districtId: order.districtId, before, after: after ?? null });
+  const details = { ...order.details, sharpenedAtH: at, previousSharpenedAtH: before.lastSharpenedAtH };
+  await tx.update(workOrders).set({ details }).where(eq(workOrders.id, order.id));
+  return { ...order, details };
+}
+
+/** Reopening a sharpening puts the machine's last sharpening back to what it was (the meter reading stays: it was read). */
+async function undoSharpening(ctx: Ctx, tx: Queryable, order: OrderRow) {
+  if (order.equipmentId === null || typeof order.details.sharpenedAtH !== 'number') return;
+  const previous = typeof order.details.previousSharpenedAtH === 'number' ? order.details.previousSharpenedAtH : null;
+  const cols = { id: equipment.id, name: equipment.name, lastSharpenedAtH: equipment.lastSharpenedAtH, version: equipment.version };
+  const [before] = await tx.select(cols).from(equipment).where(eq(equipment.id, order.equipmentId));
+  // A later sharpening recorded since stays.
+  if (!before || before.lastSharpenedAtH !== order.details.sharpenedAtH) return;
+  const [after] = await tx.update(equipment).set({ lastSharpenedAtH: previous, version: sql`${equipment.version} + 1`, updatedAt: new Date() }).where(eq(equipment.id, before.id)).returning(cols);
+  await writeAudit(tx, { actorId: ctx.actor.id, action: 'update', entity: 'equipment', entityId: before.id, districtId: order.districtId, before, after: after ?? null });
 }
 
 /** The open state a reopened order returns to: started if the crew had started it, else assigned or planned. */
@@ -262,7 +305,8 @@ export async function reopenWork(ctx: Ctx, id: number, input: ReopenInput): Prom
       { actorId: ctx.actor.id, action: 'create', entity: 'work_update', entityId: update!.id, districtId: after.districtId, before: null, after: { workOrderId: id, ...update!, reopened: true } },
       { actorId: ctx.actor.id, action: 'update', entity: 'work_order', entityId: id, districtId: after.districtId, before, after },
     ]);
-    if (before.status === 'done' && before.equipmentId != null && before.actualHours) {
+    if (before.status === 'done' && before.task === 'sharpen_blades') await undoSharpening(ctx, tx, before);
+    else if (before.status === 'done' && before.equipmentId != null && before.actualHours) {
       await addMeterHours(ctx, tx, before.equipmentId, -before.actualHours, after.districtId);
     }
     return { order: after, update: update! };

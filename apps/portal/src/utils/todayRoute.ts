@@ -6,7 +6,8 @@
 import { addDaysIso, planRoute, type LatLng, type WorkOrderRow } from '@swardwise/domain';
 
 export interface RouteStopJobs {
-  siteId: number;
+  /** Null: the yard, where yard jobs (blade sharpening) are done before the crew leaves. */
+  siteId: number | null;
   siteName: string;
   orders: WorkOrderRow[];
 }
@@ -38,7 +39,10 @@ export function crewDays(orders: readonly WorkOrderRow[], today: string, yard: L
   return [...byDate.keys()].sort().map((date) => {
     const items = byDate.get(date)!;
     const stops = new Map<number, RouteStopJobs>();
+    const yardJobs = items.filter((o) => o.siteId === null);
+    const yardStop: RouteStopJobs[] = yardJobs.length ? [{ siteId: null, siteName: yardJobs[0]!.siteName, orders: yardJobs.sort((a, b) => a.id - b.id) }] : [];
     for (const o of items) {
+      if (o.siteId === null) continue;
       const stop = stops.get(o.siteId) ?? { siteId: o.siteId, siteName: o.siteName, orders: [] };
       stop.orders.push(o);
       stops.set(o.siteId, stop);
@@ -46,17 +50,17 @@ export function crewDays(orders: readonly WorkOrderRow[], today: string, yard: L
     for (const stop of stops.values()) stop.orders.sort((a, b) => a.fieldName.localeCompare(b.fieldName) || a.id - b.id);
     const position = (stop: RouteStopJobs): LatLng | undefined => {
       const o = stop.orders[0]!;
-      return o.siteLat != null && o.siteLng != null ? { lat: o.siteLat, lng: o.siteLng } : sitePositions.get(stop.siteId);
+      return o.siteLat != null && o.siteLng != null ? { lat: o.siteLat, lng: o.siteLng } : stop.siteId === null ? undefined : sitePositions.get(stop.siteId);
     };
     const placed = [...stops.values()].filter((s) => yard && position(s));
     const unplaced = [...stops.values()].filter((s) => !placed.includes(s));
-    const order = yard && placed.length ? planRoute(yard, placed.map((s) => ({ id: s.siteId, ...position(s)! }))).order : [];
+    const order = yard && placed.length ? planRoute(yard, placed.map((s) => ({ id: s.siteId!, ...position(s)! }))).order : [];
     const routed = order.map((id) => stops.get(Number(id))!);
     return {
       date,
       label: dayLabel(date, today),
       plannedHours: items.reduce((sum, o) => sum + o.plannedHours, 0),
-      stops: [...routed, ...unplaced],
+      stops: [...yardStop, ...routed, ...unplaced],
     };
   });
 }

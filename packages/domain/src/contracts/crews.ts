@@ -1,5 +1,6 @@
 /** Crews and their equipment. */
 import type { Weekday } from '../engine/dates.ts';
+import type { BladeState } from '../engine/blades.ts';
 import type { EquipmentKind } from '../vocabulary.ts';
 import type { Instant, Items } from './common.ts';
 
@@ -62,6 +63,10 @@ export interface EquipmentRow<At extends Instant = string> {
   /** Hours run since the last sharpening; null without an interval. */
   hoursSinceSharpening: number | null;
   sharpeningDue: boolean;
+  /** `bladeCare`'s state: due, due soon (this week's open mowings on it reach the interval), ok, no interval. */
+  bladeState: BladeState;
+  /** Hours of open mowing planned on the machine in the current week, h (0 on a create or change answer). */
+  weekMowingH: number;
   notes: string;
   active: boolean;
   version: number;

@@ -46,7 +46,8 @@ export interface LateMowing {
 /** A crew's note or photos on one job in the range, for the office to read. */
 export interface CrewNote {
   orderId: number;
-  fieldId: number;
+  /** Null for a yard job. */
+  fieldId: number | null;
   fieldName: string;
   siteName: string;
   task: WorkTask;

@@ -42,7 +42,8 @@ export interface WeekBoard<At extends Instant = string> {
 
 /** One order in a preview of re-generating. */
 export interface DiffItem {
-  fieldId: number;
+  /** Null for a yard job: `fieldName` is then its machine and `siteName` the district's yard. */
+  fieldId: number | null;
   fieldName: string;
   siteName: string;
   task: WorkTask;

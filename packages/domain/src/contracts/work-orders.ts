@@ -27,9 +27,13 @@ export type WorkOrderDetails = {
 /** A work order: a row of `GET /api/work-orders`, of the week board, and the order of every write. */
 export interface WorkOrderRow<At extends Instant = string> {
   id: number;
-  fieldId: number;
+  /** Null for a yard job (blade sharpening): work at the district's yard, on no field. */
+  fieldId: number | null;
+  /** Empty for a yard job. */
   fieldName: string;
-  siteId: number;
+  /** Null for a yard job. */
+  siteId: number | null;
+  /** The site's name; a yard job: the district's yard. */
   siteName: string;
   /** The site's street address, for the crew's way there. */
   siteAddress: string;

@@ -24,3 +24,4 @@ export * from './stripes.ts';
 export * from './linePlans.ts';
 export * from './logos.ts';
 export * from './game-day.ts';
+export * from './blades.ts';

@@ -1055,7 +1055,8 @@ export interface CrewDayLoad {
  * load/unload per site, against the crew's hours that day (0 on a day off).
  */
 export function crewDayLoads(
-  orders: ReadonlyArray<{ id: number; crewId: number | null; plannedDate: string; siteId: number; plannedHours: number; status?: WorkStatus }>,
+  /** `siteId` null: a yard job (sharpening), worked at the yard: its hours count, it adds no stop. */
+  orders: ReadonlyArray<{ id: number; crewId: number | null; plannedDate: string; siteId: number | null; plannedHours: number; status?: WorkStatus }>,
   crews: readonly PlanCrewInput[],
   sites: ReadonlyMap<number, LatLng>,
   yard: LatLng,
@@ -1075,7 +1076,7 @@ export function crewDayLoads(
   for (const crew of [...crews].sort((a, b) => a.id - b.id)) {
     for (const date of dates) {
       const list = groups.get(`${crew.id}|${date}`) ?? [];
-      const siteIds = [...new Set(list.map((o) => o.siteId))].sort((a, b) => a - b);
+      const siteIds = [...new Set(list.flatMap((o) => (o.siteId === null ? [] : [o.siteId])))].sort((a, b) => a - b);
       const stops = siteIds.flatMap((id) => {
         const p = sites.get(id);
         return p ? [{ id, lat: p.lat, lng: p.lng }] : [];
@@ -1097,7 +1098,8 @@ export function crewDayLoads(
         totalHours: round(totalHours),
         overloaded: list.length > 0 && totalHours > availableHours + 1e-9,
         route: route.order.map(Number),
-        orderIds: [...list].sort((a, b) => (rank.get(a.siteId) ?? 0) - (rank.get(b.siteId) ?? 0) || a.id - b.id).map((o) => o.id),
+        // Yard jobs first: they are done before the crew leaves the yard.
+        orderIds: [...list].sort((a, b) => (a.siteId === null ? -1 : (rank.get(a.siteId) ?? 0)) - (b.siteId === null ? -1 : (rank.get(b.siteId) ?? 0)) || a.id - b.id).map((o) => o.id),
       });
     }
   }

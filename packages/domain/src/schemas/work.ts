@@ -78,6 +78,8 @@ export const workReportSchema = z
     clientRef: z.string().trim().min(8).max(64).regex(/^[A-Za-z0-9_-]+$/, 'a client reference uses letters, digits, - and _').optional(),
     reportedAt: isoDateTimeSchema.optional(),
     version: versionSchema.optional(),
+    /** A sharpening job done: the machine's hour meter reading at the sharpening, h (default: the meter as the portal knows it). */
+    hourMeterH: z.number({ error: 'the hour meter reading must be a number' }).min(0, 'an hour meter reading cannot be negative').max(100_000, 'an hour meter reading is under 100,000 h').optional(),
   })
   .superRefine((v, ctx) => {
     if (v.status === 'done' && v.actualHours === null) ctx.addIssue({ code: 'custom', path: ['actualHours'], message: 'enter the hours the job took' });

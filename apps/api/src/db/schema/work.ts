@@ -1,8 +1,8 @@
 /** Equipment, work orders and their photos: the crews' side of the week plan. */
 import { sql } from 'drizzle-orm';
-import { boolean, date, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
+import { boolean, check, date, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
 import type { ApplicationRateUnit, ApplicationTask, ApplicationWeather, ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, GameDayStep, PlanLayout, PlanPaint, SeasonShift, StripePattern, WorkStatus, WorkTask } from '@swardwise/domain';
-import { districtRef, fieldRef, sites } from './city.ts';
+import { districtRef, fieldRef, fields, sites } from './city.ts';
 import { crews, users } from './people.ts';
 import { createdAt, id, instant, versioned } from './columns.ts';
 
@@ -40,11 +40,18 @@ export const equipment = pgTable(
   (t) => [index('equipment_district_idx').on(t.districtId)],
 );
 
+/**
+ * Work on a field carries the field with copies of its site and district; a yard job
+ * (sharpening a mower's blades) has no field and no site, only its district, crew and the
+ * equipment it concerns (a check constraint keeps field and site together).
+ */
 export const workOrders = pgTable(
   'work_orders',
   {
     ...id,
-    ...ofField,
+    fieldId: integer('field_id').references(() => fields.id, { onDelete: 'cascade' }),
+    siteId: integer('site_id').references(() => sites.id),
+    ...districtRef,
     task: text('task').$type<WorkTask>().notNull(),
     weekStart: date('week_start', { mode: 'string' }).notNull(),
     plannedDate: date('planned_date', { mode: 'string' }).notNull(),
@@ -72,6 +79,7 @@ export const workOrders = pgTable(
     index('work_orders_field_idx').on(t.fieldId, t.plannedDate),
     // The overview's inputs (feed, water, paint) of a season read only those tasks.
     index('work_orders_task_date_idx').on(t.task, t.plannedDate),
+    check('work_orders_place_check', sql`(${t.fieldId} is null) = (${t.siteId} is null)`),
   ],
 );
 

@@ -1,6 +1,6 @@
 /** What a district's week is planned from, read in a few queries. */
-import { and, asc, desc, eq, gte, inArray, lt, lte, max, ne, sql } from 'drizzle-orm';
-import { errors, addDaysIso, CULTURAL_TASKS, MOWER_KINDS, type CulturalTask, type Level, type PlanEquipment, type PlanField, type PlanMower } from '@swardwise/domain';
+import { and, asc, desc, eq, gte, inArray, isNotNull, isNull, lt, lte, max, ne, sql } from 'drizzle-orm';
+import { errors, addDaysIso, CULTURAL_TASKS, MOWER_KINDS, type CulturalTask, type Level, type PlanEquipment, type PlanField, type PlanMower, type SharpenMachine } from '@swardwise/domain';
 import type { Queryable } from '../../db/client.ts';
 import { auditLog, crews, districts, equipment, fieldChecks, fieldEvents, fields, sites, users, workOrders } from '../../db/schema/index.ts';
 import { workOrderRows, type WorkOrderRow } from '../work-orders.ts';
@@ -11,7 +11,10 @@ export interface GenerationInput {
   weekStart: string;
 }
 
-export type ExistingRow = typeof workOrders.$inferSelect;
+/** A work order of the week on a field (the engine's; yard jobs are planned apart). */
+export type ExistingRow = typeof workOrders.$inferSelect & { fieldId: number; siteId: number };
+/** A yard job of the week (no field): blade sharpening. */
+export type YardRow = typeof workOrders.$inferSelect;
 
 export async function districtRow(db: Queryable, id: number) {
   const [d] = await db.select({ id: districts.id, name: districts.name, yardName: districts.yardName, yardLat: districts.yardLat, yardLng: districts.yardLng }).from(districts).where(eq(districts.id, id));
@@ -33,11 +36,22 @@ export async function districtCrews(db: Queryable, districtId: number) {
     .orderBy(asc(crews.name), asc(crews.id));
 }
 
-export async function weekRows(db: Queryable, districtId: number, weekStart: string) {
+/** The week's orders on fields (the field engine's input). */
+export async function weekRows(db: Queryable, districtId: number, weekStart: string): Promise<ExistingRow[]> {
+  const rows = await db
+    .select()
+    .from(workOrders)
+    .where(and(eq(workOrders.districtId, districtId), gte(workOrders.plannedDate, weekStart), lte(workOrders.plannedDate, addDaysIso(weekStart, 6)), isNotNull(workOrders.fieldId)))
+    .orderBy(asc(workOrders.id));
+  return rows.filter((r): r is ExistingRow => r.fieldId !== null && r.siteId !== null);
+}
+
+/** The week's yard jobs (no field). */
+export async function yardWeekRows(db: Queryable, districtId: number, weekStart: string): Promise<YardRow[]> {
   return db
     .select()
     .from(workOrders)
-    .where(and(eq(workOrders.districtId, districtId), gte(workOrders.plannedDate, weekStart), lte(workOrders.plannedDate, addDaysIso(weekStart, 6))))
+    .where(and(eq(workOrders.districtId, districtId), gte(workOrders.plannedDate, weekStart), lte(workOrders.plannedDate, addDaysIso(weekStart, 6)), isNull(workOrders.fieldId)))
     .orderBy(asc(workOrders.id));
 }
 
@@ -57,7 +71,7 @@ async function lastDone(db: Queryable, fieldIds: number[]) {
     .from(workOrders)
     .where(and(inArray(workOrders.fieldId, fieldIds), eq(workOrders.status, 'done')))
     .groupBy(workOrders.fieldId, workOrders.task);
-  for (const r of rows) if (r.last) out.set(`${r.fieldId}|${r.task}`, r.last);
+  for (const r of rows) if (r.last && r.fieldId !== null) out.set(`${r.fieldId}|${r.task}`, r.last);
   const checks = await db.select({ fieldId: fieldChecks.fieldId, last: max(fieldChecks.checkedOn) }).from(fieldChecks).where(inArray(fieldChecks.fieldId, fieldIds)).groupBy(fieldChecks.fieldId);
   for (const c of checks) {
     const key = `${c.fieldId}|field_check`;
@@ -108,6 +122,7 @@ async function culturalRecords(db: Queryable, fieldIds: number[], weekStart: str
     .from(workOrders)
     .where(and(inArray(workOrders.fieldId, fieldIds), inArray(workOrders.task, [...CULTURAL_TASKS]), eq(workOrders.status, 'done'), gte(workOrders.plannedDate, `${year}-01-01`), lte(workOrders.plannedDate, `${year}-12-31`)));
   for (const r of doneRows) {
+    if (r.fieldId === null) continue;
     const byTask = culturalOf.get(r.fieldId) ?? {};
     const task = r.task as CulturalTask;
     byTask[task] = [...(byTask[task] ?? []), r.date];
@@ -136,7 +151,7 @@ export async function planFields(db: Queryable, q: GenerationInput) {
     .from(workOrders)
     .where(and(eq(workOrders.districtId, q.districtId), eq(workOrders.task, 'paint_lines'), ne(workOrders.status, 'skipped'), gte(workOrders.plannedDate, addDaysIso(q.weekStart, -14)), lt(workOrders.plannedDate, q.weekStart)));
   const paintsOf = new Map<number, { date: string; eventId: number | null }[]>();
-  for (const p of paintRows) paintsOf.set(p.fieldId, [...(paintsOf.get(p.fieldId) ?? []), { date: p.date, eventId: typeof p.details.eventId === 'number' ? p.details.eventId : null }]);
+  for (const p of paintRows) if (p.fieldId !== null) paintsOf.set(p.fieldId, [...(paintsOf.get(p.fieldId) ?? []), { date: p.date, eventId: typeof p.details.eventId === 'number' ? p.details.eventId : null }]);
   const { culturalOf, wearOf } = await culturalRecords(db, fieldRows.map((f) => f.id), q.weekStart);
   const stripesOf = await stripePatternsOf(db, fieldRows.map((f) => f.id));
   const eventsOf = new Map<number, { id: number; startsOn: string; title: string }[]>();
@@ -186,7 +201,9 @@ export async function planEquipment(db: Queryable, districtId: number) {
     if (u.kind === 'line_marker' || u.kind === 'spreader') return [{ id: u.id, crewId: u.crewId, kind: u.kind }];
     return [];
   });
-  return { mowers, equipment: booked };
+  // Every mower with a sharpening interval, for the yard's blade care.
+  const sharpen: SharpenMachine[] = units.flatMap((u) => (MOWER_KINDS.includes(u.kind) && u.sharpenIntervalH !== null ? [{ id: u.id, name: u.name, kind: u.kind, crewId: u.crewId, hourMeterH: u.hourMeterH, sharpenIntervalH: u.sharpenIntervalH, lastSharpenedAtH: u.lastSharpenedAtH }] : []));
+  return { mowers, equipment: booked, sharpen };
 }
 
 /** Crew hints: the crew that last worked each site in the four weeks before the week's end. */
@@ -199,7 +216,7 @@ export async function siteCrewHints(db: Queryable, q: GenerationInput, weekEnd: 
   const siteCrewHint = new Map<number, number>();
   const hintDate = new Map<number, string>();
   for (const h of hintRows) {
-    if (h.crewId === null || !h.last) continue;
+    if (h.crewId === null || h.siteId === null || !h.last) continue;
     if (!hintDate.has(h.siteId) || hintDate.get(h.siteId)! < h.last) {
       siteCrewHint.set(h.siteId, h.crewId);
       hintDate.set(h.siteId, h.last);

@@ -4,6 +4,7 @@ import {
   assignWeek,
   isKept,
   planFieldWeek,
+  planSharpeningJobs,
   weekDates,
   weekWarningText,
   DISTRICT_WEEK_WARNINGS,
@@ -17,7 +18,7 @@ import {
 import type { Queryable } from '../../db/client.ts';
 import { loadParameters, loadStandards } from '../standards.ts';
 import { planningWeather } from '../stations.ts';
-import { districtCrews, districtRow, planEquipment, planFields, rainedOutDays, siteCrewHints, type ExistingRow, type GenerationInput } from './load.ts';
+import { districtCrews, districtRow, planEquipment, planFields, rainedOutDays, siteCrewHints, type ExistingRow, type GenerationInput, type YardRow } from './load.ts';
 
 interface AskInput {
   q: GenerationInput;
@@ -55,7 +56,7 @@ async function askFields(db: Queryable, input: AskInput) {
 }
 
 /** Everything the engine needs for a district's week, and its answer: the scheduled orders and the worded warnings. */
-export async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: ExistingRow[], today: string) {
+export async function planDistrictWeek(db: Queryable, q: GenerationInput, existing: ExistingRow[], today: string, yardExisting: YardRow[] = []) {
   const weekEnd = weekDates(q.weekStart)[6]!;
   // In the week under way, work goes on today (the department's) or later.
   const notBefore = today >= q.weekStart && today <= weekEnd ? today : undefined;
@@ -68,8 +69,19 @@ export async function planDistrictWeek(db: Queryable, q: GenerationInput, existi
   const kept = existing.filter(isKept);
   const { asked, warnings, fieldRows } = await askFields(db, { q, kept, workDays, mowers: units.mowers, standards, params, notBefore });
 
+  const closed = await rainedOutDays(db, q, crewRows.map((c) => c.id));
+  // Yard jobs first: blades sharpened before the week's mowing; their hours take crew time.
+  const crewInputs = crewRows.map((c) => ({ id: c.id, hoursPerDay: c.hoursPerDay, workDays: c.workDays }));
+  const sharpenJobs = planSharpeningJobs({ weekStart: q.weekStart, machines: units.sharpen, crews: crewInputs, closed, ...(notBefore ? { notBefore } : {}) });
   const keptHours = new Map<string, number>();
   const keptSites = new Map<string, number[]>();
+  const keptYard = yardExisting.filter(isKept);
+  const yardTime = [...keptYard, ...sharpenJobs.filter((j) => !keptYard.some((k) => k.equipmentId === j.equipmentId))];
+  for (const y of yardTime) {
+    if (y.crewId === null || ('status' in y && y.status === 'skipped')) continue;
+    const key = `${y.crewId}|${y.plannedDate}`;
+    keptHours.set(key, (keptHours.get(key) ?? 0) + y.plannedHours);
+  }
   for (const k of kept) {
     if (k.crewId === null || k.status === 'skipped') continue;
     const key = `${k.crewId}|${k.plannedDate}`;
@@ -79,10 +91,10 @@ export async function planDistrictWeek(db: Queryable, q: GenerationInput, existi
   const assigned = assignWeek({
     weekStart: q.weekStart,
     orders: asked,
-    crews: crewRows.map((c) => ({ id: c.id, hoursPerDay: c.hoursPerDay, workDays: c.workDays })),
+    crews: crewInputs,
     keptHours,
     keptSites,
-    closed: await rainedOutDays(db, q, crewRows.map((c) => c.id)),
+    closed,
     siteCrewHint: await siteCrewHints(db, q, weekEnd),
     equipment: units.equipment,
     sites: new Map(fieldRows.map((f) => [f.siteId, { lat: f.siteLat, lng: f.siteLng }])),
@@ -94,5 +106,5 @@ export async function planDistrictWeek(db: Queryable, q: GenerationInput, existi
   const fieldNames = new Map(fieldRows.map((f) => [f.id, f.name]));
   const crewNames = new Map(crewRows.map((c) => [c.id, c.name]));
   const words = [...warnings, ...assigned.warnings].map((w) => weekWarningText(w, (id) => fieldNames.get(id), (id) => crewNames.get(id)));
-  return { orders: assigned.orders, warnings: [...new Set(words)], crewRows, fieldCount: fieldRows.length };
+  return { orders: assigned.orders, warnings: [...new Set(words)], crewRows, fieldCount: fieldRows.length, sharpenJobs, yardName: district.yardName, machineNames: new Map(units.sharpen.map((m) => [m.id, m.name])) };
 }

@@ -9,9 +9,10 @@ import { workOrders } from '../../db/schema/index.ts';
 import { writeAudit, type AuditInput } from '../audit.ts';
 import type { Ctx } from '../context.ts';
 import type { ExistingRow, GenerationInput } from './load.ts';
+import { writeYardJobs, type YardReconciliation } from './yard.ts';
 
 /** The reconciled week written: `summary` and `warnings` go into the run's audit entry. */
-export async function writeGeneratedWeek(ctx: Ctx, q: GenerationInput, rec: WeekReconciliation<ExistingRow, ScheduledOrder>, planOrders: ScheduledOrder[], summary: Record<string, number>, warnings: string[]): Promise<void> {
+export async function writeGeneratedWeek(ctx: Ctx, q: GenerationInput, rec: WeekReconciliation<ExistingRow, ScheduledOrder>, planOrders: ScheduledOrder[], summary: Record<string, number>, warnings: string[], yard?: YardReconciliation): Promise<void> {
   await (ctx.db as Db).transaction(async (tx) => {
   const audits: AuditInput[] = [];
   if (rec.remove.length) {
@@ -48,6 +49,7 @@ export async function writeGeneratedWeek(ctx: Ctx, q: GenerationInput, rec: Week
       audits.push({ actorId: ctx.actor.id, action: 'create', entity: 'work_order', entityId: ids[k]!, districtId: q.districtId, before: null, after: { id: ids[k]!, ...after } });
     });
   }
+  if (yard) await writeYardJobs(ctx, tx, q, yard, audits);
   audits.push({ actorId: ctx.actor.id, action: 'create', entity: 'week_plan', entityId: null, districtId: q.districtId, before: null, after: { weekStart: q.weekStart, ...summary, warnings } });
   await writeAudit(tx, audits);
   });

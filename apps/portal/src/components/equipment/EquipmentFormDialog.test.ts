@@ -10,7 +10,7 @@ const DISTRICTS = [district(1, 'North')];
 const CREWS: CrewRow[] = [{ id: 4, districtId: 1, districtName: 'North', name: 'North Crew A', hoursPerDay: 8, members: [], workDays: ['mon'], leadUserId: null, leadName: null, version: 1 }];
 const MOWER: EquipmentRow = {
   id: 7, districtId: 1, districtName: 'North', crewId: 4, crewName: 'North Crew A', kind: 'reel_mower', name: 'Reel 5-gang', cuttingWidthM: 3.4, speedKmh: 8,
-  fieldEfficiency: 0.8, hocMinMm: 12, hocMaxMm: 38, hourMeterH: 120, sharpenIntervalH: 50, lastSharpenedAtH: 100, hoursSinceSharpening: 20, sharpeningDue: false,
+  fieldEfficiency: 0.8, hocMinMm: 12, hocMaxMm: 38, hourMeterH: 120, sharpenIntervalH: 50, lastSharpenedAtH: 100, hoursSinceSharpening: 20, sharpeningDue: false, bladeState: 'ok', weekMowingH: 0,
   notes: '', active: true, version: 2, updatedAt: '2026-06-01T00:00:00Z',
 };
 

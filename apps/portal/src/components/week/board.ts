@@ -23,7 +23,8 @@ export interface BoardFilter {
 }
 
 function matchesFilter(order: WorkOrderRow, filter: BoardFilter): boolean {
-  if (filter.siteIds.length && !filter.siteIds.includes(order.siteId)) return false;
+  // A yard job is at no site: a site filter leaves it out.
+  if (filter.siteIds.length && (order.siteId === null || !filter.siteIds.includes(order.siteId))) return false;
   if (filter.tasks.length && !filter.tasks.includes(order.task)) return false;
   return true;
 }
@@ -139,7 +140,7 @@ export function filterOptions(board: WeekBoard | null): { sites: { id: number; n
   const sites = new Map<number, string>();
   const tasks = new Set<WorkTask>();
   for (const o of board?.orders ?? []) {
-    sites.set(o.siteId, o.siteName);
+    if (o.siteId !== null) sites.set(o.siteId, o.siteName);
     tasks.add(o.task);
   }
   return {
