@@ -38,7 +38,7 @@ export default defineConfig({
           include: ['api/**/*.test.ts'],
           environment: 'node',
           // Server logs of every API test go to one folder, scanned for secrets after the run.
-          globalSetup: ['./support/log-scan.ts'],
+          globalSetup: ['./support/log-scan.ts', './support/db-snapshot.ts'],
           // Each file opens its own PGlite database (a few seconds); keep the two cores busy
           // without running more databases than there are cores.
           maxWorkers: 2,

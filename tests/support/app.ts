@@ -6,12 +6,13 @@ import supertest from 'supertest';
 import { afterAll, beforeAll } from 'vitest';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
-import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
+import type { Database } from '../../apps/api/src/db/client.ts';
 import { createMailer, type Mailer } from '../../apps/api/src/mail/mailer.ts';
 import { startMailSink, type MailSink } from '../../apps/api/src/mail/sink.ts';
 import type { BackgroundTasks } from '../../apps/api/src/services/background.ts';
 import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
-import { buildFixture, PASSWORD, type Fixture } from './fixture.ts';
+import { openTestDatabase } from './db-snapshot.ts';
+import { PASSWORD, type Fixture } from './fixture.ts';
 import { API_LOG_DIR, TEST_SESSION_SECRET } from './log-scan.ts';
 
 type App = ReturnType<typeof createApp>['app'];
@@ -42,8 +43,7 @@ const BASE_ENV = { NODE_ENV: 'test', PUBLIC_URL: 'http://portal.test' };
 
 /** `now`: the server's clock (by default the real one), for tests that stand at a chosen instant. */
 export async function startTestApi(env: Record<string, string> = {}, options: { now?: () => Date } = {}): Promise<TestApi> {
-  const database = await openDatabase({ pgliteDir: 'memory://' });
-  const fixture = await buildFixture(database.db);
+  const { database, fixture } = await openTestDatabase(true);
   const mail = await startMailSink();
   // The whole run's server log, scanned for secrets when the API tests end (support/log-scan.ts).
   fs.mkdirSync(API_LOG_DIR, { recursive: true });
@@ -99,7 +99,7 @@ export function useTestApi(env: Record<string, string> = {}, options: { now?: ()
 export function useEmptyDatabase(): Database {
   const database = {} as Database;
   beforeAll(async () => {
-    Object.assign(database, await openDatabase({ pgliteDir: 'memory://' }));
+    Object.assign(database, (await openTestDatabase(false)).database);
   });
   afterAll(() => database.close());
   return database;
