@@ -57,7 +57,7 @@ export default defineConfig({
           environment: 'node',
         },
       },
-      apiTests('api', [], 1),
+      apiTests('api', ['./support/db-snapshot.ts'], 1),
       // A throw-away PostgreSQL server (support/postgres-setup.ts) with template databases.
       ...(postgres ? [apiTests('api-pg', ['./support/postgres-setup.ts'], 2)] : []),
       {

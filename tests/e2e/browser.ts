@@ -10,6 +10,7 @@ import { afterAll, afterEach, beforeAll, inject } from 'vitest';
 import type { Role } from '@swardwise/domain';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { finishOpenPages, watchContext } from './axe.ts';
+import { finishCsp, watchCsp } from './csp-watch.ts';
 
 export { checkA11y } from './axe.ts';
 
@@ -36,7 +37,8 @@ export let browser: Browser;
 /**
  * Launches the file's browser before its tests and closes it after them. Every context and
  * page it makes (`browser.newPage()`, `browser.newContext()`) is checked with axe-core against
- * WCAG 2.1 A/AA after each navigation and when closed, which fails on a violation (axe.ts).
+ * WCAG 2.1 A/AA after each navigation and when closed, which fails on a violation (axe.ts),
+ * and watched for content security policy violations, which fail the test (csp-watch.ts).
  */
 export function useBrowser(): void {
   beforeAll(async () => {
@@ -44,9 +46,11 @@ export function useBrowser(): void {
     browser = await launchBrowser();
     const newContext = browser.newContext.bind(browser);
     // browser.newPage() makes its context through this too.
-    browser.newContext = async (options) => watchContext(await newContext(options));
+    browser.newContext = async (options) => watchContext(await watchCsp(await newContext(options)));
   });
   afterEach(finishOpenPages);
+  // Every page shown also loads under the shipped content security policy (csp-watch.ts).
+  afterEach(finishCsp);
   afterAll(() => browser?.close());
 }
 

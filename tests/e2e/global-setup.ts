@@ -71,7 +71,8 @@ export default async function setup(project: TestProject) {
   });
   child.stdout!.on('data', (d) => (output += d));
   child.stderr!.on('data', (d) => (output += d));
-  await waitForHealth(baseUrl, child, () => output);
+  // Seeding the demo city on a loaded machine can take minutes: E2E_START_TIMEOUT_MS allows more.
+  await waitForHealth(baseUrl, child, () => output, Number(process.env.E2E_START_TIMEOUT_MS ?? 90_000));
   project.provide('baseUrl', baseUrl);
 
   return async () => {

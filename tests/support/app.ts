@@ -15,7 +15,8 @@ import type { MailOutbox, OutboxOptions } from '../../apps/api/src/mail/outbox.t
 import { startMailSink, type MailSink } from '../../apps/api/src/mail/sink.ts';
 import type { BackgroundTasks } from '../../apps/api/src/services/background.ts';
 import { DepartmentClock } from '../../apps/api/src/services/clock.ts';
-import { buildFixture, PASSWORD, type Fixture } from './fixture.ts';
+import { openPgliteCopy } from './db-snapshot.ts';
+import { PASSWORD, type Fixture } from './fixture.ts';
 import { adminQuery, FIXTURE_TEMPLATE, MIGRATED_TEMPLATE } from './postgres-setup.ts';
 import { API_LOG_DIR, TEST_SESSION_SECRET } from './log-scan.ts';
 
@@ -48,8 +49,8 @@ const BASE_ENV = { NODE_ENV: 'test', PUBLIC_URL: 'http://portal.test' };
 /** `now`: the server's clock (by default the real one), for tests that stand at a chosen instant. */
 export async function startTestApi(env: Record<string, string> = {}, options: { now?: () => Date } = {}): Promise<TestApi> {
   const pg = inject('postgres');
-  const database = await openTestDatabase(pg ? 'fixture' : 'empty');
-  const fixture = pg ? structuredClone(pg.fixture) : await buildFixture(database.db);
+  // PostgreSQL: a clone of the template holding the test city; PGlite: a copy of the run's dump.
+  const { database, fixture } = pg ? { database: await openTestDatabase('fixture'), fixture: structuredClone(pg.fixture) } : await openPgliteCopy(true);
   const mail = await startMailSink();
   // The whole run's server log, scanned for secrets when the API tests end (support/log-scan.ts).
   fs.mkdirSync(API_LOG_DIR, { recursive: true });
@@ -125,8 +126,8 @@ let cloned = 0;
 export async function openTestDatabase(template: 'empty' | 'fixture' = 'empty'): Promise<Database> {
   const pg = inject('postgres');
   if (!pg) {
-    if (template === 'fixture') throw new Error('the fixture template exists only on PostgreSQL; build it with buildFixture');
-    return openDatabase({ pgliteDir: 'memory://' });
+    if (template === 'fixture') throw new Error('the fixture template exists only on PostgreSQL; startTestApi copies the fixture dump on PGlite');
+    return (await openPgliteCopy(false)).database;
   }
   const clone = await clonePostgresDatabase(template);
   const database = await openDatabase({ databaseUrl: clone.url });

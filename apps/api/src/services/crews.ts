@@ -1,10 +1,11 @@
 /** Mowing crews of a district. */
 import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
-import { appError, errors, type CreateCrewInput, type CrewRow, type StoredCrew, type UpdateCrewInput } from '@swardwise/domain';
+import { appError, type CreateCrewInput, type CrewRow, type StoredCrew, type UpdateCrewInput } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { crews, districts, users } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { auditRow, deleteAtVersion, updateAtVersion, writable } from './versioned.ts';
+import { requireDistrict } from './districts.ts';
 
 export async function listCrews(ctx: Ctx, filter: { districtId?: number | undefined }): Promise<CrewRow[]> {
   authorize(ctx, 'read', 'Crew', ctx.actor.role === 'crew' ? { id: ctx.actor.crewId ?? -1, districtId: ctx.actor.districtId } : undefined);
@@ -40,8 +41,7 @@ export async function crewRow(db: Ctx['db'], id: number) {
 export async function createCrew(ctx: Ctx, input: CreateCrewInput): Promise<StoredCrew<Date>> {
   authorize(ctx, 'create', 'Crew', { districtId: input.districtId });
   return (ctx.db as Db).transaction(async (tx) => {
-    const [d] = await tx.select({ id: districts.id }).from(districts).where(eq(districts.id, input.districtId));
-    if (!d) throw errors.noSuch('district', 'body.districtId');
+    await requireDistrict(tx, input.districtId);
     const [row] = await tx.insert(crews).values(input).returning();
     await auditRow(ctx, tx, 'crew', null, row!);
     return row!;
@@ -55,8 +55,7 @@ export async function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput): 
     if (changes.districtId !== undefined && changes.districtId !== before.districtId) {
       // A crew lead's district follows his crew, so a crew with a lead stays where it is.
       authorize(ctx, 'create', 'Crew', { districtId: changes.districtId });
-      const [d] = await tx.select({ id: districts.id }).from(districts).where(eq(districts.id, changes.districtId));
-      if (!d) throw errors.noSuch('district', 'body.districtId');
+      await requireDistrict(tx, changes.districtId);
       const [lead] = await tx.select({ id: users.id }).from(users).where(eq(users.crewId, id)).limit(1);
       if (lead) throw appError('crew/has_lead', 'Move the crew lead to another crew before moving this crew to another district');
     }

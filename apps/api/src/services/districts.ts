@@ -1,6 +1,7 @@
 /** Districts with their yards and a count of what they hold. */
 import { asc, eq, sql } from 'drizzle-orm';
-import type { DistrictRow } from '@swardwise/domain';
+import { errors, type DistrictRow } from '@swardwise/domain';
+import type { Queryable } from '../db/client.ts';
 import { districts, fields, sites } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 
@@ -37,4 +38,11 @@ export async function listDistricts(ctx: Ctx): Promise<DistrictRow[]> {
   return rows
     .filter((row) => can(ctx, 'read', 'District', { id: row.id }))
     .map(({ yardName, yardLat, yardLng, ...rest }) => ({ ...rest, yard: { name: yardName, lat: yardLat, lng: yardLng } }));
+}
+
+/** The district a body names exists (else a 400 on `body.districtId`: the body is wrong, not the address). */
+export async function requireDistrict(db: Queryable, id: number): Promise<{ id: number }> {
+  const [d] = await db.select({ id: districts.id }).from(districts).where(eq(districts.id, id));
+  if (!d) throw errors.noSuch('district', 'body.districtId');
+  return d;
 }

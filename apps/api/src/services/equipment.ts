@@ -5,6 +5,7 @@ import type { Db } from '../db/client.ts';
 import { crews, districts, equipment, workOrders } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { auditRow, deleteAtVersion, updateAtVersion, writable } from './versioned.ts';
+import { requireDistrict } from './districts.ts';
 
 const columns = {
   id: equipment.id,
@@ -84,11 +85,6 @@ async function checkCrew(db: Ctx['db'], crewId: number | null | undefined, distr
 }
 
 /** A district named in the body must exist (400, not a foreign-key failure). */
-async function requireDistrict(db: Ctx['db'], id: number): Promise<void> {
-  const [d] = await db.select({ id: districts.id }).from(districts).where(eq(districts.id, id));
-  if (!d) throw errors.noSuch('district', 'body.districtId');
-}
-
 export async function createEquipment(ctx: Ctx, input: CreateEquipmentInput): Promise<EquipmentRow<Date>> {
   authorize(ctx, 'create', 'Equipment', { districtId: input.districtId });
   return (ctx.db as Db).transaction(async (tx) => {

@@ -7,6 +7,7 @@ import { authorize, can, type Ctx } from './context.ts';
 import { followMove } from './scope-copies.ts';
 import { siteScope } from './scope.ts';
 import { auditRow, updateAtVersion, writable } from './versioned.ts';
+import { requireDistrict } from './districts.ts';
 
 const fieldCounts = (db: Ctx['db']) =>
   db
@@ -66,15 +67,10 @@ export async function getSite(ctx: Ctx, id: number): Promise<SiteRow<Date>> {
   return row;
 }
 
-async function checkDistrict(db: Ctx['db'], districtId: number) {
-  const [d] = await db.select({ id: districts.id }).from(districts).where(eq(districts.id, districtId));
-  if (!d) throw errors.noSuch('district', 'body.districtId');
-}
-
 export async function createSite(ctx: Ctx, input: CreateSiteInput): Promise<SiteRow<Date>> {
   authorize(ctx, 'create', 'Site', { districtId: input.districtId });
   return (ctx.db as Db).transaction(async (tx) => {
-    await checkDistrict(tx, input.districtId);
+    await requireDistrict(tx, input.districtId);
     const [created] = await tx.insert(sites).values(input).returning({ id: sites.id });
     const row = (await getSiteRow(tx, created!.id))!;
     await auditRow(ctx, tx, 'site', null, row);
@@ -89,7 +85,7 @@ export async function updateSite(ctx: Ctx, id: number, input: UpdateSiteInput): 
     if (changes.districtId !== undefined && changes.districtId !== before.districtId) {
       // Moving a site to another district needs the right to create it there too.
       authorize(ctx, 'create', 'Site', { districtId: changes.districtId });
-      await checkDistrict(tx, changes.districtId);
+      await requireDistrict(tx, changes.districtId);
     }
     await updateAtVersion(tx, sites, 'site', id, version, changes);
     // The work and bookings of the site's fields go with it to its new district.

@@ -21,6 +21,7 @@ import type { Db, Queryable } from '../db/client.ts';
 import { crews, districts, sessions, sites, users, userSites, userTokens } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
+import { requireDistrict } from './districts.ts';
 
 export { actorOf } from '@swardwise/domain';
 export type { SessionUser };
@@ -105,9 +106,7 @@ async function resolveScope(db: Queryable, input: { role: Role; districtId?: num
   let crewId: number | null = null;
   let siteIds: number[] = [];
   if (input.role === 'foreman') {
-    const [d] = await db.select({ id: districts.id }).from(districts).where(eq(districts.id, input.districtId!));
-    if (!d) throw errors.noSuch('district', 'body.districtId');
-    districtId = d.id;
+    districtId = (await requireDistrict(db, input.districtId!)).id;
   }
   if (input.role === 'crew') {
     const [c] = await db.select({ id: crews.id, districtId: crews.districtId }).from(crews).where(eq(crews.id, input.crewId!));

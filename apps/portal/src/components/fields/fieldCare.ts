@@ -6,6 +6,7 @@
 import type { FieldRow, Level, MapField } from '@swardwise/domain';
 import { h } from 'vue';
 import { columnHelper, labelled, type DataColumn } from '../data-table/features.ts';
+import { DAY_MONTH, formatDay } from '../../utils/calendarDate.ts';
 
 export type OverdueKey = 'mowing_check' | 'mowing' | 'check' | 'none';
 
@@ -64,7 +65,7 @@ export function withCare(rows: readonly FieldRow[], map: readonly MapField[]): F
 }
 
 /** "Dec 2" in the department's calendar (ISO dates carry no time, so UTC formats them as written). */
-export const shortDate = (iso: string) => new Date(`${iso}T00:00:00Z`).toLocaleDateString('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' });
+export const shortDate = (iso: string) => formatDay(iso, DAY_MONTH);
 
 const col = columnHelper<FieldCareRow>();
 const dash = () => h('span', { class: 'sw-muted' }, '—');

@@ -1,6 +1,7 @@
 /** The field page's needs cards, built from the API's answer in the user's units. */
 import { LEVEL_NAMES, type FieldNeeds, type Level, type NeedInput, type UnitSystem } from '@swardwise/domain';
 import { depthText, hocText, hoursText, lengthText, massText, nRateText, volumeText } from '../../utils/needUnits.ts';
+import { DAY_MONTH_YEAR, formatDay } from '../../utils/calendarDate.ts';
 
 export interface Figure {
   label: string;
@@ -21,7 +22,7 @@ export interface NeedCardModel {
 
 const levelName = (l: number) => `${l} ${LEVEL_NAMES[l as Level] ?? ''}`.trim();
 const dateText = (iso: string | null) =>
-  iso ? new Date(`${iso}T00:00:00Z`).toLocaleDateString('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' }) : '—';
+  iso ? formatDay(iso, DAY_MONTH_YEAR) : '—';
 const n = (v: number, digits = 1) => v.toLocaleString('en-US', { maximumFractionDigits: digits });
 
 export function buildNeedCards(x: FieldNeeds, u: UnitSystem): NeedCardModel[] {

@@ -1,13 +1,14 @@
 import { addDaysIso, formatDepth, formatTemperature, type UnitSystem, type WeatherGap } from '@swardwise/domain';
+import { DAY_MONTH, formatDay, WEEKDAY_DAY_YEAR } from '../../utils/calendarDate.ts';
 
 const shown = (d: { value: number; unit: string }) => `${d.value.toLocaleString('en-US')} ${d.unit}`;
 export const tempText = (c: number, u: UnitSystem) => shown(formatTemperature(c, u));
 export const depthText = (mm: number, u: UnitSystem) => shown(formatDepth(mm, u));
 
 const DAY_MS = 86_400_000;
-const short = (iso: string) => new Date(`${iso}T00:00:00Z`).toLocaleDateString('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' });
+const short = (iso: string) => formatDay(iso, DAY_MONTH);
 export const dateText = (iso: string) =>
-  new Date(`${iso}T00:00:00Z`).toLocaleDateString('en-US', { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
+  formatDay(iso, WEEKDAY_DAY_YEAR);
 
 /** Missing dates folded into runs: "Oct 5, Nov 12–14 (3 days)". */
 export function gapRuns(gaps: readonly string[]): { from: string; to: string; days: number; text: string }[] {
