@@ -4,6 +4,7 @@
  */
 import type { Logger } from 'pino';
 import type { Config } from './config.ts';
+import type { AuthCache } from './http/auth-cache.ts';
 import type { Db } from './db/client.ts';
 import type { Mailer } from './mail/mailer.ts';
 import type { MailSink } from './mail/sink.ts';
@@ -22,4 +23,6 @@ export interface AppDeps {
   clock: DepartmentClock;
   /** Work finished after the answer (password-reset look-ups and e-mail). */
   background: BackgroundTasks;
+  /** Sessions and users this process read in the last AUTH_CACHE_SECONDS (`http/auth-cache.ts`). */
+  authCache: AuthCache;
 }
