@@ -80,10 +80,14 @@ async function serve(): Promise<void> {
   const count = (server: Server) =>
     server.on('request', (_req, res: ServerResponse) => {
       inFlight += 1;
-      res.once('close', () => {
+      // Done when the handler ends its answer, not when autocannon drops the connection at
+      // the end of a run: a handler still working then would load the next run.
+      const end = res.end.bind(res) as (...args: unknown[]) => ServerResponse;
+      res.end = ((...args: unknown[]) => {
         inFlight -= 1;
         answerIdle();
-      });
+        return end(...args);
+      }) as ServerResponse['end'];
     });
   process.on('message', () => {
     waiting = true;
