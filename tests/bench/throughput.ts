@@ -57,10 +57,16 @@ function drained(child: ChildProcess): Promise<void> {
     const onMessage = (m: { idle?: boolean }) => {
       if (!m.idle) return;
       child.off('message', onMessage);
+      clearTimeout(timer);
       resolve();
     };
     child.on('message', onMessage);
     child.send('idle?');
+    // Never hang the bench on a miscount: after 30 s go on regardless.
+    const timer = setTimeout(() => {
+      child.off('message', onMessage);
+      resolve();
+    }, 30_000);
   });
 }
 
@@ -83,9 +89,14 @@ async function serve(): Promise<void> {
       // Done when the handler ends its answer, not when autocannon drops the connection at
       // the end of a run: a handler still working then would load the next run.
       const end = res.end.bind(res) as (...args: unknown[]) => ServerResponse;
+      let ended = false;
       res.end = ((...args: unknown[]) => {
-        inFlight -= 1;
-        answerIdle();
+        // Once per answer, however many layers (compression, sessions) call end again.
+        if (!ended) {
+          ended = true;
+          inFlight -= 1;
+          answerIdle();
+        }
         return end(...args);
       }) as ServerResponse['end'];
     });
@@ -114,13 +125,21 @@ if (process.argv.includes('--serve')) {
   await serve();
 } else {
   const child = fork(import.meta.filename, ['--serve'], { execArgv: ['--import', 'tsx'], stdio: 'inherit' });
+  child.once('exit', (code, signal) => {
+    if (code !== null || signal !== 'SIGTERM') {
+      console.error(`the server process ended (${signal ?? code}) before the bench did`);
+      process.exit(1);
+    }
+  });
   const { bareUrl, base, cookie, fieldId } = await new Promise<{ bareUrl: string; base: string; cookie: string; fieldId: number }>((resolve) => child.once('message', resolve as never));
   const signedIn = { cookie };
   const measure = async (name: string, url: string, headers: Record<string, string> = {}): Promise<Figures> => {
     await drained(child);
     await load(name, url, headers, WARMUP_SECONDS);
     await drained(child);
-    return load(name, url, headers, SECONDS);
+    const f = await load(name, url, headers, SECONDS);
+    console.log(`  ${name}: ${f.rps.toFixed(0)} req/s`);
+    return f;
   };
 
   const rows: Figures[] = [];
@@ -158,4 +177,5 @@ if (process.argv.includes('--serve')) {
   console.log(`  errors: ${rows.reduce((n, f) => n + f.errors, 0)}`);
 
   child.kill();
+  process.exit(0);
 }
