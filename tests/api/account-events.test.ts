@@ -9,7 +9,9 @@ import { auditLog, sessions, users } from '../../apps/api/src/db/schema/index.ts
 import { PASSWORD } from '../support/fixture.ts';
 import { useTestApi } from '../support/app.ts';
 
-const api = useTestApi();
+// These tests change stored sessions and accounts behind the API's back, as another process
+// would; with no cache the next request sees the change (the cache's bound: auth-cache.test.ts).
+const api = useTestApi({ AUTH_CACHE_SECONDS: '0' });
 
 const DAY = 24 * 3600 * 1000;
 const lastId = async () => (await api.database.db.select({ id: auditLog.id }).from(auditLog)).reduce((m, r) => Math.max(m, r.id), 0);

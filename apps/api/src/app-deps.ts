@@ -4,6 +4,7 @@
  */
 import type { Logger } from 'pino';
 import type { Config } from './config.ts';
+import type { AuthCache } from './http/auth-cache.ts';
 import type { Db } from './db/client.ts';
 import type { Mailer } from './mail/mailer.ts';
 import type { MailSink } from './mail/sink.ts';
@@ -28,4 +29,6 @@ export interface AppDeps {
    * an app with other limits its own.
    */
   rateLimitPrefix?: string;
+  /** Sessions and users this process read in the last AUTH_CACHE_SECONDS (`http/auth-cache.ts`). */
+  authCache: AuthCache;
 }

@@ -15,7 +15,8 @@ import type { AppDeps } from './app-deps.ts';
 import type { Config } from './config.ts';
 import { createMailer, type Mailer } from './mail/mailer.ts';
 import { MailOutbox, type OutboxOptions } from './mail/outbox.ts';
-import { loadUser, requireUser } from './http/auth.ts';
+import { forgetAfterWrites, loadUser, requireUser } from './http/auth.ts';
+import { AuthCache } from './http/auth-cache.ts';
 import { withClock } from './http/clock.ts';
 import { errorHandler, noRoute } from './http/errors.ts';
 import { MAX_JSON_DEPTH, nestedDeeperThan } from './http/json-depth.ts';
@@ -71,7 +72,7 @@ const JSON_LIMIT_SIGNED_IN = '2mb';
 const JSON_LIMIT_ANONYMOUS = '16kb';
 
 export function createApp(
-  deps: Omit<AppDeps, 'config' | 'mailer' | 'clock' | 'background'> & { config: Config; mailer?: Mailer; clock?: DepartmentClock; outbox?: OutboxOptions },
+  deps: Omit<AppDeps, 'config' | 'mailer' | 'clock' | 'background' | 'authCache'> & { config: Config; mailer?: Mailer; clock?: DepartmentClock; outbox?: OutboxOptions },
 ): { app: Express; store: DrizzleSessionStore; background: BackgroundTasks; outbox: MailOutbox } {
   const clock = deps.clock ?? new DepartmentClock(deps.db, deps.config.departmentTimeZone);
   const background = new BackgroundTasks(deps.logger);
@@ -79,10 +80,12 @@ export function createApp(
   // Every message goes through the outbox, so an SMTP outage holds mail rather than losing it.
   const mailer = new MailOutbox(deps.db, deps.mailer ?? createMailer(null, deps.logger), deps.logger, background, deps.outbox);
   const cookieName = deps.config.cookieSecure ? SECURE_COOKIE_NAME : COOKIE_NAME;
-  const full: AppDeps = { ...deps, mailer, clock, background, config: { ...deps.config, cookieName } };
+  // Per app: two apps on one database (tests, or two processes) each keep their own.
+  const authCache = new AuthCache(deps.config.authCacheMs);
+  const full: AppDeps = { ...deps, mailer, clock, background, authCache, config: { ...deps.config, cookieName } };
   const { db, config, logger } = full;
   const app = express();
-  const store = new DrizzleSessionStore(db);
+  const store = new DrizzleSessionStore(db, { cache: authCache, touchIntervalMs: config.sessionTouchMs });
   // The developer routes exist only beside the local mail sink, never in production.
   const devRoutes = Boolean(full.mailSink) && !config.production;
 
@@ -122,6 +125,7 @@ export function createApp(
   );
   // Before any body is read: a write from another site or port is refused here.
   app.use('/api', sameOriginWrites(config));
+  app.use('/api', forgetAfterWrites(authCache));
   app.use(
     '/api',
     session({
@@ -142,7 +146,7 @@ export function createApp(
   );
   app.use('/api', withClock(clock));
   app.use('/api', sessionLifetime(config));
-  app.use('/api', loadUser(db));
+  app.use('/api', loadUser(db, authCache));
   // JSON bodies are read once the caller is known; multipart ones by the routes that take
   // them, after their ability check (http/uploads.ts).
   const jsonSignedIn = express.json({ limit: JSON_LIMIT_SIGNED_IN });

@@ -42,6 +42,14 @@ export interface Config {
   sessionIdleMs: number;
   /** …and this long after sign-in, however busy. */
   sessionMaxMs: number;
+  /**
+   * How long a process trusts a session or user it read (AUTH_CACHE_SECONDS, default 5; 0: not
+   * at all): a sign-out, deactivation or role change made through another API process takes
+   * effect here within this bound (at once on the process that made it).
+   */
+  authCacheMs: number;
+  /** A session in use has its expiry written at most this often (SESSION_TOUCH_SECONDS, default 60). */
+  sessionTouchMs: number;
   portalDist: string;
   /** Map tile URL template ({z}/{x}/{y}); unset: the portal draws the bundled vector basemap and no request leaves the machine. */
   mapTileUrl: string | undefined;
@@ -67,6 +75,14 @@ export interface Config {
 function bool(value: string | undefined, fallback: boolean): boolean {
   if (value === undefined || value === '') return fallback;
   return ['1', 'true', 'yes', 'on'].includes(value.toLowerCase());
+}
+
+function nonNegative(env: NodeJS.ProcessEnv, name: string, fallback: number): number {
+  const raw = env[name];
+  if (raw === undefined || raw === '') return fallback;
+  const value = Number(raw);
+  if (!Number.isFinite(value) || value < 0) throw new Error(`${name} must be zero or a positive number, got "${raw}"`);
+  return value;
 }
 
 function positive(env: NodeJS.ProcessEnv, name: string, fallback: number): number {
@@ -145,6 +161,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, argv: string[] 
     resetWindowMs: positive(env, 'RESET_WINDOW_MINUTES', 60) * 60_000,
     sessionIdleMs: positive(env, 'SESSION_IDLE_DAYS', 14) * days,
     sessionMaxMs: positive(env, 'SESSION_MAX_DAYS', 30) * days,
+    authCacheMs: nonNegative(env, 'AUTH_CACHE_SECONDS', 5) * 1000,
+    sessionTouchMs: nonNegative(env, 'SESSION_TOUCH_SECONDS', 60) * 1000,
     portalDist: path.resolve(env.PORTAL_DIST ?? path.join(repoRoot, 'apps/portal/dist')),
     mapTileUrl: env.MAP_TILE_URL || undefined,
     mapAttribution: env.MAP_ATTRIBUTION || undefined,

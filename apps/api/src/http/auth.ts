@@ -2,6 +2,7 @@
 import type { RequestHandler } from 'express';
 import { errors, type Actor } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
+import type { AuthCache } from './auth-cache.ts';
 import type { Clock } from '../services/clock.ts';
 import { contextFor, type Ctx } from '../services/context.ts';
 import { actorOf, sessionUser, type SessionEnd, type SessionUser } from '../services/users.ts';
@@ -15,13 +16,16 @@ declare module 'express-serve-static-core' {
   }
 }
 
-/** Loads the signed-in user (if any); a session of a deactivated account is ended. */
-export function loadUser(db: Db): RequestHandler {
+/**
+ * Loads the signed-in user (if any); a session of a deactivated account is ended. The user is
+ * read through the process's `AuthCache`: a change made elsewhere shows within its bound.
+ */
+export function loadUser(db: Db, cache: AuthCache): RequestHandler {
   return async (req, _res, next) => {
     const userId = req.session?.userId;
     if (!userId) return next();
     try {
-      const user = await sessionUser(db, userId);
+      const user = await cachedSessionUser(db, cache, userId);
       if (!user) {
         // A fresh, empty session rather than none, so this request may still sign in.
         req.session.regenerate((err) => next(err));
@@ -33,6 +37,28 @@ export function loadUser(db: Db): RequestHandler {
     } catch (err) {
       next(err);
     }
+  };
+}
+
+async function cachedSessionUser(db: Db, cache: AuthCache, userId: number): Promise<SessionUser | undefined> {
+  const cached = cache.user(userId);
+  if (cached) return cached.user;
+  const since = cache.generation;
+  const user = await sessionUser(db, userId);
+  cache.putUser(userId, user, since);
+  return user;
+}
+
+/** After a write request on this process, what it may have changed about accounts and sessions is read again. */
+export function forgetAfterWrites(cache: AuthCache): RequestHandler {
+  return (req, res, next) => {
+    if (req.method !== 'GET' && req.method !== 'HEAD' && req.method !== 'OPTIONS') {
+      // Before the answer is sent (the next request may follow at once) and after the write.
+      cache.changed();
+      res.once('finish', () => cache.changed());
+      res.once('close', () => cache.changed());
+    }
+    next();
   };
 }
 

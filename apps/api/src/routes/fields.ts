@@ -6,7 +6,7 @@ import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
 import { createField, deleteField, getField, getFieldRow, listFieldsJson, updateField } from '../services/fields.ts';
-import { fieldNeeds } from '../services/needs.ts';
+import { fieldNeedsJson } from '../services/needs.ts';
 import { fieldWorkHistory } from '../services/field-history.ts';
 import { addFieldCheckPhoto, checkPhotoAllowed, fieldCheckPhotoFile, fieldForCheck, fieldGrowthCalibration, listFieldChecks, logStaffFieldCheck } from '../services/field-checks.ts';
 import { PHOTO_MAX_BYTES } from '../services/work-photos.ts';
@@ -34,7 +34,7 @@ export function fieldsRouter({ db, config }: AppDeps): Router {
   router.get('/:id/needs', async (req, res) => {
     const { id } = parse(idParamSchema, req.params, 'params');
     const { date } = parse(needsQuerySchema, req.query, 'query');
-    res.json({ needs: await fieldNeeds(ctxOf(db, req), id, date) });
+    res.type('application/json').send(await fieldNeedsJson(ctxOf(db, req), id, date));
   });
 
   router.get('/:id/work', async (req, res) => {

@@ -1,16 +1,19 @@
 /**
- * Read-heavy answers (the map, the field list) cached as JSON per caller scope and data
- * fingerprint. PGlite runs one query at a time, so rebuilding 3,000 rows on every request
- * would queue everyone behind it; the fingerprint is one query that changes with any write
- * to the tables the answers read, so a cached answer is never stale.
+ * Read-heavy answers (the map, the field list, a field's needs) cached as JSON per caller
+ * scope and data fingerprint. PGlite runs one query at a time, so rebuilding 3,000 rows on
+ * every request would queue everyone behind it; the fingerprint is one query that changes
+ * with any write to the tables the answers read, so a cached answer is never stale. Requests
+ * arriving together share one fingerprint query (`sharedFingerprint`), never one begun before
+ * they arrived.
  */
 import { sql } from 'drizzle-orm';
-import { districts, fieldChecks, fields, sites, standards, weatherDays, weatherStations, workOrders } from '../db/schema/index.ts';
+import { districts, fieldChecks, fields, settings, sites, standards, weatherDays, weatherStations, workOrders } from '../db/schema/index.ts';
 import type { Ctx } from './context.ts';
 
 /**
- * Changes whenever a field, check, weather day, station, Standards row, site, district or work
- * order is written, added or removed, and at midnight (a crew's window of work moves with the day).
+ * Changes whenever a field, check, weather day, station, Standards row, site, district, work
+ * order or setting (department parameters, time zone, costs) is written, added or removed,
+ * and at midnight (a crew's window of work moves with the day).
  */
 async function dataFingerprint(db: Ctx['db']): Promise<string> {
   const res = await db.execute(sql`select concat_ws('|',
@@ -23,6 +26,7 @@ async function dataFingerprint(db: Ctx['db']): Promise<string> {
     (select count(*) || ':' || coalesce(max(${sites.updatedAt})::text, '') || ':' || coalesce(sum(${sites.version}), 0) from ${sites}),
     (select count(*) || ':' || coalesce(max(${districts.updatedAt})::text, '') from ${districts}),
     (select count(*) || ':' || coalesce(max(${workOrders.updatedAt})::text, '') || ':' || coalesce(sum(${workOrders.version}), 0) from ${workOrders}),
+    (select count(*) || ':' || md5(coalesce(string_agg(${settings.key} || '=' || ${settings.value}::text, ',' order by ${settings.key}), '')) from ${settings} where ${settings.key} <> 'session_secret'),
     current_date::text
   ) as v`);
   return String((res.rows[0] as { v: string }).v);
@@ -38,20 +42,65 @@ function scopeKey(ctx: Ctx): string {
   return `${a.role}:d=${a.districtId ?? '-'}:c=${a.crewId ?? '-'}:s=${sites}`;
 }
 
+interface Fingerprints {
+  /** The query running now, begun before some of its waiters arrived. */
+  running: Promise<string> | null;
+  /** The next query, not begun yet: everyone arriving now waits for it. */
+  next: Promise<string> | null;
+}
+const fingerprints = new WeakMap<object, Fingerprints>();
+
+/**
+ * The fingerprint as of a moment after the call: a query already running may have read the
+ * tables before a write this caller has seen, so the caller waits for the next one, which
+ * every caller arriving meanwhile shares. Under load this is one query per round instead of
+ * one per request; alone, a request runs its own query as before.
+ */
+export function sharedFingerprint(db: Ctx['db']): Promise<string> {
+  let f = fingerprints.get(db);
+  if (!f) fingerprints.set(db, (f = { running: null, next: null }));
+  const state = f;
+  const start = (): Promise<string> => {
+    const query = dataFingerprint(db);
+    state.running = query;
+    const clear = () => {
+      if (state.running === query) state.running = null;
+    };
+    query.then(clear, clear);
+    return query;
+  };
+  if (!state.running) return start();
+  state.next ??= state.running.then(
+    () => {
+      state.next = null;
+      return start();
+    },
+    () => {
+      state.next = null;
+      return start();
+    },
+  );
+  return state.next;
+}
+
+/** Answers kept per kind and database; a field's needs are many (one per field and week). */
+const LIMITS: Record<string, number> = { needs: 256 };
 const LIMIT = 32;
-const caches = new WeakMap<object, Map<string, unknown>>();
+const caches = new WeakMap<object, Map<string, Map<string, unknown>>>();
 
 /**
  * The cached entry for (kind, scope, key, fingerprint), built on a miss. One cache per
  * database handle, so test databases never share answers.
  */
 export async function cachedAnswer<T>(ctx: Ctx, kind: string, key: string, build: () => Promise<T>): Promise<T> {
-  const full = `${kind}|${scopeKey(ctx)}|${key}|${await dataFingerprint(ctx.db)}`;
-  let cache = caches.get(ctx.db);
-  if (!cache) caches.set(ctx.db, (cache = new Map()));
+  const full = `${scopeKey(ctx)}|${key}|${await sharedFingerprint(ctx.db)}`;
+  let kinds = caches.get(ctx.db);
+  if (!kinds) caches.set(ctx.db, (kinds = new Map()));
+  let cache = kinds.get(kind);
+  if (!cache) kinds.set(kind, (cache = new Map()));
   if (cache.has(full)) return cache.get(full) as T;
   const value = await build();
-  if (cache.size >= LIMIT) cache.delete(cache.keys().next().value!);
+  if (cache.size >= (LIMITS[kind] ?? LIMIT)) cache.delete(cache.keys().next().value!);
   cache.set(full, value);
   return value;
 }

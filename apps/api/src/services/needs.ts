@@ -6,6 +6,7 @@
  * `needs/`; this assembles the answer.
  */
 import { weatherGapUntil, type FieldNeeds, type NeedInput } from '@swardwise/domain';
+import { cachedAnswer } from './answer-cache.ts';
 import type { Ctx } from './context.ts';
 import { loadNeedsBasis, r, type NeedsBasis } from './needs/basis.ts';
 import { feedCard } from './needs/feed.ts';
@@ -59,4 +60,15 @@ export async function fieldNeeds(ctx: Ctx, fieldId: number, date?: string): Prom
     level: await levelCard(ctx, b, work.compliance),
     season: seasonBlock(b, seasonMowings, feed.applications),
   };
+}
+
+/**
+ * The needs answer as JSON, cached per scope, field, week asked and today (the fingerprint
+ * covers every table it reads: field, site, Standards, parameters, weather, checks, work
+ * orders): the engine's season runs once per change, not once per request. A field the caller
+ * may not read is refused on the build, so no scope ever holds an entry for it.
+ */
+export async function fieldNeedsJson(ctx: Ctx, fieldId: number, date?: string): Promise<string> {
+  const key = `${fieldId}|${date ?? ''}|${ctx.clock.today()}`;
+  return cachedAnswer(ctx, 'needs', key, async () => JSON.stringify({ needs: await fieldNeeds(ctx, fieldId, date) }));
 }
