@@ -125,7 +125,7 @@ describe('the season budget', () => {
     // The department's line is its own, not the district's.
     expect(line(b, 'equipment').budget).toBeNull();
     expect(line((await head.get(`/api/budget?season=${SEASON}`)).body as BudgetAnswer, 'equipment').budget).toBe(1200);
-    const entries = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'budget_line'));
+    const entries = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'budget_line')).orderBy(auditLog.id);
     expect(entries.map((e) => e.action)).toEqual(['create', 'update', 'create']);
     expect(entries[1]).toMatchObject({ districtId: d, before: { amount: 25000 }, after: { amount: 27500.5 } });
     // Clearing removes the line.

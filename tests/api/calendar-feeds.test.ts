@@ -64,7 +64,7 @@ describe('calendar feeds', () => {
     // Only a hash is stored, and the audit log never sees the secret.
     const stored = await db.select().from(calendarFeeds);
     expect(JSON.stringify(stored)).not.toContain(token);
-    expect(JSON.stringify(await db.select().from(auditLog).where(eq(auditLog.entity, 'calendar_feed')))).not.toContain(token);
+    expect(JSON.stringify(await db.select().from(auditLog).where(eq(auditLog.entity, 'calendar_feed')).orderBy(auditLog.id))).not.toContain(token);
 
     const res = await anonymous().get(feedPath(made.body.url));
     expect(res.status).toBe(200);

@@ -182,7 +182,7 @@ describe('the department time zone setting', () => {
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ timeZone: 'America/New_York', source: 'setting', defaultTimeZone: 'America/Chicago', version: 2 });
     expect((await admin.get('/api/settings')).body).toMatchObject({ timeZone: 'America/New_York', version: 2 });
-    const [entry] = await db().select().from(auditLog).where(and(eq(auditLog.entity, 'settings'), eq(auditLog.action, 'create')));
+    const [entry] = await db().select().from(auditLog).where(and(eq(auditLog.entity, 'settings'), eq(auditLog.action, 'create'))).orderBy(auditLog.id);
     expect(entry).toMatchObject({ actorId: api.fixture.users.admin.id, before: { timeZone: 'America/Chicago' }, after: { timeZone: 'America/New_York', version: 2 } });
 
     const crew = await api.signIn('crew');

@@ -38,7 +38,7 @@ describe('closures', () => {
     expect(history.map((h: { status: string }) => h.status)).toEqual(['open', 'closed']);
     expect(history[1].toAt).toBe(history[0].fromAt);
     expect(current.status).toBe('open');
-    const audit = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'field_closure'));
+    const audit = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'field_closure')).orderBy(auditLog.id);
     expect(audit.map((a) => a.entityId).sort()).toEqual(history.map((h: { id: number }) => h.id).sort());
   });
 
@@ -132,7 +132,7 @@ describe('closures', () => {
       expect(moved).toMatchObject({ plannedDate: to, weekStart: mondayOf(to), pinned: true, status: 'assigned' });
       const [untouched] = await db.select().from(workOrders).where(eq(workOrders.id, later));
       expect(untouched!.plannedDate).toBe(addDaysIso(today(), 9));
-      const audit = await db.select().from(auditLog).where(and(eq(auditLog.entity, 'work_order'), eq(auditLog.entityId, order)));
+      const audit = await db.select().from(auditLog).where(and(eq(auditLog.entity, 'work_order'), eq(auditLog.entityId, order))).orderBy(auditLog.id);
       expect(audit.at(-1)!.after).toMatchObject({ plannedDate: to });
       await api.background.idle();
       const told = await api.mail.waitFor((m) => m.to.includes(api.fixture.users.crew.email) && /Work moved/.test(m.subject));

@@ -90,7 +90,7 @@ describe('reopening a finished job', () => {
       ['done', 'tapped by mistake'],
       ['assigned', 'Reopened (was done): Not finished yet'],
     ]);
-    const audit = await db().select().from(auditLog).where(and(eq(auditLog.entity, 'work_order'), eq(auditLog.entityId, id)));
+    const audit = await db().select().from(auditLog).where(and(eq(auditLog.entity, 'work_order'), eq(auditLog.entityId, id))).orderBy(auditLog.id);
     const reopened = audit.find((a) => a.before?.status === 'done' && a.after?.status === 'assigned');
     expect(reopened?.actorId).toBe(api.fixture.users.crew.id);
     // The order can be logged again.
@@ -109,7 +109,7 @@ describe('reopening a finished job', () => {
     const res = await foreman.post(`/api/work-orders/${id}/reopen`).send({ reason: 'Lines not finished' });
     expect(res.status).toBe(200);
     expect((await order(id)).status).toBe('assigned');
-    const audit = await db().select().from(auditLog).where(and(eq(auditLog.entity, 'work_order'), eq(auditLog.entityId, id)));
+    const audit = await db().select().from(auditLog).where(and(eq(auditLog.entity, 'work_order'), eq(auditLog.entityId, id))).orderBy(auditLog.id);
     expect(audit.some((a) => a.actorId === api.fixture.users.foreman.id && a.before?.status === 'done' && a.after?.status === 'assigned')).toBe(true);
   });
 
@@ -212,7 +212,7 @@ describe('a crew logs a field check from Today', () => {
     const listed = await (await api.signIn('foreman')).get(`/api/fields/${api.fixture.fields.northSoccer}/checks`);
     expect(listed.status).toBe(200);
     expect(listed.body.items[0]).toMatchObject({ id: row.id, workOrderId: id, checkedByName: expect.any(String) });
-    const audit = await db().select().from(auditLog).where(and(eq(auditLog.entity, 'field_check'), eq(auditLog.entityId, row.id)));
+    const audit = await db().select().from(auditLog).where(and(eq(auditLog.entity, 'field_check'), eq(auditLog.entityId, row.id))).orderBy(auditLog.id);
     expect(audit).toHaveLength(1);
   });
 

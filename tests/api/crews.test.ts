@@ -70,7 +70,7 @@ describe('equipment', () => {
     const id = res.body.equipment.id;
     const sharpened = await foreman.patch(`/api/equipment/${id}`).send({ version: 1, lastSharpenedAtH: 410 });
     expect(sharpened.body.equipment).toMatchObject({ hoursSinceSharpening: 0, sharpeningDue: false, version: 2 });
-    const audit = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'equipment'));
+    const audit = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'equipment')).orderBy(auditLog.id);
     expect(audit.map((a) => a.action)).toEqual(['create', 'update']);
   });
 

@@ -53,7 +53,7 @@ describe('staff log a field check from the field page', () => {
     const [row] = await db().select().from(fieldChecks).where(eq(fieldChecks.id, res.body.check.id));
     expect(row!.daysSinceCut).toBe(isoToDayNumber(row!.checkedOn) - isoToDayNumber('2026-05-01'));
     expect((await db().select().from(workOrders)).length).toBe(before);
-    const audit = await db().select().from(auditLog).where(and(eq(auditLog.entity, 'field_check'), eq(auditLog.entityId, row!.id)));
+    const audit = await db().select().from(auditLog).where(and(eq(auditLog.entity, 'field_check'), eq(auditLog.entityId, row!.id))).orderBy(auditLog.id);
     expect(audit).toHaveLength(1);
 
     const listed = await foreman.get(`/api/fields/${field()}/checks`);

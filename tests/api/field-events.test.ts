@@ -33,7 +33,7 @@ describe('field events', () => {
     expect(moved.status).toBe(200);
     expect(moved.body.event).toMatchObject({ siteId: api.fixture.sites.northSchool, startTime: null, version: 2 });
     expect((await foreman.delete(`/api/field-events/${id}?version=2`)).status).toBe(204);
-    const audit = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'field_event'));
+    const audit = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'field_event')).orderBy(auditLog.id);
     expect(audit.filter((a) => a.entityId === id).map((a) => a.action)).toEqual(['create', 'update', 'delete']);
     expect(await count()).toBe(0);
   });

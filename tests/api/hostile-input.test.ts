@@ -232,11 +232,17 @@ const rawJson = fc.constantFrom('{', '{"a":', '[1,2', '{"version": 1,}', "{'a': 
  * body is read.
  */
 const VOLATILE = new Set(['sessions', '__drizzle_migrations', 'rate_limits']);
+/**
+ * Tables whose rows change after they are written, by background work: the outbox's sender
+ * marks mail queued by an accepted body as tried or sent while later bodies are refused. Only
+ * which rows exist is compared there, so a refused body that queued a mail is still caught.
+ */
+const ROWS_ONLY = new Set(['mail_outbox']);
 
 async function snapshot(): Promise<string> {
   const query = async <T,>(text: string) => (await api.database.db.execute(sql.raw(text))).rows as T[];
   const tables = await query<{ name: string }>("select tablename as name from pg_tables where schemaname = 'public' order by tablename");
-  const parts = tables.filter((t) => !VOLATILE.has(t.name)).map((t) => `select '${t.name}' as t, count(*)::text as n, coalesce(md5(string_agg(x::text, '|' order by x::text)), '') as h from "${t.name}" x`);
+  const parts = tables.filter((t) => !VOLATILE.has(t.name)).map((t) => `select '${t.name}' as t, count(*)::text as n, coalesce(md5(string_agg(x::text, '|' order by x::text)), '') as h from ${ROWS_ONLY.has(t.name) ? `(select id from "${t.name}") x` : `"${t.name}" x`}`);
   const rows = await query<{ t: string; n: string; h: string }>(parts.join(' union all '));
   return rows.map((r) => `${r.t}:${r.n}:${r.h}`).join('\n');
 }

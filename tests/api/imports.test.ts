@@ -152,7 +152,7 @@ describe('imports: commit and undo', () => {
     const birch = (await siteNamed('Birch Hollow'))!;
     expect(birch).toMatchObject({ kind: 'park', owner: 'city', lat: 37.615, districtId: api.fixture.districts.north, version: 1 });
     expect((await siteNamed('Test Park North'))!).toMatchObject({ address: '9 New Address', version: park.version + 1, lat: park.lat });
-    const entries = await api.database.db.select().from(auditLog).where(sql`${auditLog.id} > 0`);
+    const entries = await api.database.db.select().from(auditLog).where(sql`${auditLog.id} > 0`).orderBy(auditLog.id);
     expect(entries.length).toBe(audits + 3);
     expect(entries.filter((e) => e.entity === 'site' && e.entityId === birch.id && e.action === 'create')).toHaveLength(1);
     expect(entries.filter((e) => e.entity === 'import' && e.entityId === res.body.import.id)).toHaveLength(1);

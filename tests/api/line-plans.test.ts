@@ -48,7 +48,7 @@ describe('field line plans', () => {
     const next = await foreman.patch(`/api/fields/${id}/lines`).send(body({ version: 1, shifts: { '2026': { alongM: 2, acrossM: 0 }, '2027': { alongM: -2, acrossM: 1 } } }));
     expect(next.body.linePlan.version).toBe(2);
     expect((await foreman.get(`/api/fields/${id}/lines`)).body.linePlan.shifts).toEqual({ '2026': { alongM: 2, acrossM: 0 }, '2027': { alongM: -2, acrossM: 1 } });
-    const audit = await db().select().from(auditLog).where(eq(auditLog.entity, 'field_line_plan'));
+    const audit = await db().select().from(auditLog).where(eq(auditLog.entity, 'field_line_plan')).orderBy(auditLog.id);
     expect(audit.map((a) => a.action)).toEqual(['create', 'update']);
   });
 

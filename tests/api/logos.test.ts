@@ -97,7 +97,7 @@ describe('field logos', () => {
     expect((await foreman.delete(`/api/fields/${id}/logos/${logo.id}?version=1`)).status).toBe(409);
     expect((await foreman.delete(`/api/fields/${id}/logos/${logo.id}?version=2`)).status).toBe(204);
     expect(await db().select().from(fieldLogos).where(eq(fieldLogos.fieldId, id))).toEqual([]);
-    const audit = await db().select().from(auditLog).where(eq(auditLog.entity, 'field_logo'));
+    const audit = await db().select().from(auditLog).where(eq(auditLog.entity, 'field_logo')).orderBy(auditLog.id);
     expect(audit.map((a) => a.action)).toEqual(['create', 'update', 'delete']);
   });
 

@@ -49,7 +49,7 @@ describe('requests', () => {
     expect(mail.text).toContain(`/requests?open=${id}`);
     // Only the district's foreman hears of it.
     expect(api.mail.messages().some((m) => m.to.includes(api.fixture.users.foremanSouth.email))).toBe(false);
-    const audit = await api.database.db.select().from(auditLog).where(and(eq(auditLog.entity, 'field_request'), eq(auditLog.entityId, id)));
+    const audit = await api.database.db.select().from(auditLog).where(and(eq(auditLog.entity, 'field_request'), eq(auditLog.entityId, id))).orderBy(auditLog.id);
     expect(audit).toHaveLength(1);
 
     for (const who of ['partner', 'foreman', 'head', 'admin'] as const) {
@@ -201,7 +201,7 @@ describe('requests', () => {
     expect(logged.status).toBe(201);
     expect((await requestRow(filed.id)).state).toBe('done');
     expect((await mailTo(api.fixture.users.partner.email, /Done: your request/)).text).toContain('is done');
-    const audit = await db.select().from(auditLog).where(and(eq(auditLog.entity, 'field_request'), eq(auditLog.entityId, filed.id)));
+    const audit = await db.select().from(auditLog).where(and(eq(auditLog.entity, 'field_request'), eq(auditLog.entityId, filed.id))).orderBy(auditLog.id);
     expect(audit.map((a) => (a.after as { state: string }).state)).toEqual(['requested', 'scheduled', 'done']);
   });
 
@@ -239,7 +239,7 @@ describe('requests', () => {
     expect((await partner.get(`/api/requests/${filed.id}`)).body.request.state).toBe('scheduled');
     const mail = await api.mail.waitFor((m) => m.to.includes(api.fixture.users.partner.email) && /Scheduled: your request/.test(m.subject) && m.text.includes('reopened'));
     expect(mail.text).toContain(`/requests?open=${filed.id}`);
-    const audit = await api.database.db.select().from(auditLog).where(and(eq(auditLog.entity, 'field_request'), eq(auditLog.entityId, filed.id)));
+    const audit = await api.database.db.select().from(auditLog).where(and(eq(auditLog.entity, 'field_request'), eq(auditLog.entityId, filed.id))).orderBy(auditLog.id);
     expect(audit.map((a) => (a.after as { state: string }).state)).toEqual(['requested', 'scheduled', 'done', 'scheduled']);
 
     // Logged done again, it is done again.

@@ -7,7 +7,7 @@ import { useTestApi } from '../support/app.ts';
 const api = useTestApi();
 
 const row = async (level: number) => (await api.database.db.select().from(standards).where(eq(standards.level, level)))[0]!;
-const audits = async () => api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'standards'));
+const audits = async () => api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'standards')).orderBy(auditLog.id);
 
 describe('GET /api/standards', () => {
   test('should give every signed-in role the four levels with their versions and the parameters', async () => {

@@ -33,7 +33,7 @@ describe('field stripes', () => {
     const cleared = await foreman.patch(`/api/fields/${id}/stripes`).send({ pattern: null, version: 2 });
     expect(cleared.body.stripes).toMatchObject({ pattern: null, version: null });
     expect(await db().select().from(fieldStripes).where(eq(fieldStripes.fieldId, id))).toEqual([]);
-    const audit = await db().select().from(auditLog).where(eq(auditLog.entity, 'field_stripes'));
+    const audit = await db().select().from(auditLog).where(eq(auditLog.entity, 'field_stripes')).orderBy(auditLog.id);
     expect(audit.map((a) => a.action)).toEqual(['create', 'update', 'delete']);
   });
 

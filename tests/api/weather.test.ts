@@ -61,7 +61,7 @@ describe('station file upload', () => {
     const days = await daysOf(stationId);
     expect(days).toHaveLength(10);
     expect(days.find((d) => d.date === '2027-04-04')).toMatchObject({ tmaxC: 20.3, rainMm: 4, source: 'csv', kind: 'observed' });
-    const audit = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'weather'));
+    const audit = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'weather')).orderBy(auditLog.id);
     expect(audit.at(-1)!.after).toMatchObject({ source: 'csv', days: 10, from: '2027-04-01', to: '2027-04-10' });
     const range = await foreman.get(`/api/weather/stations/${stationId}/days?from=2027-03-30&to=2027-04-11`);
     expect(range.body.gaps).toEqual(['2027-03-30', '2027-03-31', '2027-04-11']);

@@ -76,7 +76,7 @@ describe('a rain-out', () => {
       expect(r.status).toBe('skipped');
       expect(r.details.cancelled).toMatchObject({ reason: 'Thunderstorms all day, fields waterlogged' });
     }
-    const audits = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'rain_out'));
+    const audits = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'rain_out')).orderBy(auditLog.id);
     expect(audits).toHaveLength(1);
     expect(audits[0]!.after).toMatchObject({ date: THURSDAY, crewId, reason: 'Thunderstorms all day, fields waterlogged' });
 

@@ -58,9 +58,9 @@ describe('week plan generation', () => {
     expect(monday.availableHours).toBe(8);
     expect(monday.route.length).toBeGreaterThan(0);
     expect(board.lastGeneratedAt).not.toBeNull();
-    const [run] = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'week_plan'));
+    const [run] = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'week_plan')).orderBy(auditLog.id);
     expect(run?.after).toMatchObject({ weekStart: WEEK });
-    const created = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'work_order'));
+    const created = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'work_order')).orderBy(auditLog.id);
     expect(created.length).toBe(board.orders.length);
   });
 

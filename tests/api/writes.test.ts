@@ -117,7 +117,7 @@ describe('audit log', () => {
     // area follows the new outline (100 m × 64 m)
     expect(Math.abs(res.body.field.areaM2 - 6400) / 6400).toBeLessThan(0.005);
     const [entry] = await api.database.db.select().from(auditLog).where(eq(auditLog.entityId, id)).orderBy(auditLog.id);
-    const entries = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'field'));
+    const entries = await api.database.db.select().from(auditLog).where(eq(auditLog.entity, 'field')).orderBy(auditLog.id);
     const last = entries.filter((e) => e.entityId === id).at(-1)!;
     expect(entry).toBeDefined();
     expect(last).toMatchObject({ actorId: api.fixture.users.foreman.id, action: 'update', districtId: api.fixture.districts.north });
@@ -156,7 +156,7 @@ describe('deleting a field', () => {
     expect((await agent.delete(`/api/fields/${api.fixture.fields.southBaseball}?version=1`)).status).toBe(403);
     expect((await agent.delete(`/api/fields/${id}?version=1`)).status).toBe(204);
     expect(await api.database.db.select().from(fields).where(eq(fields.id, id))).toHaveLength(0);
-    const entries = await api.database.db.select().from(auditLog).where(and(eq(auditLog.entity, 'field'), eq(auditLog.entityId, id)));
+    const entries = await api.database.db.select().from(auditLog).where(and(eq(auditLog.entity, 'field'), eq(auditLog.entityId, id))).orderBy(auditLog.id);
     expect(entries.map((e) => e.action)).toEqual(['create', 'delete']);
     expect(entries[1]!.before).toMatchObject({ name: 'Temporary pitch' });
     expect((await agent.get(`/api/fields/${id}`)).status).toBe(404);

@@ -97,7 +97,7 @@ describe('blade sharpening at the yard', () => {
     const [unit] = await api.database.db.select().from(equipment).where(eq(equipment.id, mowerId));
     // The reading is the meter's; the bench time is not engine time.
     expect(unit).toMatchObject({ hourMeterH: 412.5, lastSharpenedAtH: 412.5 });
-    const audits = await api.database.db.select().from(auditLog).where(and(eq(auditLog.entity, 'equipment'), eq(auditLog.entityId, mowerId)));
+    const audits = await api.database.db.select().from(auditLog).where(and(eq(auditLog.entity, 'equipment'), eq(auditLog.entityId, mowerId))).orderBy(auditLog.id);
     expect(audits.at(-1)!.after).toMatchObject({ lastSharpenedAtH: 412.5 });
     const foreman = await api.signIn('foreman');
     const list = await foreman.get('/api/equipment');

@@ -43,6 +43,9 @@ export async function openDatabase(options: OpenOptions): Promise<Database> {
     const { drizzle } = await import('drizzle-orm/node-postgres');
     const { migrate } = await import('drizzle-orm/node-postgres/migrator');
     const pool = new pg.Pool({ connectionString: options.databaseUrl, max: 10 });
+    // An idle connection the server ends (a restart, an administrator's terminate) is dropped
+    // by the pool and the next query opens a new one; unhandled, its error would end the process.
+    pool.on('error', () => {});
     // Drizzle's migrator takes no lock: API processes starting together on a new database
     // would each apply the migrations. One session-level advisory lock makes them take turns.
     const client = await pool.connect();
