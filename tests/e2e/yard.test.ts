@@ -92,8 +92,9 @@ describe('blade sharpening at the yard', () => {
       await expect.poll(() => jobCard.getAttribute('data-status'), { timeout: 20_000 }).toBe('done');
 
       // The mower's blades are sharp again: sharpened at the reading, 0 h since.
-      const list = (await call<{ items: { id: number; hourMeterH: number; lastSharpenedAtH: number | null }[] }>(foreman, '/api/equipment')).body.items;
-      expect(list.find((e) => e.id === mowerId)).toMatchObject({ hourMeterH: 412.5, lastSharpenedAtH: 412.5 });
+      // The card turns done as soon as the report is on its way (a phone keeps it until sent): wait for the server's record.
+      const mower = async () => (await call<{ items: { id: number; hourMeterH: number; lastSharpenedAtH: number | null }[] }>(foreman, '/api/equipment')).body.items.find((e) => e.id === mowerId);
+      await expect.poll(mower, { timeout: 20_000 }).toMatchObject({ hourMeterH: 412.5, lastSharpenedAtH: 412.5 });
     } finally {
       await foreman.close();
       await phone.close();
