@@ -20,10 +20,14 @@ const root = path.resolve(import.meta.dirname, '../..');
 const vitest = path.join(root, 'node_modules/.bin/vitest');
 const children = new Set<ReturnType<typeof spawn>>();
 
+// Passed on, and waited for: each run stops its servers and PostgreSQL cluster as it ends.
+// A second signal leaves at once.
+let stopping = false;
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
   process.on(signal, () => {
+    if (stopping) process.exit(130);
+    stopping = true;
     for (const child of children) child.kill(signal);
-    process.exit(130);
   });
 }
 
