@@ -10,7 +10,7 @@ import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
 import type { Role } from '@swardwise/domain';
 import { a11yViolations, formatViolations, violationsSoFar, type A11yViolation } from './axe.ts';
-import { browser, PHONE, shots, signIn, useBrowser } from './browser.ts';
+import { browser, checkA11y, PHONE, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 const DESKTOP = { viewport: { width: 1366, height: 900 } };
@@ -122,6 +122,35 @@ describe('accessibility (WCAG 2.1 A/AA, axe-core)', () => {
     }
     expect(String(closed)).toMatch(/label \(critical\) on \/sign-in — Form elements must have labels\n\s+#nameless\n\s+<input id="nameless">/);
     expect(String(closed)).toMatch(/image-alt \(critical\) on \/forgot-password/);
+  });
+
+  test('should run axe again only once the page has moved (hover, DOM), keeping the answer of a still page', async () => {
+    const page = await browser.newPage(DESKTOP);
+    type Counted = { axe: { run: (...args: unknown[]) => Promise<unknown> }; axeRuns: number };
+    const runs = () => page.evaluate(() => (window as unknown as Counted).axeRuns);
+    try {
+      await page.goto(`${baseUrl}/sign-in`);
+      await page.locator('[data-test="email"]').first().waitFor();
+      await checkA11y(page);
+      // Counts axe's runs from here on (without touching the DOM, which would count as a move).
+      await page.evaluate(() => {
+        const w = window as unknown as Counted;
+        const run = w.axe.run.bind(w.axe);
+        w.axeRuns = 0;
+        w.axe.run = (...args) => ((w.axeRuns += 1), run(...args));
+      });
+      await checkA11y(page);
+      expect(await runs()).toBe(0);
+      // Hover can change colours (contrast) without a change to the DOM.
+      await page.getByRole('button', { name: /sign in/i }).hover();
+      await checkA11y(page);
+      expect(await runs()).toBe(1);
+      await page.evaluate(() => document.body.append(Object.assign(document.createElement('input'), { id: 'nameless' })));
+      await expect(checkA11y(page)).rejects.toThrow(/label \(critical\)/);
+      expect(await runs()).toBe(2);
+    } finally {
+      await page.close().catch(() => undefined);
+    }
   });
 
   test('should find no violation on the pages before signing in', async () => {

@@ -5,7 +5,9 @@
  * checks a page once it has settled after each navigation, the portal's own route changes
  * included, and once more when the page or its context is closed; the close then fails with
  * the list of violations. `checkA11y(page)` checks the page as it is now and fails at once,
- * for states a test wants checked by name (an open dialog, a phone layout).
+ * for states a test wants checked by name (an open dialog, a phone layout). A check of a page
+ * that has not moved since its last one (no change to its DOM, focus, hover, size, scroll or
+ * media) keeps that one's answer instead of running axe again on the same state.
  */
 import fs from 'node:fs';
 import { createRequire } from 'node:module';
@@ -56,7 +58,7 @@ const BACKGROUND_ATTEMPTS = 2;
  * hide a CSP that blocks something the portal needs). Answers null when the DOM changed or an
  * animation ran while axe looked, unless `force`.
  */
-async function runAxe(page: Page, force: boolean): Promise<RawViolation[] | null> {
+async function runAxe(page: Page, force: boolean): Promise<{ raw: RawViolation[]; still: boolean } | null> {
   const present = await page.evaluate(() => typeof (window as { axe?: unknown }).axe === 'object');
   if (!present) await page.evaluate(AXE_SOURCE);
   return page.evaluate(
@@ -64,21 +66,47 @@ async function runAxe(page: Page, force: boolean): Promise<RawViolation[] | null
       const axe = (window as unknown as { axe: { run: (context: Document, options: RunOptions) => Promise<AxeResults> } }).axe;
       const moving = () => document.getAnimations().some((a) => a.playState === 'running');
       if (!force && moving()) return null;
+      const w = window as unknown as { __a11yStill?: boolean; __a11yWatch?: MutationObserver };
+      if (!w.__a11yWatch) {
+        // Kept for the document's life: anything that can change what axe finds (the DOM, focus,
+        // the pointer's hover, the viewport, scrolling, print or colour media) marks the page as moved.
+        const moved = () => (w.__a11yStill = false);
+        w.__a11yWatch = new MutationObserver(moved);
+        w.__a11yWatch.observe(document, { subtree: true, childList: true, attributes: true, characterData: true });
+        for (const type of ['focusin', 'focusout', 'pointerover', 'pointerout', 'pointermove', 'mouseover', 'mouseout', 'mousemove', 'resize', 'scroll']) window.addEventListener(type, moved, true);
+        for (const query of ['print', '(prefers-color-scheme: dark)', '(prefers-reduced-motion: reduce)', '(forced-colors: active)']) matchMedia(query).addEventListener('change', moved);
+      }
+      w.__a11yStill = true;
       let changed = false;
       const observer = new MutationObserver(() => (changed = true));
       observer.observe(document, { subtree: true, childList: true, attributes: true, characterData: true });
       const results = await axe.run(document, { runOnly: { type: 'tag', values: tags }, resultTypes: ['violations'] });
       observer.disconnect();
+      w.__a11yWatch.takeRecords().forEach(() => (w.__a11yStill = false));
       if (!force && (changed || moving())) return null;
-      return results.violations.map((v) => ({
+      // Whether the page is still as axe saw it: then a check before it moves would find the same.
+      const still = !changed && !moving() && w.__a11yStill === true;
+      w.__a11yStill = still;
+      const raw = results.violations.map((v) => ({
         id: v.id,
         impact: v.impact ?? null,
         help: v.help,
         nodes: v.nodes.map((n) => ({ target: n.target.map(String).join(' '), html: n.html.slice(0, 160), summary: (n.failureSummary ?? '').replace(/\s+/g, ' ').trim() })),
       }));
+      return { raw, still };
     },
     { tags: WCAG_TAGS, force },
   );
+}
+
+/** Whether the page has not moved since a check that saw it still (see runAxe): that check's answer holds. */
+function unmoved(page: Page): Promise<boolean> {
+  return page.evaluate(() => {
+    const w = window as unknown as { __a11yStill?: boolean; __a11yWatch?: MutationObserver };
+    if (!w.__a11yWatch || w.__a11yStill !== true) return false;
+    if (w.__a11yWatch.takeRecords().length) return (w.__a11yStill = false);
+    return !document.getAnimations().some((a) => a.playState === 'running');
+  });
 }
 
 /** The violations found in one page, kept once each (rule, path and element). */
@@ -89,6 +117,8 @@ class PageAudit {
   private dirty = false;
   private closed = false;
   private queue: Promise<void> = Promise.resolve();
+  /** The last check of a page that stood still while axe looked, and its answer. */
+  private last?: { path: string; violations: A11yViolation[] };
   reported = false;
 
   constructor(readonly page: Page) {
@@ -143,8 +173,15 @@ class PageAudit {
       if (this.closed || this.page.url().startsWith('about:')) return [];
       const path = this.path;
       try {
-        const raw = await runAxe(this.page, force && attempt === attempts);
-        if (raw) return this.record(raw, path);
+        // Axe on a large page takes seconds: a page that has not moved since its last check
+        // (the one after its navigation, or the test's own) keeps that check's answer.
+        if (this.last?.path === path && (await unmoved(this.page))) return this.last.violations;
+        const ran = await runAxe(this.page, force && attempt === attempts);
+        if (ran) {
+          const violations = this.record(ran.raw, path);
+          this.last = ran.still ? { path, violations } : undefined;
+          return violations;
+        }
       } catch (error) {
         // The test navigated or closed the page while axe looked: the next state gets its check.
         if (this.closed || /context was destroyed|Target .*closed|navigat/i.test(String(error))) return [];

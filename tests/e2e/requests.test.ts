@@ -81,7 +81,8 @@ describe('requests', () => {
     try {
       await signIn(desk, 'foreman', '/district');
       const link = desk.locator('[data-test="open-requests"]');
-      await expect.poll(async () => Number(await link.locator('[data-test="open-requests-count"]').innerText())).toBeGreaterThan(0);
+      // The count shows 0 until the list has loaded, which on a busy machine takes more than the poll's default second.
+      await expect.poll(async () => Number(await link.locator('[data-test="open-requests-count"]').innerText()), { timeout: 20_000 }).toBeGreaterThan(0);
       await link.click();
       await desk.waitForURL((url) => url.pathname === '/requests');
       await desk.locator(`[data-test="open-request-${requestId}"]`).click();
