@@ -1,18 +1,10 @@
 import type { CreateEquipmentInput, EquipmentAnswer, EquipmentList, EquipmentRow, UpdateEquipmentInput } from '@swardwise/domain';
 import { api } from './client.ts';
+import { rowWrites } from './rowWrites.ts';
 
 export async function listEquipment(signal?: AbortSignal): Promise<EquipmentRow[]> {
   return (await api.get<EquipmentList>('/equipment', undefined, signal)).items;
 }
 
-export async function createEquipment(input: CreateEquipmentInput): Promise<EquipmentRow> {
-  return (await api.post<EquipmentAnswer>('/equipment', input)).equipment;
-}
-
-export async function updateEquipment(id: number, input: UpdateEquipmentInput): Promise<EquipmentRow> {
-  return (await api.patch<EquipmentAnswer>(`/equipment/${id}`, input)).equipment;
-}
-
-export async function removeEquipment(id: number, version: number): Promise<void> {
-  await api.delete<void>(`/equipment/${id}?version=${version}`);
-}
+const writes = rowWrites<EquipmentAnswer, CreateEquipmentInput, UpdateEquipmentInput>('equipment', 'equipment');
+export const { create: createEquipment, update: updateEquipment, remove: removeEquipment } = writes;

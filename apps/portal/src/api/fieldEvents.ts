@@ -1,5 +1,6 @@
 import type { CreateFieldEventInput, FieldEventAnswer, FieldEventList, FieldEventRow, UpdateFieldEventInput } from '@swardwise/domain';
 import { api } from './client.ts';
+import { rowWrites } from './rowWrites.ts';
 
 /** Without dates the API answers from today for three months. */
 export interface FieldEventQuery {
@@ -14,14 +15,5 @@ export async function listFieldEvents(query: FieldEventQuery, signal?: AbortSign
   return (await api.get<FieldEventList>('/field-events', { ...query }, signal)).items;
 }
 
-export async function createFieldEvent(input: CreateFieldEventInput): Promise<FieldEventRow> {
-  return (await api.post<FieldEventAnswer>('/field-events', input)).event;
-}
-
-export async function updateFieldEvent(id: number, input: UpdateFieldEventInput): Promise<FieldEventRow> {
-  return (await api.patch<FieldEventAnswer>(`/field-events/${id}`, input)).event;
-}
-
-export async function removeFieldEvent(id: number, version: number): Promise<void> {
-  await api.delete<void>(`/field-events/${id}?version=${version}`);
-}
+const writes = rowWrites<FieldEventAnswer, CreateFieldEventInput, UpdateFieldEventInput>('field-events', 'event');
+export const { create: createFieldEvent, update: updateFieldEvent, remove: removeFieldEvent } = writes;

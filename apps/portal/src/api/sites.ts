@@ -1,5 +1,6 @@
 import type { CreateSiteInput, SiteAnswer, SiteDetailAnswer, SiteList, SiteRow, UpdateSiteInput } from '@swardwise/domain';
 import { api } from './client.ts';
+import { rowWrites } from './rowWrites.ts';
 
 export async function listSites(query: { districtId?: number } = {}, signal?: AbortSignal): Promise<SiteRow[]> {
   return (await api.get<SiteList>('/sites', query, signal)).items;
@@ -10,10 +11,5 @@ export function getSite(id: number, signal?: AbortSignal): Promise<SiteDetailAns
   return api.get<SiteDetailAnswer>(`/sites/${id}`, undefined, signal);
 }
 
-export async function createSite(input: CreateSiteInput): Promise<SiteRow> {
-  return (await api.post<SiteAnswer>('/sites', input)).site;
-}
-
-export async function updateSite(id: number, input: UpdateSiteInput): Promise<SiteRow> {
-  return (await api.patch<SiteAnswer>(`/sites/${id}`, input)).site;
-}
+const writes = rowWrites<SiteAnswer, CreateSiteInput, UpdateSiteInput>('sites', 'site');
+export const { create: createSite, update: updateSite } = writes;

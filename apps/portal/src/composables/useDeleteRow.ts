@@ -1,5 +1,6 @@
-import { ElMessage, ElMessageBox } from 'element-plus';
+import { ElMessage } from 'element-plus';
 import { errorMessage, isConflict } from '../api/messages.ts';
+import { confirmed } from '../utils/confirm.ts';
 
 /**
  * Deletes a row after a confirmation, sending the version the person saw; a 409 says
@@ -7,16 +8,7 @@ import { errorMessage, isConflict } from '../api/messages.ts';
  */
 export function useDeleteRow<Row extends { id: number; version: number }>(remove: (id: number, version: number) => Promise<void>, reload: () => Promise<void>) {
   return async function deleteRow(row: Row, name: string, consequence = '') {
-    try {
-      await ElMessageBox.confirm(`${name} will be removed.${consequence ? ` ${consequence}` : ''}`, `Delete ${name}?`, {
-        confirmButtonText: 'Delete',
-        cancelButtonText: 'Cancel',
-        type: 'warning',
-        confirmButtonClass: 'el-button--danger',
-      });
-    } catch {
-      return false;
-    }
+    if (!(await confirmed(`${name} will be removed.${consequence ? ` ${consequence}` : ''}`, `Delete ${name}?`, { confirm: 'Delete', danger: true }))) return false;
     try {
       await remove(row.id, row.version);
       ElMessage.success(`${name} is deleted.`);

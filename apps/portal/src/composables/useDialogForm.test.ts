@@ -1,6 +1,6 @@
 import { describe, expect, test, vi } from 'vitest';
 import { computed, ref } from 'vue';
-import { resetOnOpen, useEditDialog } from './useDialogForm.ts';
+import { resetOnOpen, useDialogForm, useEditDialog } from './useDialogForm.ts';
 
 describe('useEditDialog', () => {
   test('should open on the row to edit, or on none for a new one', () => {
@@ -38,5 +38,23 @@ describe('resetOnOpen', () => {
     open.value = false;
     await Promise.resolve();
     expect(fill).toHaveBeenCalledTimes(1);
+  });
+});
+
+describe('useDialogForm', () => {
+  test('should fill on opening and hand FormDialog the model, the rules read late, the submission and save', async () => {
+    const open = ref(false);
+    const model = { name: '' };
+    const fill = vi.fn(() => void (model.name = 'Alder Green'));
+    const save = vi.fn(async () => undefined);
+    const late: { rules?: { name: { required: boolean }[] } } = {};
+    const dialog = useDialogForm(open, { model, row: () => null, fill, rules: () => late.rules, save });
+    const rules = { name: [{ required: true }] };
+    late.rules = rules;
+    open.value = true;
+    await Promise.resolve();
+    expect(fill).toHaveBeenCalledTimes(1);
+    expect(dialog.form.value).toEqual({ model: { name: 'Alder Green' }, rules, submission: dialog.submission, save });
+    expect(dialog.serverErrors).toBe(dialog.submission.serverErrors);
   });
 });

@@ -1,9 +1,10 @@
 import { useAbility } from '@casl/vue';
 import { asSubject, type AppAbility, type DistrictRow } from '@swardwise/domain';
-import { computed, ref, shallowRef, watch, type Ref } from 'vue';
+import type { FormRules } from 'element-plus';
+import { computed, ref, shallowRef, toValue, watch, type MaybeRefOrGetter, type Ref } from 'vue';
 import { rowOptions } from '../utils/options.ts';
 import type { QueryState } from './useApiQuery.ts';
-import type { FormSubmit } from './useFormSubmit.ts';
+import { useFormSubmit, type FormSubmit, type FormSubmitOptions } from './useFormSubmit.ts';
 
 /**
  * A create-or-edit dialog starts afresh each time it opens (and when the row it edits changes
@@ -21,6 +22,22 @@ export function resetOnOpen(open: Ref<boolean>, row: () => unknown, fill: () => 
     },
     { immediate: true },
   );
+}
+
+/**
+ * A form dialog's form: its submit cycle (`useFormSubmit(options)`), the model filled afresh
+ * each time the dialog opens (`resetOnOpen` with `row` and `fill`), and `form`, what FormDialog
+ * needs of it — model, rules, submission and save — for `<FormDialog v-bind="form">`. `rules`
+ * may be a getter, read when the dialog renders, for rules declared further down.
+ */
+export function useDialogForm(
+  open: Ref<boolean>,
+  setup: { model: object; row: () => unknown; fill: () => void; rules?: MaybeRefOrGetter<FormRules | undefined>; save: () => Promise<unknown>; options?: FormSubmitOptions },
+) {
+  const submission = useFormSubmit(setup.options);
+  resetOnOpen(open, setup.row, setup.fill, submission);
+  const form = computed(() => ({ model: setup.model, rules: toValue(setup.rules), submission, save: setup.save }));
+  return { submission, serverErrors: submission.serverErrors, form };
 }
 
 /**

@@ -2,6 +2,7 @@ import { updateUserSchema, type UserRow } from '@swardwise/domain';
 import { ElMessage, ElMessageBox } from 'element-plus';
 import { errorMessage, isConflict } from '../api/messages.ts';
 import { updateUser } from '../api/users.ts';
+import { confirmed } from '../utils/confirm.ts';
 
 /** Deactivation and reactivation with a confirmation, and the shared answer to a 409. */
 export function useUserActions(reload: () => Promise<void>) {
@@ -15,16 +16,7 @@ export function useUserActions(reload: () => Promise<void>) {
     const message = active
       ? `${user.name} will be able to sign in again with their current password.`
       : `${user.name} will be signed out everywhere and cannot sign in until reactivated. Their history stays.`;
-    try {
-      await ElMessageBox.confirm(message, `${verb} ${user.name}?`, {
-        confirmButtonText: verb,
-        cancelButtonText: 'Cancel',
-        type: active ? 'info' : 'warning',
-        confirmButtonClass: active ? '' : 'el-button--danger',
-      });
-    } catch {
-      return;
-    }
+    if (!(await confirmed(message, `${verb} ${user.name}?`, { confirm: verb, type: active ? 'info' : 'warning', danger: !active }))) return;
     try {
       // Without a role the API keeps the stored role and scope: only `active` changes.
       const patch = updateUserSchema.parse({ version: user.version, active });
