@@ -73,6 +73,8 @@ export default defineConfig({
           root: './apps/portal',
           include: ['src/**/*.test.ts'],
           environment: 'happy-dom',
+          // Mounting Element Plus components takes seconds when the browser tests share the cores.
+          testTimeout: 20_000,
           server: { deps: { inline: ['@vue-leaflet/vue-leaflet', 'element-plus'] } },
         },
       },
