@@ -5,12 +5,12 @@
  */
 import { and, asc, between, eq } from 'drizzle-orm';
 import { errors, fieldFrame, fieldFrameToLngLat, linePlanFigures, type FieldLinePlan, type LineMarkerChoice, type Polygon, type SetFieldLinePlanInput } from '@swardwise/domain';
-import PDFDocument from 'pdfkit';
 import type { Db, Queryable } from '../db/client.ts';
 import { equipment, fieldEvents, fieldLinePlans, fields, sites, users } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import type { Ctx } from './context.ts';
 import { getField } from './fields.ts';
+import { pdfDocument } from './pdf.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 import { writable } from './versioned.ts';
 
@@ -128,10 +128,7 @@ const fmt = (v: number, d = 2) => v.toFixed(d);
 export async function setOutPdf(ctx: Ctx, fieldId: number, season: string, paper: 'A4' | 'LETTER'): Promise<Buffer> {
   const { field, frame, figures, toLngLat } = await linePlanFiguresOf(ctx, fieldId, season);
   if (!figures.layouts.length) throw errors.invalid(`${field.name} has no line plan yet: add a layout first`, []);
-  const doc = new PDFDocument({ size: paper, margin: 40, info: { Title: `Set-out sheet, ${field.name}, ${season}`, Author: 'Swardwise' } });
-  const chunks: Buffer[] = [];
-  doc.on('data', (c: Buffer) => chunks.push(c));
-  const done = new Promise<Buffer>((resolve) => doc.on('end', () => resolve(Buffer.concat(chunks))));
+  const { doc, done } = pdfDocument({ size: paper, margin: 40, info: { Title: `Set-out sheet, ${field.name}, ${season}`, Author: 'Swardwise' } });
   const left = doc.page.margins.left;
   const usable = doc.page.width - left - doc.page.margins.right;
 
