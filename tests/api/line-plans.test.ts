@@ -3,24 +3,13 @@ import { eq } from 'drizzle-orm';
 import { describe, expect, test } from 'vitest';
 import { auditLog, equipment, fieldLinePlans } from '../../apps/api/src/db/schema/index.ts';
 import { useTestApi } from '../support/app.ts';
+import { linePlanBody } from '../support/bodies.ts';
 import { getPdf, renderPdf } from '../support/pdf.ts';
 
 const api = useTestApi();
 const db = () => api.database.db;
 
-const body = (over: Record<string, unknown> = {}) => ({
-  layouts: [
-    { layout: 'soccer_full', lengthM: 100, widthM: 64, colour: '#ffffff', alongM: 0, acrossM: 0, rotationDeg: 0 },
-    { layout: 'soccer_7v7', lengthM: null, widthM: null, colour: '#1f6fd1', alongM: -24, acrossM: 0, rotationDeg: 90 },
-  ],
-  paint: { dilutionWaterPerPaint: 1, coats: 1, passes: 2 },
-  markerId: null,
-  seasonStart: '03-01',
-  seasonEnd: '11-30',
-  shifts: { '2026': { alongM: 2, acrossM: 0 } },
-  version: null,
-  ...over,
-});
+const body = linePlanBody;
 
 async function marker(districtId: number, name: string) {
   const [row] = await db().insert(equipment).values({ districtId, kind: 'line_marker', name, speedKmh: 4 }).returning();
