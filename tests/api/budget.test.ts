@@ -3,10 +3,6 @@
  * actual to date summed from the work records (hand-worked below), the CSV read back and the
  * PDF rendered.
  */
-import { execFileSync } from 'node:child_process';
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import Papa from 'papaparse';
 import sharp from 'sharp';
 import { and, eq } from 'drizzle-orm';
@@ -14,6 +10,7 @@ import { beforeAll, describe, expect, test } from 'vitest';
 import { DEFAULT_COSTS, type BudgetAnswer } from '@swardwise/domain';
 import { applications, auditLog, budgetLines, equipment, fields, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { useTestApi } from '../support/app.ts';
+import { getPdf, renderPdf } from '../support/pdf.ts';
 
 const api = useTestApi();
 const SEASON = 2026;
@@ -192,31 +189,16 @@ describe('the budget exports', () => {
   test('should print a report with its chart that renders (pdftoppm)', async () => {
     const head = await api.signIn('head');
     await head.patch('/api/budget/line').send({ season: SEASON, districtId: null, line: 'water', amount: 900 }).expect(200);
-    const res = await head.get(`/api/budget/report.pdf?season=${SEASON}`).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
-    expect(res.status).toBe(200);
-    expect(res.headers['content-type']).toBe('application/pdf');
-    const pdf = res.body as Buffer;
-    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
-    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'budget-pdf-'));
-    fs.writeFileSync(path.join(dir, 'budget.pdf'), pdf);
-    execFileSync('pdftoppm', ['-png', '-r', '60', path.join(dir, 'budget.pdf'), path.join(dir, 'page')]);
-    const pages = fs.readdirSync(dir).filter((f) => f.endsWith('.png')).sort();
-    expect(pages).toHaveLength(1);
-    const png = path.join(dir, pages[0]!);
-    const out = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
-    fs.mkdirSync(out, { recursive: true });
-    fs.copyFileSync(png, path.join(out, 'budget-report-pdf.png'));
-    const { data } = await sharp(png).greyscale().raw().toBuffer({ resolveWithObject: true });
+    const sheet = renderPdf(await getPdf(head, `/api/budget/report.pdf?season=${SEASON}`), 'budget-report-pdf');
+    expect(sheet.pages).toHaveLength(1);
+    const { data } = await sharp(sheet.pages[0]!).greyscale().raw().toBuffer({ resolveWithObject: true });
     const dark = data.filter((v) => v < 160).length / data.length;
     // Text, the bars and the table: ink on part of the page, not none, not all.
     expect(dark).toBeGreaterThan(0.02);
     expect(dark).toBeLessThan(0.5);
-    const text = execFileSync('pdftotext', [path.join(dir, 'budget.pdf'), '-']).toString();
+    const text = sheet.text();
     expect(text).toContain('Cost (USD)');
     expect(text).toContain('Budget line');
+    sheet.remove();
   });
 });

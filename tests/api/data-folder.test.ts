@@ -2,12 +2,11 @@
  * A data folder the server may not write, or a disk with no room, stops the start with one
  * line naming the folder and what to do, not a stack trace from inside PGlite.
  */
-import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { describe, expect, test } from 'vitest';
-import { repoRoot } from '../../apps/api/src/config.ts';
+import { runUntilExit, SERVER_COMMAND } from '../support/server-exit.ts';
 import { checkDataFolder } from '../../apps/api/src/db/data-folder.ts';
 import { StartupError } from '../../apps/api/src/services/first-run.ts';
 
@@ -48,16 +47,7 @@ describe('the server process', () => {
       for (const name of ['DEMO', 'SEED_DEMO', 'DATABASE_URL']) delete env[name];
       // root writes anywhere: the server then runs as nobody, for whom the folder is read-only.
       const asRoot = process.getuid?.() === 0;
-      const [command, args] = asRoot
-        ? ['setpriv', ['--reuid=65534', '--regid=65534', '--clear-groups', process.execPath, '--import', 'tsx', 'apps/api/src/server.ts']]
-        : [process.execPath, ['--import', 'tsx', 'apps/api/src/server.ts']];
-      const child = spawn(command, args, { cwd: repoRoot, env, stdio: ['ignore', 'pipe', 'pipe'] });
-      let output = '';
-      child.stdout.on('data', (d) => (output += d));
-      child.stderr.on('data', (d) => (output += d));
-      const guard = setTimeout(() => child.kill('SIGKILL'), 150_000);
-      const code = await new Promise<number | null>((resolve) => child.on('exit', resolve));
-      clearTimeout(guard);
+      const { code, output } = await runUntilExit(env, asRoot ? ['setpriv', ['--reuid=65534', '--regid=65534', '--clear-groups', SERVER_COMMAND[0], ...SERVER_COMMAND[1]]] : SERVER_COMMAND);
       expect(code).toBe(1);
       expect(output.trim()).toMatch(new RegExp(`^Swardwise cannot start: the data folder ${readOnly}/pglite is read-only \\((EACCES|EPERM|EROFS)\\)\\. Give the user running Swardwise write access to it, or set PGLITE_DIR to a folder it may write\\.$`));
     } finally {

@@ -3,7 +3,6 @@
  * production without it creates the first administrator from ADMIN_EMAIL / ADMIN_PASSWORD,
  * or refuses to start.
  */
-import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -18,6 +17,7 @@ import { districts, settings, users } from '../../apps/api/src/db/schema/index.t
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { prepareInstallation, StartupError } from '../../apps/api/src/services/first-run.ts';
 import { useEmptyDatabase } from '../support/app.ts';
+import { runUntilExit } from '../support/server-exit.ts';
 
 /** A logger whose lines are kept, and a printer for the one-time link. */
 function capture() {
@@ -160,14 +160,7 @@ describe('the server process', () => {
     try {
       const env: NodeJS.ProcessEnv = { ...process.env, NODE_ENV: 'production', PORT: '0', HOST: '127.0.0.1', PGLITE_DIR: path.join(dir, 'pglite'), UPLOADS_DIR: path.join(dir, 'uploads'), LOG_LEVEL: 'warn' };
       for (const name of ['DEMO', 'SEED_DEMO', 'ADMIN_EMAIL', 'ADMIN_PASSWORD', 'DATABASE_URL']) delete env[name];
-      const child = spawn(process.execPath, ['--import', 'tsx', 'apps/api/src/server.ts'], { cwd: repoRoot, env, stdio: ['ignore', 'pipe', 'pipe'] });
-      let output = '';
-      child.stdout.on('data', (d) => (output += d));
-      child.stderr.on('data', (d) => (output += d));
-      // A server that starts instead of refusing is stopped, so the check fails rather than hangs.
-      const guard = setTimeout(() => child.kill('SIGKILL'), 150_000);
-      const code = await new Promise<number | null>((resolve) => child.on('exit', resolve));
-      clearTimeout(guard);
+      const { code, output } = await runUntilExit(env);
       expect(code).toBe(1);
       expect(output).toContain('Swardwise cannot start: This is a new installation and nobody can sign in yet.');
       expect(output).not.toMatch(/at prepareInstallation/);

@@ -1,12 +1,9 @@
-import { execFileSync } from 'node:child_process';
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import { and, eq } from 'drizzle-orm';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
+import { getPdf, renderPdf } from '../support/pdf.ts';
 
 let api: TestApi;
 // A Wednesday inside the fixture's weather (4 May – 7 June 2026).
@@ -170,31 +167,15 @@ describe('game-day preparation', () => {
 describe('the checklist PDF', () => {
   test('should render as one non-blank page, and only for those who may read the preparation', async () => {
     const foreman = await api.signIn('foreman');
-    const res = await foreman.get(`/api/game-days/${ids.stadiumPrep}/checklist.pdf`).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
-    expect(res.status).toBe(200);
-    expect(res.headers['content-type']).toBe('application/pdf');
-    const pdf = res.body as Buffer;
-    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
-    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'game-day-pdf-'));
-    fs.writeFileSync(path.join(dir, 'checklist.pdf'), pdf);
-    execFileSync('pdftoppm', ['-png', '-r', '60', path.join(dir, 'checklist.pdf'), path.join(dir, 'page')]);
-    const pages = fs.readdirSync(dir).filter((f) => f.endsWith('.png')).sort();
-    expect(pages).toHaveLength(1);
-    const png = path.join(dir, pages[0]!);
-    const out = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
-    fs.mkdirSync(out, { recursive: true });
-    fs.copyFileSync(png, path.join(out, 'game-day-checklist-pdf.png'));
-    const { data, info } = await sharp(png).greyscale().raw().toBuffer({ resolveWithObject: true });
+    const sheet = renderPdf(await getPdf(foreman, `/api/game-days/${ids.stadiumPrep}/checklist.pdf`), 'game-day-checklist-pdf');
+    expect(sheet.pages).toHaveLength(1);
+    const { data, info } = await sharp(sheet.pages[0]!).greyscale().raw().toBuffer({ resolveWithObject: true });
     expect(info.width).toBe(510); // US Letter, 8.5 in at 60 dpi
     const dark = data.filter((v) => v < 128).length / data.length;
     // Text and the table's rules: ink on part of the page, not none, not all.
     expect(dark).toBeGreaterThan(0.01);
     expect(dark).toBeLessThan(0.3);
-    fs.rmSync(dir, { recursive: true, force: true });
+    sheet.remove();
 
     expect((await (await api.signIn('foremanSouth')).get(`/api/game-days/${ids.stadiumPrep}/checklist.pdf`)).status).toBe(404);
     expect((await (await api.signIn('partner')).get(`/api/game-days/${ids.stadiumPrep}/checklist.pdf`)).status).toBe(200);

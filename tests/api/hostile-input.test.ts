@@ -15,6 +15,7 @@ import { fieldRequests } from '../../apps/api/src/db/schema/index.ts';
 import { withoutNegligible } from '../../apps/api/src/http/validate.ts';
 import { ROUTES } from '../../apps/api/src/openapi/routes.ts';
 import { useTestApi } from '../support/app.ts';
+import { linePlanBody, newFieldBody } from '../support/bodies.ts';
 import { giveWork } from '../support/fixture.ts';
 import { CHECK, MATRIX } from '../support/route-matrix.ts';
 
@@ -77,17 +78,7 @@ const FUZZ: FuzzRow[] = [
   {
     route: 'POST /api/fields',
     url: () => '/api/fields',
-    base: (i) => ({
-      siteId: i.site,
-      name: 'Fuzz field',
-      sport: 'soccer',
-      grass: 'tall_fescue',
-      rootzone: 'native_soil',
-      irrigation: 'none',
-      maintenanceLevel: 3,
-      clippings: 'returned',
-      geometry: { type: 'Polygon', coordinates: [[[-66.4, 37.7], [-66.399, 37.7], [-66.399, 37.701], [-66.4, 37.701], [-66.4, 37.7]]] },
-    }),
+    base: (i) => newFieldBody(i.site, 'Fuzz field'),
   },
   { route: 'PATCH /api/fields/:id', url: (i) => `/api/fields/${i.field}`, base: () => ({ version: V, notes: 'x', maintenanceLevel: 2, hocOverrideMm: 40 }) },
   { route: 'DELETE /api/fields/:id', url: (i) => `/api/fields/${i.field}`, base: () => ({ version: V }), query: true },
@@ -140,15 +131,7 @@ const FUZZ: FuzzRow[] = [
   {
     route: 'PATCH /api/fields/:id/lines',
     url: (i) => `/api/fields/${i.field}/lines`,
-    base: () => ({
-      layouts: [{ layout: 'soccer_full', lengthM: 100, widthM: 64, colour: '#ffffff', alongM: 0, acrossM: 0, rotationDeg: 0 }],
-      paint: { dilutionWaterPerPaint: 1, coats: 1, passes: 2 },
-      markerId: null,
-      seasonStart: '03-01',
-      seasonEnd: '11-30',
-      shifts: { '2026': { alongM: 2, acrossM: 0 } },
-      version: null,
-    }),
+    base: () => linePlanBody({ layouts: [{ layout: 'soccer_full', lengthM: 100, widthM: 64, colour: '#ffffff', alongM: 0, acrossM: 0, rotationDeg: 0 }] }),
   },
   { route: 'PATCH /api/fields/:id/logos/:logoId', url: (i) => `/api/fields/${i.field}/logos/1`, base: () => ({ version: V, centerXM: 50, centerYM: 30, widthM: 8, rotationDeg: 30, gridSpacingM: 1 }) },
   { route: 'DELETE /api/fields/:id/logos/:logoId', url: (i) => `/api/fields/${i.field}/logos/1`, base: () => ({ version: V }), query: true },

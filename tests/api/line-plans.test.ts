@@ -1,28 +1,15 @@
-import { execFileSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, writeFileSync, mkdirSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { readFileSync } from 'node:fs';
 import { eq } from 'drizzle-orm';
 import { describe, expect, test } from 'vitest';
 import { auditLog, equipment, fieldLinePlans } from '../../apps/api/src/db/schema/index.ts';
 import { useTestApi } from '../support/app.ts';
+import { linePlanBody } from '../support/bodies.ts';
+import { getPdf, renderPdf } from '../support/pdf.ts';
 
 const api = useTestApi();
 const db = () => api.database.db;
 
-const body = (over: Record<string, unknown> = {}) => ({
-  layouts: [
-    { layout: 'soccer_full', lengthM: 100, widthM: 64, colour: '#ffffff', alongM: 0, acrossM: 0, rotationDeg: 0 },
-    { layout: 'soccer_7v7', lengthM: null, widthM: null, colour: '#1f6fd1', alongM: -24, acrossM: 0, rotationDeg: 90 },
-  ],
-  paint: { dilutionWaterPerPaint: 1, coats: 1, passes: 2 },
-  markerId: null,
-  seasonStart: '03-01',
-  seasonEnd: '11-30',
-  shifts: { '2026': { alongM: 2, acrossM: 0 } },
-  version: null,
-  ...over,
-});
+const body = linePlanBody;
 
 async function marker(districtId: number, name: string) {
   const [row] = await db().insert(equipment).values({ districtId, kind: 'line_marker', name, speedKmh: 4 }).returning();
@@ -97,28 +84,15 @@ describe('field line plans', () => {
     const id = api.fixture.fields.southBaseball;
     expect((await foreman.patch(`/api/fields/${id}/lines`).send(body())).status).toBe(200);
     for (const paper of ['a4', 'letter']) {
-      const res = await foreman.get(`/api/fields/${id}/lines/set-out.pdf?season=2026&paper=${paper}`).buffer(true).parse((r, cb) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (c: Buffer) => chunks.push(c));
-        r.on('end', () => cb(null, Buffer.concat(chunks)));
-      });
-      expect(res.status).toBe(200);
-      expect(res.headers['content-type']).toMatch(/application\/pdf/);
-      const pdf = res.body as Buffer;
-      expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
-      const dir = mkdtempSync(join(tmpdir(), 'setout-'));
-      writeFileSync(join(dir, 'sheet.pdf'), pdf);
-      const text = execFileSync('pdftotext', ['-layout', join(dir, 'sheet.pdf'), '-'], { encoding: 'utf8' });
+      const sheet = renderPdf(await getPdf(foreman, `/api/fields/${id}/lines/set-out.pdf?season=2026&paper=${paper}`), `set-out-sheet-${paper}`);
+      const text = sheet.text(true);
       expect(text).toMatch(/Set-out sheet/);
       expect(text).toMatch(/Corner A \(reference\)/);
       expect(text).toMatch(/Diagonal A–C/);
       expect(text).toMatch(/118\.73 m/); // √(100² + 64²) = 118.727
-      execFileSync('pdftoppm', ['-png', '-r', '60', join(dir, 'sheet.pdf'), join(dir, 'page')]);
-      const png = readFileSync(join(dir, 'page-1.png'));
+      const png = readFileSync(sheet.pages[0]!);
       expect(png.subarray(1, 4).toString()).toBe('PNG');
-      const out = join(process.cwd(), 'tests/.artifacts/screenshots');
-      mkdirSync(out, { recursive: true });
-      writeFileSync(join(out, `set-out-sheet-${paper}.png`), png);
+      sheet.remove();
     }
     expect((await foreman.get(`/api/fields/${id}/lines/set-out.pdf?paper=a3`)).status).toBe(400);
   });

@@ -1,4 +1,3 @@
-import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -8,11 +7,11 @@ import { describe, expect, test } from 'vitest';
 import { auditLog, fieldLogos } from '../../apps/api/src/db/schema/index.ts';
 import { useTestApi } from '../support/app.ts';
 import { giveWork } from '../support/fixture.ts';
+import { getPdf, renderPdf } from '../support/pdf.ts';
 
 const uploads = fs.mkdtempSync(path.join(os.tmpdir(), 'sw-logos-'));
 const api = useTestApi({ UPLOADS_DIR: uploads });
 const db = () => api.database.db;
-const artifacts = path.resolve(import.meta.dirname, '../.artifacts');
 
 /** Left half red, right half white with a blue disc of radius 40 (a quarter of the picture is blue: π·40² ÷ 20,000 = 0.2513). */
 const LOGO_SVG = `<svg xmlns="http://www.w3.org/2000/svg" width="200" height="100" viewBox="0 0 200 100">
@@ -69,30 +68,18 @@ describe('field logos', () => {
     expect(image.status).toBe(200);
     expect(image.headers['content-type']).toBe('image/png');
 
-    const pdf = await foreman.get(`/api/fields/${id}/logos/${logo.id}/grid.pdf`).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
-    expect(pdf.status).toBe(200);
-    expect(pdf.headers['content-type']).toBe('application/pdf');
-    const body = pdf.body as Buffer;
-    expect(body.subarray(0, 5).toString()).toBe('%PDF-');
-    fs.mkdirSync(artifacts, { recursive: true });
-    const pdfPath = path.join(artifacts, 'logo-grid.pdf');
-    fs.writeFileSync(pdfPath, body);
-    execFileSync('pdftoppm', ['-png', '-r', '60', '-singlefile', pdfPath, path.join(artifacts, 'logo-grid')]);
-    const png = path.join(artifacts, 'logo-grid.png');
-    const { data, info } = await sharp(png).raw().toBuffer({ resolveWithObject: true });
+    const sheet = renderPdf(await getPdf(foreman, `/api/fields/${id}/logos/${logo.id}/grid.pdf`), 'logo-grid');
+    const { data, info } = await sharp(sheet.pages[0]!).raw().toBuffer({ resolveWithObject: true });
     expect(info.width).toBeGreaterThan(info.height);
     // The logo's red is on the page (drawn over the grid), not only in the swatches.
     let red = 0;
     for (let i = 0; i < data.length; i += info.channels) if (data[i]! > 150 && data[i + 1]! < 60 && data[i + 2]! < 60) red++;
     expect(red).toBeGreaterThan(2000);
-    const text = execFileSync('pdftotext', [pdfPath, '-']).toString();
+    const text = sheet.text();
     expect(text).toMatch(/Reference corner R/);
     expect(text).toMatch(/White base coat under colours/);
     expect(text).toMatch(/Dark pigments/);
+    sheet.remove();
 
     expect((await foreman.delete(`/api/fields/${id}/logos/${logo.id}?version=1`)).status).toBe(409);
     expect((await foreman.delete(`/api/fields/${id}/logos/${logo.id}?version=2`)).status).toBe(204);

@@ -11,6 +11,7 @@ import type { Db } from '../../apps/api/src/db/client.ts';
 import { calendarFeeds } from '../../apps/api/src/db/schema/index.ts';
 import type supertest from 'supertest';
 import { DEFAULT_COSTS, type Role } from '@swardwise/domain';
+import { newFieldBody } from './bodies.ts';
 
 export type Agent = ReturnType<typeof supertest.agent>;
 /** A request on its way (supertest's Test) or the answer of one awaited first. */
@@ -209,17 +210,7 @@ export const MATRIX: MatrixRow[] = [
     route: 'POST /api/fields',
     allow: 'admin head foreman:own',
     call: (c) =>
-      c.agent.post('/api/fields').send({
-        siteId: c.ids.site,
-        name: `Matrix ${c.n}`,
-        sport: 'soccer',
-        grass: 'tall_fescue',
-        rootzone: 'native_soil',
-        irrigation: 'none',
-        maintenanceLevel: 3,
-        clippings: 'returned',
-        geometry: { type: 'Polygon', coordinates: [[[-66.4, 37.7], [-66.399, 37.7], [-66.399, 37.701], [-66.4, 37.701], [-66.4, 37.7]]] },
-      }),
+      c.agent.post('/api/fields').send(newFieldBody(c.ids.site, `Matrix ${c.n}`)),
   },
   { route: 'GET /api/fields/:id', allow: 'admin head foreman:own crew:own partner:own', call: (c) => c.agent.get(`/api/fields/${c.ids.field}`) },
   { route: 'PATCH /api/fields/:id', allow: 'admin head foreman:own', call: (c) => c.agent.patch(`/api/fields/${c.ids.field}`).send({ version: STALE, notes: 'x' }) },

@@ -3,8 +3,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { addDaysIso, createFieldEventSchema, idSchema, isoDateSchema as isoDate, updateFieldEventSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
-import { parse } from '../http/validate.ts';
+import type { Ctx } from '../services/context.ts';
 import { createFieldEvent, deleteFieldEvent, getRow as fieldEventRow, listFieldEvents, updateFieldEvent } from '../services/field-events.ts';
 import { writeRoutes } from './write-routes.ts';
 
@@ -31,12 +30,9 @@ export const listQuery = (today: string) => z
 export function fieldEventsRouter({ db }: AppDeps): Router {
   const router = Router();
 
-  router.get('/', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    res.json({ items: await listFieldEvents(ctx, parse(listQuery(ctx.clock.today()), req.query, 'query')) });
-  });
   writeRoutes(router, db, '/', 'event', {
     guard: { subject: 'FieldEvent', resource: 'field_event', row: fieldEventRow },
+    list: { query: (ctx: Ctx) => listQuery(ctx.clock.today()), run: listFieldEvents },
     create: { body: createFieldEventSchema, run: createFieldEvent },
     update: { body: updateFieldEventSchema, run: updateFieldEvent },
     remove: deleteFieldEvent,

@@ -5,8 +5,8 @@ import { idParamSchema, setFieldLinePlanSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { authorize } from '../services/context.ts';
-import { authorizeLinePlanWrite, getFieldLinePlan, setFieldLinePlan, setOutPdf } from '../services/line-plans.ts';
+import { getFieldLinePlan, setFieldLinePlan, setOutPdf } from '../services/line-plans.ts';
+import { fieldSettingRoutes } from './write-routes.ts';
 
 export const setOutQuerySchema = z.object({
   season: z.string().regex(/^\d{4}$/, 'season must be a four-digit year').optional(),
@@ -16,20 +16,7 @@ export const setOutQuerySchema = z.object({
 export function linePlansRouter({ db }: AppDeps): Router {
   const router = Router();
 
-  router.get('/:id/lines', async (req, res) => {
-    const { id } = parse(idParamSchema, req.params, 'params');
-    res.json({ linePlan: await getFieldLinePlan(ctxOf(db, req), id) });
-  });
-
-  router.patch('/:id/lines', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    // A crew lead or a partner is refused before anything is read; a foreman of another
-    // district once the field's scope is known, still before the body.
-    authorize(ctx, 'update', 'Field');
-    const { id } = parse(idParamSchema, req.params, 'params');
-    await authorizeLinePlanWrite(ctx, id);
-    res.json({ linePlan: await setFieldLinePlan(ctx, id, parse(setFieldLinePlanSchema, req.body, 'body')) });
-  });
+  fieldSettingRoutes(router, db, 'lines', 'linePlan', { get: getFieldLinePlan, body: setFieldLinePlanSchema, set: setFieldLinePlan });
 
   router.get('/:id/lines/set-out.pdf', async (req, res) => {
     const ctx = ctxOf(db, req);

@@ -7,9 +7,10 @@ import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
 import { authorize } from '../services/context.ts';
+import { authorizeFieldWrite } from '../services/field-write.ts';
 import { LOGO_MAX_BYTES } from '../services/logo-files.ts';
 import { logoGridPdf } from '../services/logo-pdf.ts';
-import { addFieldLogo, authorizeLogoWrite, getFieldLogo, listFieldLogos, logoRenderFile, removeFieldLogo, updateFieldLogo } from '../services/logos.ts';
+import { addFieldLogo, getFieldLogo, listFieldLogos, logoRenderFile, removeFieldLogo, updateFieldLogo } from '../services/logos.ts';
 import { versionQuerySchema } from './write-routes.ts';
 
 const receiveLogo = receiveUpload({ field: 'logo', maxFileBytes: LOGO_MAX_BYTES, maxFields: 1, maxFieldBytes: 200, code: 'field_logo', what: 'The logo' });
@@ -29,7 +30,7 @@ export function logosRouter({ db, config }: AppDeps): Router {
       const ctx = ctxOf(db, req);
       authorize(ctx, 'update', 'Field');
       const { id } = parse(idParamSchema, req.params, 'params');
-      await authorizeLogoWrite(ctx, id);
+      await authorizeFieldWrite(ctx, id);
       next();
     },
     receiveLogo,
@@ -45,7 +46,7 @@ export function logosRouter({ db, config }: AppDeps): Router {
     const ctx = ctxOf(db, req);
     authorize(ctx, 'update', 'Field');
     const { id, logoId } = parse(logoParamsSchema, req.params, 'params');
-    await authorizeLogoWrite(ctx, id);
+    await authorizeFieldWrite(ctx, id);
     res.json({ logo: await updateFieldLogo(ctx, id, logoId, parse(updateLogoSchema, req.body, 'body')) });
   });
 
@@ -53,7 +54,7 @@ export function logosRouter({ db, config }: AppDeps): Router {
     const ctx = ctxOf(db, req);
     authorize(ctx, 'update', 'Field');
     const { id, logoId } = parse(logoParamsSchema, req.params, 'params');
-    await authorizeLogoWrite(ctx, id);
+    await authorizeFieldWrite(ctx, id);
     await removeFieldLogo(ctx, id, logoId, parse(versionQuerySchema, req.query, 'query').version, config.uploadsDir);
     res.status(204).end();
   });

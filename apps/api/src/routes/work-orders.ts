@@ -2,8 +2,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { addDaysIso, createWorkOrderSchema, idSchema, isoDateSchema, updateWorkOrderSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
-import { parse } from '../http/validate.ts';
+import type { Ctx } from '../services/context.ts';
 import { createWorkOrder, deleteWorkOrder, listWorkOrders, updateWorkOrder, storedWorkOrder, type WriteDeps } from '../services/work-orders.ts';
 import { writeRoutes } from './write-routes.ts';
 
@@ -27,12 +26,9 @@ export function writeDeps({ mailer, config }: AppDeps): WriteDeps {
 export function workOrdersRouter(deps: AppDeps): Router {
   const { db } = deps;
   const router = Router();
-  router.get('/', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    res.json({ items: await listWorkOrders(ctx, parse(querySchema(ctx.clock.today()), req.query, 'query')) });
-  });
   writeRoutes(router, db, '/', null, {
     guard: { subject: 'WorkOrder', resource: 'work_order', row: storedWorkOrder },
+    list: { query: (ctx: Ctx) => querySchema(ctx.clock.today()), run: listWorkOrders },
     create: { body: createWorkOrderSchema, run: (ctx, input) => createWorkOrder(ctx, input, writeDeps(deps)) },
     update: { body: updateWorkOrderSchema, run: (ctx, id, input) => updateWorkOrder(ctx, id, input, writeDeps(deps)) },
     remove: (ctx, id, version) => deleteWorkOrder(ctx, id, version, writeDeps(deps)),

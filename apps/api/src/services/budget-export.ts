@@ -4,8 +4,8 @@
  * Both carry the same rounded figures the API answers, so a CSV read back gives them again.
  */
 import Papa from 'papaparse';
-import PDFDocument from 'pdfkit';
 import type { BudgetAnswer } from '@swardwise/domain';
+import { pdfDocument, pdfTable, rule } from './pdf.ts';
 
 export const BUDGET_CSV_COLUMNS = ['line', 'label', 'quantity_unit', 'budget', 'budget_unit', 'outlook_quantity', 'outlook_cost', 'actual_quantity', 'actual_cost'] as const;
 
@@ -38,13 +38,7 @@ function niceStep(max: number): number {
 
 /** The PDF's bytes. `printedOn` is the department's date the report was made. */
 export function budgetPdf(b: BudgetAnswer, printedOn: string): Promise<Buffer> {
-  const doc = new PDFDocument({ size: 'LETTER', margin: MARGIN, info: { Title: `Season budget ${b.season}: ${b.scopeName}`, Author: 'Swardwise' } });
-  const chunks: Buffer[] = [];
-  doc.on('data', (c: Buffer) => chunks.push(c));
-  const done = new Promise<Buffer>((resolve, reject) => {
-    doc.on('end', () => resolve(Buffer.concat(chunks)));
-    doc.on('error', reject);
-  });
+  const { doc, done } = pdfDocument({ size: 'LETTER', margin: MARGIN, info: { Title: `Season budget ${b.season}: ${b.scopeName}`, Author: 'Swardwise' } });
   const width = doc.page.width - 2 * MARGIN;
   doc.fillColor(MUTED).font('Helvetica').fontSize(10).text('SEASON BUDGET', MARGIN, MARGIN);
   doc.fillColor(INK).font('Helvetica-Bold').fontSize(20).text(`${b.scopeName}, season ${b.season}`, { width });
@@ -95,28 +89,23 @@ export function budgetPdf(b: BudgetAnswer, printedOn: string): Promise<Buffer> {
   }
 
   // The table.
-  let y = ly + 30;
-  const cols = [
+  const table = pdfTable(doc, { left: MARGIN, width, y: ly + 30, pad: 2, headerHeight: 14, fontSize: 9, ink: INK }, [
     { title: 'Line', w: 0.2 },
     { title: 'Budget', w: 0.15 },
     { title: 'Outlook', w: 0.16 },
     { title: 'Outlook qty', w: 0.17 },
     { title: 'Actual', w: 0.15 },
     { title: 'Actual qty', w: 0.17 },
-  ].map((c) => ({ ...c, px: c.w * width }));
-  const xs = cols.reduce<number[]>((acc, c, i) => [...acc, i === 0 ? MARGIN : acc[i - 1]! + cols[i - 1]!.px], []);
-  doc.font('Helvetica-Bold').fontSize(9).fillColor(INK);
-  cols.forEach((c, i) => doc.text(c.title, xs[i]! + 2, y, { width: c.px - 4, lineBreak: false }));
-  y += 14;
-  doc.moveTo(MARGIN, y).lineTo(MARGIN + width, y).lineWidth(1).strokeColor(INK).stroke();
+  ]);
+  let y = table.y;
   doc.font('Helvetica').fontSize(9);
   for (const l of b.lines) {
     y += 5;
     const fmt = (v: number | null) => (v === null ? '—' : l.money ? money(v, b.currency) : `${qty(v)} h`);
     const cells = [l.label, fmt(l.budget), l.money ? fmt(l.outlook.cost) : `${qty(l.outlook.quantity)} h`, `${qty(l.outlook.quantity)} ${l.quantityUnit}`, l.money ? fmt(l.actual.cost) : `${qty(l.actual.quantity)} h`, `${qty(l.actual.quantity)} ${l.quantityUnit}`];
-    cells.forEach((t, i) => doc.fillColor(INK).text(t, xs[i]! + 2, y, { width: cols[i]!.px - 4, lineBreak: false, ellipsis: true }));
+    cells.forEach((t, i) => table.cell(i, t, y));
     y += 14;
-    doc.moveTo(MARGIN, y).lineTo(MARGIN + width, y).lineWidth(0.5).strokeColor('#d5d9d5').stroke();
+    rule(doc, MARGIN, width, y, 0.5, '#d5d9d5');
   }
   y += 6;
   doc.font('Helvetica-Bold').fillColor(INK).text(`Total (money lines): budget ${money(b.totals.budget, b.currency)} · outlook ${money(b.totals.outlook, b.currency)} · actual to date ${money(b.totals.actual, b.currency)}`, MARGIN, y, { width });

@@ -18,13 +18,8 @@ export interface FieldEventFilter {
   districtId?: number | undefined;
 }
 
-const columns = {
-  id: fieldEvents.id,
-  fieldId: fieldEvents.fieldId,
-  fieldName: fields.name,
-  siteId: fieldEvents.siteId,
-  siteName: sites.name,
-  districtId: fieldEvents.districtId,
+/** A booking as its own row has it; the partner's page reads these too. */
+export const bookingFacts = {
   kind: fieldEvents.kind,
   title: fieldEvents.title,
   startsOn: fieldEvents.startsOn,
@@ -32,6 +27,16 @@ const columns = {
   notes: fieldEvents.notes,
   createdBy: fieldEvents.createdBy,
   version: fieldEvents.version,
+};
+
+const columns = {
+  id: fieldEvents.id,
+  fieldId: fieldEvents.fieldId,
+  fieldName: fields.name,
+  siteId: fieldEvents.siteId,
+  siteName: sites.name,
+  districtId: fieldEvents.districtId,
+  ...bookingFacts,
   updatedAt: fieldEvents.updatedAt,
 };
 

@@ -3,8 +3,8 @@
  * step with its day, crew and hours and a box to tick, the colourant with its caution, and a
  * line to sign. One US Letter page for the five steps.
  */
-import PDFDocument from 'pdfkit';
 import { CAUTIONS, colourantFacts, FIELD_EVENT_KIND_LABELS, STRIPE_PATTERN_LABELS, type GameDayPrepRow, type UnitSystem } from '@swardwise/domain';
+import { pdfDocument, pdfTable, rule } from './pdf.ts';
 
 const MARGIN = 54;
 /** Crew time as h:mm, as the portal writes it. */
@@ -17,13 +17,7 @@ const shortDate = (iso: string) => new Date(`${iso}T12:00:00Z`).toLocaleDateStri
 
 /** The PDF's bytes. `printedOn` is the department's date the sheet was made. */
 export function gameDayChecklistPdf(prep: GameDayPrepRow, units: UnitSystem, printedOn: string): Promise<Buffer> {
-  const doc = new PDFDocument({ size: 'LETTER', margin: MARGIN, info: { Title: `Game-day checklist: ${prep.eventTitle}`, Author: 'Swardwise', Subject: `${prep.fieldName}, ${prep.eventOn}` } });
-  const chunks: Buffer[] = [];
-  doc.on('data', (c: Buffer) => chunks.push(c));
-  const done = new Promise<Buffer>((resolve, reject) => {
-    doc.on('end', () => resolve(Buffer.concat(chunks)));
-    doc.on('error', reject);
-  });
+  const { doc, done } = pdfDocument({ size: 'LETTER', margin: MARGIN, info: { Title: `Game-day checklist: ${prep.eventTitle}`, Author: 'Swardwise', Subject: `${prep.fieldName}, ${prep.eventOn}` } });
   const width = doc.page.width - 2 * MARGIN;
 
   doc.fillColor(MUTED).font('Helvetica').fontSize(10).text('GAME-DAY CHECKLIST', MARGIN, MARGIN);
@@ -34,34 +28,29 @@ export function gameDayChecklistPdf(prep: GameDayPrepRow, units: UnitSystem, pri
   doc.moveDown(1);
 
   // The table: step, day, crew, hours, done box, initials.
-  const cols = [
+  const { cols, y: top, cell } = pdfTable(doc, { left: MARGIN, width, y: doc.y, pad: 4, headerHeight: 16, fontSize: 10, ink: INK }, [
     { title: 'Step', w: 0.34 },
     { title: 'Day', w: 0.16 },
     { title: 'Crew', w: 0.2 },
     { title: 'Hours', w: 0.1 },
     { title: 'Done', w: 0.08 },
     { title: 'Initials', w: 0.12 },
-  ].map((c) => ({ ...c, px: c.w * width }));
-  const xs = cols.reduce<number[]>((acc, c, i) => [...acc, i === 0 ? MARGIN : acc[i - 1]! + cols[i - 1]!.px], []);
-  let y = doc.y;
-  doc.fillColor(INK).font('Helvetica-Bold').fontSize(10);
-  cols.forEach((c, i) => doc.text(c.title, xs[i]! + 4, y, { width: c.px - 8, lineBreak: false }));
-  y += 16;
-  doc.moveTo(MARGIN, y).lineTo(MARGIN + width, y).lineWidth(1).strokeColor(INK).stroke();
+  ]);
+  let y = top;
   const ROW = 34;
   doc.font('Helvetica').fontSize(11);
   for (const s of prep.steps) {
     const mid = y + ROW / 2 - 6;
     const cells = [s.label, s.plannedDate ? shortDate(s.plannedDate) : '—', s.crewName ?? (s.workOrderId === null ? '—' : 'Not assigned'), s.plannedHours !== null ? hoursText(s.plannedHours) : '—'];
-    cells.forEach((text, i) => doc.fillColor(INK).text(text, xs[i]! + 4, mid, { width: cols[i]!.px - 8, lineBreak: false, ellipsis: true }));
+    cells.forEach((text, i) => cell(i, text, mid));
     // A box to tick by hand; a step already done is ticked.
-    const bx = xs[4]! + 8;
+    const bx = cols[4]!.x + 8;
     const by = y + ROW / 2 - 7;
     doc.rect(bx, by, 14, 14).lineWidth(1).strokeColor(INK).stroke();
     if (s.done) doc.moveTo(bx + 3, by + 7).lineTo(bx + 6, by + 11).lineTo(bx + 12, by + 3).lineWidth(2).stroke();
-    doc.moveTo(xs[5]! + 4, y + ROW - 8).lineTo(xs[5]! + cols[5]!.px - 4, y + ROW - 8).lineWidth(0.5).strokeColor(MUTED).stroke();
+    doc.moveTo(cols[5]!.x + 4, y + ROW - 8).lineTo(cols[5]!.x + cols[5]!.px - 4, y + ROW - 8).lineWidth(0.5).strokeColor(MUTED).stroke();
     y += ROW;
-    doc.moveTo(MARGIN, y).lineTo(MARGIN + width, y).lineWidth(0.5).strokeColor('#b8c0ba').stroke();
+    rule(doc, MARGIN, width, y, 0.5, '#b8c0ba');
   }
   doc.x = MARGIN;
   doc.y = y + 16;

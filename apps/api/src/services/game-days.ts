@@ -42,7 +42,7 @@ import { authorize, can, type Ctx } from './context.ts';
 import { placeScope } from './scope.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 import { stripePatternsOf } from './stripes.ts';
-import { districtCrews, planEquipment, siteCrewHints } from './week-plans/load.ts';
+import { districtCrews, planEquipment, planFieldColumns, siteCrewHints } from './week-plans/load.ts';
 import { notifyCrews, workOrderRows, type WorkMoveNotice, type WriteDeps } from './work-orders.ts';
 
 /** The booking with its field, as preparing it needs; 404 when there is none. */
@@ -59,15 +59,7 @@ async function eventOf(db: Queryable, eventId: number) {
       field: {
         id: fields.id,
         name: fields.name,
-        sport: fields.sport,
-        grass: fields.grass,
-        areaM2: fields.areaM2,
-        geometry: fields.geometry,
-        maintenanceLevel: fields.maintenanceLevel,
-        hocOverrideMm: fields.hocOverrideMm,
-        clippings: fields.clippings,
-        irrigation: fields.irrigation,
-        status: fields.status,
+        ...planFieldColumns,
       },
     })
     .from(fieldEvents)

@@ -118,30 +118,26 @@ export async function commitImport(ctx: Ctx, id: number): Promise<ImportAnswerRe
       throw appError('import/stale', `Since the preview, ${plan.summary.errors} row${plan.summary.errors === 1 ? '' : 's'} no longer pass the checks (someone changed the data); upload the file again`, { errors: plan.summary.errors });
     }
     const changes: Changes = { created: [], updated: [] };
+    // An update keeps the row as it was, so the import can be undone.
+    const update = async (entity: 'site' | 'field', table: typeof sites | typeof fields, id: number, run: () => Promise<unknown>) => {
+      const [before] = await tx.select().from(table).where(eq(table.id, id));
+      await run();
+      changes.updated.push({ entity, id, before: JSON.parse(JSON.stringify(before)) });
+    };
     for (const write of plan.writes) {
       switch (write.op) {
-        case 'createSite': {
-          const site = await createSite(txCtx, write.input);
-          changes.created.push({ entity: 'site', id: site.id });
+        case 'createSite':
+          changes.created.push({ entity: 'site', id: (await createSite(txCtx, write.input)).id });
           break;
-        }
-        case 'updateSite': {
-          const [before] = await tx.select().from(sites).where(eq(sites.id, write.id));
-          await updateSite(txCtx, write.id, write.input);
-          changes.updated.push({ entity: 'site', id: write.id, before: JSON.parse(JSON.stringify(before)) });
+        case 'updateSite':
+          await update('site', sites, write.id, () => updateSite(txCtx, write.id, write.input));
           break;
-        }
-        case 'createField': {
-          const field = await createField(txCtx, write.input);
-          changes.created.push({ entity: 'field', id: field.id });
+        case 'createField':
+          changes.created.push({ entity: 'field', id: (await createField(txCtx, write.input)).id });
           break;
-        }
-        case 'updateField': {
-          const [before] = await tx.select().from(fields).where(eq(fields.id, write.id));
-          await updateField(txCtx, write.id, write.input);
-          changes.updated.push({ entity: 'field', id: write.id, before: JSON.parse(JSON.stringify(before)) });
+        case 'updateField':
+          await update('field', fields, write.id, () => updateField(txCtx, write.id, write.input));
           break;
-        }
       }
     }
     await tx.update(imports).set({ status: 'committed', committedAt: new Date(), changes, rows: plan.rows, summary: plan.summary }).where(eq(imports.id, id));

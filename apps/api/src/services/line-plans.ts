@@ -5,24 +5,14 @@
  */
 import { and, asc, between, eq } from 'drizzle-orm';
 import { errors, fieldFrame, fieldFrameToLngLat, linePlanFigures, type FieldLinePlan, type LineMarkerChoice, type Polygon, type SetFieldLinePlanInput } from '@swardwise/domain';
-import PDFDocument from 'pdfkit';
 import type { Db, Queryable } from '../db/client.ts';
-import { equipment, fieldEvents, fieldLinePlans, fields, sites, users } from '../db/schema/index.ts';
+import { equipment, fieldEvents, fieldLinePlans, users } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import type { Ctx } from './context.ts';
+import { authorizeFieldWrite } from './field-write.ts';
 import { getField } from './fields.ts';
+import { pdfDocument } from './pdf.ts';
 import { loadParameters, loadStandards } from './standards.ts';
-import { writable } from './versioned.ts';
-
-async function fieldScopeRow(db: Queryable, id: number) {
-  const [row] = await db.select({ id: fields.id, name: fields.name, siteId: fields.siteId, districtId: sites.districtId }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(fields.id, id));
-  return row;
-}
-
-/** 404 for a missing field, 403 unless the caller may change it; run before the body is read. */
-export async function authorizeLinePlanWrite(ctx: Ctx, fieldId: number) {
-  return writable(ctx, 'update', 'Field', 'field', fieldId, await fieldScopeRow(ctx.db, fieldId));
-}
 
 async function markersOf(db: Queryable, districtId: number, defaultSpeed: number): Promise<LineMarkerChoice[]> {
   const rows = await db
@@ -82,7 +72,7 @@ export async function getFieldLinePlan(ctx: Ctx, fieldId: number): Promise<Field
  */
 export async function setFieldLinePlan(ctx: Ctx, fieldId: number, input: SetFieldLinePlanInput): Promise<FieldLinePlan<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const scope = writable(ctx, 'update', 'Field', 'field', fieldId, await fieldScopeRow(tx, fieldId));
+    const scope = await authorizeFieldWrite(ctx, fieldId, tx);
     if (input.markerId !== null) {
       const [unit] = await tx.select({ id: equipment.id }).from(equipment).where(and(eq(equipment.id, input.markerId), eq(equipment.districtId, scope.districtId), eq(equipment.active, true), eq(equipment.kind, 'line_marker')));
       if (!unit) throw errors.noSuch(`line marker in ${scope.name}’s district`, 'body.markerId');
@@ -128,10 +118,7 @@ const fmt = (v: number, d = 2) => v.toFixed(d);
 export async function setOutPdf(ctx: Ctx, fieldId: number, season: string, paper: 'A4' | 'LETTER'): Promise<Buffer> {
   const { field, frame, figures, toLngLat } = await linePlanFiguresOf(ctx, fieldId, season);
   if (!figures.layouts.length) throw errors.invalid(`${field.name} has no line plan yet: add a layout first`, []);
-  const doc = new PDFDocument({ size: paper, margin: 40, info: { Title: `Set-out sheet, ${field.name}, ${season}`, Author: 'Swardwise' } });
-  const chunks: Buffer[] = [];
-  doc.on('data', (c: Buffer) => chunks.push(c));
-  const done = new Promise<Buffer>((resolve) => doc.on('end', () => resolve(Buffer.concat(chunks))));
+  const { doc, done } = pdfDocument({ size: paper, margin: 40, info: { Title: `Set-out sheet, ${field.name}, ${season}`, Author: 'Swardwise' } });
   const left = doc.page.margins.left;
   const usable = doc.page.width - left - doc.page.margins.right;
 

@@ -4,8 +4,8 @@
  * logo drawn over it as placed, where the reference corner is on the field, the grid
  * coordinates of the logo's corners, paint per colour and the dark-pigment caution.
  */
-import PDFDocument from 'pdfkit';
 import { gridColumnName, LOGO_PIGMENT_CAUTION, type FieldLogo } from '@swardwise/domain';
+import { pdfDocument } from './pdf.ts';
 
 const A4_LANDSCAPE: [number, number] = [841.89, 595.28];
 const MARGIN = 36;
@@ -16,13 +16,7 @@ const litres = (v: number) => `${v.toFixed(1)} L`;
 
 /** The sheet as a PDF buffer. `render` is the logo's PNG rendering. */
 export function logoGridPdf(field: { name: string }, logo: FieldLogo<Date>, render: Buffer, printedOn: string): Promise<Buffer> {
-  const doc = new PDFDocument({ size: A4_LANDSCAPE, margin: MARGIN, info: { Title: `Logo set-out: ${logo.name}`, Author: 'Swardwise' } });
-  const chunks: Buffer[] = [];
-  doc.on('data', (c: Buffer) => chunks.push(c));
-  const done = new Promise<Buffer>((resolve, reject) => {
-    doc.on('end', () => resolve(Buffer.concat(chunks)));
-    doc.on('error', reject);
-  });
+  const { doc, done } = pdfDocument({ size: A4_LANDSCAPE, margin: MARGIN, info: { Title: `Logo set-out: ${logo.name}`, Author: 'Swardwise' } });
 
   doc.fillColor(INK).font('Helvetica-Bold').fontSize(16).text(`Logo set-out: ${logo.name}`, MARGIN, MARGIN);
   doc.font('Helvetica').fontSize(9).fillColor(INK).text(`${field.name}  ·  logo ${m(logo.widthM)} × ${m(logo.heightM)}, turned ${logo.rotationDeg}°, centre ${m(logo.centerXM)} from the end line and ${m(logo.centerYM)} from the side line  ·  printed ${printedOn}`);

@@ -23,27 +23,17 @@ import {
   type UpdateLogoInput,
 } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
-import { fieldLogos, fields, sites } from '../db/schema/index.ts';
+import { fieldLogos } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import type { Ctx } from './context.ts';
+import { authorizeFieldWrite } from './field-write.ts';
 import { getField } from './fields.ts';
 import { loadParameters } from './standards.ts';
-import { writable } from './versioned.ts';
 import { readLogo } from './logo-files.ts';
 
 export const LOGOS_PER_FIELD = 10;
 
 type LogoRow = typeof fieldLogos.$inferSelect;
-
-async function fieldScopeRow(db: Queryable, id: number) {
-  const [row] = await db.select({ id: fields.id, name: fields.name, siteId: fields.siteId, districtId: sites.districtId, geometry: fields.geometry }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(fields.id, id));
-  return row;
-}
-
-/** 404 for a missing field, 403 unless the caller may change it; run before the body is read. */
-export async function authorizeLogoWrite(ctx: Ctx, fieldId: number) {
-  return writable(ctx, 'update', 'Field', 'field', fieldId, await fieldScopeRow(ctx.db, fieldId));
-}
 
 const logoUrl = (fieldId: number, logoId: number) => `/api/fields/${fieldId}/logos/${logoId}`;
 
@@ -115,7 +105,7 @@ export async function getFieldLogo(ctx: Ctx, fieldId: number, logoId: number) {
  * (2 to 10 m), unturned, on a 1 m grid (common practice for hand-painted logos).
  */
 export async function addFieldLogo(ctx: Ctx, fieldId: number, input: CreateLogoInput, buffer: Buffer, uploadsDir: string): Promise<FieldLogo<Date>> {
-  const field = await authorizeLogoWrite(ctx, fieldId);
+  const field = await authorizeFieldWrite(ctx, fieldId);
   const [{ n } = { n: 0 }] = await ctx.db.select({ n: count() }).from(fieldLogos).where(eq(fieldLogos.fieldId, fieldId));
   if (n >= LOGOS_PER_FIELD) throw appError('field_logo/too_many', `A field keeps at most ${LOGOS_PER_FIELD} logos; this one has ${n}. Remove one first`);
   const logo = await readLogo(buffer);
@@ -168,7 +158,7 @@ async function logoOfField(tx: Queryable, fieldId: number, logoId: number) {
 /** Moves, scales, turns or renames a logo at the version read; the grid must fit the logo. */
 export async function updateFieldLogo(ctx: Ctx, fieldId: number, logoId: number, input: UpdateLogoInput): Promise<FieldLogo<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const field = writable(ctx, 'update', 'Field', 'field', fieldId, await fieldScopeRow(tx, fieldId));
+    const field = await authorizeFieldWrite(ctx, fieldId, tx);
     const before = await logoOfField(tx, fieldId, logoId);
     if (before.version !== input.version) throw errors.versionConflict('field_logo');
     const { version, ...changes } = input;
@@ -194,7 +184,7 @@ export async function updateFieldLogo(ctx: Ctx, fieldId: number, logoId: number,
 /** Removes a logo at the version read, and its files. */
 export async function removeFieldLogo(ctx: Ctx, fieldId: number, logoId: number, version: number, uploadsDir: string): Promise<void> {
   const before = await (ctx.db as Db).transaction(async (tx) => {
-    const field = writable(ctx, 'update', 'Field', 'field', fieldId, await fieldScopeRow(tx, fieldId));
+    const field = await authorizeFieldWrite(ctx, fieldId, tx);
     const row = await logoOfField(tx, fieldId, logoId);
     const gone = await tx.delete(fieldLogos).where(and(eq(fieldLogos.id, logoId), eq(fieldLogos.version, version))).returning({ id: fieldLogos.id });
     if (!gone.length) throw errors.versionConflict('field_logo');

@@ -30,6 +30,8 @@ import {
 import type { Queryable } from '../db/client.ts';
 import { fieldChecks, fieldClosures, fieldEvents, fieldRequests, fields, sites, workOrders, workPhotos } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
+import { bookingFacts } from './field-events.ts';
+import { requestFacts } from './requests.ts';
 import { siteScope } from './scope.ts';
 import { storedPhotoPath } from './work-photos.ts';
 import { loadStandards } from './standards.ts';
@@ -190,13 +192,7 @@ export async function partnerFieldAnswer(ctx: Ctx, id: number): Promise<PartnerF
   const bookings = await ctx.db
     .select({
       id: fieldEvents.id,
-      kind: fieldEvents.kind,
-      title: fieldEvents.title,
-      startsOn: fieldEvents.startsOn,
-      startTime: fieldEvents.startTime,
-      notes: fieldEvents.notes,
-      createdBy: fieldEvents.createdBy,
-      version: fieldEvents.version,
+      ...bookingFacts,
     })
     .from(fieldEvents)
     .where(and(eq(fieldEvents.fieldId, f.id), gte(fieldEvents.startsOn, today)))
@@ -241,13 +237,7 @@ async function fieldRequestItems(ctx: Ctx, f: { id: number; siteId: number; dist
   const rows = await ctx.db
     .select({
       id: fieldRequests.id,
-      kind: fieldRequests.kind,
-      gameOn: fieldRequests.gameOn,
-      startTime: fieldRequests.startTime,
-      layout: fieldRequests.layout,
-      description: fieldRequests.description,
-      state: fieldRequests.state,
-      reason: fieldRequests.reason,
+      ...requestFacts,
       createdBy: fieldRequests.createdBy,
       createdAt: fieldRequests.createdAt,
       closedAt: fieldRequests.closedAt,

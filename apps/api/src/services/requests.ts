@@ -55,6 +55,17 @@ export interface RequestDeps {
   background: BackgroundTasks;
 }
 
+/** A request as its own row has it; the partner's page reads these too. */
+export const requestFacts = {
+  kind: fieldRequests.kind,
+  gameOn: fieldRequests.gameOn,
+  startTime: fieldRequests.startTime,
+  layout: fieldRequests.layout,
+  description: fieldRequests.description,
+  state: fieldRequests.state,
+  reason: fieldRequests.reason,
+};
+
 const columns = {
   id: fieldRequests.id,
   fieldId: fieldRequests.fieldId,
@@ -63,13 +74,7 @@ const columns = {
   siteId: fieldRequests.siteId,
   siteName: sites.name,
   districtId: fieldRequests.districtId,
-  kind: fieldRequests.kind,
-  gameOn: fieldRequests.gameOn,
-  startTime: fieldRequests.startTime,
-  layout: fieldRequests.layout,
-  description: fieldRequests.description,
-  state: fieldRequests.state,
-  reason: fieldRequests.reason,
+  ...requestFacts,
   eventId: fieldRequests.eventId,
   workOrderId: fieldRequests.workOrderId,
   createdBy: fieldRequests.createdBy,

@@ -6,23 +6,12 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { errors, MOWER_KINDS, stripeMowerOf, type FieldStripes, type SetFieldStripesInput, type StripeMowerChoice, type StripePattern } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
-import { equipment, fields, fieldStripes, sites, users } from '../db/schema/index.ts';
+import { equipment, fieldStripes, users } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import type { Ctx } from './context.ts';
+import { authorizeFieldWrite } from './field-write.ts';
 import { getField } from './fields.ts';
 import { loadParameters } from './standards.ts';
-import { writable } from './versioned.ts';
-
-/** The field's scope, for the write check before the body is read. */
-async function fieldScopeRow(db: Queryable, id: number) {
-  const [row] = await db.select({ id: fields.id, name: fields.name, siteId: fields.siteId, districtId: sites.districtId }).from(fields).innerJoin(sites, eq(sites.id, fields.siteId)).where(eq(fields.id, id));
-  return row;
-}
-
-/** 404 for a missing field, 403 unless the caller may change it; run before the body is read. */
-export async function authorizeStripesWrite(ctx: Ctx, fieldId: number) {
-  return writable(ctx, 'update', 'Field', 'field', fieldId, await fieldScopeRow(ctx.db, fieldId));
-}
 
 async function stripeRow(db: Queryable, fieldId: number) {
   const [row] = await db
@@ -69,7 +58,7 @@ export async function getFieldStripes(ctx: Ctx, fieldId: number): Promise<FieldS
  */
 export async function setFieldStripes(ctx: Ctx, fieldId: number, input: SetFieldStripesInput): Promise<FieldStripes<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const field = writable(ctx, 'update', 'Field', 'field', fieldId, await fieldScopeRow(tx, fieldId));
+    const field = await authorizeFieldWrite(ctx, fieldId, tx);
     if (input.mowerId !== null) {
       const [unit] = await tx.select({ id: equipment.id }).from(equipment).where(and(eq(equipment.id, input.mowerId), eq(equipment.districtId, field.districtId), eq(equipment.active, true), inArray(equipment.kind, [...MOWER_KINDS])));
       if (!unit) throw errors.noSuch(`mower in ${field.name}’s district`, 'body.mowerId');

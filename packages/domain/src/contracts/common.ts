@@ -13,3 +13,22 @@ export type Instant = Date | string;
 export interface Items<T> {
   items: T[];
 }
+
+/** Where a row about one field is: the field, its site and its district, with their names. */
+export interface OnField {
+  fieldId: number;
+  fieldName: string;
+  siteId: number;
+  siteName: string;
+  districtId: number;
+}
+
+/** A stored photo (re-encoded, its metadata dropped): its size in pixels and bytes, and where the portal loads it from. */
+export interface StoredPhoto<At extends Instant = string> {
+  id: number;
+  width: number;
+  height: number;
+  bytes: number;
+  createdAt: At;
+  url: string;
+}

@@ -1,15 +1,10 @@
 /** Bookings of the fields (games, tournaments, practices…). */
 import type { FieldEventKind } from '../vocabulary.ts';
-import type { Instant, Items } from './common.ts';
+import type { Instant, Items, OnField } from './common.ts';
 
 /** A row of `GET /api/field-events` and the event of every write. */
-export interface FieldEventRow<At extends Instant = string> {
+export interface FieldEventRow<At extends Instant = string> extends OnField {
   id: number;
-  fieldId: number;
-  fieldName: string;
-  siteId: number;
-  siteName: string;
-  districtId: number;
   kind: FieldEventKind;
   title: string;
   /** The day it is played, YYYY-MM-DD. */

@@ -1,7 +1,7 @@
 /** Game-day preparations as the foreman, the crews and the partner read them. */
 import type { GameDayStep } from '../engine/game-day.ts';
 import type { FieldEventKind, StripePattern, WorkStatus } from '../vocabulary.ts';
-import type { Instant } from './common.ts';
+import type { Instant, OnField } from './common.ts';
 
 /** One step of the checklist and the work order it became. */
 export interface GameDayStepRow {
@@ -23,18 +23,13 @@ export interface GameDayStepRow {
 }
 
 /** `GET /api/game-days` item, `POST /api/game-days/events/:eventId` answer. */
-export interface GameDayPrepRow<At extends Instant = string> {
+export interface GameDayPrepRow<At extends Instant = string> extends OnField {
   id: number;
   eventId: number;
   eventTitle: string;
   eventKind: FieldEventKind;
   eventOn: string;
   eventTime: string | null;
-  fieldId: number;
-  fieldName: string;
-  siteId: number;
-  siteName: string;
-  districtId: number;
   pattern: StripePattern | null;
   colourant: { product: string; rateMlPerM2: number; areaM2: number } | null;
   steps: GameDayStepRow[];

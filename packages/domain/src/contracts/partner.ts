@@ -3,8 +3,9 @@
  * plain words. These answers carry no costs, no internal notes, no staff names and no ids
  * beyond what the pages link or write with.
  */
-import type { LineLayout } from '../engine/lines.ts';
-import type { ClosureStatus, FieldEventKind, RequestKind, RequestState, Sport } from '../vocabulary.ts';
+import type { ClosureStatus, Sport } from '../vocabulary.ts';
+import type { FieldEventRow } from './field-events.ts';
+import type { FieldRequestRow } from './requests.ts';
 
 /** Whether the field can be played, in words. */
 export interface PartnerFieldStatus {
@@ -76,13 +77,8 @@ export interface PartnerCheck {
 }
 
 /** A booking in the partner's one list. */
-export interface PartnerBookingItem {
+export interface PartnerBookingItem extends Pick<FieldEventRow, 'id' | 'kind' | 'title' | 'startsOn' | 'startTime'> {
   type: 'booking';
-  id: number;
-  kind: FieldEventKind;
-  title: string;
-  startsOn: string;
-  startTime: string | null;
   /** The partner's own notes; empty on bookings they did not make. */
   notes: string;
   /** Made by this partner: they may change or cancel it. */
@@ -92,20 +88,10 @@ export interface PartnerBookingItem {
 }
 
 /** A request filed for the field, in the partner's one list with its state. */
-export interface PartnerRequestItem {
+export interface PartnerRequestItem extends Pick<FieldRequestRow, 'id' | 'kind' | 'gameOn' | 'startTime' | 'layout' | 'description' | 'state' | 'reason'> {
   type: 'request';
-  id: number;
-  kind: RequestKind;
   /** The game's day for a game request, else the day it was filed (department's date). */
   startsOn: string;
-  /** The game request's day, as the request holds it (null for other kinds). */
-  gameOn: string | null;
-  startTime: string | null;
-  layout: LineLayout | null;
-  description: string;
-  state: RequestState;
-  /** Why it was declined, or the foreman's word on scheduling or closing it. */
-  reason: string;
   /** Filed by this partner: they may change it while it is still requested. */
   mine: boolean;
   /** The request's version, which a change must send (only on the partner's own requests). */

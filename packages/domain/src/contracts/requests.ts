@@ -1,16 +1,11 @@
 /** Partners' requests as the API answers them. */
 import type { LineLayout } from '../engine/lines.ts';
 import type { RequestKind, RequestState, WorkStatus, WorkTask } from '../vocabulary.ts';
-import type { Instant } from './common.ts';
+import type { Instant, OnField, StoredPhoto } from './common.ts';
 
 /** One request, as lists show it. */
-export interface FieldRequestRow<At extends Instant = string> {
+export interface FieldRequestRow<At extends Instant = string> extends OnField {
   id: number;
-  fieldId: number;
-  fieldName: string;
-  siteId: number;
-  siteName: string;
-  districtId: number;
   kind: RequestKind;
   /** The game's day, YYYY-MM-DD (game requests only). */
   gameOn: string | null;
@@ -43,14 +38,7 @@ export interface FieldRequestMessage<At extends Instant = string> {
   createdAt: At;
 }
 
-export interface FieldRequestPhoto<At extends Instant = string> {
-  id: number;
-  width: number;
-  height: number;
-  bytes: number;
-  createdAt: At;
-  url: string;
-}
+export type FieldRequestPhoto<At extends Instant = string> = StoredPhoto<At>;
 
 /** Work the request became: the one-off order, or the paintings the week plan made for its booking. */
 export interface FieldRequestWork {

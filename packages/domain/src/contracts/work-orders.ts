@@ -1,6 +1,6 @@
 /** Work orders as the crews and the board read them, and what a crew reports on them. */
 import type { FieldStatus, WorkStatus, WorkTask } from '../vocabulary.ts';
-import type { Instant, Items } from './common.ts';
+import type { Instant, Items, StoredPhoto } from './common.ts';
 
 /**
  * The engine's notes on an order, which vary by task: a mowing's HOC and mower kind, a
@@ -96,15 +96,8 @@ export interface WorkUpdateRow<At extends Instant = string> extends WorkUpdate<A
   createdAt: At;
 }
 
-export interface WorkPhoto<At extends Instant = string> {
-  id: number;
-  width: number;
-  height: number;
-  bytes: number;
-  createdAt: At;
-  /** Where the portal loads it from (`GET /api/work-orders/:id/photos/:photoId`). */
-  url: string;
-}
+/** `url`: `GET /api/work-orders/:id/photos/:photoId`. */
+export type WorkPhoto<At extends Instant = string> = StoredPhoto<At>;
 
 /** `GET /api/work-orders/:id`: the order with its reports and photos. */
 export interface WorkOrderAnswer<At extends Instant = string> {

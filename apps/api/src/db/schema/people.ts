@@ -38,6 +38,21 @@ export const users = pgTable(
   (t) => [uniqueIndex('users_email_key').on(t.email)],
 );
 
+/** Who wrote the row. */
+export const createdBy = { createdBy: integer('created_by').references(() => users.id) };
+
+/** A photo stored in the uploads folder: re-encoded here, its metadata dropped, its name made here. */
+export const storedPhoto = {
+  /** File name inside the uploads folder (never a client-supplied path). */
+  fileName: text('file_name').notNull(),
+  mime: text('mime').notNull(),
+  width: integer('width').notNull(),
+  height: integer('height').notNull(),
+  bytes: integer('bytes').notNull(),
+  ...createdBy,
+  ...createdAt,
+};
+
 /** The sites a partner (school athletic director, league contact) is linked to. */
 export const userSites = pgTable(
   'user_sites',

@@ -2,7 +2,7 @@
 import { date, index, integer, pgTable, text, uniqueIndex } from 'drizzle-orm/pg-core';
 import type { LineLayout, RequestKind, RequestState } from '@swardwise/domain';
 import { districtRef, fieldRef, sites } from './city.ts';
-import { users } from './people.ts';
+import { createdBy, storedPhoto, users } from './people.ts';
 import { fieldEvents, workOrders } from './work.ts';
 import { createdAt, id, instant, versioned } from './columns.ts';
 
@@ -31,7 +31,7 @@ export const fieldRequests = pgTable(
     reason: text('reason').notNull().default(''),
     eventId: integer('event_id').references(() => fieldEvents.id, { onDelete: 'set null' }),
     workOrderId: integer('work_order_id').references(() => workOrders.id, { onDelete: 'set null' }),
-    createdBy: integer('created_by').references(() => users.id),
+    ...createdBy,
     decidedBy: integer('decided_by').references(() => users.id),
     scheduledAt: instant('scheduled_at'),
     closedAt: instant('closed_at'),
@@ -70,13 +70,7 @@ export const fieldRequestPhotos = pgTable(
   {
     ...id,
     ...requestRef,
-    fileName: text('file_name').notNull(),
-    mime: text('mime').notNull(),
-    width: integer('width').notNull(),
-    height: integer('height').notNull(),
-    bytes: integer('bytes').notNull(),
-    createdBy: integer('created_by').references(() => users.id),
-    ...createdAt,
+    ...storedPhoto,
   },
   (t) => [index('field_request_photos_request_idx').on(t.requestId), uniqueIndex('field_request_photos_file_key').on(t.requestId, t.fileName)],
 );

@@ -3,7 +3,7 @@ import { sql } from 'drizzle-orm';
 import { boolean, check, date, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
 import { HARDNESS_DEVICES, type HardnessDevice, type ImportSummary, type LevelStandard, type WearArea } from '@swardwise/domain';
 import { fieldRef } from './city.ts';
-import { users } from './people.ts';
+import { storedPhoto, users } from './people.ts';
 import { workOrders } from './work.ts';
 import { createdAt, id, instant, updatedAt } from './columns.ts';
 
@@ -64,14 +64,7 @@ export const fieldCheckPhotos = pgTable(
     fieldCheckId: integer('field_check_id')
       .notNull()
       .references(() => fieldChecks.id, { onDelete: 'cascade' }),
-    /** File name inside the uploads folder (never a client-supplied path). */
-    fileName: text('file_name').notNull(),
-    mime: text('mime').notNull(),
-    width: integer('width').notNull(),
-    height: integer('height').notNull(),
-    bytes: integer('bytes').notNull(),
-    createdBy: integer('created_by').references(() => users.id),
-    ...createdAt,
+    ...storedPhoto,
   },
   // A retried upload (same check, same reference, same name) is stored once.
   (t) => [index('field_check_photos_check_idx').on(t.fieldCheckId), uniqueIndex('field_check_photos_file_key').on(t.fieldCheckId, t.fileName)],

@@ -3,7 +3,7 @@ import { sql } from 'drizzle-orm';
 import { boolean, check, date, index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
 import type { ApplicationRateUnit, ApplicationTask, ApplicationWeather, ClosureReason, ClosureStatus, ClosureWorkChoice, EquipmentKind, FieldEventKind, GameDayStep, PlanLayout, PlanPaint, SeasonShift, StripePattern, WorkStatus, WorkTask } from '@swardwise/domain';
 import { districtRef, fieldRef, fields, sites } from './city.ts';
-import { crews, users } from './people.ts';
+import { createdBy, crews, storedPhoto, users } from './people.ts';
 import { createdAt, id, instant, versioned } from './columns.ts';
 
 /** The field a row is about, with copies of its site and district so scope checks need no join. */
@@ -70,7 +70,7 @@ export const workOrders = pgTable(
     startedAt: instant('started_at'),
     doneAt: instant('done_at'),
     doneBy: integer('done_by').references(() => users.id),
-    createdBy: integer('created_by').references(() => users.id),
+    ...createdBy,
     ...versioned,
   },
   (t) => [
@@ -95,14 +95,7 @@ export const workPhotos = pgTable(
   {
     ...id,
     ...workOrderRef,
-    /** File name inside the uploads folder (never a client-supplied path). */
-    fileName: text('file_name').notNull(),
-    mime: text('mime').notNull(),
-    width: integer('width').notNull(),
-    height: integer('height').notNull(),
-    bytes: integer('bytes').notNull(),
-    createdBy: integer('created_by').references(() => users.id),
-    ...createdAt,
+    ...storedPhoto,
   },
   // One row per file: a retried upload (same order, same phone reference, same name) is stored once.
   (t) => [index('work_photos_order_idx').on(t.workOrderId), uniqueIndex('work_photos_file_key').on(t.workOrderId, t.fileName)],
@@ -123,7 +116,7 @@ export const workUpdates = pgTable(
     clientRef: text('client_ref'),
     /** When the crew did it (the phone's clock), which may be before it reached the server. */
     reportedAt: instant('reported_at').notNull(),
-    createdBy: integer('created_by').references(() => users.id),
+    ...createdBy,
     ...createdAt,
   },
   (t) => [index('work_updates_order_idx').on(t.workOrderId), uniqueIndex('work_updates_client_ref_key').on(t.clientRef)],
@@ -140,7 +133,7 @@ export const fieldEvents = pgTable(
     startsOn: date('starts_on', { mode: 'string' }).notNull(),
     startTime: text('start_time'),
     notes: text('notes').notNull().default(''),
-    createdBy: integer('created_by').references(() => users.id),
+    ...createdBy,
     ...versioned,
   },
   (t) => [index('field_events_field_idx').on(t.fieldId, t.startsOn), index('field_events_district_idx').on(t.districtId, t.startsOn)],
@@ -197,7 +190,7 @@ export const applications = pgTable(
     licenceNumber: text('licence_number'),
     weather: jsonb('weather').$type<ApplicationWeather | null>(),
     notes: text('notes').notNull().default(''),
-    createdBy: integer('created_by').references(() => users.id),
+    ...createdBy,
     ...createdAt,
   },
   (t) => [index('applications_field_idx').on(t.fieldId, t.appliedOn), index('applications_district_idx').on(t.districtId, t.appliedOn)],
@@ -269,7 +262,7 @@ export const fieldLogos = pgTable(
     gridSpacingM: real('grid_spacing_m').notNull().default(1),
     colours: jsonb('colours').$type<Array<{ hex: string; share: number }>>().notNull(),
     backgroundHex: text('background_hex'),
-    createdBy: integer('created_by').references(() => users.id),
+    ...createdBy,
     ...versioned,
   },
   (t) => [index('field_logos_field_idx').on(t.fieldId)],
@@ -293,7 +286,7 @@ export const gameDayPreps = pgTable(
     colourant: jsonb('colourant').$type<{ product: string; rateMlPerM2: number; areaM2: number } | null>(),
     /** The mowing pattern chosen for the event; null: plain mowing. */
     pattern: text('pattern').$type<StripePattern>(),
-    createdBy: integer('created_by').references(() => users.id),
+    ...createdBy,
     ...versioned,
   },
   (t) => [uniqueIndex('game_day_preps_event_key').on(t.eventId), index('game_day_preps_district_idx').on(t.districtId)],

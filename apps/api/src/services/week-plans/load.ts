@@ -80,6 +80,19 @@ async function lastDone(db: Queryable, fieldIds: number[]) {
   return out;
 }
 
+/** What the week plan's engine reads of a field to make its work. */
+export const planFieldColumns = {
+  sport: fields.sport,
+  grass: fields.grass,
+  areaM2: fields.areaM2,
+  geometry: fields.geometry,
+  maintenanceLevel: fields.maintenanceLevel,
+  hocOverrideMm: fields.hocOverrideMm,
+  clippings: fields.clippings,
+  irrigation: fields.irrigation,
+  status: fields.status,
+};
+
 async function districtFieldRows(db: Queryable, districtId: number) {
   return db
     .select({
@@ -88,15 +101,7 @@ async function districtFieldRows(db: Queryable, districtId: number) {
       siteId: fields.siteId,
       siteLat: sites.lat,
       siteLng: sites.lng,
-      sport: fields.sport,
-      grass: fields.grass,
-      areaM2: fields.areaM2,
-      geometry: fields.geometry,
-      maintenanceLevel: fields.maintenanceLevel,
-      hocOverrideMm: fields.hocOverrideMm,
-      clippings: fields.clippings,
-      irrigation: fields.irrigation,
-      status: fields.status,
+      ...planFieldColumns,
       lastMowedOn: fields.lastMowedOn,
     })
     .from(fields)
