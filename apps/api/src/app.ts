@@ -59,6 +59,7 @@ import { weatherRouter } from './routes/weather.ts';
 import { weekPlansRouter } from './routes/week-plans.ts';
 import { workOrdersRouter } from './routes/work-orders.ts';
 import { workReportsRouter } from './routes/work-reports.ts';
+import { mailOutboxRouter } from './routes/mail-outbox.ts';
 import { DepartmentClock } from './services/clock.ts';
 
 export const COOKIE_NAME = 'swardwise.sid';
@@ -198,6 +199,7 @@ export function createApp(
   app.use('/api/settings', settingsRouter(full));
   app.use('/api/costs', costsRouter(full));
   app.use('/api/budget', budgetRouter(full));
+  app.use('/api/mail-outbox', mailOutboxRouter(full));
   app.use('/api/what-if', whatIfRouter(full));
   app.use('/api/compare', compareRouter(full));
   app.use('/api', directoryRouter(full));
