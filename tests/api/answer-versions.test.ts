@@ -6,7 +6,7 @@
  */
 import { sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
-import { openDatabase, type Database } from '../../apps/api/src/db/client.ts';
+import { localWriteCount, openDatabase, type Database } from '../../apps/api/src/db/client.ts';
 import { sharedFingerprint } from '../../apps/api/src/services/answer-cache.ts';
 import { fieldChecks, settings } from '../../apps/api/src/db/schema/index.ts';
 import { clonePostgresDatabase, startTestApi, type TestApi } from '../support/app.ts';
@@ -82,5 +82,24 @@ describe('answer fingerprint', () => {
       .catch(() => undefined);
     await writer().execute(sql`update sessions set expires_at = expires_at`);
     expect(await sharedFingerprint(reader.db)).toBe(before);
+  });
+});
+
+describe('write count of a PGlite database', () => {
+  test.skipIf(Boolean(inject('postgres')))('should count a write to a table an answer reads, and neither a read nor a session’s expiry', async () => {
+    const db = reader.db;
+    const count = () => localWriteCount(db)!;
+    expect(count()).toEqual(expect.any(Number));
+    let before = count();
+    await db.execute(sql`select count(*) from fields`);
+    await db.execute(sql`update sessions set expires_at = expires_at`);
+    expect(count()).toBe(before);
+    await db.execute(sql`with w as (update work_orders set notes = notes returning 1) select count(*) from w`);
+    expect(count()).toBeGreaterThan(before);
+    before = count();
+    await db.transaction(async (tx) => {
+      await tx.execute(sql`update sites set name = name`);
+    });
+    expect(count()).toBeGreaterThan(before);
   });
 });

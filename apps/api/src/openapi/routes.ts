@@ -148,6 +148,7 @@ const service: RouteDoc[] = [
     path: '/api/health',
     tag: 'Service',
     summary: 'Check that the API and its database answer',
+    description: 'The database is asked at most once a second; checks in between rely on its last answer.',
     access: publicAccess(),
     answers: [json(200, 'The API and its database answer.', shape({ status: { type: 'string', enum: ['ok'] } }))],
   },
