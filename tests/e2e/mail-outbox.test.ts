@@ -3,18 +3,14 @@
  * the text with its sign-in link) from the navigation, and sends it again now.
  */
 import path from 'node:path';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { mailOutbox } from '../../apps/api/src/db/schema/index.ts';
 import { browser, shots, useBrowser } from './browser.ts';
-import { startOwnServer, type OwnServer } from './own-server.ts';
+import { useOwnServer } from './own-server.ts';
 
 useBrowser();
 
-let own: OwnServer;
-beforeAll(async () => {
-  own = await startOwnServer();
-});
-afterAll(() => own?.close());
+const own = useOwnServer();
 
 describe('mail outbox', () => {
   test('should list given-up e-mail to the head without its text and send one again now', async () => {

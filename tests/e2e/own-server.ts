@@ -7,6 +7,7 @@
 import crypto from 'node:crypto';
 import type { Server } from 'node:http';
 import type { Page } from 'playwright-core';
+import { afterAll, beforeAll } from 'vitest';
 import { pino } from 'pino';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
@@ -59,4 +60,17 @@ export async function startOwnServer(env: Record<string, string> = {}): Promise<
       await database.close();
     },
   };
+}
+
+/**
+ * The file's own server: started before its tests, closed after them. The object is filled in
+ * when the tests start, so read its members inside tests.
+ */
+export function useOwnServer(env: Record<string, string> = {}): OwnServer {
+  const own = {} as OwnServer;
+  beforeAll(async () => {
+    Object.assign(own, await startOwnServer(env));
+  });
+  afterAll(() => own.close?.());
+  return own;
 }

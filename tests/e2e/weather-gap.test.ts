@@ -3,18 +3,14 @@
  * field sees, above what the field needs, that the figures rest on old weather and since when.
  */
 import path from 'node:path';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { browser, shots, useBrowser } from './browser.ts';
-import { startOwnServer, type OwnServer } from './own-server.ts';
+import { useOwnServer } from './own-server.ts';
 
 useBrowser();
 
-let own: OwnServer;
-beforeAll(async () => {
-  // The test city's weather ends weeks ago, and its weather service address answers nobody.
-  own = await startOwnServer();
-});
-afterAll(() => own?.close());
+// The test city's weather ends weeks ago, and its weather service address answers nobody.
+const own = useOwnServer();
 
 describe('weather gap', () => {
   test('should tell a foreman on a field’s needs that no weather has come since the last day on file', async () => {
