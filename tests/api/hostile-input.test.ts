@@ -145,6 +145,7 @@ const NOT_FUZZED = new Map<string, string>([
   ['POST /api/imports/:id/undo', 'no body'],
   ['DELETE /api/dev/mail', 'no body; developer sink'],
   ['DELETE /api/calendar-feeds/:id', 'no body'],
+  ['POST /api/mail-outbox/:id/retry', 'no body'],
   ['POST /api/weather/stations/:id/csv', 'a file (uploads)'],
   ['POST /api/imports', 'a file (uploads)'],
   ['POST /api/work-orders/:id/photos', 'a file (uploads)'],

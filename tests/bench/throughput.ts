@@ -5,7 +5,8 @@
  * doing. Prints requests/s, p50/p95/p97.5 latency, errors and the ratio per route, and the
  * goals of the load budget beside them. The sequential benchmarks hide queueing: every request
  * shares one embedded database connection.
- * Run: node --import tsx tests/bench/throughput.ts  (BENCH_SECONDS=5, BENCH_CONNECTIONS=50)
+ * Run: node --import tsx tests/bench/throughput.ts  (BENCH_SECONDS=5, BENCH_CONNECTIONS=50;
+ * BENCH_PROFILE=<folder> writes a CPU profile of the server process there)
  */
 import { fork, type ChildProcess } from 'node:child_process';
 import type { Server, ServerResponse } from 'node:http';
@@ -122,9 +123,12 @@ async function serve(): Promise<void> {
 }
 
 if (process.argv.includes('--serve')) {
+  // A CPU profile is written only on a normal exit, not when killed by the signal.
+  if (process.execArgv.includes('--cpu-prof')) process.on('SIGTERM', () => process.exit(0));
   await serve();
 } else {
-  const child = fork(import.meta.filename, ['--serve'], { execArgv: ['--import', 'tsx'], stdio: 'inherit' });
+  const profile = process.env.BENCH_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE}`] : [];
+  const child = fork(import.meta.filename, ['--serve'], { execArgv: ['--import', 'tsx', ...profile], stdio: 'inherit' });
   child.once('exit', (code, signal) => {
     if (code !== null || signal !== 'SIGTERM') {
       console.error(`the server process ended (${signal ?? code}) before the bench did`);

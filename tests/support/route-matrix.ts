@@ -8,7 +8,7 @@
  */
 import crypto from 'node:crypto';
 import type { Db } from '../../apps/api/src/db/client.ts';
-import { calendarFeeds } from '../../apps/api/src/db/schema/index.ts';
+import { calendarFeeds, mailOutbox } from '../../apps/api/src/db/schema/index.ts';
 import type supertest from 'supertest';
 import { DEFAULT_COSTS, type Role } from '@swardwise/domain';
 import { newFieldBody } from './bodies.ts';
@@ -393,6 +393,21 @@ export const MATRIX: MatrixRow[] = [
   // Developer mail sink (only beside the local sink, never in production)
   { route: 'GET /api/dev/mail', allow: 'admin', scoped: false, call: (c) => c.agent.get('/api/dev/mail') },
   { route: 'DELETE /api/dev/mail', allow: 'admin', scoped: false, call: (c) => c.agent.delete('/api/dev/mail') },
+
+  // The mail outbox: the head sees stuck e-mail and sends a failed one again
+  { route: 'GET /api/mail-outbox', allow: 'admin head', scoped: false, call: (c) => c.agent.get('/api/mail-outbox') },
+  {
+    route: 'POST /api/mail-outbox/:id/retry',
+    allow: 'admin head',
+    scoped: false,
+    call: async (c) => {
+      const [mail] = await c.db
+        .insert(mailOutbox)
+        .values({ to: `matrix${c.n}@test.example`, subject: 'Matrix', text: 'x', status: 'failed', attempts: 20, lastError: 'refused' })
+        .returning({ id: mailOutbox.id });
+      return c.agent.post(`/api/mail-outbox/${mail!.id}/retry`);
+    },
+  },
 
   // Costs and rates
   { route: 'GET /api/costs', allow: 'admin head foreman', scoped: false, call: (c) => c.agent.get('/api/costs') },

@@ -156,6 +156,11 @@ const cases: Case[] = [
   ['foreman', 'update', 'CostSettings', null, false],
   ['crew', 'read', 'CostSettings', null, false],
   ['partner', 'read', 'CostSettings', null, false],
+  ['head', 'read', 'MailOutbox', null, true],
+  ['head', 'update', 'MailOutbox', null, true],
+  ['foreman', 'read', 'MailOutbox', null, false],
+  ['crew', 'read', 'MailOutbox', null, false],
+  ['partner', 'read', 'MailOutbox', null, false],
   // Season budget: the head sets it; a foreman reads his district's only
   ['head', 'update', 'Budget', { districtId: D2 }, true],
   ['head', 'read', 'Budget', { districtId: null }, true],

@@ -41,6 +41,8 @@ export const SUBJECTS = [
   'Overview',
   /** Sites compared by cost, hours and inputs per acre and surface score: the head's, a foreman's for his district. */
   'SiteComparison',
+  /** E-mail waiting in the outbox or given up: recipient, subject and state, never the message. */
+  'MailOutbox',
 ] as const;
 export type SubjectName = (typeof SUBJECTS)[number];
 /** A row tagged with its subject type (see `asSubject`). */
@@ -112,6 +114,8 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can(['read', 'update'], 'Budget');
       can('read', 'Overview');
       can('read', 'SiteComparison');
+      // The head sees which e-mail (invitations, resets) is stuck and sends a failed one again.
+      can(['read', 'update'], 'MailOutbox');
       break;
 
     case 'foreman': {

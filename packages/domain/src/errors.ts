@@ -94,6 +94,8 @@ export const ERROR_CODES = {
   'work_photo/too_many': 'conflict',
   'work_photo/file_missing': 'not_found',
 
+  'mail/not_found': 'not_found',
+  'mail/not_failed': 'conflict',
   'field_request/not_open': 'conflict',
   'game_day/exists': 'conflict',
   'game_day/past_event': 'invalid',

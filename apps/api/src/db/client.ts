@@ -73,5 +73,77 @@ export async function openDatabase(options: OpenOptions): Promise<Database> {
     : await PGlite.create(dir);
   const db = drizzlePglite(client, { schema });
   await migratePglite(db, { migrationsFolder });
+  countWrites(db, client);
   return { db, kind: 'pglite', close: () => client.close() };
+}
+
+/** Per PGlite database: statements sent that may have written (see `localWriteCount`). */
+const writeCounters = new WeakMap<object, { n: number }>();
+
+/**
+ * Statements that only read: a select (a data-changing CTE aside), and the transaction
+ * brackets around others, which are counted themselves. `for update` and the like count as
+ * writes: an extra count costs a cache miss, a missing one a stale answer.
+ */
+const READ_ONLY = /^\s*(select|show|begin|start transaction|commit|end|rollback|savepoint|release|set)\b/i;
+const WRITE_WORD = /\b(insert|update|delete|truncate|merge|copy|alter|create|drop|refresh|call|do)\b/i;
+/**
+ * Tables written on their own all day (a session's expiry, sign-in counters, the outbox's
+ * passes, audit entries beside a counted write) that no cached answer reads and whose rows no
+ * answer's table references: writing only these leaves cached answers current.
+ */
+const UNCOUNTED = new Set(['sessions', 'rate_limits', 'mail_outbox', 'audit_log']);
+const TARGET = /^\s*(?:insert\s+into|update|delete\s+from)\s+"?([a-z_]+)"?/i;
+function mayWrite(query: unknown): boolean {
+  if (typeof query !== 'string') return true;
+  const target = TARGET.exec(query)?.[1];
+  if (target && UNCOUNTED.has(target.toLowerCase())) return false;
+  if (/^\s*with\b/i.test(query)) return WRITE_WORD.test(query);
+  return !READ_ONLY.test(query) || (/^\s*select\b/i.test(query) && /\bfor\s+(no\s+key\s+)?update\b/i.test(query));
+}
+
+/**
+ * A PGlite database lives in this one process (its folder is never opened by two), so every
+ * write reaches it through this client: counting them here tells the answer cache that its
+ * answers are current without a query per request. Counted when the statement is sent and
+ * again when it ends, so a read that begins after a write has ended always sees a new count.
+ */
+function countWrites(db: object, client: PGlite): void {
+  const counter = { n: 0 };
+  writeCounters.set(db, counter);
+  type Run = (query: string, ...rest: unknown[]) => Promise<unknown>;
+  const wrap = <T extends object>(target: T, method: 'query' | 'exec' | 'sql') => {
+    const original = (target as Record<string, unknown>)[method];
+    if (typeof original !== 'function') return;
+    (target as Record<string, unknown>)[method] = function (this: unknown, query: string, ...rest: unknown[]) {
+      if (!mayWrite(query)) return (original as Run).call(target, query, ...rest);
+      counter.n += 1;
+      const done = (original as Run).call(target, query, ...rest);
+      const after = () => {
+        counter.n += 1;
+      };
+      done.then(after, after);
+      return done;
+    };
+  };
+  wrap(client, 'query');
+  wrap(client, 'exec');
+  const transaction = client.transaction.bind(client);
+  client.transaction = ((run: (tx: Parameters<Parameters<PGlite['transaction']>[0]>[0]) => Promise<unknown>) =>
+    transaction(async (tx) => {
+      wrap(tx, 'query');
+      wrap(tx, 'exec');
+      return run(tx);
+    }).finally(() => {
+      // The commit (or rollback) itself: what the transaction wrote is visible from here.
+      counter.n += 1;
+    })) as PGlite['transaction'];
+}
+
+/**
+ * How many statements that may have written this process has sent to its PGlite database, or
+ * undefined on PostgreSQL, where other processes write too (ask the database instead).
+ */
+export function localWriteCount(db: object): number | undefined {
+  return writeCounters.get(db)?.n;
 }

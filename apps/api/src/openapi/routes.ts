@@ -148,6 +148,7 @@ const service: RouteDoc[] = [
     path: '/api/health',
     tag: 'Service',
     summary: 'Check that the API and its database answer',
+    description: 'The database is asked at most once a second; checks in between rely on its last answer.',
     access: publicAccess(),
     answers: [json(200, 'The API and its database answer.', shape({ status: { type: 'string', enum: ['ok'] } }))],
   },
@@ -1122,6 +1123,31 @@ const crews: RouteDoc[] = [
   },
 ];
 
+const mailRow = row('One message: id, to, subject, state (queued, sent, failed), attempts, lastError, nextAttemptAt, sentAt, createdAt — never its text, which may hold sign-in links');
+const mailOutbox: RouteDoc[] = [
+  {
+    method: 'get',
+    path: '/api/mail-outbox',
+    tag: 'Settings',
+    summary: 'The e-mail outbox: queued, sent and given-up messages, newest first',
+    description: 'Recipient, subject and delivery state of each message; never its text (invitation and reset links).',
+    access: allowed('read', 'MailOutbox'),
+    answers: [
+      json(200, 'The newest messages and the count per state.', shape({ items: rows('The newest messages, at most `limit`; each as mailRow'), counts: row('queued, sent, failed: messages per state'), limit: int(), smtpConfigured: bool('false: no SMTP server configured, messages are logged rather than queued') })),
+    ],
+  },
+  {
+    method: 'post',
+    path: '/api/mail-outbox/:id/retry',
+    tag: 'Settings',
+    summary: 'Send a given-up message again now, with a fresh round of attempts; audited',
+    access: allowed('update', 'MailOutbox'),
+    params: idParamSchema,
+    answers: [json(200, 'The message queued again.', shape({ mail: mailRow }))],
+    errors: [404, 409],
+  },
+];
+
 const dev: RouteDoc[] = [
   {
     method: 'get',
@@ -1644,5 +1670,6 @@ export const ROUTES: readonly RouteDoc[] = [
   ...map,
   ...directory,
   ...crews,
+  ...mailOutbox,
   ...dev,
 ];

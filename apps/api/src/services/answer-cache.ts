@@ -1,34 +1,28 @@
 /**
  * Read-heavy answers (the map, the field list, a field's needs) cached as JSON per caller
  * scope and data fingerprint. PGlite runs one query at a time, so rebuilding 3,000 rows on
- * every request would queue everyone behind it; the fingerprint is one query that changes
- * with any write to the tables the answers read, so a cached answer is never stale. Requests
+ * every request would queue everyone behind it. The fingerprint reads the change counters in
+ * `answer_versions`, which `answer_version_*` triggers bump in the same transaction as every
+ * write to the tables the answers read, so a cached answer is never stale on any process
+ * sharing the database, and reading them costs a few rows however large the city. Requests
  * arriving together share one fingerprint query (`sharedFingerprint`), never one begun before
- * they arrived.
+ * they arrived, and one build of a missing answer (`cachedAnswer`).
  */
 import { sql } from 'drizzle-orm';
-import { districts, fieldChecks, fields, settings, sites, standards, weatherDays, weatherStations, workOrders } from '../db/schema/index.ts';
+import { localWriteCount } from '../db/client.ts';
+import { answerVersions } from '../db/schema/index.ts';
 import type { Ctx } from './context.ts';
 
 /**
  * Changes whenever a field, check, weather day, station, Standards row, site, district, work
- * order or setting (department parameters, time zone, costs) is written, added or removed,
- * and at midnight (a crew's window of work moves with the day).
+ * order or setting (department parameters, time zone, costs) is written, added or removed
+ * (the triggers of migration 0021 count every write statement on those tables), and at
+ * midnight (a crew's window of work moves with the day).
  */
 async function dataFingerprint(db: Ctx['db']): Promise<string> {
-  const res = await db.execute(sql`select concat_ws('|',
-    (select count(*) || ':' || coalesce(max(${fields.updatedAt})::text, '') || ':' || coalesce(max(${fields.id}), 0)
-       || ':' || coalesce(sum(${fields.version}), 0) || ':' || coalesce(sum(${fields.lastMowedOn} - date '2000-01-01'), 0) from ${fields}),
-    (select count(*) || ':' || coalesce(max(${fieldChecks.id}), 0) from ${fieldChecks}),
-    (select count(*) || ':' || coalesce(max(${weatherDays.updatedAt})::text, '') from ${weatherDays}),
-    (select count(*) || ':' || coalesce(max(${weatherStations.updatedAt})::text, '') from ${weatherStations}),
-    (select coalesce(sum(${standards.version}), 0) || ':' || coalesce(max(${standards.updatedAt})::text, '') from ${standards}),
-    (select count(*) || ':' || coalesce(max(${sites.updatedAt})::text, '') || ':' || coalesce(sum(${sites.version}), 0) from ${sites}),
-    (select count(*) || ':' || coalesce(max(${districts.updatedAt})::text, '') from ${districts}),
-    (select count(*) || ':' || coalesce(max(${workOrders.updatedAt})::text, '') || ':' || coalesce(sum(${workOrders.version}), 0) from ${workOrders}),
-    (select count(*) || ':' || md5(coalesce(string_agg(${settings.key} || '=' || ${settings.value}::text, ',' order by ${settings.key}), '')) from ${settings} where ${settings.key} <> 'session_secret'),
-    current_date::text
-  ) as v`);
+  const res = await db.execute(
+    sql`select coalesce(string_agg(${answerVersions.scope} || '=' || ${answerVersions.version}, ',' order by ${answerVersions.scope}), '') || '|' || current_date::text as v from ${answerVersions}`,
+  );
   return String((res.rows[0] as { v: string }).v);
 }
 
@@ -87,20 +81,42 @@ export function sharedFingerprint(db: Ctx['db']): Promise<string> {
 const LIMITS: Record<string, number> = { needs: 256 };
 const LIMIT = 32;
 const caches = new WeakMap<object, Map<string, Map<string, unknown>>>();
+/** Builds under way per database and full key: callers missing together wait for one build. */
+const building = new WeakMap<object, Map<string, Promise<unknown>>>();
 
 /**
  * The cached entry for (kind, scope, key, fingerprint), built on a miss. One cache per
- * database handle, so test databases never share answers.
+ * database handle, so test databases never share answers. Fifty callers missing the same
+ * entry at once share one build: each build holds the one embedded connection for its
+ * queries, so fifty of them queued every request behind the others.
  */
 export async function cachedAnswer<T>(ctx: Ctx, kind: string, key: string, build: () => Promise<T>): Promise<T> {
-  const full = `${scopeKey(ctx)}|${key}|${await sharedFingerprint(ctx.db)}`;
+  // PGlite: this process sees every write, so its own count says as much as the counters
+  // table, without a query; the department's date stands in for the database's midnight.
+  const local = localWriteCount(ctx.db);
+  const fingerprint = local === undefined ? await sharedFingerprint(ctx.db) : `w${local}|${ctx.clock.today()}`;
+  const full = `${scopeKey(ctx)}|${key}|${fingerprint}`;
   let kinds = caches.get(ctx.db);
   if (!kinds) caches.set(ctx.db, (kinds = new Map()));
   let cache = kinds.get(kind);
   if (!cache) kinds.set(kind, (cache = new Map()));
   if (cache.has(full)) return cache.get(full) as T;
-  const value = await build();
-  if (cache.size >= (LIMITS[kind] ?? LIMIT)) cache.delete(cache.keys().next().value!);
-  cache.set(full, value);
-  return value;
+  let pending = building.get(ctx.db);
+  if (!pending) building.set(ctx.db, (pending = new Map()));
+  const inFlight = pending.get(`${kind}|${full}`);
+  if (inFlight) return inFlight as Promise<T>;
+  const store = cache;
+  const builds = pending;
+  const promise = (async () => {
+    try {
+      const value = await build();
+      if (store.size >= (LIMITS[kind] ?? LIMIT)) store.delete(store.keys().next().value!);
+      store.set(full, value);
+      return value;
+    } finally {
+      builds.delete(`${kind}|${full}`);
+    }
+  })();
+  builds.set(`${kind}|${full}`, promise);
+  return promise;
 }

@@ -54,10 +54,11 @@ export const queryKeys = {
   partnerFields: () => ['partner', 'fields'] as const,
   partnerField: (id: number) => ['partner', 'field', id] as const,
   calendarFeeds: () => ['calendar-feeds'] as const,
+  mailOutbox: () => ['mail-outbox'] as const,
 };
 
 /** What a write changes, by what was written. */
-export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request' | 'costs' | 'fieldLogo' | 'gameDay' | 'budget';
+export type Written = 'site' | 'field' | 'fieldEvent' | 'crew' | 'equipment' | 'user' | 'standards' | 'import' | 'workOrder' | 'weather' | 'devMail' | 'fieldCheck' | 'calendarFeed' | 'request' | 'costs' | 'fieldLogo' | 'gameDay' | 'budget' | 'mailOutbox';
 
 /**
  * The answers a write makes stale: the resource itself and every answer that shows it (a
@@ -82,6 +83,7 @@ export const staleAfter: Record<Written, readonly (readonly unknown[])[]> = {
   fieldLogo: [['fields', 'logos']],
   costs: [['costs'], ['budget'], ['records', 'compare']],
   budget: [['budget']],
+  mailOutbox: [['mail-outbox']],
   // Scheduling a request books the field or adds a work order; the partner's pages list requests.
   request: [['requests'], ['field-events'], ['fields', 'needs'], ['week-plans'], ['work-orders'], ['partner'], ['overview']],
 };

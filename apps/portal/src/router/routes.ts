@@ -210,6 +210,12 @@ export const routes: RouteRecordRaw[] = [
         meta: { roles: ['admin', 'head'], can: ['read', 'AuditEntry'], title: 'Audit log' },
       },
       {
+        path: 'mail-outbox',
+        name: 'mail-outbox',
+        component: () => import('../views/MailOutboxView.vue'),
+        meta: { roles: ['admin', 'head'], can: ['read', 'MailOutbox'], title: 'Mail outbox' },
+      },
+      {
         // Development only: the API answers it when it runs the local mail sink.
         path: 'dev/mail',
         name: 'dev-mail',

@@ -28,3 +28,4 @@ export * from './game-days.ts';
 export * from './budget.ts';
 export * from './overview.ts';
 export * from './compare.ts';
+export * from './mail-outbox.ts';

@@ -28,3 +28,15 @@ export const settings = pgTable('settings', {
   value: jsonb('value').notNull(),
   ...updatedAt,
 });
+
+/**
+ * One change counter per table the cached answers read (fields, sites, work orders, …),
+ * bumped by `answer_version_*` triggers in the same transaction as the write. Reading these
+ * few rows tells every API process whether its cached answers are still current, where
+ * summing over the tables themselves took a scan of all work orders per request.
+ */
+export const answerVersions = pgTable('answer_versions', {
+  /** The table written (the trigger's TG_TABLE_NAME). */
+  scope: text('scope').primaryKey(),
+  version: bigint('version', { mode: 'number' }).notNull().default(0),
+});

@@ -2,7 +2,7 @@ import type { Action, AppAbility, Role, SubjectName } from '@swardwise/domain';
 
 export interface NavItem {
   key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields' | 'standards' | 'map' | 'imports' | 'crews' | 'equipment' | 'weather'
-    | 'week' | 'records' | 'requests' | 'costs' | 'budget' | 'compare';
+    | 'week' | 'records' | 'requests' | 'costs' | 'budget' | 'compare' | 'mail-outbox';
   label: string;
   to: string;
   roles: Role[];
@@ -34,6 +34,7 @@ const NAV_ITEMS: NavItem[] = [
   { key: 'imports', label: 'Imports', to: '/imports', roles: ['admin', 'head', 'foreman'], can: ['create', 'Import'] },
   { key: 'users', label: 'Users', to: '/admin/users', roles: ['admin'], can: ['create', 'User'] },
   { key: 'audit', label: 'Audit log', to: '/audit', roles: ['admin', 'head'], can: ['read', 'AuditEntry'] },
+  { key: 'mail-outbox', label: 'Mail outbox', to: '/mail-outbox', roles: ['admin', 'head'], can: ['read', 'MailOutbox'] },
 ];
 
 export function navItemsFor(role: Role, ability: AppAbility): NavItem[] {
