@@ -18,6 +18,7 @@ import {
   type EquipmentKind,
   type Level,
   type WorkCost,
+  WORK_TASKS,
 } from '@swardwise/domain';
 import { applications, districts, equipment, fieldChecks, fields, sites, workOrders } from '../db/schema/index.ts';
 import { authorize, type Ctx } from './context.ts';
@@ -33,17 +34,36 @@ export function comparePeriod(today: string, q: CompareQuery): CompareSitesAnswe
 /** A number kept in a work order's details, or 0 when absent or not a number. */
 const detail = (path: SQL): SQL => sql`case when jsonb_typeof(${path}) = 'number' then (${path}#>>'{}')::float8 else 0 end`;
 
-/** The machine an order ran: its equipment's kind, else the task's usual machine. */
-const machineKind = sql`coalesce(e.kind, case wo.task ${sql.join(
+/**
+ * The machine an order ran: its equipment's kind (`e.kind`), else the task's usual machine;
+ * `reel` tells a reel mowing from a rotary one.
+ */
+const machineKindOf = (task: SQL, reel: SQL): SQL => sql`coalesce(e.kind, case ${task} ${sql.join(
   Object.entries(MACHINE_OF_TASK)
     .filter(([, kind]) => kind !== null)
-    .map(([task, kind]) =>
-      task === 'mow'
-        ? sql`when 'mow' then case when coalesce(wo.details->>'mowerKind', wo.details->>'mower', '') like 'reel%' then 'reel_mower' else 'rotary_mower' end`
-        : sql`when ${sql.raw(`'${task}'`)} then ${sql.raw(`'${kind}'`)}`,
-    ),
+    .map(([t, kind]) => (t === 'mow' ? sql`when 'mow' then case when ${reel} then 'reel_mower' else 'rotary_mower' end` : sql`when ${sql.raw(`'${t}'`)} then ${sql.raw(`'${kind}'`)}`)),
   sql` `,
 )} end)`;
+
+/** The first day of the month after the one of `iso`. */
+const nextMonth = (iso: string): string => {
+  const [y, m] = [Number(iso.slice(0, 4)), Number(iso.slice(5, 7))];
+  return m === 12 ? `${y + 1}-01-01` : `${y}-${String(m + 1).padStart(2, '0')}-01`;
+};
+
+/**
+ * The period cut into whole months (read from the month rollup the triggers keep) and the days
+ * before and after them (read from the orders themselves, through work_orders_task_date_idx).
+ */
+export function splitByMonth(from: string, to: string): { months: [string, string] | null; days: [string, string][] } {
+  const first = from.endsWith('-01') ? from : nextMonth(from);
+  const last = addDaysIso(nextMonth(to), -1) === to ? to : addDaysIso(`${to.slice(0, 7)}-01`, -1);
+  if (first > last) return { months: null, days: [[from, to]] };
+  const days: [string, string][] = [];
+  if (from < first) days.push([from, addDaysIso(first, -1)]);
+  if (last < to) days.push([addDaysIso(last, 1), to]);
+  return { months: [first, last], days };
+}
 
 /** Seed sown, kg, from an application's label rate and area. */
 const SEED_KG = sql`case a.rate_unit
@@ -57,6 +77,35 @@ type SiteFacts = { site_id: number; site_name: string; district_id: number; dist
 type WorkGroup = { site_id: number; crew_id: number | null; kind: EquipmentKind | null; orders: number; hours: number; kg_n: number; water_m3: number; paint_l: number; colourant_l: number };
 
 const perAcre = (value: number, acres: number): number | null => (acres > 0 ? value / acres : null);
+
+/** Done work per site, crew and machine kind over [from, to]: whole months from the rollup, the other days from the orders. */
+function workGroups(from: string, to: string, inDistrict: (col: SQL) => SQL): SQL {
+  const { months, days } = splitByMonth(from, to);
+  const parts: SQL[] = days.map(
+    ([a, b]) => sql`
+      select wo.site_id, wo.crew_id, ${machineKindOf(sql`wo.task`, sql`coalesce(wo.details->>'mowerKind', wo.details->>'mower', '') like 'reel%'`)} as kind, count(*)::int as orders,
+        sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours,
+        sum(case when wo.task = 'feed' then ${detail(sql`wo.details->'nGPerM2'`)} * f.area_m2 / 1000 else 0 end)::float8 as kg_n,
+        sum(case when wo.task = 'irrigate' then ${detail(sql`wo.details->'volumeL'`)} / 1000 else 0 end)::float8 as water_m3,
+        sum(case when wo.task = 'paint_lines' then ${detail(sql`wo.details->'paintL'`)} else 0 end)::float8 as paint_l,
+        sum(case when wo.task = 'colourant' then ${detail(sql`wo.details->'colourant'->'rateMlPerM2'`)} * ${detail(sql`wo.details->'colourant'->'areaM2'`)} / 1000 else 0 end)::float8 as colourant_l
+      from ${workOrders} wo join ${fields} f on f.id = wo.field_id left join ${equipment} e on e.id = wo.equipment_id
+      where wo.status = 'done' and wo.task in (${sql.join(WORK_TASKS.map((t) => sql`${t}`), sql`, `)}) and wo.planned_date between ${a} and ${b} and ${inDistrict(sql`wo.district_id`)}
+      group by wo.site_id, wo.crew_id, 3`,
+  );
+  if (months)
+    parts.push(sql`
+      select r.site_id, nullif(r.crew_key, 0) as crew_id, ${machineKindOf(sql`r.task`, sql`r.reel`)} as kind, sum(r.orders)::int as orders,
+        sum(r.hours)::float8 as hours, sum(r.kg_n)::float8 as kg_n, sum(r.water_m3)::float8 as water_m3, sum(r.paint_l)::float8 as paint_l, sum(r.colourant_l)::float8 as colourant_l
+      from rollup_compare_month r left join ${equipment} e on e.id = nullif(r.equipment_key, 0)
+      where r.month between ${months[0]} and ${months[1]} and ${inDistrict(sql`r.district_id`)}
+      group by 1, 2, 3`);
+  return sql`
+    select site_id, crew_id, kind, sum(orders)::int as orders, sum(hours)::float8 as hours, sum(kg_n)::float8 as kg_n,
+      sum(water_m3)::float8 as water_m3, sum(paint_l)::float8 as paint_l, sum(colourant_l)::float8 as colourant_l
+    from (${sql.join(parts, sql` union all `)}) g
+    group by site_id, crew_id, kind`;
+}
 
 /** Sites in the caller's scope with their figures over the period. The head sees every district (or the one asked); a foreman only his own. */
 export async function compareSites(ctx: Ctx, q: CompareQuery): Promise<CompareSitesAnswer> {
@@ -82,16 +131,7 @@ export async function compareSites(ctx: Ctx, q: CompareQuery): Promise<CompareSi
       from ${sites} s join ${districts} d on d.id = s.district_id left join ${fields} f on f.site_id = s.id
       where ${inDistrict(sql`s.district_id`)}
       group by s.id, d.id order by s.name, s.id`),
-    ctx.db.execute<WorkGroup>(sql`
-      select wo.site_id, wo.crew_id, ${machineKind} as kind, count(*)::int as orders,
-        sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours,
-        sum(case when wo.task = 'feed' then ${detail(sql`wo.details->'nGPerM2'`)} * f.area_m2 / 1000 else 0 end)::float8 as kg_n,
-        sum(case when wo.task = 'irrigate' then ${detail(sql`wo.details->'volumeL'`)} / 1000 else 0 end)::float8 as water_m3,
-        sum(case when wo.task = 'paint_lines' then ${detail(sql`wo.details->'paintL'`)} else 0 end)::float8 as paint_l,
-        sum(case when wo.task = 'colourant' then ${detail(sql`wo.details->'colourant'->'rateMlPerM2'`)} * ${detail(sql`wo.details->'colourant'->'areaM2'`)} / 1000 else 0 end)::float8 as colourant_l
-      from ${workOrders} wo join ${fields} f on f.id = wo.field_id left join ${equipment} e on e.id = wo.equipment_id
-      where wo.status = 'done' and wo.planned_date between ${period.from} and ${period.to} and ${inDistrict(sql`wo.district_id`)}
-      group by wo.site_id, wo.crew_id, 3`),
+    ctx.db.execute<WorkGroup>(workGroups(period.from, period.to, inDistrict)),
     ctx.db.execute<{ site_id: number; seed_kg: number }>(sql`
       select a.site_id, sum(${SEED_KG})::float8 as seed_kg from ${applications} a
       where a.task = 'overseed' and a.applied_on between ${period.from} and ${period.to} and ${inDistrict(sql`a.district_id`)}

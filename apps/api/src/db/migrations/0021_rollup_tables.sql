@@ -1,5 +1,6 @@
 CREATE TABLE "rollup_compare_month" (
 	"month" date NOT NULL,
+	"district_id" integer NOT NULL,
 	"site_id" integer NOT NULL,
 	"crew_key" integer NOT NULL,
 	"equipment_key" integer NOT NULL,
@@ -11,7 +12,7 @@ CREATE TABLE "rollup_compare_month" (
 	"water_m3" numeric DEFAULT '0' NOT NULL,
 	"paint_l" numeric DEFAULT '0' NOT NULL,
 	"colourant_l" numeric DEFAULT '0' NOT NULL,
-	CONSTRAINT "rollup_compare_month_month_site_id_crew_key_equipment_key_task_reel_pk" PRIMARY KEY("month","site_id","crew_key","equipment_key","task","reel")
+	CONSTRAINT "rollup_compare_month_month_district_id_site_id_crew_key_equipment_key_task_reel_pk" PRIMARY KEY("month","district_id","site_id","crew_key","equipment_key","task","reel")
 );
 --> statement-breakpoint
 CREATE TABLE "rollup_overview_day" (

@@ -12,7 +12,7 @@ RETURNS TABLE (s integer, district_id integer, site_id integer, on_field boolean
   planned_date date, planned_hours numeric, actual_hours numeric, status text, details jsonb, done_at timestamptz, area numeric, due date)
 LANGUAGE sql STABLE AS $$
   SELECT d.s, d.district_id, d.site_id, f.id IS NOT NULL, d.crew_id, d.equipment_id, d.task,
-    d.planned_date, d.planned_hours::numeric, d.actual_hours::numeric, d.status, d.details, d.done_at, f.area_m2::numeric,
+    d.planned_date, d.planned_hours::float8::numeric, d.actual_hours::float8::numeric, d.status, d.details, d.done_at, f.area_m2::numeric,
     CASE WHEN jsonb_typeof(d.details -> 'dueBy') = 'string' THEN (d.details ->> 'dueBy')::date ELSE d.planned_date END
   FROM (SELECT -1 AS s, o.* FROM unnest(minus) o UNION ALL SELECT 1, p.* FROM unnest(plus) p) d
   LEFT JOIN fields f ON f.id = d.field_id
@@ -64,8 +64,8 @@ BEGIN
     paint_planned = t.paint_planned + excluded.paint_planned,
     paint_used = t.paint_used + excluded.paint_used;
 
-  INSERT INTO rollup_compare_month AS t (month, site_id, crew_key, equipment_key, task, reel, orders, hours, kg_n, water_m3, paint_l, colourant_l)
-  SELECT date_trunc('month', w.planned_date)::date, w.site_id, coalesce(w.crew_id, 0), coalesce(w.equipment_id, 0), w.task,
+  INSERT INTO rollup_compare_month AS t (month, district_id, site_id, crew_key, equipment_key, task, reel, orders, hours, kg_n, water_m3, paint_l, colourant_l)
+  SELECT date_trunc('month', w.planned_date)::date, w.district_id, w.site_id, coalesce(w.crew_id, 0), coalesce(w.equipment_id, 0), w.task,
     w.task = 'mow' AND coalesce(w.details ->> 'mowerKind', w.details ->> 'mower', '') LIKE 'reel%',
     sum(w.s),
     sum(w.s * coalesce(w.actual_hours, w.planned_hours)),
@@ -75,8 +75,8 @@ BEGIN
     sum(w.s * CASE WHEN w.task = 'colourant' THEN rollup_num(w.details -> 'colourant' -> 'rateMlPerM2') * rollup_num(w.details -> 'colourant' -> 'areaM2') / 1000 ELSE 0 END)
   FROM rollup_work_rows(minus, plus) w
   WHERE w.on_field AND w.status = 'done'
-  GROUP BY 1, 2, 3, 4, 5, 6
-  ON CONFLICT (month, site_id, crew_key, equipment_key, task, reel) DO UPDATE SET
+  GROUP BY 1, 2, 3, 4, 5, 6, 7
+  ON CONFLICT (month, district_id, site_id, crew_key, equipment_key, task, reel) DO UPDATE SET
     orders = t.orders + excluded.orders,
     hours = t.hours + excluded.hours,
     kg_n = t.kg_n + excluded.kg_n,

@@ -41,7 +41,7 @@ export const rollupOverviewDay = pgTable(
 );
 
 /**
- * Done work orders on a field per month of their planned day, site, crew (0: none), equipment
+ * Done work orders on a field per month of their planned day, district, site, crew (0: none), equipment
  * (0: none), task and mower kind: the compare's hours and inputs. The machine kind is worked
  * out when read, so an equipment's kind or the task's usual machine may change freely.
  */
@@ -49,6 +49,7 @@ export const rollupCompareMonth = pgTable(
   'rollup_compare_month',
   {
     month: date('month', { mode: 'string' }).notNull(),
+    districtId: integer('district_id').notNull(),
     siteId: integer('site_id').notNull(),
     crewKey: integer('crew_key').notNull(),
     equipmentKey: integer('equipment_key').notNull(),
@@ -61,7 +62,7 @@ export const rollupCompareMonth = pgTable(
     paintL: total('paint_l'),
     colourantL: total('colourant_l'),
   },
-  (t) => [primaryKey({ columns: [t.month, t.siteId, t.crewKey, t.equipmentKey, t.task, t.reel] })],
+  (t) => [primaryKey({ columns: [t.month, t.districtId, t.siteId, t.crewKey, t.equipmentKey, t.task, t.reel] })],
 );
 
 /** The time zone the late mowings of `rollup_overview_day` were counted in (one row). */
