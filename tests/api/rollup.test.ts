@@ -1,6 +1,6 @@
 /**
- * The summary tables the overview and the sites compare read (rollup_overview_day,
- * rollup_compare_month) stay equal to a fresh aggregate of the raw rows after work orders and
+ * The summary tables the overview and the sites compare read (rollup_overview_day and the
+ * compare's year-to-date tables) stay equal to a fresh aggregate of the raw rows after work orders and
  * fields change in every way the app changes them: a week plan generated and re-generated,
  * orders added by hand, reported started, done and skipped, reopened, moved across a month,
  * reassigned, deleted, rained out, a field check logged, a field re-drawn and a field deleted.
@@ -79,34 +79,50 @@ async function freshOverview() {
 const ROLLUP_OVERVIEW = sql`select district_id, day::text as day, orders, planned_hours, orders_done, actual_hours_done, planned_hours_done, mow_asked, mow_done, mow_late, mow_not_done,
   n_kg_done, water_vol_budget, water_qc_budget, water_vol_used, water_qc_used, paint_planned, paint_used from rollup_overview_day`;
 
-/** The compare's month sums of done orders on a field, written apart from the triggers. */
+/** The compare's year-to-date sums of done orders on a field (January to each month), written apart from the triggers. */
 async function freshCompare() {
-  return keyed(
+  const crews = keyed(
     await rows(sql`
-      select to_char(wo.planned_date, 'YYYY-MM') as month, wo.district_id, wo.site_id, coalesce(wo.crew_id, 0) as crew, coalesce(wo.equipment_id, 0) as equipment, wo.task,
-        (wo.task = 'mow' and coalesce(wo.details->>'mowerKind', wo.details->>'mower', '') like 'reel%') as reel,
+      select extract(year from wo.planned_date)::int as year, m.month, wo.district_id, wo.site_id, coalesce(wo.crew_id, 0) as crew,
         count(*) as orders, sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours,
         sum(case when wo.task = 'feed' then (wo.details->>'nGPerM2')::float8 * f.area_m2 / 1000 else 0 end) as kg_n,
         sum(case when wo.task = 'irrigate' then coalesce((wo.details->>'volumeL')::float8, 0) / 1000 else 0 end) as water_m3,
         sum(case when wo.task = 'paint_lines' then coalesce((wo.details->>'paintL')::float8, 0) else 0 end) as paint_l,
         sum(case when wo.task = 'colourant' then (wo.details->'colourant'->>'rateMlPerM2')::float8 * (wo.details->'colourant'->>'areaM2')::float8 / 1000 else 0 end) as colourant_l
       from work_orders wo join fields f on f.id = wo.field_id
+      join (select generate_series(1, 12) as month) m on m.month >= extract(month from wo.planned_date)
+      where wo.status = 'done'
+      group by 1, 2, 3, 4, 5`),
+    ['year', 'month', 'district_id', 'site_id', 'crew'],
+  );
+  const machines = keyed(
+    await rows(sql`
+      select extract(year from wo.planned_date)::int as year, m.month, wo.district_id, wo.site_id, coalesce(wo.equipment_id, 0) as equipment, wo.task,
+        (wo.task = 'mow' and coalesce(wo.details->>'mowerKind', wo.details->>'mower', '') like 'reel%') as reel,
+        sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours
+      from work_orders wo join fields f on f.id = wo.field_id
+      join (select generate_series(1, 12) as month) m on m.month >= extract(month from wo.planned_date)
       where wo.status = 'done'
       group by 1, 2, 3, 4, 5, 6, 7`),
-    ['month', 'district_id', 'site_id', 'crew', 'equipment', 'task', 'reel'],
+    MACHINE_KEY,
   );
+  return { crews, machines };
 }
 
-const ROLLUP_COMPARE = sql`select to_char(month, 'YYYY-MM') as month, district_id, site_id, crew_key as crew, equipment_key as equipment, task, reel,
-  orders, hours, kg_n, water_m3, paint_l, colourant_l from rollup_compare_month`;
+const CREW_KEY = ['year', 'month', 'district_id', 'site_id', 'crew'];
+const MACHINE_KEY = ['year', 'month', 'district_id', 'site_id', 'equipment', 'task', 'reel'];
 
 async function expectRollupsExact() {
   expectSame(keyed(await rows(ROLLUP_OVERVIEW), ['district_id', 'day']), await freshOverview(), 'rollup_overview_day');
-  expectSame(keyed(await rows(ROLLUP_COMPARE), ['month', 'district_id', 'site_id', 'crew', 'equipment', 'task', 'reel']), await freshCompare(), 'rollup_compare_month');
+  const fresh = await freshCompare();
+  const crews = await rows(sql`select year, month, district_id, site_id, crew_key as crew, orders, hours, kg_n, water_m3, paint_l, colourant_l from rollup_compare_crew_ytd`);
+  expectSame(keyed(crews, CREW_KEY), fresh.crews, 'rollup_compare_crew_ytd');
+  const machines = await rows(sql`select year, month, district_id, site_id, equipment_key as equipment, task, reel, hours from rollup_compare_machine_ytd`);
+  expectSame(keyed(machines, MACHINE_KEY), fresh.machines, 'rollup_compare_machine_ytd');
 }
 
 describe('summary tables kept by triggers', () => {
-  test('should equal a fresh aggregate of the raw rows after every kind of change the app makes', async () => {
+  test('should equal a fresh aggregate of the raw rows after every kind of change the app makes', { timeout: 180_000 }, async () => {
     const { districts, fields, crews } = api.fixture;
     await expectRollupsExact();
 
@@ -206,5 +222,35 @@ describe('summary tables kept by triggers', () => {
     expect((await rows(sql`select time_zone from rollup_state`))[0]!.time_zone).toBe(api.clock.timeZone);
     expect(await lateOn()).toBe(0);
     await expectRollupsExact();
+  });
+});
+
+describe('sites compared over months read from the year-to-date tables', () => {
+  test('should equal sums over the orders for a range across a year end with days before and after its whole months', async () => {
+    const { fields, crews } = api.fixture;
+    await api.database.db.execute(sql`
+      insert into work_orders (field_id, site_id, district_id, task, week_start, planned_date, planned_hours, actual_hours, status, origin, crew_id, done_at)
+      select f.id, f.site_id, s.district_id, 'mow', t.day::date, t.day::date, 1, t.hours, 'done', 'manual', ${crews.north}, (t.day || 'T15:00:00Z')::timestamptz
+      from fields f join sites s on s.id = f.site_id,
+      (values ('2025-10-10', 1.5), ('2025-11-20', 2.25), ('2025-12-05', 0.75), ('2026-02-11', 3.5), ('2026-06-02', 1.25), ('2026-06-20', 4)) as t(day, hours)
+      where f.id in (${fields.northSoccer}, ${fields.southBaseball})`);
+    const [from, to] = ['2025-11-15', '2026-06-03'];
+    const head = await api.signIn('head');
+    const res = await head.get(`/api/compare/sites?period=range&from=${from}&to=${to}`);
+    ok(res, 'compare');
+    const want = new Map(
+      (
+        await rows(sql`select wo.site_id, count(*)::int as orders, sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours
+          from work_orders wo join fields f on f.id = wo.field_id
+          where wo.status = 'done' and wo.planned_date between ${from}::date and ${to}::date group by wo.site_id`)
+      ).map((r) => [Number(r.site_id), r]),
+    );
+    const answer = res.body as { rows: { siteId: number; ordersDone: number; hours: number }[] };
+    for (const r of answer.rows) {
+      const w = want.get(r.siteId);
+      expect(r.ordersDone, `site ${r.siteId}`).toBe(Number(w?.orders ?? 0));
+      expect(r.hours, `site ${r.siteId}`).toBeCloseTo(Number(w?.hours ?? 0), 6);
+    }
+    expect(answer.rows.reduce((t, r) => t + r.ordersDone, 0)).toBeGreaterThan(4);
   });
 });

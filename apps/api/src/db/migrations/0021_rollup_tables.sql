@@ -1,18 +1,28 @@
-CREATE TABLE "rollup_compare_month" (
-	"month" date NOT NULL,
+CREATE TABLE "rollup_compare_crew_ytd" (
+	"year" smallint NOT NULL,
+	"month" smallint NOT NULL,
 	"district_id" integer NOT NULL,
 	"site_id" integer NOT NULL,
 	"crew_key" integer NOT NULL,
-	"equipment_key" integer NOT NULL,
-	"task" text NOT NULL,
-	"reel" boolean NOT NULL,
 	"orders" integer DEFAULT 0 NOT NULL,
 	"hours" numeric DEFAULT '0' NOT NULL,
 	"kg_n" numeric DEFAULT '0' NOT NULL,
 	"water_m3" numeric DEFAULT '0' NOT NULL,
 	"paint_l" numeric DEFAULT '0' NOT NULL,
 	"colourant_l" numeric DEFAULT '0' NOT NULL,
-	CONSTRAINT "rollup_compare_month_month_district_id_site_id_crew_key_equipment_key_task_reel_pk" PRIMARY KEY("month","district_id","site_id","crew_key","equipment_key","task","reel")
+	CONSTRAINT "rollup_compare_crew_ytd_year_month_district_id_site_id_crew_key_pk" PRIMARY KEY("year","month","district_id","site_id","crew_key")
+);
+--> statement-breakpoint
+CREATE TABLE "rollup_compare_machine_ytd" (
+	"year" smallint NOT NULL,
+	"month" smallint NOT NULL,
+	"district_id" integer NOT NULL,
+	"site_id" integer NOT NULL,
+	"equipment_key" integer NOT NULL,
+	"task" text NOT NULL,
+	"reel" boolean NOT NULL,
+	"hours" numeric DEFAULT '0' NOT NULL,
+	CONSTRAINT "rollup_compare_machine_ytd_year_month_district_id_site_id_equipment_key_task_reel_pk" PRIMARY KEY("year","month","district_id","site_id","equipment_key","task","reel")
 );
 --> statement-breakpoint
 CREATE TABLE "rollup_overview_day" (

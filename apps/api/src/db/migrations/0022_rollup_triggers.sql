@@ -1,4 +1,4 @@
--- Keeps rollup_overview_day and rollup_compare_month exact: every change of work orders adds
+-- Keeps rollup_overview_day and the compare's year-to-date tables exact: every change of work orders adds
 -- the new rows' contribution and takes away the old rows'. Statement-level triggers with
 -- transition tables, so a week plan's apply of hundreds of orders is one grouped upsert.
 CREATE FUNCTION rollup_num(j jsonb) RETURNS numeric LANGUAGE sql IMMUTABLE AS $$
@@ -64,25 +64,34 @@ BEGIN
     paint_planned = t.paint_planned + excluded.paint_planned,
     paint_used = t.paint_used + excluded.paint_used;
 
-  INSERT INTO rollup_compare_month AS t (month, district_id, site_id, crew_key, equipment_key, task, reel, orders, hours, kg_n, water_m3, paint_l, colourant_l)
-  SELECT date_trunc('month', w.planned_date)::date, w.district_id, w.site_id, coalesce(w.crew_id, 0), coalesce(w.equipment_id, 0), w.task,
-    w.task = 'mow' AND coalesce(w.details ->> 'mowerKind', w.details ->> 'mower', '') LIKE 'reel%',
+  -- A done order counts in its month's year to date and in every later month's of that year.
+  INSERT INTO rollup_compare_crew_ytd AS t (year, month, district_id, site_id, crew_key, orders, hours, kg_n, water_m3, paint_l, colourant_l)
+  SELECT extract(year FROM w.planned_date)::smallint, m.m::smallint, w.district_id, w.site_id, coalesce(w.crew_id, 0),
     sum(w.s),
     sum(w.s * coalesce(w.actual_hours, w.planned_hours)),
     sum(w.s * CASE WHEN w.task = 'feed' THEN rollup_num(w.details -> 'nGPerM2') * w.area / 1000 ELSE 0 END),
     sum(w.s * CASE WHEN w.task = 'irrigate' THEN rollup_num(w.details -> 'volumeL') / 1000 ELSE 0 END),
     sum(w.s * CASE WHEN w.task = 'paint_lines' THEN rollup_num(w.details -> 'paintL') ELSE 0 END),
     sum(w.s * CASE WHEN w.task = 'colourant' THEN rollup_num(w.details -> 'colourant' -> 'rateMlPerM2') * rollup_num(w.details -> 'colourant' -> 'areaM2') / 1000 ELSE 0 END)
-  FROM rollup_work_rows(minus, plus) w
+  FROM rollup_work_rows(minus, plus) w, generate_series(extract(month FROM w.planned_date)::int, 12) m(m)
   WHERE w.on_field AND w.status = 'done'
-  GROUP BY 1, 2, 3, 4, 5, 6, 7
-  ON CONFLICT (month, district_id, site_id, crew_key, equipment_key, task, reel) DO UPDATE SET
+  GROUP BY 1, 2, 3, 4, 5
+  ON CONFLICT (year, month, district_id, site_id, crew_key) DO UPDATE SET
     orders = t.orders + excluded.orders,
     hours = t.hours + excluded.hours,
     kg_n = t.kg_n + excluded.kg_n,
     water_m3 = t.water_m3 + excluded.water_m3,
     paint_l = t.paint_l + excluded.paint_l,
     colourant_l = t.colourant_l + excluded.colourant_l;
+
+  INSERT INTO rollup_compare_machine_ytd AS t (year, month, district_id, site_id, equipment_key, task, reel, hours)
+  SELECT extract(year FROM w.planned_date)::smallint, m.m::smallint, w.district_id, w.site_id, coalesce(w.equipment_id, 0), w.task,
+    w.task = 'mow' AND coalesce(w.details ->> 'mowerKind', w.details ->> 'mower', '') LIKE 'reel%',
+    sum(w.s * coalesce(w.actual_hours, w.planned_hours))
+  FROM rollup_work_rows(minus, plus) w, generate_series(extract(month FROM w.planned_date)::int, 12) m(m)
+  WHERE w.on_field AND w.status = 'done'
+  GROUP BY 1, 2, 3, 4, 5, 6, 7
+  ON CONFLICT (year, month, district_id, site_id, equipment_key, task, reel) DO UPDATE SET hours = t.hours + excluded.hours;
 END
 $$;
 --> statement-breakpoint
@@ -103,7 +112,8 @@ BEGIN
           IS DISTINCT FROM (n.district_id, n.site_id, n.field_id, n.crew_id, n.equipment_id, n.task, n.planned_date, n.planned_hours, n.actual_hours, n.status, n.details, n.done_at)));
   ELSE
     DELETE FROM rollup_overview_day;
-    DELETE FROM rollup_compare_month;
+    DELETE FROM rollup_compare_crew_ytd;
+    DELETE FROM rollup_compare_machine_ytd;
   END IF;
   RETURN NULL;
 END
@@ -146,7 +156,8 @@ DECLARE
 BEGIN
   INSERT INTO rollup_state (id, time_zone) VALUES (1, zone) ON CONFLICT (id) DO UPDATE SET time_zone = excluded.time_zone;
   DELETE FROM rollup_overview_day;
-  DELETE FROM rollup_compare_month;
+  DELETE FROM rollup_compare_crew_ytd;
+  DELETE FROM rollup_compare_machine_ytd;
   FOR t IN SELECT DISTINCT wo.task FROM work_orders wo LOOP
     FOR m IN SELECT DISTINCT date_trunc('month', wo.planned_date)::date FROM work_orders wo WHERE wo.task = t LOOP
       PERFORM rollup_work_apply('{}', array(SELECT wo FROM work_orders wo WHERE wo.task = t AND wo.planned_date >= m AND wo.planned_date < (m + interval '1 month')::date));

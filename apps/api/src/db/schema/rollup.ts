@@ -5,7 +5,7 @@
  * Sums are `numeric` so adding and taking away a row leaves no rounding residue.
  */
 import { sql } from 'drizzle-orm';
-import { check, date, integer, numeric, pgTable, primaryKey, text, boolean } from 'drizzle-orm/pg-core';
+import { boolean, check, date, integer, numeric, pgTable, primaryKey, smallint, text } from 'drizzle-orm/pg-core';
 
 const total = (name: string) => numeric(name).notNull().default('0');
 const count = (name: string) => integer(name).notNull().default(0);
@@ -41,20 +41,18 @@ export const rollupOverviewDay = pgTable(
 );
 
 /**
- * Done work orders on a field per month of their planned day, district, site, crew (0: none), equipment
- * (0: none), task and mower kind: the compare's hours and inputs. The machine kind is worked
- * out when read, so an equipment's kind or the task's usual machine may change freely.
+ * Done work orders on a field, summed from January up to the end of `month` of `year` (the
+ * year to date: any run of whole months is one or two rows apart), per district, site and
+ * crew (0: none): the compare's orders, hours and inputs.
  */
-export const rollupCompareMonth = pgTable(
-  'rollup_compare_month',
+export const rollupCompareCrewYtd = pgTable(
+  'rollup_compare_crew_ytd',
   {
-    month: date('month', { mode: 'string' }).notNull(),
+    year: smallint('year').notNull(),
+    month: smallint('month').notNull(),
     districtId: integer('district_id').notNull(),
     siteId: integer('site_id').notNull(),
     crewKey: integer('crew_key').notNull(),
-    equipmentKey: integer('equipment_key').notNull(),
-    task: text('task').notNull(),
-    reel: boolean('reel').notNull(),
     orders: count('orders'),
     hours: total('hours'),
     kgN: total('kg_n'),
@@ -62,7 +60,27 @@ export const rollupCompareMonth = pgTable(
     paintL: total('paint_l'),
     colourantL: total('colourant_l'),
   },
-  (t) => [primaryKey({ columns: [t.month, t.districtId, t.siteId, t.crewKey, t.equipmentKey, t.task, t.reel] })],
+  (t) => [primaryKey({ columns: [t.year, t.month, t.districtId, t.siteId, t.crewKey] })],
+);
+
+/**
+ * The same year to date, hours per site, equipment (0: none), task and mower kind: the
+ * machine kind is worked out when read, so an equipment's kind or a task's usual machine may
+ * change freely.
+ */
+export const rollupCompareMachineYtd = pgTable(
+  'rollup_compare_machine_ytd',
+  {
+    year: smallint('year').notNull(),
+    month: smallint('month').notNull(),
+    districtId: integer('district_id').notNull(),
+    siteId: integer('site_id').notNull(),
+    equipmentKey: integer('equipment_key').notNull(),
+    task: text('task').notNull(),
+    reel: boolean('reel').notNull(),
+    hours: total('hours'),
+  },
+  (t) => [primaryKey({ columns: [t.year, t.month, t.districtId, t.siteId, t.equipmentKey, t.task, t.reel] })],
 );
 
 /** The time zone the late mowings of `rollup_overview_day` were counted in (one row). */
