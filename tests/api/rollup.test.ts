@@ -119,6 +119,10 @@ async function expectRollupsExact() {
   expectSame(keyed(crews, CREW_KEY), fresh.crews, 'rollup_compare_crew_ytd');
   const machines = await rows(sql`select year, month, district_id, site_id, equipment_key as equipment, task, reel, hours from rollup_compare_machine_ytd`);
   expectSame(keyed(machines, MACHINE_KEY), fresh.machines, 'rollup_compare_machine_ytd');
+  const latest = await rows(sql`select field_id, check_id, checked_on::text as day, score from rollup_field_latest order by field_id`);
+  const ranked = await rows(sql`select field_id, id as check_id, checked_on::text as day, score from (
+    select c.*, row_number() over (partition by field_id order by checked_on desc, id desc) as k from field_checks c) c where k = 1 order by field_id`);
+  expect(latest, 'rollup_field_latest').toEqual(ranked);
 }
 
 describe('summary tables kept by triggers', () => {
@@ -185,6 +189,11 @@ describe('summary tables kept by triggers', () => {
     ok(await crew.post(`/api/work-orders/${checkOrder}/field-check`).send(check), 'check on order');
     ok(await foreman.post(`/api/fields/${fields.northSoccer}/checks`).send(check), 'check on field');
     await expectRollupsExact();
+    // A check re-dated before an older one, and the latest deleted.
+    await api.database.db.execute(sql`insert into field_checks (field_id, checked_on, turf_cover_pct, weeds_pct, bare_pct, score) values (${fields.northSoccer}, '2026-05-01', 80, 5, 5, 61.5)`);
+    await api.database.db.execute(sql`update field_checks set checked_on = '2026-04-01' where id = (select max(id) from field_checks where field_id = ${fields.northLawn})`);
+    await api.database.db.execute(sql`delete from field_checks where id = (select check_id from rollup_field_latest where field_id = ${fields.northSoccer})`);
+    await expectRollupsExact();
 
     // A field re-drawn (its area weighs its feeds and quick-coupler runs), then a new field with planned work deleted.
     const soccer = (await rows(sql`select version from fields where id = ${fields.northSoccer}`))[0]!;
@@ -234,6 +243,9 @@ describe('sites compared over months read from the year-to-date tables', () => {
       from fields f join sites s on s.id = f.site_id,
       (values ('2025-10-10', 1.5), ('2025-11-20', 2.25), ('2025-12-05', 0.75), ('2026-02-11', 3.5), ('2026-06-02', 1.25), ('2026-06-20', 4)) as t(day, hours)
       where f.id in (${fields.northSoccer}, ${fields.southBaseball})`);
+    // Checks in and after the period: the score is the latest check within it.
+    await api.database.db.execute(sql`insert into field_checks (field_id, checked_on, turf_cover_pct, weeds_pct, bare_pct, score)
+      values (${fields.southBaseball}, '2026-05-20', 80, 5, 5, 66), (${fields.southBaseball}, '2026-07-01', 95, 1, 1, 91), (${fields.northSoccer}, '2025-11-01', 70, 5, 5, 55)`);
     const [from, to] = ['2025-11-15', '2026-06-03'];
     const head = await api.signIn('head');
     const res = await head.get(`/api/compare/sites?period=range&from=${from}&to=${to}`);
@@ -245,7 +257,20 @@ describe('sites compared over months read from the year-to-date tables', () => {
           where wo.status = 'done' and wo.planned_date between ${from}::date and ${to}::date group by wo.site_id`)
       ).map((r) => [Number(r.site_id), r]),
     );
-    const answer = res.body as { rows: { siteId: number; ordersDone: number; hours: number }[] };
+    const scores = new Map(
+      (
+        await rows(sql`select f.site_id, sum(l.score * f.area_m2) / sum(f.area_m2) as score
+          from (select c.field_id, c.score, row_number() over (partition by c.field_id order by c.checked_on desc, c.id desc) as k
+                from field_checks c where c.checked_on between ${from}::date and ${to}::date) l
+          join fields f on f.id = l.field_id where l.k = 1 group by f.site_id`)
+      ).map((r) => [Number(r.site_id), Number(r.score)]),
+    );
+    const answer = res.body as { rows: { siteId: number; ordersDone: number; hours: number; surfaceScore: number | null }[] };
+    for (const r of answer.rows) {
+      if (scores.has(r.siteId)) expect(r.surfaceScore, `score of site ${r.siteId}`).toBeCloseTo(scores.get(r.siteId)!, 6);
+      else expect(r.surfaceScore, `score of site ${r.siteId}`).toBeNull();
+    }
+    expect(answer.rows.find((r) => r.siteId === api.fixture.sites.southPark)?.surfaceScore).toBeCloseTo(66, 6);
     for (const r of answer.rows) {
       const w = want.get(r.siteId);
       expect(r.ordersDone, `site ${r.siteId}`).toBe(Number(w?.orders ?? 0));

@@ -181,13 +181,14 @@ export async function compareSites(ctx: Ctx, q: CompareQuery): Promise<CompareSi
       select a.site_id, sum(${SEED_KG})::float8 as seed_kg from ${applications} a
       where a.task = 'overseed' and a.applied_on between ${period.from} and ${period.to} and ${inDistrict(sql`a.district_id`)}
       group by a.site_id`),
+    // Each field's latest check in the period: the latest of all (kept by a trigger) when it
+    // falls in the period, one index probe for a field checked again after the period ends.
     ctx.db.execute<{ site_id: number; score: number; checked: number }>(sql`
-      select f.site_id, (sum(l.score * f.area_m2) / nullif(sum(f.area_m2), 0))::float8 as score, count(*)::int as checked
-      from (select distinct on (c.field_id) c.field_id, c.score from ${fieldChecks} c
-            where c.checked_on between ${period.from} and ${period.to}
-            order by c.field_id, c.checked_on desc, c.id desc) l
-      join ${fields} f on f.id = l.field_id join ${sites} s on s.id = f.site_id
-      where ${inDistrict(sql`s.district_id`)}
+      select f.site_id, (sum(coalesce(p.score, r.score) * f.area_m2) / nullif(sum(f.area_m2), 0))::float8 as score, count(*)::int as checked
+      from rollup_field_latest r join ${fields} f on f.id = r.field_id join ${sites} s on s.id = f.site_id
+      left join lateral (select c.score from ${fieldChecks} c where r.checked_on > ${period.to} and c.field_id = r.field_id and c.checked_on between ${period.from} and ${period.to}
+        order by c.checked_on desc, c.id desc limit 1) p on true
+      where r.checked_on >= ${period.from} and (r.checked_on <= ${period.to} or p.score is not null) and ${inDistrict(sql`s.district_id`)}
       group by f.site_id`),
   ]);
 

@@ -137,8 +137,8 @@ export async function getOverview(ctx: Ctx, q: OverviewQuery): Promise<Overview>
       count(l.score) as scored, coalesce(sum(l.score), 0) as score_sum,
       count(*) filter (where l.score < (${sql.raw(`array[${LEVELS.map((l) => Number(targets[l])).join(', ')}]::float8[]`)})[f.maintenance_level]) as below
     from fields f join sites s on s.id = f.site_id
-    -- One index probe per field (field_checks_field_idx) rather than sorting every check ever made.
-    left join lateral (select fc.score from field_checks fc where fc.field_id = f.id order by fc.checked_on desc, fc.id desc limit 1) l on true
+    -- The latest check of each field as the trigger on field_checks keeps it.
+    left join rollup_field_latest l on l.field_id = f.id
     where f.status <> 'retired' and ${inDistricts(sql`s.district_id`)}
     group by s.district_id, f.maintenance_level`);
   for (const r of fieldRows.rows) {

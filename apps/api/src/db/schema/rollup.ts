@@ -5,7 +5,7 @@
  * Sums are `numeric` so adding and taking away a row leaves no rounding residue.
  */
 import { sql } from 'drizzle-orm';
-import { boolean, check, date, integer, numeric, pgTable, primaryKey, smallint, text } from 'drizzle-orm/pg-core';
+import { boolean, check, date, integer, numeric, pgTable, primaryKey, real, smallint, text } from 'drizzle-orm/pg-core';
 
 const total = (name: string) => numeric(name).notNull().default('0');
 const count = (name: string) => integer(name).notNull().default(0);
@@ -92,3 +92,14 @@ export const rollupState = pgTable(
   },
   (t) => [check('rollup_state_one_row', sql`${t.id} = 1`)],
 );
+
+/**
+ * Each field's latest field check (by date, then by id), as the fields list and the map show
+ * it: kept by a trigger on field_checks, read by the overview and the compare.
+ */
+export const rollupFieldLatest = pgTable('rollup_field_latest', {
+  fieldId: integer('field_id').primaryKey(),
+  checkId: integer('check_id').notNull(),
+  checkedOn: date('checked_on', { mode: 'string' }).notNull(),
+  score: real('score').notNull(),
+});
