@@ -30,3 +30,12 @@ CREATE TRIGGER rollup_field_checks_trunc AFTER TRUNCATE ON field_checks FOR EACH
 --> statement-breakpoint
 INSERT INTO rollup_field_latest (field_id, check_id, checked_on, score)
 SELECT DISTINCT ON (c.field_id) c.field_id, c.id, c.checked_on, c.score FROM field_checks c ORDER BY c.field_id, c.checked_on DESC, c.id DESC;
+--> statement-breakpoint
+-- PGlite runs no autovacuum: the planner needs the summaries' statistics to probe them by key.
+ANALYZE rollup_overview_day;
+--> statement-breakpoint
+ANALYZE rollup_compare_crew_ytd;
+--> statement-breakpoint
+ANALYZE rollup_compare_machine_ytd;
+--> statement-breakpoint
+ANALYZE rollup_field_latest;
