@@ -18,6 +18,7 @@ import {
   type EquipmentKind,
   type Level,
   type WorkCost,
+  WORK_TASKS,
 } from '@swardwise/domain';
 import { applications, districts, equipment, fieldChecks, fields, sites, workOrders } from '../db/schema/index.ts';
 import { authorize, type Ctx } from './context.ts';
@@ -33,17 +34,36 @@ export function comparePeriod(today: string, q: CompareQuery): CompareSitesAnswe
 /** A number kept in a work order's details, or 0 when absent or not a number. */
 const detail = (path: SQL): SQL => sql`case when jsonb_typeof(${path}) = 'number' then (${path}#>>'{}')::float8 else 0 end`;
 
-/** The machine an order ran: its equipment's kind, else the task's usual machine. */
-const machineKind = sql`coalesce(e.kind, case wo.task ${sql.join(
+/**
+ * The machine an order ran: its equipment's kind (`e.kind`), else the task's usual machine;
+ * `reel` tells a reel mowing from a rotary one.
+ */
+const machineKindOf = (task: SQL, reel: SQL): SQL => sql`coalesce(e.kind, case ${task} ${sql.join(
   Object.entries(MACHINE_OF_TASK)
     .filter(([, kind]) => kind !== null)
-    .map(([task, kind]) =>
-      task === 'mow'
-        ? sql`when 'mow' then case when coalesce(wo.details->>'mowerKind', wo.details->>'mower', '') like 'reel%' then 'reel_mower' else 'rotary_mower' end`
-        : sql`when ${sql.raw(`'${task}'`)} then ${sql.raw(`'${kind}'`)}`,
-    ),
+    .map(([t, kind]) => (t === 'mow' ? sql`when 'mow' then case when ${reel} then 'reel_mower' else 'rotary_mower' end` : sql`when ${sql.raw(`'${t}'`)} then ${sql.raw(`'${kind}'`)}`)),
   sql` `,
 )} end)`;
+
+/** The first day of the month after the one of `iso`. */
+const nextMonth = (iso: string): string => {
+  const [y, m] = [Number(iso.slice(0, 4)), Number(iso.slice(5, 7))];
+  return m === 12 ? `${y + 1}-01-01` : `${y}-${String(m + 1).padStart(2, '0')}-01`;
+};
+
+/**
+ * The period cut into whole months (read from the month rollup the triggers keep) and the days
+ * before and after them (read from the orders themselves, through work_orders_task_date_idx).
+ */
+export function splitByMonth(from: string, to: string): { months: [string, string] | null; days: [string, string][] } {
+  const first = from.endsWith('-01') ? from : nextMonth(from);
+  const last = addDaysIso(nextMonth(to), -1) === to ? to : addDaysIso(`${to.slice(0, 7)}-01`, -1);
+  if (first > last) return { months: null, days: [[from, to]] };
+  const days: [string, string][] = [];
+  if (from < first) days.push([from, addDaysIso(first, -1)]);
+  if (last < to) days.push([addDaysIso(last, 1), to]);
+  return { months: [first, last], days };
+}
 
 /** Seed sown, kg, from an application's label rate and area. */
 const SEED_KG = sql`case a.rate_unit
@@ -54,9 +74,81 @@ const SEED_KG = sql`case a.rate_unit
   else 0 end`;
 
 type SiteFacts = { site_id: number; site_name: string; district_id: number; district_name: string; field_count: number; area_m2: number; level: number };
-type WorkGroup = { site_id: number; crew_id: number | null; kind: EquipmentKind | null; orders: number; hours: number; kg_n: number; water_m3: number; paint_l: number; colourant_l: number };
+type CrewWork = { site_id: number; crew_id: number | null; orders: number; hours: number; kg_n: number; water_m3: number; paint_l: number; colourant_l: number };
+type MachineWork = { site_id: number; kind: EquipmentKind; hours: number };
 
 const perAcre = (value: number, acres: number): number | null => (acres > 0 ? value / acres : null);
+
+/**
+ * The (year, month, sign) terms whose year-to-date rows add up to the whole months
+ * [first, last]: each year's last month counted in, the month before the first taken out.
+ */
+function ytdTerms(first: string, last: string): SQL {
+  const [y1, m1, y2, m2] = [Number(first.slice(0, 4)), Number(first.slice(5, 7)), Number(last.slice(0, 4)), Number(last.slice(5, 7))];
+  const terms: [number, number, number][] = [];
+  for (let y = y1; y <= y2; y++) terms.push([y, y === y2 ? m2 : 12, 1]);
+  if (m1 > 1) terms.push([y1, m1 - 1, -1]);
+  return sql`(values ${sql.join(
+    terms.map(([y, m, sign]) => sql`(${y}::int, ${m}::int, ${sign}::int)`),
+    sql`, `,
+  )}) as t(year, month, sign)`;
+}
+
+const ORDERS_DAYS = (a: string, b: string, inDistrict: (col: SQL) => SQL): SQL =>
+  sql`wo.status = 'done' and wo.task in (${sql.join(
+    WORK_TASKS.map((t) => sql`${t}`),
+    sql`, `,
+  )}) and wo.planned_date between ${a} and ${b} and ${inDistrict(sql`wo.district_id`)}`;
+
+/**
+ * Done work over [from, to] per site and crew (orders, hours, inputs) and per site and machine
+ * kind (hours): whole months from the year-to-date rollups the triggers keep, the days around
+ * them from the orders themselves.
+ */
+function workOver(from: string, to: string, inDistrict: (col: SQL) => SQL): { crews: SQL; machines: SQL } {
+  const { months, days } = splitByMonth(from, to);
+  const crews: SQL[] = days.map(
+    ([a, b]) => sql`
+      select wo.site_id, wo.crew_id, count(*)::int as orders,
+        sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours,
+        sum(case when wo.task = 'feed' then ${detail(sql`wo.details->'nGPerM2'`)} * f.area_m2 / 1000 else 0 end)::float8 as kg_n,
+        sum(case when wo.task = 'irrigate' then ${detail(sql`wo.details->'volumeL'`)} / 1000 else 0 end)::float8 as water_m3,
+        sum(case when wo.task = 'paint_lines' then ${detail(sql`wo.details->'paintL'`)} else 0 end)::float8 as paint_l,
+        sum(case when wo.task = 'colourant' then ${detail(sql`wo.details->'colourant'->'rateMlPerM2'`)} * ${detail(sql`wo.details->'colourant'->'areaM2'`)} / 1000 else 0 end)::float8 as colourant_l
+      from ${workOrders} wo join ${fields} f on f.id = wo.field_id
+      where ${ORDERS_DAYS(a, b, inDistrict)}
+      group by wo.site_id, wo.crew_id`,
+  );
+  const machines: SQL[] = days.map(
+    ([a, b]) => sql`
+      select wo.site_id, ${machineKindOf(sql`wo.task`, sql`coalesce(wo.details->>'mowerKind', wo.details->>'mower', '') like 'reel%'`)} as kind,
+        sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours
+      from ${workOrders} wo join ${fields} f on f.id = wo.field_id left join ${equipment} e on e.id = wo.equipment_id
+      where ${ORDERS_DAYS(a, b, inDistrict)}
+      group by 1, 2`,
+  );
+  if (months) {
+    crews.push(sql`
+      select c.site_id, nullif(c.crew_key, 0) as crew_id, sum(t.sign * c.orders)::int as orders, sum(t.sign * c.hours)::float8 as hours,
+        sum(t.sign * c.kg_n)::float8 as kg_n, sum(t.sign * c.water_m3)::float8 as water_m3, sum(t.sign * c.paint_l)::float8 as paint_l, sum(t.sign * c.colourant_l)::float8 as colourant_l
+      from rollup_compare_crew_ytd c join ${ytdTerms(...months)} on c.year = t.year and c.month = t.month
+      where ${inDistrict(sql`c.district_id`)}
+      group by 1, 2`);
+    machines.push(sql`
+      select r.site_id, ${machineKindOf(sql`r.task`, sql`r.reel`)} as kind, sum(t.sign * r.hours)::float8 as hours
+      from rollup_compare_machine_ytd r join ${ytdTerms(...months)} on r.year = t.year and r.month = t.month left join ${equipment} e on e.id = nullif(r.equipment_key, 0)
+      where ${inDistrict(sql`r.district_id`)}
+      group by 1, 2`);
+  }
+  return {
+    crews: sql`
+      select site_id, crew_id, sum(orders)::int as orders, sum(hours)::float8 as hours, sum(kg_n)::float8 as kg_n,
+        sum(water_m3)::float8 as water_m3, sum(paint_l)::float8 as paint_l, sum(colourant_l)::float8 as colourant_l
+      from (${sql.join(crews, sql` union all `)}) g
+      group by site_id, crew_id`,
+    machines: sql`select site_id, kind, sum(hours)::float8 as hours from (${sql.join(machines, sql` union all `)}) g where kind is not null group by site_id, kind`,
+  };
+}
 
 /** Sites in the caller's scope with their figures over the period. The head sees every district (or the one asked); a foreman only his own. */
 export async function compareSites(ctx: Ctx, q: CompareQuery): Promise<CompareSitesAnswer> {
@@ -72,7 +164,8 @@ export async function compareSites(ctx: Ctx, q: CompareQuery): Promise<CompareSi
   const period = comparePeriod(ctx.clock.today(), q);
   const inDistrict = (col: SQL): SQL => (districtId === null ? sql`true` : sql`${col} = ${districtId}`);
 
-  const [{ costs }, facts, work, seed, scores] = await Promise.all([
+  const work = workOver(period.from, period.to, inDistrict);
+  const [{ costs }, facts, crewWork, machineWork, seed, scores] = await Promise.all([
     readCosts(ctx.db),
     ctx.db.execute<SiteFacts>(sql`
       select s.id as site_id, s.name as site_name, d.id as district_id, d.name as district_name,
@@ -82,40 +175,35 @@ export async function compareSites(ctx: Ctx, q: CompareQuery): Promise<CompareSi
       from ${sites} s join ${districts} d on d.id = s.district_id left join ${fields} f on f.site_id = s.id
       where ${inDistrict(sql`s.district_id`)}
       group by s.id, d.id order by s.name, s.id`),
-    ctx.db.execute<WorkGroup>(sql`
-      select wo.site_id, wo.crew_id, ${machineKind} as kind, count(*)::int as orders,
-        sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours,
-        sum(case when wo.task = 'feed' then ${detail(sql`wo.details->'nGPerM2'`)} * f.area_m2 / 1000 else 0 end)::float8 as kg_n,
-        sum(case when wo.task = 'irrigate' then ${detail(sql`wo.details->'volumeL'`)} / 1000 else 0 end)::float8 as water_m3,
-        sum(case when wo.task = 'paint_lines' then ${detail(sql`wo.details->'paintL'`)} else 0 end)::float8 as paint_l,
-        sum(case when wo.task = 'colourant' then ${detail(sql`wo.details->'colourant'->'rateMlPerM2'`)} * ${detail(sql`wo.details->'colourant'->'areaM2'`)} / 1000 else 0 end)::float8 as colourant_l
-      from ${workOrders} wo join ${fields} f on f.id = wo.field_id left join ${equipment} e on e.id = wo.equipment_id
-      where wo.status = 'done' and wo.planned_date between ${period.from} and ${period.to} and ${inDistrict(sql`wo.district_id`)}
-      group by wo.site_id, wo.crew_id, 3`),
+    ctx.db.execute<CrewWork>(work.crews),
+    ctx.db.execute<MachineWork>(work.machines),
     ctx.db.execute<{ site_id: number; seed_kg: number }>(sql`
       select a.site_id, sum(${SEED_KG})::float8 as seed_kg from ${applications} a
       where a.task = 'overseed' and a.applied_on between ${period.from} and ${period.to} and ${inDistrict(sql`a.district_id`)}
       group by a.site_id`),
+    // Each field's latest check in the period: the latest of all (kept by a trigger) when it
+    // falls in the period, one index probe for a field checked again after the period ends.
     ctx.db.execute<{ site_id: number; score: number; checked: number }>(sql`
-      select f.site_id, (sum(l.score * f.area_m2) / nullif(sum(f.area_m2), 0))::float8 as score, count(*)::int as checked
-      from (select distinct on (c.field_id) c.field_id, c.score from ${fieldChecks} c
-            where c.checked_on between ${period.from} and ${period.to}
-            order by c.field_id, c.checked_on desc, c.id desc) l
-      join ${fields} f on f.id = l.field_id join ${sites} s on s.id = f.site_id
-      where ${inDistrict(sql`s.district_id`)}
+      select f.site_id, (sum(coalesce(p.score, r.score) * f.area_m2) / nullif(sum(f.area_m2), 0))::float8 as score, count(*)::int as checked
+      from rollup_field_latest r join ${fields} f on f.id = r.field_id join ${sites} s on s.id = f.site_id
+      left join lateral (select c.score from ${fieldChecks} c where r.checked_on > ${period.to} and c.field_id = r.field_id and c.checked_on between ${period.from} and ${period.to}
+        order by c.checked_on desc, c.id desc limit 1) p on true
+      where r.checked_on >= ${period.from} and (r.checked_on <= ${period.to} or p.score is not null) and ${inDistrict(sql`s.district_id`)}
       group by f.site_id`),
   ]);
 
-  const workOf = new Map<number, WorkGroup[]>();
-  for (const g of work.rows) workOf.set(g.site_id, [...(workOf.get(g.site_id) ?? []), g]);
+  const crewsOf = new Map<number, CrewWork[]>();
+  for (const g of crewWork.rows) crewsOf.set(g.site_id, [...(crewsOf.get(g.site_id) ?? []), g]);
+  const machinesOf = new Map<number, MachineWork[]>();
+  for (const g of machineWork.rows) machinesOf.set(g.site_id, [...(machinesOf.get(g.site_id) ?? []), g]);
   const seedOf = new Map(seed.rows.map((r) => [r.site_id, r.seed_kg]));
   const scoreOf = new Map(scores.rows.map((r) => [r.site_id, r]));
 
   const rows: CompareSiteRow[] = facts.rows.map((s) => {
-    const groups = workOf.get(s.site_id) ?? [];
+    const groups = crewsOf.get(s.site_id) ?? [];
     const sum = (k: 'orders' | 'hours' | 'kg_n' | 'water_m3' | 'paint_l' | 'colourant_l'): number => groups.reduce((t, g) => t + g[k], 0);
     const machineHours: Partial<Record<EquipmentKind, number>> = {};
-    for (const g of groups) if (g.kind) machineHours[g.kind] = (machineHours[g.kind] ?? 0) + g.hours;
+    for (const g of machinesOf.get(s.site_id) ?? []) machineHours[g.kind] = (machineHours[g.kind] ?? 0) + g.hours;
     const quantities = { fertiliserKgN: sum('kg_n'), waterM3: sum('water_m3'), paintL: sum('paint_l'), seedKg: seedOf.get(s.site_id) ?? 0, colourantL: sum('colourant_l') };
     const cost = costOfWork({ labour: groups.map((g) => ({ crewId: g.crew_id, hours: g.hours })), machineHours, ...quantities }, costs);
     const acres = s.area_m2 / M2_PER_ACRE;

@@ -11,6 +11,7 @@
  */
 import { LEVELS, addDaysIso, annualNitrogen, errors, type Grass, type Level, type Overview, type OverviewBlock, type OverviewLabour, type OverviewMowings, type OverviewQuery } from '@swardwise/domain';
 import { sql, type SQL } from 'drizzle-orm';
+import type { Db } from '../db/client.ts';
 import { authorize, type Ctx } from './context.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 
@@ -62,23 +63,43 @@ function emptyAcc(districtId: number | null, name: string, targets: Record<Level
 const localDate = (column: SQL, tz: string) => sql`(${column} at time zone ${tz})::date`;
 
 /**
- * The labour and mowing sums of work orders planned in [from, to], per district. A mowing's
- * due date is the one-third rule's (`details.dueBy`, else its planned day), as Records has it.
+ * The labour and mowing sums of the days in [from, to], per district, from the day rollup the
+ * triggers keep (rollup_overview_day). A mowing is late when done after its one-third rule's
+ * due date (`details.dueBy`, else its planned day), as Records has it; missed when not done and
+ * its day is before today.
  */
-function workSums(from: string, to: string, today: string, tz: string, prefix: '' | 'w_'): SQL {
-  const due = sql`(case when jsonb_typeof(wo.details->'dueBy') = 'string' then (wo.details->>'dueBy')::date else wo.planned_date end)`;
-  const inSpan = sql`wo.planned_date between ${from}::date and ${to}::date`;
+function workSums(from: string, to: string, today: string, prefix: '' | 'w_'): SQL {
+  const inSpan = sql`r.day between ${from}::date and ${to}::date`;
   const as = (name: string) => sql.raw(`${prefix}${name}`);
-  return sql`
-    count(*) filter (where ${inSpan}) as ${as('orders')},
-    coalesce(sum(wo.planned_hours) filter (where ${inSpan}), 0) as ${as('planned_hours')},
-    count(*) filter (where ${inSpan} and wo.status = 'done') as ${as('orders_done')},
-    coalesce(sum(coalesce(wo.actual_hours, 0)) filter (where ${inSpan} and wo.status = 'done'), 0) as ${as('actual_hours')},
-    coalesce(sum(wo.planned_hours) filter (where ${inSpan} and wo.status = 'done'), 0) as ${as('planned_hours_done')},
-    count(*) filter (where ${inSpan} and wo.task = 'mow') as ${as('mow_asked')},
-    count(*) filter (where ${inSpan} and wo.task = 'mow' and wo.status = 'done') as ${as('mow_done')},
-    count(*) filter (where ${inSpan} and wo.task = 'mow' and wo.status = 'done' and wo.done_at is not null and ${localDate(sql`wo.done_at`, tz)} > ${due}) as ${as('mow_late')},
-    count(*) filter (where ${inSpan} and wo.task = 'mow' and wo.status <> 'done' and wo.planned_date < ${today}::date) as ${as('mow_missed')}`;
+  const total = (column: string, name: string) => sql`coalesce(sum(${sql.raw(`r.${column}`)}) filter (where ${inSpan}), 0) as ${as(name)}`;
+  return sql.join(
+    [
+      total('orders', 'orders'),
+      total('planned_hours', 'planned_hours'),
+      total('orders_done', 'orders_done'),
+      total('actual_hours_done', 'actual_hours'),
+      total('planned_hours_done', 'planned_hours_done'),
+      total('mow_asked', 'mow_asked'),
+      total('mow_done', 'mow_done'),
+      total('mow_late', 'mow_late'),
+      sql`coalesce(sum(r.mow_not_done) filter (where ${inSpan} and r.day < ${today}::date), 0) as ${as('mow_missed')}`,
+    ],
+    sql`, `,
+  );
+}
+
+/**
+ * The late mowings of the rollup are counted in the zone stored with it; when the department's
+ * zone has changed since, count them again (once, in one transaction).
+ */
+async function rollupInZone(ctx: Ctx, tz: string): Promise<void> {
+  const stored = await ctx.db.execute<{ time_zone: string }>(sql`select time_zone from rollup_state where id = 1`);
+  if (stored.rows[0]?.time_zone === tz) return;
+  await (ctx.db as Db).transaction(async (tx) => {
+    await tx.execute(sql`lock table rollup_state in exclusive mode`);
+    const again = await tx.execute<{ time_zone: string }>(sql`select time_zone from rollup_state where id = 1`);
+    if (again.rows[0]?.time_zone !== tz) await tx.execute(sql`select rollup_rebuild(${tz})`);
+  });
 }
 
 function labourOf(r: Row | undefined, prefix: string): { labour: OverviewLabour; mowings: OverviewMowings } {
@@ -116,8 +137,8 @@ export async function getOverview(ctx: Ctx, q: OverviewQuery): Promise<Overview>
       count(l.score) as scored, coalesce(sum(l.score), 0) as score_sum,
       count(*) filter (where l.score < (${sql.raw(`array[${LEVELS.map((l) => Number(targets[l])).join(', ')}]::float8[]`)})[f.maintenance_level]) as below
     from fields f join sites s on s.id = f.site_id
-    -- One index probe per field (field_checks_field_idx) rather than sorting every check ever made.
-    left join lateral (select fc.score from field_checks fc where fc.field_id = f.id order by fc.checked_on desc, fc.id desc limit 1) l on true
+    -- The latest check of each field as the trigger on field_checks keeps it.
+    left join rollup_field_latest l on l.field_id = f.id
     where f.status <> 'retired' and ${inDistricts(sql`s.district_id`)}
     group by s.district_id, f.maintenance_level`);
   for (const r of fieldRows.rows) {
@@ -143,16 +164,27 @@ export async function getOverview(ctx: Ctx, q: OverviewQuery): Promise<Overview>
     a.block.nitrogen.planKg += (annual.gPerM2 * num(r.area_m2)) / 1000;
   }
 
-  // Labour and mowings of the season and of the department's current week.
+  // Labour, mowings and inputs of the season and of the department's current week, from the day rollup.
+  await rollupInZone(ctx, tz);
   const lo = weekFrom < seasonFrom ? weekFrom : seasonFrom;
   const hi = weekTo > seasonTo ? weekTo : seasonTo;
+  // Inputs: N of the feed orders done (g N/m² × area), the water the week plans scheduled (a
+  // controller's week volume; a quick-coupler run's minutes × precipitation rate × area), the
+  // paint concentrate of line marking.
+  const inSeason = sql`r.day between ${seasonFrom}::date and ${seasonTo}::date`;
+  const seasonSum = (expr: SQL, name: string) => sql`coalesce(sum(${expr}) filter (where ${inSeason}), 0)::float8 as ${sql.raw(name)}`;
   const workRows = await ctx.db.execute<Row>(sql`
-    select wo.district_id,
-      ${workSums(seasonFrom, seasonTo, today, tz, '')},
-      ${workSums(weekFrom, weekTo, today, tz, 'w_')}
-    from work_orders wo
-    where wo.planned_date between ${lo}::date and ${hi}::date and ${inDistricts(sql`wo.district_id`)}
-    group by wo.district_id`);
+    select r.district_id,
+      ${workSums(seasonFrom, seasonTo, today, '')},
+      ${workSums(weekFrom, weekTo, today, 'w_')},
+      ${seasonSum(sql`r.n_kg_done`, 'n_kg')},
+      ${seasonSum(sql`r.water_vol_budget + r.water_qc_budget * ${precipRate}::numeric / 60`, 'water_budget')},
+      ${seasonSum(sql`r.water_vol_used + r.water_qc_used * ${precipRate}::numeric / 60`, 'water_used')},
+      ${seasonSum(sql`r.paint_planned`, 'paint_planned')},
+      ${seasonSum(sql`r.paint_used`, 'paint_used')}
+    from rollup_overview_day r
+    where r.day between ${lo}::date and ${hi}::date and ${inDistricts(sql`r.district_id`)}
+    group by r.district_id`);
   for (const r of workRows.rows) {
     const a = of(r);
     if (!a) continue;
@@ -160,29 +192,6 @@ export async function getOverview(ctx: Ctx, q: OverviewQuery): Promise<Overview>
     const w = labourOf(r, 'w_');
     a.block.labour = { season: s.labour, week: w.labour };
     a.block.mowings = { season: s.mowings, week: w.mowings };
-  }
-
-  // Inputs of the season's orders: N of the feed orders (g N/m² × area), the water the week
-  // plans scheduled (a controller's week volume; a quick-coupler run's minutes × precipitation
-  // rate × area), the paint concentrate of line marking.
-  const water = sql`(case when wo.details->>'system' = 'quick_coupler' and jsonb_typeof(wo.details->'runTimeMin') = 'number'
-      then (wo.details->>'runTimeMin')::float8 / 60 * ${precipRate}::float8 * f.area_m2
-      when jsonb_typeof(wo.details->'volumeL') = 'number' then (wo.details->>'volumeL')::float8 else 0 end)`;
-  const nKg = sql`(case when jsonb_typeof(wo.details->'nGPerM2') = 'number' then (wo.details->>'nGPerM2')::float8 * f.area_m2 / 1000 else 0 end)`;
-  const paintL = sql`(case when jsonb_typeof(wo.details->'paintL') = 'number' then (wo.details->>'paintL')::float8 else 0 end)`;
-  const inputRows = await ctx.db.execute<Row>(sql`
-    select wo.district_id,
-      coalesce(sum(${nKg}) filter (where wo.task = 'feed' and wo.status = 'done'), 0) as n_kg,
-      coalesce(sum(${water}) filter (where wo.task = 'irrigate' and wo.status <> 'skipped'), 0) as water_budget,
-      coalesce(sum(${water}) filter (where wo.task = 'irrigate' and wo.status = 'done'), 0) as water_used,
-      coalesce(sum(${paintL}) filter (where wo.task = 'paint_lines' and wo.status <> 'skipped'), 0) as paint_planned,
-      coalesce(sum(${paintL}) filter (where wo.task = 'paint_lines' and wo.status = 'done'), 0) as paint_used
-    from work_orders wo join fields f on f.id = wo.field_id
-    where wo.task in ('feed', 'irrigate', 'paint_lines') and wo.planned_date between ${seasonFrom}::date and ${seasonTo}::date and ${inDistricts(sql`wo.district_id`)}
-    group by wo.district_id`);
-  for (const r of inputRows.rows) {
-    const a = of(r);
-    if (!a) continue;
     a.block.nitrogen.appliedKg = num(r.n_kg);
     a.block.water = { budgetL: num(r.water_budget), usedL: num(r.water_used) };
     a.block.paint = { plannedL: num(r.paint_planned), usedL: num(r.paint_used) };

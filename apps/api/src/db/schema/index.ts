@@ -7,3 +7,4 @@ export * from './work.ts';
 export * from './requests.ts';
 export * from './mail.ts';
 export * from './budget.ts';
+export * from './rollup.ts';
