@@ -41,6 +41,8 @@ export const SUBJECTS = [
   'Overview',
   /** Sites compared by cost, hours and inputs per acre and surface score: the head's, a foreman's for his district. */
   'SiteComparison',
+  /** A saved what-if scenario (the change, not its result) of a district (districtId) or the department (null). */
+  'WhatIfScenario',
 ] as const;
 export type SubjectName = (typeof SUBJECTS)[number];
 /** A row tagged with its subject type (see `asSubject`). */
@@ -112,6 +114,9 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can(['read', 'update'], 'Budget');
       can('read', 'Overview');
       can('read', 'SiteComparison');
+      // Saved what-ifs: any scope; he removes only his own.
+      can(['read', 'create'], 'WhatIfScenario');
+      can('delete', 'WhatIfScenario', { createdBy: actor.id });
       break;
 
     case 'foreman': {
@@ -128,6 +133,9 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       // The overview of his own district, never another's or the department's.
       can('read', 'Overview', { districtId: d });
       can('read', 'SiteComparison', { districtId: d });
+      // What-ifs of his own district; he removes only the ones he saved.
+      can(['read', 'create'], 'WhatIfScenario', { districtId: d });
+      can('delete', 'WhatIfScenario', { districtId: d, createdBy: actor.id });
       can('create', ['Import', 'Weather']);
       can('read', 'Import', { districtId: d });
       can('read', 'AuditEntry', { districtId: d });

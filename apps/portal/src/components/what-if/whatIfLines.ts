@@ -2,8 +2,9 @@
  * A what-if answer as the rows a turf manager reads: mowings, hours and each input for the
  * season before and after the change, and the change, in the user's units; cost per line.
  */
-import { BUDGET_LINE_FACTS, type BudgetLine, type UnitSystem, type WhatIfResult } from '@swardwise/domain';
+import { BUDGET_LINE_FACTS, type BudgetLine, type UnitSystem, type WhatIfInput, type WhatIfResult } from '@swardwise/domain';
 import { moneyText, quantityInUnits, quantityText, signedMoneyText, signedQuantityText } from '../budget/budgetView.ts';
+import { changesWords } from './whatIfStandards.ts';
 
 export interface WhatIfRow {
   key: 'mowings' | BudgetLine | 'total';
@@ -75,4 +76,12 @@ export function whatIfRows(r: WhatIfResult, currency: string, units: UnitSystem)
 /** A line's quantity change as a number in the user's units, with its unit, for a chart's tooltip. */
 export function changeInUnits(r: WhatIfResult, line: BudgetLine, units: UnitSystem) {
   return quantityInUnits(r.delta.lines[line].quantity, BUDGET_LINE_FACTS[line].quantityUnit, units);
+}
+
+/** What a saved change holds, in words ("3 fields to level 4", "Level 2: least mowings per week: 3"). */
+export function changeSummary(change: WhatIfInput): string[] {
+  const byLevel = new Map<number, number>();
+  for (const m of change.moves) byLevel.set(m.level, (byLevel.get(m.level) ?? 0) + 1);
+  const moves = [...byLevel.entries()].sort((a, b) => a[0] - b[0]).map(([level, n]) => `${n.toLocaleString('en-US')} ${n === 1 ? 'field' : 'fields'} to level ${level}`);
+  return [...moves, ...changesWords(change.standards)];
 }
