@@ -68,3 +68,13 @@ export function changesWords(changes: Changes | undefined): string[] {
   }
   return words;
 }
+
+/** The Standards a what-if works out the season with (the others — HOC, checks, cultural work — leave the outlook as it is). */
+const OUTLOOK_KEYS = ['minMowingsPerWeek', 'maxMowingIntervalDays', 'annualNShare', 'irrigationShareOfEtc', 'reducedKc', 'lineRepaintDays'] as const;
+
+/** A level's edit as a what-if change: the outlook's Standards that differ from the stored ones. */
+export function standardsEditChange(level: number, edited: Partial<Pick<LevelStandard, (typeof OUTLOOK_KEYS)[number]>>, stored: LevelStandard): Changes {
+  const changed: Record<string, unknown> = {};
+  for (const key of OUTLOOK_KEYS) if (edited[key] !== undefined && edited[key] !== stored[key]) changed[key] = edited[key];
+  return { [String(level)]: changed } as Changes;
+}
