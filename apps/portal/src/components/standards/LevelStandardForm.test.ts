@@ -12,7 +12,7 @@ const row: StandardsRow = { level: 2, data: structuredClone(DEFAULT_STANDARDS[2]
  * works a picker (the browser test of cultural work does).
  */
 function mountForm(units: 'metric' | 'imperial' = 'metric') {
-  return mount(LevelStandardForm, { props: { row, units, season: 2026 }, attachTo: document.body, global: { stubs: { ElSelect: true, ElOption: true, WhatIfChart: true } } });
+  return mount(LevelStandardForm, { props: { row, units, outlookSeason: 2026 }, attachTo: document.body, global: { stubs: { ElSelect: true, ElOption: true, WhatIfChart: true } } });
 }
 
 /** The save preview's answer: a season without fields (the preview's figures are the what-if tests' business). */
