@@ -122,6 +122,7 @@ const FUZZ: FuzzRow[] = [
   { route: 'POST /api/calendar-feeds', url: () => '/api/calendar-feeds', base: (i) => ({ crewId: i.crew }) },
   { route: 'PATCH /api/costs', url: () => '/api/costs', base: (i) => ({ ...DEFAULT_COSTS, crewRates: [{ crewId: i.crew, ratePerHour: 40 }], version: V }) },
   { route: 'PATCH /api/budget/line', url: () => '/api/budget/line', base: (i) => ({ season: 2026, districtId: i.district, line: 'fuel', amount: 1200, version: V }) },
+  { route: 'POST /api/what-if/scenarios', url: () => '/api/what-if/scenarios', base: (i) => ({ name: 'Fuzzed', change: { season: 2026, districtId: i.district, moves: [{ fieldId: i.field, level: 3 }], standards: { '2': { lineRepaintDays: 10 } } } }) },
   { route: 'POST /api/what-if', url: () => '/api/what-if', base: (i) => ({ season: 2026, districtId: i.district, moves: [{ fieldId: i.field, level: 2 }], standards: { '3': { minMowingsPerWeek: 2 } } }) },
   {
     route: 'POST /api/work-orders/:id/application',
@@ -146,6 +147,7 @@ const NOT_FUZZED = new Map<string, string>([
   ['DELETE /api/dev/mail', 'no body; developer sink'],
   ['DELETE /api/calendar-feeds/:id', 'no body'],
   ['POST /api/mail-outbox/:id/retry', 'no body'],
+  ['DELETE /api/what-if/scenarios/:id', 'no body'],
   ['POST /api/weather/stations/:id/csv', 'a file (uploads)'],
   ['POST /api/imports', 'a file (uploads)'],
   ['POST /api/work-orders/:id/photos', 'a file (uploads)'],

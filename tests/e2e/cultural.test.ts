@@ -51,6 +51,8 @@ describe('cultural work', () => {
       await head.locator('[data-test="std-cultural"]').scrollIntoViewIfNeeded();
       await head.screenshot({ path: path.join(shots, 'standards-cultural-form.png') });
       await head.locator('[data-test="standards-save"]').click();
+      // Saving shows the season's change first; confirm it.
+      await head.locator('[data-test="standards-preview-confirm"]').click();
       await expect.poll(() => head.getByText(`Level ${level} saved`).count()).toBeGreaterThan(0);
       await expect.poll(() => head.locator('[data-test="standards-table"]').innerText()).toContain('6× core (hollow tine), Apr–Oct');
       await head.screenshot({ path: path.join(shots, 'standards-cultural.png'), fullPage: true });

@@ -65,6 +65,8 @@ describe('field page', () => {
       await input.fill(String(typed));
       await input.blur();
       await page.locator('[data-test="standards-save"]').click();
+      // Saving shows the season's change first; confirm it.
+      await page.locator('[data-test="standards-preview-confirm"]').click();
       await expect.poll(() => page.getByText(`Level ${level} saved`).count()).toBeGreaterThan(0);
       await page.screenshot({ path: path.join(shots, 'standards-head.png'), fullPage: true });
 

@@ -13,9 +13,9 @@ const baseUrl = inject('baseUrl');
 useBrowser();
 
 const expected: Record<Role, { landing: string; nav: string[] }> = {
-  admin: { landing: '/admin/users', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'costs', 'budget', 'compare', 'week', 'records', 'requests', 'imports', 'users', 'audit', 'mail-outbox'] },
-  head: { landing: '/overview', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'costs', 'budget', 'compare', 'week', 'records', 'requests', 'imports', 'audit', 'mail-outbox'] },
-  foreman: { landing: '/district', nav: ['district', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'costs', 'budget', 'compare', 'week', 'records', 'requests', 'imports'] },
+  admin: { landing: '/admin/users', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'costs', 'budget', 'what-if', 'compare', 'week', 'records', 'requests', 'imports', 'users', 'audit', 'mail-outbox'] },
+  head: { landing: '/overview', nav: ['overview', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'standards', 'costs', 'budget', 'what-if', 'compare', 'week', 'records', 'requests', 'imports', 'audit', 'mail-outbox'] },
+  foreman: { landing: '/district', nav: ['district', 'sites', 'fields', 'map', 'crews', 'equipment', 'weather', 'costs', 'budget', 'what-if', 'compare', 'week', 'records', 'requests', 'imports'] },
   crew: { landing: '/today', nav: ['today', 'fields', 'map'] },
   partner: { landing: '/my-fields', nav: ['my-fields', 'map', 'requests'] },
 };

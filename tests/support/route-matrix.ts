@@ -8,7 +8,7 @@
  */
 import crypto from 'node:crypto';
 import type { Db } from '../../apps/api/src/db/client.ts';
-import { calendarFeeds, mailOutbox } from '../../apps/api/src/db/schema/index.ts';
+import { calendarFeeds, mailOutbox, whatIfScenarios } from '../../apps/api/src/db/schema/index.ts';
 import type supertest from 'supertest';
 import { DEFAULT_COSTS, type Role } from '@swardwise/domain';
 import { newFieldBody } from './bodies.ts';
@@ -423,6 +423,35 @@ export const MATRIX: MatrixRow[] = [
     call: (c) => c.agent.patch('/api/budget/line').send({ season: 2026, districtId: c.ids.district, line: 'labour', amount: 1000, version: STALE }),
   },
   { route: 'POST /api/what-if', allow: 'admin head foreman:own', call: (c) => c.agent.post('/api/what-if').send({ season: 2026, districtId: c.ids.district, moves: [{ fieldId: c.ids.field, level: 4 }] }) },
+  // Saved what-ifs: a foreman's are his district's; only the one who saved a scenario removes it.
+  { route: 'GET /api/what-if/scenarios', allow: 'admin head foreman', scoped: false, call: (c) => c.agent.get('/api/what-if/scenarios') },
+  {
+    route: 'POST /api/what-if/scenarios',
+    allow: 'admin head foreman:own',
+    call: (c) => c.agent.post('/api/what-if/scenarios').send({ name: `Matrix ${c.n}`, change: { season: 2026, districtId: c.ids.district, moves: [{ fieldId: c.ids.field, level: 4 }] } }),
+  },
+  {
+    route: 'GET /api/what-if/scenarios/compare',
+    allow: 'admin head foreman:own',
+    call: async (c) => {
+      const change = { season: 2026, districtId: c.ids.district, moves: [{ fieldId: c.ids.field, level: 3 }] };
+      const saved = await c.db.insert(whatIfScenarios).values([1, 2].map((k) => ({ name: `Matrix ${c.n}.${k}`, season: 2026, districtId: c.ids.district, change }))).returning({ id: whatIfScenarios.id });
+      return c.agent.get(`/api/what-if/scenarios/compare?ids=${saved.map((s) => s.id).join(',')}`);
+    },
+  },
+  {
+    route: 'DELETE /api/what-if/scenarios/:id',
+    allow: 'admin head foreman:own',
+    call: async (c) => {
+      // Saved by the caller, so only the scope decides.
+      const me = (await c.agent.get('/api/auth/me')).body as { user?: { id: number } };
+      const [saved] = await c.db
+        .insert(whatIfScenarios)
+        .values({ name: `Matrix ${c.n}`, season: 2026, districtId: c.ids.district, change: { season: 2026, districtId: c.ids.district, moves: [] }, createdBy: me.user?.id ?? null })
+        .returning({ id: whatIfScenarios.id });
+      return c.agent.delete(`/api/what-if/scenarios/${saved!.id}`);
+    },
+  },
   // Sites compared
   { route: 'GET /api/compare/sites', allow: 'admin head foreman:own', call: (c) => c.agent.get(`/api/compare/sites?districtId=${c.ids.district}`) },
   { route: 'GET /api/compare/sites.csv', allow: 'admin head foreman:own', call: (c) => c.agent.get(`/api/compare/sites.csv?districtId=${c.ids.district}`) },

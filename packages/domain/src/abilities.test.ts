@@ -170,6 +170,17 @@ const cases: Case[] = [
   ['foreman', 'update', 'Budget', { districtId: D1 }, false],
   ['crew', 'read', 'Budget', { districtId: D1 }, false],
   ['partner', 'read', 'Budget', { districtId: D1 }, false],
+  // Saved what-ifs: a foreman's district only; only the one who saved it removes it.
+  ['head', 'create', 'WhatIfScenario', { districtId: null }, true],
+  ['head', 'delete', 'WhatIfScenario', { districtId: D2, createdBy: 2 }, true],
+  ['head', 'delete', 'WhatIfScenario', { districtId: D2, createdBy: 1 }, false],
+  ['foreman', 'delete', 'WhatIfScenario', { districtId: D1, createdBy: 3 }, true],
+  ['foreman', 'delete', 'WhatIfScenario', { districtId: D1, createdBy: 2 }, false],
+  ['foreman', 'read', 'WhatIfScenario', { districtId: D1 }, true],
+  ['foreman', 'read', 'WhatIfScenario', { districtId: D2 }, false],
+  ['foreman', 'read', 'WhatIfScenario', { districtId: null }, false],
+  ['crew', 'read', 'WhatIfScenario', { districtId: D1 }, false],
+  ['partner', 'create', 'WhatIfScenario', { districtId: D1 }, false],
   // The overview: the department's for the head, his district's for a foreman, none for crews and partners
   ['head', 'read', 'Overview', { districtId: D2 }, true],
   ['foreman', 'read', 'Overview', { districtId: D1 }, true],

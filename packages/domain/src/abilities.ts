@@ -43,6 +43,8 @@ export const SUBJECTS = [
   'SiteComparison',
   /** E-mail waiting in the outbox or given up: recipient, subject and state, never the message. */
   'MailOutbox',
+  /** A saved what-if scenario (the change, not its result) of a district (districtId) or the department (null). */
+  'WhatIfScenario',
 ] as const;
 export type SubjectName = (typeof SUBJECTS)[number];
 /** A row tagged with its subject type (see `asSubject`). */
@@ -116,6 +118,9 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       can('read', 'SiteComparison');
       // The head sees which e-mail (invitations, resets) is stuck and sends a failed one again.
       can(['read', 'update'], 'MailOutbox');
+      // Saved what-ifs: any scope; he removes only his own.
+      can(['read', 'create'], 'WhatIfScenario');
+      can('delete', 'WhatIfScenario', { createdBy: actor.id });
       break;
 
     case 'foreman': {
@@ -132,6 +137,9 @@ export function defineAbilityFor(actor: Actor): AppAbility {
       // The overview of his own district, never another's or the department's.
       can('read', 'Overview', { districtId: d });
       can('read', 'SiteComparison', { districtId: d });
+      // What-ifs of his own district; he removes only the ones he saved.
+      can(['read', 'create'], 'WhatIfScenario', { districtId: d });
+      can('delete', 'WhatIfScenario', { districtId: d, createdBy: actor.id });
       can('create', ['Import', 'Weather']);
       can('read', 'Import', { districtId: d });
       can('read', 'AuditEntry', { districtId: d });

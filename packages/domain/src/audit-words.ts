@@ -206,6 +206,7 @@ const ENTITY_WORDS: Readonly<Record<string, string>> = {
   rain_out: 'Rain-out',
   field_stripes: 'Stripe pattern',
   work_update: 'Work report',
+  what_if_scenario: 'Saved what-if',
 };
 
 /** The kind of row an entry is about, in words ("work_order" → "Work order"). */

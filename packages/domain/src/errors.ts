@@ -31,7 +31,7 @@ export const ERROR_STATUS: Record<ErrorKind, number> = {
 };
 
 /** Resources whose rows can be missing: `<resource>/not_found` (404). */
-export const NOT_FOUND_RESOURCES = ['route', 'district', 'site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'work_photo', 'field_check', 'import', 'standards', 'user', 'weather_station', 'calendar_feed', 'field_request', 'request_photo', 'field_logo', 'game_day'] as const;
+export const NOT_FOUND_RESOURCES = ['route', 'district', 'site', 'field', 'field_event', 'crew', 'equipment', 'work_order', 'work_photo', 'field_check', 'import', 'standards', 'user', 'weather_station', 'calendar_feed', 'field_request', 'request_photo', 'field_logo', 'game_day', 'what_if_scenario'] as const;
 export type NotFoundResource = (typeof NOT_FOUND_RESOURCES)[number];
 
 /** Resources written with a version check: `<resource>/version_conflict` (409). */
@@ -243,7 +243,7 @@ const ACCESS_CHANGED = {
   deactivated: 'An administrator deactivated your account, which signed you out; ask them if you need access again',
 } as const;
 /** How a resource is named in a message where its code name would read badly. */
-const WORDS: Partial<Record<NotFoundResource, string>> = { weather_station: 'weather station', field_check: 'field check', calendar_feed: 'calendar feed', game_day: 'game-day preparation' };
+const WORDS: Partial<Record<NotFoundResource, string>> = { weather_station: 'weather station', field_check: 'field check', calendar_feed: 'calendar feed', game_day: 'game-day preparation', what_if_scenario: 'saved what-if' };
 
 /** The errors that many places raise, each written once. */
 export const errors = {

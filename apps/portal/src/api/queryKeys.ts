@@ -42,6 +42,9 @@ export const queryKeys = {
   standards: () => ['standards'] as const,
   costs: () => ['costs'] as const,
   budget: (season: number, districtId: number | null) => ['budget', season, districtId] as const,
+  /** Under `budget`: saved what-ifs are worked out against the outlook, which follows fields, Standards and costs. */
+  whatIfScenarios: () => ['budget', 'what-if', 'scenarios'] as const,
+  whatIfCompare: (ids: readonly number[]) => ['budget', 'what-if', 'compare', ids] as const,
   stations: () => ['weather', 'stations'] as const,
   weatherDays: (stationId: number | null, from: string, to: string) => ['weather', 'days', stationId, from, to] as const,
   weekBoard: (districtId: number | null, weekStart: string) => ['week-plans', 'board', districtId, weekStart] as const,

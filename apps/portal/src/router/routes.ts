@@ -168,6 +168,12 @@ export const routes: RouteRecordRaw[] = [
         meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Budget'], title: 'Season budget' },
       },
       {
+        path: 'what-if',
+        name: 'what-if',
+        component: () => import('../views/WhatIfView.vue'),
+        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Budget'], title: 'What if' },
+      },
+      {
         path: 'compare',
         name: 'compare',
         component: () => import('../views/CompareView.vue'),

@@ -1,6 +1,8 @@
 /** The season budget as `GET /api/budget` answers it. */
 import type { BudgetFigure, BudgetLine } from '../budget.ts';
+import type { WhatIfInput } from '../schemas/budget.ts';
 import type { WhatIfResult } from '../what-if.ts';
+import type { Instant } from './common.ts';
 
 export interface BudgetLineRow {
   line: BudgetLine;
@@ -38,4 +40,30 @@ export interface WhatIfAnswer {
   scopeName: string;
   currency: string;
   result: WhatIfResult;
+}
+
+/** A saved what-if: the change as it was asked for, and who saved it. */
+export interface WhatIfScenarioRow<At extends Instant = string> {
+  id: number;
+  name: string;
+  season: number;
+  /** Null: the department's (every district). */
+  districtId: number | null;
+  scopeName: string;
+  change: WhatIfInput;
+  createdBy: number | null;
+  createdByName: string | null;
+  createdAt: At;
+  /** The caller saved it (and so may delete it). */
+  mine: boolean;
+}
+
+/** `GET /api/what-if/scenarios`, newest first. */
+export interface WhatIfScenarioList<At extends Instant = string> {
+  items: WhatIfScenarioRow<At>[];
+}
+
+/** `GET /api/what-if/scenarios/compare`: each scenario with its change against today's outlook, in the order asked. */
+export interface WhatIfCompareAnswer<At extends Instant = string> {
+  items: Array<{ scenario: WhatIfScenarioRow<At>; answer: WhatIfAnswer }>;
 }

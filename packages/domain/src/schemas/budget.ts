@@ -44,3 +44,27 @@ export const whatIfSchema = z
   })
   .strict();
 export type WhatIfInput = z.infer<typeof whatIfSchema>;
+
+/** `POST /api/what-if/scenarios`: a name and the change (as `POST /api/what-if` takes it); the result is worked out when read. */
+export const whatIfScenarioSchema = z
+  .object({
+    name: z.string({ error: 'give the scenario a name' }).trim().min(1, 'give the scenario a name').max(120, 'a name of at most 120 characters'),
+    change: whatIfSchema,
+  })
+  .strict();
+export type WhatIfScenarioInput = z.infer<typeof whatIfScenarioSchema>;
+
+/** `GET /api/what-if/scenarios`: those of a season (none: every season). */
+export const whatIfScenarioListSchema = z.object({ season: seasonSchema.optional() }).strict();
+
+/** `GET /api/what-if/scenarios/compare?ids=3,7`: two to four saved scenarios, each worked out against today's outlook. */
+export const whatIfCompareSchema = z
+  .object({
+    ids: z
+      .string({ error: 'ids is a list such as 3,7' })
+      .max(200, 'ids is a list such as 3,7')
+      .transform((s): unknown[] => s.split(',').map((x) => x.trim()))
+      .pipe(z.array(idSchema).min(2, 'compare at least 2 scenarios').max(4, 'compare at most 4 scenarios'))
+      .refine((ids) => new Set(ids).size === ids.length, 'name each scenario once'),
+  })
+  .strict();

@@ -1,9 +1,10 @@
 /** The season budget the head sets per line, for each district and for the department. */
 import { sql } from 'drizzle-orm';
-import { index, integer, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
-import type { BudgetLine } from '@swardwise/domain';
+import { index, integer, jsonb, pgTable, real, smallint, text, uniqueIndex } from 'drizzle-orm/pg-core';
+import type { BudgetLine, WhatIfInput } from '@swardwise/domain';
 import { districts } from './city.ts';
-import { id, versioned } from './columns.ts';
+import { createdAt, id, versioned } from './columns.ts';
+import { users } from './people.ts';
 
 export const budgetLines = pgTable(
   'budget_lines',
@@ -19,4 +20,20 @@ export const budgetLines = pgTable(
   },
   // One row per season, scope and line; the department's scope (null) keys as 0.
   (t) => [uniqueIndex('budget_lines_key').on(t.season, sql`coalesce(${t.districtId}, 0)`, t.line), index('budget_lines_district_idx').on(t.districtId)],
+);
+
+/** A saved what-if: the change (fields moved, Standards changed), never its result, which is worked out against the outlook of the day it is read. */
+export const whatIfScenarios = pgTable(
+  'what_if_scenarios',
+  {
+    ...id,
+    name: text('name').notNull(),
+    season: smallint('season').notNull(),
+    /** Null: the department's (every district). */
+    districtId: integer('district_id').references(() => districts.id, { onDelete: 'cascade' }),
+    change: jsonb('change').$type<WhatIfInput>().notNull(),
+    createdBy: integer('created_by').references(() => users.id, { onDelete: 'set null' }),
+    ...createdAt,
+  },
+  (t) => [index('what_if_scenarios_district_idx').on(t.districtId), index('what_if_scenarios_season_idx').on(t.season)],
 );

@@ -25,9 +25,9 @@ const keys = (w: ReturnType<typeof mountNav>) => w.findAll('[data-test^="nav-"]'
 
 describe('SideNav', () => {
   test.each([
-    ['admin', ['nav-overview', 'nav-requests', 'nav-sites', 'nav-fields', 'nav-map', 'nav-crews', 'nav-equipment', 'nav-weather', 'nav-standards', 'nav-costs', 'nav-budget', 'nav-compare', 'nav-week', 'nav-records', 'nav-imports', 'nav-users', 'nav-audit', 'nav-mail-outbox']],
-    ['head', ['nav-overview', 'nav-requests', 'nav-sites', 'nav-fields', 'nav-map', 'nav-crews', 'nav-equipment', 'nav-weather', 'nav-standards', 'nav-costs', 'nav-budget', 'nav-compare', 'nav-week', 'nav-records', 'nav-imports', 'nav-audit', 'nav-mail-outbox']],
-    ['foreman', ['nav-district', 'nav-requests', 'nav-sites', 'nav-fields', 'nav-map', 'nav-crews', 'nav-equipment', 'nav-weather', 'nav-costs', 'nav-budget', 'nav-compare', 'nav-week', 'nav-records', 'nav-imports']],
+    ['admin', ['nav-overview', 'nav-requests', 'nav-sites', 'nav-fields', 'nav-map', 'nav-crews', 'nav-equipment', 'nav-weather', 'nav-standards', 'nav-costs', 'nav-budget', 'nav-what-if', 'nav-compare', 'nav-week', 'nav-records', 'nav-imports', 'nav-users', 'nav-audit', 'nav-mail-outbox']],
+    ['head', ['nav-overview', 'nav-requests', 'nav-sites', 'nav-fields', 'nav-map', 'nav-crews', 'nav-equipment', 'nav-weather', 'nav-standards', 'nav-costs', 'nav-budget', 'nav-what-if', 'nav-compare', 'nav-week', 'nav-records', 'nav-imports', 'nav-audit', 'nav-mail-outbox']],
+    ['foreman', ['nav-district', 'nav-requests', 'nav-sites', 'nav-fields', 'nav-map', 'nav-crews', 'nav-equipment', 'nav-weather', 'nav-costs', 'nav-budget', 'nav-what-if', 'nav-compare', 'nav-week', 'nav-records', 'nav-imports']],
     ['crew', ['nav-today', 'nav-fields', 'nav-map']],
     ['partner', ['nav-my-fields', 'nav-requests', 'nav-map']],
   ] as [Role, string[]][])('should show a %s only the links of that role', (role, expected) => {

@@ -2,7 +2,7 @@ import type { Action, AppAbility, Role, SubjectName } from '@swardwise/domain';
 
 export interface NavItem {
   key: 'overview' | 'district' | 'sites' | 'fields' | 'users' | 'audit' | 'today' | 'my-fields' | 'standards' | 'map' | 'imports' | 'crews' | 'equipment' | 'weather'
-    | 'week' | 'records' | 'requests' | 'costs' | 'budget' | 'compare' | 'mail-outbox';
+    | 'week' | 'records' | 'requests' | 'costs' | 'budget' | 'compare' | 'mail-outbox' | 'what-if';
   label: string;
   to: string;
   roles: Role[];
@@ -28,6 +28,7 @@ const NAV_ITEMS: NavItem[] = [
   { key: 'standards', label: 'Standards', to: '/standards', roles: ['admin', 'head'], can: ['read', 'Standards'] },
   { key: 'costs', label: 'Costs and rates', to: '/costs', roles: ['admin', 'head', 'foreman'], can: ['read', 'CostSettings'] },
   { key: 'budget', label: 'Season budget', to: '/budget', roles: ['admin', 'head', 'foreman'], can: ['read', 'Budget'] },
+  { key: 'what-if', label: 'What if', to: '/what-if', roles: ['admin', 'head', 'foreman'], can: ['read', 'Budget'] },
   { key: 'compare', label: 'Compare sites', to: '/compare', roles: ['admin', 'head', 'foreman'], can: ['read', 'SiteComparison'] },
   { key: 'week', label: 'Week plan', to: '/week', roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'] },
   { key: 'records', label: 'Records', to: '/records', roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'] },

@@ -1,4 +1,4 @@
-import { DEFAULT_STANDARDS, updateLevelStandardSchema, type StandardsRow } from '@swardwise/domain';
+import { DEFAULT_COSTS, DEFAULT_PARAMETERS, DEFAULT_STANDARDS, updateLevelStandardSchema, whatIf, type StandardsRow, type WhatIfAnswer } from '@swardwise/domain';
 import { flushPromises, mount } from '@vue/test-utils';
 import { describe, expect, test, vi } from 'vitest';
 import LevelStandardForm from './LevelStandardForm.vue';
@@ -12,8 +12,13 @@ const row: StandardsRow = { level: 2, data: structuredClone(DEFAULT_STANDARDS[2]
  * works a picker (the browser test of cultural work does).
  */
 function mountForm(units: 'metric' | 'imperial' = 'metric') {
-  return mount(LevelStandardForm, { props: { row, units }, attachTo: document.body, global: { stubs: { ElSelect: true, ElOption: true } } });
+  return mount(LevelStandardForm, { props: { row, units, outlookSeason: 2026 }, attachTo: document.body, global: { stubs: { ElSelect: true, ElOption: true, WhatIfChart: true } } });
 }
+
+/** The save preview's answer: a season without fields (the preview's figures are the what-if tests' business). */
+const previewAnswer: WhatIfAnswer = { season: 2026, districtId: null, scopeName: 'Department', currency: 'USD', result: whatIf([], DEFAULT_STANDARDS, DEFAULT_PARAMETERS, DEFAULT_COSTS, { moves: [] }) };
+const isPreview = (url: string) => String(url).includes('/what-if');
+type Confirmable = { confirm(): Promise<boolean> };
 
 async function setNumber(wrapper: ReturnType<typeof mountForm>, test: string, value: string) {
   const input = wrapper.find(`[data-test="${test}"] input`);
@@ -78,7 +83,7 @@ describe('LevelStandardForm: cultural program', { timeout: 30_000 }, () => {
 
 describe('LevelStandardForm in imperial units', { timeout: 30_000 }, () => {
   test('should take heights of cut in inches and send millimetres', async () => {
-    const fetch = vi.fn(async (_url: string, init: RequestInit) => new Response(JSON.stringify({ ...row, data: { ...row.data, ...JSON.parse(String(init.body)) } }), { status: 200 }));
+    const fetch = vi.fn(async (url: string, init: RequestInit) => new Response(JSON.stringify(isPreview(url) ? previewAnswer : { ...row, data: { ...row.data, ...JSON.parse(String(init.body)) } }), { status: 200 }));
     vi.stubGlobal('fetch', fetch);
     const wrapper = mountForm('imperial');
     expect(wrapper.text()).toContain('Height of cut, inches');
@@ -87,8 +92,12 @@ describe('LevelStandardForm in imperial units', { timeout: 30_000 }, () => {
     await setNumber(wrapper, 'hoc-soccer-cool', '1.375');
     expect(wrapper.get('[data-test="hoc-soccer-text"]').text()).toMatch(/^1⅜ in \//);
     await wrapper.get('[data-test="standards-form-2"]').trigger('submit');
+    // Saving first asks for the season's change, and writes only when confirmed.
     await vi.waitFor(() => expect(fetch).toHaveBeenCalledTimes(1));
-    const body = JSON.parse(String(fetch.mock.calls[0]![1].body));
+    expect(isPreview(fetch.mock.calls[0]![0])).toBe(true);
+    await (wrapper.vm as unknown as Confirmable).confirm();
+    await vi.waitFor(() => expect(fetch).toHaveBeenCalledTimes(2));
+    const body = JSON.parse(String(fetch.mock.calls[1]![1].body));
     expect(body.hocMm.soccer.cool).toBe(34.925);
     // Untouched heights go back exactly as they were stored.
     expect(body.hocMm.soccer.warm).toBe(row.data.hocMm.soccer.warm);
@@ -110,10 +119,16 @@ describe('LevelStandardForm server errors', { timeout: 30_000 }, () => {
   test('should show an issue the API found under the field it names, even a nested one', async () => {
     vi.stubGlobal(
       'fetch',
-      vi.fn(async () => new Response(JSON.stringify({ error: { code: 'request/invalid', message: 'Invalid body', details: { issues: [{ path: 'body.hocMm.soccer.cool', message: 'too low for this level' }] } } }), { status: 400 })),
+      vi.fn(async (url: string) =>
+        isPreview(url)
+          ? new Response(JSON.stringify(previewAnswer), { status: 200 })
+          : new Response(JSON.stringify({ error: { code: 'request/invalid', message: 'Invalid body', details: { issues: [{ path: 'body.hocMm.soccer.cool', message: 'too low for this level' }] } } }), { status: 400 }),
+      ),
     );
     const wrapper = mountForm();
     await wrapper.get('[data-test="standards-form-2"]').trigger('submit');
+    await flushPromises();
+    await (wrapper.vm as unknown as Confirmable).confirm();
     await flushPromises();
     await vi.waitFor(() => expect(wrapper.text()).toContain('too low for this level'));
     expect(wrapper.get('[data-test="standards-form-error"]').text()).toContain('Invalid body');
