@@ -112,7 +112,7 @@ export async function getBudget(ctx: Ctx, q: BudgetQuery): Promise<BudgetAnswer>
   const note =
     basis.from === null
       ? `No weather on file for ${q.season}: the outlook has no days to work from yet.`
-      : `The turf engine's outlook over ${basis.from} to ${basis.to} (the season's weather on file) for ${basis.inputs.length} fields${basis.withoutWeather ? `; ${basis.withoutWeather} without weather left out` : ''}. Seed: the outlook plans no overseeding.`;
+      : `The turf engine's outlook over ${basis.from} to ${basis.to} (the season's weather on file) for ${basis.inputs.length} fields${basis.withoutWeather ? `; ${basis.withoutWeather} without weather left out` : ''}. Fertiliser is each field's annual N in proportion to those days, so it is below the overview's feed plan, which counts the whole year. Seed: the outlook plans no overseeding.`;
   return {
     season: q.season,
     districtId,
