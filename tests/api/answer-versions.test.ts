@@ -8,12 +8,12 @@ import { sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
 import { localWriteCount, openDatabase, type Database } from '../../apps/api/src/db/client.ts';
 import { sharedFingerprint } from '../../apps/api/src/services/answer-cache.ts';
-import { fieldChecks, settings } from '../../apps/api/src/db/schema/index.ts';
+import { applications, equipment, fieldChecks, settings } from '../../apps/api/src/db/schema/index.ts';
 import { clonePostgresDatabase, startTestApi, type TestApi } from '../support/app.ts';
 import { giveWork, type Fixture } from '../support/fixture.ts';
 
-/** Every table a cached answer (field list, map, a field's needs) reads. */
-const TABLES = ['districts', 'sites', 'fields', 'field_checks', 'weather_stations', 'weather_days', 'standards', 'work_orders', 'settings'];
+/** Every table a cached answer (field list, map, a field's needs, the sites compare) reads. */
+const TABLES = ['districts', 'sites', 'fields', 'field_checks', 'weather_stations', 'weather_days', 'standards', 'work_orders', 'settings', 'applications', 'equipment'];
 
 let api: TestApi | undefined;
 let clone: { url: string; drop(): Promise<void> } | undefined;
@@ -38,6 +38,11 @@ beforeAll(async () => {
   await giveWork(other.db, fixture.fields.northSoccer, fixture.crews.north, 1);
   await other.db.insert(fieldChecks).values({ fieldId: fixture.fields.northSoccer, checkedOn: '2026-05-20', turfCoverPct: 90, weedsPct: 5, barePct: 5, score: 80 });
   await other.db.insert(settings).values({ key: 'answer_versions_test', value: true });
+  await other.db.insert(equipment).values({ districtId: fixture.districts.north, kind: 'rotary_mower', name: 'Counter test mower' });
+  await other.db.insert(applications).values({
+    fieldId: fixture.fields.northSoccer, siteId: fixture.sites.northPark, districtId: fixture.districts.north, task: 'overseed', product: 'Counter test seed',
+    rate: 4, rateUnit: 'lb/1000 ft²', areaM2: 100, appliedOn: '2026-05-20', applicator: 'Counter test',
+  });
 });
 afterAll(async () => {
   if (clone) {

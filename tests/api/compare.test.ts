@@ -113,6 +113,18 @@ describe('sites compared', () => {
     expect(now.cost.fuel - was.cost.fuel).toBeCloseTo(3, 6);
   });
 
+  test('should answer from the rows again after only a seed application is recorded (the cached answer is not kept)', async () => {
+    const [field] = (await database.db.execute<{ id: number; site_id: number; district_id: number }>(sql`select f.id, f.site_id, s.district_id from fields f join sites s on s.id = f.site_id order by f.id desc limit 1`)).rows;
+    const head = await agent('head');
+    const read = async () => ((await head.get('/api/compare/sites')).body as CompareSitesAnswer).rows.find((r) => r.siteId === field!.site_id)!;
+    const was = await read();
+    expect((await read()).seedKg).toBe(was.seedKg);
+    await database.db.execute(sql`insert into applications (field_id, site_id, district_id, task, product, rate, rate_unit, area_m2, applied_on, applicator)
+      values (${field!.id}, ${field!.site_id}, ${field!.district_id}, 'overseed', 'Rye mix', 10, 'g/m²', 500, '2026-11-02', 'Demo crew')`);
+    // 10 g/m² × 500 m² = 5 kg seed.
+    expect((await read()).seedKg - was.seedKg).toBeCloseTo(5, 9);
+  });
+
   test('should write a CSV that parses back to the same numbers', async () => {
     const head = await agent('head');
     const json = (await head.get('/api/compare/sites').query({ period: 'last12' })).body as CompareSitesAnswer;

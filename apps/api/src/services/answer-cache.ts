@@ -1,5 +1,5 @@
 /**
- * Read-heavy answers (the map, the field list, a field's needs) cached as JSON per caller
+ * Read-heavy answers (the map, the field list, a field's needs, the sites compare) cached as JSON per caller
  * scope and data fingerprint. PGlite runs one query at a time, so rebuilding 3,000 rows on
  * every request would queue everyone behind it. The fingerprint reads the change counters in
  * `answer_versions`, which `answer_version_*` triggers bump in the same transaction as every
@@ -15,8 +15,9 @@ import type { Ctx } from './context.ts';
 
 /**
  * Changes whenever a field, check, weather day, station, Standards row, site, district, work
- * order or setting (department parameters, time zone, costs) is written, added or removed
- * (the triggers of migration 0021 count every write statement on those tables), and at
+ * order, setting (department parameters, time zone, costs), application or machine is
+ * written, added or removed (the triggers of migrations 0021 and 0026 count every write
+ * statement on those tables), and at
  * midnight (a crew's window of work moves with the day).
  */
 async function dataFingerprint(db: Ctx['db']): Promise<string> {
