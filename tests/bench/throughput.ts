@@ -31,6 +31,8 @@ interface Figures {
   p975: number;
   requests: number;
   errors: number;
+  /** Processor time of the server process per answer, µs (user + system): what a request costs whatever else the machine runs. */
+  cpuUs: number;
 }
 
 /** One autocannon run; latencies are kept per response so p95 is exact (autocannon reports p90 and p97.5). */
@@ -49,7 +51,21 @@ async function load(name: string, url: string, headers: Record<string, string>, 
     p975: times.length ? pct(times, 97.5) : NaN,
     requests: result.requests.total,
     errors,
+    cpuUs: NaN,
   };
+}
+
+/** The server process's processor time so far (µs) and the answers it has ended. */
+function serverCpu(child: ChildProcess): Promise<{ cpuUs: number; answered: number }> {
+  return new Promise((resolve) => {
+    const onMessage = (m: { cpuUs?: number; answered?: number }) => {
+      if (m.cpuUs === undefined) return;
+      child.off('message', onMessage);
+      resolve({ cpuUs: m.cpuUs, answered: m.answered! });
+    };
+    child.on('message', onMessage);
+    child.send('cpu?');
+  });
 }
 
 /** Waits until the server process has answered every request it took (a run's stragglers must not load the next). */
@@ -77,6 +93,7 @@ function drained(child: ChildProcess): Promise<void> {
  */
 async function serve(): Promise<void> {
   let inFlight = 0;
+  let answered = 0;
   let waiting = false;
   const answerIdle = () => {
     if (waiting && inFlight === 0) {
@@ -85,7 +102,8 @@ async function serve(): Promise<void> {
     }
   };
   const count = (server: Server) =>
-    server.on('request', (_req, res: ServerResponse) => {
+    // First in line: the bare route answers within Express's own listener, before a later one would wrap `end`.
+    server.prependListener('request', (_req, res: ServerResponse) => {
       inFlight += 1;
       // Done when the handler ends its answer, not when autocannon drops the connection at
       // the end of a run: a handler still working then would load the next run.
@@ -96,12 +114,18 @@ async function serve(): Promise<void> {
         if (!ended) {
           ended = true;
           inFlight -= 1;
+          answered += 1;
           answerIdle();
         }
         return end(...args);
       }) as ServerResponse['end'];
     });
-  process.on('message', () => {
+  process.on('message', (m) => {
+    if (m === 'cpu?') {
+      const { user, system } = process.cpuUsage();
+      process.send!({ cpuUs: user + system, answered });
+      return;
+    }
     waiting = true;
     answerIdle();
   });
@@ -141,8 +165,12 @@ if (process.argv.includes('--serve')) {
     await drained(child);
     await load(name, url, headers, WARMUP_SECONDS);
     await drained(child);
+    const before = await serverCpu(child);
     const f = await load(name, url, headers, SECONDS);
-    console.log(`  ${name}: ${f.rps.toFixed(0)} req/s`);
+    await drained(child);
+    const after = await serverCpu(child);
+    f.cpuUs = (after.cpuUs - before.cpuUs) / Math.max(1, after.answered - before.answered);
+    console.log(`  ${name}: ${f.rps.toFixed(0)} req/s, server ${f.cpuUs.toFixed(0)} µs a request`);
     return f;
   };
 
@@ -158,8 +186,8 @@ if (process.argv.includes('--serve')) {
   rows.push(await measure('bare Express GET /hello (again)', bareUrl));
 
   const bareRps = (rows[0]!.rps + rows[rows.length - 1]!.rps) / 2;
-  console.log(`${CONNECTIONS} connections, ${SECONDS} s a route (after ${WARMUP_SECONDS} s warm-up); ratio = req/s ÷ bare Express req/s (mean of both bare runs)`);
-  console.log(['route'.padEnd(44), 'req/s'.padStart(8), 'p50 ms'.padStart(8), 'p95 ms'.padStart(8), 'p97.5 ms'.padStart(9), 'errors'.padStart(7), 'ratio'.padStart(7)].join(' '));
+  console.log(`${CONNECTIONS} connections, ${SECONDS} s a route (after ${WARMUP_SECONDS} s warm-up); ratio = req/s ÷ bare Express req/s (mean of both bare runs); cpu µs = the server process's processor time per answer`);
+  console.log(['route'.padEnd(44), 'req/s'.padStart(8), 'p50 ms'.padStart(8), 'p95 ms'.padStart(8), 'p97.5 ms'.padStart(9), 'errors'.padStart(7), 'ratio'.padStart(7), 'cpu µs'.padStart(7)].join(' '));
   for (const f of rows) {
     console.log(
       [
@@ -170,6 +198,7 @@ if (process.argv.includes('--serve')) {
         f.p975.toFixed(1).padStart(9),
         String(f.errors).padStart(7),
         `${((100 * f.rps) / bareRps).toFixed(1)} %`.padStart(7),
+        f.cpuUs.toFixed(0).padStart(7),
       ].join(' '),
     );
   }
