@@ -115,17 +115,20 @@ export function createApp(
   // JSON and index.html compressed as they are sent (brotli or gzip, as the client asks); the
   // portal's assets are sent in the copies compressed at build time (http/portal.ts).
   app.use(compression());
-  app.use(
-    pinoHttp({
-      logger,
-      autoLogging: { ignore: (req) => req.url === '/api/health' },
-      serializers: {
-        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: loggableUrl(req.url) }),
-        res: (res: { statusCode: number }) => ({ status: res.statusCode }),
-      },
-      customProps: (req) => ({ userId: (req as { user?: { id: number } }).user?.id }),
-    }),
-  );
+  // A silent logger (tests, benchmarks) writes nothing, so it needs no logger per request either.
+  if (logger.level !== 'silent') {
+    app.use(
+      pinoHttp({
+        logger,
+        autoLogging: { ignore: (req) => req.url === '/api/health' },
+        serializers: {
+          req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: loggableUrl(req.url) }),
+          res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+        },
+        customProps: (req) => ({ userId: (req as { user?: { id: number } }).user?.id }),
+      }),
+    );
+  }
   // Before any body is read: a write from another site or port is refused here.
   app.use('/api', sameOriginWrites(config));
   app.use('/api', forgetAfterWrites(authCache));

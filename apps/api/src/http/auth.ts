@@ -32,12 +32,20 @@ export function loadUser(db: Db, cache: AuthCache): RequestHandler {
         return;
       }
       req.user = user;
-      req.actor = actorOf(user);
+      req.actor = actorFor(user);
       next();
     } catch (err) {
       next(err);
     }
   };
+}
+
+/** The same actor object while the auth cache keeps the same user, so its ability is built once (services/context.ts). */
+const actors = new WeakMap<SessionUser, Actor>();
+function actorFor(user: SessionUser): Actor {
+  let actor = actors.get(user);
+  if (!actor) actors.set(user, (actor = actorOf(user)));
+  return actor;
 }
 
 async function cachedSessionUser(db: Db, cache: AuthCache, userId: number): Promise<SessionUser | undefined> {

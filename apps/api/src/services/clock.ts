@@ -68,11 +68,28 @@ export class DepartmentClock implements Clock {
   }
 
   today(): string {
-    return localToday(this.#zone, this.now());
+    const local = this.#thisMinute();
+    local.today ??= localToday(this.#zone, this.now());
+    return local.today;
   }
 
   weekStart(): string {
-    return localWeekStart(this.#zone, this.now());
+    const local = this.#thisMinute();
+    local.weekStart ??= localWeekStart(this.#zone, this.now());
+    return local.weekStart;
+  }
+
+  /**
+   * The local dates of the current minute, worked out once: every request asks for "today"
+   * (answer-cache keys, the week board), and a time-zone conversion is dear at hundreds of
+   * requests a second. Local midnight falls on a whole minute in every zone in use today
+   * (offsets are whole quarter hours), so no minute spans two dates.
+   */
+  #minute: { zone: string; minute: number; today?: string; weekStart?: string } = { zone: '', minute: Number.NaN };
+  #thisMinute(): { today?: string; weekStart?: string } {
+    const minute = Math.floor(this.now().getTime() / 60_000);
+    if (this.#minute.minute !== minute || this.#minute.zone !== this.#zone) this.#minute = { zone: this.#zone, minute };
+    return this.#minute;
   }
 
   dateOf(instant: Date | string | number): string {

@@ -14,7 +14,19 @@ export interface Ctx {
 }
 
 export function contextFor(db: Queryable, actor: Actor, actorName: string, clock: Clock): Ctx {
-  return { db, actor, actorName, ability: defineAbilityFor(actor), clock };
+  return { db, actor, actorName, ability: abilityOf(actor), clock };
+}
+
+/**
+ * One ability per actor object: a signed-in user's actor lives as long as the auth cache keeps
+ * the user (http/auth.ts), so the rules are built once, not on every request. Abilities are
+ * never changed after they are built.
+ */
+const abilities = new WeakMap<Actor, AppAbility>();
+function abilityOf(actor: Actor): AppAbility {
+  let ability = abilities.get(actor);
+  if (!ability) abilities.set(actor, (ability = defineAbilityFor(actor)));
+  return ability;
 }
 
 /** Throws 403 unless the actor may do `action` on the subject (or on this row of it). */
