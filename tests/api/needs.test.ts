@@ -91,7 +91,8 @@ describe('GET /api/fields/:id/needs', () => {
     expect(res.status).toBe(200);
     const n = res.body.needs;
     expect(n.week).toMatchObject({ start: '2026-06-01', end: api.fixture.weather.end, fallback: true });
-    expect(n.weatherNote).toMatch(/no weather for the week of 2026-11-30/);
+    expect(n.weatherNote).toMatch(/no weather for the week of Nov 30, 2026 to Dec 6, 2026/);
+    expect(n.weatherNote).not.toMatch(/\d{4}-\d{2}-\d{2}/);
     expect(n.weatherNote).toMatch(/latest week with weather/);
   });
 

@@ -4,6 +4,7 @@ export * from './abilities.ts';
 export * from './schemas/index.ts';
 export * from './geometry.ts';
 export * from './clock.ts';
+export * from './calendar-date.ts';
 export * from './engine/index.ts';
 export * from './contracts/index.ts';
 export * from './partner-words.ts';

@@ -10,6 +10,8 @@
 import { and, asc, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import { cachedAnswer } from './answer-cache.ts';
 import {
+  DAY_MONTH_YEAR,
+  formatDay,
   DEFAULT_PARAMETERS,
   DEFAULT_STANDARDS,
   GRASSES,
@@ -180,11 +182,13 @@ async function loadMapRows(ctx: Ctx) {
 type MapFieldRow = Awaited<ReturnType<typeof loadMapRows>>['fields'][number];
 
 /** The day the map describes: the day asked for, or the latest day with weather before it (said in the note). */
+const dayText = (iso: string) => formatDay(iso, DAY_MONTH_YEAR);
+
 function mapDay(withWeather: readonly StationSeries[], requested: string): { asOf: string; latestWeather: string | null; weatherNote: string | null } {
   const latestWeather = withWeather.reduce<string | null>((m, s) => (m === null || s.latest! > m ? s.latest : m), null);
   if (latestWeather === null) return { asOf: requested, latestWeather, weatherNote: 'No weather is recorded yet, so overdue mowing cannot be predicted.' };
   if (latestWeather < requested) {
-    return { asOf: latestWeather, latestWeather, weatherNote: `No weather after ${latestWeather}: heights and overdue flags are as of ${latestWeather}, the latest day with weather, not ${requested}.` };
+    return { asOf: latestWeather, latestWeather, weatherNote: `No weather after ${dayText(latestWeather)}: heights and overdue flags are as of that day, the latest with weather, not ${dayText(requested)}.` };
   }
   return { asOf: requested, latestWeather, weatherNote: null };
 }

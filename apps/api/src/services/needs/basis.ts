@@ -4,7 +4,7 @@
  * week with weather), run through the engine's daily series once.
  */
 import { asc, eq } from 'drizzle-orm';
-import { appError, addDaysIso, fieldDailySeries, grassSeason, mondayOf, type Level, type NeedInput } from '@swardwise/domain';
+import { appError, addDaysIso, DAY_MONTH_YEAR, formatDay, fieldDailySeries, grassSeason, mondayOf, type Level, type NeedInput } from '@swardwise/domain';
 import { sites, weatherDays } from '../../db/schema/index.ts';
 import type { Ctx } from '../context.ts';
 import { getField } from '../fields.ts';
@@ -28,6 +28,8 @@ interface NeedsWeek {
   run: WeatherRow[];
 }
 
+const dayText = (iso: string) => formatDay(iso, DAY_MONTH_YEAR);
+
 /** The week asked for, or else the latest week with weather on or before it. */
 function chooseWeek(station: StationWithWeather, allDays: WeatherRow[], requested: string): NeedsWeek {
   const askedStart = mondayOf(requested);
@@ -42,14 +44,14 @@ function chooseWeek(station: StationWithWeather, allDays: WeatherRow[], requeste
     const last = (before.length ? before[before.length - 1]! : allDays[allDays.length - 1]!).date;
     weekEnd = last;
     weekStart = addDaysIso(last, -6);
-    weatherNote = `${station.name} has ${covered ? `only ${covered} of 7 days of` : 'no'} weather for the week of ${askedStart} to ${askedEnd}. These figures use the latest week with weather instead: ${weekStart} to ${weekEnd}.`;
+    weatherNote = `${station.name} has ${covered ? `only ${covered} of 7 days of` : 'no'} weather for the week of ${dayText(askedStart)} to ${dayText(askedEnd)}. These figures use the latest week with weather instead: ${dayText(weekStart)} to ${dayText(weekEnd)}.`;
   }
 
   // The unbroken run of days around the week: the season the chart and the mowing simulation use.
   const run = unbrokenRunAround(allDays, allDays.findIndex((d) => d.date === weekEnd));
   if (run[0]!.date > weekStart) {
     weekStart = run[0]!.date;
-    weatherNote ??= `The weather on file starts on ${weekStart}; the week is shortened to the days with weather.`;
+    weatherNote ??= `The weather on file starts on ${dayText(weekStart)}; the week is shortened to the days with weather.`;
   }
   return { weekStart, weekEnd, weatherNote, run };
 }
