@@ -2,7 +2,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import {
-  appError,
   closeFieldRequestSchema,
   createFieldRequestSchema,
   declineFieldRequestSchema,
@@ -17,6 +16,7 @@ import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
+import { photoFileHandler, photoUploadHandlers } from './photo-routes.ts';
 import { authorize } from '../services/context.ts';
 import {
   addMessage,
@@ -88,26 +88,16 @@ export function requestsRouter({ db, mailer, config, background }: AppDeps): Rou
 
   router.post(
     '/:id/photos',
-    // Refuse a caller who may not change this request before reading a (possibly large) upload.
-    async (req, _res, next) => {
-      const { id } = parse(idParamSchema, req.params, 'params');
-      await requestFor(ctxOf(db, req), id, 'update');
-      next();
-    },
-    receivePhoto,
-    async (req, res) => {
-      const { id } = parse(idParamSchema, req.params, 'params');
-      if (!req.file) throw appError('request_photo/no_file', 'Choose a photo to upload', { issues: [{ path: 'body.photo', message: 'choose a photo' }] });
-      res.status(201).json(await addRequestPhoto(ctxOf(db, req), id, req.file.buffer, config.uploadsDir));
-    },
+    ...photoUploadHandlers(db, {
+      params: idParamSchema,
+      allowed: (ctx, { id }) => requestFor(ctx, id, 'update'),
+      receive: receivePhoto,
+      code: 'request_photo',
+      store: (ctx, { id }, upload) => addRequestPhoto(ctx, id, upload.buffer, config.uploadsDir),
+    }),
   );
 
-  router.get('/:id/photos/:photoId', async (req, res) => {
-    const { id, photoId } = parse(requestPhotoParamsSchema, req.params, 'params');
-    const { file, mime } = await requestPhotoFile(ctxOf(db, req), id, photoId, config.uploadsDir);
-    res.setHeader('Cache-Control', 'private, max-age=86400');
-    res.type(mime).sendFile(file);
-  });
+  router.get('/:id/photos/:photoId', photoFileHandler(db, requestPhotoParamsSchema, (ctx, { id, photoId }) => requestPhotoFile(ctx, id, photoId, config.uploadsDir)));
 
   return router;
 }
