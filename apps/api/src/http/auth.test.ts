@@ -2,7 +2,7 @@ import { describe, expect, test } from 'vitest';
 import { AppError, type Actor, type SessionUser } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import type { Clock } from '../services/clock.ts';
-import { ctxOf } from './auth.ts';
+import { ctxAllowed, ctxOf } from './auth.ts';
 
 const user: SessionUser = { id: 7, email: 'f@test.example', name: 'Rowan Field', role: 'foreman', districtId: 2, crewId: null, siteIds: [], units: 'metric', version: 1 };
 const actor: Actor = { id: 7, role: 'foreman', districtId: 2, crewId: null, siteIds: [] };
@@ -28,5 +28,13 @@ describe('ctxOf', () => {
       expect(thrown).toBeInstanceOf(AppError);
       expect((thrown as AppError).code).toBe('auth/unauthenticated');
     }
+  });
+});
+
+describe('ctxAllowed', () => {
+  test('should give the context of a caller who may act on the subject, and refuse one who may not with 403', () => {
+    expect(ctxAllowed(db, { actor, user, clock }, 'update', 'WorkOrder').actor).toBe(actor);
+    expect(() => ctxAllowed(db, { actor, user, clock }, 'update', 'CostSettings')).toThrow(expect.objectContaining({ code: 'auth/forbidden' }));
+    expect(() => ctxAllowed(db, { clock }, 'read', 'Site')).toThrow(expect.objectContaining({ code: 'auth/unauthenticated' }));
   });
 });

@@ -1,10 +1,10 @@
 /** Who is asking: the session's user becomes `req.actor`, checked on every request. */
 import type { RequestHandler } from 'express';
-import { errors, type Actor } from '@swardwise/domain';
+import { errors, type Action, type Actor, type SubjectName } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import type { AuthCache } from './auth-cache.ts';
 import type { Clock } from '../services/clock.ts';
-import { contextFor, type Ctx } from '../services/context.ts';
+import { authorize, contextFor, type Ctx } from '../services/context.ts';
 import { actorOf, sessionUser, type SessionEnd, type SessionUser } from '../services/users.ts';
 
 declare module 'express-serve-static-core' {
@@ -86,4 +86,14 @@ export function ctxOf(db: Db, req: { actor?: Actor; user?: SessionUser; clock?: 
   if (!req.actor || !req.user) throw errors.unauthenticated();
   if (!req.clock) throw new Error('the department clock is not on the request (withClock runs before the routes)');
   return contextFor(db, req.actor, req.user.name, req.clock);
+}
+
+/**
+ * `ctxOf` for a caller who may `action` the `subject` at all (403 otherwise): the route's
+ * check of who is asking, before it reads a body or query. Rows are checked by the service.
+ */
+export function ctxAllowed(db: Db, req: Parameters<typeof ctxOf>[1], action: Action, subject: SubjectName): Ctx {
+  const ctx = ctxOf(db, req);
+  authorize(ctx, action, subject);
+  return ctx;
 }

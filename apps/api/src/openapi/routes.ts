@@ -86,7 +86,7 @@ import { versionQuerySchema } from '../routes/write-routes.ts';
 import { LOGO_MAX_BYTES } from '../services/logo-files.ts';
 import { LOGOS_PER_FIELD } from '../services/logos.ts';
 import { STATUS_MAX_AGE_S } from '../routes/public.ts';
-import { photoBodySchema, photoParamsSchema } from '../routes/work-reports.ts';
+import { photoBodySchema, photoParamsSchema } from '../routes/photo-routes.ts';
 import { checkParamsSchema, checkPhotoParamsSchema } from '../routes/fields.ts';
 import { PHOTOS_PER_CHECK } from '../services/field-checks.ts';
 import { PHOTO_MAX_BYTES, PHOTOS_PER_ORDER } from '../services/work-photos.ts';

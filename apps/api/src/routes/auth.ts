@@ -2,7 +2,7 @@ import { eq } from 'drizzle-orm';
 import { Router } from 'express';
 import { ipKeyGenerator, rateLimit, type Options } from 'express-rate-limit';
 import { AppError, acceptInviteSchema, forgotPasswordSchema, resetPasswordSchema, signInSchema, updateProfileSchema, appError } from '@swardwise/domain';
-import type { Request } from 'express';
+import type { Request, Response } from 'express';
 import type { AppDeps } from '../app-deps.ts';
 import { users } from '../db/schema/index.ts';
 import { ctxOf, requireUser } from '../http/auth.ts';
@@ -107,13 +107,20 @@ export function authRouter({ db, config, mailer, background, clock, rateLimitPre
     res.json(session(user));
   });
 
-  router.post('/accept-invite', failuresPerAddress, async (req, res) => {
-    const input = parse(acceptInviteSchema, req.body, 'body');
-    const user = await acceptInvite(db, input.token, input.password);
-    await startSession(req, user, config);
-    await audit(req, 'sign_in', user.id, { via: 'invitation' });
-    res.json(session(user));
-  });
+  /**
+   * An invitation or a reset link: the mailed token and a new password set the password and
+   * sign the person in, audited with the way they came.
+   */
+  const signInWithToken =
+    (schema: typeof acceptInviteSchema | typeof resetPasswordSchema, setPassword: typeof acceptInvite, via: string) => async (req: Request, res: Response) => {
+      const input = parse(schema, req.body, 'body');
+      const user = await setPassword(db, input.token, input.password);
+      await startSession(req, user, config);
+      await audit(req, 'sign_in', user.id, { via });
+      res.json(session(user));
+    };
+
+  router.post('/accept-invite', failuresPerAddress, signInWithToken(acceptInviteSchema, acceptInvite, 'invitation'));
 
   // The same answer, at the same speed, whether or not the account exists: the look-up,
   // the token and the e-mail happen after the answer has gone.
@@ -136,13 +143,7 @@ export function authRouter({ db, config, mailer, background, clock, rateLimitPre
     res.status(202).json({ message: 'If that address has an account, a reset link is on its way.' });
   });
 
-  router.post('/reset-password', failuresPerAddress, async (req, res) => {
-    const input = parse(resetPasswordSchema, req.body, 'body');
-    const user = await resetPassword(db, input.token, input.password);
-    await startSession(req, user, config);
-    await audit(req, 'sign_in', user.id, { via: 'password reset' });
-    res.json(session(user));
-  });
+  router.post('/reset-password', failuresPerAddress, signInWithToken(resetPasswordSchema, resetPassword, 'password reset'));
 
   return router;
 }

@@ -2,11 +2,10 @@
 import { Router } from 'express';
 import { budgetLineSchema, budgetQuerySchema, type BudgetAnswer } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
+import { ctxAllowed, ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { budgetCsv, budgetPdf } from '../services/budget-export.ts';
 import { getBudget, setBudgetLine } from '../services/budget.ts';
-import { authorize } from '../services/context.ts';
 
 const fileName = (b: BudgetAnswer, ext: string) => `budget-${b.season}-${b.districtId === null ? 'department' : `district-${b.districtId}`}.${ext}`;
 
@@ -33,9 +32,8 @@ export function budgetRouter({ db }: AppDeps): Router {
   });
 
   router.patch('/line', async (req, res) => {
-    const ctx = ctxOf(db, req);
     // Who is asking, before the body is read; the line's district is checked again with the body.
-    authorize(ctx, 'update', 'Budget');
+    const ctx = ctxAllowed(db, req, 'update', 'Budget');
     res.json({ line: await setBudgetLine(ctx, parse(budgetLineSchema, req.body, 'body')) });
   });
 

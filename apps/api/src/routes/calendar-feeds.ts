@@ -2,9 +2,8 @@
 import { Router } from 'express';
 import { calendarTokenParamsSchema, createCalendarFeedSchema, idParamSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
+import { ctxAllowed, ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { authorize } from '../services/context.ts';
 import { calendarFeedIcs, createCalendarFeed, listCalendarFeeds, revokeCalendarFeed } from '../services/calendar-feeds.ts';
 
 export function calendarFeedsRouter({ db, config }: AppDeps): Router {
@@ -15,9 +14,8 @@ export function calendarFeedsRouter({ db, config }: AppDeps): Router {
   });
 
   router.post('/', async (req, res) => {
-    const ctx = ctxOf(db, req);
     // Roles that may have no feed are refused before the body is read.
-    authorize(ctx, 'create', 'CalendarFeed');
+    const ctx = ctxAllowed(db, req, 'create', 'CalendarFeed');
     res.status(201).json(await createCalendarFeed(ctx, parse(createCalendarFeedSchema, req.body ?? {}, 'body'), config.publicUrl));
   });
 

@@ -2,10 +2,9 @@
 import { Router } from 'express';
 import { closeFieldSchema, idParamSchema, reopenFieldSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
+import { ctxAllowed, ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { closeField, getFieldClosures, reopenField, type ClosureDeps } from '../services/closures.ts';
-import { authorize } from '../services/context.ts';
 
 export function closuresRouter({ db, mailer, config, background }: AppDeps): Router {
   const router = Router();
@@ -17,16 +16,14 @@ export function closuresRouter({ db, mailer, config, background }: AppDeps): Rou
   });
 
   router.post('/:id/closures', async (req, res) => {
-    const ctx = ctxOf(db, req);
     // A crew lead or a partner is refused before the body is read.
-    authorize(ctx, 'create', 'FieldClosure');
+    const ctx = ctxAllowed(db, req, 'create', 'FieldClosure');
     const { id } = parse(idParamSchema, req.params, 'params');
     res.status(201).json(await closeField(ctx, deps, id, parse(closeFieldSchema, req.body, 'body')));
   });
 
   router.post('/:id/reopen', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    authorize(ctx, 'create', 'FieldClosure');
+    const ctx = ctxAllowed(db, req, 'create', 'FieldClosure');
     const { id } = parse(idParamSchema, req.params, 'params');
     res.status(201).json(await reopenField(ctx, deps, id, parse(reopenFieldSchema, req.body, 'body')));
   });

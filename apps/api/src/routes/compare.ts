@@ -3,23 +3,20 @@ import { Router } from 'express';
 import Papa from 'papaparse';
 import { compareQuerySchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
+import { ctxAllowed } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { authorize } from '../services/context.ts';
 import { COMPARE_CSV_COLUMNS, compareSites } from '../services/compare.ts';
 
 export function compareRouter({ db }: AppDeps): Router {
   const router = Router();
 
   router.get('/sites', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    authorize(ctx, 'read', 'SiteComparison');
+    const ctx = ctxAllowed(db, req, 'read', 'SiteComparison');
     res.json(await compareSites(ctx, parse(compareQuerySchema, req.query, 'query')));
   });
 
   router.get('/sites.csv', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    authorize(ctx, 'read', 'SiteComparison');
+    const ctx = ctxAllowed(db, req, 'read', 'SiteComparison');
     const answer = await compareSites(ctx, parse(compareQuerySchema, req.query, 'query'));
     const csv = Papa.unparse({
       fields: COMPARE_CSV_COLUMNS.map(([h]) => h),

@@ -2,9 +2,8 @@
 import { Router } from 'express';
 import { updateCostSettingsSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
+import { ctxAllowed, ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { authorize } from '../services/context.ts';
 import { getCosts, updateCosts } from '../services/costs.ts';
 
 export function costsRouter({ db }: AppDeps): Router {
@@ -15,9 +14,8 @@ export function costsRouter({ db }: AppDeps): Router {
   });
 
   router.patch('/', async (req, res) => {
-    const ctx = ctxOf(db, req);
     // Who is asking, before the body is read.
-    authorize(ctx, 'update', 'CostSettings');
+    const ctx = ctxAllowed(db, req, 'update', 'CostSettings');
     res.json(await updateCosts(ctx, parse(updateCostSettingsSchema, req.body, 'body')));
   });
 

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { appError, createFieldSchema, fieldCheckSchema, idParamSchema, idSchema, listQuerySchema, needsQuerySchema, pageQuerySchema, updateFieldSchema } from '@swardwise/domain';
+import { createFieldSchema, fieldCheckSchema, idParamSchema, idSchema, listQuerySchema, needsQuerySchema, pageQuerySchema, updateFieldSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
@@ -10,7 +10,7 @@ import { fieldNeedsJson } from '../services/needs.ts';
 import { fieldWorkHistory } from '../services/field-history.ts';
 import { addFieldCheckPhoto, checkPhotoAllowed, fieldCheckPhotoFile, fieldForCheck, fieldGrowthCalibration, listFieldChecks, logStaffFieldCheck } from '../services/field-checks.ts';
 import { PHOTO_MAX_BYTES } from '../services/work-photos.ts';
-import { photoBodySchema } from './work-reports.ts';
+import { photoFileHandler, photoUploadHandlers } from './photo-routes.ts';
 import { writeRoutes } from './write-routes.ts';
 
 // The photo and the phone's reference for it, as the crews' photos.
@@ -57,27 +57,16 @@ export function fieldsRouter({ db, config }: AppDeps): Router {
 
   router.post(
     '/:id/checks/:checkId/photos',
-    async (req, _res, next) => {
-      const { id, checkId } = parse(checkParamsSchema, req.params, 'params');
-      await checkPhotoAllowed(ctxOf(db, req), id, checkId);
-      next();
-    },
-    receivePhoto,
-    async (req, res) => {
-      const { id, checkId } = parse(checkParamsSchema, req.params, 'params');
-      const { clientRef } = parse(photoBodySchema, req.body, 'body');
-      if (!req.file) throw appError('work_photo/no_file', 'Choose a photo to upload', { issues: [{ path: 'body.photo', message: 'choose a photo' }] });
-      const answer = await addFieldCheckPhoto(ctxOf(db, req), id, checkId, { buffer: req.file.buffer, clientRef }, config.uploadsDir);
-      res.status(answer.duplicate ? 200 : 201).json(answer);
-    },
+    ...photoUploadHandlers(db, {
+      params: checkParamsSchema,
+      allowed: (ctx, { id, checkId }) => checkPhotoAllowed(ctx, id, checkId),
+      receive: receivePhoto,
+      code: 'work_photo',
+      store: (ctx, { id, checkId }, upload) => addFieldCheckPhoto(ctx, id, checkId, upload, config.uploadsDir),
+    }),
   );
 
-  router.get('/:id/checks/:checkId/photos/:photoId', async (req, res) => {
-    const { id, checkId, photoId } = parse(checkPhotoParamsSchema, req.params, 'params');
-    const { file, mime } = await fieldCheckPhotoFile(ctxOf(db, req), id, checkId, photoId, config.uploadsDir);
-    res.setHeader('Cache-Control', 'private, max-age=86400');
-    res.type(mime).sendFile(file);
-  });
+  router.get('/:id/checks/:checkId/photos/:photoId', photoFileHandler(db, checkPhotoParamsSchema, (ctx, { id, checkId, photoId }) => fieldCheckPhotoFile(ctx, id, checkId, photoId, config.uploadsDir)));
 
   router.get('/:id/growth-calibration', async (req, res) => {
     const { id } = parse(idParamSchema, req.params, 'params');

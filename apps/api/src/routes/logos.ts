@@ -3,10 +3,9 @@ import fs from 'node:fs/promises';
 import { Router } from 'express';
 import { appError, createLogoSchema, idParamSchema, logoParamsSchema, updateLogoSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
+import { ctxAllowed, ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
-import { authorize } from '../services/context.ts';
 import { authorizeFieldWrite } from '../services/field-write.ts';
 import { LOGO_MAX_BYTES } from '../services/logo-files.ts';
 import { logoGridPdf } from '../services/logo-pdf.ts';
@@ -27,8 +26,7 @@ export function logosRouter({ db, config }: AppDeps): Router {
     '/:id/logos',
     // A caller who may not change the field is refused before the upload is read.
     async (req, _res, next) => {
-      const ctx = ctxOf(db, req);
-      authorize(ctx, 'update', 'Field');
+      const ctx = ctxAllowed(db, req, 'update', 'Field');
       const { id } = parse(idParamSchema, req.params, 'params');
       await authorizeFieldWrite(ctx, id);
       next();
@@ -43,16 +41,14 @@ export function logosRouter({ db, config }: AppDeps): Router {
   );
 
   router.patch('/:id/logos/:logoId', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    authorize(ctx, 'update', 'Field');
+    const ctx = ctxAllowed(db, req, 'update', 'Field');
     const { id, logoId } = parse(logoParamsSchema, req.params, 'params');
     await authorizeFieldWrite(ctx, id);
     res.json({ logo: await updateFieldLogo(ctx, id, logoId, parse(updateLogoSchema, req.body, 'body')) });
   });
 
   router.delete('/:id/logos/:logoId', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    authorize(ctx, 'update', 'Field');
+    const ctx = ctxAllowed(db, req, 'update', 'Field');
     const { id, logoId } = parse(logoParamsSchema, req.params, 'params');
     await authorizeFieldWrite(ctx, id);
     await removeFieldLogo(ctx, id, logoId, parse(versionQuerySchema, req.query, 'query').version, config.uploadsDir);

@@ -2,10 +2,9 @@
 import { Router } from 'express';
 import { idParamSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
+import { ctxAllowed, ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { MailOutbox } from '../mail/outbox.ts';
-import { authorize } from '../services/context.ts';
 import { listOutbox, retryMail } from '../services/mail-outbox.ts';
 
 export function mailOutboxRouter({ db, mailer, background }: AppDeps): Router {
@@ -16,9 +15,8 @@ export function mailOutboxRouter({ db, mailer, background }: AppDeps): Router {
   });
 
   router.post('/:id/retry', async (req, res) => {
-    const ctx = ctxOf(db, req);
     // Who is asking, before anything of the request is read.
-    authorize(ctx, 'update', 'MailOutbox');
+    const ctx = ctxAllowed(db, req, 'update', 'MailOutbox');
     const { id } = parse(idParamSchema, req.params, 'params');
     const mail = await retryMail(ctx, id);
     if (mailer instanceof MailOutbox) background.run('mail outbox', () => mailer.flush());

@@ -5,7 +5,7 @@ import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { partnerFieldAnswer, partnerFieldsAnswer, partnerPhotoFile } from '../services/partner.ts';
-import { photoParamsSchema } from './work-reports.ts';
+import { photoFileHandler, photoParamsSchema } from './photo-routes.ts';
 
 export function partnerRouter({ db, config }: AppDeps): Router {
   const router = Router();
@@ -20,13 +20,7 @@ export function partnerRouter({ db, config }: AppDeps): Router {
     res.json(await partnerFieldAnswer(ctx, id));
   });
 
-  router.get('/fields/:id/photos/:photoId', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    const { id, photoId } = parse(photoParamsSchema, req.params, 'params');
-    const { file, mime } = await partnerPhotoFile(ctx, id, photoId, config.uploadsDir);
-    res.setHeader('Cache-Control', 'private, max-age=86400');
-    res.type(mime).sendFile(file);
-  });
+  router.get('/fields/:id/photos/:photoId', photoFileHandler(db, photoParamsSchema, (ctx, { id, photoId }) => partnerPhotoFile(ctx, id, photoId, config.uploadsDir)));
 
   return router;
 }

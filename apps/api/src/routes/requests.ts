@@ -2,7 +2,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import {
-  appError,
   closeFieldRequestSchema,
   createFieldRequestSchema,
   declineFieldRequestSchema,
@@ -14,10 +13,10 @@ import {
   updateFieldRequestSchema,
 } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
+import { ctxAllowed, ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
-import { authorize } from '../services/context.ts';
+import { photoFileHandler, photoUploadHandlers } from './photo-routes.ts';
 import {
   addMessage,
   addRequestPhoto,
@@ -43,15 +42,13 @@ export function requestsRouter({ db, mailer, config, background }: AppDeps): Rou
   const deps: RequestDeps = { mailer, publicUrl: config.publicUrl, background };
 
   router.get('/', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    authorize(ctx, 'read', 'Request');
+    const ctx = ctxAllowed(db, req, 'read', 'Request');
     res.json({ items: await listRequests(ctx, parse(requestListQuerySchema, req.query, 'query')) });
   });
 
   router.post('/', async (req, res) => {
-    const ctx = ctxOf(db, req);
     // Crews are refused before the body is read; the field's site is checked in the service.
-    authorize(ctx, 'create', 'Request');
+    const ctx = ctxAllowed(db, req, 'create', 'Request');
     res.status(201).json({ request: await createRequest(ctx, deps, parse(createFieldRequestSchema, req.body, 'body')) });
   });
 
@@ -61,24 +58,21 @@ export function requestsRouter({ db, mailer, config, background }: AppDeps): Rou
   });
 
   router.patch('/:id', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    authorize(ctx, 'update', 'Request');
+    const ctx = ctxAllowed(db, req, 'update', 'Request');
     const { id } = parse(idParamSchema, req.params, 'params');
     res.json({ request: await updateRequest(ctx, id, parse(updateFieldRequestSchema, req.body, 'body')) });
   });
 
   router.post('/:id/messages', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    authorize(ctx, 'update', 'Request');
+    const ctx = ctxAllowed(db, req, 'update', 'Request');
     const { id } = parse(idParamSchema, req.params, 'params');
     res.status(201).json(await addMessage(ctx, deps, id, parse(requestMessageSchema, req.body, 'body')));
   });
 
   const decision = (path: string, run: (ctx: ReturnType<typeof ctxOf>, id: number, body: unknown) => Promise<unknown>) =>
     router.post(`/:id/${path}`, async (req, res) => {
-      const ctx = ctxOf(db, req);
       // Only a foreman (or an administrator) decides; a partner is refused before the body is read.
-      authorize(ctx, 'assign', 'Request');
+      const ctx = ctxAllowed(db, req, 'assign', 'Request');
       const { id } = parse(idParamSchema, req.params, 'params');
       res.json({ request: await run(ctx, id, req.body) });
     });
@@ -88,26 +82,16 @@ export function requestsRouter({ db, mailer, config, background }: AppDeps): Rou
 
   router.post(
     '/:id/photos',
-    // Refuse a caller who may not change this request before reading a (possibly large) upload.
-    async (req, _res, next) => {
-      const { id } = parse(idParamSchema, req.params, 'params');
-      await requestFor(ctxOf(db, req), id, 'update');
-      next();
-    },
-    receivePhoto,
-    async (req, res) => {
-      const { id } = parse(idParamSchema, req.params, 'params');
-      if (!req.file) throw appError('request_photo/no_file', 'Choose a photo to upload', { issues: [{ path: 'body.photo', message: 'choose a photo' }] });
-      res.status(201).json(await addRequestPhoto(ctxOf(db, req), id, req.file.buffer, config.uploadsDir));
-    },
+    ...photoUploadHandlers(db, {
+      params: idParamSchema,
+      allowed: (ctx, { id }) => requestFor(ctx, id, 'update'),
+      receive: receivePhoto,
+      code: 'request_photo',
+      store: (ctx, { id }, upload) => addRequestPhoto(ctx, id, upload.buffer, config.uploadsDir),
+    }),
   );
 
-  router.get('/:id/photos/:photoId', async (req, res) => {
-    const { id, photoId } = parse(requestPhotoParamsSchema, req.params, 'params');
-    const { file, mime } = await requestPhotoFile(ctxOf(db, req), id, photoId, config.uploadsDir);
-    res.setHeader('Cache-Control', 'private, max-age=86400');
-    res.type(mime).sendFile(file);
-  });
+  router.get('/:id/photos/:photoId', photoFileHandler(db, requestPhotoParamsSchema, (ctx, { id, photoId }) => requestPhotoFile(ctx, id, photoId, config.uploadsDir)));
 
   return router;
 }

@@ -2,9 +2,8 @@
 import { Router } from 'express';
 import { updateDepartmentSettingsSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
+import { ctxAllowed, ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { authorize } from '../services/context.ts';
 import { getDepartmentSettings, updateDepartmentSettings } from '../services/settings.ts';
 
 export function settingsRouter({ db, clock }: AppDeps): Router {
@@ -15,9 +14,8 @@ export function settingsRouter({ db, clock }: AppDeps): Router {
   });
 
   router.patch('/', async (req, res) => {
-    const ctx = ctxOf(db, req);
     // Who is asking, before the body is read.
-    authorize(ctx, 'manage', 'Settings');
+    const ctx = ctxAllowed(db, req, 'manage', 'Settings');
     res.json(await updateDepartmentSettings(ctx, clock, parse(updateDepartmentSettingsSchema, req.body, 'body')));
   });
 

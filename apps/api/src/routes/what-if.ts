@@ -2,43 +2,37 @@
 import { Router } from 'express';
 import { idParamSchema, whatIfCompareSchema, whatIfScenarioListSchema, whatIfScenarioSchema, whatIfSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
+import { ctxAllowed } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
-import { authorize } from '../services/context.ts';
 import { compareScenarios, createScenario, deleteScenario, listScenarios, previewWhatIf } from '../services/what-if.ts';
 
 export function whatIfRouter({ db }: AppDeps): Router {
   const router = Router();
 
   router.post('/', async (req, res) => {
-    const ctx = ctxOf(db, req);
     // Who is asking, before the body is read; the scenario's district and fields are checked with it.
-    authorize(ctx, 'read', 'Budget');
+    const ctx = ctxAllowed(db, req, 'read', 'Budget');
     res.json(await previewWhatIf(ctx, parse(whatIfSchema, req.body, 'body')));
   });
 
   router.get('/scenarios', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    authorize(ctx, 'read', 'WhatIfScenario');
+    const ctx = ctxAllowed(db, req, 'read', 'WhatIfScenario');
     res.json(await listScenarios(ctx, parse(whatIfScenarioListSchema, req.query, 'query')));
   });
 
   router.get('/scenarios/compare', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    authorize(ctx, 'read', 'WhatIfScenario');
+    const ctx = ctxAllowed(db, req, 'read', 'WhatIfScenario');
     res.json(await compareScenarios(ctx, parse(whatIfCompareSchema, req.query, 'query').ids));
   });
 
   router.post('/scenarios', async (req, res) => {
-    const ctx = ctxOf(db, req);
     // Roles that save no what-if are refused before the body is read; the district in it is checked again.
-    authorize(ctx, 'create', 'WhatIfScenario');
+    const ctx = ctxAllowed(db, req, 'create', 'WhatIfScenario');
     res.status(201).json({ scenario: await createScenario(ctx, parse(whatIfScenarioSchema, req.body, 'body')) });
   });
 
   router.delete('/scenarios/:id', async (req, res) => {
-    const ctx = ctxOf(db, req);
-    authorize(ctx, 'read', 'WhatIfScenario');
+    const ctx = ctxAllowed(db, req, 'read', 'WhatIfScenario');
     await deleteScenario(ctx, parse(idParamSchema, req.params, 'params').id);
     res.status(204).end();
   });

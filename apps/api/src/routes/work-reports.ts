@@ -1,11 +1,11 @@
 /** One work order as a crew works it: read it, report on it, add and show its photos. */
 import { Router } from 'express';
-import { z } from 'zod';
-import { applicationSchema, fieldCheckSchema, idParamSchema, idSchema, reopenSchema, workReportSchema, appError } from '@swardwise/domain';
+import { applicationSchema, fieldCheckSchema, idParamSchema, reopenSchema, workReportSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
+import { photoFileHandler, photoParamsSchema, photoUploadHandlers } from './photo-routes.ts';
 import { addWorkPhoto, PHOTO_MAX_BYTES, photoFile } from '../services/work-photos.ts';
 import { logFieldCheck } from '../services/field-checks.ts';
 import { recordApplication } from '../services/applications.ts';
@@ -14,11 +14,6 @@ import { finishRequestsOf, reopenRequestsOf } from '../services/requests.ts';
 
 // The photo and the phone's reference for it.
 const receivePhoto = receiveUpload({ field: 'photo', maxFileBytes: PHOTO_MAX_BYTES, maxFields: 1, code: 'work_photo', what: 'The photo' });
-
-export const photoParamsSchema = z.object({ id: idSchema, photoId: idSchema });
-export const photoBodySchema = z.object({
-  clientRef: z.string().trim().min(8).max(64).regex(/^[A-Za-z0-9_-]+$/, 'a client reference uses letters, digits, - and _').optional(),
-});
 
 export function workReportsRouter({ db, config, mailer, background }: AppDeps): Router {
   const router = Router();
@@ -65,31 +60,16 @@ export function workReportsRouter({ db, config, mailer, background }: AppDeps): 
 
   router.post(
     '/:id/photos',
-    // Refuse a caller who may not log this order before reading a (possibly large) upload.
-    async (req, _res, next) => {
-      const { id } = parse(idParamSchema, req.params, 'params');
-      await orderFor(ctxOf(db, req), id, 'log');
-      next();
-    },
-    receivePhoto,
-    async (req, res) => {
-      const ctx = ctxOf(db, req);
-      const { id } = parse(idParamSchema, req.params, 'params');
-      const { clientRef } = parse(photoBodySchema, req.body, 'body');
-      if (!req.file) {
-        throw appError('work_photo/no_file', 'Choose a photo to upload', { issues: [{ path: 'body.photo', message: 'choose a photo' }] });
-      }
-      const answer = await addWorkPhoto(ctx, id, { buffer: req.file.buffer, clientRef }, config.uploadsDir);
-      res.status(answer.duplicate ? 200 : 201).json(answer);
-    },
+    ...photoUploadHandlers(db, {
+      params: idParamSchema,
+      allowed: (ctx, { id }) => orderFor(ctx, id, 'log'),
+      receive: receivePhoto,
+      code: 'work_photo',
+      store: (ctx, { id }, upload) => addWorkPhoto(ctx, id, upload, config.uploadsDir),
+    }),
   );
 
-  router.get('/:id/photos/:photoId', async (req, res) => {
-    const { id, photoId } = parse(photoParamsSchema, req.params, 'params');
-    const { file, mime } = await photoFile(ctxOf(db, req), id, photoId, config.uploadsDir);
-    res.setHeader('Cache-Control', 'private, max-age=86400');
-    res.type(mime).sendFile(file);
-  });
+  router.get('/:id/photos/:photoId', photoFileHandler(db, photoParamsSchema, (ctx, { id, photoId }) => photoFile(ctx, id, photoId, config.uploadsDir)));
 
   return router;
 }

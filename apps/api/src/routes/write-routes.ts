@@ -3,7 +3,7 @@ import type { Request, Router } from 'express';
 import { z } from 'zod';
 import { idParamSchema, versionSchema, type NotFoundResource, type ScopedRow, type SubjectName } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
-import { ctxOf } from '../http/auth.ts';
+import { ctxAllowed, ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { authorize, type Ctx } from '../services/context.ts';
 import { authorizeFieldWrite } from '../services/field-write.ts';
@@ -94,10 +94,9 @@ export function fieldSettingRoutes<B extends z.ZodType>(
     res.json({ [key]: await ops.get(ctxOf(db, req), id) });
   });
   router.patch(`/:id/${path}`, async (req, res) => {
-    const ctx = ctxOf(db, req);
     // A crew lead or a partner is refused before anything is read; a foreman of another
     // district once the field's scope is known, still before the body.
-    authorize(ctx, 'update', 'Field');
+    const ctx = ctxAllowed(db, req, 'update', 'Field');
     const { id } = parse(idParamSchema, req.params, 'params');
     await authorizeFieldWrite(ctx, id);
     res.json({ [key]: await ops.set(ctx, id, parse(ops.body, req.body, 'body')) });

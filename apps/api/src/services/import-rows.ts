@@ -108,6 +108,31 @@ function summarize(rows: ImportRow[]): ImportSummary {
   };
 }
 
+/** What a planner makes of one row: its action, the write it asks for, the cells the preview shows. */
+interface RowPlan {
+  action: ImportRow['action'];
+  write?: PlannedWrite | undefined;
+  data?: ImportRow['data'];
+}
+
+/**
+ * The plan of a file, row by row: `planRow` checks a row (a cell the reader could not read
+ * is already an error on it). A row with any error writes nothing, so a commit writes only
+ * rows the preview showed clean.
+ */
+function planRows(raw: RawRow[], planRow: (raw: RawRow, check: RowCheck) => RowPlan): Plan {
+  const rows: ImportRow[] = [];
+  const writes: PlannedWrite[] = [];
+  for (const r of raw) {
+    const check = new RowCheck();
+    if (r.readError) check.add(r.readError.column, r.readError.message);
+    const { action, write, data = r.data } = planRow(r, check);
+    if (write && !check.errors.length) writes.push(write);
+    rows.push({ row: r.row, data, action, errors: check.errors });
+  }
+  return { rows, writes, summary: summarize(rows) };
+}
+
 async function scopedSites(ctx: Ctx) {
   return ctx.db.select().from(sites).where(siteScope(ctx.actor));
 }
@@ -139,12 +164,8 @@ async function planSites(ctx: Ctx, raw: RawRow[]): Promise<Plan> {
   };
   const siteNames = byName(await scopedSites(ctx));
   const seen = new Set<string>();
-  const rows: ImportRow[] = [];
-  const writes: PlannedWrite[] = [];
 
-  for (const { row, data, readError } of raw) {
-    const check = new RowCheck();
-    if (readError) check.add(readError.column, readError.message);
+  return planRows(raw, ({ data }, check) => {
     const name = text(data.site) ?? '';
     const key = name.toLowerCase();
     if (key && seen.has(key)) check.add('site', `“${name}” appears more than once in this file`);
@@ -168,11 +189,12 @@ async function planSites(ctx: Ctx, raw: RawRow[]): Promise<Plan> {
       notes: text(data.notes),
     };
     const matches = key ? (siteNames.get(key) ?? []) : [];
-    let action: ImportRow['action'] = null;
 
     if (matches.length > 1) {
       check.add('site', `${matches.length} sites in your districts are called “${name}”; rename one before importing`);
-    } else if (matches.length === 1) {
+      return { action: null };
+    }
+    if (matches.length === 1) {
       const existing = matches[0]!;
       if (districtId !== undefined && districtId !== existing.districtId) {
         check.add('district', 'this site exists in another district; moving a site is done on its page, not by import');
@@ -184,22 +206,16 @@ async function planSites(ctx: Ctx, raw: RawRow[]): Promise<Plan> {
       const input = { version: existing.version, ...defined(rest) };
       const parsed = updateSiteSchema.safeParse(input);
       if (!parsed.success) check.errors.push(...zodErrors(parsed.error, SITE_COLUMNS, check.bad));
-      else if (!unchanged(existing, parsed.data)) {
-        action = 'update';
-        if (!check.errors.length) writes.push({ op: 'updateSite', id: existing.id, input: parsed.data });
-      }
-    } else {
-      const parsed = createSiteSchema.safeParse(defined(values));
-      if (!parsed.success) check.errors.push(...zodErrors(parsed.error, SITE_COLUMNS, check.bad));
-      if (districtId !== undefined && !can(ctx, 'create', 'Site', { districtId })) {
-        check.add('district', `your role may not add sites in district “${districtCell}”`);
-      }
-      action = 'create';
-      if (parsed.success && !check.errors.length) writes.push({ op: 'createSite', input: parsed.data });
+      else if (!unchanged(existing, parsed.data)) return { action: 'update', write: { op: 'updateSite', id: existing.id, input: parsed.data } };
+      return { action: null };
     }
-    rows.push({ row, data, action, errors: check.errors });
-  }
-  return { rows, writes, summary: summarize(rows) };
+    const parsed = createSiteSchema.safeParse(defined(values));
+    if (!parsed.success) check.errors.push(...zodErrors(parsed.error, SITE_COLUMNS, check.bad));
+    if (districtId !== undefined && !can(ctx, 'create', 'Site', { districtId })) {
+      check.add('district', `your role may not add sites in district “${districtCell}”`);
+    }
+    return { action: 'create', write: parsed.success ? { op: 'createSite', input: parsed.data } : undefined };
+  });
 }
 
 const FIELD_COLUMNS: Record<string, string> = {
@@ -246,12 +262,8 @@ async function planFields(ctx: Ctx, raw: RawRow[]): Promise<Plan> {
     fieldAt.set(key, [...(fieldAt.get(key) ?? []), f]);
   }
   const seen = new Set<string>();
-  const rows: ImportRow[] = [];
-  const writes: PlannedWrite[] = [];
 
-  for (const { row, data, readError } of raw) {
-    const check = new RowCheck();
-    if (readError) check.add(readError.column, readError.message);
+  return planRows(raw, ({ data }, check) => {
     const siteCell = text(data.site);
     const name = text(data.field);
     let site: { id: number; districtId: number } | undefined;
@@ -276,7 +288,6 @@ async function planFields(ctx: Ctx, raw: RawRow[]): Promise<Plan> {
       weeklyUseHours: check.number(data, 'weekly_use_hours'),
       geometry: geometryOf(data.geometry, check),
     };
-    let action: ImportRow['action'] = null;
     if (site && name) {
       const key = `${site.id}|${name.toLowerCase()}`;
       if (seen.has(key)) check.add('field', `“${name}” at “${siteCell}” appears more than once in this file`);
@@ -293,33 +304,23 @@ async function planFields(ctx: Ctx, raw: RawRow[]): Promise<Plan> {
         void _n;
         const parsed = updateFieldSchema.safeParse({ version: existing.field.version, ...defined(rest) });
         if (!parsed.success) check.errors.push(...zodErrors(parsed.error, FIELD_COLUMNS, check.bad));
-        else if (!unchanged(existing.field, parsed.data)) {
-          action = 'update';
-          if (!check.errors.length) writes.push({ op: 'updateField', id: existing.field.id, input: parsed.data });
-        }
-        rows.push({ row, data, action, errors: check.errors });
-        continue;
+        else if (!unchanged(existing.field, parsed.data)) return { action: 'update', write: { op: 'updateField', id: existing.field.id, input: parsed.data } };
+        return { action: null };
       }
     }
-    action = 'create';
     if (values.geometry === undefined && !check.bad.has('geometry')) check.add('geometry', 'a new field needs its outline: a GeoJSON Polygon');
     const parsed = createFieldSchema.safeParse(defined(values));
     if (!parsed.success) check.errors.push(...zodErrors(parsed.error, FIELD_COLUMNS, check.bad));
     if (site && !can(ctx, 'create', 'Field', { siteId: site.id, districtId: site.districtId })) check.add('site', 'your role may not add fields at this site');
-    if (parsed.success && !check.errors.length) writes.push({ op: 'createField', input: parsed.data });
-    rows.push({ row, data, action, errors: check.errors });
-  }
-  return { rows, writes, summary: summarize(rows) };
+    return { action: 'create', write: parsed.success ? { op: 'createField', input: parsed.data } : undefined };
+  });
 }
 
 async function planOutlines(ctx: Ctx, raw: RawRow[]): Promise<Plan> {
   const existingFields = await scopedFields(ctx);
   const seen = new Set<number>();
-  const rows: ImportRow[] = [];
-  const writes: PlannedWrite[] = [];
 
-  for (const { row, data } of raw) {
-    const check = new RowCheck();
+  return planRows(raw, ({ data }, check) => {
     const props = outlinePropertiesSchema.safeParse(defined({ fieldId: data.fieldId ?? undefined, field: data.field ?? undefined, site: data.site ?? undefined }));
     let target: (typeof existingFields)[number] | undefined;
     if (!props.success) {
@@ -341,19 +342,19 @@ async function planOutlines(ctx: Ctx, raw: RawRow[]): Promise<Plan> {
       check.add('geometry', geometryType && geometryType !== 'Polygon' ? `the outline must be a Polygon, not ${String(geometryType)}` : (geometry.error.issues[0]?.message ?? 'not a GeoJSON Polygon'));
     }
     let action: ImportRow['action'] = null;
+    let write: PlannedWrite | undefined;
     if (target) {
       if (seen.has(target.field.id)) check.add('field', 'this field has another outline earlier in the file');
       seen.add(target.field.id);
       if (!can(ctx, 'update', 'Field', { ...target.field, districtId: target.districtId })) check.add('field', 'your role may not change this field');
       if (geometry.success && JSON.stringify(target.field.geometry) !== JSON.stringify(geometry.data)) {
         action = 'update';
-        if (!check.errors.length) writes.push({ op: 'updateField', id: target.field.id, input: { version: target.field.version, geometry: geometry.data as Polygon } });
+        write = { op: 'updateField', id: target.field.id, input: { version: target.field.version, geometry: geometry.data as Polygon } };
       }
     }
     // Keep the names the preview shows; the outline itself stays for the commit.
-    rows.push({ row, data: { ...data, fieldId: target?.field.id ?? data.fieldId, field: target?.field.name ?? data.field, site: target?.siteName ?? data.site }, action, errors: check.errors });
-  }
-  return { rows, writes, summary: summarize(rows) };
+    return { action, write, data: { ...data, fieldId: target?.field.id ?? data.fieldId, field: target?.field.name ?? data.field, site: target?.siteName ?? data.site } };
+  });
 }
 
 export function planImport(ctx: Ctx, kind: ImportKind, raw: RawRow[]): Promise<Plan> {

@@ -231,6 +231,11 @@ export async function getOverview(ctx: Ctx, q: OverviewQuery): Promise<Overview>
   return { season, seasonFrom, seasonTo, weekFrom, weekTo, asOf: today, districtId: list.length === 1 && (q.districtId !== undefined || ctx.actor.role === 'foreman') ? list[0]!.id : null, total, districts: districtsOut };
 }
 
+/** Adds each count of `part` into the same count of `into`. */
+function addCounts<T extends { [K in keyof T]: number }>(into: T, part: T): void {
+  for (const k of Object.keys(into) as (keyof T)[]) (into[k] as number) += part[k];
+}
+
 /** The department: the sum of its districts (the score a mean over every scored field). */
 function sumOf(parts: Acc[], targets: Record<Level, number>): Acc {
   const t = emptyAcc(null, 'Department', targets);
@@ -245,22 +250,10 @@ function sumOf(parts: Acc[], targets: Record<Level, number>): Acc {
       t.scoreSum[lv.level] += scoreSum[lv.level];
     }
     for (const span of ['week', 'season'] as const) {
-      for (const k of Object.keys(b.labour[span]) as (keyof OverviewLabour)[]) b.labour[span][k] += p.labour[span][k];
-      for (const k of Object.keys(b.mowings[span]) as (keyof OverviewMowings)[]) b.mowings[span][k] += p.mowings[span][k];
+      addCounts(b.labour[span], p.labour[span]);
+      addCounts(b.mowings[span], p.mowings[span]);
     }
-    b.nitrogen.appliedKg += p.nitrogen.appliedKg;
-    b.nitrogen.planKg += p.nitrogen.planKg;
-    b.water.budgetL += p.water.budgetL;
-    b.water.usedL += p.water.usedL;
-    b.paint.plannedL += p.paint.plannedL;
-    b.paint.usedL += p.paint.usedL;
-    b.requests.open += p.requests.open;
-    b.requests.waiting += p.requests.waiting;
-    b.requests.scheduled += p.requests.scheduled;
-    b.requests.closedInSeason += p.requests.closedInSeason;
-    b.closures.closedNow += p.closures.closedNow;
-    b.closures.restrictedNow += p.closures.restrictedNow;
-    b.closures.inSeason += p.closures.inSeason;
+    for (const group of ['nitrogen', 'water', 'paint', 'requests', 'closures'] as const) addCounts<Record<string, number>>(b[group], p[group]);
   }
   return t;
 }

@@ -8,7 +8,7 @@
  */
 import { addDaysIso, isoToDayNumber } from './dates.ts';
 import { fail } from './check.ts';
-import { baseballTemplate, coatPlan, fieldHockeyTemplate, footballTemplate, lacrosseTemplate, LINE_LAYOUTS, smallSidedSoccerTemplate, soccerTemplate, softballTemplate, type LineLayout, type LineSegment, type LineSettings, type LineTemplate, type PaintSettings, type Point } from './lines.ts';
+import { coatPlan, LINE_LAYOUTS, type LineLayout, type LineSegment, type LineSettings, type LineTemplate, type PaintSettings, type Point } from './lines.ts';
 import { ftToM } from './units.ts';
 
 /** One dimension a layout may be given, with its allowed range and where the range comes from. */
@@ -89,25 +89,7 @@ export function layoutTemplate(layout: LineLayout, dims: { lengthM?: number | nu
   };
   const L = value('lengthM');
   const W = value('widthM');
-  const mToFt = (m: number) => m / ftToM(1);
-  switch (layout) {
-    case 'soccer_full':
-      return soccerTemplate(L, W);
-    case 'soccer_9v9':
-      return smallSidedSoccerTemplate('9v9', 0.1, { lengthM: L, widthM: W });
-    case 'soccer_7v7':
-      return smallSidedSoccerTemplate('7v7', 0.1, { lengthM: L, widthM: W });
-    case 'football':
-      return footballTemplate();
-    case 'lacrosse':
-      return lacrosseTemplate();
-    case 'field_hockey':
-      return fieldHockeyTemplate();
-    case 'baseball':
-      return baseballTemplate(mToFt(L));
-    case 'softball':
-      return softballTemplate(mToFt(L));
-  }
+  return LINE_LAYOUTS[layout].template({ lengthM: L, widthM: W });
 }
 
 /** One layout of a plan as saved: the template, its size, colour and place on the field. */

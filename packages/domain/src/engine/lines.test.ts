@@ -41,6 +41,16 @@ describe('lines', () => {
     expect(l.defaultTemplateFor('softball')?.id).toBe('softball');
   });
 
+  test('should build each layout from the one table, at its own size or at the size given', () => {
+    expect(l.defaultTemplateFor('soccer')).toEqual(l.soccerTemplate());
+    expect(l.defaultTemplateFor('football')).toEqual(l.footballTemplate());
+    expect(l.LINE_LAYOUTS.soccer_full.template({ lengthM: 100, widthM: 64 })).toEqual(l.soccerTemplate(100, 64));
+    expect(l.LINE_LAYOUTS.soccer_7v7.template({ lengthM: 60, widthM: 40 }).id).toBe('soccer_7v7_60x40');
+    // A diamond's length is its foul line, given in metres and built in feet.
+    expect(l.LINE_LAYOUTS.baseball.template({ lengthM: 100, widthM: 0 })).toEqual(l.baseballTemplate(100 / 0.3048));
+    expect(l.LINE_LAYOUTS.softball.template().id).toBe('softball');
+  });
+
   // The coverage is of finished line (every pass of the coat): mixed paint no longer doubles
   // with two passes (100 m² at 2 m²/L was 100 L for two passes; it is 50 L).
   test('should derive paint concentrate and water from coverage of finished line and dilution', () => {

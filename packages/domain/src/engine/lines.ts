@@ -6,7 +6,7 @@
  */
 import type { Sport } from '../vocabulary.ts';
 import { fail, requireNonNegative, requirePositive, requireRange } from './check.ts';
-import { ftToM } from './units.ts';
+import { ftToM, mToFt } from './units.ts';
 
 export type Point = readonly [number, number];
 
@@ -392,24 +392,13 @@ export function softballTemplate(foulLineFt = 200): LineTemplate {
   return diamond({ id: 'softball', sport: 'softball', name: 'Softball', source: 'from memory', foulLineFt, boxWFt: 3, boxLFt: 7, boxGapFt: 0.5 + 17 / 24, runningLaneFt: 30, lineWidthIn: 3 });
 }
 
-/** The default template for a sport, or null for sports without lines (lawn, multi-use). */
+/**
+ * The default template for a sport (its first layout in `LINE_LAYOUTS` at the template's own
+ * size), or null for sports without lines (lawn, multi-use).
+ */
 export function defaultTemplateFor(sport: Sport): LineTemplate | null {
-  switch (sport) {
-    case 'soccer':
-      return soccerTemplate();
-    case 'football':
-      return footballTemplate();
-    case 'lacrosse':
-      return lacrosseTemplate();
-    case 'field_hockey':
-      return fieldHockeyTemplate();
-    case 'baseball':
-      return baseballTemplate();
-    case 'softball':
-      return softballTemplate();
-    default:
-      return null;
-  }
+  const layout = LINE_LAYOUT_IDS.find((id) => LINE_LAYOUTS[id].sport === sport);
+  return layout ? LINE_LAYOUTS[layout].template() : null;
 }
 
 /**
@@ -561,20 +550,28 @@ export function linePlan(template: LineTemplate, s: LineSettings, season: { days
   };
 }
 
+/** A layout's size, metres: touchline / sideline (a diamond's foul line) and goal / end line. */
+export interface LayoutSize {
+  lengthM: number;
+  widthM: number;
+}
+
 /**
  * The layouts a partner may ask lines for, each one of the templates above (dimensions and
- * sources as there). `sport` is the sport the layout is played on.
+ * sources as there). `sport` is the sport the layout is played on; its first layout here is
+ * the sport's default. `template(size)` builds the layout at a size in metres (a diamond's
+ * length is its foul line; fixed-size layouts ignore it), or at the template's own size.
  */
 export const LINE_LAYOUTS = {
-  soccer_full: { sport: 'soccer', name: 'Soccer, full size (105 × 68 m)', template: () => soccerTemplate() },
-  soccer_9v9: { sport: 'soccer', name: 'Soccer 9v9', template: () => smallSidedSoccerTemplate('9v9') },
-  soccer_7v7: { sport: 'soccer', name: 'Soccer 7v7', template: () => smallSidedSoccerTemplate('7v7') },
+  soccer_full: { sport: 'soccer', name: 'Soccer, full size (105 × 68 m)', template: (size?: LayoutSize) => soccerTemplate(size?.lengthM, size?.widthM) },
+  soccer_9v9: { sport: 'soccer', name: 'Soccer 9v9', template: (size?: LayoutSize) => smallSidedSoccerTemplate('9v9', 0.1, size) },
+  soccer_7v7: { sport: 'soccer', name: 'Soccer 7v7', template: (size?: LayoutSize) => smallSidedSoccerTemplate('7v7', 0.1, size) },
   football: { sport: 'football', name: 'American football (NFHS)', template: () => footballTemplate() },
   lacrosse: { sport: 'lacrosse', name: "Men's lacrosse", template: () => lacrosseTemplate() },
   field_hockey: { sport: 'field_hockey', name: 'Field hockey (FIH)', template: () => fieldHockeyTemplate() },
-  baseball: { sport: 'baseball', name: 'Baseball', template: () => baseballTemplate() },
-  softball: { sport: 'softball', name: 'Softball', template: () => softballTemplate() },
-} as const satisfies Record<string, { sport: Sport; name: string; template: () => LineTemplate }>;
+  baseball: { sport: 'baseball', name: 'Baseball', template: (size?: LayoutSize) => baseballTemplate(size && mToFt(size.lengthM)) },
+  softball: { sport: 'softball', name: 'Softball', template: (size?: LayoutSize) => softballTemplate(size && mToFt(size.lengthM)) },
+} as const satisfies Record<string, { sport: Sport; name: string; template: (size?: LayoutSize) => LineTemplate }>;
 export type LineLayout = keyof typeof LINE_LAYOUTS;
 export const LINE_LAYOUT_IDS = Object.keys(LINE_LAYOUTS) as LineLayout[];
 
