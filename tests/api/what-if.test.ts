@@ -5,7 +5,7 @@
  * sees or touches another district's.
  */
 import { eq } from 'drizzle-orm';
-import { describe, expect, test } from 'vitest';
+import { describe, expect, test, vi } from 'vitest';
 import type { BudgetAnswer, WhatIfAnswer, WhatIfCompareAnswer, WhatIfScenarioList, WhatIfScenarioRow } from '@swardwise/domain';
 import { auditLog, fields } from '../../apps/api/src/db/schema/index.ts';
 import { useTestApi } from '../support/app.ts';
@@ -172,5 +172,42 @@ describe('saved what-if scenarios', () => {
     for (const q of ['ids=1', 'ids=1,2,3,4,5', 'ids=a,b', 'ids=2,2', '', 'ids=1,2&x=1']) expect((await head.get(`/api/what-if/scenarios/compare?${q}`)).status, q).toBe(400);
     expect((await head.get('/api/what-if/scenarios/compare?ids=987654,987655')).status).toBe(404);
     expect((await head.delete('/api/what-if/scenarios/abc')).status).toBe(400);
+  });
+});
+
+describe('what-if season basis', () => {
+  test('should work out the scope’s season once for many previews, and again after a field it reads is written', async () => {
+    const head = await api.signIn('head');
+    const d = api.fixture.districts.north;
+    const lawn = api.fixture.fields.northLawn;
+    const { db } = api.database;
+    const selects = vi.spyOn(db, 'select');
+    const preview = async (level: number) => {
+      selects.mockClear();
+      const res = await head.post('/api/what-if').send({ season: SEASON, districtId: d, moves: [{ fieldId: lawn, level }] });
+      expect(res.status).toBe(200);
+      return { reads: selects.mock.calls.length, result: (res.body as WhatIfAnswer).result };
+    };
+    try {
+      // A write first, so nothing an earlier test worked out is left.
+      const [row] = await db.select().from(fields).where(eq(fields.id, lawn));
+      await head.patch(`/api/fields/${lawn}`).send({ version: row!.version, name: 'Great Lawn' }).expect(200);
+      const first = await preview(3);
+      const second = await preview(2);
+      // The fields, Standards, stations and weather are not read again for the second preview.
+      expect(second.reads).toBeLessThan(first.reads);
+      expect(second.result.before).toEqual(first.result.before);
+      expect(second.result.fieldsTouched).toBe(1);
+
+      // The lawn really moved to level 2: the next preview starts from there.
+      const [now] = await db.select().from(fields).where(eq(fields.id, lawn));
+      await head.patch(`/api/fields/${lawn}`).send({ version: now!.version, maintenanceLevel: 2 }).expect(200);
+      const third = await preview(2);
+      expect(third.reads).toBeGreaterThan(second.reads);
+      expect(third.result.fieldsTouched).toBe(0);
+      expect(third.result.before).toEqual(second.result.after);
+    } finally {
+      selects.mockRestore();
+    }
   });
 });

@@ -2,11 +2,16 @@
  * Compare sites benchmark on the big invented city (1,000 more sites, 3,000 fields, three
  * seasons, ~1.5 M work orders; tests/bench/big-city.ts): `GET /api/compare/sites` timed over
  * loopback for the head (every district) and a foreman (his district), for the season, the
- * last 12 months and the CSV. Target: p95 under 200 ms for the head's season table.
+ * last 12 months and the CSV, each twice: read again with nothing written (the cached answer),
+ * and the first answer after a write (a done work order of this season logged with other
+ * hours before each request, outside the time, so every answer is worked out again).
+ * Target: p95 under 200 ms for the head's season table, both ways.
  * Run: node --import tsx tests/bench/compare.ts (builds the big city on first use).
  */
 import { performance } from 'node:perf_hooks';
-import { openBigCity } from './big-city.ts';
+import { and, desc, eq, gte } from 'drizzle-orm';
+import { workOrders } from '../../apps/api/src/db/schema/index.ts';
+import { BIG_CITY, openBigCity } from './big-city.ts';
 import { fmt, listenSignedIn, pct } from './support.ts';
 
 const RUNS = Number(process.env.COMPARE_RUNS ?? 30);
@@ -15,11 +20,25 @@ const TARGET_P95_MS = 200;
 const { database, db, summary } = await openBigCity();
 console.log(`big city: ${summary.sites} sites, ${summary.fields} fields, ${summary.workOrders} work orders`);
 
-async function timed(base: string, cookie: string, path: string): Promise<{ times: number[]; rows: number }> {
+// The order logged again before each answer timed "after a write": a done one of this season.
+const [order] = await db
+  .select({ id: workOrders.id, hours: workOrders.actualHours })
+  .from(workOrders)
+  .where(and(eq(workOrders.status, 'done'), gte(workOrders.plannedDate, `${BIG_CITY.today.slice(0, 4)}-01-01`)))
+  .orderBy(desc(workOrders.id))
+  .limit(1);
+let logged = 0;
+async function logWork(): Promise<void> {
+  logged++;
+  await db.update(workOrders).set({ actualHours: (order!.hours ?? 1) + (logged % 2) * 0.25 }).where(eq(workOrders.id, order!.id));
+}
+
+async function timed(base: string, cookie: string, path: string, afterWrite: boolean): Promise<{ times: number[]; rows: number }> {
   const times: number[] = [];
   let rows = 0;
   // One warm-up answer (plans, caches of the database), then the timed ones.
   for (let i = 0; i <= RUNS; i++) {
+    if (afterWrite) await logWork();
     const start = performance.now();
     const res = await fetch(`${base}${path}`, { headers: { cookie } });
     const text = await res.text();
@@ -34,13 +53,17 @@ async function timed(base: string, cookie: string, path: string): Promise<{ time
 let failed = false;
 for (const role of ['head', 'foreman'] as const) {
   const { server, base, cookie } = await listenSignedIn(db, role);
-  for (const path of ['/api/compare/sites', '/api/compare/sites?period=last12', '/api/compare/sites.csv']) {
-    const { times, rows } = await timed(base, cookie, path);
-    console.log(`${role.padEnd(7)} ${path.padEnd(36)} ${String(rows).padStart(5)} sites  ${fmt(times)}`);
-    if (role === 'head' && path === '/api/compare/sites' && pct(times, 95) >= TARGET_P95_MS) failed = true;
+  for (const afterWrite of [false, true]) {
+    for (const path of ['/api/compare/sites', '/api/compare/sites?period=last12', '/api/compare/sites.csv']) {
+      const { times, rows } = await timed(base, cookie, path, afterWrite);
+      console.log(`${role.padEnd(7)} ${afterWrite ? 'after a write' : 'read again   '} ${path.padEnd(36)} ${String(rows).padStart(5)} sites  ${fmt(times)} (${RUNS} runs)`);
+      if (role === 'head' && path === '/api/compare/sites' && pct(times, 95) >= TARGET_P95_MS) failed = true;
+    }
   }
   server.close();
 }
+// The order as it was.
+await db.update(workOrders).set({ actualHours: order!.hours }).where(eq(workOrders.id, order!.id));
 await database.close();
-console.log(failed ? `FAIL: the head's season table is over ${TARGET_P95_MS} ms at p95` : `ok: the head's season table answers under ${TARGET_P95_MS} ms at p95`);
+console.log(failed ? `FAIL: the head's season table is over ${TARGET_P95_MS} ms at p95 (read again or after a write)` : `ok: the head's season table answers under ${TARGET_P95_MS} ms at p95, read again and after a write`);
 process.exit(failed ? 1 : 0);

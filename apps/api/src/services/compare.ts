@@ -78,6 +78,9 @@ type SiteFacts = { site_id: number; site_name: string; district_id: number; dist
 type CrewWork = { site_id: number; crew_id: number | null; orders: number; hours: number; kg_n: number; water_m3: number; paint_l: number; colourant_l: number };
 type MachineWork = { site_id: number; kind: EquipmentKind; hours: number };
 
+/** A query's rows as one JSON array in text (in `order`, else as they come). */
+const jsonRows = (query: SQL, order: SQL = sql``): SQL => sql`(select coalesce(json_agg(q ${order}), '[]'::json)::text from (${query}) q)`;
+
 const perAcre = (value: number, acres: number): number | null => (acres > 0 ? value / acres : null);
 
 /**
@@ -173,41 +176,55 @@ async function buildComparison(ctx: Ctx, districtId: number | null, period: Comp
   const inDistrict = (col: SQL): SQL => (districtId === null ? sql`true` : sql`${col} = ${districtId}`);
 
   const work = workOver(period.from, period.to, inDistrict);
-  const [{ costs }, facts, crewWork, machineWork, seed, scores] = await Promise.all([
-    readCosts(ctx.db),
-    ctx.db.execute<SiteFacts>(sql`
+  const factsQuery = sql`
       select s.id as site_id, s.name as site_name, d.id as district_id, d.name as district_name,
         count(f.id)::int as field_count, coalesce(sum(f.area_m2), 0)::float8 as area_m2,
         coalesce((select f2.maintenance_level from ${fields} f2 where f2.site_id = s.id
           group by f2.maintenance_level order by sum(f2.area_m2) desc, f2.maintenance_level desc limit 1), 4)::int as level
       from ${sites} s join ${districts} d on d.id = s.district_id left join ${fields} f on f.site_id = s.id
       where ${inDistrict(sql`s.district_id`)}
-      group by s.id, d.id order by s.name, s.id`),
-    ctx.db.execute<CrewWork>(work.crews),
-    ctx.db.execute<MachineWork>(work.machines),
-    ctx.db.execute<{ site_id: number; seed_kg: number }>(sql`
+      group by s.id, d.id`;
+  const seedQuery = sql`
       select a.site_id, sum(${SEED_KG})::float8 as seed_kg from ${applications} a
       where a.task = 'overseed' and a.applied_on between ${period.from} and ${period.to} and ${inDistrict(sql`a.district_id`)}
-      group by a.site_id`),
-    // Each field's latest check in the period: the latest of all (kept by a trigger) when it
-    // falls in the period, one index probe for a field checked again after the period ends.
-    ctx.db.execute<{ site_id: number; score: number; checked: number }>(sql`
+      group by a.site_id`;
+  // Each field's latest check in the period: the latest of all (kept by a trigger) when it
+  // falls in the period, one index probe for a field checked again after the period ends.
+  const scoresQuery = sql`
       select f.site_id, (sum(coalesce(p.score, r.score) * f.area_m2) / nullif(sum(f.area_m2), 0))::float8 as score, count(*)::int as checked
       from rollup_field_latest r join ${fields} f on f.id = r.field_id join ${sites} s on s.id = f.site_id
       left join lateral (select c.score from ${fieldChecks} c where r.checked_on > ${period.to} and c.field_id = r.field_id and c.checked_on between ${period.from} and ${period.to}
         order by c.checked_on desc, c.id desc limit 1) p on true
       where r.checked_on >= ${period.from} and (r.checked_on <= ${period.to} or p.score is not null) and ${inDistrict(sql`s.district_id`)}
-      group by f.site_id`),
+      group by f.site_id`;
+  // One statement answering five JSON arrays: PGlite hands thousands of rows to the API a
+  // row and a column at a time (most of a rebuild's time on a big city), one text value at
+  // once. float8 prints the same shortest exact digits in JSON as in a row, so the numbers
+  // are the same.
+  const [{ costs }, res] = await Promise.all([
+    readCosts(ctx.db),
+    ctx.db.execute<{ facts: string; crews: string; machines: string; seed: string; scores: string }>(sql`select
+      ${jsonRows(factsQuery, sql`order by q.site_name, q.site_id`)} as facts,
+      ${jsonRows(work.crews)} as crews,
+      ${jsonRows(work.machines)} as machines,
+      ${jsonRows(seedQuery)} as seed,
+      ${jsonRows(scoresQuery)} as scores`),
   ]);
+  const answer = res.rows[0]!;
+  const facts = JSON.parse(answer.facts) as SiteFacts[];
+  const crewWork = JSON.parse(answer.crews) as CrewWork[];
+  const machineWork = JSON.parse(answer.machines) as MachineWork[];
+  const seed = JSON.parse(answer.seed) as { site_id: number; seed_kg: number }[];
+  const scores = JSON.parse(answer.scores) as { site_id: number; score: number; checked: number }[];
 
   const crewsOf = new Map<number, CrewWork[]>();
-  for (const g of crewWork.rows) crewsOf.set(g.site_id, [...(crewsOf.get(g.site_id) ?? []), g]);
+  for (const g of crewWork) crewsOf.set(g.site_id, [...(crewsOf.get(g.site_id) ?? []), g]);
   const machinesOf = new Map<number, MachineWork[]>();
-  for (const g of machineWork.rows) machinesOf.set(g.site_id, [...(machinesOf.get(g.site_id) ?? []), g]);
-  const seedOf = new Map(seed.rows.map((r) => [r.site_id, r.seed_kg]));
-  const scoreOf = new Map(scores.rows.map((r) => [r.site_id, r]));
+  for (const g of machineWork) machinesOf.set(g.site_id, [...(machinesOf.get(g.site_id) ?? []), g]);
+  const seedOf = new Map(seed.map((r) => [r.site_id, r.seed_kg]));
+  const scoreOf = new Map(scores.map((r) => [r.site_id, r]));
 
-  const rows: CompareSiteRow[] = facts.rows.map((s) => {
+  const rows: CompareSiteRow[] = facts.map((s) => {
     const groups = crewsOf.get(s.site_id) ?? [];
     const sum = (k: 'orders' | 'hours' | 'kg_n' | 'water_m3' | 'paint_l' | 'colourant_l'): number => groups.reduce((t, g) => t + g[k], 0);
     const machineHours: Partial<Record<EquipmentKind, number>> = {};

@@ -23,7 +23,7 @@ import { writeAudit } from './audit.ts';
 import { budgetScope } from './budget.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { readCosts } from './costs.ts';
-import { loadSeasonBasis } from './season-outlook.ts';
+import { cachedSeasonOutlooks } from './season-outlook.ts';
 
 /** Every number of an answer rounded to 3 decimals, so the JSON stays short. */
 function rounded<T>(v: T): T {
@@ -38,7 +38,7 @@ function rounded<T>(v: T): T {
  */
 export async function previewWhatIf(ctx: Ctx, input: WhatIfInput, { skipGone = false } = {}): Promise<WhatIfAnswer> {
   const districtId = budgetScope(ctx, input.districtId);
-  const basis = await loadSeasonBasis(ctx.db, input.season, districtId === null ? {} : { districtId });
+  const { basis, outlooks } = await cachedSeasonOutlooks(ctx, input.season, districtId);
   const known = new Set(basis.inputs.map((i) => i.field.id));
   if (skipGone) input = { ...input, moves: input.moves.filter((m) => known.has(m.fieldId)) };
   const missing = input.moves.map((m, i) => ({ ...m, i })).filter((m) => !known.has(m.fieldId));
@@ -53,7 +53,7 @@ export async function previewWhatIf(ctx: Ctx, input: WhatIfInput, { skipGone = f
     moves: input.moves.map((m) => ({ fieldId: m.fieldId, level: m.level as Level })),
     standards: Object.fromEntries(Object.entries(input.standards ?? {}).map(([k, v]) => [Number(k), v])),
   };
-  const result: WhatIfResult = whatIf(basis.inputs, basis.standards, basis.params, costs, scenario);
+  const result: WhatIfResult = whatIf(basis.inputs, basis.standards, basis.params, costs, scenario, {}, outlooks);
   const [scope] = districtId === null ? [{ name: 'Department' }] : await ctx.db.select({ name: districts.name }).from(districts).where(eq(districts.id, districtId));
   if (!scope) throw errors.noSuch('district', 'body.districtId');
   return { season: input.season, districtId, scopeName: scope.name, currency: costs.currency, result: rounded(result) };
