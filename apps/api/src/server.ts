@@ -7,6 +7,7 @@ import { pino } from 'pino';
 import { createApp } from './app.ts';
 import { loadConfig } from './config.ts';
 import { openDatabase } from './db/client.ts';
+import { vacuumChurningTables } from './db/maintenance.ts';
 import { DrizzleRateLimitStore } from './http/rate-limit-store.ts';
 import { createMailer, type SmtpSettings } from './mail/mailer.ts';
 import { startMailSink, type MailSink } from './mail/sink.ts';
@@ -51,11 +52,18 @@ async function main() {
   const server = app.listen(config.port, config.host, () => {
     logger.info({ url: `http://localhost:${config.port}`, production: config.production, demo: config.demo }, config.demo ? 'Swardwise is listening (demo mode)' : 'Swardwise is listening');
   });
-  const prune = setInterval(() => {
-    void store.prune().catch((err) => logger.warn({ err }, 'session prune failed'));
-    void DrizzleRateLimitStore.prune(database.db).catch((err) => logger.warn({ err }, 'rate limit prune failed'));
-  }, 3600_000);
+  // Once an hour: expired sessions and rate-limit windows go, then the embedded database
+  // reclaims the row versions its busiest tables left behind (a PostgreSQL server's autovacuum
+  // does that there). The first pass runs a minute after start, so a long-running installation
+  // that was stopped and started does not wait an hour.
+  const upkeep = async () => {
+    await store.prune().catch((err: unknown) => logger.warn({ err }, 'session prune failed'));
+    await DrizzleRateLimitStore.prune(database.db).catch((err: unknown) => logger.warn({ err }, 'rate limit prune failed'));
+    await vacuumChurningTables(database).catch((err: unknown) => logger.warn({ err }, 'vacuum of the busiest tables failed'));
+  };
+  const prune = setInterval(() => void upkeep(), 3600_000);
   prune.unref();
+  setTimeout(() => void upkeep(), 60_000).unref();
 
   const stop = (signal: string) => {
     logger.info({ signal }, 'shutting down');
