@@ -5,9 +5,8 @@
  * last 12 months and the CSV. Target: p95 under 200 ms for the head's season table.
  * Run: node --import tsx tests/bench/compare.ts (builds the big city on first use).
  */
-import { performance } from 'node:perf_hooks';
 import { openBigCity } from './big-city.ts';
-import { fmt, listenSignedIn, pct } from './support.ts';
+import { fmt, listenSignedIn, pct, timeGets } from './support.ts';
 
 const RUNS = Number(process.env.COMPARE_RUNS ?? 30);
 const TARGET_P95_MS = 200;
@@ -15,27 +14,13 @@ const TARGET_P95_MS = 200;
 const { database, db, summary } = await openBigCity();
 console.log(`big city: ${summary.sites} sites, ${summary.fields} fields, ${summary.workOrders} work orders`);
 
-async function timed(base: string, cookie: string, path: string): Promise<{ times: number[]; rows: number }> {
-  const times: number[] = [];
-  let rows = 0;
-  // One warm-up answer (plans, caches of the database), then the timed ones.
-  for (let i = 0; i <= RUNS; i++) {
-    const start = performance.now();
-    const res = await fetch(`${base}${path}`, { headers: { cookie } });
-    const text = await res.text();
-    const ms = performance.now() - start;
-    if (res.status !== 200) throw new Error(`${path}: ${res.status} ${text.slice(0, 200)}`);
-    if (i === 0) rows = path.includes('.csv') ? text.split('\n').length - 1 : (JSON.parse(text) as { rows: unknown[] }).rows.length;
-    else times.push(ms);
-  }
-  return { times, rows };
-}
-
 let failed = false;
 for (const role of ['head', 'foreman'] as const) {
   const { server, base, cookie } = await listenSignedIn(db, role);
   for (const path of ['/api/compare/sites', '/api/compare/sites?period=last12', '/api/compare/sites.csv']) {
-    const { times, rows } = await timed(base, cookie, path);
+    // One warm-up answer (plans, caches of the database), then the timed ones.
+    const { first, times } = await timeGets(base, cookie, path, RUNS);
+    const rows = path.includes('.csv') ? first.text.split('\n').length - 1 : (JSON.parse(first.text) as { rows: unknown[] }).rows.length;
     console.log(`${role.padEnd(7)} ${path.padEnd(36)} ${String(rows).padStart(5)} sites  ${fmt(times)}`);
     if (role === 'head' && path === '/api/compare/sites' && pct(times, 95) >= TARGET_P95_MS) failed = true;
   }
