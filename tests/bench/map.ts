@@ -8,10 +8,8 @@
  */
 import { performance } from 'node:perf_hooks';
 import { addDaysIso } from '@swardwise/domain';
-import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { fieldChecks } from '../../apps/api/src/db/schema/index.ts';
-import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
-import { addBenchFields, fmt, listenSignedIn, portalPage, seeded } from './support.ts';
+import { addBenchFields, fmt, listenSignedIn, openDemoCity, portalPage, seeded } from './support.ts';
 
 const EXTRA_FIELDS = 3000;
 const RUNS = 40;
@@ -19,10 +17,8 @@ const RUNS = 40;
 const gen = seeded(20261201);
 const { rand, pick } = gen;
 
-
-const database = await openDatabase({ pgliteDir: 'memory://' });
+const database = await openDemoCity();
 const { db } = database;
-await seedDemoCity(db);
 const inserted = await addBenchFields(db, EXTRA_FIELDS, gen, () => ({
   status: pick(['open', 'open', 'open', 'restricted', 'closed'] as const),
   lastMowedOn: addDaysIso('2026-11-30', -Math.floor(rand() * 30)),

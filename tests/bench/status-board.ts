@@ -10,11 +10,9 @@
 import { performance } from 'node:perf_hooks';
 import { eq, sql } from 'drizzle-orm';
 import { CLOSURE_REASONS } from '@swardwise/domain';
-import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { fieldClosures, fields } from '../../apps/api/src/db/schema/index.ts';
-import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
-import { launchBrowser } from '../e2e/browser.ts';
-import { addBenchFields, fmt, listenSignedIn, seeded } from './support.ts';
+import { launchBrowser, PHONE } from '../e2e/browser.ts';
+import { addBenchFields, fmt, listenSignedIn, openDemoCity, seeded } from './support.ts';
 
 const EXTRA_FIELDS = 5000;
 const RUNS = 40;
@@ -23,9 +21,8 @@ const CHANGES = 10;
 const gen = seeded(20261202);
 const { rand, pick } = gen;
 
-const database = await openDatabase({ pgliteDir: 'memory://' });
+const database = await openDemoCity();
 const { db } = database;
-await seedDemoCity(db);
 const inserted = await addBenchFields(db, EXTRA_FIELDS, gen, () => ({ status: pick(['open', 'open', 'open', 'open', 'restricted', 'closed'] as const) }));
 const t0 = Date.parse('2026-11-01T12:00:00Z');
 const closures = inserted
@@ -75,7 +72,7 @@ console.log(`first answer after a change, ${CHANGES} changes: ${fmt(afterChange)
 const browser = await launchBrowser().catch(() => null);
 if (browser) {
   try {
-    const context = await browser.newContext({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true });
+    const context = await browser.newContext(PHONE);
     const page = await context.newPage();
     const loads: number[] = [];
     for (let i = 0; i < 3; i++) {

@@ -12,9 +12,10 @@ import { GRASSES, SPORTS, greatCircleKm, longAxis, polygonAreaM2, prepareWeather
 import type { PreparedWeather } from '@swardwise/domain/engine';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
-import type { Db } from '../../apps/api/src/db/client.ts';
+import { openDatabase, type Database, type Db } from '../../apps/api/src/db/client.ts';
 import { fields, sites } from '../../apps/api/src/db/schema/index.ts';
 import { DEMO_SIGN_INS, type buildDemoCity } from '../../apps/api/src/db/seed/demo-city.ts';
+import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
 import { mulberry32, type Rng } from '../../apps/api/src/db/seed/prng.ts';
 import { createMailer } from '../../apps/api/src/mail/mailer.ts';
 import { launchBrowser } from '../e2e/browser.ts';
@@ -51,6 +52,13 @@ export function benchField(site: { id: number; lat: number; lng: number }, i: nu
     areaM2: polygonAreaM2(geometry),
     longAxisDeg: longAxis(geometry).bearingDeg,
   };
+}
+
+/** A fresh in-memory PGlite with the demo city seeded into it. */
+export async function openDemoCity(): Promise<Database> {
+  const database = await openDatabase({ pgliteDir: 'memory://' });
+  await seedDemoCity(database.db);
+  return database;
 }
 
 /**

@@ -4,7 +4,7 @@
  */
 import fs from 'node:fs';
 import path from 'node:path';
-import { chromium, type Browser, type BrowserContextOptions, type Locator, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Locator, type Page } from 'playwright-core';
 import sharp from 'sharp';
 import { afterAll, afterEach, beforeAll, expect, inject } from 'vitest';
 import type { Role } from '@swardwise/domain';
@@ -184,3 +184,20 @@ export async function download(page: Page, selector: string, name: string): Prom
   await (await started).saveAs(file);
   return file;
 }
+
+/**
+ * Notes the moment (the page's `performance.now()`) the first job card is put in each page
+ * `target` opens; read it with `firstJobCardAt(page)`.
+ */
+export async function markFirstJobCard(target: Page | BrowserContext): Promise<void> {
+  await target.addInitScript(() => {
+    new MutationObserver((_, observer) => {
+      if (!document.querySelector('[data-test="job-card"]')) return;
+      (window as unknown as { firstCard: number }).firstCard = performance.now();
+      observer.disconnect();
+    }).observe(document, { childList: true, subtree: true });
+  });
+}
+
+/** When the first job card was put in the page (see `markFirstJobCard`). */
+export const firstJobCardAt = (page: Page): Promise<number> => page.evaluate(() => (window as unknown as { firstCard: number }).firstCard);
