@@ -1,23 +1,12 @@
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import { and, eq } from 'drizzle-orm';
 import sharp from 'sharp';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { auditLog, equipment, fieldChecks, fields, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { giveWork } from '../support/fixture.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { useTestApi } from '../support/app.ts';
+import { useTempDir } from '../support/temp-dir.ts';
 
-let api: TestApi;
-let uploadsDir: string;
-beforeAll(async () => {
-  uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-crew-work-'));
-  api = await startTestApi({ UPLOADS_DIR: uploadsDir });
-});
-afterAll(async () => {
-  await api.close();
-  fs.rmSync(uploadsDir, { recursive: true, force: true });
-});
+const api = useTestApi({ UPLOADS_DIR: useTempDir('swardwise-crew-work-') });
 
 const db = () => api.database.db;
 const order = async (id: number) => (await db().select().from(workOrders).where(eq(workOrders.id, id)))[0]!;

@@ -1,25 +1,14 @@
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import { and, eq } from 'drizzle-orm';
 import sharp from 'sharp';
 import supertest from 'supertest';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { DEFAULT_PARAMETERS, isoToDayNumber } from '@swardwise/domain';
 import { auditLog, fieldCheckPhotos, fieldChecks, fields, sites, standards, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { addUser, giveWork } from '../support/fixture.ts';
-import { startTestApi, type TestApi } from '../support/app.ts';
+import { useTestApi } from '../support/app.ts';
+import { useTempDir } from '../support/temp-dir.ts';
 
-let api: TestApi;
-let uploadsDir: string;
-beforeAll(async () => {
-  uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-field-checks-'));
-  api = await startTestApi({ UPLOADS_DIR: uploadsDir });
-});
-afterAll(async () => {
-  await api.close();
-  fs.rmSync(uploadsDir, { recursive: true, force: true });
-});
+const api = useTestApi({ UPLOADS_DIR: useTempDir('swardwise-field-checks-') });
 
 const db = () => api.database.db;
 const field = () => api.fixture.fields.northSoccer;

@@ -3,16 +3,14 @@
  * acknowledged (a 201 with the new row's id) is there after the kill, and the data folder
  * opens cleanly, at several moments of the burst.
  */
-import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { inArray, sql } from 'drizzle-orm';
 import { afterAll, describe, expect, test } from 'vitest';
-import { repoRoot } from '../../apps/api/src/config.ts';
 import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { users } from '../../apps/api/src/db/schema/index.ts';
+import { startServerProcess, type ServerProcess } from '../support/server-process.ts';
 
 const ADMIN = { email: 'kill.admin@test.example', password: 'a-long-admin-password' };
 /** The moments of the kills: after this many acknowledged writes (more are in flight). */
@@ -23,49 +21,19 @@ const IN_FLIGHT = 4;
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-kill-'));
 afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as net.AddressInfo;
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
+function startServer() {
+  return startServerProcess({
+    env: () => ({
+      PGLITE_DIR: path.join(dir, 'pglite'),
+      UPLOADS_DIR: path.join(dir, 'uploads'),
+      ADMIN_EMAIL: ADMIN.email,
+      ADMIN_PASSWORD: ADMIN.password,
+      SESSION_SECRET: 'kill-nine-test-session-secret-0123456789',
+      LOG_LEVEL: 'warn',
+    }),
+    unset: ['DEMO', 'SEED_DEMO', 'DATABASE_URL', 'SMTP_HOST'],
+    timeoutMs: 120_000,
   });
-}
-
-async function startServer(): Promise<{ child: ChildProcess; url: string; log: () => string }> {
-  const port = await freePort();
-  const env: NodeJS.ProcessEnv = {
-    ...process.env,
-    NODE_ENV: 'production',
-    PORT: String(port),
-    HOST: '127.0.0.1',
-    PGLITE_DIR: path.join(dir, 'pglite'),
-    UPLOADS_DIR: path.join(dir, 'uploads'),
-    ADMIN_EMAIL: ADMIN.email,
-    ADMIN_PASSWORD: ADMIN.password,
-    SESSION_SECRET: 'kill-nine-test-session-secret-0123456789',
-    LOG_LEVEL: 'warn',
-  };
-  for (const name of ['DEMO', 'SEED_DEMO', 'DATABASE_URL', 'SMTP_HOST']) delete env[name];
-  const child = spawn(process.execPath, ['--import', 'tsx', 'apps/api/src/server.ts'], { cwd: repoRoot, env, stdio: ['ignore', 'pipe', 'pipe'] });
-  let output = '';
-  child.stdout!.on('data', (d) => (output += d));
-  child.stderr!.on('data', (d) => (output += d));
-  const url = `http://127.0.0.1:${port}`;
-  const deadline = Date.now() + 120_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`server exited with ${child.exitCode}:\n${output}`);
-    try {
-      if ((await fetch(`${url}/api/health`)).ok) return { child, url, log: () => output };
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  child.kill('SIGKILL');
-  throw new Error(`server did not start:\n${output}`);
 }
 
 async function signIn(url: string): Promise<string> {
@@ -83,7 +51,7 @@ interface Round {
 }
 
 /** Invites people as fast as `IN_FLIGHT` requests allow until the server dies; returns the addresses it acknowledged. */
-async function burstUntilKilled(server: Awaited<ReturnType<typeof startServer>>, round: number, killAfterAcks: number) {
+async function burstUntilKilled(server: ServerProcess, round: number, killAfterAcks: number) {
   const cookie = await signIn(server.url);
   const acknowledged: string[] = [];
   const times: number[] = [];

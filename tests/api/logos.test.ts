@@ -1,15 +1,15 @@
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import { eq } from 'drizzle-orm';
 import sharp from 'sharp';
 import { describe, expect, test } from 'vitest';
 import { auditLog, fieldLogos } from '../../apps/api/src/db/schema/index.ts';
 import { useTestApi } from '../support/app.ts';
+import { useTempDir } from '../support/temp-dir.ts';
 import { giveWork } from '../support/fixture.ts';
 import { getPdf, renderPdf } from '../support/pdf.ts';
 
-const uploads = fs.mkdtempSync(path.join(os.tmpdir(), 'sw-logos-'));
+const uploads = useTempDir('sw-logos-');
 const api = useTestApi({ UPLOADS_DIR: uploads });
 const db = () => api.database.db;
 

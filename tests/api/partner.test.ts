@@ -1,5 +1,4 @@
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import { eq } from 'drizzle-orm';
 import { describe, expect, test } from 'vitest';
@@ -7,8 +6,9 @@ import { addDaysIso, CLOSURE_REASON_PUBLIC, DEFAULT_TIME_ZONE, localToday, type 
 import { fieldChecks, fields, workOrders, workPhotos } from '../../apps/api/src/db/schema/index.ts';
 import { addUser, giveWork } from '../support/fixture.ts';
 import { useTestApi } from '../support/app.ts';
+import { useTempDir } from '../support/temp-dir.ts';
 
-const uploads = fs.mkdtempSync(path.join(os.tmpdir(), 'sw-partner-'));
+const uploads = useTempDir('sw-partner-');
 const api = useTestApi({ UPLOADS_DIR: uploads });
 const today = () => localToday(DEFAULT_TIME_ZONE);
 

@@ -68,22 +68,33 @@ async function expectRefused(agent: Agent, rows: { orderId: number; bookingId: n
   expect((await agent.delete(`/api/work-orders/${rows.orderId}?version=${o.version}`)).status).toBe(403);
 }
 
+type Rows = Awaited<ReturnType<typeof fieldWithWork>>;
+
+/** `owner` reads and changes the order and the booking; `other` does neither. */
+async function expectHeldBy(owner: Agent, other: Agent, rows: Rows) {
+  await expectControl(owner, rows);
+  await expectRefused(other, rows);
+}
+
+/** The order and the booking carry the field's site and district now. */
+async function expectCopies(rows: Rows, scope: { siteId: number; districtId: number }) {
+  expect(await order(rows.orderId)).toMatchObject(scope);
+  expect(await booking(rows.bookingId)).toMatchObject(scope);
+}
+
 describe('moving a field to another site', () => {
   test('should take its work and bookings to the new district: the new foreman controls them, the old one is refused', async () => {
     const { sites, districts, crews } = api.fixture;
     const rows = await fieldWithWork(sites.northPark, crews.north);
-    await expectControl(foreman, rows);
-    await expectRefused(foremanSouth, rows);
+    await expectHeldBy(foreman, foremanSouth, rows);
 
     const moved = await admin.patch(`/api/fields/${rows.fieldId}`).send({ version: await version(rows.fieldId), siteId: sites.southPark });
     expect(moved.status).toBe(200);
-    expect(await order(rows.orderId)).toMatchObject({ siteId: sites.southPark, districtId: districts.south });
-    expect(await booking(rows.bookingId)).toMatchObject({ siteId: sites.southPark, districtId: districts.south });
+    await expectCopies(rows, { siteId: sites.southPark, districtId: districts.south });
     // The north crew may not work in the south district: the open order waits for a south crew.
     expect(await order(rows.orderId)).toMatchObject({ crewId: null, status: 'planned' });
 
-    await expectControl(foremanSouth, rows);
-    await expectRefused(foreman, rows);
+    await expectHeldBy(foremanSouth, foreman, rows);
   });
 
   test('should give a partner the work and bookings of a field moved onto his site, and take those of a field moved off it', async () => {
@@ -117,10 +128,9 @@ describe('moving a site to another district', () => {
     const moved = await api.signIn('head').then((head) => head.patch(`/api/sites/${sites.northSchool}`).send({ version: site.version, districtId: districts.south }));
     expect(moved.status).toBe(200);
 
-    expect(await order(rows.orderId)).toMatchObject({ siteId: sites.northSchool, districtId: districts.south, crewId: null });
-    expect(await booking(rows.bookingId)).toMatchObject({ siteId: sites.northSchool, districtId: districts.south });
-    await expectControl(foremanSouth, rows);
-    await expectRefused(foreman, rows);
+    await expectCopies(rows, { siteId: sites.northSchool, districtId: districts.south });
+    expect(await order(rows.orderId)).toMatchObject({ crewId: null });
+    await expectHeldBy(foremanSouth, foreman, rows);
     // The partner's site is the same site: he keeps seeing it.
     expect((await partner.get(`/api/work-orders/${rows.orderId}`)).status).toBe(200);
 
@@ -128,8 +138,7 @@ describe('moving a site to another district', () => {
     const again = (await admin.get(`/api/sites/${sites.northSchool}`)).body.site;
     await admin.patch(`/api/sites/${sites.northSchool}`).send({ version: again.version, districtId: districts.north }).expect(200);
     expect(await order(rows.orderId)).toMatchObject({ districtId: districts.north });
-    await expectControl(foreman, rows);
-    await expectRefused(foremanSouth, rows);
+    await expectHeldBy(foreman, foremanSouth, rows);
   });
 
   test('should keep done work with its crew as history while moving its scope', async () => {

@@ -4,7 +4,6 @@
  * on the other and ends on both, failed sign-ins count across both, and a write on one is in
  * the next (cached) answer of the other. Runs in the `api-pg` project; PGlite is one process.
  */
-import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -14,7 +13,7 @@ import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { clonePostgresDatabase } from '../support/app.ts';
 import { PASSWORD } from '../support/fixture.ts';
 import { adminQuery } from '../support/postgres-setup.ts';
-import { freePort } from '../support/postgres-cluster.ts';
+import { startServerProcess, type ServerProcess } from '../support/server-process.ts';
 
 /**
  * How long another process may still honour a session after sign-out: the user and session
@@ -27,48 +26,20 @@ const ATTEMPTS = 4;
 
 const postgres = inject('postgres');
 
-interface Proc {
-  url: string;
-  child: ChildProcess;
-  output: () => string;
-}
-
-async function startServer(databaseUrl: string, dir: string, name: string): Promise<Proc> {
-  const port = await freePort();
-  const env: NodeJS.ProcessEnv = {
-    ...process.env,
-    NODE_ENV: 'production',
-    DEMO: 'false',
-    DATABASE_URL: databaseUrl,
-    PORT: String(port),
-    HOST: '127.0.0.1',
-    UPLOADS_DIR: path.join(dir, `uploads-${name}`),
-    PGLITE_DIR: path.join(dir, `unused-${name}`),
-    LOGIN_ATTEMPTS: String(ATTEMPTS),
-    LOG_LEVEL: 'warn',
-  };
-  for (const key of ['SESSION_SECRET', 'SMTP_HOST', 'ADMIN_EMAIL', 'ADMIN_PASSWORD', 'PUBLIC_URL', 'TRUST_PROXY']) delete env[key];
-  const child = spawn(process.execPath, ['--import', 'tsx', 'apps/api/src/server.ts'], { cwd: repoRoot, env, stdio: ['ignore', 'pipe', 'pipe'] });
-  let output = '';
-  child.stdout!.on('data', (d) => (output += d));
-  child.stderr!.on('data', (d) => (output += d));
-  const url = `http://127.0.0.1:${port}`;
-  const deadline = Date.now() + 90_000;
-  for (;;) {
-    if (child.exitCode !== null) throw new Error(`API process ${name} exited with ${child.exitCode}:\n${output}`);
-    const ok = await fetch(`${url}/api/health`).then((r) => r.ok, () => false);
-    if (ok) return { url, child, output: () => output };
-    if (Date.now() > deadline) throw new Error(`API process ${name} did not answer within 90 s:\n${output}`);
-    await new Promise((r) => setTimeout(r, 200));
-  }
-}
-
-const stopServer = (p: Proc | undefined) =>
-  new Promise<void>((resolve) => {
-    if (!p || p.child.exitCode !== null) return resolve();
-    p.child.once('exit', () => resolve());
-    p.child.kill('SIGTERM');
+function startServer(databaseUrl: string, dir: string, name: string): Promise<ServerProcess> {
+  return startServerProcess({
+    env: () => ({
+      DEMO: 'false',
+      DATABASE_URL: databaseUrl,
+      UPLOADS_DIR: path.join(dir, `uploads-${name}`),
+      PGLITE_DIR: path.join(dir, `unused-${name}`),
+      LOGIN_ATTEMPTS: String(ATTEMPTS),
+      LOG_LEVEL: 'warn',
+    }),
+    unset: ['SESSION_SECRET', 'SMTP_HOST', 'ADMIN_EMAIL', 'ADMIN_PASSWORD', 'PUBLIC_URL', 'TRUST_PROXY'],
+    name: `API process ${name}`,
   });
+}
 
 /** A JSON request; `cookie` is sent as is. */
 async function call(base: string, method: string, url: string, body?: unknown, cookie?: string) {
@@ -83,8 +54,8 @@ async function call(base: string, method: string, url: string, body?: unknown, c
 }
 
 describe.skipIf(!postgres)('two API processes on one PostgreSQL database', () => {
-  let a: Proc;
-  let b: Proc;
+  let a: ServerProcess;
+  let b: ServerProcess;
   let dir: string;
   let drop: () => Promise<void>;
 
@@ -95,7 +66,7 @@ describe.skipIf(!postgres)('two API processes on one PostgreSQL database', () =>
     [a, b] = await Promise.all([startServer(clone.url, dir, 'a'), startServer(clone.url, dir, 'b')]);
   }, 120_000);
   afterAll(async () => {
-    await Promise.all([stopServer(a), stopServer(b)]);
+    await Promise.all([a?.stop(), b?.stop()]);
     await drop?.();
     fs.rmSync(dir, { recursive: true, force: true });
   });

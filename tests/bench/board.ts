@@ -10,11 +10,9 @@
 import { performance } from 'node:perf_hooks';
 import { eq } from 'drizzle-orm';
 import { addDaysIso, WORK_TASKS } from '@swardwise/domain';
-import { openDatabase } from '../../apps/api/src/db/client.ts';
 import { crews, districts, fields, sites, users, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
-import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
-import { fmt, listenSignedIn, portalPage, seeded } from './support.ts';
+import { fmt, listenSignedIn, openDemoCity, portalPage, seeded } from './support.ts';
 
 const ORDERS = 500;
 const WEEK = '2026-06-15';
@@ -24,10 +22,8 @@ const DRAGS = 20;
 
 const { rand, pick } = seeded(20260615);
 
-
-const database = await openDatabase({ pgliteDir: 'memory://' });
+const database = await openDemoCity();
 const { db } = database;
-await seedDemoCity(db);
 
 const [foreman] = await db.select({ districtId: users.districtId }).from(users).where(eq(users.email, DEMO_SIGN_INS.foreman.email));
 const districtId = foreman!.districtId!;

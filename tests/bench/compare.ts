@@ -8,11 +8,10 @@
  * Target: p95 under 200 ms for the head's season table, both ways.
  * Run: node --import tsx tests/bench/compare.ts (builds the big city on first use).
  */
-import { performance } from 'node:perf_hooks';
 import { and, desc, eq, gte } from 'drizzle-orm';
 import { workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { BIG_CITY, openBigCity } from './big-city.ts';
-import { fmt, listenSignedIn, pct } from './support.ts';
+import { fmt, listenSignedIn, pct, timeGets } from './support.ts';
 
 const RUNS = Number(process.env.COMPARE_RUNS ?? 30);
 const TARGET_P95_MS = 200;
@@ -33,29 +32,14 @@ async function logWork(): Promise<void> {
   await db.update(workOrders).set({ actualHours: (order!.hours ?? 1) + (logged % 2) * 0.25 }).where(eq(workOrders.id, order!.id));
 }
 
-async function timed(base: string, cookie: string, path: string, afterWrite: boolean): Promise<{ times: number[]; rows: number }> {
-  const times: number[] = [];
-  let rows = 0;
-  // One warm-up answer (plans, caches of the database), then the timed ones.
-  for (let i = 0; i <= RUNS; i++) {
-    if (afterWrite) await logWork();
-    const start = performance.now();
-    const res = await fetch(`${base}${path}`, { headers: { cookie } });
-    const text = await res.text();
-    const ms = performance.now() - start;
-    if (res.status !== 200) throw new Error(`${path}: ${res.status} ${text.slice(0, 200)}`);
-    if (i === 0) rows = path.includes('.csv') ? text.split('\n').length - 1 : (JSON.parse(text) as { rows: unknown[] }).rows.length;
-    else times.push(ms);
-  }
-  return { times, rows };
-}
-
 let failed = false;
 for (const role of ['head', 'foreman'] as const) {
   const { server, base, cookie } = await listenSignedIn(db, role);
   for (const afterWrite of [false, true]) {
     for (const path of ['/api/compare/sites', '/api/compare/sites?period=last12', '/api/compare/sites.csv']) {
-      const { times, rows } = await timed(base, cookie, path, afterWrite);
+      // One warm-up answer (plans, caches of the database), then the timed ones.
+      const { first, times } = await timeGets(base, cookie, path, RUNS, afterWrite ? logWork : undefined);
+      const rows = path.includes('.csv') ? first.text.split('\n').length - 1 : (JSON.parse(first.text) as { rows: unknown[] }).rows.length;
       console.log(`${role.padEnd(7)} ${afterWrite ? 'after a write' : 'read again   '} ${path.padEnd(36)} ${String(rows).padStart(5)} sites  ${fmt(times)} (${RUNS} runs)`);
       if (role === 'head' && path === '/api/compare/sites' && pct(times, 95) >= TARGET_P95_MS) failed = true;
     }

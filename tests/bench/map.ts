@@ -8,10 +8,8 @@
  */
 import { performance } from 'node:perf_hooks';
 import { addDaysIso } from '@swardwise/domain';
-import { openDatabase } from '../../apps/api/src/db/client.ts';
-import { fieldChecks, fields, sites } from '../../apps/api/src/db/schema/index.ts';
-import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
-import { benchField, fmt, listenSignedIn, portalPage, seeded } from './support.ts';
+import { fieldChecks } from '../../apps/api/src/db/schema/index.ts';
+import { addBenchFields, fmt, listenSignedIn, openDemoCity, portalPage, seeded } from './support.ts';
 
 const EXTRA_FIELDS = 3000;
 const RUNS = 40;
@@ -19,22 +17,12 @@ const RUNS = 40;
 const gen = seeded(20261201);
 const { rand, pick } = gen;
 
-
-const database = await openDatabase({ pgliteDir: 'memory://' });
+const database = await openDemoCity();
 const { db } = database;
-await seedDemoCity(db);
-const siteRows = await db.select({ id: sites.id, lat: sites.lat, lng: sites.lng }).from(sites);
-const rows = [];
-for (let i = 0; i < EXTRA_FIELDS; i++) {
-  rows.push({
-    ...benchField(pick(siteRows), i, gen, { lat: 0.03, lng: 0.04 }),
-    irrigation: 'none' as const,
-    status: pick(['open', 'open', 'open', 'restricted', 'closed'] as const),
-    lastMowedOn: addDaysIso('2026-11-30', -Math.floor(rand() * 30)),
-  });
-}
-const inserted: { id: number }[] = [];
-for (let i = 0; i < rows.length; i += 500) inserted.push(...(await db.insert(fields).values(rows.slice(i, i + 500)).returning({ id: fields.id })));
+const inserted = await addBenchFields(db, EXTRA_FIELDS, gen, () => ({
+  status: pick(['open', 'open', 'open', 'restricted', 'closed'] as const),
+  lastMowedOn: addDaysIso('2026-11-30', -Math.floor(rand() * 30)),
+}));
 const checks = inserted.flatMap((f) =>
   [0, 1, 2].map((k) => ({ fieldId: f.id, checkedOn: addDaysIso('2026-08-01', k * 30), turfCoverPct: 90, weedsPct: 3, barePct: 4, score: 50 + rand() * 50 })),
 );

@@ -8,9 +8,9 @@
 import { performance } from 'node:perf_hooks';
 import { longAxis, MAX_OUTLINE_POSITIONS, type Polygon } from '@swardwise/domain';
 import { startTestApi } from '../support/app.ts';
+import { rectanglesOnEdges, type XY } from '../support/brute-force-axis.ts';
 import { fieldBody } from '../support/fixture.ts';
 
-type XY = [number, number];
 
 /** A closed ring of `n` positions on an ellipse; `round` to 6 decimals keeps 100,000 under the 2 MB body limit (and merges neighbours). */
 function circle(n: number, lng = -66.47, lat = 37.64, round = true): Polygon {
@@ -25,23 +25,7 @@ function circle(n: number, lng = -66.47, lat = 37.64, round = true): Polygon {
 /** The previous long axis: every hull edge against every hull point (the hull is all of a circle's points). */
 function bruteForceArea(polygon: Polygon): number {
   const pts = polygon.coordinates[0]!.slice(0, -1).map((p) => [p[0]! * 88_000, p[1]! * 111_000] as XY);
-  let best = Infinity;
-  for (let i = 0; i < pts.length; i++) {
-    const a = pts[i]!;
-    const b = pts[(i + 1) % pts.length]!;
-    const angle = Math.atan2(b[1] - a[1], b[0] - a[0]);
-    const c = Math.cos(angle);
-    const s = Math.sin(angle);
-    let minX = Infinity, maxX = -Infinity, minY = Infinity, maxY = -Infinity;
-    for (const p of pts) {
-      const x = p[0] * c + p[1] * s;
-      const y = -p[0] * s + p[1] * c;
-      minX = Math.min(minX, x); maxX = Math.max(maxX, x);
-      minY = Math.min(minY, y); maxY = Math.max(maxY, y);
-    }
-    best = Math.min(best, (maxX - minX) * (maxY - minY));
-  }
-  return best;
+  return rectanglesOnEdges(pts).reduce((best, r) => Math.min(best, r.w * r.h), Infinity);
 }
 
 const pct = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor((p / 100) * xs.length))]!;

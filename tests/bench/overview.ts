@@ -5,40 +5,24 @@
  * and as a foreman (his district). Target: p95 under 300 ms. All data is invented.
  * Run: node --import tsx tests/bench/overview.ts
  */
-import { performance } from 'node:perf_hooks';
 import { sql } from 'drizzle-orm';
 import { openBigCity } from './big-city.ts';
-import { fmt, listenSignedIn, pct } from './support.ts';
+import { fmt, listenSignedIn, pct, timeGets } from './support.ts';
 
 const RUNS = Number(process.env.RUNS ?? 40);
 const { database, db, summary } = await openBigCity();
 console.log(`big city: ${summary.sites} sites, ${summary.fields} fields, ${summary.workOrders.toLocaleString('en-US')} work orders`);
 const [d] = (await db.execute<{ id: number }>(sql`select id from districts order by id limit 1`)).rows;
 
-async function time(base: string, cookie: string, path: string) {
-  const times: number[] = [];
-  // The first answer warms PGlite's caches and the planner; it is shown apart.
-  let first = 0;
-  for (let i = 0; i <= RUNS; i++) {
-    const start = performance.now();
-    const res = await fetch(`${base}${path}`, { headers: { cookie } });
-    await res.text();
-    if (res.status !== 200) throw new Error(`${path}: ${res.status}`);
-    const ms = performance.now() - start;
-    if (i === 0) first = ms;
-    else times.push(ms);
-  }
-  return { times, first };
-}
-
 let worst = 0;
 for (const role of ['head', 'foreman'] as const) {
   const { server, base, cookie } = await listenSignedIn(db, role);
   const paths = role === 'head' ? ['/api/overview', `/api/overview?districtId=${d!.id}`, '/api/overview?season=2025'] : ['/api/overview'];
   for (const path of paths) {
-    const { times, first } = await time(base, cookie, path);
+    // The first answer warms PGlite's caches and the planner; it is shown apart.
+    const { times, first } = await timeGets(base, cookie, path, RUNS);
     worst = Math.max(worst, pct(times, 95));
-    console.log(`${role.padEnd(7)} GET ${path.padEnd(32)} first ${first.toFixed(0)} ms; ${fmt(times)} (${RUNS} runs)`);
+    console.log(`${role.padEnd(7)} GET ${path.padEnd(32)} first ${first.ms.toFixed(0)} ms; ${fmt(times)} (${RUNS} runs)`);
   }
   server.close();
 }

@@ -6,9 +6,10 @@
  * change to the engine can be read as "before → after" in budget terms.
  * Run: node --import tsx tests/bench/season-totals.ts  (add --json for one JSON line)
  */
-import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, greatCircleKm, polygonAreaM2, prepareWeather } from '@swardwise/domain';
+import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, polygonAreaM2 } from '@swardwise/domain';
 import * as e from '@swardwise/domain/engine';
 import { buildDemoCity } from '../../apps/api/src/db/seed/demo-city.ts';
+import { demoWeather } from './support.ts';
 
 export interface SeasonTotals {
   fields: number;
@@ -26,20 +27,14 @@ export interface SeasonTotals {
 /** The season outlook of every demo field, summed per district and for the department. */
 export function demoSeasonTotals(): { department: SeasonTotals; byDistrict: Record<string, SeasonTotals> } {
   const city = buildDemoCity();
-  const prepared = new Map<string, e.PreparedWeather>();
-  for (const st of city.weatherStations) {
-    const days = city.weather.filter((w) => w.stationCode === st.code).map(({ stationCode: _, ...d }) => d);
-    prepared.set(st.code, prepareWeather(days, { latDeg: st.lat, elevationM: st.elevationM }));
-  }
+  const weatherAt = demoWeather(city);
   const siteOf = new Map(city.sites.map((s) => [s.key, s]));
-  const nearest = (lat: number, lng: number) =>
-    [...city.weatherStations].sort((a, b) => greatCircleKm({ lat, lng }, a) - greatCircleKm({ lat, lng }, b))[0]!.code;
   const empty = (): SeasonTotals => ({ fields: 0, days: 0, mowings: 0, mowingHours: 0, lineHours: 0, labourHours: 0, waterM3: 0, paintMixedL: 0, paintConcentrateL: 0, nKg: 0 });
   const department = empty();
   const byDistrict: Record<string, SeasonTotals> = {};
   city.fields.forEach((f, i) => {
     const site = siteOf.get(f.siteKey)!;
-    const weather = prepared.get(nearest(site.lat, site.lng))!;
+    const weather = weatherAt(site);
     const o = e.fieldOutlook(
       { id: i + 1, districtId: site.districtCode, areaM2: polygonAreaM2(f.geometry), sport: f.sport, grass: f.grass, maintenanceLevel: f.maintenanceLevel, hocOverrideMm: f.hocOverrideMm, clippings: f.clippings, irrigation: f.irrigation },
       weather,

@@ -10,11 +10,9 @@
 import { performance } from 'node:perf_hooks';
 import { eq, sql } from 'drizzle-orm';
 import { CLOSURE_REASONS } from '@swardwise/domain';
-import { openDatabase } from '../../apps/api/src/db/client.ts';
-import { fieldClosures, fields, sites } from '../../apps/api/src/db/schema/index.ts';
-import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
-import { launchBrowser } from '../e2e/browser.ts';
-import { benchField, fmt, listenSignedIn, seeded } from './support.ts';
+import { fieldClosures, fields } from '../../apps/api/src/db/schema/index.ts';
+import { launchBrowser, PHONE } from '../e2e/browser.ts';
+import { addBenchFields, fmt, listenSignedIn, openDemoCity, seeded } from './support.ts';
 
 const EXTRA_FIELDS = 5000;
 const RUNS = 40;
@@ -23,17 +21,9 @@ const CHANGES = 10;
 const gen = seeded(20261202);
 const { rand, pick } = gen;
 
-const database = await openDatabase({ pgliteDir: 'memory://' });
+const database = await openDemoCity();
 const { db } = database;
-await seedDemoCity(db);
-const siteRows = await db.select({ id: sites.id, lat: sites.lat, lng: sites.lng }).from(sites);
-const rows = Array.from({ length: EXTRA_FIELDS }, (_, i) => ({
-  ...benchField(pick(siteRows), i, gen, { lat: 0.03, lng: 0.04 }),
-  irrigation: 'none' as const,
-  status: pick(['open', 'open', 'open', 'open', 'restricted', 'closed'] as const),
-}));
-const inserted: { id: number; status: string }[] = [];
-for (let i = 0; i < rows.length; i += 500) inserted.push(...(await db.insert(fields).values(rows.slice(i, i + 500)).returning({ id: fields.id, status: fields.status })));
+const inserted = await addBenchFields(db, EXTRA_FIELDS, gen, () => ({ status: pick(['open', 'open', 'open', 'open', 'restricted', 'closed'] as const) }));
 const t0 = Date.parse('2026-11-01T12:00:00Z');
 const closures = inserted
   .filter((f) => f.status !== 'open')
@@ -82,7 +72,7 @@ console.log(`first answer after a change, ${CHANGES} changes: ${fmt(afterChange)
 const browser = await launchBrowser().catch(() => null);
 if (browser) {
   try {
-    const context = await browser.newContext({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true });
+    const context = await browser.newContext(PHONE);
     const page = await context.newPage();
     const loads: number[] = [];
     for (let i = 0; i < 3; i++) {

@@ -8,11 +8,14 @@ import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { pino } from 'pino';
 import type { Browser, Page } from 'playwright-core';
-import { GRASSES, SPORTS, longAxis, polygonAreaM2, type Level, type Polygon, type Role } from '@swardwise/domain';
+import { GRASSES, SPORTS, greatCircleKm, longAxis, polygonAreaM2, prepareWeather, type Level, type Polygon, type Role } from '@swardwise/domain';
+import type { PreparedWeather } from '@swardwise/domain/engine';
 import { createApp } from '../../apps/api/src/app.ts';
 import { loadConfig } from '../../apps/api/src/config.ts';
-import type { Db } from '../../apps/api/src/db/client.ts';
-import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
+import { openDatabase, type Database, type Db } from '../../apps/api/src/db/client.ts';
+import { fields, sites } from '../../apps/api/src/db/schema/index.ts';
+import { DEMO_SIGN_INS, type buildDemoCity } from '../../apps/api/src/db/seed/demo-city.ts';
+import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
 import { mulberry32, type Rng } from '../../apps/api/src/db/seed/prng.ts';
 import { createMailer } from '../../apps/api/src/mail/mailer.ts';
 import { launchBrowser } from '../e2e/browser.ts';
@@ -51,6 +54,36 @@ export function benchField(site: { id: number; lat: number; lng: number }, i: nu
   };
 }
 
+/** A fresh in-memory PGlite with the demo city seeded into it. */
+export async function openDemoCity(): Promise<Database> {
+  const database = await openDatabase({ pgliteDir: 'memory://' });
+  await seedDemoCity(database.db);
+  return database;
+}
+
+/**
+ * `count` invented fields (`benchField`, no irrigation) at random sites of the database, with
+ * what `more` adds to each row; inserted 500 at a time. Answers their ids and statuses.
+ */
+export async function addBenchFields(db: Db, count: number, gen: ReturnType<typeof seeded>, more: () => Partial<typeof fields.$inferInsert> = () => ({})) {
+  const siteRows = await db.select({ id: sites.id, lat: sites.lat, lng: sites.lng }).from(sites);
+  const rows = Array.from({ length: count }, (_, i) => ({ ...benchField(gen.pick(siteRows), i, gen, { lat: 0.03, lng: 0.04 }), irrigation: 'none' as const, ...more() }));
+  const inserted: { id: number; status: string }[] = [];
+  for (let i = 0; i < rows.length; i += 500) inserted.push(...(await db.insert(fields).values(rows.slice(i, i + 500)).returning({ id: fields.id, status: fields.status })));
+  return inserted;
+}
+
+/** The demo city's station weather, each station's prepared once, and a site's: that of its nearest station. */
+export function demoWeather(city: ReturnType<typeof buildDemoCity>): (site: { lat: number; lng: number }) => PreparedWeather {
+  const prepared = new Map<string, PreparedWeather>();
+  for (const st of city.weatherStations) {
+    const days = city.weather.filter((w) => w.stationCode === st.code).map(({ stationCode: _, ...d }) => d);
+    prepared.set(st.code, prepareWeather(days, { latDeg: st.lat, elevationM: st.elevationM }));
+  }
+  const nearest = (site: { lat: number; lng: number }) => [...city.weatherStations].sort((a, b) => greatCircleKm(site, a) - greatCircleKm(site, b))[0]!.code;
+  return (site) => prepared.get(nearest(site))!;
+}
+
 /** The app in production mode on a free loopback port, and the session cookie of a demo account. */
 export async function listenSignedIn(db: Db, role: Role) {
   const logger = pino({ level: 'silent' });
@@ -62,6 +95,28 @@ export async function listenSignedIn(db: Db, role: Role) {
   const res = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(DEMO_SIGN_INS[role]) });
   const cookie = res.headers.get('set-cookie')!.split(';')[0]!;
   return { config, server, base, cookie };
+}
+
+/**
+ * GETs `path` `runs` + 1 times one after another with the session cookie, each timed to the
+ * end of its body (ms). The first answer, which warms the database's caches and plans, is
+ * given apart with its text; anything but a 200 fails.
+ */
+export async function timeGets(base: string, cookie: string, path: string, runs: number, before?: () => Promise<void>): Promise<{ first: { ms: number; text: string }; times: number[] }> {
+  let first = { ms: 0, text: '' };
+  const times: number[] = [];
+  for (let i = 0; i <= runs; i++) {
+    // Untimed: what each request must come after (a write, so the answer is worked out again).
+    if (before) await before();
+    const start = performance.now();
+    const res = await fetch(`${base}${path}`, { headers: { cookie } });
+    const text = await res.text();
+    const ms = performance.now() - start;
+    if (res.status !== 200) throw new Error(`${path}: ${res.status} ${text.slice(0, 200)}`);
+    if (i === 0) first = { ms, text };
+    else times.push(ms);
+  }
+  return { first, times };
 }
 
 /** The built portal in chromium, signed in with the cookie; null, and a note, when the portal is not built. */

@@ -11,18 +11,14 @@
  */
 import os from 'node:os';
 import type { BrowserContext, CDPSession, Page } from 'playwright-core';
-import { openDatabase } from '../../apps/api/src/db/client.ts';
-import { seedDemoCity } from '../../apps/api/src/db/seed/index.ts';
-import { launchBrowser } from '../e2e/browser.ts';
-import { fmt, listenSignedIn } from './support.ts';
+import { firstJobCardAt, launchBrowser, markFirstJobCard, PHONE } from '../e2e/browser.ts';
+import { fmt, listenSignedIn, openDemoCity } from './support.ts';
 
 const COLD_LOADS = 5;
 const SLOW_4G = { offline: false, latency: 150, downloadThroughput: (1.6e6 / 8) * 0.9, uploadThroughput: (750e3 / 8) * 0.9 };
 const CPU_SLOWDOWN = 4;
-const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
 
-const database = await openDatabase({ pgliteDir: 'memory://' });
-await seedDemoCity(database.db);
+const database = await openDemoCity();
 const { config, server, base, cookie } = await listenSignedIn(database.db, 'crew');
 const fs = await import('node:fs');
 if (!fs.existsSync(`${config.portalDist}/index.html`)) {
@@ -45,13 +41,7 @@ async function throttled(context: BrowserContext, page: Page) {
 
 /** Opens Today and waits for its first job card; the LCP as the page's own observer saw it, and when the first card was put in the page. */
 async function openToday(page: Page, seen?: { bytes: number; requests: number }): Promise<{ lcp: number; card: number; bytes: number; requests: number }> {
-  await page.addInitScript(() => {
-    new MutationObserver((_, observer) => {
-      if (!document.querySelector('[data-test="job-card"]')) return;
-      (window as unknown as { firstCard: number }).firstCard = performance.now();
-      observer.disconnect();
-    }).observe(document, { childList: true, subtree: true });
-  });
+  await markFirstJobCard(page);
   await page.goto(`${base}/today`);
   await page.locator('[data-test="job-card"]').first().waitFor({ timeout: 60_000 });
   // What it took to show the jobs; the service worker's own downloads come after.
@@ -67,7 +57,7 @@ async function openToday(page: Page, seen?: { bytes: number; requests: number })
         }).observe({ type: 'largest-contentful-paint', buffered: true });
       }),
   );
-  const card = await page.evaluate(() => (window as unknown as { firstCard: number }).firstCard);
+  const card = await firstJobCardAt(page);
   return { lcp, card, ...counted };
 }
 

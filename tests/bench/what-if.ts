@@ -12,24 +12,18 @@
  * WHAT_IF_RUNS sets the number of timed requests (default 10), WHAT_IF_API=0 skips this part.
  * Run: node --import tsx tests/bench/what-if.ts
  */
-import { DEFAULT_COSTS, DEFAULT_PARAMETERS, DEFAULT_STANDARDS, greatCircleKm, polygonAreaM2, prepareWeather, whatIf, type Level, type WhatIfField } from '@swardwise/domain';
-import type * as e from '@swardwise/domain/engine';
+import { DEFAULT_COSTS, DEFAULT_PARAMETERS, DEFAULT_STANDARDS, polygonAreaM2, whatIf, type Level, type WhatIfField } from '@swardwise/domain';
 import { asc, eq, max } from 'drizzle-orm';
 import { fields as fieldsTable, sites, weatherDays } from '../../apps/api/src/db/schema/index.ts';
 import { buildDemoCity } from '../../apps/api/src/db/seed/demo-city.ts';
 import { openBigCity } from './big-city.ts';
-import { fmt, listenSignedIn, pct, seeded } from './support.ts';
+import { demoWeather, fmt, listenSignedIn, pct, seeded } from './support.ts';
 
 const FIELDS = 300;
 const RUNS = 7;
 const city = buildDemoCity();
-const prepared = new Map<string, e.PreparedWeather>();
-for (const st of city.weatherStations) {
-  const days = city.weather.filter((w) => w.stationCode === st.code).map(({ stationCode: _, ...d }) => d);
-  prepared.set(st.code, prepareWeather(days, { latDeg: st.lat, elevationM: st.elevationM }));
-}
+const weatherAt = demoWeather(city);
 const siteOf = new Map(city.sites.map((s) => [s.key, s]));
-const nearest = (lat: number, lng: number) => [...city.weatherStations].sort((a, b) => greatCircleKm({ lat, lng }, a) - greatCircleKm({ lat, lng }, b))[0]!.code;
 const { rand } = seeded(15);
 const fields: WhatIfField[] = [];
 for (let i = 0; i < FIELDS; i++) {
@@ -48,7 +42,7 @@ for (let i = 0; i < FIELDS; i++) {
       clippings: f.clippings,
       irrigation: f.irrigation,
     },
-    weather: prepared.get(nearest(site.lat, site.lng))!,
+    weather: weatherAt(site),
   });
 }
 const moves = fields.filter((_, i) => i % 5 === 0).map((f) => ({ fieldId: f.field.id, level: (((f.field.maintenanceLevel as number) % 4) + 1) as Level }));

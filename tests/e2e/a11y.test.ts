@@ -10,10 +10,9 @@ import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
 import type { Role } from '@swardwise/domain';
 import { a11yViolations, formatViolations, violationsSoFar, type A11yViolation } from './axe.ts';
-import { browser, checkA11y, PHONE, shots, signIn, useBrowser } from './browser.ts';
+import { browser, checkA11y, DESKTOP, PHONE, shots, signIn, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
-const DESKTOP = { viewport: { width: 1366, height: 900 } };
 /** A role's pages one after the other, each waited for and checked: minutes, not seconds. */
 const ROLE_TIMEOUT = 300_000;
 
@@ -164,8 +163,7 @@ describe('accessibility (WCAG 2.1 A/AA, axe-core)', () => {
   });
 
   test('should give the edge of every form control 3:1 against what is behind it', async () => {
-    const page = await browser.newPage(DESKTOP);
-    try {
+    await withPage({}, async (page) => {
       await page.goto(`${baseUrl}/sign-in`);
       await page.locator('[data-test="email"]').first().waitFor();
       const signInEdges = await controlEdges(page);
@@ -175,9 +173,7 @@ describe('accessibility (WCAG 2.1 A/AA, axe-core)', () => {
       const edges = [...signInEdges, ...(await controlEdges(page))];
       expect(edges.length).toBeGreaterThanOrEqual(4);
       expect(edges.filter((e) => e.ratio < 3)).toEqual([]);
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test.each(ROLES)('should find no violation on any page of the %s at desktop size', async (role) => {

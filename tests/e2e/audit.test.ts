@@ -4,7 +4,7 @@
  */
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -12,9 +12,7 @@ useBrowser();
 
 describe('audit log in words', () => {
   test('should show a changed site by name with its attributes before and after', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
-      await signIn(page, 'head');
+    await withPage({ role: 'head' }, async (page) => {
       const sites = (await (await page.request.get(`${baseUrl}/api/sites`)).json()) as { items: { id: number; name: string; version: number; notes: string | null }[] };
       const site = sites.items[0]!;
       const notes = `Gate code changed ${Date.now()}`;
@@ -30,8 +28,6 @@ describe('audit log in words', () => {
       expect(text).toContain(`${site.notes ?? '—'} → ${notes}`);
       expect(text).not.toMatch(/Version|Updated at/);
       await page.screenshot({ path: path.join(shots, 'audit-log.png') });
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

@@ -4,9 +4,9 @@
  */
 import fs from 'node:fs';
 import path from 'node:path';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Locator, type Page } from 'playwright-core';
 import sharp from 'sharp';
-import { afterAll, afterEach, beforeAll, inject } from 'vitest';
+import { afterAll, afterEach, beforeAll, expect, inject } from 'vitest';
 import type { Role } from '@swardwise/domain';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
 import { finishOpenPages, watchContext } from './axe.ts';
@@ -71,8 +71,44 @@ export async function signIn(page: Page, role: Role, landing?: string) {
   await enterSignIn(page, role, landing);
 }
 
+/** Follows the navigation's link to `name` (`nav-<name>`) and waits for its page, `/<name>`. */
+export async function followNav(page: Page, name: string) {
+  await page.locator(`[data-test="nav-${name}"]`).click();
+  await page.waitForURL((url) => url.pathname === `/${name}`);
+}
+
 /** A phone as crew leads hold one: 390 × 844 CSS pixels, touch. */
 export const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
+
+/** The office's screen, where a test names no other. */
+export const DESKTOP = { viewport: { width: 1366, height: 900 } };
+
+export interface PageOptions {
+  /** Signs in as the demo account of this role first (through the sign-in page). */
+  role?: Role;
+  /** With `role`: where signing in lands (waited for). */
+  landing?: string;
+  /** With `role`: sign in with the keyboard alone (`keyboardSignIn`). */
+  keyboard?: boolean;
+  /** The screen and other context options: `DESKTOP` by default, `PHONE` for a crew lead's. */
+  device?: BrowserContextOptions;
+}
+
+/**
+ * Runs `steps` on a page of its own (a fresh context: no cookies, no cache), signed in when
+ * `role` is given, and closes it afterwards even when a step fails: closing is when the
+ * page's last accessibility check runs and reports.
+ */
+export async function withPage<T>({ role, landing, keyboard = false, device = DESKTOP }: PageOptions, steps: (page: Page) => Promise<T>): Promise<T> {
+  const context = await browser.newContext(device);
+  try {
+    const page = await context.newPage();
+    if (role) await (keyboard ? keyboardSignIn : signIn)(page, role, landing);
+    return await steps(page);
+  } finally {
+    await context.close();
+  }
+}
 
 /** The Today page's report dialog (job done or skipped). */
 export const reportDialog = (page: Page) => page.locator('.el-dialog').filter({ has: page.locator('[data-test="report-submit"]') });
@@ -107,3 +143,61 @@ export async function keyboardSignIn(page: Page, role: Role, landing?: string) {
   await page.keyboard.press('Enter');
   await page.waitForURL((url) => (landing ? url.pathname === landing : !url.pathname.startsWith('/sign-in')));
 }
+
+/** Opens the focused Element Plus select with the keyboard and picks the option labelled `label`. */
+export async function pickOption(page: Page, label: string) {
+  await page.keyboard.press('Enter');
+  const dropdown = page.locator('.el-select-dropdown:visible');
+  await dropdown.waitFor();
+  const options = await dropdown.locator('.el-select-dropdown__item').allInnerTexts();
+  expect(options).toContain(label);
+  for (let i = 0; i < options.length * 2; i++) {
+    if ((await dropdown.locator('.el-select-dropdown__item.is-hovering').innerText().catch(() => '')) === label) break;
+    await page.keyboard.press('ArrowDown');
+  }
+  await page.keyboard.press('Enter');
+  await dropdown.waitFor({ state: 'hidden' });
+}
+
+/**
+ * Fills a field check form (the crew's and the office's share it) with one goalmouth check:
+ * 84 % turf cover, 6 % weeds, 10 % bare, a 3 in/cm height, the 2.25 kg tester's `readings`,
+ * evenness 4 and divots 3.
+ */
+export async function fillFieldCheck(form: Locator, readings: string[]) {
+  await form.locator('[data-test="check-turf"] input').fill('84');
+  await form.locator('[data-test="check-weeds"] input').fill('6');
+  await form.locator('[data-test="check-bare"] input').fill('10');
+  await form.getByText('Goalmouths', { exact: true }).click();
+  await form.locator('[data-test="check-height"] input').fill('3');
+  await form.locator('[data-test="check-device"]').getByText(/2\.25 kg portable tester/).click();
+  for (const [i, g] of readings.entries()) await form.locator(`[data-test="check-reading-${i}"] input`).fill(g);
+  await form.locator('[data-test="check-evenness"]').getByText('4', { exact: true }).click();
+  await form.locator('[data-test="check-divots"]').getByText('3', { exact: true }).click();
+}
+
+/** Clicks `selector` and keeps the file its download brings among the screenshots as `name`; answers its path. */
+export async function download(page: Page, selector: string, name: string): Promise<string> {
+  const started = page.waitForEvent('download');
+  await page.locator(selector).click();
+  const file = path.join(shots, name);
+  await (await started).saveAs(file);
+  return file;
+}
+
+/**
+ * Notes the moment (the page's `performance.now()`) the first job card is put in each page
+ * `target` opens; read it with `firstJobCardAt(page)`.
+ */
+export async function markFirstJobCard(target: Page | BrowserContext): Promise<void> {
+  await target.addInitScript(() => {
+    new MutationObserver((_, observer) => {
+      if (!document.querySelector('[data-test="job-card"]')) return;
+      (window as unknown as { firstCard: number }).firstCard = performance.now();
+      observer.disconnect();
+    }).observe(document, { childList: true, subtree: true });
+  });
+}
+
+/** When the first job card was put in the page (see `markFirstJobCard`). */
+export const firstJobCardAt = (page: Page): Promise<number> => page.evaluate(() => (window as unknown as { firstCard: number }).firstCard);

@@ -5,7 +5,7 @@
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
 import type { BudgetAnswer } from '@swardwise/domain';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { followNav, shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -13,11 +13,8 @@ useBrowser();
 
 describe('season budget', () => {
   test('should let the head set the labour line and read it against the outlook, with the chart and exports', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
-      await signIn(page, 'head');
-      await page.locator('[data-test="nav-budget"]').click();
-      await page.waitForURL((url) => url.pathname === '/budget');
+    await withPage({ role: 'head' }, async (page) => {
+      await followNav(page, 'budget');
       await page.locator('[data-test="budget-chart"] canvas').waitFor();
       const input = page.locator('[data-test="budget-input-labour"] input');
       await input.waitFor();
@@ -37,23 +34,17 @@ describe('season budget', () => {
       const csv = await page.request.get(`${baseUrl}${await page.locator('[data-test="budget-csv"]').getAttribute('href')}`);
       expect(csv.status()).toBe(200);
       expect(await csv.text()).toContain('labour,Labour,h,250000,USD');
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should show a foreman his district read-only', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
-      await signIn(page, 'foreman');
+    await withPage({ role: 'foreman' }, async (page) => {
       await page.locator('[data-test="nav-budget"]').click();
       await page.getByText('Read only: the department head sets the budget.').waitFor();
       await page.locator('[data-test="budget-row-labour"]').waitFor();
       expect(await page.locator('[data-test="budget-input-labour"]').count()).toBe(0);
       expect(await page.locator('[data-test="budget-district"]').count()).toBe(0);
       await page.screenshot({ path: path.join(shots, 'budget-foreman.png'), fullPage: true });
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

@@ -5,7 +5,7 @@
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
 import { addDaysIso, localToday } from '@swardwise/domain';
-import { browser, PHONE, shots, signIn, useBrowser } from './browser.ts';
+import { browser, PHONE, shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -13,9 +13,7 @@ useBrowser();
 
 describe('closures', () => {
   test('should let a foreman close a field with planned work, cancel the work, see it on the public board, and reopen it', async () => {
-    const page = await browser.newPage({ viewport: { width: 1400, height: 900 } });
-    try {
-      await signIn(page, 'foreman');
+    await withPage({ role: 'foreman', device: { viewport: { width: 1400, height: 900 } } }, async (page) => {
       const setup = await page.evaluate(async () => {
         const me = await (await fetch('/api/auth/me')).json();
         const fields = (await (await fetch('/api/fields')).json()).items as { id: number; name: string; siteName: string; status: string }[];
@@ -87,8 +85,6 @@ describe('closures', () => {
       await page.locator('[data-test="closure-submit"]').click();
       await card.locator('[data-test="closure-in-force"]').waitFor({ state: 'detached' });
       expect(await card.innerText()).toMatch(/History \(2\)/);
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

@@ -9,7 +9,7 @@ import Papa from 'papaparse';
 import type { Page } from 'playwright-core';
 import { describe, expect, test } from 'vitest';
 import type { CompareSitesAnswer } from '@swardwise/domain';
-import { browser, keyboardSignIn, shots, signIn, tabTo, useBrowser } from './browser.ts';
+import { download, followNav, shots, tabTo, useBrowser, withPage } from './browser.ts';
 
 
 useBrowser();
@@ -25,12 +25,9 @@ async function columnValues(page: Page, header: string): Promise<string[]> {
 
 describe('compare sites', () => {
   test('should let the head sort, choose columns, set sites side by side and download CSVs that parse back', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 }, acceptDownloads: true });
-    try {
-      await signIn(page, 'head');
+    await withPage({ role: 'head', device: { viewport: { width: 1366, height: 900 }, acceptDownloads: true } }, async (page) => {
       const answered = page.waitForResponse((r) => r.url().includes('/api/compare/sites') && r.status() === 200);
-      await page.locator('[data-test="nav-compare"]').click();
-      await page.waitForURL((url) => url.pathname === '/compare');
+      await followNav(page, 'compare');
       const api = (await (await answered).json()) as CompareSitesAnswer;
       await page.locator(`${TABLE} tbody tr[data-test="row"]`).first().waitFor();
       await page.locator('[data-test="cost-score-chart"] canvas').waitFor();
@@ -64,10 +61,7 @@ describe('compare sites', () => {
       await page.locator('[data-test="cost-score-chart"]').screenshot({ path: path.join(shots, 'compare-scatter.png') });
 
       // The server's CSV: every figure as the API answered it.
-      const serverCsv = page.waitForEvent('download');
-      await page.locator('[data-test="compare-csv"]').click();
-      const serverFile = path.join(shots, 'compare-sites.csv');
-      await (await serverCsv).saveAs(serverFile);
+      const serverFile = await download(page, '[data-test="compare-csv"]', 'compare-sites.csv');
       const server = Papa.parse<Record<string, string>>(readFileSync(serverFile, 'utf8'), { header: true, skipEmptyLines: true });
       expect(server.errors).toEqual([]);
       expect(server.data.length).toBe(api.rows.length);
@@ -78,10 +72,7 @@ describe('compare sites', () => {
       }
 
       // The table's own export: the visible columns in the head's units (per acre).
-      const tableCsv = page.waitForEvent('download');
-      await page.locator('[data-test="table-export"]').click();
-      const tableFile = path.join(shots, 'compare-table.csv');
-      await (await tableCsv).saveAs(tableFile);
+      const tableFile = await download(page, '[data-test="table-export"]', 'compare-table.csv');
       const table = Papa.parse<Record<string, string>>(readFileSync(tableFile, 'utf8'), { header: true, skipEmptyLines: true });
       expect(table.errors).toEqual([]);
       expect(table.data.length).toBe(api.rows.length);
@@ -92,15 +83,11 @@ describe('compare sites', () => {
         if (r.costPerAcre === null) expect(line[costHeader]).toBe('');
         else expect(Number(line[costHeader])).toBeCloseTo(r.costPerAcre, 2);
       }
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should let a foreman reach his district’s sites and set two side by side with the keyboard', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
-      await keyboardSignIn(page, 'foreman');
+    await withPage({ role: 'foreman', keyboard: true }, async (page) => {
       await tabTo(page, '[data-test="nav-compare"]');
       await page.keyboard.press('Enter');
       await page.waitForURL((url) => url.pathname === '/compare');
@@ -114,8 +101,6 @@ describe('compare sites', () => {
       const side = page.locator('[data-test="compare-side"]');
       await side.waitFor();
       expect(await side.locator('thead th').count()).toBe(3);
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

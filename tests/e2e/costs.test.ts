@@ -4,7 +4,7 @@
  */
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { followNav, shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -12,11 +12,8 @@ useBrowser();
 
 describe('costs and rates', () => {
   test('should let the head change the water price per 1,000 gallons and see it saved and audited', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
-      await signIn(page, 'head');
-      await page.locator('[data-test="nav-costs"]').click();
-      await page.waitForURL((url) => url.pathname === '/costs');
+    await withPage({ role: 'head' }, async (page) => {
+      await followNav(page, 'costs');
       const water = page.locator('[data-test="costs-waterPricePerM3"] input');
       await water.waitFor();
       await page.screenshot({ path: path.join(shots, 'costs.png'), fullPage: true });
@@ -36,22 +33,16 @@ describe('costs and rates', () => {
       const row = page.locator('[data-test="row"]').filter({ hasText: 'Water price per m³' }).first();
       await row.waitFor();
       expect(await row.innerText()).toContain('1.65');
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should show a foreman the rates read-only', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
-      await signIn(page, 'foreman');
+    await withPage({ role: 'foreman' }, async (page) => {
       await page.locator('[data-test="nav-costs"]').click();
       await page.getByText('Read only: the department head sets costs and rates.').waitFor();
       expect(await page.locator('[data-test="costs-save"]').count()).toBe(0);
       expect(await page.locator('[data-test="costs-waterPricePerM3"] input').isDisabled()).toBe(true);
       await page.screenshot({ path: path.join(shots, 'costs-foreman.png'), fullPage: true });
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

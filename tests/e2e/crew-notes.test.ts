@@ -7,7 +7,7 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
 import { DEFAULT_TIME_ZONE, localToday, mondayOf } from '@swardwise/domain';
-import { browser, PHONE, reportDialog, shots, signIn, turfPhoto, useBrowser } from './browser.ts';
+import { browser, fillFieldCheck, PHONE, reportDialog, shots, signIn, turfPhoto, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 const DESKTOP = { width: 1366, height: 1000 };
@@ -66,15 +66,7 @@ describe('a crew’s note and photo reach the foreman', () => {
       await checkJob.locator('[data-test="job-check"]').click();
       const form = phone.locator('[data-test="check-dialog"]');
       await form.locator('[data-test="field-check-form"]').waitFor();
-      await form.locator('[data-test="check-turf"] input').fill('84');
-      await form.locator('[data-test="check-weeds"] input').fill('6');
-      await form.locator('[data-test="check-bare"] input').fill('10');
-      await form.getByText('Goalmouths', { exact: true }).click();
-      await form.locator('[data-test="check-height"] input').fill('3');
-      await form.locator('[data-test="check-device"]').getByText(/2\.25 kg portable tester/).click();
-      for (const [i, g] of ['62', '70', '104'].entries()) await form.locator(`[data-test="check-reading-${i}"] input`).fill(g);
-      await form.locator('[data-test="check-evenness"]').getByText('4', { exact: true }).click();
-      await form.locator('[data-test="check-divots"]').getByText('3', { exact: true }).click();
+      await fillFieldCheck(form, ['62', '70', '104']);
       await form.locator('[data-test="check-tips"]').click();
       await form.locator('[data-test="check-photos"]').setInputFiles(await turfPhoto('centre.jpg', 800, 600));
       expect(await phone.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);

@@ -8,7 +8,7 @@
  */
 import { describe, expect, inject, test } from 'vitest';
 import { takeCspViolations } from './csp-watch.ts';
-import { browser, useBrowser } from './browser.ts';
+import { useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -27,8 +27,7 @@ describe('content security policy', () => {
   });
 
   test('should see a violation on a page a browser test shows, and the public pages have none', async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
-    try {
+    await withPage({ device: { viewport: { width: 1280, height: 800 } } }, async (page) => {
       for (const path of ['/sign-in', '/status', '/forgot-password']) {
         await page.goto(`${baseUrl}${path}`);
         await page.waitForLoadState('networkidle');
@@ -51,8 +50,6 @@ describe('content security policy', () => {
       expect(seen.join('\n')).toMatch(/^\/forgot-password: /m);
       expect(seen.join('\n')).toMatch(/console: .*Content Security Policy/);
       expect(await page.evaluate(() => (window as unknown as { __ran?: boolean }).__ran)).toBeUndefined();
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

@@ -5,7 +5,7 @@
  */
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
-import { browser, checkA11y, PHONE, shots, signIn, turfPhoto, useBrowser } from './browser.ts';
+import { browser, checkA11y, fillFieldCheck, PHONE, shots, signIn, turfPhoto, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -30,15 +30,7 @@ describe('field checks on the field page', () => {
       // Full-screen on a phone: the dialog is as wide as the screen.
       const box = await dialog.boundingBox();
       expect(Math.round(box!.width)).toBe(390);
-      await dialog.locator('[data-test="check-turf"] input').fill('84');
-      await dialog.locator('[data-test="check-weeds"] input').fill('6');
-      await dialog.locator('[data-test="check-bare"] input').fill('10');
-      await dialog.getByText('Goalmouths', { exact: true }).click();
-      await dialog.locator('[data-test="check-height"] input').fill('3');
-      await dialog.locator('[data-test="check-device"]').getByText(/2\.25 kg portable tester/).click();
-      for (const [i, g] of ['62', '70', '112'].entries()) await dialog.locator(`[data-test="check-reading-${i}"] input`).fill(g);
-      await dialog.locator('[data-test="check-evenness"]').getByText('4', { exact: true }).click();
-      await dialog.locator('[data-test="check-divots"]').getByText('3', { exact: true }).click();
+      await fillFieldCheck(dialog, ['62', '70', '112']);
       await dialog.locator('[data-test="staff-check-photos"]').setInputFiles(await turfPhoto('north-goalmouth.jpg', 800, 600));
       await dialog.getByText('north-goalmouth.jpg').waitFor();
       await checkA11y(page);
@@ -68,18 +60,14 @@ describe('field checks on the field page', () => {
       expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
 
       // Desktop: the same page with the chart, photos, history and the growth calibration.
-      const desktop = await browser.newPage({ viewport: { width: 1400, height: 900 } });
-      try {
-        await signIn(desktop, 'foreman');
+      await withPage({ role: 'foreman', device: { viewport: { width: 1400, height: 900 } } }, async (desktop) => {
         await desktop.goto(`${baseUrl}/fields/${field.id}`);
         await desktop.locator('[data-test="field-checks"] [data-test="score-chart"] canvas').first().waitFor();
         await desktop.locator('[data-test="growth-calibration"] p').first().waitFor();
         expect(await desktop.locator('[data-test="growth-calibration"]').innerText()).toMatch(/mowing prediction still uses the default rate/);
         await desktop.locator('[data-test="field-checks"]').screenshot({ path: path.join(shots, 'field-check-history-desktop.png') });
         await desktop.locator('[data-test="growth-calibration"]').screenshot({ path: path.join(shots, 'field-growth-calibration-desktop.png') });
-      } finally {
-        await desktop.close();
-      }
+      });
     } finally {
       await context.close();
     }

@@ -5,7 +5,7 @@
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
 import { formatHocText, type UnitSystem } from '@swardwise/domain';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -24,9 +24,7 @@ const text = (mm: number, units: UnitSystem) => formatHocText(mm, units);
 
 describe('field page', () => {
   test('should show a foreman the HOC, mowings per week and the season chart of a field', async () => {
-    const page = await browser.newPage({ viewport: { width: 1400, height: 900 } });
-    try {
-      await signIn(page, 'foreman');
+    await withPage({ role: 'foreman', device: { viewport: { width: 1400, height: 900 } } }, async (page) => {
       const fields = await page.evaluate(async () => (await (await fetch('/api/fields')).json()).items as { id: number }[]);
       expect(fields.length).toBeGreaterThan(0);
       await page.goto(`${baseUrl}/fields/${fields[0]!.id}`);
@@ -37,15 +35,11 @@ describe('field page', () => {
       expect(await page.locator('[data-test="needs-weather-note"]').count()).toBe(0);
       await page.locator('[data-test="season-chart"] canvas').first().waitFor();
       await page.screenshot({ path: path.join(shots, 'field-page-foreman.png'), fullPage: true });
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should show the new HOC on the field page after the head edits the level on the Standards page', async () => {
-    const page = await browser.newPage({ viewport: { width: 1400, height: 900 } });
-    try {
-      await signIn(page, 'head');
+    await withPage({ role: 'head', device: { viewport: { width: 1400, height: 900 } } }, async (page) => {
       const { fields, units } = await page.evaluate(async () => ({
         fields: (await (await fetch('/api/fields')).json()).items,
         units: (await (await fetch('/api/auth/me')).json()).user.units,
@@ -85,8 +79,6 @@ describe('field page', () => {
         { level, original },
       );
       expect(status).toBe(200);
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

@@ -7,7 +7,7 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
 import { addDaysIso, localToday, mondayOf } from '@swardwise/domain';
-import { browser, checkA11y, PHONE, shots, signIn, useBrowser } from './browser.ts';
+import { browser, checkA11y, PHONE, shots, signIn, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -39,9 +39,7 @@ describe('game-day preparation', () => {
   let eventId = 0;
 
   test('should let the foreman prepare a booking from the field page and put its jobs on the week board', async () => {
-    const page = await browser.newPage({ viewport: { width: 1400, height: 900 } });
-    try {
-      await signIn(page, 'foreman');
+    await withPage({ role: 'foreman', device: { viewport: { width: 1400, height: 900 } } }, async (page) => {
       const timeZone = await page.evaluate(async () => (await (await fetch('/api/auth/me')).json()).timeZone as string);
       const today = localToday(timeZone);
       const eventOn = addDaysIso(today, 6);
@@ -98,19 +96,14 @@ describe('game-day preparation', () => {
       const paint = mine.steps.find((s: { step: string }) => s.step === 'paint_lines');
       const done = await page.evaluate(async (id) => (await fetch(`/api/work-orders/${id}/reports`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ status: 'done', actualHours: 1.5 }) })).status, paint.workOrderId);
       expect(done).toBe(201);
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should show the partner the checklist’s progress on a desktop', async () => {
     expect(eventId, 'the booking prepared before').toBeGreaterThan(0);
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
+    await withPage({}, async (page) => {
       await partnerSees(page, fieldId, eventId, 'desktop');
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should show it on a phone', async () => {

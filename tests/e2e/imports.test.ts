@@ -8,7 +8,7 @@ import os from 'node:os';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, describe, expect, inject, test } from 'vitest';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { followNav, shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 const work = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-imports-'));
@@ -34,11 +34,8 @@ async function sitesListed(page: Page, name: string): Promise<number> {
 
 describe('importing sites', () => {
   test('should show a bad row’s error, import a clean file, list the new site and undo it', async () => {
-    const page = await browser.newPage({ viewport: { width: 1360, height: 900 } });
-    try {
-      await signIn(page, 'foreman', '/district');
-      await page.locator('[data-test="nav-imports"]').click();
-      await page.waitForURL((url) => url.pathname === '/imports');
+    await withPage({ role: 'foreman', landing: '/district', device: { viewport: { width: 1360, height: 900 } } }, async (page) => {
+      await followNav(page, 'imports');
 
       await page.setInputFiles(
         '[data-test="import-file"]',
@@ -60,8 +57,7 @@ describe('importing sites', () => {
 
       expect(await sitesListed(page, SITE)).toBe(1);
 
-      await page.locator('[data-test="nav-imports"]').click();
-      await page.waitForURL((url) => url.pathname === '/imports');
+      await followNav(page, 'imports');
       const undo = page.locator('[data-test="undo-last"]');
       await expect.poll(() => undo.isEnabled()).toBe(true);
       await undo.click();
@@ -69,8 +65,6 @@ describe('importing sites', () => {
       await expect.poll(() => page.locator('[data-test="import-notice"]').textContent()).toContain('1 removed');
 
       expect(await sitesListed(page, SITE)).toBe(0);
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

@@ -7,7 +7,7 @@
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
-import { browser, checkA11y, keyboardSignIn, PHONE, shots, tabTo, useBrowser } from './browser.ts';
+import { checkA11y, PHONE, pickOption, shots, tabTo, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 // A week of the demo season no other browser test plans.
@@ -18,27 +18,9 @@ useBrowser();
 /** The element that has the focus, as its data-test key or tag. */
 const focused = (page: Page) => page.evaluate(() => document.activeElement?.closest('[data-test]')?.getAttribute('data-test') ?? document.activeElement?.tagName);
 
-/** Opens the focused Element Plus select with the keyboard and picks the option labelled `label`. */
-async function pickOption(page: Page, label: string) {
-  await page.keyboard.press('Enter');
-  const dropdown = page.locator('.el-select-dropdown:visible');
-  await dropdown.waitFor();
-  const options = await dropdown.locator('.el-select-dropdown__item').allInnerTexts();
-  expect(options).toContain(label);
-  for (let i = 0; i < options.length * 2; i++) {
-    if ((await dropdown.locator('.el-select-dropdown__item.is-hovering').innerText().catch(() => '')) === label) break;
-    await page.keyboard.press('ArrowDown');
-  }
-  await page.keyboard.press('Enter');
-  await dropdown.waitFor({ state: 'hidden' });
-}
-
 describe('each role’s main task with the keyboard alone', () => {
   test('should let a crew lead log a job done from Today', async () => {
-    const context = await browser.newContext(PHONE);
-    try {
-      const page = await context.newPage();
-      await keyboardSignIn(page, 'crew', '/today');
+    await withPage({ role: 'crew', landing: '/today', keyboard: true, device: PHONE }, async (page) => {
       await page.locator('[data-test="job-card"]').first().waitFor();
       const open = page.locator('[data-test="job-card"]:not([data-status="done"]):not([data-status="skipped"])').first();
       const id = Number(await open.getAttribute('data-order-id'));
@@ -58,15 +40,11 @@ describe('each role’s main task with the keyboard alone', () => {
       await page.locator('[data-test="outbox-waiting"]').waitFor({ state: 'detached' });
       const order = await page.evaluate(async (o) => (await (await fetch(`/api/work-orders/${o}`)).json()).order, id);
       expect(order).toMatchObject({ status: 'done', actualHours: 1.5 });
-    } finally {
-      await context.close();
-    }
+    });
   });
 
   test('should let a foreman generate and apply a week, then move a job to another crew', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
-      await keyboardSignIn(page, 'foreman', '/district');
+    await withPage({ role: 'foreman', landing: '/district', keyboard: true }, async (page) => {
       await tabTo(page, '[data-test="nav-week"]');
       await page.keyboard.press('Enter');
       await page.waitForURL((url) => url.pathname === '/week');
@@ -113,16 +91,11 @@ describe('each role’s main task with the keyboard alone', () => {
       const moved = await page.evaluate(async (o) => (await (await fetch(`/api/work-orders/${o}`)).json()).order, job.id);
       expect(moved).toMatchObject({ crewId: other.id, status: 'assigned' });
       await page.screenshot({ path: path.join(shots, 'keyboard-week.png') });
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should let a partner ask for a booking on his field from a phone', async () => {
-    const context = await browser.newContext(PHONE);
-    try {
-      const page = await context.newPage();
-      await keyboardSignIn(page, 'partner', '/my-fields');
+    await withPage({ role: 'partner', landing: '/my-fields', keyboard: true, device: PHONE }, async (page) => {
       await page.locator('[data-test="my-field"]').first().waitFor();
       await tabTo(page, '[data-test="my-field"] a');
       await page.keyboard.press('Enter');
@@ -142,15 +115,11 @@ describe('each role’s main task with the keyboard alone', () => {
       await page.keyboard.press('Enter');
       await dialog.waitFor({ state: 'hidden' });
       await expect.poll(() => page.locator('[data-test="booking"]', { hasText: 'Keyboard Cup semi-final' }).count()).toBe(1);
-    } finally {
-      await context.close();
-    }
+    });
   });
 
   test('should let the head reach the overview and a site', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
-      await keyboardSignIn(page, 'head', '/overview');
+    await withPage({ role: 'head', landing: '/overview', keyboard: true }, async (page) => {
       await page.locator('[data-test="city-totals"]').waitFor();
       // From a district's card to its sites, then into the first site.
       await tabTo(page, '[data-test^="district-"] a[href^="/sites"]');
@@ -167,8 +136,6 @@ describe('each role’s main task with the keyboard alone', () => {
       expect(await focused(page)).toBe('nav-overview');
       await page.keyboard.press('Enter');
       await page.waitForURL((url) => url.pathname === '/overview');
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

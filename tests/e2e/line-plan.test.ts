@@ -6,7 +6,7 @@
 import { execFileSync } from 'node:child_process';
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
-import { browser, PHONE, shots, signIn, useBrowser } from './browser.ts';
+import { browser, download, PHONE, shots, signIn, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -64,10 +64,7 @@ describe('line plan page', () => {
       await page.screenshot({ path: path.join(shots, 'line-plan-desktop.png'), fullPage: true });
       await page.locator('[data-test="lines-plan"]').screenshot({ path: path.join(shots, 'line-plan-view.png') });
 
-      const download = page.waitForEvent('download');
-      await page.locator('[data-test="lines-pdf"]').click();
-      const file = path.join(shots, 'line-plan-set-out.pdf');
-      await (await download).saveAs(file);
+      const file = await download(page, '[data-test="lines-pdf"]', 'line-plan-set-out.pdf');
       const text = execFileSync('pdftotext', ['-layout', file, '-'], { encoding: 'utf8' });
       expect(text).toMatch(/Set-out sheet/);
       expect(text).toMatch(/Soccer 7v7/);
@@ -78,9 +75,7 @@ describe('line plan page', () => {
     }
 
     // The crew lead reads the plan of a field of his crew's scope (another field may be denied, as the abilities say).
-    const phone = await browser.newPage({ ...PHONE });
-    try {
-      await signIn(phone, 'crew');
+    await withPage({ role: 'crew', device: { ...PHONE } }, async (phone) => {
       const readable = await phone.evaluate(async () => (await (await fetch('/api/fields')).json()).items as { id: number }[]);
       expect(readable.length, 'a field the crew lead reads').toBeGreaterThan(0);
       const crewField = readable[0]!.id;
@@ -103,8 +98,6 @@ describe('line plan page', () => {
       await phone.screenshot({ path: path.join(shots, 'line-plan-phone.png') });
       // Saving is refused to a crew lead on the server too.
       expect(await phone.evaluate(async (id) => (await fetch(`/api/fields/${id}/lines`, { method: 'PATCH', headers: { 'content-type': 'application/json' }, body: '{}' })).status, crewField)).toBe(403);
-    } finally {
-      await phone.close();
-    }
+    });
   });
 });

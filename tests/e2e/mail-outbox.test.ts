@@ -5,7 +5,7 @@
 import path from 'node:path';
 import { describe, expect, test } from 'vitest';
 import { mailOutbox } from '../../apps/api/src/db/schema/index.ts';
-import { browser, shots, useBrowser } from './browser.ts';
+import { shots, useBrowser, withPage } from './browser.ts';
 import { useOwnServer } from './own-server.ts';
 
 useBrowser();
@@ -21,8 +21,7 @@ describe('mail outbox', () => {
         { to: 'foreman.east@test.example', subject: 'Reset your Swardwise password', text: 'Open http://x/reset?token=secret-link-4567 to reset.', status: 'queued', attempts: 3, lastError: 'connect ECONNREFUSED 10.0.0.5:587', nextAttemptAt: new Date(Date.now() + 3600_000) },
       ])
       .returning({ id: mailOutbox.id });
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
+    await withPage({}, async (page) => {
       await own.signIn(page, 'head');
       await page.getByRole('link', { name: 'Mail outbox' }).first().click();
       await page.waitForURL((url) => url.pathname === '/mail-outbox');
@@ -47,8 +46,6 @@ describe('mail outbox', () => {
       await expect.poll(() => page.locator(`[data-test="mail-state-${failed!.id}"]`).innerText()).toBe('Sent');
       expect(await page.locator(`[data-test="send-again-${failed!.id}"]`).count()).toBe(0);
       await page.screenshot({ path: path.join(shots, 'mail-outbox-sent.png'), fullPage: true });
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

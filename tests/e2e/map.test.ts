@@ -6,7 +6,7 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
 import type { Role } from '@swardwise/domain';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { browser, followNav, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -15,8 +15,7 @@ useBrowser();
 async function openMap(role: Role): Promise<Page> {
   const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
   await signIn(page, role);
-  await page.locator('[data-test="nav-map"]').click();
-  await page.waitForURL((url) => url.pathname === '/map');
+  await followNav(page, 'map');
   await page.locator('[data-test="field-map"][data-ready="true"]').waitFor();
   return page;
 }

@@ -6,7 +6,7 @@
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, test } from 'vitest';
-import { browser, PHONE, shots, signIn, useBrowser } from './browser.ts';
+import { PHONE, shots, useBrowser, withPage } from './browser.ts';
 
 useBrowser();
 
@@ -22,10 +22,8 @@ async function keptForOffline(page: Page) {
 
 describe('Today with no signal', () => {
   test('should open after one visit with the last known jobs, marked as such, and answer nothing else from the copies', async () => {
-    const context = await browser.newContext(PHONE);
-    try {
-      const page = await context.newPage();
-      await signIn(page, 'crew', '/today');
+    await withPage({ role: 'crew', landing: '/today', device: PHONE }, async (page) => {
+      const context = page.context();
       await page.locator('[data-test="job-card"]').first().waitFor();
       const online = await page.locator('[data-test="job-card"]').count();
       expect(await page.locator('[data-test="today-offline"]').count()).toBe(0);
@@ -57,8 +55,6 @@ describe('Today with no signal', () => {
       await page.locator('[data-test="phone-drawer"] [data-test="sign-out"]').click();
       await page.waitForURL((url) => url.pathname === '/sign-in');
       await expect.poll(() => page.evaluate(async (name) => (await caches.has(name) ? (await (await caches.open(name)).keys()).length : 0), TODAY_API_CACHE)).toBe(0);
-    } finally {
-      await context.close();
-    }
+    });
   });
 });

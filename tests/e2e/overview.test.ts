@@ -5,15 +5,13 @@
  */
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { shots, useBrowser, withPage } from './browser.ts';
 
 useBrowser();
 
 describe('overview', () => {
   test('should show the head cards and charts and lead from fields below target to those fields', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
-      await signIn(page, 'head');
+    await withPage({ role: 'head' }, async (page) => {
       await page.goto(`${inject('baseUrl')}/overview`);
       await page.locator('[data-test="overview-cards"]').waitFor();
       for (const chart of ['area', 'labour', 'mowings', 'score']) await page.locator(`[data-test="chart-${chart}"] canvas`).waitFor();
@@ -29,15 +27,11 @@ describe('overview', () => {
       await page.locator('[data-test="row"]').first().waitFor();
       // The list holds exactly the fields the card counted.
       await expect.poll(async () => page.locator('[data-test="row"]').count(), { timeout: 20_000 }).toBe(Math.min(below, 25));
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should show a foreman his own district only', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
-      await signIn(page, 'foreman');
+    await withPage({ role: 'foreman' }, async (page) => {
       await page.goto(`${inject('baseUrl')}/overview`);
       await page.locator('[data-test="overview-cards"]').waitFor();
       expect(await page.locator('[data-test="page-title"]').innerText()).toMatch(/^Overview: /);
@@ -46,8 +40,6 @@ describe('overview', () => {
       const answer = await page.evaluate(async () => (await fetch('/api/overview?districtId=999999')).status);
       expect(answer).toBe(403);
       await page.screenshot({ path: path.join(shots, 'overview-foreman.png'), fullPage: true });
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

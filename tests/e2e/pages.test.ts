@@ -8,11 +8,10 @@ import os from 'node:os';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, describe, expect, inject, test } from 'vitest';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { browser, DESKTOP, followNav, shots, signIn, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 const work = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-pages-'));
-const VIEWPORT = { width: 1366, height: 900 };
 
 useBrowser();
 afterAll(() => fs.rmSync(work, { recursive: true, force: true }));
@@ -24,11 +23,8 @@ async function settled(page: Page) {
 
 describe('crews, equipment, weather and bookings pages', () => {
   test('should let a foreman add a crew and find it in the crews table', async () => {
-    const page = await browser.newPage({ viewport: VIEWPORT });
-    try {
-      await signIn(page, 'foreman');
-      await page.locator('[data-test="nav-crews"]').click();
-      await page.waitForURL((url) => url.pathname === '/crews');
+    await withPage({ role: 'foreman' }, async (page) => {
+      await followNav(page, 'crews');
       await page.locator('[data-test="row"]').first().waitFor();
       const before = await page.locator('[data-test="row"]').count();
 
@@ -60,13 +56,11 @@ describe('crews, equipment, weather and bookings pages', () => {
       expect(text).toContain('9:00 h');
       expect(text).toContain('Mon–Thu, Sat');
       await page.screenshot({ path: path.join(shots, 'crews.png'), fullPage: true });
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should show the head crews and equipment read-only', async () => {
-    const context = await browser.newContext({ viewport: VIEWPORT });
+    const context = await browser.newContext(DESKTOP);
     const page = await context.newPage();
     try {
       await signIn(page, 'head');
@@ -87,11 +81,8 @@ describe('crews, equipment, weather and bookings pages', () => {
   });
 
   test('should show a station file’s bad row with its error and not let it be saved', async () => {
-    const page = await browser.newPage({ viewport: VIEWPORT });
-    try {
-      await signIn(page, 'foreman');
-      await page.locator('[data-test="nav-weather"]').click();
-      await page.waitForURL((url) => url.pathname === '/weather');
+    await withPage({ role: 'foreman' }, async (page) => {
+      await followNav(page, 'weather');
       await page.locator('[data-test="weather-strip"]').waitFor();
       await page.screenshot({ path: path.join(shots, 'weather.png'), fullPage: true });
 
@@ -112,15 +103,11 @@ describe('crews, equipment, weather and bookings pages', () => {
       expect(await page.locator('[data-test="weather-commit"]').isDisabled()).toBe(true);
       await page.locator('[data-test="weather-upload"]').screenshot({ path: path.join(shots, 'weather-upload-errors.png') });
       await page.screenshot({ path: path.join(shots, 'weather-with-preview.png'), fullPage: true });
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should list equipment by kind with blade care, and a field’s coming bookings', async () => {
-    const page = await browser.newPage({ viewport: VIEWPORT });
-    try {
-      await signIn(page, 'foreman');
+    await withPage({ role: 'foreman' }, async (page) => {
       const { districtId, crewId } = await page.evaluate(async () => {
         const crews = (await (await fetch('/api/crews')).json()).items as { id: number; districtId: number }[];
         return { districtId: crews[0]!.districtId, crewId: crews[0]!.id };
@@ -133,8 +120,7 @@ describe('crews, equipment, weather and bookings pages', () => {
       expect(await post({ districtId, kind: 'reel_mower', name: 'Reel 5-gang (R-1)', cuttingWidthM: 3.4, speedKmh: 7, fieldEfficiency: 0.75, hocMinMm: 10, hocMaxMm: 38, hourMeterH: 96, sharpenIntervalH: 50, lastSharpenedAtH: 80 })).toBe(201);
       expect(await post({ districtId, kind: 'line_marker', name: 'Line marker (M-2)', hourMeterH: 40 })).toBe(201);
 
-      await page.locator('[data-test="nav-equipment"]').click();
-      await page.waitForURL((url) => url.pathname === '/equipment');
+      await followNav(page, 'equipment');
       await page.locator('[data-test="row"]', { hasText: 'Rotary 72' }).waitFor();
       const kinds = await page.locator('[data-test="row"]').evaluateAll((rows) => rows.map((r) => (r as HTMLElement).innerText.split('\t')[0]!.trim()));
       expect(kinds).toEqual([...kinds].sort());
@@ -167,9 +153,7 @@ describe('crews, equipment, weather and bookings pages', () => {
       await page.locator('[data-test="booking"]').first().waitFor();
       expect(await page.locator('[data-test="new-booking"]').count()).toBe(1);
       await page.screenshot({ path: path.join(shots, 'field-bookings.png'), fullPage: true });
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should let a partner book a game on his school’s field from a phone', async () => {

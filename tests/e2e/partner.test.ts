@@ -5,7 +5,7 @@
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
-import { browser, checkA11y, PHONE, shots, signIn, useBrowser } from './browser.ts';
+import { browser, checkA11y, PHONE, shots, signIn, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -41,15 +41,12 @@ async function walk(page: Page, name: string) {
 
 describe('the partner’s own view', () => {
   test('should show My fields and a field’s own page on a desktop, and send the staff address to the partner’s page', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
+    await withPage({}, async (page) => {
       const id = await walk(page, 'desktop');
       await page.goto(`${baseUrl}/fields/${id}`);
       await page.waitForURL((url) => url.pathname === `/my-fields/${id}`);
       await page.locator('[data-test="partner-status"]').waitFor();
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should fit a phone', async () => {
@@ -96,10 +93,7 @@ describe('the partner’s own view', () => {
   });
 
   test('should give a foreman one calendar address per crew on the crews page, on a phone too', async () => {
-    const context = await browser.newContext(PHONE);
-    try {
-      const page = await context.newPage();
-      await signIn(page, 'foreman');
+    await withPage({ role: 'foreman', device: PHONE }, async (page) => {
       await page.goto(`${baseUrl}/crews`);
       const card = page.locator('[data-test="calendar-feeds"]');
       await card.waitFor();
@@ -111,9 +105,7 @@ describe('the partner’s own view', () => {
       await card.scrollIntoViewIfNeeded();
       expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
       await page.screenshot({ path: path.join(shots, 'foreman-calendar-phone.png') });
-    } finally {
-      await context.close();
-    }
+    });
   });
 
   for (const [name, options] of [
@@ -121,10 +113,7 @@ describe('the partner’s own view', () => {
     ['phone', PHONE],
   ] as const) {
     test(`should list the partner’s request on the field’s page with its state and let them change it while requested (${name})`, async () => {
-      const context = await browser.newContext(options);
-      try {
-        const page = await context.newPage();
-        await signIn(page, 'partner', '/my-fields');
+      await withPage({ role: 'partner', landing: '/my-fields', device: options }, async (page) => {
         const card = page.locator('[data-test="my-field"]').first();
         await card.waitFor();
         await card.locator('a').first().click();
@@ -156,9 +145,7 @@ describe('the partner’s own view', () => {
         await dialog.waitFor({ state: 'hidden' });
         await expect.poll(() => row.innerText()).toMatch(/Request · Wet area/);
         await expect.poll(() => page.locator('[data-type="request"]').allInnerTexts()).toEqual(expect.arrayContaining([expect.stringMatching(/after every rain/)]));
-      } finally {
-        await context.close();
-      }
+      });
     });
   }
 });

@@ -5,15 +5,13 @@
  */
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { shots, useBrowser, withPage } from './browser.ts';
 
 useBrowser();
 
 describe('records over the demo season', () => {
   test('should show a foreman his district’s season with late and missed mowings', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
-      await signIn(page, 'foreman');
+    await withPage({ role: 'foreman' }, async (page) => {
       await page.goto(`${inject('baseUrl')}/records`);
       await page.locator('[data-test="records-totals"]').waitFor();
       await page.locator('.el-range-input').first().click();
@@ -22,8 +20,6 @@ describe('records over the demo season', () => {
       await expect.poll(async () => Number(((await page.locator('[data-test="records-mowings"]').innerText()).match(/\d+/g) ?? []).map(Number).sort((a, b) => b - a)[0] ?? 0), { timeout: 20_000 }).toBeGreaterThan(200);
       await page.locator('[data-test="late-mowings"]').waitFor();
       await page.screenshot({ path: path.join(shots, 'records-season.png'), fullPage: true });
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

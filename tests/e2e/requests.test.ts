@@ -4,39 +4,20 @@
  * scheduled.
  */
 import path from 'node:path';
-import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
 import { addDaysIso, localToday } from '@swardwise/domain';
-import { browser, checkA11y, keyboardSignIn, PHONE, shots, signIn, tabTo, turfPhoto, useBrowser } from './browser.ts';
+import { checkA11y, PHONE, pickOption, shots, tabTo, turfPhoto, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
 useBrowser();
-
-/** Opens the focused Element Plus select with the keyboard and picks the option labelled `label`. */
-async function pickOption(page: Page, label: string) {
-  await page.keyboard.press('Enter');
-  const dropdown = page.locator('.el-select-dropdown:visible');
-  await dropdown.waitFor();
-  const options = await dropdown.locator('.el-select-dropdown__item').allInnerTexts();
-  expect(options).toContain(label);
-  for (let i = 0; i < options.length * 2; i++) {
-    if ((await dropdown.locator('.el-select-dropdown__item.is-hovering').innerText().catch(() => '')) === label) break;
-    await page.keyboard.press('ArrowDown');
-  }
-  await page.keyboard.press('Enter');
-  await dropdown.waitFor({ state: 'hidden' });
-}
 
 // The steps run in order, each its own test: the request the partner files is the one the foreman schedules.
 describe('requests', () => {
   let requestId = 0;
 
   test('should let a partner file a game request from a phone with the keyboard, with a photo', async () => {
-    const phone = await browser.newContext(PHONE);
-    try {
-      const page = await phone.newPage();
-      await keyboardSignIn(page, 'partner');
+    await withPage({ role: 'partner', keyboard: true, device: PHONE }, async (page) => {
       const timeZone = await page.evaluate(async () => (await (await fetch('/api/auth/me')).json()).timeZone as string);
       const gameOn = addDaysIso(localToday(timeZone), 9);
       await page.goto(`${baseUrl}/requests`);
@@ -70,16 +51,12 @@ describe('requests', () => {
       requestId = Number(new URL(page.url()).searchParams.get('open'));
       expect(requestId).toBeGreaterThan(0);
       await page.screenshot({ path: path.join(shots, 'request-filed-phone.png') });
-    } finally {
-      await phone.close();
-    }
+    });
   });
 
   test('should let the foreman find it from his district page, answer it and turn it into a booking', async () => {
     expect(requestId, 'the request filed before').toBeGreaterThan(0);
-    const desk = await browser.newPage({ viewport: { width: 1400, height: 900 } });
-    try {
-      await signIn(desk, 'foreman', '/district');
+    await withPage({ role: 'foreman', landing: '/district', device: { viewport: { width: 1400, height: 900 } } }, async (desk) => {
       const link = desk.locator('[data-test="open-requests"]');
       // The count shows 0 until the list has loaded, which on a busy machine takes more than the poll's default second.
       await expect.poll(async () => Number(await link.locator('[data-test="open-requests-count"]').innerText()), { timeout: 20_000 }).toBeGreaterThan(0);
@@ -104,17 +81,12 @@ describe('requests', () => {
       await desk.screenshot({ path: path.join(shots, 'request-scheduled-desktop.png') });
       const booked = await desk.evaluate(async (id) => (await (await fetch(`/api/requests/${id}`)).json()).request.eventId as number | null, requestId);
       expect(booked).not.toBeNull();
-    } finally {
-      await desk.close();
-    }
+    });
   });
 
   test('should show the partner the request scheduled, with the foreman’s answer', async () => {
     expect(requestId, 'the request scheduled before').toBeGreaterThan(0);
-    const again = await browser.newContext(PHONE);
-    try {
-      const page = await again.newPage();
-      await signIn(page, 'partner');
+    await withPage({ role: 'partner', device: PHONE }, async (page) => {
       await page.goto(`${baseUrl}/requests`);
       const row = page.locator('[data-test="request-state"]').first();
       await row.waitFor();
@@ -125,8 +97,6 @@ describe('requests', () => {
       await expect.poll(() => drawer.locator('[data-test="request-state"]').innerText()).toBe('Scheduled');
       await expect.poll(() => drawer.innerText()).toMatch(/last working day before the game/);
       await page.screenshot({ path: path.join(shots, 'request-scheduled-phone.png'), fullPage: true });
-    } finally {
-      await again.close();
-    }
+    });
   });
 });

@@ -6,7 +6,7 @@ import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
 import type { Role } from '@swardwise/domain';
 import { DEMO_SIGN_INS } from '../../apps/api/src/db/seed/demo-city.ts';
-import { browser, enterSignIn, shots, useBrowser } from './browser.ts';
+import { browser, enterSignIn, shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -22,8 +22,7 @@ const expected: Record<Role, { landing: string; nav: string[] }> = {
 
 describe('signing in by role', () => {
   test.each(Object.keys(expected) as Role[])('should land %s on its own page with only its navigation', async (role) => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
-    try {
+    await withPage({ device: { viewport: { width: 1280, height: 800 } } }, async (page) => {
       await page.goto(`${baseUrl}/`);
       await page.waitForURL(/\/sign-in/);
       await enterSignIn(page, role, expected[role].landing);
@@ -31,23 +30,18 @@ describe('signing in by role', () => {
       const nav = await page.locator('[data-test^="nav-"]').evaluateAll((els) => els.map((el) => el.getAttribute('data-test')!.slice(4)));
       expect(nav.sort()).toEqual([...expected[role].nav].sort());
       await page.screenshot({ path: path.join(shots, `landing-${role}.png`), fullPage: true });
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should show a clear message on a wrong password and stay on the sign-in page', async () => {
-    const page = await browser.newPage();
-    try {
+    await withPage({}, async (page) => {
       await page.goto(`${baseUrl}/sign-in`);
       await page.getByLabel('E-mail').fill(DEMO_SIGN_INS.head.email);
       await page.getByLabel('Password').fill('not-the-password');
       await page.getByRole('button', { name: /sign in/i }).click();
       await expect.poll(() => page.getByText('The e-mail or password is not right').count()).toBeGreaterThan(0);
       expect(new URL(page.url()).pathname).toBe('/sign-in');
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should send a partner who types another role’s address back to his own page', async () => {

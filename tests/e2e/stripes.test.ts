@@ -5,7 +5,7 @@
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
 import { DEFAULT_TIME_ZONE, localToday, mondayOf } from '@swardwise/domain';
-import { browser, PHONE, shots, signIn, useBrowser } from './browser.ts';
+import { browser, PHONE, shots, signIn, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -85,10 +85,7 @@ describe('stripe patterns', () => {
       await foreman.close();
     }
 
-    const context = await browser.newContext(PHONE);
-    try {
-      const phone = await context.newPage();
-      await signIn(phone, 'crew', '/today');
+    await withPage({ role: 'crew', landing: '/today', device: PHONE }, async (phone) => {
       await phone.waitForURL((url) => url.pathname === '/today');
       const job = phone.locator(`[data-test="job-card"][data-order-id="${orderId}"]`);
       await job.waitFor();
@@ -102,8 +99,6 @@ describe('stripe patterns', () => {
       expect(await card.locator('[data-test="stripes-save"]').count()).toBe(0);
       await card.scrollIntoViewIfNeeded();
       await phone.screenshot({ path: path.join(shots, 'stripes-card-phone.png') });
-    } finally {
-      await context.close();
-    }
+    });
   });
 });

@@ -6,7 +6,7 @@
  * Counts, not times: the times are in the benchmark (tests/bench/today.ts).
  */
 import { describe, expect, inject, test } from 'vitest';
-import { browser, PHONE, signIn, useBrowser } from './browser.ts';
+import { browser, markFirstJobCard, PHONE, signIn, useBrowser } from './browser.ts';
 
 useBrowser();
 const baseUrl = inject('baseUrl');
@@ -23,13 +23,7 @@ describe('Today on a phone, first visit', () => {
       const fresh = await browser.newContext({ ...PHONE, serviceWorkers: 'block' });
       await fresh.addCookies(cookies);
       // The moment the first job card is in the page, and what had been asked for by then.
-      await fresh.addInitScript(() => {
-        new MutationObserver((_, observer) => {
-          if (!document.querySelector('[data-test="job-card"]')) return;
-          (window as unknown as { firstCard: number }).firstCard = performance.now();
-          observer.disconnect();
-        }).observe(document, { childList: true, subtree: true });
-      });
+      await markFirstJobCard(fresh);
       const phone = await fresh.newPage();
       const answer = await phone.goto(`${baseUrl}/today`);
       await phone.locator('[data-test="job-card"]').first().waitFor();

@@ -4,7 +4,7 @@
  */
 import path from 'node:path';
 import { describe, expect, test } from 'vitest';
-import { browser, shots, useBrowser } from './browser.ts';
+import { shots, useBrowser, withPage } from './browser.ts';
 import { useOwnServer } from './own-server.ts';
 
 useBrowser();
@@ -14,8 +14,7 @@ const own = useOwnServer();
 
 describe('weather gap', () => {
   test('should tell a foreman on a field’s needs that no weather has come since the last day on file', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
+    await withPage({}, async (page) => {
       await own.signIn(page, 'foreman');
       // The service is down: asking it for the missing days fails, and says so.
       const pull = await page.request.post(`${own.baseUrl}/api/weather/stations/${own.fixture.weather.stationId}/pull`, { data: { from: own.fixture.weather.end, to: own.fixture.weather.end } });
@@ -34,8 +33,6 @@ describe('weather gap', () => {
       // The needs still answer, on the last weather on file.
       expect(await page.locator('[data-test="needs-week"]').innerText()).not.toBe('');
       await page.screenshot({ path: path.join(shots, 'field-needs-weather-gap.png') });
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

@@ -6,14 +6,13 @@
 import path from 'node:path';
 import type { Locator, Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
-import { browser, PHONE, shots, signIn, useBrowser } from './browser.ts';
+import { DESKTOP, PHONE, shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 // Weeks of the demo season no other browser test plans.
 const DESKTOP_WEEK = '2026-09-14';
 const PHONE_WEEK = '2026-09-21';
 const HAND_WEEK = '2026-09-28';
-const DESKTOP = { viewport: { width: 1366, height: 900 } };
 
 interface Order {
   id: number;
@@ -29,12 +28,9 @@ interface Order {
 
 useBrowser();
 
-async function openWeek(options: typeof DESKTOP | typeof PHONE, week: string): Promise<Page> {
-  const page = await browser.newPage(options);
-  await signIn(page, 'foreman');
+async function openWeek(page: Page, week: string) {
   await page.goto(`${baseUrl}/week?week=${week}`);
   await page.locator('[data-test="week-grid"]').waitFor();
-  return page;
 }
 
 const myDistrict = (page: Page): Promise<number> => page.evaluate(async () => (await (await fetch('/api/auth/me')).json()).user.districtId as number);
@@ -77,40 +73,40 @@ describe('generating a week again', () => {
     ['phone', PHONE, PHONE_WEEK],
   ] as const) {
     test(`should propose nothing new after apply and confirm (${name})`, async () => {
-      const page = await openWeek(options, week);
-      try {
-        const districtId = await myDistrict(page);
-        const first = await generateAndApply(page);
-        expect(Number(/(\d+) added/.exec(first)?.[1])).toBeGreaterThan(0);
-        const applied = await apiOrders(page, districtId, week);
-        await page.locator('[data-test="confirm-week"]').click();
-        await page.locator('.el-message-box__btns .el-button--primary').click();
-        await page.locator('[data-test="confirm-week"]').waitFor({ state: 'hidden' });
+      await withPage({ role: 'foreman', device: options }, async (page) => {
+        await openWeek(page, week);
+        try {
+          const districtId = await myDistrict(page);
+          const first = await generateAndApply(page);
+          expect(Number(/(\d+) added/.exec(first)?.[1])).toBeGreaterThan(0);
+          const applied = await apiOrders(page, districtId, week);
+          await page.locator('[data-test="confirm-week"]').click();
+          await page.locator('.el-message-box__btns .el-button--primary').click();
+          await page.locator('[data-test="confirm-week"]').waitFor({ state: 'hidden' });
 
-        await page.locator('[data-test="generate-week"]').click();
-        const again = page.locator('[data-test="diff-summary"]');
-        await again.waitFor();
-        expect(await again.textContent()).toMatch(/^\s*0 added · 0 changed · 0 removed/);
-        await page.screenshot({ path: path.join(shots, `week-again-${name}.png`) });
-        await page.locator('[data-test="diff-apply"]').click();
-        await page.locator('[data-test="diff-dialog"]').waitFor({ state: 'hidden' });
-        const after = await apiOrders(page, districtId, week);
-        expect(after.filter((o) => o.task === 'paint_lines').length).toBe(applied.filter((o) => o.task === 'paint_lines').length);
-        expect(after.length).toBe(applied.length);
-      } catch (e) {
-        await page.screenshot({ path: path.join(shots, `week-again-${name}-failed.png`) });
-        throw e;
-      } finally {
-        await page.close();
-      }
+          await page.locator('[data-test="generate-week"]').click();
+          const again = page.locator('[data-test="diff-summary"]');
+          await again.waitFor();
+          expect(await again.textContent()).toMatch(/^\s*0 added · 0 changed · 0 removed/);
+          await page.screenshot({ path: path.join(shots, `week-again-${name}.png`) });
+          await page.locator('[data-test="diff-apply"]').click();
+          await page.locator('[data-test="diff-dialog"]').waitFor({ state: 'hidden' });
+          const after = await apiOrders(page, districtId, week);
+          expect(after.filter((o) => o.task === 'paint_lines').length).toBe(applied.filter((o) => o.task === 'paint_lines').length);
+          expect(after.length).toBe(applied.length);
+        } catch (e) {
+          await page.screenshot({ path: path.join(shots, `week-again-${name}-failed.png`) });
+          throw e;
+        }
+      });
     });
   }
 });
 
 describe('work by hand on the board', () => {
   test('should add a one-off job and rain out a day with the keyboard, the crew seeing the reason', async () => {
-    const page = await openWeek(DESKTOP, HAND_WEEK);
-    try {
+    await withPage({ role: 'foreman' }, async (page) => {
+      await openWeek(page, HAND_WEEK);
       const districtId = await myDistrict(page);
       await generateAndApply(page);
 
@@ -158,11 +154,8 @@ describe('work by hand on the board', () => {
       await expect.poll(() => page.locator('[data-test="card-cancelled"]').count()).toBe(before.length);
       await page.screenshot({ path: path.join(shots, 'week-manual-rain-out.png'), fullPage: true });
 
-      const phone = await browser.newPage(PHONE);
-      try {
-        await signIn(phone, 'foreman');
-        await phone.goto(`${baseUrl}/week?week=${HAND_WEEK}`);
-        await phone.locator('[data-test="week-grid"]').waitFor();
+      await withPage({ role: 'foreman', device: PHONE }, async (phone) => {
+        await openWeek(phone, HAND_WEEK);
         await phone.locator('[data-test="card-cancelled"]').first().waitFor();
         await phone.screenshot({ path: path.join(shots, 'week-manual-rain-out-phone.png') });
         await phone.locator('[data-test="rain-out"]').click();
@@ -170,11 +163,7 @@ describe('work by hand on the board', () => {
         // The dialog fades in.
         await phone.waitForTimeout(500);
         await phone.screenshot({ path: path.join(shots, 'week-rain-out-dialog-phone.png') });
-      } finally {
-        await phone.close();
-      }
-    } finally {
-      await page.close();
-    }
+      });
+    });
   });
 });

@@ -6,8 +6,7 @@
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
-import type { Role } from '@swardwise/domain';
-import { browser, shots, signIn, useBrowser } from './browser.ts';
+import { followNav, shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 // A week inside the demo season, with weather for every day; no other browser test plans it.
@@ -26,17 +25,10 @@ useBrowser();
  * scrolls to the target after pressing on the source, which on a scrolled page would pick up
  * whatever card is then under the mouse.
  */
-const TALL = { width: 1366, height: 3600 };
-
-async function openAs(role: Role, viewport = { width: 1366, height: 900 }): Promise<Page> {
-  const page = await browser.newPage({ viewport });
-  await signIn(page, role);
-  return page;
-}
+const TALL = { viewport: { width: 1366, height: 3600 } };
 
 async function openWeek(page: Page) {
-  await page.locator('[data-test="nav-week"]').click();
-  await page.waitForURL((url) => url.pathname === '/week');
+  await followNav(page, 'week');
   await page.goto(`${baseUrl}/week?week=${WEEK}`);
   await page.locator('[data-test="week-grid"]').waitFor();
 }
@@ -52,57 +44,55 @@ const card = (page: Page, id: number) => page.locator(`[data-test="order-card"][
 
 describe('the week plan board', () => {
   test('should let a foreman generate the week and assign two jobs to a crew by dragging them', async () => {
-    const page = await openAs('foreman', TALL);
-    try {
-      await openWeek(page);
-      const districtId = await myDistrict(page);
-      // The demo's season already holds this week's work done; the plan adds what it still asks.
-      const before = (await apiBoard(page, districtId)).orders.length;
+    await withPage({ role: 'foreman', device: TALL }, async (page) => {
+      try {
+        await openWeek(page);
+        const districtId = await myDistrict(page);
+        // The demo's season already holds this week's work done; the plan adds what it still asks.
+        const before = (await apiBoard(page, districtId)).orders.length;
 
-      await page.locator('[data-test="generate-week"]').click();
-      await page.locator('[data-test="diff-summary"]').waitFor();
-      const summary = await page.locator('[data-test="diff-summary"]').textContent();
-      const added = Number(/(\d+) added/.exec(summary ?? '')?.[1]);
-      expect(added).toBeGreaterThan(0);
-      // The preview writes nothing.
-      expect((await apiBoard(page, districtId)).orders).toHaveLength(before);
-      await page.screenshot({ path: path.join(shots, 'week-diff.png'), clip: { x: 0, y: 0, width: 1366, height: 900 } });
-      await page.locator('[data-test="diff-apply"]').click();
-      // Applying writes every order in one transaction: seconds on a busy machine.
-      await expect.poll(() => page.locator('[data-test="order-card"]').count(), { timeout: 15_000 }).toBe(before + added);
-      // The board reloads after applying; a drag that starts under the loading mask is lost.
-      await expect.poll(() => page.locator('[data-test="week-grid"] .el-loading-mask').first().isVisible().catch(() => false), { timeout: 20_000 }).toBe(false);
-      await page.screenshot({ path: path.join(shots, 'week-board.png'), clip: { x: 0, y: 0, width: 1366, height: 900 } });
+        await page.locator('[data-test="generate-week"]').click();
+        await page.locator('[data-test="diff-summary"]').waitFor();
+        const summary = await page.locator('[data-test="diff-summary"]').textContent();
+        const added = Number(/(\d+) added/.exec(summary ?? '')?.[1]);
+        expect(added).toBeGreaterThan(0);
+        // The preview writes nothing.
+        expect((await apiBoard(page, districtId)).orders).toHaveLength(before);
+        await page.screenshot({ path: path.join(shots, 'week-diff.png'), clip: { x: 0, y: 0, width: 1366, height: 900 } });
+        await page.locator('[data-test="diff-apply"]').click();
+        // Applying writes every order in one transaction: seconds on a busy machine.
+        await expect.poll(() => page.locator('[data-test="order-card"]').count(), { timeout: 15_000 }).toBe(before + added);
+        // The board reloads after applying; a drag that starts under the loading mask is lost.
+        await expect.poll(() => page.locator('[data-test="week-grid"] .el-loading-mask').first().isVisible().catch(() => false), { timeout: 20_000 }).toBe(false);
+        await page.screenshot({ path: path.join(shots, 'week-board.png'), clip: { x: 0, y: 0, width: 1366, height: 900 } });
 
-      const board = await apiBoard(page, districtId);
-      expect(board.crews.length).toBeGreaterThanOrEqual(2);
-      const [from, to] = board.crews;
-      const target = '2026-07-15'; // the Wednesday
-      const jobs = board.orders.filter((o) => o.crewId === from!.id && o.status === 'planned').slice(0, 2);
-      expect(jobs).toHaveLength(2);
-      for (const job of jobs) {
-        const patched = page.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${job.id}`) && r.request().method() === 'PATCH');
-        await card(page, job.id).dragTo(cell(page, to!.id, target));
-        expect((await patched).status()).toBe(200);
-        await expect.poll(() => cell(page, to!.id, target).locator(`[data-order-id="${job.id}"]`).count()).toBe(1);
+        const board = await apiBoard(page, districtId);
+        expect(board.crews.length).toBeGreaterThanOrEqual(2);
+        const [from, to] = board.crews;
+        const target = '2026-07-15'; // the Wednesday
+        const jobs = board.orders.filter((o) => o.crewId === from!.id && o.status === 'planned').slice(0, 2);
+        expect(jobs).toHaveLength(2);
+        for (const job of jobs) {
+          const patched = page.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${job.id}`) && r.request().method() === 'PATCH');
+          await card(page, job.id).dragTo(cell(page, to!.id, target));
+          expect((await patched).status()).toBe(200);
+          await expect.poll(() => cell(page, to!.id, target).locator(`[data-order-id="${job.id}"]`).count()).toBe(1);
+        }
+
+        const after = await apiBoard(page, districtId);
+        for (const job of jobs) {
+          expect(after.orders.find((o) => o.id === job.id)).toMatchObject({ crewId: to!.id, plannedDate: target, status: 'assigned', pinned: true });
+        }
+        expect(await card(page, jobs[0]!.id).locator('[data-test="mark-pinned"]').count()).toBe(1);
+      } catch (e) {
+        await page.screenshot({ path: path.join(shots, 'week-drag-failed.png'), fullPage: true });
+        throw e;
       }
-
-      const after = await apiBoard(page, districtId);
-      for (const job of jobs) {
-        expect(after.orders.find((o) => o.id === job.id)).toMatchObject({ crewId: to!.id, plannedDate: target, status: 'assigned', pinned: true });
-      }
-      expect(await card(page, jobs[0]!.id).locator('[data-test="mark-pinned"]').count()).toBe(1);
-    } catch (e) {
-      await page.screenshot({ path: path.join(shots, 'week-drag-failed.png'), fullPage: true });
-      throw e;
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should reload and say so when someone else changed a card before it was dropped', async () => {
-    const page = await openAs('foreman', TALL);
-    try {
+    await withPage({ role: 'foreman', device: TALL }, async (page) => {
       await openWeek(page);
       await page.locator('[data-test="order-card"]').first().waitFor();
       const districtId = await myDistrict(page);
@@ -124,14 +114,11 @@ describe('the week plan board', () => {
       await expect.poll(() => cell(page, job.crewId!, job.plannedDate).locator(`[data-order-id="${job.id}"]`).textContent()).toContain('2:30 h');
       const after = (await apiBoard(page, districtId)).orders.find((o) => o.id === job.id)!;
       expect(after.crewId).toBe(job.crewId);
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should print a crew sheet with the route, each job with blanks for hours and notes, and the cautions', async () => {
-    const page = await openAs('foreman');
-    try {
+    await withPage({ role: 'foreman' }, async (page) => {
       await openWeek(page);
       const link = page.locator('[data-test="print-sheet"]').first();
       const href = (await link.getAttribute('href'))!;
@@ -144,22 +131,17 @@ describe('the week plan board', () => {
       await page.emulateMedia({ media: 'print' });
       expect(await page.locator('[data-test="sheet-print"]').isVisible()).toBe(false);
       await page.screenshot({ path: path.join(shots, 'week-sheet-print.png'), fullPage: true });
-    } finally {
-      await page.close();
-    }
+    });
   });
 
   test('should show the head the board of a district read-only', async () => {
-    const page = await openAs('head');
-    try {
+    await withPage({ role: 'head' }, async (page) => {
       await openWeek(page);
       await page.locator('[data-test="week-readonly"]').waitFor();
       expect(await page.locator('[data-test="generate-week"]').count()).toBe(0);
       expect(await page.locator('[data-test="week-district"]').count()).toBe(1);
       const first = page.locator('[data-test="order-card"]').first();
       if (await first.count()) expect(await first.getAttribute('draggable')).toBe('false');
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

@@ -6,7 +6,7 @@
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
 import { DEFAULT_TIME_ZONE, localToday, mondayOf } from '@swardwise/domain';
-import { browser, PHONE, reportDialog, shots, signIn, turfPhoto, useBrowser } from './browser.ts';
+import { browser, PHONE, reportDialog, shots, signIn, turfPhoto, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 // Tall enough for the whole board with the demo season's done work: a drag on a scrolled page picks up the wrong card.
@@ -66,10 +66,7 @@ describe('from the week plan to the crew’s phone', () => {
       await foreman.close();
     }
 
-    const context = await browser.newContext(PHONE);
-    try {
-      const phone = await context.newPage();
-      await signIn(phone, 'crew', '/today');
+    await withPage({ role: 'crew', landing: '/today', device: PHONE }, async (phone) => {
       await phone.waitForURL((url) => url.pathname === '/today');
       for (const id of jobIds) await phone.locator(`[data-test="job-card"][data-order-id="${id}"]`).waitFor();
       const job = phone.locator(`[data-test="job-card"][data-order-id="${jobIds[0]}"]`);
@@ -90,8 +87,6 @@ describe('from the week plan to the crew’s phone', () => {
       expect(detail.photos[0]).toMatchObject({ width: 1600, height: 1200 });
       // The second job is still waiting for the crew.
       expect(await phone.locator(`[data-test="job-card"][data-order-id="${jobIds[1]}"]`).getAttribute('data-status')).toBe('assigned');
-    } finally {
-      await context.close();
-    }
+    });
   });
 });

@@ -6,7 +6,7 @@
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
 import type { FieldList, WhatIfAnswer } from '@swardwise/domain';
-import { browser, shots, signIn, tabTo, useBrowser } from './browser.ts';
+import { followNav, shots, tabTo, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -14,11 +14,8 @@ useBrowser();
 
 describe('what-if', () => {
   test('should show the head the season’s change for fields moved to another level, saving nothing', async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    try {
-      await signIn(page, 'head');
-      await page.locator('[data-test="nav-what-if"]').click();
-      await page.waitForURL((url) => url.pathname === '/what-if');
+    await withPage({ role: 'head' }, async (page) => {
+      await followNav(page, 'what-if');
       const boxes = page.locator('[data-test^="what-if-field-"]');
       await boxes.first().waitFor();
       const levels = async () => new Map(((await (await page.request.get(`${baseUrl}/api/fields`)).json()) as FieldList).items.map((f) => [f.id, f.maintenanceLevel]));
@@ -85,8 +82,6 @@ describe('what-if', () => {
       expect(await compare.locator('tbody tr').first().innerText()).toMatch(/Mowings\s+\+[\d,]+\s+−[\d,]+/);
       await page.screenshot({ path: path.join(shots, 'what-if-compare.png'), fullPage: true });
       await compare.locator('[data-test="what-if-chart"]').screenshot({ path: path.join(shots, 'what-if-compare-chart.png') });
-    } finally {
-      await page.close();
-    }
+    });
   });
 });

@@ -7,8 +7,8 @@
 import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
 import { longAxis, type Polygon } from '@swardwise/domain';
+import { rectanglesOnEdges, type XY } from '../support/brute-force-axis.ts';
 
-type XY = [number, number];
 
 /** The conversion to local metres and the hull exactly as `longAxis` had them before. */
 function localMetres(polygon: Polygon): XY[] {
@@ -51,21 +51,7 @@ function bruteForce(polygon: Polygon) {
   if (hull.length < 3) return null;
   const candidates: { area: number; bearing: number; lengthM: number; widthM: number }[] = [];
   let best = { area: Infinity, angle: 0, w: 0, h: 0 };
-  for (let i = 0; i < hull.length; i += 1) {
-    const a = hull[i]!;
-    const b = hull[(i + 1) % hull.length]!;
-    const angle = Math.atan2(b[1] - a[1], b[0] - a[0]);
-    const c = Math.cos(angle);
-    const s = Math.sin(angle);
-    let minX = Infinity, maxX = -Infinity, minY = Infinity, maxY = -Infinity;
-    for (const p of hull) {
-      const x = p[0] * c + p[1] * s;
-      const y = -p[0] * s + p[1] * c;
-      minX = Math.min(minX, x); maxX = Math.max(maxX, x);
-      minY = Math.min(minY, y); maxY = Math.max(maxY, y);
-    }
-    const w = maxX - minX;
-    const h = maxY - minY;
+  for (const { angle, w, h } of rectanglesOnEdges(hull)) {
     candidates.push({ area: w * h, bearing: bearingOf(w >= h ? angle : angle + Math.PI / 2), lengthM: Math.max(w, h), widthM: Math.min(w, h) });
     if (w * h < best.area - 1e-9) best = { area: w * h, angle, w, h };
   }
