@@ -4,7 +4,7 @@ import path from 'node:path';
 import { eq, inArray } from 'drizzle-orm';
 import type supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { addDaysIso } from '@swardwise/domain';
+import { addDaysIso, DEFAULT_TIME_ZONE, localToday } from '@swardwise/domain';
 import { fieldChecks, fieldEvents, fields, imports, workOrders, workPhotos, workUpdates } from '../../apps/api/src/db/schema/index.ts';
 import { fieldBody, giveWork, rectangle } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
@@ -49,7 +49,7 @@ async function photoOn(orderId: number) {
 }
 
 async function booking(fieldId: number) {
-  const res = await foreman.post('/api/field-events').send({ fieldId, kind: 'game', title: 'Invented game', startsOn: addDaysIso(new Date().toISOString().slice(0, 10), 3) });
+  const res = await foreman.post('/api/field-events').send({ fieldId, kind: 'game', title: 'Invented game', startsOn: addDaysIso(localToday(process.env.DEPARTMENT_TIME_ZONE || DEFAULT_TIME_ZONE), 3) });
   expect(res.status).toBe(201);
   return res.body.event.id as number;
 }

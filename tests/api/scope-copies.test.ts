@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import type supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { addDaysIso } from '@swardwise/domain';
+import { addDaysIso, DEFAULT_TIME_ZONE, localToday } from '@swardwise/domain';
 import { fieldEvents, fields, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { fieldBody, giveWork, rectangle } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
@@ -27,7 +27,7 @@ beforeAll(async () => {
 });
 afterAll(() => api.close());
 
-const SOON = addDaysIso(new Date().toISOString().slice(0, 10), 4);
+const SOON = addDaysIso(localToday(process.env.DEPARTMENT_TIME_ZONE || DEFAULT_TIME_ZONE), 4);
 let n = 0;
 
 /** A new field at a site with one work order of the site's district crew and one booking. */
