@@ -95,6 +95,10 @@ export default defineConfig({
           environment: 'node',
           globalSetup: ['./e2e/global-setup.ts'],
           fileParallelism: false,
+          // One file at a time, so each file's imports (playwright-core, axe-core's source, the
+          // API for own-server files) were loaded again on the run's critical path: about 2.5 s
+          // a file. Each file closes the pages and servers it opens (useBrowser, own-server.ts).
+          isolate: false,
           sequence: { groupOrder: 3 },
           testTimeout: 60_000,
           hookTimeout: 120_000,
