@@ -23,6 +23,11 @@ const apiTests = (name: 'api' | 'api-pg', globalSetup: string[], groupOrder: num
     // bodies); on PostgreSQL a quarter of them shows the same refusals leave its tables unchanged.
     env: name === 'api-pg' ? { FUZZ_PER_ROUTE: '50' } : {},
     environment: 'node',
+    // Files of one worker share the module graph: each file loaded the Express app and its
+    // imports again in a fresh isolate (about 3.7 s a file). The app keeps no state outside
+    // what a file's own database and app objects hold (caches are keyed by database or app),
+    // and each file closes what it opens (support/app.ts).
+    isolate: false,
     // Server logs of every API test go to one folder, scanned for secrets after the run.
     globalSetup: ['./support/log-scan.ts', ...globalSetup],
     // Each file opens its own database (a few seconds on PGlite); keep the two cores busy
@@ -43,6 +48,8 @@ export default defineConfig({
         test: {
           name: 'domain',
           root: './packages/domain',
+          // Pure functions without module state: the files of a worker share its imports.
+          isolate: false,
           include: ['src/**/*.test.ts'],
           environment: 'node',
         },
@@ -51,6 +58,7 @@ export default defineConfig({
         test: {
           name: 'reference',
           root: './tests',
+          isolate: false,
           include: ['reference/**/*.test.ts'],
           environment: 'node',
         },
@@ -59,6 +67,7 @@ export default defineConfig({
         test: {
           name: 'api-unit',
           root: './apps/api',
+          isolate: false,
           include: ['src/**/*.test.ts'],
           environment: 'node',
         },
@@ -86,6 +95,10 @@ export default defineConfig({
           environment: 'node',
           globalSetup: ['./e2e/global-setup.ts'],
           fileParallelism: false,
+          // One file at a time, so each file's imports (playwright-core, axe-core's source, the
+          // API for own-server files) were loaded again on the run's critical path: about 2.5 s
+          // a file. Each file closes the pages and servers it opens (useBrowser, own-server.ts).
+          isolate: false,
           sequence: { groupOrder: 3 },
           testTimeout: 60_000,
           hookTimeout: 120_000,

@@ -43,15 +43,31 @@ export let browser: Browser;
 export function useBrowser(): void {
   beforeAll(async () => {
     fs.mkdirSync(shots, { recursive: true });
-    browser = await launchBrowser();
-    const newContext = browser.newContext.bind(browser);
+    const kept = await keptBrowser();
+    browser = kept.browser;
     // browser.newPage() makes its context through this too.
-    browser.newContext = async (options) => watchContext(await watchCsp(await newContext(options)));
+    browser.newContext = async (options) => watchContext(await watchCsp(await kept.newContext(options)));
   });
   afterEach(finishOpenPages);
   // Every page shown also loads under the shipped content security policy (csp-watch.ts).
   afterEach(finishCsp);
-  afterAll(() => browser?.close());
+  // What the file left open goes with it, unchecked, as closing the file's own browser did.
+  afterAll(() => Promise.all((browser?.contexts() ?? []).map((context) => Object.getPrototypeOf(context).close.call(context))));
+}
+
+/**
+ * The browser files share: the browser files run one after another in one process (isolate:
+ * false), and launching and closing chromium took seconds a file. Kept on globalThis so a
+ * run with isolation shares it too; each file's contexts are its own (nothing of one reaches
+ * the next), and chromium ends with the process (its DevTools pipe closes).
+ */
+async function keptBrowser(): Promise<{ browser: Browser; newContext: Browser['newContext'] }> {
+  const held = globalThis as { swardwiseE2eBrowser?: { browser: Browser; newContext: Browser['newContext'] } };
+  if (!held.swardwiseE2eBrowser?.browser.isConnected()) {
+    const launched = await launchBrowser();
+    held.swardwiseE2eBrowser = { browser: launched, newContext: launched.newContext.bind(launched) };
+  }
+  return held.swardwiseE2eBrowser;
 }
 
 /**

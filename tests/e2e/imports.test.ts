@@ -8,7 +8,7 @@ import os from 'node:os';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, describe, expect, inject, test } from 'vitest';
-import { followNav, shots, useBrowser, withPage } from './browser.ts';
+import { checkA11y, followNav, shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 const work = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-imports-'));
@@ -45,6 +45,9 @@ describe('importing sites', () => {
       expect(await page.locator('[data-test="import-row-bad"]').textContent()).toContain('is not a number');
       expect(await page.locator('[data-test="import-row-ok"]').count()).toBe(1);
       expect(await page.locator('[data-test="import-commit"]').isDisabled()).toBe(true);
+      // The upload's progress bar stays after the upload: checked by name, not only when a
+      // background check happens to run late enough to see it.
+      await checkA11y(page);
       await page.screenshot({ path: path.join(shots, 'imports-errors.png'), fullPage: true });
 
       await page.setInputFiles('[data-test="import-file"]', csvFile('good.csv', `${SITE},north,park,city,3 Quillwort Lane,37.569,-66.451,invented`));
