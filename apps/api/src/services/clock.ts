@@ -68,14 +68,14 @@ export class DepartmentClock implements Clock {
   }
 
   today(): string {
-    const local = this.#thisMinute();
-    local.today ??= localToday(this.#zone, this.now());
+    const { local, now } = this.#thisMinute();
+    local.today ??= localToday(this.#zone, now);
     return local.today;
   }
 
   weekStart(): string {
-    const local = this.#thisMinute();
-    local.weekStart ??= localWeekStart(this.#zone, this.now());
+    const { local, now } = this.#thisMinute();
+    local.weekStart ??= localWeekStart(this.#zone, now);
     return local.weekStart;
   }
 
@@ -86,10 +86,12 @@ export class DepartmentClock implements Clock {
    * (offsets are whole quarter hours), so no minute spans two dates.
    */
   #minute: { zone: string; minute: number; today?: string; weekStart?: string } = { zone: '', minute: Number.NaN };
-  #thisMinute(): { today?: string; weekStart?: string } {
-    const minute = Math.floor(this.now().getTime() / 60_000);
+  #thisMinute(): { local: { today?: string; weekStart?: string }; now: Date } {
+    // One reading of the clock, so a date is never worked out from an instant past its minute.
+    const now = this.now();
+    const minute = Math.floor(now.getTime() / 60_000);
     if (this.#minute.minute !== minute || this.#minute.zone !== this.#zone) this.#minute = { zone: this.#zone, minute };
-    return this.#minute;
+    return { local: this.#minute, now };
   }
 
   dateOf(instant: Date | string | number): string {
