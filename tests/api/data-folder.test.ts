@@ -45,9 +45,11 @@ describe('the server process', () => {
     try {
       const env: NodeJS.ProcessEnv = { ...process.env, NODE_ENV: 'production', PORT: '0', HOST: '127.0.0.1', PGLITE_DIR: path.join(readOnly, 'pglite'), LOG_LEVEL: 'warn' };
       for (const name of ['DEMO', 'SEED_DEMO', 'DATABASE_URL']) delete env[name];
-      // root writes anywhere: the server then runs as nobody, for whom the folder is read-only.
+      // root writes anywhere: the server then runs as root without capabilities, for whom the
+      // folder is read-only. (Not as nobody, who may not be able to read a clone under a private
+      // folder such as one from mktemp.)
       const asRoot = process.getuid?.() === 0;
-      const { code, output } = await runUntilExit(env, asRoot ? ['setpriv', ['--reuid=65534', '--regid=65534', '--clear-groups', SERVER_COMMAND[0], ...SERVER_COMMAND[1]]] : SERVER_COMMAND);
+      const { code, output } = await runUntilExit(env, asRoot ? ['setpriv', ['--bounding-set=-all', '--inh-caps=-all', SERVER_COMMAND[0], ...SERVER_COMMAND[1]]] : SERVER_COMMAND);
       expect(code).toBe(1);
       expect(output.trim()).toMatch(new RegExp(`^Swardwise cannot start: the data folder ${readOnly}/pglite is read-only \\((EACCES|EPERM|EROFS)\\)\\. Give the user running Swardwise write access to it, or set PGLITE_DIR to a folder it may write\\.$`));
     } finally {
