@@ -16,6 +16,7 @@ export const CHURNING_TABLES = [
   'rollup_overview_day',
   'rollup_compare_crew_ytd',
   'rollup_compare_machine_ytd',
+  'rollup_compare_site_versions',
   'rollup_field_latest',
   'sessions',
   'rate_limits',

@@ -15,12 +15,13 @@ import {
   type CompareQuery,
   type CompareSiteRow,
   type CompareSitesAnswer,
+  type CostSettings,
   type EquipmentKind,
   type Level,
   type WorkCost,
   WORK_TASKS,
 } from '@swardwise/domain';
-import { applications, districts, equipment, fieldChecks, fields, sites, workOrders } from '../db/schema/index.ts';
+import { answerVersions, applications, districts, equipment, fieldChecks, fields, sites, workOrders } from '../db/schema/index.ts';
 import { cachedAnswer } from './answer-cache.ts';
 import { authorize, type Ctx } from './context.ts';
 import { readCosts } from './costs.ts';
@@ -104,56 +105,6 @@ const ORDERS_DAYS = (a: string, b: string, inDistrict: (col: SQL) => SQL): SQL =
     sql`, `,
   )}) and wo.planned_date between ${a} and ${b} and ${inDistrict(sql`wo.district_id`)}`;
 
-/**
- * Done work over [from, to] per site and crew (orders, hours, inputs) and per site and machine
- * kind (hours): whole months from the year-to-date rollups the triggers keep, the days around
- * them from the orders themselves.
- */
-function workOver(from: string, to: string, inDistrict: (col: SQL) => SQL): { crews: SQL; machines: SQL } {
-  const { months, days } = splitByMonth(from, to);
-  const crews: SQL[] = days.map(
-    ([a, b]) => sql`
-      select wo.site_id, wo.crew_id, count(*)::int as orders,
-        sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours,
-        sum(case when wo.task = 'feed' then ${detail(sql`wo.details->'nGPerM2'`)} * f.area_m2 / 1000 else 0 end)::float8 as kg_n,
-        sum(case when wo.task = 'irrigate' then ${detail(sql`wo.details->'volumeL'`)} / 1000 else 0 end)::float8 as water_m3,
-        sum(case when wo.task = 'paint_lines' then ${detail(sql`wo.details->'paintL'`)} else 0 end)::float8 as paint_l,
-        sum(case when wo.task = 'colourant' then ${detail(sql`wo.details->'colourant'->'rateMlPerM2'`)} * ${detail(sql`wo.details->'colourant'->'areaM2'`)} / 1000 else 0 end)::float8 as colourant_l
-      from ${workOrders} wo join ${fields} f on f.id = wo.field_id
-      where ${ORDERS_DAYS(a, b, inDistrict)}
-      group by wo.site_id, wo.crew_id`,
-  );
-  const machines: SQL[] = days.map(
-    ([a, b]) => sql`
-      select wo.site_id, ${machineKindOf(sql`wo.task`, sql`coalesce(wo.details->>'mowerKind', wo.details->>'mower', '') like 'reel%'`)} as kind,
-        sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours
-      from ${workOrders} wo join ${fields} f on f.id = wo.field_id left join ${equipment} e on e.id = wo.equipment_id
-      where ${ORDERS_DAYS(a, b, inDistrict)}
-      group by 1, 2`,
-  );
-  if (months) {
-    crews.push(sql`
-      select c.site_id, nullif(c.crew_key, 0) as crew_id, sum(t.sign * c.orders)::int as orders, sum(t.sign * c.hours)::float8 as hours,
-        sum(t.sign * c.kg_n)::float8 as kg_n, sum(t.sign * c.water_m3)::float8 as water_m3, sum(t.sign * c.paint_l)::float8 as paint_l, sum(t.sign * c.colourant_l)::float8 as colourant_l
-      from rollup_compare_crew_ytd c join ${ytdTerms(...months)} on c.year = t.year and c.month = t.month
-      where ${inDistrict(sql`c.district_id`)}
-      group by 1, 2`);
-    machines.push(sql`
-      select r.site_id, ${machineKindOf(sql`r.task`, sql`r.reel`)} as kind, sum(t.sign * r.hours)::float8 as hours
-      from rollup_compare_machine_ytd r join ${ytdTerms(...months)} on r.year = t.year and r.month = t.month left join ${equipment} e on e.id = nullif(r.equipment_key, 0)
-      where ${inDistrict(sql`r.district_id`)}
-      group by 1, 2`);
-  }
-  return {
-    crews: sql`
-      select site_id, crew_id, sum(orders)::int as orders, sum(hours)::float8 as hours, sum(kg_n)::float8 as kg_n,
-        sum(water_m3)::float8 as water_m3, sum(paint_l)::float8 as paint_l, sum(colourant_l)::float8 as colourant_l
-      from (${sql.join(crews, sql` union all `)}) g
-      group by site_id, crew_id`,
-    machines: sql`select site_id, kind, sum(hours)::float8 as hours from (${sql.join(machines, sql` union all `)}) g where kind is not null group by site_id, kind`,
-  };
-}
-
 /** Sites in the caller's scope with their figures over the period. The head sees every district (or the one asked); a foreman only his own. */
 export async function compareSites(ctx: Ctx, q: CompareQuery): Promise<CompareSitesAnswer> {
   authorize(ctx, 'read', 'SiteComparison');
@@ -172,10 +123,159 @@ export async function compareSites(ctx: Ctx, q: CompareQuery): Promise<CompareSi
   return cachedAnswer(ctx, 'compare', JSON.stringify([scope, period]), () => buildComparison(ctx, scope, period));
 }
 
+/** Done work per site and crew (orders, hours, inputs) and per site and machine kind (hours). */
+interface Work {
+  crews: SQL;
+  machines: SQL;
+}
+
+/** The done orders of the days [a, b], read from the orders themselves (through work_orders_task_date_idx). */
+function workOfDays(days: [string, string][], inDistrict: (col: SQL) => SQL): Work | null {
+  if (days.length === 0) return null;
+  const crews = days.map(
+    ([a, b]) => sql`
+      select wo.site_id, wo.crew_id, count(*)::int as orders,
+        sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours,
+        sum(case when wo.task = 'feed' then ${detail(sql`wo.details->'nGPerM2'`)} * f.area_m2 / 1000 else 0 end)::float8 as kg_n,
+        sum(case when wo.task = 'irrigate' then ${detail(sql`wo.details->'volumeL'`)} / 1000 else 0 end)::float8 as water_m3,
+        sum(case when wo.task = 'paint_lines' then ${detail(sql`wo.details->'paintL'`)} else 0 end)::float8 as paint_l,
+        sum(case when wo.task = 'colourant' then ${detail(sql`wo.details->'colourant'->'rateMlPerM2'`)} * ${detail(sql`wo.details->'colourant'->'areaM2'`)} / 1000 else 0 end)::float8 as colourant_l
+      from ${workOrders} wo join ${fields} f on f.id = wo.field_id
+      where ${ORDERS_DAYS(a, b, inDistrict)}
+      group by wo.site_id, wo.crew_id`,
+  );
+  const machines = days.map(
+    ([a, b]) => sql`
+      select wo.site_id, ${machineKindOf(sql`wo.task`, sql`coalesce(wo.details->>'mowerKind', wo.details->>'mower', '') like 'reel%'`)} as kind,
+        sum(coalesce(wo.actual_hours, wo.planned_hours)::float8) as hours
+      from ${workOrders} wo join ${fields} f on f.id = wo.field_id left join ${equipment} e on e.id = wo.equipment_id
+      where ${ORDERS_DAYS(a, b, inDistrict)}
+      group by 1, 2`,
+  );
+  return {
+    crews: sql`
+      select site_id, crew_id, sum(orders)::int as orders, sum(hours)::float8 as hours, sum(kg_n)::float8 as kg_n,
+        sum(water_m3)::float8 as water_m3, sum(paint_l)::float8 as paint_l, sum(colourant_l)::float8 as colourant_l
+      from (${sql.join(crews, sql` union all `)}) g
+      group by site_id, crew_id`,
+    machines: sql`select site_id, kind, sum(hours)::float8 as hours from (${sql.join(machines, sql` union all `)}) g where kind is not null group by site_id, kind`,
+  };
+}
+
+/**
+ * The done work of the whole months [first, last], from the year-to-date rollups the triggers
+ * keep; only the sites listed when `onlySites` is given.
+ */
+function workOfMonths([first, last]: [string, string], inDistrict: (col: SQL) => SQL, onlySites?: number[]): Work {
+  const ofSites = (col: SQL): SQL => (onlySites ? sql`${col} in (${sql.join(onlySites.map((id) => sql`${id}::int`), sql`, `)})` : sql`true`);
+  return {
+    crews: sql`
+      select c.site_id, nullif(c.crew_key, 0) as crew_id, sum(t.sign * c.orders)::int as orders, sum(t.sign * c.hours)::float8 as hours,
+        sum(t.sign * c.kg_n)::float8 as kg_n, sum(t.sign * c.water_m3)::float8 as water_m3, sum(t.sign * c.paint_l)::float8 as paint_l, sum(t.sign * c.colourant_l)::float8 as colourant_l
+      from rollup_compare_crew_ytd c join ${ytdTerms(first, last)} on c.year = t.year and c.month = t.month
+      where ${inDistrict(sql`c.district_id`)} and ${ofSites(sql`c.site_id`)}
+      group by 1, 2`,
+    machines: sql`
+      select g.site_id, g.kind, sum(g.hours)::float8 as hours from (
+        select r.site_id, ${machineKindOf(sql`r.task`, sql`r.reel`)} as kind, t.sign * r.hours as hours
+        from rollup_compare_machine_ytd r join ${ytdTerms(first, last)} on r.year = t.year and r.month = t.month left join ${equipment} e on e.id = nullif(r.equipment_key, 0)
+        where ${inDistrict(sql`r.district_id`)} and ${ofSites(sql`r.site_id`)}) g
+      where g.kind is not null
+      group by 1, 2`,
+  };
+}
+
+/**
+ * Per site, the sum of the change counters of the year-to-date rows the months [first, last]
+ * are read from (`rollup_compare_site_versions`): it moves exactly when one of them changed.
+ */
+function monthVersions([first, last]: [string, string]): SQL {
+  return jsonRows(sql`
+    select v.site_id, sum(v.version)::float8 as version
+    from rollup_compare_site_versions v join ${ytdTerms(first, last)} on v.year = t.year and v.month = t.month
+    group by v.site_id`);
+}
+
+/**
+ * What one comparison (a scope and period) was last worked out from: its parts that come from
+ * the rollups of whole months and the other tables, the change counters of every table as
+ * they were, and each site's month counter. After work orders alone were written, only the
+ * sites whose month counter moved are read again; the loose days are always read afresh.
+ */
+interface ComparisonBase {
+  tables: string;
+  siteVersions: Map<number, number>;
+  facts: SiteFacts[];
+  months: { crews: CrewWork[]; machines: MachineWork[] };
+  seed: { site_id: number; seed_kg: number }[];
+  scores: { site_id: number; score: number; checked: number }[];
+}
+const bases = new WeakMap<object, Map<string, ComparisonBase>>();
+const BASES_KEPT = 8;
+
+/** How comparisons were worked out since start: in full, or from the last one with some sites read again. */
+export const comparisonBuilds = { full: 0, sitesReadAgain: 0 };
+
+/** The change counters of every table but the work orders (whose changes the site counters follow). */
+const TABLE_VERSIONS = sql`(select coalesce(json_object_agg(scope, version order by scope), '{}'::json)::text from ${answerVersions} where scope <> 'work_orders')`;
+
 async function buildComparison(ctx: Ctx, districtId: number | null, period: CompareSitesAnswer['period']): Promise<CompareSitesAnswer> {
   const inDistrict = (col: SQL): SQL => (districtId === null ? sql`true` : sql`${col} = ${districtId}`);
+  const { months, days } = splitByMonth(period.from, period.to);
+  const loose = workOfDays(days, inDistrict);
+  const none = sql`'[]'`;
 
-  const work = workOver(period.from, period.to, inDistrict);
+  // One statement for what is read every time: the counters and the loose days' work.
+  const [{ costs }, first] = await Promise.all([
+    readCosts(ctx.db),
+    ctx.db.execute<{ tables: string; sites: string; crews: string; machines: string }>(sql`select
+      ${TABLE_VERSIONS} as tables,
+      ${months ? monthVersions(months) : none} as sites,
+      ${loose ? jsonRows(loose.crews) : none} as crews,
+      ${loose ? jsonRows(loose.machines) : none} as machines`),
+  ]);
+  const now = first.rows[0]!;
+  const siteVersions = new Map((JSON.parse(now.sites) as { site_id: number; version: number }[]).map((r) => [r.site_id, r.version]));
+
+  let kept = bases.get(ctx.db);
+  if (!kept) bases.set(ctx.db, (kept = new Map()));
+  const key = JSON.stringify([districtId, period]);
+  const was = kept.get(key);
+  let base: ComparisonBase;
+  if (was && was.tables === now.tables) {
+    // Only work orders changed: read again the months of the sites whose counter moved.
+    const moved = [...new Set([...siteVersions.keys(), ...was.siteVersions.keys()])].filter((id) => (siteVersions.get(id) ?? 0) !== (was.siteVersions.get(id) ?? 0));
+    let monthsWork = was.months;
+    if (months && moved.length > 0) {
+      const again = workOfMonths(months, inDistrict, moved);
+      const res = await ctx.db.execute<{ crews: string; machines: string }>(sql`select ${jsonRows(again.crews)} as crews, ${jsonRows(again.machines)} as machines`);
+      const gone = new Set(moved);
+      monthsWork = {
+        crews: [...was.months.crews.filter((g) => !gone.has(g.site_id)), ...(JSON.parse(res.rows[0]!.crews) as CrewWork[])],
+        machines: [...was.months.machines.filter((g) => !gone.has(g.site_id)), ...(JSON.parse(res.rows[0]!.machines) as MachineWork[])],
+      };
+    }
+    base = { ...was, siteVersions, months: monthsWork };
+    comparisonBuilds.sitesReadAgain++;
+  } else {
+    base = { tables: now.tables, siteVersions, ...(await readBase(ctx, inDistrict, period, months)) };
+    comparisonBuilds.full++;
+  }
+  kept.delete(key);
+  if (kept.size >= BASES_KEPT) kept.delete(kept.keys().next().value!);
+  kept.set(key, base);
+
+  const rows = rowsOf(base, JSON.parse(now.crews) as CrewWork[], JSON.parse(now.machines) as MachineWork[], costs);
+  return { period, currency: costs.currency, districtId, rows, totals: totalsOf(rows) };
+}
+
+/**
+ * Everything but the loose days, in one statement answering JSON arrays: PGlite hands
+ * thousands of rows to the API a row and a column at a time (most of a rebuild's time on a big
+ * city), one text value at once. float8 prints the same shortest exact digits in JSON as in a
+ * row, so the numbers are the same.
+ */
+async function readBase(ctx: Ctx, inDistrict: (col: SQL) => SQL, period: CompareSitesAnswer['period'], months: [string, string] | null): Promise<Omit<ComparisonBase, 'tables' | 'siteVersions'>> {
   const factsQuery = sql`
       select s.id as site_id, s.name as site_name, d.id as district_id, d.name as district_name,
         count(f.id)::int as field_count, coalesce(sum(f.area_m2), 0)::float8 as area_m2,
@@ -197,38 +297,51 @@ async function buildComparison(ctx: Ctx, districtId: number | null, period: Comp
         order by c.checked_on desc, c.id desc limit 1) p on true
       where r.checked_on >= ${period.from} and (r.checked_on <= ${period.to} or p.score is not null) and ${inDistrict(sql`s.district_id`)}
       group by f.site_id`;
-  // One statement answering five JSON arrays: PGlite hands thousands of rows to the API a
-  // row and a column at a time (most of a rebuild's time on a big city), one text value at
-  // once. float8 prints the same shortest exact digits in JSON as in a row, so the numbers
-  // are the same.
-  const [{ costs }, res] = await Promise.all([
-    readCosts(ctx.db),
-    ctx.db.execute<{ facts: string; crews: string; machines: string; seed: string; scores: string }>(sql`select
+  const whole = months ? workOfMonths(months, inDistrict) : null;
+  const res = await ctx.db.execute<{ facts: string; crews: string; machines: string; seed: string; scores: string }>(sql`select
       ${jsonRows(factsQuery, sql`order by q.site_name, q.site_id`)} as facts,
-      ${jsonRows(work.crews)} as crews,
-      ${jsonRows(work.machines)} as machines,
+      ${whole ? jsonRows(whole.crews) : sql`'[]'`} as crews,
+      ${whole ? jsonRows(whole.machines) : sql`'[]'`} as machines,
       ${jsonRows(seedQuery)} as seed,
-      ${jsonRows(scoresQuery)} as scores`),
-  ]);
+      ${jsonRows(scoresQuery)} as scores`);
   const answer = res.rows[0]!;
-  const facts = JSON.parse(answer.facts) as SiteFacts[];
-  const crewWork = JSON.parse(answer.crews) as CrewWork[];
-  const machineWork = JSON.parse(answer.machines) as MachineWork[];
-  const seed = JSON.parse(answer.seed) as { site_id: number; seed_kg: number }[];
-  const scores = JSON.parse(answer.scores) as { site_id: number; score: number; checked: number }[];
+  return {
+    facts: JSON.parse(answer.facts) as SiteFacts[],
+    months: { crews: JSON.parse(answer.crews) as CrewWork[], machines: JSON.parse(answer.machines) as MachineWork[] },
+    seed: JSON.parse(answer.seed) as { site_id: number; seed_kg: number }[],
+    scores: JSON.parse(answer.scores) as { site_id: number; score: number; checked: number }[],
+  };
+}
 
-  const crewsOf = new Map<number, CrewWork[]>();
-  for (const g of crewWork) crewsOf.set(g.site_id, [...(crewsOf.get(g.site_id) ?? []), g]);
-  const machinesOf = new Map<number, MachineWork[]>();
-  for (const g of machineWork) machinesOf.set(g.site_id, [...(machinesOf.get(g.site_id) ?? []), g]);
-  const seedOf = new Map(seed.map((r) => [r.site_id, r.seed_kg]));
-  const scoreOf = new Map(scores.map((r) => [r.site_id, r]));
+/** Each site's row: the months' work and the loose days' added per crew and machine kind, priced with the department's costs. */
+function rowsOf(base: ComparisonBase, looseCrews: CrewWork[], looseMachines: MachineWork[], costs: CostSettings): CompareSiteRow[] {
+  const crewsOf = new Map<number, Map<number | null, CrewWork>>();
+  for (const g of [...base.months.crews, ...looseCrews]) {
+    let bySite = crewsOf.get(g.site_id);
+    if (!bySite) crewsOf.set(g.site_id, (bySite = new Map()));
+    const had = bySite.get(g.crew_id);
+    bySite.set(
+      g.crew_id,
+      had
+        ? { ...had, orders: had.orders + g.orders, hours: had.hours + g.hours, kg_n: had.kg_n + g.kg_n, water_m3: had.water_m3 + g.water_m3, paint_l: had.paint_l + g.paint_l, colourant_l: had.colourant_l + g.colourant_l }
+        : g,
+    );
+  }
+  const machinesOf = new Map<number, Partial<Record<EquipmentKind, number>>>();
+  for (const g of [...base.months.machines, ...looseMachines]) {
+    let bySite = machinesOf.get(g.site_id);
+    if (!bySite) machinesOf.set(g.site_id, (bySite = {}));
+    bySite[g.kind] = (bySite[g.kind] ?? 0) + g.hours;
+  }
+  const seedOf = new Map(base.seed.map((r) => [r.site_id, r.seed_kg]));
+  const scoreOf = new Map(base.scores.map((r) => [r.site_id, r]));
 
-  const rows: CompareSiteRow[] = facts.map((s) => {
-    const groups = crewsOf.get(s.site_id) ?? [];
+  return base.facts.map((s) => {
+    // In one order of crews and kinds however the rows came, so a site read again adds up to the same bits.
+    const groups = [...(crewsOf.get(s.site_id)?.values() ?? [])].sort((a, b) => (a.crew_id ?? 0) - (b.crew_id ?? 0));
     const sum = (k: 'orders' | 'hours' | 'kg_n' | 'water_m3' | 'paint_l' | 'colourant_l'): number => groups.reduce((t, g) => t + g[k], 0);
-    const machineHours: Partial<Record<EquipmentKind, number>> = {};
-    for (const g of machinesOf.get(s.site_id) ?? []) machineHours[g.kind] = (machineHours[g.kind] ?? 0) + g.hours;
+    const byKind = machinesOf.get(s.site_id) ?? {};
+    const machineHours = Object.fromEntries(Object.entries(byKind).sort(([a], [b]) => a.localeCompare(b))) as Partial<Record<EquipmentKind, number>>;
     const quantities = { fertiliserKgN: sum('kg_n'), waterM3: sum('water_m3'), paintL: sum('paint_l'), seedKg: seedOf.get(s.site_id) ?? 0, colourantL: sum('colourant_l') };
     const cost = costOfWork({ labour: groups.map((g) => ({ crewId: g.crew_id, hours: g.hours })), machineHours, ...quantities }, costs);
     const acres = s.area_m2 / M2_PER_ACRE;
@@ -254,7 +367,6 @@ async function buildComparison(ctx: Ctx, districtId: number | null, period: Comp
       fieldsChecked: score?.checked ?? 0,
     };
   });
-  return { period, currency: costs.currency, districtId, rows, totals: totalsOf(rows) };
 }
 
 function totalsOf(rows: CompareSiteRow[]): CompareSitesAnswer['totals'] {

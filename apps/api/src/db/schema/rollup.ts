@@ -5,7 +5,7 @@
  * Sums are `numeric` so adding and taking away a row leaves no rounding residue.
  */
 import { sql } from 'drizzle-orm';
-import { boolean, check, date, integer, numeric, pgTable, primaryKey, real, smallint, text } from 'drizzle-orm/pg-core';
+import { bigint, boolean, check, date, integer, numeric, pgTable, primaryKey, real, smallint, text } from 'drizzle-orm/pg-core';
 
 const total = (name: string) => numeric(name).notNull().default('0');
 const count = (name: string) => integer(name).notNull().default(0);
@@ -81,6 +81,24 @@ export const rollupCompareMachineYtd = pgTable(
     hours: total('hours'),
   },
   (t) => [primaryKey({ columns: [t.year, t.month, t.districtId, t.siteId, t.equipmentKey, t.task, t.reel] })],
+);
+
+/**
+ * A counter per year, month and site, raised by triggers on the two tables above whenever a
+ * row of theirs for that site and month is added, changed or removed (migration
+ * `compare_site_versions`). Counters only ever go up, so the sum over the months a compare
+ * reads changes exactly when one of its rows did: the compare then reads again only the sites
+ * whose sum moved. No row: never changed (0).
+ */
+export const rollupCompareSiteVersions = pgTable(
+  'rollup_compare_site_versions',
+  {
+    year: smallint('year').notNull(),
+    month: smallint('month').notNull(),
+    siteId: integer('site_id').notNull(),
+    version: bigint('version', { mode: 'number' }).notNull().default(0),
+  },
+  (t) => [primaryKey({ columns: [t.year, t.month, t.siteId] })],
 );
 
 /** The time zone the late mowings of `rollup_overview_day` were counted in (one row). */
