@@ -7,7 +7,8 @@
 import { sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
 import { localWriteCount, openDatabase, type Database } from '../../apps/api/src/db/client.ts';
-import { sharedFingerprint } from '../../apps/api/src/services/answer-cache.ts';
+import { cachedAnswer, sharedFingerprint } from '../../apps/api/src/services/answer-cache.ts';
+import type { Ctx } from '../../apps/api/src/services/context.ts';
 import { applications, equipment, fieldChecks, settings } from '../../apps/api/src/db/schema/index.ts';
 import { clonePostgresDatabase, startTestApi, type TestApi } from '../support/app.ts';
 import { giveWork, type Fixture } from '../support/fixture.ts';
@@ -106,5 +107,25 @@ describe('write count of a PGlite database', () => {
       await tx.execute(sql`update sites set name = name`);
     });
     expect(count()).toBeGreaterThan(before);
+  });
+});
+
+describe('an answer that names the tables it reads', () => {
+  test('should be kept over writes to other tables and built again after a write to one of its own', async () => {
+    const ctx = { db: reader.db, actor: { role: 'head', districtId: null, crewId: null, siteIds: [] }, clock: { today: () => '2026-05-20' } } as unknown as Ctx;
+    let builds = 0;
+    const read = () => cachedAnswer(ctx, 'tables-test', 'k', async () => ++builds, { tables: ['fields', 'weather_days'] });
+    expect(await read()).toBe(1);
+    expect(await read()).toBe(1);
+    // Work logged, a field check, a seed record, a machine: none of its tables.
+    for (const table of ['work_orders', 'field_checks', 'applications', 'equipment']) {
+      expect(await touchOneRow(table)).toBe(1);
+      expect(await read(), table).toBe(1);
+    }
+    expect(await touchOneRow('fields')).toBe(1);
+    expect(await read()).toBe(2);
+    expect(await touchOneRow('weather_days')).toBe(1);
+    expect(await read()).toBe(3);
+    expect(await read()).toBe(3);
   });
 });

@@ -27,6 +27,18 @@ async function dataFingerprint(db: Ctx['db']): Promise<string> {
   return String((res.rows[0] as { v: string }).v);
 }
 
+/** The tables whose writes `answer_versions` counts (migrations 0021 and 0026). */
+export type CountedTable = 'districts' | 'sites' | 'fields' | 'field_checks' | 'weather_stations' | 'weather_days' | 'standards' | 'work_orders' | 'settings' | 'applications' | 'equipment';
+
+/** The change counters of the tables named: they move whenever one of those tables is written. */
+async function tablesFingerprint(db: Ctx['db'], tables: readonly CountedTable[]): Promise<string> {
+  const res = await db.execute(
+    sql`select coalesce(string_agg(${answerVersions.scope} || '=' || ${answerVersions.version}, ',' order by ${answerVersions.scope}), '') as v from ${answerVersions}
+      where ${answerVersions.scope} in (${sql.join(tables.map((t) => sql`${t}`), sql`, `)})`,
+  );
+  return String((res.rows[0] as { v: string }).v);
+}
+
 /**
  * What a caller may see depends only on this: the whole scope of the role (district, crew
  * and sites), never a part of it, so two crews of one district never share an answer.
@@ -91,11 +103,16 @@ const building = new WeakMap<object, Map<string, Promise<unknown>>>();
  * entry at once share one build: each build holds the one embedded connection for its
  * queries, so fifty of them queued every request behind the others.
  */
-export async function cachedAnswer<T>(ctx: Ctx, kind: string, key: string, build: () => Promise<T>): Promise<T> {
+export async function cachedAnswer<T>(ctx: Ctx, kind: string, key: string, build: () => Promise<T>, options: { tables?: readonly CountedTable[] } = {}): Promise<T> {
   // PGlite: this process sees every write, so its own count says as much as the counters
   // table, without a query; the department's date stands in for the database's midnight.
+  // An answer that names the tables it reads is kept over writes to the others, for one small query.
   const local = localWriteCount(ctx.db);
-  const fingerprint = local === undefined ? await sharedFingerprint(ctx.db) : `w${local}|${ctx.clock.today()}`;
+  const fingerprint = options.tables
+    ? `${await tablesFingerprint(ctx.db, options.tables)}|${ctx.clock.today()}`
+    : local === undefined
+      ? await sharedFingerprint(ctx.db)
+      : `w${local}|${ctx.clock.today()}`;
   const full = `${scopeKey(ctx)}|${key}|${fingerprint}`;
   let kinds = caches.get(ctx.db);
   if (!kinds) caches.set(ctx.db, (kinds = new Map()));

@@ -24,7 +24,7 @@ import { applications, budgetLines, districts, equipment, fields, workOrders } f
 import { writeAudit } from './audit.ts';
 import { authorize, type Ctx } from './context.ts';
 import { readCosts } from './costs.ts';
-import { loadSeasonBasis, seasonOutlooks } from './season-outlook.ts';
+import { cachedSeasonOutlooks } from './season-outlook.ts';
 
 const r2 = (v: number) => Math.round(v * 100) / 100;
 const rounded = (f: BudgetFigure): BudgetFigure => ({ quantity: r2(f.quantity), cost: f.cost === null ? null : r2(f.cost) });
@@ -92,8 +92,9 @@ export async function getBudget(ctx: Ctx, q: BudgetQuery): Promise<BudgetAnswer>
   const districtId = budgetScope(ctx, q.districtId);
   const name = await scopeName(ctx.db, districtId, 'query.districtId');
   const { costs } = await readCosts(ctx.db);
-  const basis = await loadSeasonBasis(ctx.db, q.season, districtId === null ? {} : { districtId });
-  const outlook = outlookBudgetFigures(seasonOutlooks(basis), costs);
+  // The outlook the what-if starts from, kept until a table it reads is written.
+  const { basis, outlooks } = await cachedSeasonOutlooks(ctx, q.season, districtId);
+  const outlook = outlookBudgetFigures(outlooks, costs);
   const today = ctx.clock.today();
   const seasonEnd = `${q.season}-12-31`;
   const actualTo = today < seasonEnd ? today : seasonEnd;

@@ -80,15 +80,24 @@ export function seasonOutlooks(basis: Pick<SeasonBasis, 'inputs' | 'standards' |
   return basis.inputs.map((i) => fieldOutlook(i.field, i.weather, basis.standards, basis.params));
 }
 
+/** What a season basis is read from: a work order logged or a scenario saved leaves it as it was. */
+const SEASON_BASIS_TABLES = ['fields', 'sites', 'standards', 'settings', 'weather_stations', 'weather_days'] as const;
+
 /**
  * A scope's season basis and every field's outlook, kept until a table they read is written
  * (fields, sites, weather, stations, Standards, settings: the change counters of
- * `answer-cache.ts`). A what-if works out only the fields its change touches on top of these:
+ * `answer-cache.ts`), not when work is logged or a scenario saved. A what-if works out only the fields its change touches on top of these:
  * on a 3,000-field department, loading and working out the rest took most of its second.
  */
 export function cachedSeasonOutlooks(ctx: Ctx, season: number, districtId: number | null): Promise<{ basis: SeasonBasis; outlooks: FieldOutlook[] }> {
-  return cachedAnswer(ctx, 'season-outlooks', JSON.stringify([season, districtId]), async () => {
-    const basis = await loadSeasonBasis(ctx.db, season, districtId === null ? {} : { districtId });
-    return { basis, outlooks: seasonOutlooks(basis) };
-  });
+  return cachedAnswer(
+    ctx,
+    'season-outlooks',
+    JSON.stringify([season, districtId]),
+    async () => {
+      const basis = await loadSeasonBasis(ctx.db, season, districtId === null ? {} : { districtId });
+      return { basis, outlooks: seasonOutlooks(basis) };
+    },
+    { tables: SEASON_BASIS_TABLES },
+  );
 }
