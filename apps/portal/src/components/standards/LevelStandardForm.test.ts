@@ -134,4 +134,16 @@ describe('LevelStandardForm server errors', { timeout: 30_000 }, () => {
     wrapper.unmount();
     vi.unstubAllGlobals();
   });
+
+  test('should say when the season’s change cannot be worked out, and save nothing', async () => {
+    const fetch = vi.fn(async () => new Response(JSON.stringify({ error: { code: 'request/invalid', message: 'No such season' } }), { status: 400 }));
+    vi.stubGlobal('fetch', fetch);
+    const { wrapper } = mountForm();
+    await wrapper.get('[data-test="standards-form-2"]').trigger('submit');
+    await vi.waitFor(() => expect(wrapper.text()).toContain("The season's change could not be worked out: No such season"));
+    expect(fetch).toHaveBeenCalledTimes(1);
+    expect(isPreview(String((fetch.mock.calls[0] as unknown[])[0]))).toBe(true);
+    wrapper.unmount();
+    vi.unstubAllGlobals();
+  });
 });
