@@ -29,11 +29,11 @@ export const FOREMAN_NORTH: Actor = { id: 3, role: 'foreman', districtId: 1, cre
 /**
  * Mounts a dialog open, with Element Plus, a store and, given an actor, the actor's abilities,
  * and waits until it has settled. Given `fetch`, the page's fetch is that stand-in from before
- * the dialog mounts (`cleanUpAfterEach` restores it).
+ * the dialog mounts (`cleanUpAfterEach` restores it); `plugins` are any more the dialog needs.
  */
-export async function mountDialog(component: Component, props: Record<string, unknown>, options: { actor?: Actor; pinia?: Pinia; fetch?: (...args: never[]) => unknown } = {}) {
+export async function mountDialog(component: Component, props: Record<string, unknown>, options: { actor?: Actor; pinia?: Pinia; fetch?: (...args: never[]) => unknown; plugins?: unknown[] } = {}) {
   if (options.fetch) vi.stubGlobal('fetch', options.fetch);
-  const plugins: unknown[] = [ElementPlus, options.pinia ?? createPinia()];
+  const plugins: unknown[] = [ElementPlus, options.pinia ?? createPinia(), ...(options.plugins ?? [])];
   if (options.actor) plugins.push([abilitiesPlugin, defineAbilityFor(options.actor)]);
   const wrapper = mount(component, { props: { open: true, ...props }, global: { plugins: plugins as never }, attachTo: document.body });
   await flushPromises();
