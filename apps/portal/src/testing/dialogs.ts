@@ -7,23 +7,40 @@ import { defineAbilityFor, type Actor, type DistrictRow, type Polygon } from '@s
 import { flushPromises, mount } from '@vue/test-utils';
 import ElementPlus from 'element-plus';
 import { createPinia, type Pinia } from 'pinia';
-import { afterEach, vi } from 'vitest';
+import { afterEach, expect, vi } from 'vitest';
 import type { Component } from 'vue';
 
 export const $ = (sel: string) => document.body.querySelector(sel);
 export const errorsShown = () => [...document.body.querySelectorAll('.el-form-item__error')].map((e) => e.textContent?.trim());
 export const labelsShown = () => [...document.body.querySelectorAll('.el-form-item__label')].map((e) => e.textContent?.trim());
+/** Waits until the form shows each of `expected` under its field, and `count` messages in all. */
+export async function waitForErrors(expected: string[], count = expected.length) {
+  await vi.waitFor(() => {
+    const shown = errorsShown();
+    for (const message of expected) expect(shown).toContain(message);
+    expect(shown).toHaveLength(count);
+  });
+}
 
 const boundary: Polygon = { type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 0]]] };
 export const district = (id: number, name: string): DistrictRow => ({ id, code: name.toLowerCase(), name, boundary, yard: { name: 'Yard', lat: 0, lng: 0 }, version: 1, siteCount: 0, fieldCount: 0, fieldAreaM2: 0 });
 export const FOREMAN_NORTH: Actor = { id: 3, role: 'foreman', districtId: 1, crewId: null, siteIds: [] };
 
-/** Mounts a dialog open, with Element Plus, a store and, given an actor, the actor's abilities. */
-export function mountDialog(component: Component, props: Record<string, unknown>, options: { actor?: Actor; pinia?: Pinia } = {}) {
-  const plugins: unknown[] = [ElementPlus, options.pinia ?? createPinia()];
+/**
+ * Mounts a dialog open, with Element Plus, a store and, given an actor, the actor's abilities,
+ * and waits until it has settled. Given `fetch`, the page's fetch is that stand-in from before
+ * the dialog mounts (`cleanUpAfterEach` restores it); `plugins` are any more the dialog needs.
+ */
+export async function mountDialog(component: Component, props: Record<string, unknown>, options: { actor?: Actor; pinia?: Pinia; fetch?: (...args: never[]) => unknown; plugins?: unknown[] } = {}) {
+  if (options.fetch) vi.stubGlobal('fetch', options.fetch);
+  const plugins: unknown[] = [ElementPlus, options.pinia ?? createPinia(), ...(options.plugins ?? [])];
   if (options.actor) plugins.push([abilitiesPlugin, defineAbilityFor(options.actor)]);
-  return mount(component, { props: { open: true, ...props }, global: { plugins: plugins as never }, attachTo: document.body });
+  const wrapper = mount(component, { props: { open: true, ...props }, global: { plugins: plugins as never }, attachTo: document.body });
+  await flushPromises();
+  return wrapper;
 }
+
+export type DialogWrapper = Awaited<ReturnType<typeof mountDialog>>;
 
 /** Types into an Element Plus input (the data-test on the input or on its wrapper) and leaves it. */
 export async function type(sel: string, value: string) {

@@ -1,4 +1,3 @@
-import { flushPromises } from '@vue/test-utils';
 import { ElFormItem, ElInput } from 'element-plus';
 import { describe, expect, test, vi } from 'vitest';
 import { defineComponent, h, reactive, ref } from 'vue';
@@ -8,7 +7,7 @@ import { $, cleanUpAfterEach, errorsShown, mountDialog, submitDialog, type } fro
 import FormDialog from './FormDialog.vue';
 
 /** A page holding a one-field dialog, as the form dialogs use it. */
-function host(save: () => Promise<unknown>, closeOnSave = true) {
+async function host(save: () => Promise<unknown>, closeOnSave = true) {
   const open = ref(true);
   const reloads = vi.fn();
   const Host = defineComponent(() => {
@@ -22,7 +21,7 @@ function host(save: () => Promise<unknown>, closeOnSave = true) {
         () => h(ElFormItem, { label: 'Name', prop: 'name' }, () => h(ElInput, { modelValue: model.name, 'onUpdate:modelValue': (v: string) => (model.name = v), 'data-test': 'thing-name' })),
       );
   });
-  return { wrapper: mountDialog(Host, {}), open, reloads };
+  return { wrapper: await mountDialog(Host, {}), open, reloads };
 }
 
 cleanUpAfterEach();
@@ -30,8 +29,7 @@ cleanUpAfterEach();
 describe('FormDialog', () => {
   test('should check the form with its rules and save nothing while it is invalid', async () => {
     const save = vi.fn(async () => undefined);
-    const { wrapper, open } = host(save);
-    await flushPromises();
+    const { wrapper, open } = await host(save);
     await submitDialog('thing');
     await vi.waitFor(() => expect(errorsShown()).toEqual(['enter a name']));
     expect(save).not.toHaveBeenCalled();
@@ -41,8 +39,7 @@ describe('FormDialog', () => {
 
   test('should save a valid form once and close', async () => {
     const save = vi.fn(async () => undefined);
-    const { wrapper, open } = host(save);
-    await flushPromises();
+    const { wrapper, open } = await host(save);
     await type('[data-test="thing-name"]', 'Alder');
     await submitDialog('thing');
     expect(save).toHaveBeenCalledTimes(1);
@@ -51,8 +48,7 @@ describe('FormDialog', () => {
   });
 
   test('should stay open after saving when it shows a result', async () => {
-    const { wrapper, open } = host(async () => undefined, false);
-    await flushPromises();
+    const { wrapper, open } = await host(async () => undefined, false);
     await type('[data-test="thing-name"]', 'Alder');
     await submitDialog('thing');
     expect(open.value).toBe(true);
@@ -60,8 +56,7 @@ describe('FormDialog', () => {
   });
 
   test('should show a failed save above the form and offer Reload after a conflict', async () => {
-    const { wrapper, open, reloads } = host(() => Promise.reject(new ApiError(409, 'site/version_conflict', 'stale')));
-    await flushPromises();
+    const { wrapper, open, reloads } = await host(() => Promise.reject(new ApiError(409, 'site/version_conflict', 'stale')));
     await type('[data-test="thing-name"]', 'Alder');
     await submitDialog('thing');
     expect($('[data-test="thing-form-error"]')?.textContent).toMatch(/Someone else changed this site/);
@@ -72,8 +67,7 @@ describe('FormDialog', () => {
   });
 
   test('should show a refused save without Reload', async () => {
-    const { wrapper } = host(() => Promise.reject(new ApiError(400, 'request/invalid', 'No such district')));
-    await flushPromises();
+    const { wrapper } = await host(() => Promise.reject(new ApiError(400, 'request/invalid', 'No such district')));
     await type('[data-test="thing-name"]', 'Alder');
     await submitDialog('thing');
     expect($('[data-test="thing-form-error"]')?.textContent).toContain('No such district');

@@ -1,14 +1,14 @@
 import type { CrewRow } from '@swardwise/domain';
 import { flushPromises } from '@vue/test-utils';
 import { describe, expect, test, vi } from 'vitest';
-import { $, answering, cleanUpAfterEach, district, errorsShown, FOREMAN_NORTH, mountDialog, submitDialog, type } from '../../testing/dialogs.ts';
+import { $, answering, cleanUpAfterEach, district, errorsShown, FOREMAN_NORTH, mountDialog, submitDialog, type, waitForErrors } from '../../testing/dialogs.ts';
 import CrewFormDialog from './CrewFormDialog.vue';
 import { workDaysText } from './crewForm.ts';
 
 const DISTRICTS = [district(1, 'North'), district(2, 'South')];
 const CREW: CrewRow = { id: 5, districtId: 1, districtName: 'North', name: 'North Crew A', hoursPerDay: 8, members: ['R. Alder'], workDays: ['mon', 'tue', 'wed', 'thu', 'fri'], leadUserId: null, leadName: null, version: 3 };
 
-const mountForm = (crew: CrewRow | null = null) => mountDialog(CrewFormDialog, { crew, districts: DISTRICTS }, { actor: FOREMAN_NORTH });
+const mountForm = (fetch: (...args: never[]) => unknown, crew: CrewRow | null = null) => mountDialog(CrewFormDialog, { crew, districts: DISTRICTS }, { actor: FOREMAN_NORTH, fetch });
 async function toggleDay(day: string) {
   ($(`[data-test="crew-day-${day}"] input`) as HTMLInputElement).click();
   await flushPromises();
@@ -20,28 +20,18 @@ cleanUpAfterEach();
 describe('CrewFormDialog', () => {
   test('should show the schema’s messages for a short name, no hours and no working day, and send nothing', async () => {
     const fetch = vi.fn();
-    vi.stubGlobal('fetch', fetch);
-    const w = mountForm();
-    await flushPromises();
+    const w = await mountForm(fetch);
     await type('[data-test="crew-name"]', 'A');
     await type('[data-test="crew-hours"]', '');
     for (const d of ['mon', 'tue', 'wed', 'thu', 'fri']) await toggleDay(d);
     await submit();
-    await vi.waitFor(() => {
-      const shown = errorsShown();
-      expect(shown).toContain('enter a crew name');
-      expect(shown).toContain('hours per day is required');
-      expect(shown).toContain('a crew works at least one day a week');
-      expect(shown).toHaveLength(3);
-    });
+    await waitForErrors(['enter a crew name', 'hours per day is required', 'a crew works at least one day a week']);
     expect(fetch).not.toHaveBeenCalled();
     w.unmount();
   });
 
   test('should refuse a shift longer than 16 hours', async () => {
-    vi.stubGlobal('fetch', vi.fn());
-    const w = mountForm();
-    await flushPromises();
+    const w = await mountForm(vi.fn());
     await type('[data-test="crew-name"]', 'North Crew C');
     await type('[data-test="crew-hours"]', '18');
     await submit();
@@ -51,9 +41,7 @@ describe('CrewFormDialog', () => {
 
   test('should send a foreman’s new crew in his district with its days and members', async () => {
     const fetch = vi.fn(async (_url: string, init: RequestInit) => okResponse({ ...CREW, ...JSON.parse(String(init.body)), id: 9 }));
-    vi.stubGlobal('fetch', fetch);
-    const w = mountForm();
-    await flushPromises();
+    const w = await mountForm(fetch);
     await type('[data-test="crew-name"]', 'North Crew C');
     await type('[data-test="crew-hours"]', '9.5');
     await toggleDay('fri');
@@ -77,9 +65,7 @@ describe('CrewFormDialog', () => {
 
   test('should send the version it read and say so on a 409', async () => {
     const fetch = answering(409, { error: { code: 'crew/version_conflict', message: 'conflict' } });
-    vi.stubGlobal('fetch', fetch);
-    const w = mountForm(CREW);
-    await flushPromises();
+    const w = await mountForm(fetch, CREW);
     await submit();
     const init = fetch.mock.calls[0]![1]!;
     expect(JSON.parse(String(init.body))).toMatchObject({ version: 3, name: 'North Crew A' });

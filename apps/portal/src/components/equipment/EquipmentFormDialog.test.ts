@@ -3,7 +3,7 @@ import { flushPromises } from '@vue/test-utils';
 import { createPinia, setActivePinia } from 'pinia';
 import { describe, expect, test, vi } from 'vitest';
 import { useSessionStore } from '../../stores/session.ts';
-import { $, cleanUpAfterEach, district, errorsShown, FOREMAN_NORTH, labelsShown as labels, mountDialog, submitDialog, type } from '../../testing/dialogs.ts';
+import { $, cleanUpAfterEach, district, errorsShown, FOREMAN_NORTH, labelsShown as labels, mountDialog, submitDialog, type, type DialogWrapper } from '../../testing/dialogs.ts';
 import EquipmentFormDialog from './EquipmentFormDialog.vue';
 
 const DISTRICTS = [district(1, 'North')];
@@ -14,14 +14,14 @@ const MOWER: EquipmentRow = {
   notes: '', active: true, version: 2, updatedAt: '2026-06-01T00:00:00Z',
 };
 
-function mountForm(units: 'imperial' | 'metric', equipment: EquipmentRow | null = null) {
+function mountForm(fetch: (...args: never[]) => unknown, units: 'imperial' | 'metric', equipment: EquipmentRow | null = null) {
   const pinia = createPinia();
   setActivePinia(pinia);
   useSessionStore().user = { id: 3, email: 'f@test.example', name: 'F', role: 'foreman', districtId: 1, crewId: null, siteIds: [], units, version: 1 } satisfies SessionUser;
-  return mountDialog(EquipmentFormDialog, { equipment, districts: DISTRICTS, crews: CREWS }, { actor: FOREMAN_NORTH, pinia });
+  return mountDialog(EquipmentFormDialog, { equipment, districts: DISTRICTS, crews: CREWS }, { actor: FOREMAN_NORTH, pinia, fetch });
 }
 
-async function chooseKind(w: ReturnType<typeof mountForm>, kind: string) {
+async function chooseKind(w: DialogWrapper, kind: string) {
   w.findAllComponents({ name: 'ElSelect' })[0]!.vm.$emit('update:modelValue', kind);
   await flushPromises();
 }
@@ -32,9 +32,7 @@ cleanUpAfterEach();
 describe('EquipmentFormDialog', () => {
   test('should ask a mower for its cutting figures and send nothing without them', async () => {
     const fetch = vi.fn();
-    vi.stubGlobal('fetch', fetch);
-    const w = mountForm('metric');
-    await flushPromises();
+    const w = await mountForm(fetch, 'metric');
     expect($('[data-test="mower-fields"]')).not.toBeNull();
     await type('[data-test="equipment-name"]', 'Rotary 72');
     await submit();
@@ -45,9 +43,7 @@ describe('EquipmentFormDialog', () => {
 
   test('should hide the mower fields for a line marker and send them empty even if typed before', async () => {
     const fetch = created();
-    vi.stubGlobal('fetch', fetch);
-    const w = mountForm('metric');
-    await flushPromises();
+    const w = await mountForm(fetch, 'metric');
     await type('[data-test="equipment-width"]', '1.8');
     await chooseKind(w, 'line_marker');
     expect($('[data-test="mower-fields"]')).toBeNull();
@@ -75,9 +71,7 @@ describe('EquipmentFormDialog', () => {
 
   test('should take a mower’s figures in inches and mph and send them in metres, km/h and millimetres', async () => {
     const fetch = created();
-    vi.stubGlobal('fetch', fetch);
-    const w = mountForm('imperial');
-    await flushPromises();
+    const w = await mountForm(fetch, 'imperial');
     expect(labels()).toEqual(expect.arrayContaining(['Cutting width (in)', 'Working speed (mph)', 'Lowest HOC (in)', 'Highest HOC (in)']));
     await type('[data-test="equipment-name"]', 'Rotary 72');
     await type('[data-test="equipment-width"]', '72');
@@ -94,9 +88,7 @@ describe('EquipmentFormDialog', () => {
   });
 
   test('should show an edited mower in the person’s units and put the HOC range check on the highest HOC', async () => {
-    vi.stubGlobal('fetch', vi.fn());
-    const w = mountForm('metric', MOWER);
-    await flushPromises();
+    const w = await mountForm(vi.fn(), 'metric', MOWER);
     expect(($('[data-test="equipment-width"] input') as HTMLInputElement).value).toBe('3.4');
     expect(($('[data-test="equipment-efficiency"] input') as HTMLInputElement).value).toBe('80');
     await type('[data-test="equipment-hoc-max"]', '10');

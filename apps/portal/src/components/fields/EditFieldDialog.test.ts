@@ -1,7 +1,7 @@
 import type { FieldRow } from '@swardwise/domain';
 import { flushPromises } from '@vue/test-utils';
 import { describe, expect, test, vi } from 'vitest';
-import { answering, cleanUpAfterEach, mountDialog as mountDialogWith, submitDialog } from '../../testing/dialogs.ts';
+import { answering, cleanUpAfterEach, mountDialog as mountDialogWith, submitDialog, type DialogWrapper } from '../../testing/dialogs.ts';
 import EditFieldDialog from './EditFieldDialog.vue';
 
 const FIELD: FieldRow = {
@@ -29,18 +29,16 @@ const FIELD: FieldRow = {
   updatedAt: '2026-11-30T10:00:00Z',
 };
 
-const mountDialog = () => mountDialogWith(EditFieldDialog, { field: FIELD });
+const mountDialog = (fetch?: (...args: never[]) => unknown) => mountDialogWith(EditFieldDialog, { field: FIELD }, { fetch });
 type Model = { name: string; hoc: number | null; status: string };
-const modelOf = (w: ReturnType<typeof mountDialog>) => (w.vm.$ as unknown as { setupState: { model: Model } }).setupState.model;
+const modelOf = (w: DialogWrapper) => (w.vm.$ as unknown as { setupState: { model: Model } }).setupState.model;
 const submit = () => submitDialog('field');
 cleanUpAfterEach();
 
 describe('EditFieldDialog', () => {
   test('should refuse an empty name and a height of cut below 3 mm without sending anything', async () => {
     const fetch = vi.fn();
-    vi.stubGlobal('fetch', fetch);
-    const w = mountDialog();
-    await flushPromises();
+    const w = await mountDialog(fetch);
     modelOf(w).name = '';
     modelOf(w).hoc = 0.05; // inches: 1.3 mm
     await submit();
@@ -55,8 +53,7 @@ describe('EditFieldDialog', () => {
   });
 
   test('should show the closure cautions when a field is closed or restricted', async () => {
-    const w = mountDialog();
-    await flushPromises();
+    const w = await mountDialog();
     expect(document.body.querySelector('[data-test="closure-caution"]')).toBeNull();
     modelOf(w).status = 'closed';
     await flushPromises();
@@ -66,9 +63,7 @@ describe('EditFieldDialog', () => {
 
   test('should send the height of cut in millimetres with the version it was opened at', async () => {
     const fetch = answering(200, { field: { ...FIELD, hocOverrideMm: 38.1, version: 6 } });
-    vi.stubGlobal('fetch', fetch);
-    const w = mountDialog();
-    await flushPromises();
+    const w = await mountDialog(fetch);
     modelOf(w).hoc = 1.5; // inches
     await submit();
     expect(fetch).toHaveBeenCalledTimes(1);

@@ -1,12 +1,9 @@
-import { abilitiesPlugin } from '@casl/vue';
-import { defineAbilityFor, type Actor } from '@swardwise/domain';
+import { type Actor } from '@swardwise/domain';
 import { VueQueryPlugin } from '@tanstack/vue-query';
-import { flushPromises, mount } from '@vue/test-utils';
-import ElementPlus from 'element-plus';
-import { createPinia } from 'pinia';
+import { flushPromises } from '@vue/test-utils';
 import { describe, expect, test, vi } from 'vitest';
 import { createQueryClient } from '../../api/queryClient.ts';
-import { $, cleanUpAfterEach, errorsShown, submitDialog, type } from '../../testing/dialogs.ts';
+import { $, cleanUpAfterEach, errorsShown, mountDialog, submitDialog, type } from '../../testing/dialogs.ts';
 import RequestFormDialog from './RequestFormDialog.vue';
 
 const PARTNER: Actor = { id: 5, role: 'partner', districtId: null, crewId: null, siteIds: [8] };
@@ -21,15 +18,7 @@ function api(answer: (init: RequestInit) => Response) {
 }
 const sent = (fetch: ReturnType<typeof api>) => fetch.mock.calls.filter(([url]) => String(url).startsWith('/api/requests'));
 
-async function mountForm(props: Record<string, unknown> = { fieldId: 40 }) {
-  const w = mount(RequestFormDialog, {
-    props: { open: true, ...props },
-    global: { plugins: [createPinia(), ElementPlus, [abilitiesPlugin, defineAbilityFor(PARTNER)], [VueQueryPlugin, { queryClient: createQueryClient() }]] },
-    attachTo: document.body,
-  });
-  await flushPromises();
-  return w;
-}
+const mountForm = (props: Record<string, unknown> = { fieldId: 40 }) => mountDialog(RequestFormDialog, props, { actor: PARTNER, plugins: [[VueQueryPlugin, { queryClient: createQueryClient() }]] });
 cleanUpAfterEach();
 
 describe('RequestFormDialog', () => {

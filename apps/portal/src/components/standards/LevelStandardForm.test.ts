@@ -12,19 +12,30 @@ const row: StandardsRow = { level: 2, data: structuredClone(DEFAULT_STANDARDS[2]
  * works a picker (the browser test of cultural work does).
  */
 function mountForm(units: 'metric' | 'imperial' = 'metric') {
-  return mount(LevelStandardForm, { props: { row, units, outlookSeason: 2026 }, attachTo: document.body, global: { stubs: { ElSelect: true, ElOption: true, WhatIfChart: true } } });
+  const wrapper = mount(LevelStandardForm, { props: { row, units, outlookSeason: 2026 }, attachTo: document.body, global: { stubs: { ElSelect: true, ElOption: true, WhatIfChart: true } } });
+  return { wrapper, form: wrapper.vm as unknown as { validate(): Promise<boolean>; invalid: Record<string, string> } };
 }
+type Mounted = ReturnType<typeof mountForm>;
 
 /** The save preview's answer: a season without fields (the preview's figures are the what-if tests' business). */
 const previewAnswer: WhatIfAnswer = { season: 2026, districtId: null, scopeName: 'Department', currency: 'USD', result: whatIf([], DEFAULT_STANDARDS, DEFAULT_PARAMETERS, DEFAULT_COSTS, { moves: [] }) };
 const isPreview = (url: string) => String(url).includes('/what-if');
 type Confirmable = { confirm(): Promise<boolean> };
 
-async function setNumber(wrapper: ReturnType<typeof mountForm>, test: string, value: string) {
+async function setNumber(wrapper: Mounted['wrapper'], test: string, value: string) {
   const input = wrapper.find(`[data-test="${test}"] input`);
   await input.setValue(value);
   await input.trigger('change');
   await flushPromises();
+}
+
+/** Types `bad` into the number input `test` (the form refuses it with `invalid`), then `good` (it accepts that). */
+async function refusesThenAccepts({ wrapper, form }: Mounted, test: string, bad: string, invalid: Record<string, string>, good: string) {
+  await setNumber(wrapper, test, bad);
+  expect(await form.validate()).toBe(false);
+  expect(form.invalid).toEqual(invalid);
+  await setNumber(wrapper, test, good);
+  expect(await form.validate()).toBe(true);
 }
 
 describe('LevelStandardForm', { timeout: 30_000 }, () => {
@@ -39,20 +50,14 @@ describe('LevelStandardForm', { timeout: 30_000 }, () => {
   });
 
   test('should refuse a HOC below 3 mm with the schema’s message and accept a sound one', async () => {
-    const wrapper = mountForm();
-    const form = wrapper.vm as unknown as { validate(): Promise<boolean>; invalid: Record<string, string> };
-    expect(await form.validate()).toBe(true);
-    await setNumber(wrapper, 'hoc-soccer-cool', '2');
-    expect(await form.validate()).toBe(false);
-    expect(form.invalid).toEqual({ 'hoc.soccer.cool': 'a height of cut below 3 mm is not a turf height' });
-    await setNumber(wrapper, 'hoc-soccer-cool', '40');
-    expect(await form.validate()).toBe(true);
-    wrapper.unmount();
+    const mounted = mountForm();
+    expect(await mounted.form.validate()).toBe(true);
+    await refusesThenAccepts(mounted, 'hoc-soccer-cool', '2', { 'hoc.soccer.cool': 'a height of cut below 3 mm is not a turf height' }, '40');
+    mounted.wrapper.unmount();
   });
 
   test('should refuse a feed share above 1 and a target score above 100', async () => {
-    const wrapper = mountForm();
-    const form = wrapper.vm as unknown as { validate(): Promise<boolean>; invalid: Record<string, string> };
+    const { wrapper, form } = mountForm();
     await setNumber(wrapper, 'std-feed-share', '1.5');
     await setNumber(wrapper, 'std-target-score', '120');
     expect(await form.validate()).toBe(false);
@@ -69,15 +74,10 @@ describe('LevelStandardForm: cultural program', { timeout: 30_000 }, () => {
     expect(updateLevelStandardSchema.safeParse(body).success).toBe(true);
     expect(body.cultural?.aerate).toMatchObject({ timesPerSeason: 4, cool: { fromMonth: 4, toMonth: 10 }, method: 'core' });
 
-    const wrapper = mountForm();
-    const form = wrapper.vm as unknown as { validate(): Promise<boolean>; invalid: Record<string, string> };
-    expect(wrapper.find('[data-test="std-cultural"]').text()).toContain('the product label is the law');
-    await setNumber(wrapper, 'cultural-topdress-times', '13');
-    expect(await form.validate()).toBe(false);
-    expect(form.invalid).toEqual({ 'cultural.topdress.timesPerSeason': 'more than 12 times a season is not a program' });
-    await setNumber(wrapper, 'cultural-topdress-times', '2');
-    expect(await form.validate()).toBe(true);
-    wrapper.unmount();
+    const mounted = mountForm();
+    expect(mounted.wrapper.find('[data-test="std-cultural"]').text()).toContain('the product label is the law');
+    await refusesThenAccepts(mounted, 'cultural-topdress-times', '13', { 'cultural.topdress.timesPerSeason': 'more than 12 times a season is not a program' }, '2');
+    mounted.wrapper.unmount();
   });
 });
 
@@ -85,7 +85,7 @@ describe('LevelStandardForm in imperial units', { timeout: 30_000 }, () => {
   test('should take heights of cut in inches and send millimetres', async () => {
     const fetch = vi.fn(async (url: string, init: RequestInit) => new Response(JSON.stringify(isPreview(url) ? previewAnswer : { ...row, data: { ...row.data, ...JSON.parse(String(init.body)) } }), { status: 200 }));
     vi.stubGlobal('fetch', fetch);
-    const wrapper = mountForm('imperial');
+    const { wrapper } = mountForm('imperial');
     expect(wrapper.text()).toContain('Height of cut, inches');
     const shown = Number((wrapper.find('[data-test="hoc-soccer-cool"] input').element as HTMLInputElement).value);
     expect(shown).toBeCloseTo(row.data.hocMm.soccer.cool / 25.4, 2);
@@ -106,8 +106,7 @@ describe('LevelStandardForm in imperial units', { timeout: 30_000 }, () => {
   });
 
   test('should judge an entry in inches by the millimetre rule and say so', async () => {
-    const wrapper = mountForm('imperial');
-    const form = wrapper.vm as unknown as { validate(): Promise<boolean>; invalid: Record<string, string> };
+    const { wrapper, form } = mountForm('imperial');
     await setNumber(wrapper, 'hoc-soccer-cool', '0.1');
     expect(await form.validate()).toBe(false);
     expect(form.invalid['hoc.soccer.cool']).toBe('a height of cut below 3 mm is not a turf height (checked after converting to millimetres)');
@@ -125,13 +124,25 @@ describe('LevelStandardForm server errors', { timeout: 30_000 }, () => {
           : new Response(JSON.stringify({ error: { code: 'request/invalid', message: 'Invalid body', details: { issues: [{ path: 'body.hocMm.soccer.cool', message: 'too low for this level' }] } } }), { status: 400 }),
       ),
     );
-    const wrapper = mountForm();
+    const { wrapper } = mountForm();
     await wrapper.get('[data-test="standards-form-2"]').trigger('submit');
     await flushPromises();
     await (wrapper.vm as unknown as Confirmable).confirm();
     await flushPromises();
     await vi.waitFor(() => expect(wrapper.text()).toContain('too low for this level'));
     expect(wrapper.get('[data-test="standards-form-error"]').text()).toContain('Invalid body');
+    wrapper.unmount();
+    vi.unstubAllGlobals();
+  });
+
+  test('should say when the season’s change cannot be worked out, and save nothing', async () => {
+    const fetch = vi.fn(async () => new Response(JSON.stringify({ error: { code: 'request/invalid', message: 'No such season' } }), { status: 400 }));
+    vi.stubGlobal('fetch', fetch);
+    const { wrapper } = mountForm();
+    await wrapper.get('[data-test="standards-form-2"]').trigger('submit');
+    await vi.waitFor(() => expect(wrapper.text()).toContain("The season's change could not be worked out: No such season"));
+    expect(fetch).toHaveBeenCalledTimes(1);
+    expect(isPreview(String((fetch.mock.calls[0] as unknown[])[0]))).toBe(true);
     wrapper.unmount();
     vi.unstubAllGlobals();
   });

@@ -18,19 +18,23 @@ const INVITED: UserRow = {
   active: true, lastSignInAt: null, createdAt: '2026-12-01T09:00:00Z', districtName: null, crewName: null, pendingInvite: true,
 };
 
+/** Opens the dialog with `fetch` for the page's and invites W. Reed as head. */
+async function inviteReed(fetch: (...args: never[]) => unknown) {
+  const w = await mountDialog(InviteUserDialog, { options: OPTIONS }, { fetch });
+  w.findAllComponents({ name: 'SelectItem' })[0]!.vm.$emit('update:modelValue', 'head');
+  await flushPromises();
+  await type('[data-test="invite-name"]', 'W. Reed');
+  await type('[data-test="invite-email"]', 'w.reed@test.example');
+  await submitDialog('invite');
+  return w;
+}
+
 cleanUpAfterEach();
 
 describe('InviteUserDialog', () => {
   test('should invite once, then show the link in place of the form and close on Done', async () => {
     const fetch = answering(201, { user: INVITED, inviteUrl: 'http://portal.test/accept-invite/abc', emailed: true, mail: 'sent' });
-    vi.stubGlobal('fetch', fetch);
-    const w = mountDialog(InviteUserDialog, { options: OPTIONS });
-    await flushPromises();
-    w.findAllComponents({ name: 'SelectItem' })[0]!.vm.$emit('update:modelValue', 'head');
-    await flushPromises();
-    await type('[data-test="invite-name"]', 'W. Reed');
-    await type('[data-test="invite-email"]', 'w.reed@test.example');
-    await submitDialog('invite');
+    const w = await inviteReed(fetch);
     await vi.waitFor(() => expect(fetch).toHaveBeenCalledTimes(1));
     expect(JSON.parse(String(fetch.mock.calls[0]![1]!.body))).toEqual({ email: 'w.reed@test.example', name: 'W. Reed', role: 'head', districtId: null, crewId: null, siteIds: [] });
     expect(w.emitted('invited')).toEqual([[INVITED]]);
@@ -47,14 +51,7 @@ describe('InviteUserDialog', () => {
   });
 
   test('should say no e-mail went out when mail is off, and that the link must be passed on by hand', async () => {
-    vi.stubGlobal('fetch', answering(201, { user: INVITED, inviteUrl: 'http://portal.test/accept-invite/xyz', emailed: false, mail: 'off' }));
-    const w = mountDialog(InviteUserDialog, { options: OPTIONS });
-    await flushPromises();
-    w.findAllComponents({ name: 'SelectItem' })[0]!.vm.$emit('update:modelValue', 'head');
-    await flushPromises();
-    await type('[data-test="invite-name"]', 'W. Reed');
-    await type('[data-test="invite-email"]', 'w.reed@test.example');
-    await submitDialog('invite');
+    const w = await inviteReed(answering(201, { user: INVITED, inviteUrl: 'http://portal.test/accept-invite/xyz', emailed: false, mail: 'off' }));
     await vi.waitFor(() => expect($('[data-test="invite-url"]')).not.toBeNull());
     const said = $('[data-test="invite-mail"]')!.textContent!;
     expect(said).toMatch(/No e-mail was sent: e-mail is not set up/);
