@@ -6,6 +6,7 @@ import { users } from '../../apps/api/src/db/schema/index.ts';
 import { createMailer } from '../../apps/api/src/mail/mailer.ts';
 import { PASSWORD } from '../support/fixture.ts';
 import { useTestApi } from '../support/app.ts';
+import { generateAndConfirmWeek } from '../support/weeks.ts';
 
 const api = useTestApi();
 /** The same API with no mail set up (no SMTP_HOST). */
@@ -77,9 +78,7 @@ describe('what the API says happened', () => {
   test('should say why confirming the week sent no e-mail', async () => {
     const app = mailOff();
     const foreman = await api.signIn('foreman', app);
-    const week = '2026-06-08';
-    await foreman.post('/api/week-plans/generate').send({ districtId: api.fixture.districts.north, weekStart: week });
-    const res = await foreman.post('/api/week-plans/confirm').send({ districtId: api.fixture.districts.north, weekStart: week });
+    const res = await generateAndConfirmWeek(foreman, api.fixture.districts.north, '2026-06-08');
     expect(res.status).toBe(200);
     expect(res.body.assigned).toBeGreaterThan(0);
     expect(res.body.emailed).toBe(0);
@@ -88,12 +87,10 @@ describe('what the API says happened', () => {
 
   test('should name the crews with no crew-lead account to write to', async () => {
     const foreman = await api.signIn('foreman');
-    const week = '2026-06-15';
     const crewLead = api.fixture.users.crew.id;
     await api.database.db.update(users).set({ active: false }).where(eq(users.id, crewLead));
     try {
-      await foreman.post('/api/week-plans/generate').send({ districtId: api.fixture.districts.north, weekStart: week });
-      const res = await foreman.post('/api/week-plans/confirm').send({ districtId: api.fixture.districts.north, weekStart: week });
+      const res = await generateAndConfirmWeek(foreman, api.fixture.districts.north, '2026-06-15');
       expect(res.body.mail).toMatchObject({ crews: 1, sent: 0, mailOff: false, crewsWithoutLead: ['North Crew'] });
     } finally {
       await api.database.db.update(users).set({ active: true }).where(eq(users.id, crewLead));

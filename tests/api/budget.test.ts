@@ -8,8 +8,9 @@ import sharp from 'sharp';
 import { and, eq } from 'drizzle-orm';
 import { beforeAll, describe, expect, test } from 'vitest';
 import { DEFAULT_COSTS, type BudgetAnswer } from '@swardwise/domain';
-import { applications, auditLog, budgetLines, equipment, fields, workOrders } from '../../apps/api/src/db/schema/index.ts';
+import { applications, auditLog, budgetLines, fields, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { useTestApi } from '../support/app.ts';
+import { addEquipment } from '../support/fixture.ts';
 import { getPdf, renderPdf } from '../support/pdf.ts';
 
 const api = useTestApi();
@@ -24,20 +25,20 @@ beforeAll(async () => {
   // The north crew has its own rate; everyone else the department's.
   const costs = await head.patch('/api/costs').send({ ...DEFAULT_COSTS, labourRatePerHour: 40, crewRates: [{ crewId: f.crews.north, ratePerHour: 50 }], version: 1 });
   expect(costs.status).toBe(200);
-  const [reel] = await db.insert(equipment).values({ districtId: f.districts.north, kind: 'reel_mower', name: 'Reel 1' }).returning();
-  const [marker] = await db.insert(equipment).values({ districtId: f.districts.north, kind: 'line_marker', name: 'Marker 1' }).returning();
+  const reel = await addEquipment(db, { districtId: f.districts.north, kind: 'reel_mower', name: 'Reel 1' });
+  const marker = await addEquipment(db, { districtId: f.districts.north, kind: 'line_marker', name: 'Marker 1' });
   const [soccer] = await db.select().from(fields).where(eq(fields.id, f.fields.northSoccer));
   soccerAreaM2 = soccer!.areaM2;
   const north = { fieldId: f.fields.northSoccer, siteId: f.sites.northPark, districtId: f.districts.north, weekStart: '2026-05-04', origin: 'manual' as const };
   await db.insert(workOrders).values([
     // Done: 2 h by the north crew with the reel mower.
-    { ...north, task: 'mow', plannedDate: '2026-05-05', plannedHours: 1.5, actualHours: 2, status: 'done', crewId: f.crews.north, equipmentId: reel!.id },
+    { ...north, task: 'mow', plannedDate: '2026-05-05', plannedHours: 1.5, actualHours: 2, status: 'done', crewId: f.crews.north, equipmentId: reel },
     // Done without hours logged (the planned hour counts), no crew: the department's rate.
     { ...north, task: 'feed', plannedDate: '2026-05-06', plannedHours: 1, status: 'done', details: { nGPerM2: 2.5 } },
     // Done: the controller set for the week's 12,000 L.
     { ...north, task: 'irrigate', plannedDate: '2026-05-06', plannedHours: 0.25, status: 'done', crewId: f.crews.north, details: { system: 'automatic', volumeL: 12000 } },
     // Done: 10 L of concentrate over 3 h with the line marker.
-    { ...north, task: 'paint_lines', plannedDate: '2026-05-07', plannedHours: 2, actualHours: 3, status: 'done', crewId: f.crews.north, equipmentId: marker!.id, details: { paintL: 10 } },
+    { ...north, task: 'paint_lines', plannedDate: '2026-05-07', plannedHours: 2, actualHours: 3, status: 'done', crewId: f.crews.north, equipmentId: marker, details: { paintL: 10 } },
     // Not counted: not done; done in another season; a bad detail reads as nothing.
     { ...north, task: 'mow', plannedDate: '2026-05-08', plannedHours: 5, status: 'assigned', crewId: f.crews.north },
     { ...north, task: 'mow', plannedDate: '2025-05-08', plannedHours: 7, status: 'done', crewId: f.crews.north },

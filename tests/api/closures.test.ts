@@ -89,12 +89,18 @@ describe('closures', () => {
   });
 
   describe('with planned work', () => {
-    test('should ask what to do with the work, then keep it', async () => {
+    /** Soccer 1 with a mowing of the north crew `daysFromToday` ahead, the foreman signed in, and the field's version. */
+    async function fieldWithWork(daysFromToday: number) {
       const { db } = api.database;
       const id = api.fixture.fields.northSoccer;
-      const order = await giveWork(db, id, api.fixture.crews.north, 1);
+      const order = await giveWork(db, id, api.fixture.crews.north, daysFromToday);
       const foreman = await api.signIn('foreman');
       const { version } = await fieldVersion(id);
+      return { db, id, order, foreman, version };
+    }
+
+    test('should ask what to do with the work, then keep it', async () => {
+      const { db, id, order, foreman, version } = await fieldWithWork(1);
       const asked = await foreman.post(`/api/fields/${id}/closures`).send(close({ version }));
       expect(asked.status).toBe(400);
       expect(asked.body.error.details.issues[0].path).toBe('body.work');
@@ -112,13 +118,9 @@ describe('closures', () => {
     });
 
     test('should move the work to the crew’s first working day from the expected reopening, audited, and tell the crew lead', async () => {
-      const { db } = api.database;
-      const id = api.fixture.fields.northSoccer;
-      const order = await giveWork(db, id, api.fixture.crews.north, 0);
+      const { db, id, order, foreman, version } = await fieldWithWork(0);
       // Work after the expected reopening is not the closure's business.
       const later = await giveWork(db, id, api.fixture.crews.north, 9);
-      const foreman = await api.signIn('foreman');
-      const { version } = await fieldVersion(id);
       // Moving needs the day to move to.
       expect((await foreman.post(`/api/fields/${id}/closures`).send(close({ version, work: 'move', expectedReopenOn: null }))).status).toBe(400);
       const reopen = addDaysIso(today(), 4);
@@ -142,11 +144,7 @@ describe('closures', () => {
     });
 
     test('should cancel the work with the closure’s reason in the same transaction', async () => {
-      const { db } = api.database;
-      const id = api.fixture.fields.northSoccer;
-      const order = await giveWork(db, id, api.fixture.crews.north, 2);
-      const foreman = await api.signIn('foreman');
-      const { version } = await fieldVersion(id);
+      const { db, id, order, foreman, version } = await fieldWithWork(2);
       const res = await foreman.post(`/api/fields/${id}/closures`).send(close({ version, reason: 'lightning', work: 'cancel' }));
       expect(res.status).toBe(201);
       expect(res.body.work.cancelled).toEqual([order]);

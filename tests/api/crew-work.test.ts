@@ -2,7 +2,7 @@ import { and, eq } from 'drizzle-orm';
 import sharp from 'sharp';
 import { describe, expect, test } from 'vitest';
 import { auditLog, equipment, fieldChecks, fields, workOrders } from '../../apps/api/src/db/schema/index.ts';
-import { giveWork } from '../support/fixture.ts';
+import { addEquipment, giveWork } from '../support/fixture.ts';
 import { useTestApi } from '../support/app.ts';
 import { useTempDir } from '../support/temp-dir.ts';
 
@@ -116,13 +116,13 @@ describe('reopening a finished job', () => {
   });
 
   test('should take a reopened done job’s hours back off the mower’s meter', async () => {
-    const [mower] = await db().insert(equipment).values({ districtId: api.fixture.districts.north, crewId: api.fixture.crews.north, kind: 'rotary_mower', name: 'Reopen rotary', hourMeterH: 50 }).returning();
+    const mower = await addEquipment(db(), { districtId: api.fixture.districts.north, crewId: api.fixture.crews.north, kind: 'rotary_mower', name: 'Reopen rotary', hourMeterH: 50 });
     const id = await northWork();
-    await db().update(workOrders).set({ equipmentId: mower!.id }).where(eq(workOrders.id, id));
+    await db().update(workOrders).set({ equipmentId: mower }).where(eq(workOrders.id, id));
     const crew = await api.signIn('crew');
     await crew.post(`/api/work-orders/${id}/reports`).send({ status: 'done', actualHours: 2 });
     await crew.post(`/api/work-orders/${id}/reopen`).send({});
-    expect((await db().select().from(equipment).where(eq(equipment.id, mower!.id)))[0]!.hourMeterH).toBe(50);
+    expect((await db().select().from(equipment).where(eq(equipment.id, mower)))[0]!.hourMeterH).toBe(50);
   });
 });
 

@@ -18,14 +18,10 @@ describe('data folder check', () => {
     try {
       // The write is where a full disk fails (ENOSPC); the rest is the real file system.
       const full = { ...fs, writeSync: () => { throw errno('ENOSPC'); } };
-      let thrown: unknown;
-      try {
-        checkDataFolder(dir, full);
-      } catch (err) {
-        thrown = err;
-      }
-      expect(thrown).toBeInstanceOf(StartupError);
-      expect((thrown as Error).message).toBe(`the disk holding the data folder ${dir} is full (ENOSPC). Free some space on it, or set PGLITE_DIR to a folder on a disk with room, then start again.`);
+      expect(() => checkDataFolder(dir, full)).toThrow(StartupError);
+      expect(() => checkDataFolder(dir, full)).toThrow(
+        expect.objectContaining({ message: `the disk holding the data folder ${dir} is full (ENOSPC). Free some space on it, or set PGLITE_DIR to a folder on a disk with room, then start again.` }),
+      );
       expect(fs.readdirSync(dir)).toEqual([]);
       expect(() => checkDataFolder(dir)).not.toThrow();
       expect(fs.readdirSync(dir)).toEqual([]);

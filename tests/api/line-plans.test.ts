@@ -1,8 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { eq } from 'drizzle-orm';
 import { describe, expect, test } from 'vitest';
-import { auditLog, equipment, fieldLinePlans } from '../../apps/api/src/db/schema/index.ts';
+import { auditLog, fieldLinePlans } from '../../apps/api/src/db/schema/index.ts';
 import { useTestApi } from '../support/app.ts';
+import { addEquipment } from '../support/fixture.ts';
 import { linePlanBody } from '../support/bodies.ts';
 import { getPdf, renderPdf } from '../support/pdf.ts';
 
@@ -11,10 +12,7 @@ const db = () => api.database.db;
 
 const body = linePlanBody;
 
-async function marker(districtId: number, name: string) {
-  const [row] = await db().insert(equipment).values({ districtId, kind: 'line_marker', name, speedKmh: 4 }).returning();
-  return row!.id;
-}
+const marker = (districtId: number, name: string) => addEquipment(db(), { districtId, kind: 'line_marker', name, speedKmh: 4 });
 
 describe('field line plans', () => {
   test('should let a foreman save a plan with a youth layout across the full pitch, versioned and audited', async () => {

@@ -193,35 +193,27 @@ describe('the documented answers', () => {
     const admin = await api.signIn('admin');
     const anonymous = supertest.agent(api.app);
     const monday = '2026-06-01';
-    const checks: [ReturnType<typeof supertest.agent>, string, string, number][] = [
-      [anonymous, '/api/health', '/api/health', 200],
-      [anonymous, '/api/auth/me', '/api/auth/me', 401],
-      [head, '/api/auth/me', '/api/auth/me', 200],
-      [admin, '/api/users', '/api/users', 200],
-      [head, '/api/users', '/api/users', 403],
-      [head, '/api/weather/stations', '/api/weather/stations', 200],
+    type Agent = ReturnType<typeof supertest.agent>;
+    // Paths that are their own URL: who asks, the status expected, the paths.
+    const plain: [Agent, number, string[]][] = [
+      [anonymous, 200, ['/api/health', '/api/openapi.json']],
+      [anonymous, 401, ['/api/auth/me']],
+      [head, 200, ['/api/auth/me', '/api/weather/stations', '/api/sites', '/api/fields', '/api/field-events', '/api/standards', '/api/imports', '/api/map', '/api/map/basemap', '/api/districts', '/api/audit']],
+      [head, 403, ['/api/users']],
+      [admin, 200, ['/api/users', '/api/dev/mail']],
+      [foreman, 200, ['/api/work-orders', '/api/crews', '/api/equipment']],
+    ];
+    // Paths with parameters or a query: who asks, the documented path, the URL asked for, the status expected.
+    const templated: [Agent, string, string, number][] = [
       [head, '/api/weather/stations/{id}/days', `/api/weather/stations/${fixture.weather.stationId}/days?from=${fixture.weather.start}&to=${fixture.weather.end}`, 200],
       [head, '/api/weather/stations/{id}/days', `/api/weather/stations/${fixture.weather.stationId}/days?from=2026-02-30&to=2026-03-01`, 400],
-      [foreman, '/api/work-orders', '/api/work-orders', 200],
       [foreman, '/api/week-plans', `/api/week-plans?districtId=${fixture.districts.north}&weekStart=${monday}`, 200],
       [head, '/api/records', `/api/records?from=2026-05-01&to=2026-06-30`, 200],
-      [head, '/api/sites', '/api/sites', 200],
       [head, '/api/sites/{id}', `/api/sites/${fixture.sites.northPark}`, 200],
       [head, '/api/sites/{id}', '/api/sites/999999', 404],
-      [head, '/api/fields', '/api/fields', 200],
       [head, '/api/fields/{id}', `/api/fields/${fixture.fields.northSoccer}`, 200],
-      [head, '/api/field-events', '/api/field-events', 200],
-      [head, '/api/standards', '/api/standards', 200],
-      [head, '/api/imports', '/api/imports', 200],
-      [head, '/api/map', '/api/map', 200],
-      [head, '/api/map/basemap', '/api/map/basemap', 200],
-      [head, '/api/districts', '/api/districts', 200],
-      [head, '/api/audit', '/api/audit', 200],
-      [foreman, '/api/crews', '/api/crews', 200],
-      [foreman, '/api/equipment', '/api/equipment', 200],
-      [admin, '/api/dev/mail', '/api/dev/mail', 200],
-      [anonymous, '/api/openapi.json', '/api/openapi.json', 200],
     ];
+    const checks = [...plain.flatMap(([agent, status, paths]) => paths.map((path) => [agent, path, path, status] as const)), ...templated];
     for (const [agent, path, url, status] of checks) {
       expect(await conforms(agent, 'get', path, url), url).toBe(status);
     }

@@ -1,17 +1,16 @@
 import { eq } from 'drizzle-orm';
 import { describe, expect, test } from 'vitest';
-import { auditLog, equipment, fieldStripes } from '../../apps/api/src/db/schema/index.ts';
+import { auditLog, fieldStripes } from '../../apps/api/src/db/schema/index.ts';
 import { useTestApi } from '../support/app.ts';
+import { addEquipment } from '../support/fixture.ts';
 
 const api = useTestApi();
 const db = () => api.database.db;
 /** A Monday inside the fixture's weather. */
 const WEEK = '2026-05-25';
 
-async function mower(districtId: number, name: string) {
-  const [row] = await db().insert(equipment).values({ districtId, kind: 'rotary_mower', name, cuttingWidthM: 1.5, speedKmh: 7, fieldEfficiency: 0.85, hocMinMm: 25, hocMaxMm: 100 }).returning();
-  return row!.id;
-}
+const mower = (districtId: number, name: string) =>
+  addEquipment(db(), { districtId, kind: 'rotary_mower', name, cuttingWidthM: 1.5, speedKmh: 7, fieldEfficiency: 0.85, hocMinMm: 25, hocMaxMm: 100 });
 
 describe('field stripes', () => {
   test('should let a foreman set, change and clear the pattern of his district’s field, versioned and audited', async () => {

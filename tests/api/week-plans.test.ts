@@ -3,6 +3,7 @@ import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { auditLog, users, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
+import { generateAndConfirmWeek } from '../support/weeks.ts';
 
 let api: TestApi;
 // The fixture's weather runs 4 May – 7 June 2026: this week has weather for every day.
@@ -145,9 +146,7 @@ describe('assigning and moving work', () => {
 
   test('should confirm the suggested crews for the week with one e-mail per crew lead', async () => {
     const foreman = await api.signIn('foreman');
-    const week = '2026-06-01';
-    await foreman.post('/api/week-plans/generate').send({ districtId: api.fixture.districts.north, weekStart: week });
-    const res = await foreman.post('/api/week-plans/confirm').send({ districtId: api.fixture.districts.north, weekStart: week });
+    const res = await generateAndConfirmWeek(foreman, api.fixture.districts.north, '2026-06-01');
     expect(res.status).toBe(200);
     expect(res.body.assigned).toBeGreaterThan(0);
     expect(res.body.emailed).toBe(1);

@@ -6,7 +6,7 @@ import sharp from 'sharp';
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { auditLog, equipment, fields, workOrders, workPhotos, workUpdates } from '../../apps/api/src/db/schema/index.ts';
-import { giveWork } from '../support/fixture.ts';
+import { addEquipment, giveWork } from '../support/fixture.ts';
 import { startTestApi, type TestApi } from '../support/app.ts';
 
 let api: TestApi;
@@ -15,11 +15,7 @@ let mowerId: number;
 beforeAll(async () => {
   uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-photos-'));
   api = await startTestApi({ UPLOADS_DIR: uploadsDir });
-  const [mower] = await api.database.db
-    .insert(equipment)
-    .values({ districtId: api.fixture.districts.north, crewId: api.fixture.crews.north, kind: 'rotary_mower', name: 'Test rotary', hourMeterH: 100 })
-    .returning();
-  mowerId = mower!.id;
+  mowerId = await addEquipment(api.database.db, { districtId: api.fixture.districts.north, crewId: api.fixture.crews.north, kind: 'rotary_mower', name: 'Test rotary', hourMeterH: 100 });
 });
 afterAll(async () => {
   await api.close();

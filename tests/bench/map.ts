@@ -9,17 +9,12 @@
 import { performance } from 'node:perf_hooks';
 import { addDaysIso } from '@swardwise/domain';
 import { fieldChecks } from '../../apps/api/src/db/schema/index.ts';
-import { addBenchFields, fmt, listenSignedIn, openDemoCity, portalPage, seeded } from './support.ts';
+import { demoCityWithFields, fmt, listenSignedIn, portalPage } from './support.ts';
 
 const EXTRA_FIELDS = 3000;
 const RUNS = 40;
 
-const gen = seeded(20261201);
-const { rand, pick } = gen;
-
-const database = await openDemoCity();
-const { db } = database;
-const inserted = await addBenchFields(db, EXTRA_FIELDS, gen, () => ({
+const { rand, database, db, inserted } = await demoCityWithFields(20261201, EXTRA_FIELDS, ({ rand, pick }) => ({
   status: pick(['open', 'open', 'open', 'restricted', 'closed'] as const),
   lastMowedOn: addDaysIso('2026-11-30', -Math.floor(rand() * 30)),
 }));

@@ -12,18 +12,15 @@ import { eq, sql } from 'drizzle-orm';
 import { CLOSURE_REASONS } from '@swardwise/domain';
 import { fieldClosures, fields } from '../../apps/api/src/db/schema/index.ts';
 import { launchBrowser, PHONE } from '../e2e/browser.ts';
-import { addBenchFields, fmt, listenSignedIn, openDemoCity, seeded } from './support.ts';
+import { demoCityWithFields, fmt, listenSignedIn } from './support.ts';
 
 const EXTRA_FIELDS = 5000;
 const RUNS = 40;
 const CHANGES = 10;
 
-const gen = seeded(20261202);
-const { rand, pick } = gen;
-
-const database = await openDemoCity();
-const { db } = database;
-const inserted = await addBenchFields(db, EXTRA_FIELDS, gen, () => ({ status: pick(['open', 'open', 'open', 'open', 'restricted', 'closed'] as const) }));
+const { rand, pick, database, db, inserted } = await demoCityWithFields(20261202, EXTRA_FIELDS, ({ pick }) => ({
+  status: pick(['open', 'open', 'open', 'open', 'restricted', 'closed'] as const),
+}));
 const t0 = Date.parse('2026-11-01T12:00:00Z');
 const closures = inserted
   .filter((f) => f.status !== 'open')

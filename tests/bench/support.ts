@@ -73,6 +73,18 @@ export async function addBenchFields(db: Db, count: number, gen: ReturnType<type
   return inserted;
 }
 
+/**
+ * The demo city in a fresh in-memory PGlite (`openDemoCity`) with `count` invented fields
+ * (`addBenchFields`) drawn by the generator of `seed`, which `more` also draws from for what
+ * it adds to each row; the generator goes on from there for what the benchmark adds next.
+ */
+export async function demoCityWithFields(seed: number, count: number, more: (gen: ReturnType<typeof seeded>) => Partial<typeof fields.$inferInsert>) {
+  const gen = seeded(seed);
+  const database = await openDemoCity();
+  const inserted = await addBenchFields(database.db, count, gen, () => more(gen));
+  return { ...gen, database, db: database.db, inserted };
+}
+
 /** The demo city's station weather, each station's prepared once, and a site's: that of its nearest station. */
 export function demoWeather(city: ReturnType<typeof buildDemoCity>): (site: { lat: number; lng: number }) => PreparedWeather {
   const prepared = new Map<string, PreparedWeather>();

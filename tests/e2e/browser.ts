@@ -108,18 +108,24 @@ export interface PageOptions {
   keyboard?: boolean;
   /** The screen and other context options: `DESKTOP` by default, `PHONE` for a crew lead's. */
   device?: BrowserContextOptions;
+  /** Then follows the navigation's link to this page (`followNav`). */
+  nav?: string;
+  /** Then opens this path of the portal (`/overview`). */
+  open?: string;
 }
 
 /**
  * Runs `steps` on a page of its own (a fresh context: no cookies, no cache), signed in when
- * `role` is given, and closes it afterwards even when a step fails: closing is when the
- * page's last accessibility check runs and reports.
+ * `role` is given and on the page `nav` or `open` names, and closes it afterwards even when a
+ * step fails: closing is when the page's last accessibility check runs and reports.
  */
-export async function withPage<T>({ role, landing, keyboard = false, device = DESKTOP }: PageOptions, steps: (page: Page) => Promise<T>): Promise<T> {
+export async function withPage<T>({ role, landing, keyboard = false, device = DESKTOP, nav, open }: PageOptions, steps: (page: Page) => Promise<T>): Promise<T> {
   const context = await browser.newContext(device);
   try {
     const page = await context.newPage();
     if (role) await (keyboard ? keyboardSignIn : signIn)(page, role, landing);
+    if (nav) await followNav(page, nav);
+    if (open) await page.goto(`${inject('baseUrl')}${open}`);
     return await steps(page);
   } finally {
     await context.close();
@@ -146,6 +152,20 @@ export async function tabTo(page: Page, selector: string, { max = 150, back = fa
     if (await page.evaluate((s) => !!document.activeElement?.closest(s), selector)) return;
   }
   throw new Error(`${selector} was not reached with ${max} presses of Tab`);
+}
+
+/**
+ * Once `opener` is shown and the page's requests have settled, moves to it with Tab and
+ * presses Enter, as a person without a mouse opens a dialog; answers the dialog, shown.
+ */
+export async function openDialogByKeyboard(page: Page, opener: string, dialog: string): Promise<Locator> {
+  await page.locator(opener).waitFor();
+  await page.waitForLoadState('networkidle');
+  await tabTo(page, opener);
+  await page.keyboard.press('Enter');
+  const shown = page.locator(dialog);
+  await shown.waitFor();
+  return shown;
 }
 
 /** Signs in with the keyboard alone: Tab to each field, type, Enter. */

@@ -5,7 +5,7 @@
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
 import type { BudgetAnswer } from '@swardwise/domain';
-import { followNav, shots, useBrowser, withPage } from './browser.ts';
+import { shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -13,8 +13,7 @@ useBrowser();
 
 describe('season budget', () => {
   test('should let the head set the labour line and read it against the outlook, with the chart and exports', async () => {
-    await withPage({ role: 'head' }, async (page) => {
-      await followNav(page, 'budget');
+    await withPage({ role: 'head', nav: 'budget' }, async (page) => {
       await page.locator('[data-test="budget-chart"] canvas').waitFor();
       const input = page.locator('[data-test="budget-input-labour"] input');
       await input.waitFor();

@@ -4,7 +4,7 @@
  */
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
-import { followNav, shots, useBrowser, withPage } from './browser.ts';
+import { shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -12,8 +12,7 @@ useBrowser();
 
 describe('costs and rates', () => {
   test('should let the head change the water price per 1,000 gallons and see it saved and audited', async () => {
-    await withPage({ role: 'head' }, async (page) => {
-      await followNav(page, 'costs');
+    await withPage({ role: 'head', nav: 'costs' }, async (page) => {
       const water = page.locator('[data-test="costs-waterPricePerM3"] input');
       await water.waitFor();
       await page.screenshot({ path: path.join(shots, 'costs.png'), fullPage: true });

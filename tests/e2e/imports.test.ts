@@ -34,8 +34,7 @@ async function sitesListed(page: Page, name: string): Promise<number> {
 
 describe('importing sites', () => {
   test('should show a bad row’s error, import a clean file, list the new site and undo it', async () => {
-    await withPage({ role: 'foreman', landing: '/district', device: { viewport: { width: 1360, height: 900 } } }, async (page) => {
-      await followNav(page, 'imports');
+    await withPage({ role: 'foreman', landing: '/district', device: { viewport: { width: 1360, height: 900 } }, nav: 'imports' }, async (page) => {
 
       await page.setInputFiles(
         '[data-test="import-file"]',

@@ -7,7 +7,7 @@
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
-import { checkA11y, PHONE, pickOption, shots, tabTo, useBrowser, withPage } from './browser.ts';
+import { checkA11y, openDialogByKeyboard, PHONE, pickOption, shots, tabTo, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 // A week of the demo season no other browser test plans.
@@ -103,11 +103,7 @@ describe('each role’s main task with the keyboard alone', () => {
       await page.waitForURL((url) => /^\/my-fields\/\d+$/.test(url.pathname));
       await page.locator('[data-test="partner-status"]').waitFor();
       await page.locator('[data-test="field-bookings"]').waitFor();
-      await page.waitForLoadState('networkidle');
-      await tabTo(page, '[data-test="new-booking"]');
-      await page.keyboard.press('Enter');
-      const dialog = page.locator('[data-test="booking-dialog"]');
-      await dialog.waitFor();
+      const dialog = await openDialogByKeyboard(page, '[data-test="new-booking"]', '[data-test="booking-dialog"]');
       await tabTo(page, '[data-test="booking-title"]');
       await page.keyboard.type('Keyboard Cup semi-final');
       await checkA11y(page);

@@ -4,15 +4,14 @@
  * sees his own district only.
  */
 import path from 'node:path';
-import { describe, expect, inject, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { shots, useBrowser, withPage } from './browser.ts';
 
 useBrowser();
 
 describe('overview', () => {
   test('should show the head cards and charts and lead from fields below target to those fields', async () => {
-    await withPage({ role: 'head' }, async (page) => {
-      await page.goto(`${inject('baseUrl')}/overview`);
+    await withPage({ role: 'head', open: '/overview' }, async (page) => {
       await page.locator('[data-test="overview-cards"]').waitFor();
       for (const chart of ['area', 'labour', 'mowings', 'score']) await page.locator(`[data-test="chart-${chart}"] canvas`).waitFor();
       expect(await page.locator('[data-test^="district-row-"]').count()).toBeGreaterThan(1);
@@ -31,8 +30,7 @@ describe('overview', () => {
   });
 
   test('should show a foreman his own district only', async () => {
-    await withPage({ role: 'foreman' }, async (page) => {
-      await page.goto(`${inject('baseUrl')}/overview`);
+    await withPage({ role: 'foreman', open: '/overview' }, async (page) => {
       await page.locator('[data-test="overview-cards"]').waitFor();
       expect(await page.locator('[data-test="page-title"]').innerText()).toMatch(/^Overview: /);
       expect(await page.locator('[data-test="overview-district"]').count()).toBe(0);

@@ -23,8 +23,7 @@ async function settled(page: Page) {
 
 describe('crews, equipment, weather and bookings pages', () => {
   test('should let a foreman add a crew and find it in the crews table', async () => {
-    await withPage({ role: 'foreman' }, async (page) => {
-      await followNav(page, 'crews');
+    await withPage({ role: 'foreman', nav: 'crews' }, async (page) => {
       await page.locator('[data-test="row"]').first().waitFor();
       const before = await page.locator('[data-test="row"]').count();
 
@@ -81,8 +80,7 @@ describe('crews, equipment, weather and bookings pages', () => {
   });
 
   test('should show a station file’s bad row with its error and not let it be saved', async () => {
-    await withPage({ role: 'foreman' }, async (page) => {
-      await followNav(page, 'weather');
+    await withPage({ role: 'foreman', nav: 'weather' }, async (page) => {
       await page.locator('[data-test="weather-strip"]').waitFor();
       await page.screenshot({ path: path.join(shots, 'weather.png'), fullPage: true });
 

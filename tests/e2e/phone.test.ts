@@ -79,6 +79,16 @@ async function go(page: Page, to: string) {
   await page.waitForLoadState('networkidle');
 }
 
+/** Opens `to`, waits for the first element of `ready`, and checks the page as `name` (`checkPage`). */
+async function showPage(page: Page, to: string, ready: string, name: string) {
+  await go(page, to);
+  await page.locator(ready).first().waitFor();
+  return checkPage(page, name);
+}
+
+/** The map of the map page, which should fill most of the phone's screen. */
+const MAP = '.leaflet-container';
+
 describe('the sign-in page on a phone', () => {
   test('should fit the phone', async () => {
     const context = await browser.newContext(PHONE);
@@ -116,18 +126,13 @@ describe('a crew lead on a phone', () => {
 
   test('should fit the fields list as cards', async () => {
     const { page } = phone;
-    await go(page, '/fields');
-    await page.locator('[data-test="row"], [data-test="card"]').first().waitFor();
-    await checkPage(page, 'crew-fields');
+    await showPage(page, '/fields', '[data-test="row"], [data-test="card"]', 'crew-fields');
   });
 
   test('should show the map over most of the screen with the legend folded away', async () => {
     const { page } = phone;
-    await go(page, '/map');
-    const map = page.locator('.leaflet-container');
-    await map.waitFor();
-    await checkPage(page, 'crew-map');
-    const box = (await map.boundingBox())!;
+    await showPage(page, '/map', MAP, 'crew-map');
+    const box = (await page.locator(MAP).boundingBox())!;
     expect(box.height).toBeGreaterThanOrEqual(VIEW.height * 0.6);
     expect(box.width).toBeGreaterThanOrEqual(VIEW.width - 40);
     // The legend is one tap away and folds back.
@@ -144,9 +149,7 @@ describe('a crew lead on a phone', () => {
   test('should fit a field page', async () => {
     const { page } = phone;
     const id = await page.evaluate(async () => ((await (await fetch('/api/fields')).json()) as { items: { id: number }[] }).items[0]!.id);
-    await go(page, `/fields/${id}`);
-    await page.locator('h1').first().waitFor();
-    await checkPage(page, 'crew-field');
+    await showPage(page, `/fields/${id}`, 'h1', 'crew-field');
     // The season chart's legend sits under the plot on a phone, not over it.
     const chart = page.locator('[data-test="season-chart"]');
     if (await chart.count()) {
@@ -165,9 +168,7 @@ describe('a partner on a phone', () => {
     const { page } = phone;
     await checkPage(page, 'partner-my-fields');
     const id = await page.evaluate(async () => ((await (await fetch('/api/fields')).json()) as { items: { id: number }[] }).items[0]!.id);
-    await go(page, `/fields/${id}`);
-    await page.locator('[data-test="field-bookings"]').waitFor();
-    await checkPage(page, 'partner-field');
+    await showPage(page, `/fields/${id}`, '[data-test="field-bookings"]', 'partner-field');
     await page.locator('[data-test="new-booking"]').click();
     const dialog = page.locator('[data-test="booking-dialog"]');
     await dialog.waitFor();
@@ -184,11 +185,8 @@ describe('a partner on a phone', () => {
 
   test('should show the map over most of the screen', async () => {
     const { page } = phone;
-    await go(page, '/map');
-    const map = page.locator('.leaflet-container');
-    await map.waitFor();
-    await checkPage(page, 'partner-map');
-    expect((await map.boundingBox())!.height).toBeGreaterThanOrEqual(VIEW.height * 0.6);
+    await showPage(page, '/map', MAP, 'partner-map');
+    expect((await page.locator(MAP).boundingBox())!.height).toBeGreaterThanOrEqual(VIEW.height * 0.6);
   });
 });
 
@@ -202,12 +200,8 @@ describe('a foreman on a phone', () => {
     await go(page, '/week');
     const sheet = page.locator('[data-test="print-sheet"]').first();
     await sheet.waitFor({ state: 'attached' });
-    await go(page, (await sheet.getAttribute('href'))!);
-    await page.locator('[data-test="page-title"]').waitFor();
-    await checkPage(page, 'foreman-crew-sheet');
-    await go(page, '/records');
-    await page.locator('h1').first().waitFor();
-    await checkPage(page, 'foreman-records');
+    await showPage(page, (await sheet.getAttribute('href'))!, '[data-test="page-title"]', 'foreman-crew-sheet');
+    await showPage(page, '/records', 'h1', 'foreman-records');
     // Its date range, open: the calendars fit the screen too.
     await page.locator('.el-range-editor').first().click();
     await page.locator('.el-picker-panel').first().waitFor();

@@ -4,15 +4,14 @@
  * late mowings).
  */
 import path from 'node:path';
-import { describe, expect, inject, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { shots, useBrowser, withPage } from './browser.ts';
 
 useBrowser();
 
 describe('records over the demo season', () => {
   test('should show a foreman his district’s season with late and missed mowings', async () => {
-    await withPage({ role: 'foreman' }, async (page) => {
-      await page.goto(`${inject('baseUrl')}/records`);
+    await withPage({ role: 'foreman', open: '/records' }, async (page) => {
       await page.locator('[data-test="records-totals"]').waitFor();
       await page.locator('.el-range-input').first().click();
       await page.locator('.el-picker-panel__shortcut', { hasText: 'This year' }).click();

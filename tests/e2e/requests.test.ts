@@ -6,7 +6,7 @@
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
 import { addDaysIso, localToday } from '@swardwise/domain';
-import { checkA11y, PHONE, pickOption, shots, tabTo, turfPhoto, useBrowser, withPage } from './browser.ts';
+import { checkA11y, openDialogByKeyboard, PHONE, pickOption, shots, tabTo, turfPhoto, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -21,12 +21,7 @@ describe('requests', () => {
       const timeZone = await page.evaluate(async () => (await (await fetch('/api/auth/me')).json()).timeZone as string);
       const gameOn = addDaysIso(localToday(timeZone), 9);
       await page.goto(`${baseUrl}/requests`);
-      await page.locator('[data-test="new-request"]').waitFor();
-      await page.waitForLoadState('networkidle');
-      await tabTo(page, '[data-test="new-request"]');
-      await page.keyboard.press('Enter');
-      const dialog = page.locator('[data-test="request-dialog"]');
-      await dialog.waitFor();
+      const dialog = await openDialogByKeyboard(page, '[data-test="new-request"]', '[data-test="request-dialog"]');
       // The dialog as it opens, before a picker's panel is open over it (the panel is Element Plus's unnamed popup).
       await checkA11y(page);
       await tabTo(page, '[data-test="request-field"]');

@@ -67,6 +67,23 @@ async function chooseByKeyboard(page: Page, dialog: Locator, label: string, opti
   await expect.poll(() => page.locator('.el-select-dropdown:visible').count()).toBe(0);
 }
 
+/** Moves the focus to the button `opener` and presses Enter, as the keyboard opens a dialog; answers the dialog, shown. */
+async function openWithEnter(page: Page, opener: string, dialog: string): Promise<Locator> {
+  await page.locator(opener).focus();
+  await page.keyboard.press('Enter');
+  const shown = page.locator(dialog);
+  await shown.waitFor();
+  return shown;
+}
+
+/** Presses Enter on the dialog's `submit` button; answers the status of the POST to `path` it sends. */
+async function submitWithEnter(page: Page, submit: string, path: string): Promise<number> {
+  await page.locator(submit).focus();
+  const sent = page.waitForResponse((r) => r.url().endsWith(path) && r.request().method() === 'POST');
+  await page.keyboard.press('Enter');
+  return (await sent).status();
+}
+
 describe('generating a week again', () => {
   for (const [name, options, week] of [
     ['desktop', DESKTOP, DESKTOP_WEEK],
@@ -111,20 +128,14 @@ describe('work by hand on the board', () => {
       await generateAndApply(page);
 
       // A one-off job: every input has a label, the whole form works from the keyboard.
-      await page.locator('[data-test="add-job"]').focus();
-      await page.keyboard.press('Enter');
-      const dialog = page.locator('[data-test="manual-job-dialog"]');
-      await dialog.waitFor();
+      const dialog = await openWithEnter(page, '[data-test="add-job"]', '[data-test="manual-job-dialog"]');
       await chooseByKeyboard(page, dialog, 'Task', 'Topdress');
       await chooseByKeyboard(page, dialog, 'Field', /·/);
       await chooseByKeyboard(page, dialog, 'Day', /Tue 29 Sep/);
       await chooseByKeyboard(page, dialog, 'Crew', /./);
       await dialog.getByLabel('Hours', { exact: true }).fill('2.5');
       await dialog.getByLabel('Note for the crew', { exact: true }).fill('Sand the goalmouths after the aeration');
-      await page.locator('[data-test="manual-job-submit"]').focus();
-      const created = page.waitForResponse((r) => r.url().endsWith('/api/work-orders') && r.request().method() === 'POST');
-      await page.keyboard.press('Enter');
-      expect((await created).status()).toBe(201);
+      expect(await submitWithEnter(page, '[data-test="manual-job-submit"]', '/api/work-orders')).toBe(201);
       await dialog.waitFor({ state: 'hidden' });
       const manual = (await apiOrders(page, districtId, HAND_WEEK)).find((o) => o.origin === 'manual');
       expect(manual).toMatchObject({ task: 'topdress', plannedDate: '2026-09-29', notes: 'Sand the goalmouths after the aeration' });
@@ -136,17 +147,11 @@ describe('work by hand on the board', () => {
       const open = (o: Order) => o.status !== 'skipped' && o.status !== 'done';
       const before = (await apiOrders(page, districtId, HAND_WEEK)).filter((o) => o.plannedDate === thursday && open(o));
       expect(before.length).toBeGreaterThan(0);
-      await page.locator('[data-test="rain-out"]').focus();
-      await page.keyboard.press('Enter');
-      const rain = page.locator('[data-test="rain-out-dialog"]');
-      await rain.waitFor();
+      const rain = await openWithEnter(page, '[data-test="rain-out"]', '[data-test="rain-out-dialog"]');
       await chooseByKeyboard(page, rain, 'Day', /Thu 1 Oct/);
       await expect.poll(async () => page.locator('[data-test="rain-out-count"]').textContent()).toMatch(new RegExp(`^${before.length} open job`));
       await rain.getByLabel('Reason the crews see', { exact: true }).fill('Thunderstorms all day, fields waterlogged');
-      await page.locator('[data-test="rain-out-submit"]').focus();
-      const replanned = page.waitForResponse((r) => r.url().endsWith('/api/week-plans/generate') && r.request().method() === 'POST');
-      await page.keyboard.press('Enter');
-      expect((await replanned).status()).toBe(200);
+      expect(await submitWithEnter(page, '[data-test="rain-out-submit"]', '/api/week-plans/generate')).toBe(200);
       await rain.waitFor({ state: 'hidden' });
       const after = await apiOrders(page, districtId, HAND_WEEK);
       for (const o of before) expect(after.find((a) => a.id === o.id)).toMatchObject({ status: 'skipped', details: { cancelled: { reason: 'Thunderstorms all day, fields waterlogged' } } });

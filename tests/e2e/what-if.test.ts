@@ -6,7 +6,7 @@
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
 import type { FieldList, WhatIfAnswer } from '@swardwise/domain';
-import { followNav, shots, tabTo, useBrowser, withPage } from './browser.ts';
+import { shots, tabTo, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -14,8 +14,7 @@ useBrowser();
 
 describe('what-if', () => {
   test('should show the head the season’s change for fields moved to another level, saving nothing', async () => {
-    await withPage({ role: 'head' }, async (page) => {
-      await followNav(page, 'what-if');
+    await withPage({ role: 'head', nav: 'what-if' }, async (page) => {
       const boxes = page.locator('[data-test^="what-if-field-"]');
       await boxes.first().waitFor();
       const levels = async () => new Map(((await (await page.request.get(`${baseUrl}/api/fields`)).json()) as FieldList).items.map((f) => [f.id, f.maintenanceLevel]));

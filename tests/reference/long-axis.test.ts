@@ -6,11 +6,14 @@
  */
 import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
-import { longAxis, type Polygon } from '@swardwise/domain';
+import { convexHull, longAxis, type Polygon } from '@swardwise/domain';
 import { rectanglesOnEdges, type XY } from '../support/brute-force-axis.ts';
 
 
-/** The conversion to local metres and the hull exactly as `longAxis` had them before. */
+/**
+ * The conversion to local metres exactly as `longAxis` had it before. The brute force runs on
+ * the hull `longAxis` uses (`convexHull`), so only the search for the rectangle is compared.
+ */
 function localMetres(polygon: Polygon): XY[] {
   const pts = polygon.coordinates[0]!.slice(0, -1);
   const lat0 = pts.reduce((s, p) => s + p[1]!, 0) / pts.length;
@@ -19,23 +22,6 @@ function localMetres(polygon: Polygon): XY[] {
   const mLat = 111_132.92 - 559.82 * Math.cos(2 * phi) + 1.175 * Math.cos(4 * phi);
   const mLng = 111_412.84 * Math.cos(phi) - 93.5 * Math.cos(3 * phi);
   return pts.map((p) => [(p[0]! - lng0) * mLng, (p[1]! - lat0) * mLat]);
-}
-
-function convexHull(points: XY[]): XY[] {
-  const pts = [...points].sort((a, b) => a[0] - b[0] || a[1] - b[1]);
-  if (pts.length < 3) return pts;
-  const cross = (o: XY, a: XY, b: XY) => (a[0] - o[0]) * (b[1] - o[1]) - (a[1] - o[1]) * (b[0] - o[0]);
-  const lower: XY[] = [];
-  for (const p of pts) {
-    while (lower.length >= 2 && cross(lower[lower.length - 2]!, lower[lower.length - 1]!, p) <= 0) lower.pop();
-    lower.push(p);
-  }
-  const upper: XY[] = [];
-  for (const p of pts.reverse()) {
-    while (upper.length >= 2 && cross(upper[upper.length - 2]!, upper[upper.length - 1]!, p) <= 0) upper.pop();
-    upper.push(p);
-  }
-  return lower.slice(0, -1).concat(upper.slice(0, -1));
 }
 
 const bearingOf = (axisAngle: number) => {

@@ -1,17 +1,9 @@
 /** Valid request bodies that several API test files send, written once. */
+import { fieldBody } from './fixture.ts';
 
-/** POST /api/fields: a small soccer field on `siteId` (an outline of about 100 m × 110 m). */
-export const newFieldBody = (siteId: number, name: string) => ({
-  siteId,
-  name,
-  sport: 'soccer',
-  grass: 'tall_fescue',
-  rootzone: 'native_soil',
-  irrigation: 'none',
-  maintenanceLevel: 3,
-  clippings: 'returned',
-  geometry: { type: 'Polygon', coordinates: [[[-66.4, 37.7], [-66.399, 37.7], [-66.399, 37.701], [-66.4, 37.701], [-66.4, 37.7]]] },
-});
+/** POST /api/fields: a small soccer field on `siteId` (`fieldBody`, an outline of about 100 m × 110 m). */
+export const newFieldBody = (siteId: number, name: string) =>
+  fieldBody(siteId, name, { type: 'Polygon', coordinates: [[[-66.4, 37.7], [-66.399, 37.7], [-66.399, 37.701], [-66.4, 37.701], [-66.4, 37.7]]] });
 
 /** PATCH /api/fields/:id/lines: a full-size soccer layout and a youth one across it, a first save. */
 export const linePlanBody = (over: Record<string, unknown> = {}) => ({

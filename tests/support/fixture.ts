@@ -5,7 +5,7 @@
 import { addDaysIso, DEFAULT_STANDARDS, DEFAULT_TIME_ZONE, LEVELS, localToday, type CreateFieldInput, type Polygon, type Role } from '@swardwise/domain';
 import type { Db } from '../../apps/api/src/db/client.ts';
 import { eq } from 'drizzle-orm';
-import { crews, districts, fields, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../../apps/api/src/db/schema/index.ts';
+import { crews, districts, equipment, fields, sites, standards, users, userSites, weatherDays, weatherStations, workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { hashPassword } from '../../apps/api/src/services/users.ts';
 import { polygonAreaM2 } from '@swardwise/domain';
 
@@ -161,6 +161,12 @@ export async function giveWork(db: Db, fieldId: number, crewId: number, daysFrom
       origin: 'manual',
     })
     .returning({ id: workOrders.id });
+  return row!.id;
+}
+
+/** Adds a unit of equipment (its district, kind and name, and what else `values` sets) and answers its id. */
+export async function addEquipment(db: Db, values: typeof equipment.$inferInsert): Promise<number> {
+  const [row] = await db.insert(equipment).values(values).returning({ id: equipment.id });
   return row!.id;
 }
 

@@ -2,22 +2,7 @@ import { describe, expect, test } from 'vitest';
 import { DomainError } from './errors.ts';
 import { longAxis, polygonAreaM2 } from './geometry.ts';
 import type { Polygon } from './schemas/common.ts';
-
-/** A rectangle of lengthM × widthM centred at (lat, lng), its long axis at `bearingDeg` from north. */
-function rotatedRect(lat: number, lng: number, lengthM: number, widthM: number, bearingDeg: number): Polygon {
-  const b = (bearingDeg * Math.PI) / 180;
-  const along: [number, number] = [Math.sin(b), Math.cos(b)]; // east, north
-  const across: [number, number] = [Math.cos(b), -Math.sin(b)];
-  const mLat = 111_000;
-  const mLng = 111_000 * Math.cos((lat * Math.PI) / 180);
-  const corner = (sa: number, sc: number): [number, number] => {
-    const x = (sa * lengthM * along[0]) / 2 + (sc * widthM * across[0]) / 2;
-    const y = (sa * lengthM * along[1]) / 2 + (sc * widthM * across[1]) / 2;
-    return [lng + x / mLng, lat + y / mLat];
-  };
-  const ring = [corner(-1, -1), corner(1, -1), corner(1, 1), corner(-1, 1)];
-  return { type: 'Polygon', coordinates: [[...ring, ring[0]!]] };
-}
+import { rotatedRect } from './testing/fixtures.ts';
 
 describe('longAxis', () => {
   test.each([0, 10, 30, 44, 60, 90, 120, 170])('should find the bearing of a 105 × 68 m pitch turned to %d°', (bearing) => {

@@ -37,7 +37,7 @@ function localOrigin(polygon: Polygon) {
  * points (A. M. Andrew, "Another efficient algorithm for convex hulls in two dimensions",
  * Information Processing Letters 9 (1979) 216–219).
  */
-function convexHull(points: XY[]): XY[] {
+export function convexHull(points: XY[]): XY[] {
   const pts = [...points].sort((a, b) => a[0] - b[0] || a[1] - b[1]);
   if (pts.length < 3) return pts;
   const cross = (o: XY, a: XY, b: XY) => (a[0] - o[0]) * (b[1] - o[1]) - (a[1] - o[1]) * (b[0] - o[0]);

@@ -1,42 +1,20 @@
 import { describe, expect, test } from 'vitest';
-import { addDaysIso } from './dates.ts';
 import { prepareWeather } from './outlook.ts';
-import type { DailyWeather } from './outlook.ts';
 import { DEFAULT_CULTURAL, culturalDue, overseedShare, windowDates } from './cultural.ts';
 import type { CulturalPrograms } from './cultural.ts';
 import { DEFAULT_STANDARDS } from './standards.ts';
 import type { Standards } from './standards.ts';
 import { assignWeek, planFieldWeek, reconcileWeek } from './weekgen.ts';
 import type { ExistingOrder, PlanField } from './weekgen.ts';
-import type { Polygon } from '../schemas/common.ts';
+import { planField, steadyDays } from '../testing/fixtures.ts';
 
-const days = (start: string, n: number, t: { tmax: number; tmin: number }): DailyWeather[] =>
-  Array.from({ length: n }, (_, i) => ({ date: addDaysIso(start, i), tmaxC: t.tmax, tminC: t.tmin, rainMm: 3 }));
-const rect: Polygon = { type: 'Polygon', coordinates: [[[-77, 38], [-76.99885, 38], [-76.99885, 38.000576], [-77, 38.000576], [-77, 38]]] };
-const field = (over: Partial<PlanField> = {}): PlanField => ({
-  id: 1,
-  siteId: 10,
-  site: { lat: 38, lng: -77 },
-  sport: 'soccer',
-  grass: 'kentucky_bluegrass',
-  areaM2: 6400,
-  geometry: rect,
-  maintenanceLevel: 2,
-  hocOverrideMm: null,
-  clippings: 'returned',
-  irrigation: 'none',
-  status: 'open',
-  lastMowedOn: '2026-09-13',
-  lastPaintedOn: '2026-09-12',
-  lastFedOn: '2026-09-10',
-  lastCheckedOn: '2026-09-10',
-  events: [],
-  ...over,
-});
+// Mown on the Sunday before WEEK.
+const field = (over: Partial<PlanField> = {}): PlanField =>
+  planField({ lastMowedOn: '2026-09-13', lastPaintedOn: '2026-09-12', lastFedOn: '2026-09-10', lastCheckedOn: '2026-09-10', ...over });
 // Mean 18 °C: cool-season grass grows near its best (GP close to 1).
-const SEPT = prepareWeather(days('2026-08-17', 42, { tmax: 23, tmin: 13 }), { latDeg: 38, elevationM: 20 });
+const SEPT = prepareWeather(steadyDays('2026-08-17', 42, { tmax: 23, tmin: 13 }), { latDeg: 38, elevationM: 20 });
 // Mean 1 °C in December: cool-season turf is dormant.
-const DEC = prepareWeather(days('2026-11-09', 42, { tmax: 4, tmin: -2 }), { latDeg: 38, elevationM: 20 });
+const DEC = prepareWeather(steadyDays('2026-11-09', 42, { tmax: 4, tmin: -2 }), { latDeg: 38, elevationM: 20 });
 const WEEK = '2026-09-14'; // a Monday
 const weekdays = ['mon', 'tue', 'wed', 'thu', 'fri'] as const;
 const only = (programs: Partial<CulturalPrograms>): Standards => {

@@ -1,28 +1,12 @@
 import { describe, expect, test } from 'vitest';
-import type { Polygon } from '../schemas/common.ts';
 import { fieldFrame } from '../geometry.ts';
+import { rotatedRect } from '../testing/fixtures.ts';
 import { DEFAULT_PARAMETERS } from './standards.ts';
 import { stripePassPlan } from './labour.ts';
 import { fieldStripePlan, stripeMowerOf, stripeOfficialsNote, stripePlan } from './stripes.ts';
 
 const rect = (l: number, w: number): Array<[number, number]> => [[0, 0], [l, 0], [l, w], [0, w]];
 const mower = { widthM: 2, overlapM: 0, speedKmh: 6, efficiency: 0.8, turnTimeS: 15 };
-
-/** A rectangle of lengthM × widthM centred at (lat, lng), its long axis at `bearingDeg` from north. */
-function rotatedRect(lat: number, lng: number, lengthM: number, widthM: number, bearingDeg: number): Polygon {
-  const b = (bearingDeg * Math.PI) / 180;
-  const along: [number, number] = [Math.sin(b), Math.cos(b)];
-  const across: [number, number] = [Math.cos(b), -Math.sin(b)];
-  const mLat = 111_132.92 - 559.82 * Math.cos((2 * lat * Math.PI) / 180);
-  const mLng = 111_412.84 * Math.cos((lat * Math.PI) / 180);
-  const corner = (sa: number, sc: number): [number, number] => {
-    const x = (sa * lengthM * along[0]) / 2 + (sc * widthM * across[0]) / 2;
-    const y = (sa * lengthM * along[1]) / 2 + (sc * widthM * across[1]) / 2;
-    return [lng + x / mLng, lat + y / mLat];
-  };
-  const ring = [corner(-1, -1), corner(1, -1), corner(1, 1), corner(-1, 1)];
-  return { type: 'Polygon', coordinates: [[...ring, ring[0]!]] };
-}
 
 describe('stripePlan', () => {
   test('should run length-wise passes along the long axis: ⌈width ÷ effective width⌉ passes of the length', () => {

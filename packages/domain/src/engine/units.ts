@@ -18,34 +18,30 @@ export const KM_PER_MILE = 1.609344;
 /** 1 lb N per 1000 ft² in g/m² (= 453.59237 g ÷ 92.90304 m² ≈ 4.882). */
 export const G_PER_M2_PER_LB_PER_1000FT2 = (KG_PER_LB * 1000) / (1000 * M2_PER_FT2);
 
-export const mmToIn = (mm: number): number => mm / MM_PER_INCH;
-export const inToMm = (inches: number): number => inches * MM_PER_INCH;
-export const mToFt = (m: number): number => m / M_PER_FOOT;
-export const ftToM = (ft: number): number => ft * M_PER_FOOT;
-export const m2ToFt2 = (m2: number): number => m2 / M2_PER_FT2;
-export const ft2ToM2 = (ft2: number): number => ft2 * M2_PER_FT2;
-export const m2ToAcres = (m2: number): number => m2 / M2_PER_ACRE;
-export const acresToM2 = (ac: number): number => ac * M2_PER_ACRE;
+/**
+ * The conversions both ways between a unit and one worth `perUnit` of it (the inch is 25.4 mm):
+ * into the other unit divides by `perUnit`, back multiplies by it.
+ */
+const conversions = (perUnit: number) => [(si: number): number => si / perUnit, (other: number): number => other * perUnit] as const;
+
+export const [mmToIn, inToMm] = conversions(MM_PER_INCH);
+export const [mToFt, ftToM] = conversions(M_PER_FOOT);
+export const [m2ToFt2, ft2ToM2] = conversions(M2_PER_FT2);
+export const [m2ToAcres, acresToM2] = conversions(M2_PER_ACRE);
 export const haToAcres = (ha: number): number => (ha * M2_PER_HECTARE) / M2_PER_ACRE;
 export const acresToHa = (ac: number): number => (ac * M2_PER_ACRE) / M2_PER_HECTARE;
-export const kgToLb = (kg: number): number => kg / KG_PER_LB;
-export const lbToKg = (lb: number): number => lb * KG_PER_LB;
-/** g N/m² → lb N per 1000 ft². */
-export const gPerM2ToLbPer1000Ft2 = (g: number): number => g / G_PER_M2_PER_LB_PER_1000FT2;
-/** lb N per 1000 ft² → g N/m². */
-export const lbPer1000Ft2ToGPerM2 = (lb: number): number => lb * G_PER_M2_PER_LB_PER_1000FT2;
-export const litresToUsGallons = (l: number): number => l / L_PER_US_GALLON;
-export const usGallonsToLitres = (gal: number): number => gal * L_PER_US_GALLON;
+export const [kgToLb, lbToKg] = conversions(KG_PER_LB);
+/** g N/m² ↔ lb N per 1000 ft². */
+export const [gPerM2ToLbPer1000Ft2, lbPer1000Ft2ToGPerM2] = conversions(G_PER_M2_PER_LB_PER_1000FT2);
+export const [litresToUsGallons, usGallonsToLitres] = conversions(L_PER_US_GALLON);
 /** Water depth over an area → litres (1 mm over 1 m² is 1 L). */
 export const depthMmOverAreaToLitres = (mm: number, areaM2: number): number => mm * areaM2;
 /** Water depth over an area → US gallons. 1 in over 1000 ft² ≈ 623.4 gal. */
 export const depthMmOverAreaToUsGallons = (mm: number, areaM2: number): number => litresToUsGallons(mm * areaM2);
 export const cToF = (c: number): number => (c * 9) / 5 + 32;
 export const fToC = (f: number): number => ((f - 32) * 5) / 9;
-export const kmhToMph = (kmh: number): number => kmh / KM_PER_MILE;
-export const mphToKmh = (mph: number): number => mph * KM_PER_MILE;
-export const kmhToMs = (kmh: number): number => kmh / 3.6;
-export const msToKmh = (ms: number): number => ms * 3.6;
+export const [kmhToMph, mphToKmh] = conversions(KM_PER_MILE);
+export const [kmhToMs, msToKmh] = conversions(3.6);
 export const kmToMiles = (km: number): number => km / KM_PER_MILE;
 
 /** A value ready to show, with its unit symbol. */

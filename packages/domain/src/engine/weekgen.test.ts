@@ -1,56 +1,30 @@
 import { describe, expect, test } from 'vitest';
 import { addDaysIso } from './dates.ts';
 import { prepareWeather, fieldDailySeries, fieldMowingSimulation } from './outlook.ts';
-import type { DailyWeather } from './outlook.ts';
 import { simulateMowing } from './mowing.ts';
 import { DEFAULT_PARAMETERS, DEFAULT_STANDARDS, hocFor } from './standards.ts';
 import { assignWeek, crewDayLoads, isKept, planFieldWeek, reconcileWeek, weekDates } from './weekgen.ts';
 import type { AskedOrder, KeptOrder } from './weekgen.ts';
 import type { ExistingOrder, PlanField } from './weekgen.ts';
 import { weekWarningText } from './week-warnings.ts';
-import type { Polygon } from '../schemas/common.ts';
+import { planField, steadyDays } from '../testing/fixtures.ts';
 import type { Level } from '../vocabulary.ts';
 import { WEEKDAYS } from './dates.ts';
 
 const WEEK = '2026-06-01'; // a Monday
-const days = (start: string, n: number, t: { tmax: number; tmin: number; rain?: number }): DailyWeather[] =>
-  Array.from({ length: n }, (_, i) => ({ date: addDaysIso(start, i), tmaxC: t.tmax, tminC: t.tmin, rainMm: t.rain ?? 3 }));
-const weather = (t: { tmax: number; tmin: number; rain?: number }) => prepareWeather(days('2026-05-04', 35, t), { latDeg: 38, elevationM: 20 });
+const weather = (t: { tmax: number; tmin: number; rain?: number }) => prepareWeather(steadyDays('2026-05-04', 35, t), { latDeg: 38, elevationM: 20 });
 const WARM = weather({ tmax: 24, tmin: 16 }); // mean 20 °C: GP 1 for cool-season grass
 const COOL = weather({ tmax: 11, tmin: 5 }); // mean 8 °C
 
-// 100 m × 64 m at 38° N: about 6,400 m².
-const rect = (lat: number, lng: number, w = 0.00115, h = 0.000576): Polygon => ({
-  type: 'Polygon' as const,
-  coordinates: [[[lng, lat], [lng + w, lat], [lng + w, lat + h], [lng, lat + h], [lng, lat]]],
-});
-
-const field = (over: Partial<PlanField> = {}): PlanField => ({
-  id: 1,
-  siteId: 10,
-  site: { lat: 38, lng: -77 },
-  sport: 'soccer',
-  grass: 'kentucky_bluegrass',
-  areaM2: 6400,
-  geometry: rect(38, -77),
-  maintenanceLevel: 2,
-  hocOverrideMm: null,
-  clippings: 'returned',
-  irrigation: 'automatic',
-  status: 'open',
-  lastMowedOn: '2026-05-31',
-  lastPaintedOn: '2026-05-28',
-  lastFedOn: null,
-  lastCheckedOn: '2026-05-25',
-  events: [],
-  ...over,
-});
+// Irrigated, mown on the Sunday before WEEK.
+const field = (over: Partial<PlanField> = {}): PlanField =>
+  planField({ irrigation: 'automatic', lastMowedOn: '2026-05-31', lastPaintedOn: '2026-05-28', lastCheckedOn: '2026-05-25', ...over });
 const allDays = ['mon', 'tue', 'wed', 'thu', 'fri'] as const;
 const mowDates = (p: ReturnType<typeof planFieldWeek>) => p.orders.filter((o) => o.task === 'mow').map((o) => o.askedDate);
 
 describe('one mowing policy: season outlook and week plan', () => {
   // Twelve weeks of steady growth from a Monday: mean 20 °C (GP 1 for cool-season grass), rain every day.
-  const steady = prepareWeather(days('2026-04-06', 84, { tmax: 24, tmin: 16, rain: 4 }), { latDeg: 38, elevationM: 20 });
+  const steady = prepareWeather(steadyDays('2026-04-06', 84, { tmax: 24, tmin: 16, rain: 4 }), { latDeg: 38, elevationM: 20 });
   const mondays = Array.from({ length: 10 }, (_, k) => addDaysIso('2026-04-13', 7 * k));
 
   test.each([1, 2, 3, 4] as Level[])('should mow in the outlook what the week plan writes at level %d, never below the level minimum', (level) => {
@@ -74,7 +48,7 @@ describe('one mowing policy: season outlook and week plan', () => {
 
 describe('one water budget: season outlook and week plan', () => {
   // Six dry, warm weeks from a Monday (only temperatures: Hargreaves ET0).
-  const dry = prepareWeather(days('2026-06-01', 42, { tmax: 30, tmin: 18, rain: 0 }), { latDeg: 38, elevationM: 20 });
+  const dry = prepareWeather(steadyDays('2026-06-01', 42, { tmax: 30, tmin: 18, rain: 0 }), { latDeg: 38, elevationM: 20 });
 
   test('should water in the outlook the depth the week plan schedules, week by week', () => {
     const f = field({ maintenanceLevel: 2, irrigation: 'quick_coupler' });
