@@ -1,7 +1,7 @@
 import { FIELD_STATUS_LABELS, GRASS_LABELS, LEVEL_NAMES, SPORT_LABELS, type FieldRow, type FieldStatus, type Level, type UnitSystem } from '@swardwise/domain';
 import { h } from 'vue';
-import { RouterLink } from 'vue-router';
-import { formatHoc, formatLandArea, hocUnit, hocValue, landAreaUnit, landAreaValue } from '../../utils/units.ts';
+import { formatHoc, hocUnit, hocValue } from '../../utils/units.ts';
+import { districtColumn, landAreaColumn, linkCell } from '../data-table/columns.ts';
 import { columnHelper, labelled, type DataColumn } from '../data-table/features.ts';
 import LevelTag from './LevelTag.vue';
 import StatusTag from './StatusTag.vue';
@@ -13,17 +13,14 @@ export type FieldColumnKey = 'name' | 'site' | 'district' | 'sport' | 'grass' | 
 /** Field table columns shared by the fields list, a site page and the landing pages. */
 export function fieldColumns(units: UnitSystem, keys: FieldColumnKey[]): DataColumn<FieldRow>[] {
   const all: Record<FieldColumnKey, DataColumn<FieldRow>> = {
-    name: col.accessor('name', {
-      header: 'Field',
-      cell: (c) => h(RouterLink, { to: `/fields/${c.row.original.id}`, class: 'sw-link' }, () => c.getValue()),
-    }),
+    name: col.accessor('name', { header: 'Field', cell: (c) => linkCell(`/fields/${c.row.original.id}`, c.getValue()) }),
     site: col.accessor('siteName', {
       id: 'site',
       header: 'Site',
       filterFn: 'equals',
-      cell: (c) => h(RouterLink, { to: `/sites/${c.row.original.siteId}`, class: 'sw-link' }, () => c.getValue()),
+      cell: (c) => linkCell(`/sites/${c.row.original.siteId}`, c.getValue()),
     }),
-    district: col.accessor('districtName', { id: 'district', header: 'District', filterFn: 'equals' }),
+    district: col.accessor('districtName', districtColumn),
     sport: col.accessor('sport', { header: 'Sport', ...labelled(SPORT_LABELS) }),
     grass: col.accessor('grass', { header: 'Grass', ...labelled(GRASS_LABELS) }),
     level: col.accessor('maintenanceLevel', {
@@ -40,13 +37,7 @@ export function fieldColumns(units: UnitSystem, keys: FieldColumnKey[]): DataCol
       cell: (c) => h(StatusTag, { status: c.getValue() }),
     }),
     statusNote: col.accessor('statusNote', { header: 'Status note', enableSorting: false, cell: (c) => c.getValue() || '—' }),
-    area: col.accessor('areaM2', {
-      id: 'area',
-      header: 'Area',
-      enableGlobalFilter: false,
-      meta: { align: 'right', exportHeader: `Area (${landAreaUnit(units)})`, exportValue: (m2: number) => landAreaValue(m2, units) },
-      cell: (c) => formatLandArea(c.getValue(), units),
-    }),
+    area: col.accessor('areaM2', landAreaColumn('Area', units)),
     hoc: col.accessor('hocOverrideMm', {
       id: 'hoc',
       header: 'HOC override',

@@ -19,17 +19,16 @@ const oneLine = (text: string) => h('span', { style: { whiteSpace: 'nowrap' } },
 const pct = (v: number | null) => (v === null ? '—' : `${v} %`);
 const right = { align: 'right' as const };
 
+/** A share in percent (— where there is nothing to compare with), exported as the plain number. */
+function shareColumn<T extends object>(col: ReturnType<typeof columnHelper<T>>, id: string, header: string, exportHeader: string, share: (r: T) => number | null) {
+  return col.accessor((r) => share(r), { id, header, enableGlobalFilter: false, meta: { ...right, exportHeader, exportValue: (v: number | null) => v }, cell: (c) => pct(c.getValue()) });
+}
+
 function hourColumns<T extends { plannedHours: number; actualHours: number; plannedHoursDone: number }>(col: ReturnType<typeof columnHelper<T>>) {
   return [
     col.accessor((r) => r.plannedHours, { id: 'planned', header: 'Planned h', enableGlobalFilter: false, meta: { ...right, exportValue: round1 }, cell: (c) => hours(c.getValue()) }),
     col.accessor((r) => r.actualHours, { id: 'actual', header: 'Actual h', enableGlobalFilter: false, meta: { ...right, exportValue: round1 }, cell: (c) => hours(c.getValue()) }),
-    col.accessor((r) => actualShare(r), {
-      id: 'share',
-      header: 'Actual %',
-      enableGlobalFilter: false,
-      meta: { ...right, exportHeader: 'Actual / planned of done orders (%)', exportValue: (v: number | null) => v },
-      cell: (c) => pct(c.getValue()),
-    }),
+    shareColumn(col, 'share', 'Actual %', 'Actual / planned of done orders (%)', actualShare),
   ];
 }
 
@@ -39,13 +38,7 @@ function mowingColumns<T extends { mowingsAsked: number; mowingsDone: number; mo
     col.accessor((r) => r.mowingsDone, { id: 'mowingsDone', header: 'Mowed', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Mowings done' } }),
     col.accessor((r) => r.mowingsLate, { id: 'mowingsLate', header: 'Late', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Mowings late' } }),
     col.accessor((r) => r.mowingsMissed, { id: 'mowingsMissed', header: 'Missed', enableGlobalFilter: false, meta: { ...right, exportHeader: 'Mowings missed' } }),
-    col.accessor((r) => mowingShare(r), {
-      id: 'mowingShare',
-      header: 'Mowed %',
-      enableGlobalFilter: false,
-      meta: { ...right, exportHeader: 'Mowings done / asked (%)', exportValue: (v: number | null) => v },
-      cell: (c) => pct(c.getValue()),
-    }),
+    shareColumn(col, 'mowingShare', 'Mowed %', 'Mowings done / asked (%)', mowingShare),
   ];
 }
 
