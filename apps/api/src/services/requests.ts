@@ -365,23 +365,46 @@ export async function closeRequest(ctx: Ctx, deps: RequestDeps, id: number, inpu
  * it; the request's own abilities are not his, the consequence is the department's.
  */
 export async function finishRequestsOf(ctx: Ctx, deps: RequestDeps, orderId: number): Promise<number[]> {
-  const candidates = await requestsOfOrder(ctx.db, orderId, 'done', 'scheduled');
-  const done: NonNullable<Row>[] = [];
+  return moveRequestsOf(ctx, deps, orderId, {
+    orderStatus: 'done',
+    from: 'scheduled',
+    to: 'done',
+    ready: async (tx, before) => {
+      const work = (await workOf(tx, before)).filter((w) => w.status !== 'skipped');
+      return work.length > 0 && work.every((w) => w.status === 'done');
+    },
+    note: 'The work is done.',
+  });
+}
+
+/**
+ * Moves the requests order `orderId` was made for from state `from` to `to` (done is closed at
+ * the department's now, scheduled is open again), each in its own transaction with its audit
+ * entry; `ready` may hold one back. The partners are told once all are written.
+ */
+async function moveRequestsOf(
+  ctx: Ctx,
+  deps: RequestDeps,
+  orderId: number,
+  move: { orderStatus: 'done' | 'open'; from: RequestState; to: 'done' | 'scheduled'; ready?: (tx: Queryable, before: NonNullable<Row>) => Promise<boolean>; note: string },
+): Promise<number[]> {
+  const candidates = await requestsOfOrder(ctx.db, orderId, move.orderStatus, move.from);
+  const moved: NonNullable<Row>[] = [];
   for (const { id } of candidates) {
     const after = await (ctx.db as Db).transaction(async (tx) => {
       const before = await rowOf(tx, id);
-      if (!before || before.state !== 'scheduled') return null;
-      const work = (await workOf(tx, before)).filter((w) => w.status !== 'skipped');
-      if (!work.length || work.some((w) => w.status !== 'done')) return null;
-      await tx.update(fieldRequests).set({ state: 'done', closedAt: ctx.clock.now(), version: sql`${fieldRequests.version} + 1`, updatedAt: new Date() }).where(eq(fieldRequests.id, id));
+      if (!before || before.state !== move.from) return null;
+      if (move.ready && !(await move.ready(tx, before))) return null;
+      const closedAt = move.to === 'done' ? ctx.clock.now() : null;
+      await tx.update(fieldRequests).set({ state: move.to, closedAt, version: sql`${fieldRequests.version} + 1`, updatedAt: new Date() }).where(eq(fieldRequests.id, id));
       const after = (await rowOf(tx, id))!;
       await auditRow(ctx, tx, 'field_request', before, after);
       return after;
     });
-    if (after) done.push(after);
+    if (after) moved.push(after);
   }
-  for (const row of done) tell(ctx, deps, row, 'done', 'The work is done.');
-  return done.map((r) => r.id);
+  for (const row of moved) tell(ctx, deps, row, move.to, move.note);
+  return moved.map((r) => r.id);
 }
 
 /** The requests in `state` that order `orderId` was made for (its own, or its event's), when the order is `orderStatus`. */
@@ -402,21 +425,12 @@ async function requestsOfOrder(db: Queryable, orderId: number, orderStatus: 'don
  * as `finishRequestsOf` does.
  */
 export async function reopenRequestsOf(ctx: Ctx, deps: RequestDeps, orderId: number): Promise<number[]> {
-  const candidates = await requestsOfOrder(ctx.db, orderId, 'open', 'done');
-  const again: NonNullable<Row>[] = [];
-  for (const { id } of candidates) {
-    const after = await (ctx.db as Db).transaction(async (tx) => {
-      const before = await rowOf(tx, id);
-      if (!before || before.state !== 'done') return null;
-      await tx.update(fieldRequests).set({ state: 'scheduled', closedAt: null, version: sql`${fieldRequests.version} + 1`, updatedAt: new Date() }).where(eq(fieldRequests.id, id));
-      const after = (await rowOf(tx, id))!;
-      await auditRow(ctx, tx, 'field_request', before, after);
-      return after;
-    });
-    if (after) again.push(after);
-  }
-  for (const row of again) tell(ctx, deps, row, 'scheduled', 'The work was reopened: the request is scheduled again until it is done.');
-  return again.map((r) => r.id);
+  return moveRequestsOf(ctx, deps, orderId, {
+    orderStatus: 'open',
+    from: 'done',
+    to: 'scheduled',
+    note: 'The work was reopened: the request is scheduled again until it is done.',
+  });
 }
 
 /** The people a step is e-mailed to: the district's foremen for a new request or a reply, else the partner who filed it. */
