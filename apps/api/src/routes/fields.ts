@@ -5,7 +5,7 @@ import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
-import { createField, deleteField, getField, getFieldRow, listFieldsJson, updateField } from '../services/fields.ts';
+import { createField, deleteField, fieldRows, getField, listFieldsJson, updateField } from '../services/fields.ts';
 import { fieldNeedsJson } from '../services/needs.ts';
 import { fieldWorkHistory } from '../services/field-history.ts';
 import { addFieldCheckPhoto, checkPhotoAllowed, fieldCheckPhotoFile, fieldForCheck, fieldGrowthCalibration, listFieldChecks, logStaffFieldCheck } from '../services/field-checks.ts';
@@ -74,7 +74,7 @@ export function fieldsRouter({ db, config }: AppDeps): Router {
   });
 
   writeRoutes(router, db, '/', 'field', {
-    guard: { subject: 'Field', resource: 'field', row: getFieldRow },
+    guard: fieldRows,
     create: { body: createFieldSchema, run: createField },
     update: { body: updateFieldSchema, run: updateField },
     remove: (ctx, id, version) => deleteField(ctx, id, version, config.uploadsDir),
