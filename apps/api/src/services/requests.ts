@@ -41,7 +41,7 @@ import type { BackgroundTasks } from './background.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { placeScope } from './scope.ts';
-import { auditRow, updateAtVersion } from './versioned.ts';
+import { auditedRow, updateAtVersion } from './versioned.ts';
 import { PHOTO_MAX_BYTES, photoFileName, storePhoto, storedPhotoPath } from './work-photos.ts';
 
 export { PHOTO_MAX_BYTES as REQUEST_PHOTO_MAX_BYTES };
@@ -211,9 +211,7 @@ export async function createRequest(ctx: Ctx, deps: RequestDeps, input: CreateFi
       .insert(fieldRequests)
       .values({ fieldId: field.id, siteId: field.siteId, districtId: field.districtId, kind: input.kind, ...values, layout: values.layout as never, description: input.description, createdBy: ctx.actor.id })
       .returning({ id: fieldRequests.id });
-    const row = (await rowOf(tx, created!.id))!;
-    await auditRow(ctx, tx, 'field_request', null, row);
-    return row;
+    return auditedRow(ctx, tx, 'field_request', null, created!.id, rowOf);
   });
   tell(ctx, deps, row, 'filed', row.description);
   return answer(row);
@@ -236,9 +234,7 @@ export async function updateRequest(ctx: Ctx, id: number, input: UpdateFieldRequ
     }
     if (game) checkGame(ctx, before.sport, next);
     await updateAtVersion(tx, fieldRequests, 'field_request', id, version, { ...changes, layout: changes.layout as never });
-    const after = (await rowOf(tx, id))!;
-    await auditRow(ctx, tx, 'field_request', before, after);
-    return answer(after);
+    return answer(await auditedRow(ctx, tx, 'field_request', before, id, rowOf));
   });
 }
 
@@ -324,9 +320,7 @@ export async function scheduleRequest(ctx: Ctx, deps: RequestDeps, id: number, i
       workWords = `Planned: ${WORK_TASK_LABELS[work.task]} on ${work.plannedDate}.`;
     }
     await updateAtVersion(tx, fieldRequests, 'field_request', id, input.version, { state: 'scheduled', reason: input.note, decidedBy: ctx.actor.id, scheduledAt: ctx.clock.now(), ...link });
-    const after = (await rowOf(tx, id))!;
-    await auditRow(ctx, tx, 'field_request', before, after);
-    return after;
+    return auditedRow(ctx, tx, 'field_request', before, id, rowOf);
   });
   tell(ctx, deps, after, 'scheduled', input.note, workWords);
   return answer(after);
@@ -337,9 +331,7 @@ export async function declineRequest(ctx: Ctx, deps: RequestDeps, id: number, in
     const before = changeable(ctx, 'assign', id, await rowOf(tx, id));
     mustBe(before, ['requested'], 'declined');
     await updateAtVersion(tx, fieldRequests, 'field_request', id, input.version, { state: 'declined', reason: input.reason, decidedBy: ctx.actor.id, closedAt: ctx.clock.now() });
-    const after = (await rowOf(tx, id))!;
-    await auditRow(ctx, tx, 'field_request', before, after);
-    return after;
+    return auditedRow(ctx, tx, 'field_request', before, id, rowOf);
   });
   tell(ctx, deps, after, 'declined', input.reason);
   return answer(after);
@@ -351,9 +343,7 @@ export async function closeRequest(ctx: Ctx, deps: RequestDeps, id: number, inpu
     const before = changeable(ctx, 'assign', id, await rowOf(tx, id));
     mustBe(before, ['requested', 'scheduled'], 'closed');
     await updateAtVersion(tx, fieldRequests, 'field_request', id, input.version, { state: 'done', reason: input.note || before.reason, decidedBy: ctx.actor.id, closedAt: ctx.clock.now() });
-    const after = (await rowOf(tx, id))!;
-    await auditRow(ctx, tx, 'field_request', before, after);
-    return after;
+    return auditedRow(ctx, tx, 'field_request', before, id, rowOf);
   });
   tell(ctx, deps, after, 'done', input.note);
   return answer(after);
@@ -397,9 +387,7 @@ async function moveRequestsOf(
       if (move.ready && !(await move.ready(tx, before))) return null;
       const closedAt = move.to === 'done' ? ctx.clock.now() : null;
       await tx.update(fieldRequests).set({ state: move.to, closedAt, version: sql`${fieldRequests.version} + 1`, updatedAt: new Date() }).where(eq(fieldRequests.id, id));
-      const after = (await rowOf(tx, id))!;
-      await auditRow(ctx, tx, 'field_request', before, after);
-      return after;
+      return auditedRow(ctx, tx, 'field_request', before, id, rowOf);
     });
     if (after) moved.push(after);
   }
