@@ -33,7 +33,7 @@ import type { Mailer } from '../mail/mailer.ts';
 import { closureMail } from '../mail/messages.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { fieldCrewIds } from './scope.ts';
+import { fieldCrewIds, onFieldJoins } from './scope.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 import { notifyCrews, type WorkMoveNotice } from './work-orders.ts';
 import { auditedRow, updateAtVersion, writable } from './versioned.ts';
@@ -68,12 +68,7 @@ const columns = {
 };
 
 function selectClosures(db: Queryable) {
-  return db
-    .select(columns)
-    .from(fieldClosures)
-    .innerJoin(fields, eq(fields.id, fieldClosures.fieldId))
-    .innerJoin(sites, eq(sites.id, fields.siteId))
-    .leftJoin(users, eq(users.id, fieldClosures.decidedBy));
+  return onFieldJoins(db.select(columns).from(fieldClosures).$dynamic(), { fieldId: fieldClosures.fieldId, siteId: fields.siteId, by: fieldClosures.decidedBy });
 }
 
 /** The field as a closure needs it: its scope, status, version, level and names. */

@@ -40,7 +40,7 @@ import { requestMail, type RequestStep } from '../mail/messages.ts';
 import type { BackgroundTasks } from './background.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { placeScope } from './scope.ts';
+import { onFieldJoins, placeScope } from './scope.ts';
 import { auditedRow, updateAtVersion } from './versioned.ts';
 import { PHOTO_MAX_BYTES, photoFileName, storePhoto, storedPhotoPath } from './work-photos.ts';
 
@@ -87,12 +87,7 @@ const columns = {
 };
 
 function select(db: Queryable) {
-  return db
-    .select(columns)
-    .from(fieldRequests)
-    .innerJoin(fields, eq(fields.id, fieldRequests.fieldId))
-    .innerJoin(sites, eq(sites.id, fieldRequests.siteId))
-    .leftJoin(users, eq(users.id, fieldRequests.createdBy));
+  return onFieldJoins(db.select(columns).from(fieldRequests).$dynamic(), { fieldId: fieldRequests.fieldId, siteId: fieldRequests.siteId, by: fieldRequests.createdBy });
 }
 
 type Row = Awaited<ReturnType<typeof rowOf>> & {};
