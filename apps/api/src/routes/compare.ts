@@ -6,14 +6,12 @@ import type { AppDeps } from '../app-deps.ts';
 import { ctxAllowed } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { COMPARE_CSV_COLUMNS, compareSites } from '../services/compare.ts';
+import { jsonRoute } from './json-routes.ts';
 
 export function compareRouter({ db }: AppDeps): Router {
   const router = Router();
 
-  router.get('/sites', async (req, res) => {
-    const ctx = ctxAllowed(db, req, 'read', 'SiteComparison');
-    res.json(await compareSites(ctx, parse(compareQuerySchema, req.query, 'query')));
-  });
+  router.get('/sites', jsonRoute(db, (ctx, req) => compareSites(ctx, parse(compareQuerySchema, req.query, 'query')), ['read', 'SiteComparison']));
 
   router.get('/sites.csv', async (req, res) => {
     const ctx = ctxAllowed(db, req, 'read', 'SiteComparison');

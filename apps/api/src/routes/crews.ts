@@ -3,8 +3,8 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { createCrewSchema, createEquipmentSchema, idSchema, updateCrewSchema, updateEquipmentSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { createCrew, crewRow, deleteCrew, listCrews, updateCrew } from '../services/crews.ts';
-import { createEquipment, deleteEquipment, getRow as equipmentRow, listEquipment, updateEquipment } from '../services/equipment.ts';
+import { createCrew, crewRows, deleteCrew, listCrews, updateCrew } from '../services/crews.ts';
+import { createEquipment, deleteEquipment, equipmentRows, listEquipment, updateEquipment } from '../services/equipment.ts';
 import { writeRoutes } from './write-routes.ts';
 
 export const districtQuery = z.object({ districtId: idSchema.optional() });
@@ -13,7 +13,7 @@ export function crewsRouter({ db }: AppDeps): Router {
   const router = Router();
 
   writeRoutes(router, db, '/crews', 'crew', {
-    guard: { subject: 'Crew', resource: 'crew', row: crewRow },
+    guard: crewRows,
     list: { query: districtQuery, run: listCrews },
     create: { body: createCrewSchema, run: createCrew },
     update: { body: updateCrewSchema, run: updateCrew },
@@ -21,7 +21,7 @@ export function crewsRouter({ db }: AppDeps): Router {
   });
 
   writeRoutes(router, db, '/equipment', 'equipment', {
-    guard: { subject: 'Equipment', resource: 'equipment', row: equipmentRow },
+    guard: equipmentRows,
     list: { query: districtQuery, run: listEquipment },
     create: { body: createEquipmentSchema, run: createEquipment },
     update: { body: updateEquipmentSchema, run: updateEquipment },

@@ -4,7 +4,7 @@ import { z } from 'zod';
 import { addDaysIso, createFieldEventSchema, idSchema, isoDateSchema as isoDate, updateFieldEventSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import type { Ctx } from '../services/context.ts';
-import { createFieldEvent, deleteFieldEvent, getRow as fieldEventRow, listFieldEvents, updateFieldEvent } from '../services/field-events.ts';
+import { createFieldEvent, deleteFieldEvent, eventRows, listFieldEvents, updateFieldEvent } from '../services/field-events.ts';
 import { writeRoutes } from './write-routes.ts';
 
 /** Without dates: the coming three months, what a season's bookings list needs at a glance. */
@@ -31,7 +31,7 @@ export function fieldEventsRouter({ db }: AppDeps): Router {
   const router = Router();
 
   writeRoutes(router, db, '/', 'event', {
-    guard: { subject: 'FieldEvent', resource: 'field_event', row: fieldEventRow },
+    guard: eventRows,
     list: { query: (ctx: Ctx) => listQuery(ctx.clock.today()), run: listFieldEvents },
     create: { body: createFieldEventSchema, run: createFieldEvent },
     update: { body: updateFieldEventSchema, run: updateFieldEvent },

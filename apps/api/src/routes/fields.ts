@@ -1,16 +1,17 @@
-import { Router } from 'express';
+import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { createFieldSchema, fieldCheckSchema, idParamSchema, idSchema, listQuerySchema, needsQuerySchema, pageQuerySchema, updateFieldSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
-import { createField, deleteField, getField, getFieldRow, listFieldsJson, updateField } from '../services/fields.ts';
+import { createField, deleteField, fieldRows, getField, listFieldsJson, updateField } from '../services/fields.ts';
 import { fieldNeedsJson } from '../services/needs.ts';
 import { fieldWorkHistory } from '../services/field-history.ts';
 import { addFieldCheckPhoto, checkPhotoAllowed, fieldCheckPhotoFile, fieldForCheck, fieldGrowthCalibration, listFieldChecks, logStaffFieldCheck } from '../services/field-checks.ts';
 import { PHOTO_MAX_BYTES } from '../services/work-photos.ts';
 import { photoFileHandler, photoUploadHandlers } from './photo-routes.ts';
+import { jsonRoute, jsonTextRoute } from './json-routes.ts';
 import { writeRoutes } from './write-routes.ts';
 
 // The photo and the phone's reference for it, as the crews' photos.
@@ -21,31 +22,13 @@ export const checkPhotoParamsSchema = z.object({ id: idSchema, checkId: idSchema
 export function fieldsRouter({ db, config }: AppDeps): Router {
   const router = Router();
 
-  router.get('/', async (req, res) => {
-    const query = parse(listQuerySchema, req.query, 'query');
-    res.type('application/json').send(await listFieldsJson(ctxOf(db, req), query));
-  });
+  const idOf = (req: Request) => parse(idParamSchema, req.params, 'params').id;
 
-  router.get('/:id', async (req, res) => {
-    const { id } = parse(idParamSchema, req.params, 'params');
-    res.json({ field: await getField(ctxOf(db, req), id) });
-  });
-
-  router.get('/:id/needs', async (req, res) => {
-    const { id } = parse(idParamSchema, req.params, 'params');
-    const { date } = parse(needsQuerySchema, req.query, 'query');
-    res.type('application/json').send(await fieldNeedsJson(ctxOf(db, req), id, date));
-  });
-
-  router.get('/:id/work', async (req, res) => {
-    const { id } = parse(idParamSchema, req.params, 'params');
-    res.json(await fieldWorkHistory(ctxOf(db, req), id, parse(pageQuerySchema, req.query, 'query')));
-  });
-
-  router.get('/:id/checks', async (req, res) => {
-    const { id } = parse(idParamSchema, req.params, 'params');
-    res.json(await listFieldChecks(ctxOf(db, req), id));
-  });
+  router.get('/', jsonTextRoute(db, (ctx, req) => listFieldsJson(ctx, parse(listQuerySchema, req.query, 'query'))));
+  router.get('/:id', jsonRoute(db, async (ctx, req) => ({ field: await getField(ctx, idOf(req)) })));
+  router.get('/:id/needs', jsonTextRoute(db, (ctx, req) => fieldNeedsJson(ctx, idOf(req), parse(needsQuerySchema, req.query, 'query').date)));
+  router.get('/:id/work', jsonRoute(db, (ctx, req) => fieldWorkHistory(ctx, idOf(req), parse(pageQuerySchema, req.query, 'query'))));
+  router.get('/:id/checks', jsonRoute(db, (ctx, req) => listFieldChecks(ctx, idOf(req))));
 
   // Staff log a check from the field page: who may is settled before the body is read.
   router.post('/:id/checks', async (req, res) => {
@@ -68,13 +51,10 @@ export function fieldsRouter({ db, config }: AppDeps): Router {
 
   router.get('/:id/checks/:checkId/photos/:photoId', photoFileHandler(db, checkPhotoParamsSchema, (ctx, { id, checkId, photoId }) => fieldCheckPhotoFile(ctx, id, checkId, photoId, config.uploadsDir)));
 
-  router.get('/:id/growth-calibration', async (req, res) => {
-    const { id } = parse(idParamSchema, req.params, 'params');
-    res.json({ calibration: await fieldGrowthCalibration(ctxOf(db, req), id) });
-  });
+  router.get('/:id/growth-calibration', jsonRoute(db, async (ctx, req) => ({ calibration: await fieldGrowthCalibration(ctx, idOf(req)) })));
 
   writeRoutes(router, db, '/', 'field', {
-    guard: { subject: 'Field', resource: 'field', row: getFieldRow },
+    guard: fieldRows,
     create: { body: createFieldSchema, run: createField },
     update: { body: updateFieldSchema, run: updateField },
     remove: (ctx, id, version) => deleteField(ctx, id, version, config.uploadsDir),

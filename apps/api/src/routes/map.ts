@@ -1,21 +1,15 @@
 import { Router } from 'express';
 import { mapQuerySchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
-import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { basemap, mapDataJson } from '../services/map.ts';
+import { jsonRoute, jsonTextRoute } from './json-routes.ts';
 
 export function mapRouter({ db, config }: AppDeps): Router {
   const router = Router();
 
-  router.get('/', async (req, res) => {
-    const query = parse(mapQuerySchema, req.query, 'query');
-    res.type('application/json').send(await mapDataJson(ctxOf(db, req), query));
-  });
-
-  router.get('/basemap', async (req, res) => {
-    res.json(await basemap(ctxOf(db, req), config));
-  });
+  router.get('/', jsonTextRoute(db, (ctx, req) => mapDataJson(ctx, parse(mapQuerySchema, req.query, 'query'))));
+  router.get('/basemap', jsonRoute(db, (ctx) => basemap(ctx, config)));
 
   return router;
 }

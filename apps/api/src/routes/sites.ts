@@ -4,7 +4,7 @@ import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { listFields } from '../services/fields.ts';
-import { createSite, getSite, getSiteRow, listSites, updateSite } from '../services/sites.ts';
+import { createSite, getSite, listSites, siteRows, updateSite } from '../services/sites.ts';
 import { writeRoutes } from './write-routes.ts';
 
 export function sitesRouter({ db }: AppDeps): Router {
@@ -23,7 +23,7 @@ export function sitesRouter({ db }: AppDeps): Router {
   });
 
   writeRoutes(router, db, '/', 'site', {
-    guard: { subject: 'Site', resource: 'site', row: getSiteRow },
+    guard: siteRows,
     create: { body: createSiteSchema, run: createSite },
     update: { body: updateSiteSchema, run: updateSite },
   });

@@ -4,13 +4,12 @@ import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { listStandards, updateLevelStandard } from '../services/standards.ts';
+import { jsonRoute } from './json-routes.ts';
 
 export function standardsRouter({ db }: AppDeps): Router {
   const router = Router();
 
-  router.get('/', async (req, res) => {
-    res.json(await listStandards(ctxOf(db, req)));
-  });
+  router.get('/', jsonRoute(db, (ctx) => listStandards(ctx)));
 
   router.patch('/:level', async (req, res) => {
     const ctx = ctxOf(db, req);

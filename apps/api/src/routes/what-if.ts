@@ -5,25 +5,15 @@ import type { AppDeps } from '../app-deps.ts';
 import { ctxAllowed } from '../http/auth.ts';
 import { parse } from '../http/validate.ts';
 import { compareScenarios, createScenario, deleteScenario, listScenarios, previewWhatIf } from '../services/what-if.ts';
+import { jsonRoute } from './json-routes.ts';
 
 export function whatIfRouter({ db }: AppDeps): Router {
   const router = Router();
 
-  router.post('/', async (req, res) => {
-    // Who is asking, before the body is read; the scenario's district and fields are checked with it.
-    const ctx = ctxAllowed(db, req, 'read', 'Budget');
-    res.json(await previewWhatIf(ctx, parse(whatIfSchema, req.body, 'body')));
-  });
-
-  router.get('/scenarios', async (req, res) => {
-    const ctx = ctxAllowed(db, req, 'read', 'WhatIfScenario');
-    res.json(await listScenarios(ctx, parse(whatIfScenarioListSchema, req.query, 'query')));
-  });
-
-  router.get('/scenarios/compare', async (req, res) => {
-    const ctx = ctxAllowed(db, req, 'read', 'WhatIfScenario');
-    res.json(await compareScenarios(ctx, parse(whatIfCompareSchema, req.query, 'query').ids));
-  });
+  // Who is asking, before the body is read; the scenario's district and fields are checked with it.
+  router.post('/', jsonRoute(db, (ctx, req) => previewWhatIf(ctx, parse(whatIfSchema, req.body, 'body')), ['read', 'Budget']));
+  router.get('/scenarios', jsonRoute(db, (ctx, req) => listScenarios(ctx, parse(whatIfScenarioListSchema, req.query, 'query')), ['read', 'WhatIfScenario']));
+  router.get('/scenarios/compare', jsonRoute(db, (ctx, req) => compareScenarios(ctx, parse(whatIfCompareSchema, req.query, 'query').ids), ['read', 'WhatIfScenario']));
 
   router.post('/scenarios', async (req, res) => {
     // Roles that save no what-if are refused before the body is read; the district in it is checked again.

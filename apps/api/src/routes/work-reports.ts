@@ -5,6 +5,7 @@ import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
 import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
+import { jsonRoute } from './json-routes.ts';
 import { photoFileHandler, photoParamsSchema, photoUploadHandlers } from './photo-routes.ts';
 import { addWorkPhoto, PHOTO_MAX_BYTES, photoFile } from '../services/work-photos.ts';
 import { logFieldCheck } from '../services/field-checks.ts';
@@ -19,10 +20,7 @@ export function workReportsRouter({ db, config, mailer, background }: AppDeps): 
   const router = Router();
   const requestDeps = { mailer, publicUrl: config.publicUrl, background };
 
-  router.get('/:id', async (req, res) => {
-    const { id } = parse(idParamSchema, req.params, 'params');
-    res.json(await getWorkOrder(ctxOf(db, req), id));
-  });
+  router.get('/:id', jsonRoute(db, (ctx, req) => getWorkOrder(ctx, parse(idParamSchema, req.params, 'params').id)));
 
   router.post('/:id/reports', async (req, res) => {
     const ctx = ctxOf(db, req);

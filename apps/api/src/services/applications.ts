@@ -9,7 +9,7 @@ import type { Db, Queryable } from '../db/client.ts';
 import { applications, fields, sites, users, weatherDays } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { placeScope } from './scope.ts';
+import { onFieldJoins, placeScope } from './scope.ts';
 import { nearestStation, stationsWithWeather } from './stations.ts';
 import { orderFor } from './work-reports.ts';
 
@@ -49,12 +49,7 @@ const rowColumns = {
 };
 
 async function selectApplications(db: Queryable, where: SQL | undefined) {
-  return db
-    .select(rowColumns)
-    .from(applications)
-    .innerJoin(fields, eq(fields.id, applications.fieldId))
-    .innerJoin(sites, eq(sites.id, applications.siteId))
-    .leftJoin(users, eq(users.id, applications.createdBy))
+  return onFieldJoins(db.select(rowColumns).from(applications).$dynamic(), { fieldId: applications.fieldId, siteId: applications.siteId, by: applications.createdBy })
     .where(where)
     .orderBy(desc(applications.appliedOn), desc(applications.id));
 }

@@ -33,10 +33,10 @@ import type { Mailer } from '../mail/mailer.ts';
 import { closureMail } from '../mail/messages.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { fieldCrewIds } from './scope.ts';
+import { fieldCrewIds, onFieldJoins } from './scope.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 import { notifyCrews, type WorkMoveNotice } from './work-orders.ts';
-import { auditRow, updateAtVersion, writable } from './versioned.ts';
+import { auditedRow, updateAtVersion, writable } from './versioned.ts';
 
 /** How far ahead of the server's clock a closure may be said to start (a phone's clock running fast). */
 const FUTURE_SLACK_MS = 5 * 60_000;
@@ -68,12 +68,7 @@ const columns = {
 };
 
 function selectClosures(db: Queryable) {
-  return db
-    .select(columns)
-    .from(fieldClosures)
-    .innerJoin(fields, eq(fields.id, fieldClosures.fieldId))
-    .innerJoin(sites, eq(sites.id, fields.siteId))
-    .leftJoin(users, eq(users.id, fieldClosures.decidedBy));
+  return onFieldJoins(db.select(columns).from(fieldClosures).$dynamic(), { fieldId: fieldClosures.fieldId, siteId: fields.siteId, by: fieldClosures.decidedBy });
 }
 
 /** The field as a closure needs it: its scope, status, version, level and names. */
@@ -166,8 +161,7 @@ async function recordDecision(ctx: Ctx, tx: Tx, field: NonNullable<Awaited<Retur
     .values({ fieldId: field.id, ...decision, decidedBy: ctx.actor.id, workChoice: work.count ? (work.choice ?? null) : null, workCount: work.count })
     .returning({ id: fieldClosures.id });
   const row = (await selectClosures(tx).where(eq(fieldClosures.id, inserted!.id)))[0]!;
-  const after = (await fieldRow(tx, field.id))!;
-  await auditRow(ctx, tx, 'field', field, after);
+  const after = await auditedRow(ctx, tx, 'field', field, field.id, fieldRow);
   await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_closure', entityId: row.id, districtId: field.districtId, before: null, after: row as unknown as Record<string, unknown> });
   return { row, fieldVersion: after.version };
 }

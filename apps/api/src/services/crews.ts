@@ -4,7 +4,7 @@ import { appError, type CreateCrewInput, type CrewRow, type StoredCrew, type Upd
 import type { Db } from '../db/client.ts';
 import { crews, districts, users } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { auditRow, deleteAtVersion, updateAtVersion, writable } from './versioned.ts';
+import { auditRow, deleteVersioned, updateVersioned, versionedRows } from './versioned.ts';
 import { requireDistrict } from './districts.ts';
 
 export async function listCrews(ctx: Ctx, filter: { districtId?: number | undefined }): Promise<CrewRow[]> {
@@ -38,6 +38,8 @@ export async function crewRow(db: Ctx['db'], id: number) {
   return row;
 }
 
+export const crewRows = versionedRows({ table: crews, subject: 'Crew', resource: 'crew', row: crewRow });
+
 export async function createCrew(ctx: Ctx, input: CreateCrewInput): Promise<StoredCrew<Date>> {
   authorize(ctx, 'create', 'Crew', { districtId: input.districtId });
   return (ctx.db as Db).transaction(async (tx) => {
@@ -48,10 +50,8 @@ export async function createCrew(ctx: Ctx, input: CreateCrewInput): Promise<Stor
   });
 }
 
-export async function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput): Promise<StoredCrew<Date>> {
-  return (ctx.db as Db).transaction(async (tx) => {
-    const before = writable(ctx, 'update', 'Crew', 'crew', id, await crewRow(tx, id));
-    const { version, ...changes } = input;
+export function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput): Promise<StoredCrew<Date>> {
+  return updateVersioned(ctx, crewRows, id, input, async (tx, before, changes) => {
     if (changes.districtId !== undefined && changes.districtId !== before.districtId) {
       // A crew lead's district follows his crew, so a crew with a lead stays where it is.
       authorize(ctx, 'create', 'Crew', { districtId: changes.districtId });
@@ -59,18 +59,13 @@ export async function updateCrew(ctx: Ctx, id: number, input: UpdateCrewInput): 
       const [lead] = await tx.select({ id: users.id }).from(users).where(eq(users.crewId, id)).limit(1);
       if (lead) throw appError('crew/has_lead', 'Move the crew lead to another crew before moving this crew to another district');
     }
-    await updateAtVersion(tx, crews, 'crew', id, version, changes);
-    const after = (await crewRow(tx, id))!;
-    await auditRow(ctx, tx, 'crew', before, after);
-    return after;
+    return changes;
   });
 }
 
-export async function deleteCrew(ctx: Ctx, id: number, version: number): Promise<void> {
-  return (ctx.db as Db).transaction(async (tx) => {
-    const before = writable(ctx, 'delete', 'Crew', 'crew', id, await crewRow(tx, id));
+export function deleteCrew(ctx: Ctx, id: number, version: number): Promise<void> {
+  return deleteVersioned(ctx, crewRows, id, version, async (tx) => {
     const [lead] = await tx.select({ id: users.id }).from(users).where(eq(users.crewId, id)).limit(1);
     if (lead) throw appError('crew/has_lead', 'This crew still has a crew lead account; move or deactivate it first');
-    await deleteAtVersion(ctx, tx, crews, 'crew', before, version);
   });
 }

@@ -4,7 +4,7 @@ import { bladeCare, errors, type CreateEquipmentInput, type EquipmentRow, type U
 import type { Db } from '../db/client.ts';
 import { crews, districts, equipment, workOrders } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { auditRow, deleteAtVersion, updateAtVersion, writable } from './versioned.ts';
+import { deleteVersioned, insertAudited, updateVersioned, versionedRows } from './versioned.ts';
 import { requireDistrict } from './districts.ts';
 
 const columns = {
@@ -33,8 +33,6 @@ function select(db: Ctx['db']) {
   return db.select(columns).from(equipment).innerJoin(districts, eq(districts.id, equipment.districtId)).leftJoin(crews, eq(crews.id, equipment.crewId));
 }
 
-type Row = Awaited<ReturnType<typeof getRow>> & object;
-
 /**
  * Blade care by `bladeCare` (the engine's one rule): due when the hours run since the last
  * sharpening reach the interval, due soon when this week's open mowings on the machine would.
@@ -59,6 +57,8 @@ export async function getRow(db: Ctx['db'], id: number) {
   const [row] = await select(db).where(eq(equipment.id, id));
   return row;
 }
+
+export const equipmentRows = versionedRows({ table: equipment, subject: 'Equipment', resource: 'equipment', row: getRow });
 
 export async function listEquipment(ctx: Ctx, filter: { districtId?: number | undefined }): Promise<EquipmentRow<Date>[]> {
   authorize(ctx, 'read', 'Equipment');
@@ -90,17 +90,12 @@ export async function createEquipment(ctx: Ctx, input: CreateEquipmentInput): Pr
   return (ctx.db as Db).transaction(async (tx) => {
     await requireDistrict(tx, input.districtId);
     await checkCrew(tx, input.crewId, input.districtId);
-    const [created] = await tx.insert(equipment).values(input).returning({ id: equipment.id });
-    const row = (await getRow(tx, created!.id))!;
-    await auditRow(ctx, tx, 'equipment', null, row);
-    return withBladeCare(row);
+    return withBladeCare(await insertAudited(ctx, tx, equipmentRows, input));
   });
 }
 
 export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipmentInput): Promise<EquipmentRow<Date>> {
-  return (ctx.db as Db).transaction(async (tx) => {
-    const before: Row = writable(ctx, 'update', 'Equipment', 'equipment', id, await getRow(tx, id));
-    const { version, ...changes } = input;
+  const after = await updateVersioned(ctx, equipmentRows, id, input, async (tx, before, changes) => {
     const districtId = changes.districtId ?? before.districtId;
     if (districtId !== before.districtId) {
       authorize(ctx, 'create', 'Equipment', { districtId });
@@ -111,16 +106,11 @@ export async function updateEquipment(ctx: Ctx, id: number, input: UpdateEquipme
     if (merged.hocMinMm != null && merged.hocMaxMm != null && merged.hocMinMm > merged.hocMaxMm) {
       throw errors.invalid('The highest HOC is below the lowest', [{ path: 'body.hocMaxMm', message: 'the highest HOC is below the lowest' }]);
     }
-    await updateAtVersion(tx, equipment, 'equipment', id, version, changes);
-    const after = (await getRow(tx, id))!;
-    await auditRow(ctx, tx, 'equipment', before, after);
-    return withBladeCare(after);
+    return changes;
   });
+  return withBladeCare(after);
 }
 
-export async function deleteEquipment(ctx: Ctx, id: number, version: number): Promise<void> {
-  return (ctx.db as Db).transaction(async (tx) => {
-    const before = writable(ctx, 'delete', 'Equipment', 'equipment', id, await getRow(tx, id));
-    await deleteAtVersion(ctx, tx, equipment, 'equipment', before, version);
-  });
+export function deleteEquipment(ctx: Ctx, id: number, version: number): Promise<void> {
+  return deleteVersioned(ctx, equipmentRows, id, version);
 }

@@ -8,7 +8,7 @@ import type { Db } from '../db/client.ts';
 import { fieldEvents, fields, sites } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { placeScope } from './scope.ts';
-import { auditRow, deleteAtVersion, updateAtVersion, writable } from './versioned.ts';
+import { deleteVersioned, insertAudited, updateVersioned, versionedRows } from './versioned.ts';
 
 export interface FieldEventFilter {
   from: string;
@@ -49,6 +49,8 @@ export async function getRow(db: Ctx['db'], id: number) {
   return row;
 }
 
+export const eventRows = versionedRows({ table: fieldEvents, subject: 'FieldEvent', resource: 'field_event', row: getRow });
+
 /** The same rule as the FieldEvent ability, in SQL: undefined means every booking. */
 const eventScope = (actor: Actor): SQL | undefined => placeScope(actor, fieldEvents.districtId, fieldEvents.siteId);
 
@@ -64,52 +66,40 @@ export async function listFieldEvents(ctx: Ctx, filter: FieldEventFilter): Promi
   return rows.filter((row) => can(ctx, 'read', 'FieldEvent', row));
 }
 
-/** The field a booking is on, with the site and district the booking copies. */
-async function fieldOf(db: Ctx['db'], fieldId: number) {
+/**
+ * The field a new or moved booking is on, with the site and district the booking copies: it
+ * must exist (400) and the caller must be allowed to book it (403).
+ */
+async function fieldToBook(ctx: Ctx, db: Ctx['db'], fieldId: number) {
   const [field] = await db
     .select({ id: fields.id, siteId: fields.siteId, districtId: sites.districtId })
     .from(fields)
     .innerJoin(sites, eq(sites.id, fields.siteId))
     .where(eq(fields.id, fieldId));
   if (!field) throw errors.noSuch('field', 'body.fieldId');
+  authorize(ctx, 'create', 'FieldEvent', { siteId: field.siteId, districtId: field.districtId });
   return field;
 }
 
 export async function createFieldEvent(ctx: Ctx, input: CreateFieldEventInput): Promise<FieldEventRow<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const field = await fieldOf(tx, input.fieldId);
-    authorize(ctx, 'create', 'FieldEvent', { siteId: field.siteId, districtId: field.districtId });
-    const [created] = await tx
-      .insert(fieldEvents)
-      .values({ ...input, siteId: field.siteId, districtId: field.districtId, createdBy: ctx.actor.id })
-      .returning({ id: fieldEvents.id });
-    const row = (await getRow(tx, created!.id))!;
-    await auditRow(ctx, tx, 'field_event', null, row);
-    return row;
+    const field = await fieldToBook(ctx, tx, input.fieldId);
+    return insertAudited(ctx, tx, eventRows, { ...input, siteId: field.siteId, districtId: field.districtId, createdBy: ctx.actor.id });
   });
 }
 
-export async function updateFieldEvent(ctx: Ctx, id: number, input: UpdateFieldEventInput): Promise<FieldEventRow<Date>> {
-  return (ctx.db as Db).transaction(async (tx) => {
-    const before = writable(ctx, 'update', 'FieldEvent', 'field_event', id, await getRow(tx, id));
-    const { version, ...changes } = input;
+export function updateFieldEvent(ctx: Ctx, id: number, input: UpdateFieldEventInput): Promise<FieldEventRow<Date>> {
+  return updateVersioned(ctx, eventRows, id, input, async (tx, before, changes) => {
     let moved: { siteId: number; districtId: number } | undefined;
     if (changes.fieldId !== undefined && changes.fieldId !== before.fieldId) {
       // Moving a booking to another field is booking that field: the caller must be allowed there too.
-      const field = await fieldOf(tx, changes.fieldId);
-      authorize(ctx, 'create', 'FieldEvent', { siteId: field.siteId, districtId: field.districtId });
+      const field = await fieldToBook(ctx, tx, changes.fieldId);
       moved = { siteId: field.siteId, districtId: field.districtId };
     }
-    await updateAtVersion(tx, fieldEvents, 'field_event', id, version, { ...changes, ...moved });
-    const after = (await getRow(tx, id))!;
-    await auditRow(ctx, tx, 'field_event', before, after);
-    return after;
+    return { ...changes, ...moved };
   });
 }
 
-export async function deleteFieldEvent(ctx: Ctx, id: number, version: number): Promise<void> {
-  return (ctx.db as Db).transaction(async (tx) => {
-    const before = writable(ctx, 'delete', 'FieldEvent', 'field_event', id, await getRow(tx, id));
-    await deleteAtVersion(ctx, tx, fieldEvents, 'field_event', before, version);
-  });
+export function deleteFieldEvent(ctx: Ctx, id: number, version: number): Promise<void> {
+  return deleteVersioned(ctx, eventRows, id, version);
 }

@@ -9,7 +9,7 @@ import { authorize, can, type Ctx } from './context.ts';
 import { cachedAnswer } from './answer-cache.ts';
 import { followMove } from './scope-copies.ts';
 import { fieldCrewIds, fieldScope } from './scope.ts';
-import { auditRow, updateAtVersion, writable } from './versioned.ts';
+import { auditRow, insertAudited, updateVersioned, versionedRows, writable } from './versioned.ts';
 
 const listColumns = {
   id: fields.id,
@@ -59,6 +59,8 @@ export async function getFieldRow(db: Ctx['db'], id: number) {
   return row;
 }
 
+export const fieldRows = versionedRows({ table: fields, subject: 'Field', resource: 'field', row: getFieldRow });
+
 export async function listFields(ctx: Ctx, filter: { districtId?: number | undefined; siteId?: number | undefined; q?: string | undefined }): Promise<FieldRow<Date>[]> {
   authorize(ctx, 'read', 'Field');
   const conditions: (SQL | undefined)[] = [fieldScope(ctx.actor)];
@@ -85,40 +87,27 @@ export async function getField(ctx: Ctx, id: number): Promise<FieldDetail<Date>>
   return row;
 }
 
-async function siteOf(db: Ctx['db'], siteId: number) {
+/** The site a new or moved field goes on: it must exist (400) and the caller must be allowed to add fields to it (403). */
+async function checkSite(ctx: Ctx, db: Ctx['db'], siteId: number): Promise<void> {
   const [site] = await db.select({ id: sites.id, districtId: sites.districtId }).from(sites).where(eq(sites.id, siteId));
   if (!site) throw errors.noSuch('site', 'body.siteId');
-  return site;
+  authorize(ctx, 'create', 'Field', { siteId: site.id, districtId: site.districtId });
 }
 
 export async function createField(ctx: Ctx, input: CreateFieldInput): Promise<FieldDetail<Date>> {
   return (ctx.db as Db).transaction(async (tx) => {
-    const site = await siteOf(tx, input.siteId);
-    authorize(ctx, 'create', 'Field', { siteId: site.id, districtId: site.districtId });
-    const [created] = await tx
-      .insert(fields)
-      .values({ ...input, ...outlineFacts(input.geometry) })
-      .returning({ id: fields.id });
-    const row = (await getFieldRow(tx, created!.id))!;
-    await auditRow(ctx, tx, 'field', null, row);
-    return row;
+    await checkSite(ctx, tx, input.siteId);
+    return insertAudited(ctx, tx, fieldRows, { ...input, ...outlineFacts(input.geometry) });
   });
 }
 
-export async function updateField(ctx: Ctx, id: number, input: UpdateFieldInput): Promise<FieldDetail<Date>> {
-  return (ctx.db as Db).transaction(async (tx) => {
-    const before = writable(ctx, 'update', 'Field', 'field', id, await getFieldRow(tx, id));
-    const { version, ...changes } = input;
-    if (changes.siteId !== undefined && changes.siteId !== before.siteId) {
-      const site = await siteOf(tx, changes.siteId);
-      authorize(ctx, 'create', 'Field', { siteId: site.id, districtId: site.districtId });
-    }
-    await updateAtVersion(tx, fields, 'field', id, version, { ...changes, ...(changes.geometry ? outlineFacts(changes.geometry) : {}) });
+export function updateField(ctx: Ctx, id: number, input: UpdateFieldInput): Promise<FieldDetail<Date>> {
+  return updateVersioned(ctx, fieldRows, id, input, async (tx, before, changes) => {
+    if (changes.siteId !== undefined && changes.siteId !== before.siteId) await checkSite(ctx, tx, changes.siteId);
+    return { ...changes, ...(changes.geometry ? outlineFacts(changes.geometry) : {}) };
+  }, async (tx, before, changes) => {
     // The field's work and bookings go with it to its new site (and district).
     if (changes.siteId !== undefined && changes.siteId !== before.siteId) await followMove(tx, ctx.actor.id, { fieldId: id });
-    const after = (await getFieldRow(tx, id))!;
-    await auditRow(ctx, tx, 'field', before, after);
-    return after;
   });
 }
 

@@ -40,8 +40,8 @@ import { requestMail, type RequestStep } from '../mail/messages.ts';
 import type { BackgroundTasks } from './background.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { placeScope } from './scope.ts';
-import { auditRow, updateAtVersion } from './versioned.ts';
+import { onFieldJoins, placeScope } from './scope.ts';
+import { auditedRow, updateAtVersion } from './versioned.ts';
 import { PHOTO_MAX_BYTES, photoFileName, storePhoto, storedPhotoPath } from './work-photos.ts';
 
 export { PHOTO_MAX_BYTES as REQUEST_PHOTO_MAX_BYTES };
@@ -87,12 +87,7 @@ const columns = {
 };
 
 function select(db: Queryable) {
-  return db
-    .select(columns)
-    .from(fieldRequests)
-    .innerJoin(fields, eq(fields.id, fieldRequests.fieldId))
-    .innerJoin(sites, eq(sites.id, fieldRequests.siteId))
-    .leftJoin(users, eq(users.id, fieldRequests.createdBy));
+  return onFieldJoins(db.select(columns).from(fieldRequests).$dynamic(), { fieldId: fieldRequests.fieldId, siteId: fieldRequests.siteId, by: fieldRequests.createdBy });
 }
 
 type Row = Awaited<ReturnType<typeof rowOf>> & {};
@@ -211,9 +206,7 @@ export async function createRequest(ctx: Ctx, deps: RequestDeps, input: CreateFi
       .insert(fieldRequests)
       .values({ fieldId: field.id, siteId: field.siteId, districtId: field.districtId, kind: input.kind, ...values, layout: values.layout as never, description: input.description, createdBy: ctx.actor.id })
       .returning({ id: fieldRequests.id });
-    const row = (await rowOf(tx, created!.id))!;
-    await auditRow(ctx, tx, 'field_request', null, row);
-    return row;
+    return auditedRow(ctx, tx, 'field_request', null, created!.id, rowOf);
   });
   tell(ctx, deps, row, 'filed', row.description);
   return answer(row);
@@ -236,9 +229,7 @@ export async function updateRequest(ctx: Ctx, id: number, input: UpdateFieldRequ
     }
     if (game) checkGame(ctx, before.sport, next);
     await updateAtVersion(tx, fieldRequests, 'field_request', id, version, { ...changes, layout: changes.layout as never });
-    const after = (await rowOf(tx, id))!;
-    await auditRow(ctx, tx, 'field_request', before, after);
-    return answer(after);
+    return answer(await auditedRow(ctx, tx, 'field_request', before, id, rowOf));
   });
 }
 
@@ -324,9 +315,7 @@ export async function scheduleRequest(ctx: Ctx, deps: RequestDeps, id: number, i
       workWords = `Planned: ${WORK_TASK_LABELS[work.task]} on ${work.plannedDate}.`;
     }
     await updateAtVersion(tx, fieldRequests, 'field_request', id, input.version, { state: 'scheduled', reason: input.note, decidedBy: ctx.actor.id, scheduledAt: ctx.clock.now(), ...link });
-    const after = (await rowOf(tx, id))!;
-    await auditRow(ctx, tx, 'field_request', before, after);
-    return after;
+    return auditedRow(ctx, tx, 'field_request', before, id, rowOf);
   });
   tell(ctx, deps, after, 'scheduled', input.note, workWords);
   return answer(after);
@@ -337,9 +326,7 @@ export async function declineRequest(ctx: Ctx, deps: RequestDeps, id: number, in
     const before = changeable(ctx, 'assign', id, await rowOf(tx, id));
     mustBe(before, ['requested'], 'declined');
     await updateAtVersion(tx, fieldRequests, 'field_request', id, input.version, { state: 'declined', reason: input.reason, decidedBy: ctx.actor.id, closedAt: ctx.clock.now() });
-    const after = (await rowOf(tx, id))!;
-    await auditRow(ctx, tx, 'field_request', before, after);
-    return after;
+    return auditedRow(ctx, tx, 'field_request', before, id, rowOf);
   });
   tell(ctx, deps, after, 'declined', input.reason);
   return answer(after);
@@ -351,9 +338,7 @@ export async function closeRequest(ctx: Ctx, deps: RequestDeps, id: number, inpu
     const before = changeable(ctx, 'assign', id, await rowOf(tx, id));
     mustBe(before, ['requested', 'scheduled'], 'closed');
     await updateAtVersion(tx, fieldRequests, 'field_request', id, input.version, { state: 'done', reason: input.note || before.reason, decidedBy: ctx.actor.id, closedAt: ctx.clock.now() });
-    const after = (await rowOf(tx, id))!;
-    await auditRow(ctx, tx, 'field_request', before, after);
-    return after;
+    return auditedRow(ctx, tx, 'field_request', before, id, rowOf);
   });
   tell(ctx, deps, after, 'done', input.note);
   return answer(after);
@@ -365,23 +350,44 @@ export async function closeRequest(ctx: Ctx, deps: RequestDeps, id: number, inpu
  * it; the request's own abilities are not his, the consequence is the department's.
  */
 export async function finishRequestsOf(ctx: Ctx, deps: RequestDeps, orderId: number): Promise<number[]> {
-  const candidates = await requestsOfOrder(ctx.db, orderId, 'done', 'scheduled');
-  const done: NonNullable<Row>[] = [];
+  return moveRequestsOf(ctx, deps, orderId, {
+    orderStatus: 'done',
+    from: 'scheduled',
+    to: 'done',
+    ready: async (tx, before) => {
+      const work = (await workOf(tx, before)).filter((w) => w.status !== 'skipped');
+      return work.length > 0 && work.every((w) => w.status === 'done');
+    },
+    note: 'The work is done.',
+  });
+}
+
+/**
+ * Moves the requests order `orderId` was made for from state `from` to `to` (done is closed at
+ * the department's now, scheduled is open again), each in its own transaction with its audit
+ * entry; `ready` may hold one back. The partners are told once all are written.
+ */
+async function moveRequestsOf(
+  ctx: Ctx,
+  deps: RequestDeps,
+  orderId: number,
+  move: { orderStatus: 'done' | 'open'; from: RequestState; to: 'done' | 'scheduled'; ready?: (tx: Queryable, before: NonNullable<Row>) => Promise<boolean>; note: string },
+): Promise<number[]> {
+  const candidates = await requestsOfOrder(ctx.db, orderId, move.orderStatus, move.from);
+  const moved: NonNullable<Row>[] = [];
   for (const { id } of candidates) {
     const after = await (ctx.db as Db).transaction(async (tx) => {
       const before = await rowOf(tx, id);
-      if (!before || before.state !== 'scheduled') return null;
-      const work = (await workOf(tx, before)).filter((w) => w.status !== 'skipped');
-      if (!work.length || work.some((w) => w.status !== 'done')) return null;
-      await tx.update(fieldRequests).set({ state: 'done', closedAt: ctx.clock.now(), version: sql`${fieldRequests.version} + 1`, updatedAt: new Date() }).where(eq(fieldRequests.id, id));
-      const after = (await rowOf(tx, id))!;
-      await auditRow(ctx, tx, 'field_request', before, after);
-      return after;
+      if (!before || before.state !== move.from) return null;
+      if (move.ready && !(await move.ready(tx, before))) return null;
+      const closedAt = move.to === 'done' ? ctx.clock.now() : null;
+      await tx.update(fieldRequests).set({ state: move.to, closedAt, version: sql`${fieldRequests.version} + 1`, updatedAt: new Date() }).where(eq(fieldRequests.id, id));
+      return auditedRow(ctx, tx, 'field_request', before, id, rowOf);
     });
-    if (after) done.push(after);
+    if (after) moved.push(after);
   }
-  for (const row of done) tell(ctx, deps, row, 'done', 'The work is done.');
-  return done.map((r) => r.id);
+  for (const row of moved) tell(ctx, deps, row, move.to, move.note);
+  return moved.map((r) => r.id);
 }
 
 /** The requests in `state` that order `orderId` was made for (its own, or its event's), when the order is `orderStatus`. */
@@ -402,21 +408,12 @@ async function requestsOfOrder(db: Queryable, orderId: number, orderStatus: 'don
  * as `finishRequestsOf` does.
  */
 export async function reopenRequestsOf(ctx: Ctx, deps: RequestDeps, orderId: number): Promise<number[]> {
-  const candidates = await requestsOfOrder(ctx.db, orderId, 'open', 'done');
-  const again: NonNullable<Row>[] = [];
-  for (const { id } of candidates) {
-    const after = await (ctx.db as Db).transaction(async (tx) => {
-      const before = await rowOf(tx, id);
-      if (!before || before.state !== 'done') return null;
-      await tx.update(fieldRequests).set({ state: 'scheduled', closedAt: null, version: sql`${fieldRequests.version} + 1`, updatedAt: new Date() }).where(eq(fieldRequests.id, id));
-      const after = (await rowOf(tx, id))!;
-      await auditRow(ctx, tx, 'field_request', before, after);
-      return after;
-    });
-    if (after) again.push(after);
-  }
-  for (const row of again) tell(ctx, deps, row, 'scheduled', 'The work was reopened: the request is scheduled again until it is done.');
-  return again.map((r) => r.id);
+  return moveRequestsOf(ctx, deps, orderId, {
+    orderStatus: 'open',
+    from: 'done',
+    to: 'scheduled',
+    note: 'The work was reopened: the request is scheduled again until it is done.',
+  });
 }
 
 /** The people a step is e-mailed to: the district's foremen for a new request or a reply, else the partner who filed it. */

@@ -3,9 +3,9 @@
  * the shared abilities; services also check each row against the ability.
  */
 import { and, eq, inArray, sql, type SQL } from 'drizzle-orm';
-import type { AnyPgColumn } from 'drizzle-orm/pg-core';
+import type { AnyPgColumn, PgSelect } from 'drizzle-orm/pg-core';
 import type { Actor } from '@swardwise/domain';
-import { fields, sites, workOrders } from '../db/schema/index.ts';
+import { fields, sites, users, workOrders } from '../db/schema/index.ts';
 
 /** A crew's work: what it was given in the last fortnight or is given from now on. */
 const CREW_WORK_WINDOW_DAYS = 14;
@@ -51,4 +51,15 @@ export function fieldScope(actor: Actor): SQL | undefined {
     sql`exists (select 1 from ${workOrders} wo where wo.field_id = ${fields.id} and wo.crew_id = ${actor.crewId ?? -1}
       and wo.planned_date >= current_date - ${CREW_WORK_WINDOW_DAYS}::int)`,
   );
+}
+
+/**
+ * A select (`$dynamic()`) of rows kept on a field, joined with their field (`on.fieldId`), the
+ * site that scopes them (`on.siteId`) and the person who made them (`on.by`; a left join).
+ */
+export function onFieldJoins<Q extends PgSelect>(query: Q, on: { fieldId: AnyPgColumn; siteId: AnyPgColumn; by: AnyPgColumn }) {
+  return query
+    .innerJoin(fields, eq(fields.id, on.fieldId))
+    .innerJoin(sites, eq(sites.id, on.siteId))
+    .leftJoin(users, eq(users.id, on.by));
 }

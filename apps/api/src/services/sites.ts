@@ -6,7 +6,7 @@ import { districts, fields, sites } from '../db/schema/index.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { followMove } from './scope-copies.ts';
 import { siteScope } from './scope.ts';
-import { auditRow, updateAtVersion, writable } from './versioned.ts';
+import { insertAudited, updateVersioned, versionedRows } from './versioned.ts';
 import { requireDistrict } from './districts.ts';
 
 const fieldCounts = (db: Ctx['db']) =>
@@ -49,6 +49,8 @@ export async function getSiteRow(db: Ctx['db'], id: number) {
   return row;
 }
 
+export const siteRows = versionedRows({ table: sites, subject: 'Site', resource: 'site', row: getSiteRow });
+
 export async function listSites(ctx: Ctx, filter: { districtId?: number | undefined; q?: string | undefined }): Promise<SiteRow<Date>[]> {
   authorize(ctx, 'read', 'Site');
   const conditions: (SQL | undefined)[] = [siteScope(ctx.actor)];
@@ -71,27 +73,20 @@ export async function createSite(ctx: Ctx, input: CreateSiteInput): Promise<Site
   authorize(ctx, 'create', 'Site', { districtId: input.districtId });
   return (ctx.db as Db).transaction(async (tx) => {
     await requireDistrict(tx, input.districtId);
-    const [created] = await tx.insert(sites).values(input).returning({ id: sites.id });
-    const row = (await getSiteRow(tx, created!.id))!;
-    await auditRow(ctx, tx, 'site', null, row);
-    return row;
+    return insertAudited(ctx, tx, siteRows, input);
   });
 }
 
-export async function updateSite(ctx: Ctx, id: number, input: UpdateSiteInput): Promise<SiteRow<Date>> {
-  return (ctx.db as Db).transaction(async (tx) => {
-    const before = writable(ctx, 'update', 'Site', 'site', id, await getSiteRow(tx, id));
-    const { version, ...changes } = input;
+export function updateSite(ctx: Ctx, id: number, input: UpdateSiteInput): Promise<SiteRow<Date>> {
+  return updateVersioned(ctx, siteRows, id, input, async (tx, before, changes) => {
     if (changes.districtId !== undefined && changes.districtId !== before.districtId) {
       // Moving a site to another district needs the right to create it there too.
       authorize(ctx, 'create', 'Site', { districtId: changes.districtId });
       await requireDistrict(tx, changes.districtId);
     }
-    await updateAtVersion(tx, sites, 'site', id, version, changes);
+    return changes;
+  }, async (tx, before, changes) => {
     // The work and bookings of the site's fields go with it to its new district.
     if (changes.districtId !== undefined && changes.districtId !== before.districtId) await followMove(tx, ctx.actor.id, { siteId: id });
-    const after = (await getSiteRow(tx, id))!;
-    await auditRow(ctx, tx, 'site', before, after);
-    return after;
   });
 }

@@ -15,6 +15,7 @@ import {
   type WorkOrderRow as WorkOrderAnswerRow,
   type WorkOrderWriteAnswer,
 } from '@swardwise/domain';
+import type { PgSelect } from 'drizzle-orm/pg-core';
 import type { Db, Queryable } from '../db/client.ts';
 import { crews, districts, equipment, fields, sites, users, workOrders, workPhotos } from '../db/schema/index.ts';
 import type { Mailer } from '../mail/mailer.ts';
@@ -70,13 +71,15 @@ export type WorkOrderRow = Awaited<ReturnType<typeof selectRows>>[number];
 
 /**
  * Work orders joined with their field, site, district, crew and equipment, as
- * `workOrderColumns` reads them; the caller filters and orders. Field and site are left
- * joins: a yard job has neither.
+ * `workOrderColumns` reads them; the caller filters and orders.
  */
 export function selectWorkOrders(db: Queryable) {
-  return db
-    .select(workOrderColumns)
-    .from(workOrders)
+  return workOrderJoins(db.select(workOrderColumns).from(workOrders).$dynamic());
+}
+
+/** A select (`$dynamic()`) of work orders joined as `selectWorkOrders` is. Field and site are left joins: a yard job has neither. */
+export function workOrderJoins<Q extends PgSelect>(query: Q) {
+  return query
     .leftJoin(fields, eq(fields.id, workOrders.fieldId))
     .leftJoin(sites, eq(sites.id, workOrders.siteId))
     .innerJoin(districts, eq(districts.id, workOrders.districtId))

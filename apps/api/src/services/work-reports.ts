@@ -8,10 +8,10 @@
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import { AppError, appError, errors, FIELD_STATUS_LABELS, type ReopenAnswer, type ReopenInput, type ReportAnswer as ReportAnswerOf, type WorkOrderAnswer, type WorkPhoto, type WorkReportInput, type WorkUpdateRow } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
-import { crews, districts, equipment, fields, sites, users, workOrders, workPhotos, workUpdates } from '../db/schema/index.ts';
+import { equipment, fields, users, workOrders, workPhotos, workUpdates } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
-import { workOrderColumns } from './work-orders.ts';
+import { workOrderColumns, workOrderJoins } from './work-orders.ts';
 
 /** A report may carry the phone's clock a little ahead of the server's; more is a wrong clock. */
 const CLOCK_SKEW_MS = 15 * 60_000;
@@ -20,16 +20,8 @@ const orderColumns = { ...workOrderColumns, startedAt: workOrders.startedAt, don
 
 /** One work order as the Today page and the board show it. */
 async function orderRow(db: Queryable, id: number) {
-  const [row] = await db
-    .select(orderColumns)
-    .from(workOrders)
-    // Left joins: a yard job has no field and no site; it reads as the district's yard.
-    .leftJoin(fields, eq(fields.id, workOrders.fieldId))
-    .leftJoin(sites, eq(sites.id, workOrders.siteId))
-    .innerJoin(districts, eq(districts.id, workOrders.districtId))
-    .leftJoin(crews, eq(crews.id, workOrders.crewId))
-    .leftJoin(equipment, eq(equipment.id, workOrders.equipmentId))
-    .where(eq(workOrders.id, id));
+  // A yard job has no field and no site; it reads as the district's yard.
+  const [row] = await workOrderJoins(db.select(orderColumns).from(workOrders).$dynamic()).where(eq(workOrders.id, id));
   return row;
 }
 export type OrderRow = NonNullable<Awaited<ReturnType<typeof orderRow>>>;

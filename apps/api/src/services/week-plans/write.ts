@@ -2,27 +2,20 @@
  * Writing a generated week: deletes, updates and inserts in one transaction, every one
  * audited plus one entry for the run; bulk statements keep large weeks fast.
  */
-import { and, eq, inArray, sql } from 'drizzle-orm';
-import { appError, type ScheduledOrder, type WeekReconciliation } from '@swardwise/domain';
+import { and, eq, sql } from 'drizzle-orm';
+import type { ScheduledOrder, WeekReconciliation } from '@swardwise/domain';
 import type { Db, Queryable } from '../../db/client.ts';
 import { workOrders } from '../../db/schema/index.ts';
 import { writeAudit, type AuditInput } from '../audit.ts';
 import type { Ctx } from '../context.ts';
 import type { ExistingRow, GenerationInput } from './load.ts';
-import { writeYardJobs, type YardReconciliation } from './yard.ts';
+import { removeGeneratedOrders, weekChanged, writeYardJobs, type YardReconciliation } from './yard.ts';
 
 /** The reconciled week written: `summary` and `warnings` go into the run's audit entry. */
 export async function writeGeneratedWeek(ctx: Ctx, q: GenerationInput, rec: WeekReconciliation<ExistingRow, ScheduledOrder>, planOrders: ScheduledOrder[], summary: Record<string, number>, warnings: string[], yard?: YardReconciliation): Promise<void> {
   await (ctx.db as Db).transaction(async (tx) => {
   const audits: AuditInput[] = [];
-  if (rec.remove.length) {
-    const gone = await tx
-      .delete(workOrders)
-      .where(and(inArray(workOrders.id, rec.remove.map((r) => r.id)), eq(workOrders.pinned, false), eq(workOrders.origin, 'generated'), inArray(workOrders.status, ['planned', 'assigned'])))
-      .returning({ id: workOrders.id });
-    if (gone.length !== rec.remove.length) throw stale();
-    for (const r of rec.remove) audits.push({ actorId: ctx.actor.id, action: 'delete', entity: 'work_order', entityId: r.id, districtId: r.districtId, before: r, after: null });
-  }
+  await removeGeneratedOrders(ctx, tx, rec.remove, audits);
   for (const u of rec.update) {
     const p = u.next;
     const [after] = await tx
@@ -30,7 +23,7 @@ export async function writeGeneratedWeek(ctx: Ctx, q: GenerationInput, rec: Week
       .set({ plannedDate: p.plannedDate, weekStart: q.weekStart, plannedHours: p.plannedHours, crewId: p.crewId, equipmentId: p.equipmentId, reason: p.reason, details: { ...p.details, dueBy: p.latestDate }, status: 'planned', version: sql`${workOrders.version} + 1`, updatedAt: new Date() })
       .where(and(eq(workOrders.id, u.id), eq(workOrders.version, u.before.version), eq(workOrders.pinned, false)))
       .returning();
-    if (!after) throw stale();
+    if (!after) throw weekChanged();
     audits.push({ actorId: ctx.actor.id, action: 'update', entity: 'work_order', entityId: u.id, districtId: after.districtId, before: u.before, after });
   }
   // Unchanged orders take the newest reasons and details (heights, run times) without a new version.
@@ -67,8 +60,6 @@ function canonical(v: unknown): string {
   }
   return JSON.stringify(v);
 }
-
-const stale = () => appError('week_plan/changed', 'The week changed while it was being generated (someone assigned or moved work); generate again to see the current plan');
 
 /**
  * Many orders in one statement: the rows travel as one JSON parameter (json_to_recordset),

@@ -49,21 +49,14 @@ const detailsOf = (j: SharpenJob) => ({ ...j.details, cautions: [...BLADE_CAUTIO
 
 /** Writes the yard's part of a generated week inside the week's transaction; audits go into `audits`. */
 export async function writeYardJobs(ctx: Ctx, tx: Queryable, q: GenerationInput, rec: YardReconciliation, audits: AuditInput[]): Promise<void> {
-  if (rec.remove.length) {
-    const gone = await tx
-      .delete(workOrders)
-      .where(and(inArray(workOrders.id, rec.remove.map((r) => r.id)), eq(workOrders.pinned, false), eq(workOrders.origin, 'generated'), inArray(workOrders.status, ['planned', 'assigned'])))
-      .returning({ id: workOrders.id });
-    if (gone.length !== rec.remove.length) throw yardStale();
-    for (const r of rec.remove) audits.push({ actorId: ctx.actor.id, action: 'delete', entity: 'work_order', entityId: r.id, districtId: r.districtId, before: r, after: null });
-  }
+  await removeGeneratedOrders(ctx, tx, rec.remove, audits);
   for (const u of rec.update) {
     const [after] = await tx
       .update(workOrders)
       .set({ plannedDate: u.next.plannedDate, weekStart: q.weekStart, plannedHours: u.next.plannedHours, crewId: u.next.crewId, reason: u.next.reason, details: detailsOf(u.next), status: 'planned', version: sql`${workOrders.version} + 1`, updatedAt: new Date() })
       .where(and(eq(workOrders.id, u.before.id), eq(workOrders.version, u.before.version), eq(workOrders.pinned, false)))
       .returning();
-    if (!after) throw yardStale();
+    if (!after) throw weekChanged();
     audits.push({ actorId: ctx.actor.id, action: 'update', entity: 'work_order', entityId: after.id, districtId: after.districtId, before: u.before, after });
   }
   for (const job of rec.insert) {
@@ -91,4 +84,19 @@ export async function writeYardJobs(ctx: Ctx, tx: Queryable, q: GenerationInput,
   }
 }
 
-export const yardStale = () => appError('week_plan/changed', 'The week changed while it was being generated (someone assigned or moved work); generate again to see the current plan');
+/**
+ * Deletes the generated orders a new run drops, each only while still open, unpinned and
+ * generated: one taken up meanwhile means the week changed under the run (409). Their audit
+ * entries go into `audits`.
+ */
+export async function removeGeneratedOrders(ctx: Ctx, tx: Queryable, rows: readonly YardRow[], audits: AuditInput[]): Promise<void> {
+  if (!rows.length) return;
+  const gone = await tx
+    .delete(workOrders)
+    .where(and(inArray(workOrders.id, rows.map((r) => r.id)), eq(workOrders.pinned, false), eq(workOrders.origin, 'generated'), inArray(workOrders.status, ['planned', 'assigned'])))
+    .returning({ id: workOrders.id });
+  if (gone.length !== rows.length) throw weekChanged();
+  for (const r of rows) audits.push({ actorId: ctx.actor.id, action: 'delete', entity: 'work_order', entityId: r.id, districtId: r.districtId, before: r, after: null });
+}
+
+export const weekChanged = () => appError('week_plan/changed', 'The week changed while it was being generated (someone assigned or moved work); generate again to see the current plan');
