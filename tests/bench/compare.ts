@@ -5,11 +5,12 @@
  * last 12 months and the CSV, each twice: read again with nothing written (the cached answer),
  * and the first answer after a write (a done work order of this season logged with other
  * hours before each request, outside the time, so every answer is worked out again: in full
- * the first time, then from the last one with the changed sites read again).
+ * the first time, then from the last one with the changed sites read again), and after a
+ * field is edited (a table other than the work orders: worked out in full each time).
  * Target: p95 under 200 ms for the head's season table, both ways.
  * Run: node --import tsx tests/bench/compare.ts (builds the big city on first use).
  */
-import { and, desc, eq, gte } from 'drizzle-orm';
+import { and, desc, eq, gte, sql } from 'drizzle-orm';
 import { workOrders } from '../../apps/api/src/db/schema/index.ts';
 import { comparisonBuilds } from '../../apps/api/src/services/compare.ts';
 import { BIG_CITY, openBigCity } from './big-city.ts';
@@ -34,18 +35,28 @@ async function logWork(): Promise<void> {
   await db.update(workOrders).set({ actualHours: (order!.hours ?? 1) + (logged % 2) * 0.25 }).where(eq(workOrders.id, order!.id));
 }
 
+/** A field written unchanged: a table the compare reads besides the work orders, so it is worked out in full. */
+async function editField(): Promise<void> {
+  await db.execute(sql`update fields set name = name where id = (select min(id) from fields)`);
+}
+
+const MODES = [
+  ['read again    ', undefined],
+  ['work logged   ', logWork],
+  ['a field edited', editField],
+] as const;
 let failed = false;
 for (const role of ['head', 'foreman'] as const) {
   const { server, base, cookie } = await listenSignedIn(db, role);
-  for (const afterWrite of [false, true]) {
+  for (const [mode, before] of MODES) {
     for (const path of ['/api/compare/sites', '/api/compare/sites?period=last12', '/api/compare/sites.csv']) {
       // One warm-up answer (plans, caches of the database), then the timed ones.
       const builds = { ...comparisonBuilds };
-      const { first, times } = await timeGets(base, cookie, path, RUNS, afterWrite ? logWork : undefined);
-      const how = `${comparisonBuilds.full - builds.full} in full, ${comparisonBuilds.sitesReadAgain - builds.sitesReadAgain} from the last with sites read again`;
+      const { first, times } = await timeGets(base, cookie, path, RUNS, before);
+      const how = `${comparisonBuilds.full - builds.full} in full, ${comparisonBuilds.sitesReadAgain - builds.sitesReadAgain} with the changed sites read again`;
       const rows = path.includes('.csv') ? first.text.split('\n').length - 1 : (JSON.parse(first.text) as { rows: unknown[] }).rows.length;
-      console.log(`${role.padEnd(7)} ${afterWrite ? 'after a write' : 'read again   '} ${path.padEnd(36)} ${String(rows).padStart(5)} sites  ${fmt(times)} (${RUNS} runs; ${how})`);
-      if (role === 'head' && path === '/api/compare/sites' && pct(times, 95) >= TARGET_P95_MS) failed = true;
+      console.log(`${role.padEnd(7)} ${mode} ${path.padEnd(36)} ${String(rows).padStart(5)} sites  ${fmt(times)} (${RUNS} runs; ${how})`);
+      if (role === 'head' && path === '/api/compare/sites' && before !== editField && pct(times, 95) >= TARGET_P95_MS) failed = true;
     }
   }
   server.close();
@@ -53,5 +64,5 @@ for (const role of ['head', 'foreman'] as const) {
 // The order as it was.
 await db.update(workOrders).set({ actualHours: order!.hours }).where(eq(workOrders.id, order!.id));
 await database.close();
-console.log(failed ? `FAIL: the head's season table is over ${TARGET_P95_MS} ms at p95 (read again or after a write)` : `ok: the head's season table answers under ${TARGET_P95_MS} ms at p95, read again and after a write`);
+console.log(failed ? `FAIL: the head's season table is over ${TARGET_P95_MS} ms at p95 (read again or after work is logged)` : `ok: the head's season table answers under ${TARGET_P95_MS} ms at p95, read again and after work is logged`);
 process.exit(failed ? 1 : 0);
