@@ -24,6 +24,7 @@ export default async function setup(project: TestProject) {
     execSync('npm run build -w @swardwise/portal', { cwd: repoRoot, stdio: 'pipe', env: { ...process.env, NODE_ENV: 'production' } });
   }
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'swardwise-e2e-'));
+  // A server that never answered is killed by startServerProcess; its data folder goes too.
   const server = await startServerProcess({
     args: ['--demo'],
     env: (url) => ({
@@ -36,6 +37,9 @@ export default async function setup(project: TestProject) {
     }),
     // Seeding the demo city on a loaded machine can take minutes: E2E_START_TIMEOUT_MS allows more.
     timeoutMs: Number(process.env.E2E_START_TIMEOUT_MS ?? 90_000),
+  }).catch((error: unknown) => {
+    fs.rmSync(dataDir, { recursive: true, force: true });
+    throw error;
   });
   project.provide('baseUrl', server.url);
 
