@@ -1,6 +1,7 @@
 import type { Action, Role, SubjectName } from '@swardwise/domain';
 import type { RouteRecordRaw } from 'vue-router';
 import { useSessionStore } from '../stores/session.ts';
+import { FIELD_STAFF, OFFICE } from '../utils/roleGroups.ts';
 
 declare module 'vue-router' {
   interface RouteMeta {
@@ -9,7 +10,7 @@ declare module 'vue-router' {
     /** The ability check of the page. */
     can?: [Action, SubjectName];
     /** The roles whose work this page is; others are sent to their own landing page. */
-    roles?: Role[];
+    roles?: readonly Role[];
     title?: string;
   }
 }
@@ -47,7 +48,7 @@ export const routes: RouteRecordRaw[] = [
     path: '/week/sheet',
     name: 'crew-sheet',
     component: () => import('../views/CrewSheetView.vue'),
-    meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'], title: 'Crew sheet' },
+    meta: { roles: OFFICE, can: ['read', 'WorkOrder'], title: 'Crew sheet' },
   },
   {
     path: '/',
@@ -60,7 +61,7 @@ export const routes: RouteRecordRaw[] = [
         name: 'overview',
         component: () => import('../views/OverviewView.vue'),
         // A foreman reaches his own district's overview from My district.
-        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Overview'], title: 'Overview' },
+        meta: { roles: OFFICE, can: ['read', 'Overview'], title: 'Overview' },
       },
       {
         path: 'district',
@@ -78,7 +79,7 @@ export const routes: RouteRecordRaw[] = [
         path: 'requests',
         name: 'requests',
         component: () => import('../views/RequestsView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman', 'partner'], can: ['read', 'Request'], title: 'Requests' },
+        meta: { roles: [...OFFICE, 'partner'], can: ['read', 'Request'], title: 'Requests' },
       },
       {
         path: 'my-fields',
@@ -97,7 +98,7 @@ export const routes: RouteRecordRaw[] = [
         path: 'sites',
         name: 'sites',
         component: () => import('../views/SitesView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Site'], title: 'Sites' },
+        meta: { roles: OFFICE, can: ['read', 'Site'], title: 'Sites' },
       },
       {
         path: 'sites/:id(\\d+)',
@@ -109,7 +110,7 @@ export const routes: RouteRecordRaw[] = [
         path: 'fields',
         name: 'fields',
         component: () => import('../views/FieldsView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'], title: 'Fields' },
+        meta: { roles: FIELD_STAFF, can: ['read', 'Field'], title: 'Fields' },
       },
       {
         path: 'fields/:id(\\d+)',
@@ -123,31 +124,31 @@ export const routes: RouteRecordRaw[] = [
         path: 'fields/:id(\\d+)/lines',
         name: 'field-lines',
         component: () => import('../views/FieldLinesView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'], title: 'Line plan' },
+        meta: { roles: FIELD_STAFF, can: ['read', 'Field'], title: 'Line plan' },
       },
       {
         path: 'fields/:id(\\d+)/logos',
         name: 'field-logos',
         component: () => import('../views/FieldLogosView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman', 'crew'], can: ['read', 'Field'], title: 'Logos' },
+        meta: { roles: FIELD_STAFF, can: ['read', 'Field'], title: 'Logos' },
       },
       {
         path: 'crews',
         name: 'crews',
         component: () => import('../views/CrewsView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Crew'], title: 'Crews' },
+        meta: { roles: OFFICE, can: ['read', 'Crew'], title: 'Crews' },
       },
       {
         path: 'equipment',
         name: 'equipment',
         component: () => import('../views/EquipmentView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Equipment'], title: 'Equipment' },
+        meta: { roles: OFFICE, can: ['read', 'Equipment'], title: 'Equipment' },
       },
       {
         path: 'weather',
         name: 'weather',
         component: () => import('../views/WeatherView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Weather'], title: 'Weather' },
+        meta: { roles: OFFICE, can: ['read', 'Weather'], title: 'Weather' },
       },
       {
         path: 'standards',
@@ -159,49 +160,49 @@ export const routes: RouteRecordRaw[] = [
         path: 'costs',
         name: 'costs',
         component: () => import('../views/CostsView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'CostSettings'], title: 'Costs and rates' },
+        meta: { roles: OFFICE, can: ['read', 'CostSettings'], title: 'Costs and rates' },
       },
       {
         path: 'budget',
         name: 'budget',
         component: () => import('../views/BudgetView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Budget'], title: 'Season budget' },
+        meta: { roles: OFFICE, can: ['read', 'Budget'], title: 'Season budget' },
       },
       {
         path: 'what-if',
         name: 'what-if',
         component: () => import('../views/WhatIfView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'Budget'], title: 'What if' },
+        meta: { roles: OFFICE, can: ['read', 'Budget'], title: 'What if' },
       },
       {
         path: 'compare',
         name: 'compare',
         component: () => import('../views/CompareView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'SiteComparison'], title: 'Compare sites' },
+        meta: { roles: OFFICE, can: ['read', 'SiteComparison'], title: 'Compare sites' },
       },
       {
         path: 'map',
         name: 'map',
         component: () => import('../views/MapView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman', 'crew', 'partner'], can: ['read', 'Field'], title: 'Map' },
+        meta: { roles: [...FIELD_STAFF, 'partner'], can: ['read', 'Field'], title: 'Map' },
       },
       {
         path: 'week',
         name: 'week',
         component: () => import('../views/WeekPlanView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'], title: 'Week plan' },
+        meta: { roles: OFFICE, can: ['read', 'WorkOrder'], title: 'Week plan' },
       },
       {
         path: 'records',
         name: 'records',
         component: () => import('../views/RecordsView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman'], can: ['read', 'WorkOrder'], title: 'Records' },
+        meta: { roles: OFFICE, can: ['read', 'WorkOrder'], title: 'Records' },
       },
       {
         path: 'imports',
         name: 'imports',
         component: () => import('../views/ImportsView.vue'),
-        meta: { roles: ['admin', 'head', 'foreman'], can: ['create', 'Import'], title: 'Imports' },
+        meta: { roles: OFFICE, can: ['create', 'Import'], title: 'Imports' },
       },
       {
         path: 'admin/users',
