@@ -1,25 +1,18 @@
 import type { UnitSystem } from '@swardwise/domain';
 import { ElMessage } from 'element-plus';
-import { ref } from 'vue';
 import { useRouter } from 'vue-router';
 import { errorMessage } from '../api/messages.ts';
 import { useSessionStore } from '../stores/session.ts';
+import { useAction } from './useAction.ts';
 
 /** The account's own controls (units, sign out), shared by the header and the phone menu. */
 export function useAccount() {
   const session = useSessionStore();
   const router = useRouter();
-  const savingUnits = ref(false);
+  const { busy: savingUnits, run } = useAction({ toast: true });
 
   async function changeUnits(next: UnitSystem) {
-    savingUnits.value = true;
-    try {
-      await session.setUnits(next);
-    } catch (error) {
-      ElMessage.error(errorMessage(error));
-    } finally {
-      savingUnits.value = false;
-    }
+    await run(() => session.setUnits(next));
   }
 
   async function signOut() {

@@ -1,8 +1,8 @@
 import type { ImportKind, ImportRecord } from '@swardwise/domain';
 import { computed, ref, shallowRef } from 'vue';
 import { commitImport, listImports, undoImport, uploadImport } from '../api/imports.ts';
-import { errorMessage } from '../api/messages.ts';
 import { queryKeys } from '../api/queryKeys.ts';
+import { useAction } from './useAction.ts';
 import { useApiQuery } from './useApiQuery.ts';
 import { useInvalidate } from './useInvalidate.ts';
 
@@ -14,8 +14,7 @@ export function useImport() {
   const kind = ref<ImportKind>('sites_csv');
   const current = shallowRef<ImportRecord | null>(null);
   const progress = ref<number | null>(null);
-  const busy = ref<'upload' | 'commit' | 'undo' | null>(null);
-  const error = ref<string | null>(null);
+  const { busyFor: busy, failure: error, runFor } = useAction<'upload' | 'commit' | 'undo'>();
   const notice = ref<string | null>(null);
   const history = useApiQuery(queryKeys.imports(), listImports);
   const invalidate = useInvalidate();
@@ -30,55 +29,43 @@ export function useImport() {
   });
 
   async function upload(file: File) {
-    error.value = null;
-    notice.value = null;
-    current.value = null;
-    busy.value = 'upload';
-    progress.value = 0;
-    try {
-      current.value = await uploadImport(kind.value, file, (f) => (progress.value = f));
-      progress.value = 1;
-      void history.refetch();
-    } catch (cause) {
-      progress.value = null;
-      error.value = errorMessage(cause);
-    } finally {
-      busy.value = null;
-    }
+    await runFor(
+      'upload',
+      async () => {
+        notice.value = null;
+        current.value = null;
+        progress.value = 0;
+        current.value = await uploadImport(kind.value, file, (f) => (progress.value = f));
+        progress.value = 1;
+        void history.refetch();
+      },
+      () => {
+        progress.value = null;
+      },
+    );
   }
 
   async function commit() {
-    if (!current.value) return;
-    error.value = null;
-    busy.value = 'commit';
-    try {
-      current.value = await commitImport(current.value.id);
+    const preview = current.value;
+    if (!preview) return;
+    await runFor('commit', async () => {
+      current.value = await commitImport(preview.id);
       const s = current.value.summary;
       notice.value = `Imported ${current.value.fileName}: ${s.create} created, ${s.update} updated.`;
       // The sites and fields it wrote show on other pages too.
       await invalidate('import');
-    } catch (cause) {
-      error.value = errorMessage(cause);
-    } finally {
-      busy.value = null;
-    }
+    });
   }
 
   async function undoLast() {
     const last = lastCommitted.value;
     if (!last) return;
-    error.value = null;
-    busy.value = 'undo';
-    try {
+    await runFor('undo', async () => {
       const undone = await undoImport(last.id);
       if (current.value?.id === undone.id) current.value = undone;
       notice.value = `Undid ${undone.fileName}: ${undone.changes?.created ?? 0} removed, ${undone.changes?.updated ?? 0} restored.`;
       await invalidate('import');
-    } catch (cause) {
-      error.value = errorMessage(cause);
-    } finally {
-      busy.value = null;
-    }
+    });
   }
 
   function reset() {
