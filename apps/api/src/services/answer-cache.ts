@@ -13,28 +13,22 @@ import { localWriteCount } from '../db/client.ts';
 import { answerVersions } from '../db/schema/index.ts';
 import type { Ctx } from './context.ts';
 
-/**
- * Changes whenever a field, check, weather day, station, Standards row, site, district, work
- * order, setting (department parameters, time zone, costs), application or machine is
- * written, added or removed (the triggers of migrations 0021 and 0026 count every write
- * statement on those tables), and at
- * midnight (a crew's window of work moves with the day).
- */
-async function dataFingerprint(db: Ctx['db']): Promise<string> {
-  const res = await db.execute(
-    sql`select coalesce(string_agg(${answerVersions.scope} || '=' || ${answerVersions.version}, ',' order by ${answerVersions.scope}), '') || '|' || current_date::text as v from ${answerVersions}`,
-  );
-  return String((res.rows[0] as { v: string }).v);
-}
-
 /** The tables whose writes `answer_versions` counts (migrations 0021 and 0026). */
 export type CountedTable = 'districts' | 'sites' | 'fields' | 'field_checks' | 'weather_stations' | 'weather_days' | 'standards' | 'work_orders' | 'settings' | 'applications' | 'equipment';
 
-/** The change counters of the tables named: they move whenever one of those tables is written. */
-async function tablesFingerprint(db: Ctx['db'], tables: readonly CountedTable[]): Promise<string> {
+/**
+ * The change counters of the tables named, or of every counted table: they move whenever a
+ * field, check, weather day, station, Standards row, site, district, work order, setting
+ * (department parameters, time zone, costs), application or machine is written, added or
+ * removed (the triggers of migrations 0021 and 0026 count every write statement on those
+ * tables).
+ */
+async function countersOf(db: Ctx['db'], tables?: readonly CountedTable[]): Promise<string> {
+  // Every table's counters come with the database's date: at midnight a crew's window of work moves with the day.
+  const named = tables ? sql`where ${answerVersions.scope} in (${sql.join(tables.map((t) => sql`${t}`), sql`, `)})` : sql``;
+  const date = tables ? sql`` : sql` || '|' || current_date::text`;
   const res = await db.execute(
-    sql`select coalesce(string_agg(${answerVersions.scope} || '=' || ${answerVersions.version}, ',' order by ${answerVersions.scope}), '') as v from ${answerVersions}
-      where ${answerVersions.scope} in (${sql.join(tables.map((t) => sql`${t}`), sql`, `)})`,
+    sql`select coalesce(string_agg(${answerVersions.scope} || '=' || ${answerVersions.version}, ',' order by ${answerVersions.scope}), '')${date} as v from ${answerVersions} ${named}`,
   );
   return String((res.rows[0] as { v: string }).v);
 }
@@ -68,7 +62,7 @@ export function sharedFingerprint(db: Ctx['db']): Promise<string> {
   if (!f) fingerprints.set(db, (f = { running: null, next: null }));
   const state = f;
   const start = (): Promise<string> => {
-    const query = dataFingerprint(db);
+    const query = countersOf(db);
     state.running = query;
     const clear = () => {
       if (state.running === query) state.running = null;
@@ -109,7 +103,7 @@ export async function cachedAnswer<T>(ctx: Ctx, kind: string, key: string, build
   // An answer that names the tables it reads is kept over writes to the others, for one small query.
   const local = localWriteCount(ctx.db);
   const fingerprint = options.tables
-    ? `${await tablesFingerprint(ctx.db, options.tables)}|${ctx.clock.today()}`
+    ? `${await countersOf(ctx.db, options.tables)}|${ctx.clock.today()}`
     : local === undefined
       ? await sharedFingerprint(ctx.db)
       : `w${local}|${ctx.clock.today()}`;

@@ -117,8 +117,8 @@ export async function compareSites(ctx: Ctx, q: CompareQuery): Promise<CompareSi
   }
   authorize(ctx, 'read', 'SiteComparison', districtId === null ? undefined : { districtId });
   const period = comparePeriod(ctx.clock.today(), q);
-  // Kept until any table it reads is written (the change counters of `answer_versions`): the
-  // sums come back through the one embedded connection in a few hundred ms on a big city.
+  // Kept until any table it reads is written (the change counters of `answer_versions`); worked
+  // out again, it reads only the sites whose work changed when work orders alone were written.
   const scope = districtId;
   return cachedAnswer(ctx, 'compare', JSON.stringify([scope, period]), () => buildComparison(ctx, scope, period));
 }
