@@ -4,7 +4,7 @@
  */
 import fs from 'node:fs';
 import path from 'node:path';
-import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Locator, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Locator, type Page, type Request, type Response } from 'playwright-core';
 import sharp from 'sharp';
 import { afterAll, afterEach, beforeAll, expect, inject } from 'vitest';
 import type { Role } from '@swardwise/domain';
@@ -237,3 +237,38 @@ export async function markFirstJobCard(target: Page | BrowserContext): Promise<v
 
 /** When the first job card was put in the page (see `markFirstJobCard`). */
 export const firstJobCardAt = (page: Page): Promise<number> => page.evaluate(() => (window as unknown as { firstCard: number }).firstCard);
+
+/**
+ * Drags a week board card onto `target` with the mouse and answers the PATCH it made, once the
+ * board has been read again after it. On a loaded machine the mouse drag now and then starts
+ * no drag (the board re-renders the crew-days' hours and routes after a write, and a card that
+ * moves between the press and the first move is not picked up); a drag that sent no PATCH for
+ * the card within 3 s is made again, three tries at most. One that sent it is never repeated.
+ */
+export async function dragCard(page: Page, orderId: number, target: Locator): Promise<Response> {
+  const source = page.locator(`[data-test="order-card"][data-order-id="${orderId}"]`);
+  for (let attempt = 1; ; attempt++) {
+    let sent: Request | null = null;
+    const onRequest = (r: Request) => {
+      if (r.method() === 'PATCH' && r.url().endsWith(`/api/work-orders/${orderId}`)) sent = r;
+    };
+    page.on('request', onRequest);
+    // The write is followed by a fresh read of the board; the next drag waits for it.
+    const reread = page.waitForResponse((r) => r.request().method() === 'GET' && r.url().includes('/api/week-plans?'), { timeout: 20_000 }).catch(() => null);
+    try {
+      await source.dragTo(target, { timeout: 20_000 });
+      const deadline = Date.now() + 3_000;
+      while (!sent && Date.now() < deadline) await page.waitForTimeout(100);
+    } finally {
+      page.off('request', onRequest);
+    }
+    const request = sent as Request | null;
+    if (request) {
+      const response = await request.response();
+      if (!response) throw new Error(`The PATCH of work order ${orderId} failed: ${request.failure()?.errorText ?? 'no answer'}`);
+      await reread;
+      return response;
+    }
+    if (attempt === 3) throw new Error(`Three drags of work order ${orderId} sent no PATCH`);
+  }
+}

@@ -6,7 +6,7 @@
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
-import { followNav, shots, useBrowser, withPage } from './browser.ts';
+import { dragCard, followNav, shots, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 // A week inside the demo season, with weather for every day; no other browser test plans it.
@@ -73,9 +73,7 @@ describe('the week plan board', () => {
         const jobs = board.orders.filter((o) => o.crewId === from!.id && o.status === 'planned').slice(0, 2);
         expect(jobs).toHaveLength(2);
         for (const job of jobs) {
-          const patched = page.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${job.id}`) && r.request().method() === 'PATCH');
-          await card(page, job.id).dragTo(cell(page, to!.id, target));
-          expect((await patched).status()).toBe(200);
+          expect((await dragCard(page, job.id, cell(page, to!.id, target))).status()).toBe(200);
           await expect.poll(() => cell(page, to!.id, target).locator(`[data-order-id="${job.id}"]`).count()).toBe(1);
         }
 
@@ -106,9 +104,7 @@ describe('the week plan board', () => {
         [job.id, job.version] as const,
       );
       expect(res).toBe(200);
-      const patched = page.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${job.id}`) && r.request().method() === 'PATCH');
-      await card(page, job.id).dragTo(cell(page, other.id, job.plannedDate));
-      expect((await patched).status()).toBe(409);
+      expect((await dragCard(page, job.id, cell(page, other.id, job.plannedDate))).status()).toBe(409);
       await expect.poll(() => page.getByText('Someone else changed this work order since you opened it').count()).toBeGreaterThan(0);
       // The reloaded card shows the other change and stays with its crew.
       await expect.poll(() => cell(page, job.crewId!, job.plannedDate).locator(`[data-order-id="${job.id}"]`).textContent()).toContain('2:30 h');

@@ -6,7 +6,7 @@
 import path from 'node:path';
 import { describe, expect, inject, test } from 'vitest';
 import { DEFAULT_TIME_ZONE, localToday, mondayOf } from '@swardwise/domain';
-import { browser, PHONE, reportDialog, shots, signIn, turfPhoto, useBrowser, withPage } from './browser.ts';
+import { browser, dragCard, PHONE, reportDialog, shots, signIn, turfPhoto, useBrowser, withPage } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 // Tall enough for the whole board with the demo season's done work: a drag on a scrolled page picks up the wrong card.
@@ -44,9 +44,7 @@ describe('from the week plan to the crew’s phone', () => {
       jobIds = movable.slice(0, 2).map((o) => o.id);
       const target = foreman.locator(`[data-test="board-cell"][data-crew="${crewA.id}"][data-date="${today}"]`);
       for (const id of jobIds) {
-        const patched = foreman.waitForResponse((r) => r.url().endsWith(`/api/work-orders/${id}`) && r.request().method() === 'PATCH');
-        await foreman.locator(`[data-test="order-card"][data-order-id="${id}"]`).dragTo(target);
-        expect((await patched).status()).toBe(200);
+        expect((await dragCard(foreman, id, target)).status()).toBe(200);
         // Today's cell may already hold more jobs than it lists (the board shows counts then): open it.
         const expand = target.locator('[data-test="cell-expand"]');
         await expect
