@@ -91,6 +91,47 @@ describe('answer fingerprint', () => {
   });
 });
 
+describe('the counters of the tables a work order links', () => {
+  const counters = async () =>
+    Object.fromEntries(((await writer().execute(sql`select scope, version from answer_versions`)).rows as { scope: string; version: string | number }[]).map((r) => [r.scope, Number(r.version)]));
+
+  test('should stay when a statement changes no row, and rise when one does', async () => {
+    const { fieldId, crewId } = (await writer().execute(sql`select field_id as "fieldId", crew_id as "crewId" from work_orders where crew_id is not null limit 1`)).rows[0] as { fieldId: number; crewId: number };
+    // A generated order no check or seed record names, removed as a week is generated anew:
+    // the database clears the links to it in both tables, finding none to clear.
+    const loose = await giveWork(writer(), fieldId, crewId, 2);
+    let before = await counters();
+    await writer().execute(sql`delete from work_orders where id = ${loose}`);
+    let after = await counters();
+    expect(after.work_orders).toBeGreaterThan(before.work_orders!);
+    expect(after.field_checks).toBe(before.field_checks);
+    expect(after.applications).toBe(before.applications);
+    // An update that matches nothing (a stale version, say) is no write either.
+    before = after;
+    await writer().execute(sql`update fields set name = name where id = -1`);
+    expect((await counters()).fields).toBe(before.fields);
+
+    // An order a check names: clearing the check's link is a change to the checks.
+    const named = await giveWork(writer(), fieldId, crewId, 3);
+    await writer().execute(sql`update field_checks set work_order_id = ${named} where id = (select min(id) from field_checks)`);
+    before = await counters();
+    await writer().execute(sql`delete from work_orders where id = ${named}`);
+    after = await counters();
+    expect(after.field_checks).toBeGreaterThan(before.field_checks!);
+    expect(after.applications).toBe(before.applications);
+    // Insert, update and delete of a row each still count.
+    for (const [table, write] of [
+      ['settings', sql`insert into settings (key, value) values ('answer_versions_rows', 'true'::jsonb)`],
+      ['settings', sql`update settings set value = 'false'::jsonb where key = 'answer_versions_rows'`],
+      ['settings', sql`delete from settings where key = 'answer_versions_rows'`],
+    ] as const) {
+      before = await counters();
+      await writer().execute(write);
+      expect((await counters())[table], String(write.queryChunks)).toBeGreaterThan(before[table]!);
+    }
+  });
+});
+
 describe('write count of a PGlite database', () => {
   test.skipIf(Boolean(inject('postgres')))('should count a write to a table an answer reads, and neither a read nor a session’s expiry', async () => {
     const db = reader.db;

@@ -180,6 +180,14 @@ describe('sites compared', () => {
         const o = await order(sql`planned_date between '2026-03-01' and '2026-03-31'`);
         await database.db.execute(sql`update work_orders set status = 'skipped', reason = 'Logged on the wrong field' where id = ${o.id}`);
       }],
+      // The database clears the links of the checks and seed records to a removed order, as an
+      // update of both tables even when none names it: that alone is no change to them.
+      ['a done order of May removed', async () => {
+        const o = await order(sql`planned_date between '2026-05-01' and '2026-05-31'
+          and not exists (select 1 from field_checks c where c.work_order_id = work_orders.id)
+          and not exists (select 1 from applications a where a.work_order_id = work_orders.id)`);
+        await database.db.execute(sql`delete from work_orders where id = ${o.id}`);
+      }],
     ];
     for (const [what, write] of writes) {
       await write();
