@@ -58,3 +58,18 @@ describe('useDialogForm', () => {
     expect(dialog.serverErrors).toBe(dialog.submission.serverErrors);
   });
 });
+
+describe('useDialogForm words', () => {
+  test('should give FormDialog the words of creating without a row and of editing with one, and follow the row', () => {
+    const row = ref<{ name: string } | null>(null);
+    const words = {
+      create: () => ({ title: 'New site', submitLabel: 'Add site', savedMessage: 'Site added.' }),
+      edit: (s: { name: string }) => ({ title: `Edit ${s.name}`, savedMessage: `${s.name} saved.` }),
+    };
+    const dialog = useDialogForm(ref(false), { model: {}, row: () => row.value, fill: () => undefined, save: async () => undefined, words });
+    const said = () => ({ title: dialog.form.value.title, submitLabel: dialog.form.value.submitLabel, savedMessage: dialog.form.value.savedMessage });
+    expect(said()).toEqual({ title: 'New site', submitLabel: 'Add site', savedMessage: 'Site added.' });
+    row.value = { name: 'Alder Green' };
+    expect(said()).toEqual({ title: 'Edit Alder Green', submitLabel: undefined, savedMessage: 'Alder Green saved.' });
+  });
+});

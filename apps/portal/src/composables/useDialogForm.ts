@@ -1,7 +1,7 @@
 import { useAbility } from '@casl/vue';
 import { asSubject, type AppAbility, type DistrictRow } from '@swardwise/domain';
 import type { FormRules } from 'element-plus';
-import { computed, ref, shallowRef, toValue, watch, type MaybeRefOrGetter, type Ref } from 'vue';
+import { computed, ref, shallowRef, toValue, watch, type ComputedRef, type MaybeRefOrGetter, type Ref } from 'vue';
 import { rowOptions } from '../utils/options.ts';
 import type { QueryState } from './useApiQuery.ts';
 import { useFormSubmit, type FormSubmit, type FormSubmitOptions } from './useFormSubmit.ts';
@@ -24,19 +24,65 @@ export function resetOnOpen(open: Ref<boolean>, row: () => unknown, fill: () => 
   );
 }
 
+/** What a form dialog says: its title, its submit button (FormDialog's "Save" when left out) and the line said once saved. */
+export interface DialogWords {
+  title: string;
+  submitLabel?: string;
+  savedMessage?: string;
+}
+
+/**
+ * The words of a create-or-edit dialog, each case written once: `create` when there is no row
+ * to edit, `edit` with the row being edited.
+ */
+export interface CreateOrEditWords<R> {
+  create: () => DialogWords;
+  edit: (row: NonNullable<R>) => DialogWords;
+}
+
+/** What `useDialogForm` is told: the form's model, how to fill it, its rules, how to save it. */
+interface DialogFormSetup<R> {
+  model: object;
+  row: () => R;
+  fill: () => void;
+  rules?: MaybeRefOrGetter<FormRules | undefined>;
+  save: () => Promise<unknown>;
+  options?: FormSubmitOptions;
+}
+
+/** What FormDialog takes of a form: `<FormDialog v-bind="form">`. */
+interface FormBinding {
+  model: object;
+  rules: FormRules | undefined;
+  submission: FormSubmit;
+  save: () => Promise<unknown>;
+}
+
+interface DialogForm<F> {
+  submission: FormSubmit;
+  serverErrors: FormSubmit['serverErrors'];
+  form: ComputedRef<F>;
+}
+
 /**
  * A form dialog's form: its submit cycle (`useFormSubmit(options)`), the model filled afresh
  * each time the dialog opens (`resetOnOpen` with `row` and `fill`), and `form`, what FormDialog
  * needs of it — model, rules, submission and save — for `<FormDialog v-bind="form">`. `rules`
- * may be a getter, read when the dialog renders, for rules declared further down.
+ * may be a getter, read when the dialog renders, for rules declared further down. Given
+ * `words`, `form` also carries the title, submit label and saved message of the case the
+ * dialog is in: editing `row()`, or creating when it is null.
  */
-export function useDialogForm(
-  open: Ref<boolean>,
-  setup: { model: object; row: () => unknown; fill: () => void; rules?: MaybeRefOrGetter<FormRules | undefined>; save: () => Promise<unknown>; options?: FormSubmitOptions },
-) {
+export function useDialogForm<R>(open: Ref<boolean>, setup: DialogFormSetup<R> & { words: CreateOrEditWords<R> }): DialogForm<FormBinding & DialogWords>;
+export function useDialogForm<R>(open: Ref<boolean>, setup: DialogFormSetup<R>): DialogForm<FormBinding>;
+export function useDialogForm<R>(open: Ref<boolean>, setup: DialogFormSetup<R> & { words?: CreateOrEditWords<R> }): DialogForm<FormBinding & Partial<DialogWords>> {
   const submission = useFormSubmit(setup.options);
   resetOnOpen(open, setup.row, setup.fill, submission);
-  const form = computed(() => ({ model: setup.model, rules: toValue(setup.rules), submission, save: setup.save }));
+  const words = (): DialogWords | undefined => {
+    if (!setup.words) return undefined;
+    const row = setup.row();
+    return row == null ? setup.words.create() : setup.words.edit(row);
+  };
+  const form = computed(() => ({ model: setup.model, rules: toValue(setup.rules), submission, save: setup.save, ...words() }));
   return { submission, serverErrors: submission.serverErrors, form };
 }
 

@@ -60,6 +60,12 @@ export async function submitDialog(test: string) {
   await flushPromises();
 }
 
+/** What a dialog says: its title and its submit button's label. */
+export const dialogWords = (test: string) => ({
+  title: $(`[data-test="${test}-dialog"] .el-dialog__title`)?.textContent?.trim(),
+  submitLabel: $(`[data-test="${test}-submit"]`)?.textContent?.trim(),
+});
+
 /** A fetch stand-in answering every call with `body` as JSON. */
 export const answering = (status: number, body: unknown) => vi.fn(async (_url: string, _init?: RequestInit) => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } }));
 

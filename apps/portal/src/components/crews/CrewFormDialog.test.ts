@@ -1,7 +1,7 @@
 import type { CrewRow } from '@swardwise/domain';
 import { flushPromises } from '@vue/test-utils';
 import { describe, expect, test, vi } from 'vitest';
-import { $, answering, cleanUpAfterEach, district, errorsShown, FOREMAN_NORTH, mountDialog, submitDialog, type, waitForErrors } from '../../testing/dialogs.ts';
+import { $, answering, cleanUpAfterEach, dialogWords, district, errorsShown, FOREMAN_NORTH, mountDialog, submitDialog, type, waitForErrors } from '../../testing/dialogs.ts';
 import CrewFormDialog from './CrewFormDialog.vue';
 import { workDaysText } from './crewForm.ts';
 
@@ -60,6 +60,17 @@ describe('CrewFormDialog', () => {
     expect(JSON.parse(String(init.body))).toEqual({ districtId: 1, name: 'North Crew C', hoursPerDay: 9.5, workDays: ['mon', 'tue', 'wed', 'thu', 'sat'], members: ['P. Sedge', 'Q. Rush'] });
     expect(w.emitted('saved')).toHaveLength(1);
     await vi.waitFor(() => expect(document.body.querySelector('.el-message--success')?.textContent).toContain('Crew North Crew C added.'));
+    w.unmount();
+  });
+
+  test('should name a new crew by its kind and an edited one by its name, and say the edit was saved', async () => {
+    const created = await mountForm(vi.fn());
+    expect(dialogWords('crew')).toEqual({ title: 'New crew', submitLabel: 'Add crew' });
+    created.unmount();
+    const w = await mountForm(vi.fn(async () => okResponse({ ...CREW, version: 4 })), CREW);
+    expect(dialogWords('crew')).toEqual({ title: 'Edit North Crew A', submitLabel: 'Save' });
+    await submit();
+    await vi.waitFor(() => expect(document.body.querySelector('.el-message--success')?.textContent).toContain('North Crew A saved.'));
     w.unmount();
   });
 

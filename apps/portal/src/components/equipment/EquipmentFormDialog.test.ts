@@ -3,7 +3,7 @@ import { flushPromises } from '@vue/test-utils';
 import { createPinia, setActivePinia } from 'pinia';
 import { describe, expect, test, vi } from 'vitest';
 import { useSessionStore } from '../../stores/session.ts';
-import { $, cleanUpAfterEach, district, errorsShown, FOREMAN_NORTH, labelsShown as labels, mountDialog, submitDialog, type, type DialogWrapper } from '../../testing/dialogs.ts';
+import { $, cleanUpAfterEach, dialogWords, district, errorsShown, FOREMAN_NORTH, labelsShown as labels, mountDialog, submitDialog, type, type DialogWrapper } from '../../testing/dialogs.ts';
 import EquipmentFormDialog from './EquipmentFormDialog.vue';
 
 const DISTRICTS = [district(1, 'North')];
@@ -84,6 +84,15 @@ describe('EquipmentFormDialog', () => {
     expect(body.cuttingWidthM).toBeCloseTo(1.8288, 4);
     expect(body.speedKmh).toBeCloseTo(8.047, 3);
     expect(body).toMatchObject({ kind: 'rotary_mower', fieldEfficiency: 0.8, hocMinMm: 25.4, hocMaxMm: 114.3 });
+    w.unmount();
+  });
+
+  test('should name new equipment by its kind and an edited machine by its name', async () => {
+    const created = await mountForm(vi.fn(), 'metric');
+    expect(dialogWords('equipment')).toEqual({ title: 'New equipment', submitLabel: 'Add equipment' });
+    created.unmount();
+    const w = await mountForm(vi.fn(), 'metric', MOWER);
+    expect(dialogWords('equipment')).toEqual({ title: 'Edit Reel 5-gang', submitLabel: 'Save' });
     w.unmount();
   });
 

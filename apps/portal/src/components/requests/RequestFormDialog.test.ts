@@ -3,7 +3,7 @@ import { VueQueryPlugin } from '@tanstack/vue-query';
 import { flushPromises } from '@vue/test-utils';
 import { describe, expect, test, vi } from 'vitest';
 import { createQueryClient } from '../../api/queryClient.ts';
-import { $, cleanUpAfterEach, errorsShown, mountDialog, submitDialog, type } from '../../testing/dialogs.ts';
+import { $, cleanUpAfterEach, dialogWords, errorsShown, mountDialog, submitDialog, type } from '../../testing/dialogs.ts';
 import RequestFormDialog from './RequestFormDialog.vue';
 
 const PARTNER: Actor = { id: 5, role: 'partner', districtId: null, crewId: null, siteIds: [8] };
@@ -25,6 +25,7 @@ describe('RequestFormDialog', () => {
   test('should ask for the game’s day and a description before sending anything, with the layout of a football field chosen', async () => {
     const fetch = api(() => json(201, {}));
     const w = await mountForm();
+    expect(dialogWords('request')).toEqual({ title: 'New request', submitLabel: 'Send request' });
     expect($('[data-test="request-layout"]')?.closest('.el-form-item')?.textContent).toContain('American football');
     await submitDialog('request');
     await vi.waitFor(() => {
@@ -57,7 +58,7 @@ describe('RequestFormDialog', () => {
     const row = { id: 71, fieldId: 40, kind: 'game_lines', gameOn: '2030-06-01', startTime: '18:00', layout: 'football', description: 'League final', version: 3 };
     const fetch = api(() => json(200, { request: { ...row, description: 'League final, home side', version: 4 } }));
     const w = await mountForm({ request: row });
-    expect($('[data-test="request-dialog"]')?.textContent).toContain('Change request');
+    expect(dialogWords('request')).toEqual({ title: 'Change request', submitLabel: 'Save changes' });
     expect(($('[data-test="request-field"] input, input[data-test="request-field"]') as HTMLInputElement | null)?.disabled ?? $('[data-test="request-field"]')?.className.includes('is-disabled')).toBeTruthy();
     expect($('[data-test="request-photos"]')).toBeNull();
     const area = $('textarea[data-test="request-description"], [data-test="request-description"] textarea') as HTMLTextAreaElement;

@@ -1,6 +1,6 @@
 import { type Actor, type SiteRow } from '@swardwise/domain';
 import { describe, expect, test, vi } from 'vitest';
-import { $, answering, cleanUpAfterEach, district, errorsShown, FOREMAN_NORTH, mountDialog, submitDialog, type, waitForErrors } from '../../testing/dialogs.ts';
+import { $, answering, cleanUpAfterEach, dialogWords, district, errorsShown, FOREMAN_NORTH, mountDialog, submitDialog, type, waitForErrors } from '../../testing/dialogs.ts';
 import SiteFormDialog from './SiteFormDialog.vue';
 
 const DISTRICTS = [district(1, 'North'), district(2, 'South')];
@@ -17,6 +17,15 @@ describe('SiteFormDialog', () => {
     const select = w.findAllComponents({ name: 'SelectItem' }).find((item) => item.props('test') === 'site-district')!;
     expect(select.props('modelValue')).toBe(1);
     expect((select.props('options') as { label: string }[]).map((o) => o.label)).toEqual(['North']);
+    w.unmount();
+  });
+
+  test('should name a new site by its kind and an edited one by its name', async () => {
+    const created = await mountForm(FOREMAN_NORTH);
+    expect(dialogWords('site')).toEqual({ title: 'New site', submitLabel: 'Add site' });
+    created.unmount();
+    const w = await mountForm(FOREMAN_NORTH, SITE);
+    expect(dialogWords('site')).toEqual({ title: 'Edit Alder Green', submitLabel: 'Save' });
     w.unmount();
   });
 
