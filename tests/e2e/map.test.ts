@@ -108,43 +108,6 @@ describe('the map', () => {
     }
   });
 
-  test('should offer a foreman to retire a field with a check on record instead of deleting it', async () => {
-    const page = await openMap('foreman');
-    try {
-      // A second pitch on one of his sites, drawn as the first one is, with one check logged.
-      const id = await page.evaluate(async () => {
-        const json = { 'Content-Type': 'application/json' };
-        const first = ((await (await fetch('/api/fields')).json()).items as { id: number }[])[0]!;
-        const { field } = await (await fetch(`/api/fields/${first.id}`)).json();
-        const { siteId, sport, grass, rootzone, irrigation, maintenanceLevel, clippings, geometry } = field;
-        const body = { siteId, sport, grass, rootzone, irrigation, maintenanceLevel, clippings, geometry, name: 'Checked spare pitch' };
-        const created = (await (await fetch('/api/fields', { method: 'POST', headers: json, body: JSON.stringify(body) })).json()).field as { id: number };
-        const check = { turfCoverPct: 90, weedsPct: 5, bareWornPct: 5, heightMm: 50, evenness: 4, divots: 4 };
-        const logged = await fetch(`/api/fields/${created.id}/checks`, { method: 'POST', headers: json, body: JSON.stringify(check) });
-        if (logged.status !== 201) throw new Error(`check not logged: ${logged.status}`);
-        return created.id;
-      });
-      await page.reload();
-      await page.locator('[data-test="field-map"][data-ready="true"]').waitFor();
-      await page.locator('input[data-test="map-search"], [data-test="map-search"] input').fill('Checked spare');
-      await page.locator('.el-autocomplete-suggestion li:visible', { hasText: 'Checked spare pitch' }).click();
-      await expect.poll(() => page.locator('[data-test="summary-name"]').textContent()).toBe('Checked spare pitch');
-
-      await page.locator('[data-test="summary-delete"]').click();
-      await page.locator('.el-message-box').getByRole('button', { name: 'Delete' }).click();
-      // Work on record: the field is not deleted, and retiring it is offered instead.
-      const offer = page.locator('.el-message-box', { hasText: 'cannot be deleted' });
-      await offer.waitFor();
-      await page.screenshot({ path: path.join(shots, 'map-retire-offer.png') });
-      await offer.getByRole('button', { name: 'Retire field' }).click();
-      await expect.poll(() => page.getByText('Checked spare pitch is retired.').count()).toBeGreaterThan(0);
-      const after = await page.evaluate(async (fieldId) => (await fetch(`/api/fields/${fieldId}`)).json(), id);
-      expect(after.field).toMatchObject({ id, status: 'retired' });
-    } finally {
-      await page.close();
-    }
-  });
-
   test('should show a partner only the fields of his own sites and no drawing tools', async () => {
     let partnerCount = 0;
     const page = await openMap('partner');
