@@ -145,6 +145,16 @@ const noContent = (description: string): Answer => ({ status: 204, description }
 const items = (what: string, extra: Record<string, oas31.SchemaObject> = {}) => shape({ items: rows(what), ...extra });
 const VERSION_NOTE = 'Send the `version` you last read; a stale one answers 409 and changes nothing.';
 
+/** The photo part of an upload (re-encoded by the server whatever it was sent as); `fields` when the upload names a `clientRef`. */
+const photoUpload = (mediaTypes: string, fields?: z.ZodObject): Upload => ({ file: 'photo', ...(fields ? { fields } : {}), mediaTypes, maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` });
+/** The answers of a photo upload that a retry with the same `clientRef` finds stored. */
+const PHOTO_ANSWERS: Answer[] = [
+  json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo'), duplicate: bool('False') })),
+  json(200, 'The same photo was already stored (same `clientRef`).', shape({ photo: row('The photo stored first'), duplicate: bool('True') })),
+];
+/** A stored photo's image, as every photo route serves it. */
+const PHOTO_IMAGE: Answer = { status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } };
+
 const service: RouteDoc[] = [
   {
     method: 'get',
@@ -451,11 +461,8 @@ const workOrders: RouteDoc[] = [
     description: `The photo is resized to 1,600 px, stored as JPEG without its metadata; at most ${PHOTOS_PER_ORDER} per order. A photo sent again with the same \`clientRef\` is stored once. The caller is checked before the upload is read.`,
     access: allowed('log', 'WorkOrder'),
     params: idParamSchema,
-    upload: { file: 'photo', fields: photoBodySchema, mediaTypes: 'image/jpeg, image/png, image/webp, image/heic', maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` },
-    answers: [
-      json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo'), duplicate: bool('False') })),
-      json(200, 'The same photo was already stored (same `clientRef`).', shape({ photo: row('The photo stored first'), duplicate: bool('True') })),
-    ],
+    upload: photoUpload('image/jpeg, image/png, image/webp, image/heic', photoBodySchema),
+    answers: PHOTO_ANSWERS,
     errors: [409, 413, 415],
   },
   {
@@ -465,7 +472,7 @@ const workOrders: RouteDoc[] = [
     summary: 'The image of a work order’s photo',
     access: allowed('read', 'WorkOrder'),
     params: photoParamsSchema,
-    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+    answers: [PHOTO_IMAGE],
   },
 ];
 
@@ -650,11 +657,8 @@ const fields: RouteDoc[] = [
     description: `Stored as the crews’ photos are (1,600 px JPEG without metadata); at most ${PHOTOS_PER_CHECK} per check. A check logged on a work order keeps its photos with the order (409). The caller is checked before the upload is read.`,
     access: allowed('create', 'FieldCheck'),
     params: checkParamsSchema,
-    upload: { file: 'photo', fields: photoBodySchema, mediaTypes: 'image/jpeg, image/png, image/webp', maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` },
-    answers: [
-      json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo'), duplicate: bool('False') })),
-      json(200, 'The same photo was already stored (same `clientRef`).', shape({ photo: row('The photo stored first'), duplicate: bool('True') })),
-    ],
+    upload: photoUpload('image/jpeg, image/png, image/webp', photoBodySchema),
+    answers: PHOTO_ANSWERS,
     errors: [409, 413, 415],
   },
   {
@@ -664,7 +668,7 @@ const fields: RouteDoc[] = [
     summary: 'The image of a field check’s photo',
     access: allowed('read', 'FieldCheck'),
     params: checkPhotoParamsSchema,
-    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+    answers: [PHOTO_IMAGE],
   },
   {
     method: 'get',
@@ -1491,7 +1495,7 @@ const partner: RouteDoc[] = [
     summary: 'A photo of the latest field check of one of the partner’s fields',
     access: allowed('read', 'PartnerView'),
     params: photoParamsSchema,
-    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+    answers: [PHOTO_IMAGE],
   },
 ];
 
@@ -1595,7 +1599,7 @@ const requests: RouteDoc[] = [
     description: `The photo is resized to 1,600 px, stored as JPEG without its metadata; at most ${PHOTOS_PER_REQUEST} per request. The caller is checked before the upload is read.`,
     access: allowed('update', 'Request'),
     params: idParamSchema,
-    upload: { file: 'photo', mediaTypes: 'image/jpeg, image/png, image/webp', maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` },
+    upload: photoUpload('image/jpeg, image/png, image/webp'),
     answers: [json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo') }))],
     errors: [409, 413, 415],
   },
@@ -1606,7 +1610,7 @@ const requests: RouteDoc[] = [
     summary: 'The image of a request’s photo',
     access: allowed('read', 'Request'),
     params: requestPhotoParamsSchema,
-    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+    answers: [PHOTO_IMAGE],
   },
 ];
 
