@@ -9,9 +9,10 @@ import fs from 'node:fs/promises';
 import path from 'node:path';
 import sharp from 'sharp';
 import { and, count, eq } from 'drizzle-orm';
-import { appError, errors, type PhotoAnswer } from '@swardwise/domain';
+import type { PgColumn } from 'drizzle-orm/pg-core';
+import { appError, errors, type PhotoAnswer, type StoredPhoto } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
-import { workPhotos } from '../db/schema/index.ts';
+import { workPhotos, type fieldCheckPhotos, type fieldRequestPhotos } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import type { Ctx } from './context.ts';
 import { orderFor } from './work-reports.ts';
@@ -32,8 +33,9 @@ export interface PhotoUpload {
 
 const photoUrl = (orderId: number, photoId: number) => `/api/work-orders/${orderId}/photos/${photoId}`;
 
-function answer(orderId: number, row: { id: number; width: number; height: number; bytes: number; createdAt: Date }, duplicate: boolean) {
-  return { photo: { id: row.id, width: row.width, height: row.height, bytes: row.bytes, createdAt: row.createdAt, url: photoUrl(orderId, row.id) }, duplicate };
+/** A stored photo row as every photo answer gives it: the columns the contract names (never the file name) and its `url`. */
+export function storedPhotoAnswer(row: StoredPhotoColumns, url: string): StoredPhoto<Date> {
+  return { id: row.id, width: row.width, height: row.height, bytes: row.bytes, createdAt: row.createdAt, url };
 }
 
 /**
@@ -66,11 +68,36 @@ export async function readImage(buffer: Buffer, code: 'work_photo' | 'request_ph
 }
 
 /** The columns every photo table shares, as a stored photo answers with them. */
-type StoredPhoto = { id: number; width: number; height: number; bytes: number; createdAt: Date };
+type StoredPhotoColumns = { id: number; width: number; height: number; bytes: number; createdAt: Date };
 
 /** A file name from the phone's reference (stable, so a retried upload finds its first copy) or a random one. */
 export function photoFileName(prefix: string, clientRef: string | undefined): string {
   return clientRef ? `${prefix}-${createHash('sha256').update(clientRef).digest('hex').slice(0, 24)}.jpg` : `${prefix}-${randomUUID()}.jpg`;
+}
+
+/** A table of photos that belong to one owner each (a work order, a field check, a request): the stored-photo columns and the owner's key. */
+type PhotoTable = typeof workPhotos | typeof fieldCheckPhotos | typeof fieldRequestPhotos;
+
+/**
+ * The `find`, `count` and `insert` steps of `storePhoto` for one owner's photos: by the
+ * owner's key and the file name, which the table's unique index holds once per owner, so two
+ * copies of one upload arriving at once store one row.
+ */
+export function ownedPhotoRows<R extends PhotoTable['$inferSelect']>(ctx: Ctx, table: PhotoTable, owner: { column: PgColumn; id: number; key: { workOrderId: number } | { fieldCheckId: number } | { requestId: number } }, fileName: string) {
+  const mine = eq(owner.column, owner.id);
+  const sameFile = and(mine, eq(table.fileName, fileName));
+  return {
+    find: async (db: Queryable) => (await db.select().from(table).where(sameFile))[0] as R | undefined,
+    count: async () => (await ctx.db.select({ n: count() }).from(table).where(mine))[0]?.n ?? 0,
+    insert: async (tx: Queryable, image: { width: number; height: number; bytes: number }) =>
+      (
+        await tx
+          .insert(table)
+          .values({ ...owner.key, fileName, mime: 'image/jpeg', ...image, createdBy: ctx.actor.id })
+          .onConflictDoNothing({ target: [owner.column, table.fileName] })
+          .returning()
+      )[0] as R | undefined,
+  };
 }
 
 /**
@@ -79,7 +106,7 @@ export function photoFileName(prefix: string, clientRef: string | undefined): st
  * row inserted and audited in one transaction. On a failure the file is removed unless a row
  * already holds that name (a retry of a stored photo).
  */
-export async function storePhoto<R extends StoredPhoto>(
+export async function storePhoto<R extends StoredPhotoColumns>(
   ctx: Ctx,
   uploadsDir: string,
   fileName: string,
@@ -136,23 +163,13 @@ export async function storedPhotoPath(uploadsDir: string, fileName: string, code
 export async function addWorkPhoto(ctx: Ctx, orderId: number, upload: PhotoUpload, uploadsDir: string): Promise<PhotoAnswer<Date>> {
   const order = await orderFor(ctx, orderId, 'log');
   const fileName = photoFileName(`wo${orderId}`, upload.clientRef);
-  const sameFile = and(eq(workPhotos.workOrderId, orderId), eq(workPhotos.fileName, fileName));
   const { row, duplicate } = await storePhoto(ctx, uploadsDir, fileName, upload.buffer, {
-    find: async (db) => (await db.select().from(workPhotos).where(sameFile))[0],
-    count: async () => (await ctx.db.select({ n: count() }).from(workPhotos).where(eq(workPhotos.workOrderId, orderId)))[0]?.n ?? 0,
+    ...ownedPhotoRows<typeof workPhotos.$inferSelect>(ctx, workPhotos, { column: workPhotos.workOrderId, id: orderId, key: { workOrderId: orderId } }, fileName),
     limit: PHOTOS_PER_ORDER,
     tooMany: (n) => `A work order keeps at most ${PHOTOS_PER_ORDER} photos; this one has ${n}`,
-    insert: async (tx, image) =>
-      (
-        await tx
-          .insert(workPhotos)
-          .values({ workOrderId: orderId, fileName, mime: 'image/jpeg', ...image, createdBy: ctx.actor.id })
-          .onConflictDoNothing({ target: [workPhotos.workOrderId, workPhotos.fileName] })
-          .returning()
-      )[0],
     audit: (tx, row) => writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'work_photo', entityId: row.id, districtId: order.districtId, before: null, after: row }),
   });
-  return answer(orderId, row, duplicate);
+  return { photo: storedPhotoAnswer(row, photoUrl(orderId, row.id)), duplicate };
 }
 
 /** Where a photo's file is, for a caller who may read its order. */
