@@ -31,7 +31,7 @@ import { authorize, type Ctx } from './context.ts';
 import { getField } from './fields.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 import { nearestStation, prepareStationWeather, stationsWithWeather, unbrokenRunAround } from './stations.ts';
-import { ownedPhotoRows, photoFileName, storePhoto, storedPhotoAnswer, storedPhotoPath, type PhotoUpload } from './work-photos.ts';
+import { photoFileName, storePhoto, storedPhotoAnswer, storedPhotoPath, type PhotoUpload } from './work-photos.ts';
 import { orderFor, reportWork } from './work-reports.ts';
 
 /** Photos a check logged from the field page keeps (as many as a work order). */
@@ -197,11 +197,15 @@ export async function addFieldCheckPhoto(ctx: Ctx, fieldId: number, checkId: num
   const field = await fieldForCheck(ctx, fieldId);
   await ownCheck(ctx, fieldId, checkId);
   const fileName = photoFileName(`fc${checkId}`, upload.clientRef);
-  const { row, duplicate } = await storePhoto(ctx, uploadsDir, fileName, upload.buffer, {
-    ...ownedPhotoRows<typeof fieldCheckPhotos.$inferSelect>(ctx, fieldCheckPhotos, { column: fieldCheckPhotos.fieldCheckId, id: checkId, key: { fieldCheckId: checkId } }, fileName),
+  const { row, duplicate } = await storePhoto<typeof fieldCheckPhotos.$inferSelect>(ctx, uploadsDir, fileName, upload.buffer, {
+    table: fieldCheckPhotos,
+    column: fieldCheckPhotos.fieldCheckId,
+    id: checkId,
+    key: { fieldCheckId: checkId },
+    name: 'field check',
     limit: PHOTOS_PER_CHECK,
-    tooMany: (n) => `A field check keeps at most ${PHOTOS_PER_CHECK} photos; this one has ${n}`,
-    audit: (tx, row) => writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_check_photo', entityId: row.id, districtId: field.districtId, before: null, after: row }),
+    entity: 'field_check_photo',
+    districtId: field.districtId,
   });
   return { photo: storedPhotoAnswer(row, checkPhotoUrl(fieldId, checkId, row.id)), duplicate };
 }

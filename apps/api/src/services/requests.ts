@@ -42,7 +42,7 @@ import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { onFieldJoins, placeScope } from './scope.ts';
 import { auditedRow, updateAtVersion } from './versioned.ts';
-import { ownedPhotoRows, PHOTO_MAX_BYTES, photoFileName, storePhoto, storedPhotoAnswer, storedPhotoPath } from './work-photos.ts';
+import { PHOTO_MAX_BYTES, photoFileName, storePhoto, storedPhotoAnswer, storedPhotoPath } from './work-photos.ts';
 
 export { PHOTO_MAX_BYTES as REQUEST_PHOTO_MAX_BYTES };
 /** Enough to show a wet patch or a broken sprinkler head from a few sides. */
@@ -450,11 +450,15 @@ export async function addRequestPhoto(ctx: Ctx, id: number, buffer: Buffer, uplo
   const row = changeable(ctx, 'update', id, await rowOf(ctx.db, id));
   mustBe(row, ['requested', 'scheduled'], 'given photos');
   const fileName = photoFileName(`rq${id}`, randomUUID());
-  const { row: photo } = await storePhoto(ctx, uploadsDir, fileName, buffer, {
-    ...ownedPhotoRows<typeof fieldRequestPhotos.$inferSelect>(ctx, fieldRequestPhotos, { column: fieldRequestPhotos.requestId, id, key: { requestId: id } }, fileName),
+  const { row: photo } = await storePhoto<typeof fieldRequestPhotos.$inferSelect>(ctx, uploadsDir, fileName, buffer, {
+    table: fieldRequestPhotos,
+    column: fieldRequestPhotos.requestId,
+    id,
+    key: { requestId: id },
+    name: 'request',
     limit: PHOTOS_PER_REQUEST,
-    tooMany: (n) => `A request keeps at most ${PHOTOS_PER_REQUEST} photos; this one has ${n}`,
-    audit: (tx, p) => writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_request_photo', entityId: p.id, districtId: row.districtId, before: null, after: p }),
+    entity: 'field_request_photo',
+    districtId: row.districtId,
     code: 'request_photo',
   });
   return { photo: storedPhotoAnswer(photo, photoUrl(id, photo.id)) };

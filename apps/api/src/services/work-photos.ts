@@ -78,58 +78,39 @@ export function photoFileName(prefix: string, clientRef: string | undefined): st
 /** A table of photos that belong to one owner each (a work order, a field check, a request): the stored-photo columns and the owner's key. */
 type PhotoTable = typeof workPhotos | typeof fieldCheckPhotos | typeof fieldRequestPhotos;
 
-/**
- * The `find`, `count` and `insert` steps of `storePhoto` for one owner's photos: by the
- * owner's key and the file name, which the table's unique index holds once per owner, so two
- * copies of one upload arriving at once store one row.
- */
-export function ownedPhotoRows<R extends PhotoTable['$inferSelect']>(ctx: Ctx, table: PhotoTable, owner: { column: PgColumn; id: number; key: { workOrderId: number } | { fieldCheckId: number } | { requestId: number } }, fileName: string) {
-  const mine = eq(owner.column, owner.id);
-  const sameFile = and(mine, eq(table.fileName, fileName));
-  return {
-    find: async (db: Queryable) => (await db.select().from(table).where(sameFile))[0] as R | undefined,
-    count: async () => (await ctx.db.select({ n: count() }).from(table).where(mine))[0]?.n ?? 0,
-    insert: async (tx: Queryable, image: { width: number; height: number; bytes: number }) =>
-      (
-        await tx
-          .insert(table)
-          .values({ ...owner.key, fileName, mime: 'image/jpeg', ...image, createdBy: ctx.actor.id })
-          .onConflictDoNothing({ target: [owner.column, table.fileName] })
-          .returning()
-      )[0] as R | undefined,
-  };
+/** Whose photos a `storePhoto` call adds to, and how the upload is limited and audited. */
+export interface PhotoOwner {
+  table: PhotoTable;
+  /** The owner's key column, its value, and the key as a row of the table holds it. */
+  column: PgColumn;
+  id: number;
+  key: { workOrderId: number } | { fieldCheckId: number } | { requestId: number };
+  /** The owner in words, for the refusal when it keeps `limit` photos already ("work order"). */
+  name: string;
+  limit: number;
+  /** The audit entry of a stored photo. */
+  entity: 'work_photo' | 'field_check_photo' | 'field_request_photo';
+  districtId: number | null;
+  /** Names the errors, as `readImage` does. */
+  code?: 'work_photo' | 'request_photo';
 }
 
 /**
- * Stores an upload once: an earlier row with the same file name answers as a duplicate, the
- * count is checked against `limit`, the image is re-encoded (`readImage`) and written, and the
- * row inserted and audited in one transaction. On a failure the file is removed unless a row
- * already holds that name (a retry of a stored photo).
+ * Stores an upload once among its owner's photos: an earlier row with the same file name
+ * answers as a duplicate (the table's unique index holds a name once per owner), the count is
+ * checked against `limit`, the image is re-encoded (`readImage`) and written, and the row
+ * inserted and audited in one transaction. On a failure the file is removed unless a row
+ * already holds that name (a retry of a stored photo). `R` is the row of `owner.table`.
  */
-export async function storePhoto<R extends StoredPhotoColumns>(
-  ctx: Ctx,
-  uploadsDir: string,
-  fileName: string,
-  buffer: Buffer,
-  how: {
-    /** The stored row with this file name, if any. */
-    find: (db: Queryable) => Promise<R | undefined>;
-    /** How many photos the owner keeps now. */
-    count: () => Promise<number>;
-    limit: number;
-    tooMany: (n: number) => string;
-    /** Inserts the row; undefined when the same upload arrived twice at once and the first one stored it. */
-    insert: (tx: Queryable, image: { width: number; height: number; bytes: number }) => Promise<R | undefined>;
-    audit: (tx: Queryable, row: R) => Promise<void>;
-    /** Names the errors, as `readImage` does. */
-    code?: 'work_photo' | 'request_photo';
-  },
-): Promise<{ row: R; duplicate: boolean }> {
-  const earlier = await how.find(ctx.db);
+export async function storePhoto<R extends PhotoTable['$inferSelect']>(ctx: Ctx, uploadsDir: string, fileName: string, buffer: Buffer, owner: PhotoOwner): Promise<{ row: R; duplicate: boolean }> {
+  const { table, column } = owner;
+  const mine = eq(column, owner.id);
+  const find = async (db: Queryable) => (await db.select().from(table).where(and(mine, eq(table.fileName, fileName))))[0] as R | undefined;
+  const earlier = await find(ctx.db);
   if (earlier) return { row: earlier, duplicate: true };
-  const n = await how.count();
-  const code = how.code ?? 'work_photo';
-  if (n >= how.limit) throw appError(`${code}/too_many`, how.tooMany(n));
+  const n = (await ctx.db.select({ n: count() }).from(table).where(mine))[0]?.n ?? 0;
+  const code = owner.code ?? 'work_photo';
+  if (n >= owner.limit) throw appError(`${code}/too_many`, `A ${owner.name} keeps at most ${owner.limit} photos; this one has ${n}`);
 
   const image = await readImage(buffer, code);
   await fs.mkdir(uploadsDir, { recursive: true });
@@ -137,14 +118,19 @@ export async function storePhoto<R extends StoredPhotoColumns>(
   await fs.writeFile(file, image.data);
   try {
     return await (ctx.db as Db).transaction(async (tx) => {
-      const row = await how.insert(tx, { width: image.info.width, height: image.info.height, bytes: image.data.length });
-      if (!row) return { row: (await how.find(tx))!, duplicate: true };
-      await how.audit(tx, row);
+      const [row] = (await tx
+        .insert(table)
+        .values({ ...owner.key, fileName, mime: 'image/jpeg', width: image.info.width, height: image.info.height, bytes: image.data.length, createdBy: ctx.actor.id })
+        // The same upload arriving twice at once: the first one stored it.
+        .onConflictDoNothing({ target: [column, table.fileName] })
+        .returning()) as (R | undefined)[];
+      if (!row) return { row: (await find(tx))!, duplicate: true };
+      await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: owner.entity, entityId: row.id, districtId: owner.districtId, before: null, after: row });
       return { row, duplicate: false };
     });
   } catch (err) {
     // A retry name may already belong to a stored photo: remove the file only if no row has it.
-    if (!(await how.find(ctx.db))) await fs.rm(file, { force: true });
+    if (!(await find(ctx.db))) await fs.rm(file, { force: true });
     throw err;
   }
 }
@@ -163,11 +149,15 @@ export async function storedPhotoPath(uploadsDir: string, fileName: string, code
 export async function addWorkPhoto(ctx: Ctx, orderId: number, upload: PhotoUpload, uploadsDir: string): Promise<PhotoAnswer<Date>> {
   const order = await orderFor(ctx, orderId, 'log');
   const fileName = photoFileName(`wo${orderId}`, upload.clientRef);
-  const { row, duplicate } = await storePhoto(ctx, uploadsDir, fileName, upload.buffer, {
-    ...ownedPhotoRows<typeof workPhotos.$inferSelect>(ctx, workPhotos, { column: workPhotos.workOrderId, id: orderId, key: { workOrderId: orderId } }, fileName),
+  const { row, duplicate } = await storePhoto<typeof workPhotos.$inferSelect>(ctx, uploadsDir, fileName, upload.buffer, {
+    table: workPhotos,
+    column: workPhotos.workOrderId,
+    id: orderId,
+    key: { workOrderId: orderId },
+    name: 'work order',
     limit: PHOTOS_PER_ORDER,
-    tooMany: (n) => `A work order keeps at most ${PHOTOS_PER_ORDER} photos; this one has ${n}`,
-    audit: (tx, row) => writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'work_photo', entityId: row.id, districtId: order.districtId, before: null, after: row }),
+    entity: 'work_photo',
+    districtId: order.districtId,
   });
   return { photo: storedPhotoAnswer(row, photoUrl(orderId, row.id)), duplicate };
 }
