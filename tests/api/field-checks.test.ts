@@ -128,6 +128,20 @@ describe('photos of a field-page check', () => {
     expect(refused.status).toBe(409);
     expect(refused.body.error.code).toBe('field_check/photos_on_order');
   });
+
+  test('should keep six photos of a check, each audited, and refuse a seventh with 409, storing nothing more', async () => {
+    const foreman = await api.signIn('foreman');
+    const check = (await foreman.post(`/api/fields/${field()}/checks`).send(body)).body.check;
+    const url = `/api/fields/${field()}/checks/${check.id}/photos`;
+    for (let i = 1; i <= 6; i++) expect((await foreman.post(url).field('clientRef', `check-limit-${i}`).attach('photo', await jpeg(), { filename: 'p.jpg', contentType: 'image/jpeg' })).status).toBe(201);
+    const seventh = await foreman.post(url).field('clientRef', 'check-limit-7').attach('photo', await jpeg(), { filename: 'p.jpg', contentType: 'image/jpeg' });
+    expect(seventh.status).toBe(409);
+    expect(seventh.body.error).toMatchObject({ code: 'work_photo/too_many', message: 'A field check keeps at most 6 photos; this one has 6' });
+    const stored = await db().select().from(fieldCheckPhotos).where(eq(fieldCheckPhotos.fieldCheckId, check.id));
+    expect(stored).toHaveLength(6);
+    const audited = await db().select().from(auditLog).where(eq(auditLog.entity, 'field_check_photo'));
+    expect(audited.filter((a) => stored.some((p) => p.id === a.entityId)).map((a) => a.action)).toEqual(['create', 'create', 'create', 'create', 'create', 'create']);
+  });
 });
 
 describe('the field’s growth calibration', () => {

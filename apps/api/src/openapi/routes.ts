@@ -73,6 +73,7 @@ import {
   weatherRangeSchema,
   weekQuerySchema,
   workReportSchema,
+  type SubjectName,
 } from '@swardwise/domain';
 import { districtQuery } from '../routes/crews.ts';
 import { auditQuerySchema } from '../routes/directory.ts';
@@ -144,6 +145,31 @@ const json = (status: Answer['status'], description: string, body: Answer['body'
 const noContent = (description: string): Answer => ({ status: 204, description });
 const items = (what: string, extra: Record<string, oas31.SchemaObject> = {}) => shape({ items: rows(what), ...extra });
 const VERSION_NOTE = 'Send the `version` you last read; a stale one answers 409 and changes nothing.';
+
+/** The photo part of an upload (re-encoded by the server whatever it was sent as); `fields` when the upload names a `clientRef`. */
+const photoUpload = (mediaTypes: string, fields?: z.ZodObject): Upload => ({ file: 'photo', ...(fields ? { fields } : {}), mediaTypes, maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` });
+/** The answers of a photo upload that a retry with the same `clientRef` finds stored. */
+const PHOTO_ANSWERS: Answer[] = [
+  json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo'), duplicate: bool('False') })),
+  json(200, 'The same photo was already stored (same `clientRef`).', shape({ photo: row('The photo stored first'), duplicate: bool('True') })),
+];
+/** A stored photo's image, as every photo route serves it. */
+const PHOTO_IMAGE: Answer = { status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } };
+
+/**
+ * PATCH `…/:id` of a row people edit with versions, as `writeRoutes` mounts it (and routes
+ * alike): the update ability on the row, its id, the body, and 409 for a stale version.
+ * `note` follows the version note.
+ */
+function versionedUpdate(doc: Pick<RouteDoc, 'path' | 'tag' | 'summary'> & { subject: SubjectName; body: z.ZodType; answer: Answer; note?: string }): RouteDoc {
+  const description = doc.note ? `${VERSION_NOTE} ${doc.note}` : VERSION_NOTE;
+  return { method: 'patch', path: doc.path, tag: doc.tag, summary: doc.summary, description, access: allowed('update', doc.subject), params: idParamSchema, body: doc.body, answers: [doc.answer], errors: [409] };
+}
+
+/** DELETE `…/:id?version=` of a row people edit with versions, as `writeRoutes` mounts it: the delete ability on the row, 204 once gone, 409 for a stale version. */
+function versionedDelete(doc: Pick<RouteDoc, 'path' | 'tag' | 'summary'> & { subject: SubjectName; deleted: string }): RouteDoc {
+  return { method: 'delete', path: doc.path, tag: doc.tag, summary: doc.summary, description: VERSION_NOTE, access: allowed('delete', doc.subject), params: idParamSchema, query: versionQuerySchema, answers: [noContent(doc.deleted)], errors: [409] };
+}
 
 const service: RouteDoc[] = [
   {
@@ -359,30 +385,22 @@ const workOrders: RouteDoc[] = [
     body: createWorkOrderSchema,
     answers: [json(201, 'The work order is created; an assigned crew lead is e-mailed.', ref('WorkOrderWithMail'))],
   },
-  {
-    method: 'patch',
+  versionedUpdate({
     path: '/api/work-orders/:id',
     tag: 'Work orders',
     summary: 'Move, assign or re-time a work order',
-    description: `${VERSION_NOTE} Any change pins the order against re-generation of the week.`,
-    access: allowed('update', 'WorkOrder'),
-    params: idParamSchema,
+    subject: 'WorkOrder',
     body: updateWorkOrderSchema,
-    answers: [json(200, 'The work order after the change; the crew lead is e-mailed when it moved to or from a crew.', ref('WorkOrderWithMail'))],
-    errors: [409],
-  },
-  {
-    method: 'delete',
+    answer: json(200, 'The work order after the change; the crew lead is e-mailed when it moved to or from a crew.', ref('WorkOrderWithMail')),
+    note: 'Any change pins the order against re-generation of the week.',
+  }),
+  versionedDelete({
     path: '/api/work-orders/:id',
     tag: 'Work orders',
     summary: 'Delete a work order nobody has logged',
-    description: VERSION_NOTE,
-    access: allowed('delete', 'WorkOrder'),
-    params: idParamSchema,
-    query: versionQuerySchema,
-    answers: [noContent('The work order is deleted.')],
-    errors: [409],
-  },
+    subject: 'WorkOrder',
+    deleted: 'The work order is deleted.',
+  }),
   {
     method: 'get',
     path: '/api/work-orders/:id',
@@ -451,11 +469,8 @@ const workOrders: RouteDoc[] = [
     description: `The photo is resized to 1,600 px, stored as JPEG without its metadata; at most ${PHOTOS_PER_ORDER} per order. A photo sent again with the same \`clientRef\` is stored once. The caller is checked before the upload is read.`,
     access: allowed('log', 'WorkOrder'),
     params: idParamSchema,
-    upload: { file: 'photo', fields: photoBodySchema, mediaTypes: 'image/jpeg, image/png, image/webp, image/heic', maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` },
-    answers: [
-      json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo'), duplicate: bool('False') })),
-      json(200, 'The same photo was already stored (same `clientRef`).', shape({ photo: row('The photo stored first'), duplicate: bool('True') })),
-    ],
+    upload: photoUpload('image/jpeg, image/png, image/webp, image/heic', photoBodySchema),
+    answers: PHOTO_ANSWERS,
     errors: [409, 413, 415],
   },
   {
@@ -465,7 +480,7 @@ const workOrders: RouteDoc[] = [
     summary: 'The image of a work order’s photo',
     access: allowed('read', 'WorkOrder'),
     params: photoParamsSchema,
-    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+    answers: [PHOTO_IMAGE],
   },
 ];
 
@@ -580,18 +595,14 @@ const sites: RouteDoc[] = [
     params: idParamSchema,
     answers: [json(200, 'The site and its fields.', shape({ site: row('The site'), fields: rows('Fields of the site the caller may read') }))],
   },
-  {
-    method: 'patch',
+  versionedUpdate({
     path: '/api/sites/:id',
     tag: 'Sites',
     summary: 'Change a site',
-    description: VERSION_NOTE,
-    access: allowed('update', 'Site'),
-    params: idParamSchema,
+    subject: 'Site',
     body: updateSiteSchema,
-    answers: [json(200, 'The site after the change.', shape({ site: row('The site') }))],
-    errors: [409],
-  },
+    answer: json(200, 'The site after the change.', shape({ site: row('The site') })),
+  }),
 ];
 
 const fields: RouteDoc[] = [
@@ -650,11 +661,8 @@ const fields: RouteDoc[] = [
     description: `Stored as the crews’ photos are (1,600 px JPEG without metadata); at most ${PHOTOS_PER_CHECK} per check. A check logged on a work order keeps its photos with the order (409). The caller is checked before the upload is read.`,
     access: allowed('create', 'FieldCheck'),
     params: checkParamsSchema,
-    upload: { file: 'photo', fields: photoBodySchema, mediaTypes: 'image/jpeg, image/png, image/webp', maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` },
-    answers: [
-      json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo'), duplicate: bool('False') })),
-      json(200, 'The same photo was already stored (same `clientRef`).', shape({ photo: row('The photo stored first'), duplicate: bool('True') })),
-    ],
+    upload: photoUpload('image/jpeg, image/png, image/webp', photoBodySchema),
+    answers: PHOTO_ANSWERS,
     errors: [409, 413, 415],
   },
   {
@@ -664,7 +672,7 @@ const fields: RouteDoc[] = [
     summary: 'The image of a field check’s photo',
     access: allowed('read', 'FieldCheck'),
     params: checkPhotoParamsSchema,
-    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+    answers: [PHOTO_IMAGE],
   },
   {
     method: 'get',
@@ -697,30 +705,21 @@ const fields: RouteDoc[] = [
     query: needsQuerySchema,
     answers: [json(200, 'The field’s needs from its level, grass and the weather of the nearest station (SI units).', shape({ needs: row('Needs of the field') }))],
   },
-  {
-    method: 'patch',
+  versionedUpdate({
     path: '/api/fields/:id',
     tag: 'Fields',
     summary: 'Change a field (level, status, outline, …)',
-    description: VERSION_NOTE,
-    access: allowed('update', 'Field'),
-    params: idParamSchema,
+    subject: 'Field',
     body: updateFieldSchema,
-    answers: [json(200, 'The field after the change.', shape({ field: row('The field') }))],
-    errors: [409],
-  },
-  {
-    method: 'delete',
+    answer: json(200, 'The field after the change.', shape({ field: row('The field') })),
+  }),
+  versionedDelete({
     path: '/api/fields/:id',
     tag: 'Fields',
     summary: 'Delete a field',
-    description: VERSION_NOTE,
-    access: allowed('delete', 'Field'),
-    params: idParamSchema,
-    query: versionQuerySchema,
-    answers: [noContent('The field is deleted.')],
-    errors: [409],
-  },
+    subject: 'Field',
+    deleted: 'The field is deleted.',
+  }),
 ];
 
 const fieldEvents: RouteDoc[] = [
@@ -742,30 +741,21 @@ const fieldEvents: RouteDoc[] = [
     body: createFieldEventSchema,
     answers: [json(201, 'The booking as stored.', shape({ event: row('The booking') }))],
   },
-  {
-    method: 'patch',
+  versionedUpdate({
     path: '/api/field-events/:id',
     tag: 'Field events',
     summary: 'Change a booking',
-    description: VERSION_NOTE,
-    access: allowed('update', 'FieldEvent'),
-    params: idParamSchema,
+    subject: 'FieldEvent',
     body: updateFieldEventSchema,
-    answers: [json(200, 'The booking after the change.', shape({ event: row('The booking') }))],
-    errors: [409],
-  },
-  {
-    method: 'delete',
+    answer: json(200, 'The booking after the change.', shape({ event: row('The booking') })),
+  }),
+  versionedDelete({
     path: '/api/field-events/:id',
     tag: 'Field events',
     summary: 'Cancel a booking',
-    description: VERSION_NOTE,
-    access: allowed('delete', 'FieldEvent'),
-    params: idParamSchema,
-    query: versionQuerySchema,
-    answers: [noContent('The booking is deleted.')],
-    errors: [409],
-  },
+    subject: 'FieldEvent',
+    deleted: 'The booking is deleted.',
+  }),
 ];
 
 const standards: RouteDoc[] = [
@@ -1096,30 +1086,21 @@ const crews: RouteDoc[] = [
     body: createCrewSchema,
     answers: [json(201, 'The crew as stored.', shape({ crew: row('The crew') }))],
   },
-  {
-    method: 'patch',
+  versionedUpdate({
     path: '/api/crews/:id',
     tag: 'Crews',
     summary: 'Change a crew',
-    description: VERSION_NOTE,
-    access: allowed('update', 'Crew'),
-    params: idParamSchema,
+    subject: 'Crew',
     body: updateCrewSchema,
-    answers: [json(200, 'The crew after the change.', shape({ crew: row('The crew') }))],
-    errors: [409],
-  },
-  {
-    method: 'delete',
+    answer: json(200, 'The crew after the change.', shape({ crew: row('The crew') })),
+  }),
+  versionedDelete({
     path: '/api/crews/:id',
     tag: 'Crews',
     summary: 'Delete a crew without a crew lead',
-    description: VERSION_NOTE,
-    access: allowed('delete', 'Crew'),
-    params: idParamSchema,
-    query: versionQuerySchema,
-    answers: [noContent('The crew is deleted.')],
-    errors: [409],
-  },
+    subject: 'Crew',
+    deleted: 'The crew is deleted.',
+  }),
   {
     method: 'get',
     path: '/api/equipment',
@@ -1138,30 +1119,21 @@ const crews: RouteDoc[] = [
     body: createEquipmentSchema,
     answers: [json(201, 'The equipment as stored.', shape({ equipment: row('The equipment') }))],
   },
-  {
-    method: 'patch',
+  versionedUpdate({
     path: '/api/equipment/:id',
     tag: 'Equipment',
     summary: 'Change equipment',
-    description: VERSION_NOTE,
-    access: allowed('update', 'Equipment'),
-    params: idParamSchema,
+    subject: 'Equipment',
     body: updateEquipmentSchema,
-    answers: [json(200, 'The equipment after the change.', shape({ equipment: row('The equipment') }))],
-    errors: [409],
-  },
-  {
-    method: 'delete',
+    answer: json(200, 'The equipment after the change.', shape({ equipment: row('The equipment') })),
+  }),
+  versionedDelete({
     path: '/api/equipment/:id',
     tag: 'Equipment',
     summary: 'Delete equipment',
-    description: VERSION_NOTE,
-    access: allowed('delete', 'Equipment'),
-    params: idParamSchema,
-    query: versionQuerySchema,
-    answers: [noContent('The equipment is deleted.')],
-    errors: [409],
-  },
+    subject: 'Equipment',
+    deleted: 'The equipment is deleted.',
+  }),
 ];
 
 const mailRow = row('One message: id, to, subject, state (queued, sent, failed), attempts, lastError, nextAttemptAt, sentAt, createdAt — never its text, which may hold sign-in links');
@@ -1491,7 +1463,7 @@ const partner: RouteDoc[] = [
     summary: 'A photo of the latest field check of one of the partner’s fields',
     access: allowed('read', 'PartnerView'),
     params: photoParamsSchema,
-    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+    answers: [PHOTO_IMAGE],
   },
 ];
 
@@ -1529,18 +1501,14 @@ const requests: RouteDoc[] = [
     params: idParamSchema,
     answers: [json(200, 'The request.', REQUEST_DETAIL)],
   },
-  {
-    method: 'patch',
+  versionedUpdate({
     path: '/api/requests/:id',
     tag: 'Requests',
     summary: 'Change a request while it is still requested (a partner: only what they filed)',
-    description: VERSION_NOTE,
-    access: allowed('update', 'Request'),
-    params: idParamSchema,
+    subject: 'Request',
     body: updateFieldRequestSchema,
-    answers: [json(200, 'The request after the change.', shape({ request: row(REQUEST_ROW) }))],
-    errors: [409],
-  },
+    answer: json(200, 'The request after the change.', shape({ request: row(REQUEST_ROW) })),
+  }),
   {
     method: 'post',
     path: '/api/requests/:id/messages',
@@ -1595,7 +1563,7 @@ const requests: RouteDoc[] = [
     description: `The photo is resized to 1,600 px, stored as JPEG without its metadata; at most ${PHOTOS_PER_REQUEST} per request. The caller is checked before the upload is read.`,
     access: allowed('update', 'Request'),
     params: idParamSchema,
-    upload: { file: 'photo', mediaTypes: 'image/jpeg, image/png, image/webp', maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` },
+    upload: photoUpload('image/jpeg, image/png, image/webp'),
     answers: [json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo') }))],
     errors: [409, 413, 415],
   },
@@ -1606,7 +1574,7 @@ const requests: RouteDoc[] = [
     summary: 'The image of a request’s photo',
     access: allowed('read', 'Request'),
     params: requestPhotoParamsSchema,
-    answers: [{ status: 200, description: 'The image (JPEG), privately cacheable for a day.', contentType: 'image/jpeg', body: { type: 'string', format: 'binary' } }],
+    answers: [PHOTO_IMAGE],
   },
 ];
 

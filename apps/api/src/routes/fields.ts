@@ -3,19 +3,15 @@ import { z } from 'zod';
 import { createFieldSchema, fieldCheckSchema, idParamSchema, idSchema, listQuerySchema, needsQuerySchema, pageQuerySchema, updateFieldSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
-import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
 import { createField, deleteField, fieldRows, getField, listFieldsJson, updateField } from '../services/fields.ts';
 import { fieldNeedsJson } from '../services/needs.ts';
 import { fieldWorkHistory } from '../services/field-history.ts';
 import { addFieldCheckPhoto, checkPhotoAllowed, fieldCheckPhotoFile, fieldForCheck, fieldGrowthCalibration, listFieldChecks, logStaffFieldCheck } from '../services/field-checks.ts';
-import { PHOTO_MAX_BYTES } from '../services/work-photos.ts';
-import { photoFileHandler, photoUploadHandlers } from './photo-routes.ts';
+import { photoFileHandler, photoUploadHandlers, receiveStaffPhoto } from './photo-routes.ts';
 import { jsonRoute, jsonTextRoute } from './json-routes.ts';
 import { writeRoutes } from './write-routes.ts';
 
-// The photo and the phone's reference for it, as the crews' photos.
-const receivePhoto = receiveUpload({ field: 'photo', maxFileBytes: PHOTO_MAX_BYTES, maxFields: 1, code: 'work_photo', what: 'The photo' });
 export const checkParamsSchema = z.object({ id: idSchema, checkId: idSchema });
 export const checkPhotoParamsSchema = z.object({ id: idSchema, checkId: idSchema, photoId: idSchema });
 
@@ -43,7 +39,7 @@ export function fieldsRouter({ db, config }: AppDeps): Router {
     ...photoUploadHandlers(db, {
       params: checkParamsSchema,
       allowed: (ctx, { id, checkId }) => checkPhotoAllowed(ctx, id, checkId),
-      receive: receivePhoto,
+      receive: receiveStaffPhoto,
       code: 'work_photo',
       store: (ctx, { id, checkId }, upload) => addFieldCheckPhoto(ctx, id, checkId, upload, config.uploadsDir),
     }),

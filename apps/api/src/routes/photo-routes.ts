@@ -8,15 +8,18 @@ import { z } from 'zod';
 import { appError, idSchema } from '@swardwise/domain';
 import type { Db } from '../db/client.ts';
 import { ctxOf } from '../http/auth.ts';
+import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
 import type { Ctx } from '../services/context.ts';
-import type { PhotoUpload } from '../services/work-photos.ts';
+import { PHOTO_MAX_BYTES, type PhotoUpload } from '../services/work-photos.ts';
 
 export const photoParamsSchema = z.object({ id: idSchema, photoId: idSchema });
 /** The phone's reference for the photo, so a retried upload is stored once. */
 export const photoBodySchema = z.object({
   clientRef: z.string().trim().min(8).max(64).regex(/^[A-Za-z0-9_-]+$/, 'a client reference uses letters, digits, - and _').optional(),
 });
+/** Reads a staff photo (a work order's, a field-page check's) and the phone's reference for it. */
+export const receiveStaffPhoto = receiveUpload({ field: 'photo', maxFileBytes: PHOTO_MAX_BYTES, maxFields: 1, code: 'work_photo', what: 'The photo' });
 
 /**
  * The handlers of a photo upload: refuse a caller who may not add one (`allowed`) before the

@@ -3,18 +3,14 @@ import { Router } from 'express';
 import { applicationSchema, fieldCheckSchema, idParamSchema, reopenSchema, workReportSchema } from '@swardwise/domain';
 import type { AppDeps } from '../app-deps.ts';
 import { ctxOf } from '../http/auth.ts';
-import { receiveUpload } from '../http/uploads.ts';
 import { parse } from '../http/validate.ts';
 import { jsonRoute } from './json-routes.ts';
-import { photoFileHandler, photoParamsSchema, photoUploadHandlers } from './photo-routes.ts';
-import { addWorkPhoto, PHOTO_MAX_BYTES, photoFile } from '../services/work-photos.ts';
+import { photoFileHandler, photoParamsSchema, photoUploadHandlers, receiveStaffPhoto } from './photo-routes.ts';
+import { addWorkPhoto, photoFile } from '../services/work-photos.ts';
 import { logFieldCheck } from '../services/field-checks.ts';
 import { recordApplication } from '../services/applications.ts';
 import { getWorkOrder, orderFor, reopenWork, reportWork } from '../services/work-reports.ts';
 import { finishRequestsOf, reopenRequestsOf } from '../services/requests.ts';
-
-// The photo and the phone's reference for it.
-const receivePhoto = receiveUpload({ field: 'photo', maxFileBytes: PHOTO_MAX_BYTES, maxFields: 1, code: 'work_photo', what: 'The photo' });
 
 export function workReportsRouter({ db, config, mailer, background }: AppDeps): Router {
   const router = Router();
@@ -61,7 +57,7 @@ export function workReportsRouter({ db, config, mailer, background }: AppDeps): 
     ...photoUploadHandlers(db, {
       params: idParamSchema,
       allowed: (ctx, { id }) => orderFor(ctx, id, 'log'),
-      receive: receivePhoto,
+      receive: receiveStaffPhoto,
       code: 'work_photo',
       store: (ctx, { id }, upload) => addWorkPhoto(ctx, id, upload, config.uploadsDir),
     }),

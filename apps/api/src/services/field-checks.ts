@@ -4,7 +4,7 @@
  * flags what needs doing; the check is stored in `field_checks`, with the days since the last
  * mowing on record, which the field's growth calibration reads.
  */
-import { and, asc, count, desc, eq, inArray, lte, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import {
   appError,
   errors,
@@ -31,7 +31,7 @@ import { authorize, type Ctx } from './context.ts';
 import { getField } from './fields.ts';
 import { loadParameters, loadStandards } from './standards.ts';
 import { nearestStation, prepareStationWeather, stationsWithWeather, unbrokenRunAround } from './stations.ts';
-import { photoFileName, storePhoto, storedPhotoPath, type PhotoUpload } from './work-photos.ts';
+import { photoFileName, storePhoto, storedPhotoAnswer, storedPhotoPath, type PhotoUpload } from './work-photos.ts';
 import { orderFor, reportWork } from './work-reports.ts';
 
 /** Photos a check logged from the field page keeps (as many as a work order). */
@@ -197,26 +197,17 @@ export async function addFieldCheckPhoto(ctx: Ctx, fieldId: number, checkId: num
   const field = await fieldForCheck(ctx, fieldId);
   await ownCheck(ctx, fieldId, checkId);
   const fileName = photoFileName(`fc${checkId}`, upload.clientRef);
-  const sameFile = and(eq(fieldCheckPhotos.fieldCheckId, checkId), eq(fieldCheckPhotos.fileName, fileName));
-  const { row, duplicate } = await storePhoto(ctx, uploadsDir, fileName, upload.buffer, {
-    find: async (db) => (await db.select().from(fieldCheckPhotos).where(sameFile))[0],
-    count: async () => (await ctx.db.select({ n: count() }).from(fieldCheckPhotos).where(eq(fieldCheckPhotos.fieldCheckId, checkId)))[0]?.n ?? 0,
+  const { row, duplicate } = await storePhoto<typeof fieldCheckPhotos.$inferSelect>(ctx, uploadsDir, fileName, upload.buffer, {
+    table: fieldCheckPhotos,
+    column: fieldCheckPhotos.fieldCheckId,
+    id: checkId,
+    key: { fieldCheckId: checkId },
+    name: 'field check',
     limit: PHOTOS_PER_CHECK,
-    tooMany: (n) => `A field check keeps at most ${PHOTOS_PER_CHECK} photos; this one has ${n}`,
-    insert: async (tx, image) =>
-      (
-        await tx
-          .insert(fieldCheckPhotos)
-          .values({ fieldCheckId: checkId, fileName, mime: 'image/jpeg', ...image, createdBy: ctx.actor.id })
-          .onConflictDoNothing({ target: [fieldCheckPhotos.fieldCheckId, fieldCheckPhotos.fileName] })
-          .returning()
-      )[0],
-    audit: (tx, row) => writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_check_photo', entityId: row.id, districtId: field.districtId, before: null, after: row }),
+    entity: 'field_check_photo',
+    districtId: field.districtId,
   });
-  return {
-    photo: { id: row.id, width: row.width, height: row.height, bytes: row.bytes, createdAt: row.createdAt, url: checkPhotoUrl(fieldId, checkId, row.id) },
-    duplicate,
-  };
+  return { photo: storedPhotoAnswer(row, checkPhotoUrl(fieldId, checkId, row.id)), duplicate };
 }
 
 /** Where a field-page check's photo is, for a caller who may read the field's checks. */

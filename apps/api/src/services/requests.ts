@@ -8,7 +8,7 @@
  * commit: filed and replied to the district's foremen, the rest to the partner who filed it.
  */
 import { randomUUID } from 'node:crypto';
-import { and, asc, count, desc, eq, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, or, sql, type SQL } from 'drizzle-orm';
 import {
   addDaysIso,
   appError,
@@ -42,7 +42,7 @@ import { writeAudit } from './audit.ts';
 import { authorize, can, type Ctx } from './context.ts';
 import { onFieldJoins, placeScope } from './scope.ts';
 import { auditedRow, updateAtVersion } from './versioned.ts';
-import { PHOTO_MAX_BYTES, photoFileName, storePhoto, storedPhotoPath } from './work-photos.ts';
+import { PHOTO_MAX_BYTES, photoFileName, storePhoto, storedPhotoAnswer, storedPhotoPath } from './work-photos.ts';
 
 export { PHOTO_MAX_BYTES as REQUEST_PHOTO_MAX_BYTES };
 /** Enough to show a wet patch or a broken sprinkler head from a few sides. */
@@ -166,7 +166,7 @@ export async function getRequest(ctx: Ctx, id: number): Promise<FieldRequestDeta
   return {
     request: answer(row),
     messages,
-    photos: photos.map((p) => ({ id: p.id, width: p.width, height: p.height, bytes: p.bytes, createdAt: p.createdAt, url: photoUrl(id, p.id) })),
+    photos: photos.map((p) => storedPhotoAnswer(p, photoUrl(id, p.id))),
     work,
   };
 }
@@ -450,16 +450,18 @@ export async function addRequestPhoto(ctx: Ctx, id: number, buffer: Buffer, uplo
   const row = changeable(ctx, 'update', id, await rowOf(ctx.db, id));
   mustBe(row, ['requested', 'scheduled'], 'given photos');
   const fileName = photoFileName(`rq${id}`, randomUUID());
-  const { row: photo } = await storePhoto(ctx, uploadsDir, fileName, buffer, {
-    find: async (db) => (await db.select().from(fieldRequestPhotos).where(and(eq(fieldRequestPhotos.requestId, id), eq(fieldRequestPhotos.fileName, fileName))))[0],
-    count: async () => (await ctx.db.select({ n: count() }).from(fieldRequestPhotos).where(eq(fieldRequestPhotos.requestId, id)))[0]?.n ?? 0,
+  const { row: photo } = await storePhoto<typeof fieldRequestPhotos.$inferSelect>(ctx, uploadsDir, fileName, buffer, {
+    table: fieldRequestPhotos,
+    column: fieldRequestPhotos.requestId,
+    id,
+    key: { requestId: id },
+    name: 'request',
     limit: PHOTOS_PER_REQUEST,
-    tooMany: (n) => `A request keeps at most ${PHOTOS_PER_REQUEST} photos; this one has ${n}`,
-    insert: async (tx, image) => (await tx.insert(fieldRequestPhotos).values({ requestId: id, fileName, mime: 'image/jpeg', ...image, createdBy: ctx.actor.id }).returning())[0],
-    audit: (tx, p) => writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'field_request_photo', entityId: p.id, districtId: row.districtId, before: null, after: p }),
+    entity: 'field_request_photo',
+    districtId: row.districtId,
     code: 'request_photo',
   });
-  return { photo: { id: photo.id, width: photo.width, height: photo.height, bytes: photo.bytes, createdAt: photo.createdAt, url: photoUrl(id, photo.id) } };
+  return { photo: storedPhotoAnswer(photo, photoUrl(id, photo.id)) };
 }
 
 export async function requestPhotoFile(ctx: Ctx, id: number, photoId: number, uploadsDir: string) {

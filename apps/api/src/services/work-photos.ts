@@ -9,9 +9,10 @@ import fs from 'node:fs/promises';
 import path from 'node:path';
 import sharp from 'sharp';
 import { and, count, eq } from 'drizzle-orm';
-import { appError, errors, type PhotoAnswer } from '@swardwise/domain';
+import type { PgColumn } from 'drizzle-orm/pg-core';
+import { appError, errors, type PhotoAnswer, type StoredPhoto } from '@swardwise/domain';
 import type { Db, Queryable } from '../db/client.ts';
-import { workPhotos } from '../db/schema/index.ts';
+import { workPhotos, type fieldCheckPhotos, type fieldRequestPhotos } from '../db/schema/index.ts';
 import { writeAudit } from './audit.ts';
 import type { Ctx } from './context.ts';
 import { orderFor } from './work-reports.ts';
@@ -32,8 +33,9 @@ export interface PhotoUpload {
 
 const photoUrl = (orderId: number, photoId: number) => `/api/work-orders/${orderId}/photos/${photoId}`;
 
-function answer(orderId: number, row: { id: number; width: number; height: number; bytes: number; createdAt: Date }, duplicate: boolean) {
-  return { photo: { id: row.id, width: row.width, height: row.height, bytes: row.bytes, createdAt: row.createdAt, url: photoUrl(orderId, row.id) }, duplicate };
+/** A stored photo row as every photo answer gives it: the columns the contract names (never the file name) and its `url`. */
+export function storedPhotoAnswer(row: StoredPhotoColumns, url: string): StoredPhoto<Date> {
+  return { id: row.id, width: row.width, height: row.height, bytes: row.bytes, createdAt: row.createdAt, url };
 }
 
 /**
@@ -66,43 +68,49 @@ export async function readImage(buffer: Buffer, code: 'work_photo' | 'request_ph
 }
 
 /** The columns every photo table shares, as a stored photo answers with them. */
-type StoredPhoto = { id: number; width: number; height: number; bytes: number; createdAt: Date };
+type StoredPhotoColumns = { id: number; width: number; height: number; bytes: number; createdAt: Date };
 
 /** A file name from the phone's reference (stable, so a retried upload finds its first copy) or a random one. */
 export function photoFileName(prefix: string, clientRef: string | undefined): string {
   return clientRef ? `${prefix}-${createHash('sha256').update(clientRef).digest('hex').slice(0, 24)}.jpg` : `${prefix}-${randomUUID()}.jpg`;
 }
 
+/** A table of photos that belong to one owner each (a work order, a field check, a request): the stored-photo columns and the owner's key. */
+type PhotoTable = typeof workPhotos | typeof fieldCheckPhotos | typeof fieldRequestPhotos;
+
+/** Whose photos a `storePhoto` call adds to, and how the upload is limited and audited. */
+export interface PhotoOwner {
+  table: PhotoTable;
+  /** The owner's key column, its value, and the key as a row of the table holds it. */
+  column: PgColumn;
+  id: number;
+  key: { workOrderId: number } | { fieldCheckId: number } | { requestId: number };
+  /** The owner in words, for the refusal when it keeps `limit` photos already ("work order"). */
+  name: string;
+  limit: number;
+  /** The audit entry of a stored photo. */
+  entity: 'work_photo' | 'field_check_photo' | 'field_request_photo';
+  districtId: number | null;
+  /** Names the errors, as `readImage` does. */
+  code?: 'work_photo' | 'request_photo';
+}
+
 /**
- * Stores an upload once: an earlier row with the same file name answers as a duplicate, the
- * count is checked against `limit`, the image is re-encoded (`readImage`) and written, and the
- * row inserted and audited in one transaction. On a failure the file is removed unless a row
- * already holds that name (a retry of a stored photo).
+ * Stores an upload once among its owner's photos: an earlier row with the same file name
+ * answers as a duplicate (the table's unique index holds a name once per owner), the count is
+ * checked against `limit`, the image is re-encoded (`readImage`) and written, and the row
+ * inserted and audited in one transaction. On a failure the file is removed unless a row
+ * already holds that name (a retry of a stored photo). `R` is the row of `owner.table`.
  */
-export async function storePhoto<R extends StoredPhoto>(
-  ctx: Ctx,
-  uploadsDir: string,
-  fileName: string,
-  buffer: Buffer,
-  how: {
-    /** The stored row with this file name, if any. */
-    find: (db: Queryable) => Promise<R | undefined>;
-    /** How many photos the owner keeps now. */
-    count: () => Promise<number>;
-    limit: number;
-    tooMany: (n: number) => string;
-    /** Inserts the row; undefined when the same upload arrived twice at once and the first one stored it. */
-    insert: (tx: Queryable, image: { width: number; height: number; bytes: number }) => Promise<R | undefined>;
-    audit: (tx: Queryable, row: R) => Promise<void>;
-    /** Names the errors, as `readImage` does. */
-    code?: 'work_photo' | 'request_photo';
-  },
-): Promise<{ row: R; duplicate: boolean }> {
-  const earlier = await how.find(ctx.db);
+export async function storePhoto<R extends PhotoTable['$inferSelect']>(ctx: Ctx, uploadsDir: string, fileName: string, buffer: Buffer, owner: PhotoOwner): Promise<{ row: R; duplicate: boolean }> {
+  const { table, column } = owner;
+  const mine = eq(column, owner.id);
+  const find = async (db: Queryable) => (await db.select().from(table).where(and(mine, eq(table.fileName, fileName))))[0] as R | undefined;
+  const earlier = await find(ctx.db);
   if (earlier) return { row: earlier, duplicate: true };
-  const n = await how.count();
-  const code = how.code ?? 'work_photo';
-  if (n >= how.limit) throw appError(`${code}/too_many`, how.tooMany(n));
+  const n = (await ctx.db.select({ n: count() }).from(table).where(mine))[0]?.n ?? 0;
+  const code = owner.code ?? 'work_photo';
+  if (n >= owner.limit) throw appError(`${code}/too_many`, `A ${owner.name} keeps at most ${owner.limit} photos; this one has ${n}`);
 
   const image = await readImage(buffer, code);
   await fs.mkdir(uploadsDir, { recursive: true });
@@ -110,14 +118,19 @@ export async function storePhoto<R extends StoredPhoto>(
   await fs.writeFile(file, image.data);
   try {
     return await (ctx.db as Db).transaction(async (tx) => {
-      const row = await how.insert(tx, { width: image.info.width, height: image.info.height, bytes: image.data.length });
-      if (!row) return { row: (await how.find(tx))!, duplicate: true };
-      await how.audit(tx, row);
+      const [row] = (await tx
+        .insert(table)
+        .values({ ...owner.key, fileName, mime: 'image/jpeg', width: image.info.width, height: image.info.height, bytes: image.data.length, createdBy: ctx.actor.id })
+        // The same upload arriving twice at once: the first one stored it.
+        .onConflictDoNothing({ target: [column, table.fileName] })
+        .returning()) as (R | undefined)[];
+      if (!row) return { row: (await find(tx))!, duplicate: true };
+      await writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: owner.entity, entityId: row.id, districtId: owner.districtId, before: null, after: row });
       return { row, duplicate: false };
     });
   } catch (err) {
     // A retry name may already belong to a stored photo: remove the file only if no row has it.
-    if (!(await how.find(ctx.db))) await fs.rm(file, { force: true });
+    if (!(await find(ctx.db))) await fs.rm(file, { force: true });
     throw err;
   }
 }
@@ -136,23 +149,17 @@ export async function storedPhotoPath(uploadsDir: string, fileName: string, code
 export async function addWorkPhoto(ctx: Ctx, orderId: number, upload: PhotoUpload, uploadsDir: string): Promise<PhotoAnswer<Date>> {
   const order = await orderFor(ctx, orderId, 'log');
   const fileName = photoFileName(`wo${orderId}`, upload.clientRef);
-  const sameFile = and(eq(workPhotos.workOrderId, orderId), eq(workPhotos.fileName, fileName));
-  const { row, duplicate } = await storePhoto(ctx, uploadsDir, fileName, upload.buffer, {
-    find: async (db) => (await db.select().from(workPhotos).where(sameFile))[0],
-    count: async () => (await ctx.db.select({ n: count() }).from(workPhotos).where(eq(workPhotos.workOrderId, orderId)))[0]?.n ?? 0,
+  const { row, duplicate } = await storePhoto<typeof workPhotos.$inferSelect>(ctx, uploadsDir, fileName, upload.buffer, {
+    table: workPhotos,
+    column: workPhotos.workOrderId,
+    id: orderId,
+    key: { workOrderId: orderId },
+    name: 'work order',
     limit: PHOTOS_PER_ORDER,
-    tooMany: (n) => `A work order keeps at most ${PHOTOS_PER_ORDER} photos; this one has ${n}`,
-    insert: async (tx, image) =>
-      (
-        await tx
-          .insert(workPhotos)
-          .values({ workOrderId: orderId, fileName, mime: 'image/jpeg', ...image, createdBy: ctx.actor.id })
-          .onConflictDoNothing({ target: [workPhotos.workOrderId, workPhotos.fileName] })
-          .returning()
-      )[0],
-    audit: (tx, row) => writeAudit(tx, { actorId: ctx.actor.id, action: 'create', entity: 'work_photo', entityId: row.id, districtId: order.districtId, before: null, after: row }),
+    entity: 'work_photo',
+    districtId: order.districtId,
   });
-  return answer(orderId, row, duplicate);
+  return { photo: storedPhotoAnswer(row, photoUrl(orderId, row.id)), duplicate };
 }
 
 /** Where a photo's file is, for a caller who may read its order. */
