@@ -116,6 +116,18 @@ describe('the operations', () => {
     expect((served.paths!['/api/week-plans']!.get as { description: string }).description).not.toContain('Crew lead');
   });
 
+  test('should state for every photo upload the image types the server reads, and no other', () => {
+    const uploads = operations().filter(({ op }) => (op.requestBody as OpenAPIV3_1.RequestBodyObject | undefined)?.content?.['multipart/form-data']);
+    expect(uploads.length).toBeGreaterThanOrEqual(4);
+    for (const { route, op } of uploads) {
+      const encoding = (op.requestBody as OpenAPIV3_1.RequestBodyObject).content['multipart/form-data']!.encoding!;
+      const types = Object.values(encoding).map((e) => e.contentType);
+      if (!/photos/.test(route)) continue;
+      // What the upload check lets through (services/work-photos.ts readImage); any other image is refused with 415.
+      expect(types, route).toEqual(['image/jpeg, image/png, image/webp']);
+    }
+  });
+
   test('should mark public routes as needing no session, and the others as needing one', () => {
     const open = operations()
       .filter(({ op }) => op.security?.length === 0)

@@ -90,7 +90,7 @@ import { STATUS_MAX_AGE_S } from '../routes/public.ts';
 import { photoBodySchema, photoParamsSchema } from '../routes/photo-routes.ts';
 import { checkParamsSchema, checkPhotoParamsSchema } from '../routes/fields.ts';
 import { PHOTOS_PER_CHECK } from '../services/field-checks.ts';
-import { PHOTO_MAX_BYTES, PHOTOS_PER_ORDER } from '../services/work-photos.ts';
+import { PHOTO_MAX_BYTES, PHOTO_MEDIA_TYPES, PHOTOS_PER_ORDER } from '../services/work-photos.ts';
 import { requestPhotoParamsSchema } from '../routes/requests.ts';
 import { setOutQuerySchema } from '../routes/line-plans.ts';
 import { PHOTOS_PER_REQUEST } from '../services/requests.ts';
@@ -147,7 +147,7 @@ const items = (what: string, extra: Record<string, oas31.SchemaObject> = {}) => 
 const VERSION_NOTE = 'Send the `version` you last read; a stale one answers 409 and changes nothing.';
 
 /** The photo part of an upload (re-encoded by the server whatever it was sent as); `fields` when the upload names a `clientRef`. */
-const photoUpload = (mediaTypes: string, fields?: z.ZodObject): Upload => ({ file: 'photo', ...(fields ? { fields } : {}), mediaTypes, maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` });
+const photoUpload = (fields?: z.ZodObject): Upload => ({ file: 'photo', ...(fields ? { fields } : {}), mediaTypes: PHOTO_MEDIA_TYPES, maxBytes: PHOTO_MAX_BYTES, description: `The photo, at most ${PHOTO_MAX_BYTES / MB} MB` });
 /** The answers of a photo upload that a retry with the same `clientRef` finds stored. */
 const PHOTO_ANSWERS: Answer[] = [
   json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo'), duplicate: bool('False') })),
@@ -469,7 +469,7 @@ const workOrders: RouteDoc[] = [
     description: `The photo is resized to 1,600 px, stored as JPEG without its metadata; at most ${PHOTOS_PER_ORDER} per order. A photo sent again with the same \`clientRef\` is stored once. The caller is checked before the upload is read.`,
     access: allowed('log', 'WorkOrder'),
     params: idParamSchema,
-    upload: photoUpload('image/jpeg, image/png, image/webp, image/heic', photoBodySchema),
+    upload: photoUpload(photoBodySchema),
     answers: PHOTO_ANSWERS,
     errors: [409, 413, 415],
   },
@@ -661,7 +661,7 @@ const fields: RouteDoc[] = [
     description: `Stored as the crews’ photos are (1,600 px JPEG without metadata); at most ${PHOTOS_PER_CHECK} per check. A check logged on a work order keeps its photos with the order (409). The caller is checked before the upload is read.`,
     access: allowed('create', 'FieldCheck'),
     params: checkParamsSchema,
-    upload: photoUpload('image/jpeg, image/png, image/webp', photoBodySchema),
+    upload: photoUpload(photoBodySchema),
     answers: PHOTO_ANSWERS,
     errors: [409, 413, 415],
   },
@@ -1563,7 +1563,7 @@ const requests: RouteDoc[] = [
     description: `The photo is resized to 1,600 px, stored as JPEG without its metadata; at most ${PHOTOS_PER_REQUEST} per request. The caller is checked before the upload is read.`,
     access: allowed('update', 'Request'),
     params: idParamSchema,
-    upload: photoUpload('image/jpeg, image/png, image/webp'),
+    upload: photoUpload(),
     answers: [json(201, 'The photo is stored.', shape({ photo: row('id, width, height, bytes, createdAt and url of the photo') }))],
     errors: [409, 413, 415],
   },

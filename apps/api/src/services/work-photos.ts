@@ -24,6 +24,8 @@ const PHOTO_QUALITY = 80;
 /** A 12 MB file can still decode to a huge canvas; 50 megapixels is above any phone camera. */
 const MAX_INPUT_PIXELS = 50_000_000;
 const ACCEPTED_FORMATS = new Set(['jpeg', 'png', 'webp']);
+/** The media types a photo upload may be, as the API's document states them. */
+export const PHOTO_MEDIA_TYPES = [...ACCEPTED_FORMATS].map((f) => `image/${f}`).join(', ');
 
 export interface PhotoUpload {
   buffer: Buffer;
