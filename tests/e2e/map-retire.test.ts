@@ -30,6 +30,14 @@ describe('retiring a field from the map', () => {
       await hit.first().click();
       await expect.poll(() => page.locator('[data-test="summary-name"]').textContent()).toBe(name);
 
+      // Its outline's corners, while being edited, are named controls.
+      await page.locator('[data-test="summary-edit"]').click();
+      await page.locator('[data-test="outline-panel"]').waitFor();
+      await expect.poll(() => page.locator('.marker-icon[aria-label="Corner 1 of the outline"]').count()).toBe(1);
+      await checkA11y(page);
+      await page.locator('[data-test="outline-panel"]').getByRole('button', { name: 'Cancel' }).click();
+      await page.locator('[data-test="summary-delete"]').waitFor();
+
       await page.locator('[data-test="summary-delete"]').click();
       await page.locator('.el-message-box').getByRole('button', { name: 'Delete' }).click();
       // Work on record: the field is not deleted, and retiring it is offered instead.

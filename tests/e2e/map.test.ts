@@ -6,7 +6,7 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, test } from 'vitest';
 import type { Role } from '@swardwise/domain';
-import { browser, followNav, shots, signIn, useBrowser } from './browser.ts';
+import { browser, checkA11y, followNav, shots, signIn, useBrowser } from './browser.ts';
 
 const baseUrl = inject('baseUrl');
 
@@ -57,6 +57,8 @@ describe('the map', () => {
         await page.waitForTimeout(120);
       }
       await expect.poll(() => page.locator('[data-test="outline-area"]').count()).toBe(1);
+      // Drawing, with the cursor marker on the map: no nameless control among its pieces.
+      await checkA11y(page);
       await page.mouse.click(corners[0]![0], corners[0]![1]);
       await page.locator('[data-test="new-field-form"]').waitFor();
       const area = await page.locator('[data-test="outline-area"]').textContent();
