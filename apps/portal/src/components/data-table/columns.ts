@@ -10,6 +10,11 @@ export function linkCell(to: string, text: string) {
   return h(RouterLink, { to, class: 'sw-link' }, () => text);
 }
 
+/** A cell with nothing to show (no value on record, not measured): a muted dash. */
+export function emptyCell() {
+  return h('span', { class: 'sw-muted' }, '—');
+}
+
 /** The options of the District column over a row's `districtName`, which a select filters by. */
 export const districtColumn = { id: 'district', header: 'District', filterFn: 'equals' } as const;
 

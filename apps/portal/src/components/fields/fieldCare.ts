@@ -6,6 +6,7 @@
 import type { FieldRow, Level, MapField } from '@swardwise/domain';
 import { h } from 'vue';
 import { columnHelper, labelled, type DataColumn } from '../data-table/features.ts';
+import { emptyCell } from '../data-table/columns.ts';
 import { DAY_MONTH, formatDay } from '../../utils/calendarDate.ts';
 
 export type OverdueKey = 'mowing_check' | 'mowing' | 'check' | 'none';
@@ -68,7 +69,6 @@ export function withCare(rows: readonly FieldRow[], map: readonly MapField[]): F
 export const shortDate = (iso: string) => formatDay(iso, DAY_MONTH);
 
 const col = columnHelper<FieldCareRow>();
-const dash = () => h('span', { class: 'sw-muted' }, '—');
 
 export type CareColumnKey = 'lastMowed' | 'mowDue' | 'overdue' | 'score' | 'checkDue';
 
@@ -80,7 +80,7 @@ export function careColumns(keys: CareColumnKey[]): DataColumn<FieldCareRow>[] {
       header: 'Last mowed',
       sortUndefined: 'last',
       enableGlobalFilter: false,
-      cell: (c) => (c.getValue() ? shortDate(c.getValue()!) : dash()),
+      cell: (c) => (c.getValue() ? shortDate(c.getValue()!) : emptyCell()),
     }),
     mowDue: col.accessor((r) => r.mowDueOn ?? undefined, {
       id: 'mowDue',
@@ -92,7 +92,7 @@ export function careColumns(keys: CareColumnKey[]): DataColumn<FieldCareRow>[] {
         const r = c.row.original;
         if (r.mowDueOn) return h('span', { class: r.mowOverdue ? 'sw-late' : undefined }, shortDate(r.mowDueOn));
         if (r.mowWaitingForGrowth) return h('span', { class: 'sw-muted' }, 'not growing');
-        return r.lastMowedOn ? h('span', { class: 'sw-muted' }, 'not due') : dash();
+        return r.lastMowedOn ? h('span', { class: 'sw-muted' }, 'not due') : emptyCell();
       },
     }),
     checkDue: col.accessor((r) => r.checkDueOn ?? undefined, {
@@ -112,7 +112,7 @@ export function careColumns(keys: CareColumnKey[]): DataColumn<FieldCareRow>[] {
       ...labelled(OVERDUE_LABELS),
       sortDescFirst: true,
       sortFn: (a: { original: FieldCareRow }, b: { original: FieldCareRow }) => overdueRank(a.original.overdue) - overdueRank(b.original.overdue),
-      cell: (c) => (c.getValue() === 'none' ? dash() : h('strong', { class: 'sw-late', 'data-test': 'overdue' }, OVERDUE_LABELS[c.getValue() as OverdueKey])),
+      cell: (c) => (c.getValue() === 'none' ? emptyCell() : h('strong', { class: 'sw-late', 'data-test': 'overdue' }, OVERDUE_LABELS[c.getValue() as OverdueKey])),
     }),
     score: col.accessor((r) => r.score ?? undefined, {
       id: 'score',
@@ -120,7 +120,7 @@ export function careColumns(keys: CareColumnKey[]): DataColumn<FieldCareRow>[] {
       sortUndefined: 'last',
       enableGlobalFilter: false,
       meta: { align: 'right' },
-      cell: (c) => (c.getValue() === undefined ? dash() : String(Math.round(c.getValue()!))),
+      cell: (c) => (c.getValue() === undefined ? emptyCell() : String(Math.round(c.getValue()!))),
     }),
   };
   return keys.map((k) => all[k]);
@@ -147,7 +147,7 @@ export function targetColumn(): DataColumn<FieldCareRow> {
     ...labelled(TARGET_LABELS),
     cell: (c) => {
       const v = c.getValue() as TargetKey | undefined;
-      if (v === undefined) return dash();
+      if (v === undefined) return emptyCell();
       return v === 'below' ? h('span', { class: 'sw-late' }, TARGET_LABELS.below) : h('span', { class: v === 'unscored' ? 'sw-muted' : undefined }, TARGET_LABELS[v]);
     },
   }) as DataColumn<FieldCareRow>;
