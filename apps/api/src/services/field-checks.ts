@@ -199,8 +199,6 @@ export async function addFieldCheckPhoto(ctx: Ctx, fieldId: number, checkId: num
   const fileName = photoFileName(`fc${checkId}`, upload.clientRef);
   const { row, duplicate } = await storePhoto<typeof fieldCheckPhotos.$inferSelect>(ctx, uploadsDir, fileName, upload.buffer, {
     table: fieldCheckPhotos,
-    column: fieldCheckPhotos.fieldCheckId,
-    id: checkId,
     key: { fieldCheckId: checkId },
     name: 'field check',
     limit: PHOTOS_PER_CHECK,

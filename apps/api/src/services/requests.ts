@@ -452,8 +452,6 @@ export async function addRequestPhoto(ctx: Ctx, id: number, buffer: Buffer, uplo
   const fileName = photoFileName(`rq${id}`, randomUUID());
   const { row: photo } = await storePhoto<typeof fieldRequestPhotos.$inferSelect>(ctx, uploadsDir, fileName, buffer, {
     table: fieldRequestPhotos,
-    column: fieldRequestPhotos.requestId,
-    id,
     key: { requestId: id },
     name: 'request',
     limit: PHOTOS_PER_REQUEST,

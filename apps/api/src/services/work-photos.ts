@@ -83,9 +83,7 @@ type PhotoTable = typeof workPhotos | typeof fieldCheckPhotos | typeof fieldRequ
 /** Whose photos a `storePhoto` call adds to, and how the upload is limited and audited. */
 export interface PhotoOwner {
   table: PhotoTable;
-  /** The owner's key column, its value, and the key as a row of the table holds it. */
-  column: PgColumn;
-  id: number;
+  /** The owner's key as a row of the table holds it: its column is the table's one of that name. */
   key: { workOrderId: number } | { fieldCheckId: number } | { requestId: number };
   /** The owner in words, for the refusal when it keeps `limit` photos already ("work order"). */
   name: string;
@@ -105,8 +103,10 @@ export interface PhotoOwner {
  * already holds that name (a retry of a stored photo). `R` is the row of `owner.table`.
  */
 export async function storePhoto<R extends PhotoTable['$inferSelect']>(ctx: Ctx, uploadsDir: string, fileName: string, buffer: Buffer, owner: PhotoOwner): Promise<{ row: R; duplicate: boolean }> {
-  const { table, column } = owner;
-  const mine = eq(column, owner.id);
+  const { table } = owner;
+  const [[keyName, id]] = Object.entries(owner.key) as [[string, number]];
+  const column = (table as unknown as Record<string, PgColumn>)[keyName]!;
+  const mine = eq(column, id);
   const find = async (db: Queryable) => (await db.select().from(table).where(and(mine, eq(table.fileName, fileName))))[0] as R | undefined;
   const earlier = await find(ctx.db);
   if (earlier) return { row: earlier, duplicate: true };
@@ -153,8 +153,6 @@ export async function addWorkPhoto(ctx: Ctx, orderId: number, upload: PhotoUploa
   const fileName = photoFileName(`wo${orderId}`, upload.clientRef);
   const { row, duplicate } = await storePhoto<typeof workPhotos.$inferSelect>(ctx, uploadsDir, fileName, upload.buffer, {
     table: workPhotos,
-    column: workPhotos.workOrderId,
-    id: orderId,
     key: { workOrderId: orderId },
     name: 'work order',
     limit: PHOTOS_PER_ORDER,
